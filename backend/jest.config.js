@@ -1,0 +1,25 @@
+// Two projects: fast unit specs beside the code (engine included), and e2e specs that boot
+// the real app on a throwaway SQLite file.
+const tsJest = { '^.+\\.ts$': ['ts-jest', { tsconfig: '<rootDir>/tsconfig.json', isolatedModules: true }] };
+module.exports = {
+  projects: [
+    {
+      displayName: 'unit',
+      testEnvironment: 'node',
+      rootDir: __dirname,
+      roots: ['<rootDir>/src'],
+      testMatch: ['**/*.spec.ts'],
+      transform: tsJest,
+      moduleFileExtensions: ['ts', 'js', 'json'],
+    },
+    {
+      displayName: 'e2e',
+      testEnvironment: 'node',
+      rootDir: __dirname,
+      roots: ['<rootDir>/test'],
+      testMatch: ['**/*.e2e-spec.ts'],
+      transform: tsJest,
+      moduleFileExtensions: ['ts', 'js', 'json'],
+    },
+  ],
+};
