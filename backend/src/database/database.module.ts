@@ -1,0 +1,51 @@
+import { Injectable, Logger, Module, OnModuleInit } from '@nestjs/common';
+import { ConfigService } from '@nestjs/config';
+import { InjectConnection, SequelizeModule } from '@nestjs/sequelize';
+import { mkdirSync } from 'node:fs';
+import { dirname, resolve } from 'node:path';
+import { Sequelize } from 'sequelize-typescript';
+import type { Environment } from '../config/environment';
+import { Farm } from '../farms/models/farm.model';
+import { Membership } from '../farms/models/membership.model';
+import { House } from '../houses/models/house.model';
+import { User } from '../users/models/user.model';
+import { createMigrator, prepareSqlite } from './migrator';
+
+export const MODELS = [User, Farm, Membership, House];
+
+/** Brings the schema up to date before anything else touches the database. */
+@Injectable()
+class MigrationRunner implements OnModuleInit {
+  private readonly logger = new Logger('Database');
+
+  constructor(@InjectConnection() private readonly sequelize: Sequelize) {}
+
+  async onModuleInit(): Promise<void> {
+    await prepareSqlite(this.sequelize);
+    const applied = await createMigrator(this.sequelize).up();
+    if (applied.length > 0) this.logger.log(`applied migrations: ${applied.map((m) => m.name).join(', ')}`);
+  }
+}
+
+@Module({
+  imports: [
+    SequelizeModule.forRootAsync({
+      inject: [ConfigService],
+      useFactory: (config: ConfigService<Environment, true>) => {
+        const storage = resolve(config.get('DATABASE_FILE', { infer: true }));
+        mkdirSync(dirname(storage), { recursive: true });
+        return {
+          dialect: 'sqlite' as const,
+          storage,
+          models: MODELS,
+          logging: false,
+          // The schema comes from migrations only, never from the models.
+          synchronize: false,
+          autoLoadModels: false,
+        };
+      },
+    }),
+  ],
+  providers: [MigrationRunner],
+})
+export class DatabaseModule {}

@@ -1,0 +1,7 @@
+import * as initialSchema from './0001-initial-schema';
+
+/**
+ * Every schema change, in order. Add a file `NNNN-what-it-does.ts` exporting up/down and list it
+ * here; migrations already applied to a database are recorded in its `migrations` table.
+ */
+export const MIGRATIONS = [{ name: '0001-initial-schema', ...initialSchema }];

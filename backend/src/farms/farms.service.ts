@@ -1,0 +1,123 @@
+import { BadRequestException, Injectable, NotFoundException } from '@nestjs/common';
+import { InjectConnection, InjectModel } from '@nestjs/sequelize';
+import { Sequelize } from 'sequelize-typescript';
+import type { AuthenticatedUser } from '../common/decorators/current-user.decorator';
+import { ROLE_PERMISSIONS } from '../common/permissions';
+import { House } from '../houses/models/house.model';
+import { User } from '../users/models/user.model';
+import { UsersService } from '../users/users.service';
+import type { AddMemberDto, CreateFarmDto, FarmDto, MemberDto, UpdateFarmDto, UpdateMemberDto } from './dto/farm.dto';
+import { FarmAccessService } from './farm-access.service';
+import { Farm } from './models/farm.model';
+import { Membership } from './models/membership.model';
+
+@Injectable()
+export class FarmsService {
+  constructor(
+    @InjectModel(Farm) private readonly farms: typeof Farm,
+    @InjectModel(Membership) private readonly memberships: typeof Membership,
+    @InjectModel(House) private readonly houses: typeof House,
+    @InjectConnection() private readonly sequelize: Sequelize,
+    private readonly access: FarmAccessService,
+    private readonly users: UsersService,
+  ) {}
+
+  async list(user: AuthenticatedUser): Promise<FarmDto[]> {
+    const memberships = await this.memberships.findAll({
+      where: { userId: user.id },
+      include: [Farm],
+      order: [[{ model: Farm, as: 'farm' }, 'name', 'ASC']],
+    });
+    return Promise.all(memberships.map((m) => this.toDto(m.farm, m)));
+  }
+
+  async get(user: AuthenticatedUser, farmId: number): Promise<FarmDto> {
+    const membership = await this.access.require(user, farmId, 'farm:read');
+    return this.toDto(await this.load(farmId), membership);
+  }
+
+  async create(user: AuthenticatedUser, body: CreateFarmDto): Promise<FarmDto> {
+    return this.sequelize.transaction(async (transaction) => {
+      const farm = await this.farms.create({ ...body }, { transaction });
+      const membership = await this.memberships.create({ farmId: farm.id, userId: user.id, role: 'owner' }, { transaction });
+      return this.toDto(farm, membership, 0);
+    });
+  }
+
+  async update(user: AuthenticatedUser, farmId: number, body: UpdateFarmDto): Promise<FarmDto> {
+    const membership = await this.access.require(user, farmId, 'farm:update');
+    const farm = await this.load(farmId);
+    await farm.update(body);
+    return this.toDto(farm, membership);
+  }
+
+  async remove(user: AuthenticatedUser, farmId: number): Promise<void> {
+    await this.access.require(user, farmId, 'farm:delete');
+    await this.sequelize.transaction(async (transaction) => {
+      await this.houses.destroy({ where: { farmId }, transaction });
+      await this.memberships.destroy({ where: { farmId }, transaction });
+      await this.farms.destroy({ where: { id: farmId }, transaction });
+    });
+  }
+
+  async members(user: AuthenticatedUser, farmId: number): Promise<MemberDto[]> {
+    await this.access.require(user, farmId, 'farm:read');
+    const rows = await this.memberships.findAll({ where: { farmId }, include: [User], order: [['id', 'ASC']] });
+    return rows.map((m) => ({ userId: m.userId, email: m.user.email, name: m.user.name, role: m.role }));
+  }
+
+  async addMember(user: AuthenticatedUser, farmId: number, body: AddMemberDto): Promise<MemberDto> {
+    await this.access.require(user, farmId, 'members:manage');
+    const invitee = await this.users.findByEmail(body.email);
+    if (!invitee) throw new NotFoundException('No account has that e-mail; ask them to register first');
+    const existing = await this.memberships.findOne({ where: { farmId, userId: invitee.id } });
+    if (existing) throw new BadRequestException('That person is already a member of this farm');
+    const membership = await this.memberships.create({ farmId, userId: invitee.id, role: body.role });
+    return { userId: invitee.id, email: invitee.email, name: invitee.name, role: membership.role };
+  }
+
+  async updateMember(user: AuthenticatedUser, farmId: number, userId: number, body: UpdateMemberDto): Promise<MemberDto> {
+    await this.access.require(user, farmId, 'members:manage');
+    const membership = await this.memberships.findOne({ where: { farmId, userId }, include: [User] });
+    if (!membership) throw new NotFoundException('No such member');
+    if (membership.role === 'owner' && body.role !== 'owner') await this.keepAnOwner(farmId);
+    await membership.update({ role: body.role });
+    return { userId, email: membership.user.email, name: membership.user.name, role: membership.role };
+  }
+
+  async removeMember(user: AuthenticatedUser, farmId: number, userId: number): Promise<void> {
+    await this.access.require(user, farmId, 'members:manage');
+    const membership = await this.memberships.findOne({ where: { farmId, userId } });
+    if (!membership) throw new NotFoundException('No such member');
+    if (membership.role === 'owner') await this.keepAnOwner(farmId);
+    await membership.destroy();
+  }
+
+  /** A farm must always keep at least one owner, or nobody could manage it. */
+  private async keepAnOwner(farmId: number): Promise<void> {
+    const owners = await this.memberships.count({ where: { farmId, role: 'owner' } });
+    if (owners <= 1) throw new BadRequestException('A farm needs at least one owner');
+  }
+
+  private async load(farmId: number): Promise<Farm> {
+    const farm = await this.farms.findByPk(farmId);
+    if (!farm) throw new NotFoundException('No such farm');
+    return farm;
+  }
+
+  private async toDto(farm: Farm, membership: Membership, houseCount?: number): Promise<FarmDto> {
+    return {
+      id: farm.id,
+      name: farm.name,
+      latitudeDeg: farm.latitudeDeg,
+      longitudeDeg: farm.longitudeDeg,
+      elevationM: farm.elevationM,
+      timeZone: farm.timeZone,
+      myRole: membership.role,
+      permissions: [...ROLE_PERMISSIONS[membership.role]],
+      houseCount: houseCount ?? (await this.houses.count({ where: { farmId: farm.id } })),
+      createdAt: farm.createdAt.toISOString(),
+      updatedAt: farm.updatedAt.toISOString(),
+    };
+  }
+}

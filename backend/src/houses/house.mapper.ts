@@ -1,0 +1,40 @@
+import type { HouseSpec } from '../engine/house.types';
+import type { HouseDto } from './dto/house.dto';
+import type { House } from './models/house.model';
+
+/** A stored house as the engine takes it: plain data, SI, nothing from the ORM. */
+export function houseToSpec(house: House | HouseDto): HouseSpec {
+  return {
+    shape: house.shape,
+    spans: house.spans,
+    widthM: house.widthM,
+    lengthM: house.lengthM,
+    eaveHeightM: house.eaveHeightM,
+    ridgeHeightM: house.ridgeHeightM,
+    coverings: { ...house.coverings },
+    coveringUOverridesWPerM2K: { ...(house.coveringUOverridesWPerM2K ?? {}) },
+    airLeakageClassId: house.airLeakageClassId,
+    airChangesPerHourOverride: house.airChangesPerHourOverride ?? null,
+    perimeterInsulated: house.perimeterInsulated,
+    curtainId: house.curtainId ?? null,
+    heaters: house.heaters.map((h) => ({ ...h })),
+    exhaustFans: { ...house.exhaustFans },
+    inletAreaM2: house.inletAreaM2,
+    setpoints: { ...house.setpoints },
+  };
+}
+
+export function houseToDto(house: House): HouseDto {
+  return {
+    id: house.id,
+    farmId: house.farmId,
+    name: house.name,
+    notes: house.notes ?? null,
+    ...houseToSpec(house),
+    coveringUOverridesWPerM2K: house.coveringUOverridesWPerM2K ?? {},
+    airChangesPerHourOverride: house.airChangesPerHourOverride ?? null,
+    curtainId: house.curtainId ?? null,
+    createdAt: house.createdAt.toISOString(),
+    updatedAt: house.updatedAt.toISOString(),
+  };
+}

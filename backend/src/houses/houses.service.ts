@@ -1,0 +1,78 @@
+import { Injectable, NotFoundException } from '@nestjs/common';
+import { InjectModel } from '@nestjs/sequelize';
+import type { AuthenticatedUser } from '../common/decorators/current-user.decorator';
+import type { Permission } from '../common/permissions';
+import { EngineInputError } from '../engine/errors';
+import { validateHouseDimensions } from '../engine/geometry/house-geometry';
+import { FarmAccessService } from '../farms/farm-access.service';
+import { ReferenceDataService } from '../reference-data/reference-data.service';
+import type { CreateHouseDto, HouseDto, UpdateHouseDto } from './dto/house.dto';
+import { houseToDto, houseToSpec } from './house.mapper';
+import { House } from './models/house.model';
+
+@Injectable()
+export class HousesService {
+  constructor(
+    @InjectModel(House) private readonly houses: typeof House,
+    private readonly access: FarmAccessService,
+    private readonly reference: ReferenceDataService,
+  ) {}
+
+  async list(user: AuthenticatedUser, farmId: number): Promise<HouseDto[]> {
+    await this.access.require(user, farmId, 'house:read');
+    const rows = await this.houses.findAll({ where: { farmId }, order: [['name', 'ASC']] });
+    return rows.map(houseToDto);
+  }
+
+  async create(user: AuthenticatedUser, farmId: number, body: CreateHouseDto): Promise<HouseDto> {
+    await this.access.require(user, farmId, 'house:write');
+    const candidate = { ...body, coveringUOverridesWPerM2K: body.coveringUOverridesWPerM2K ?? {} };
+    this.assertComputable(candidate);
+    const house = await this.houses.create({ ...candidate, farmId });
+    return houseToDto(house);
+  }
+
+  async get(user: AuthenticatedUser, houseId: number): Promise<HouseDto> {
+    return houseToDto(await this.loadFor(user, houseId, 'house:read'));
+  }
+
+  async update(user: AuthenticatedUser, houseId: number, body: UpdateHouseDto): Promise<HouseDto> {
+    const house = await this.loadFor(user, houseId, 'house:write');
+    const merged = { ...houseToDto(house), ...body };
+    this.assertComputable(merged);
+    await house.update(body);
+    return houseToDto(house);
+  }
+
+  async remove(user: AuthenticatedUser, houseId: number): Promise<void> {
+    const house = await this.loadFor(user, houseId, 'house:write');
+    await house.destroy();
+  }
+
+  /** Loads a house the caller may act on; another farm's house is a 404, never data. */
+  async loadFor(user: AuthenticatedUser, houseId: number, permission: Permission): Promise<House> {
+    const house = await this.houses.findByPk(houseId);
+    if (!house) throw new NotFoundException('No such house');
+    try {
+      await this.access.require(user, house.farmId, permission);
+    } catch (error) {
+      if (error instanceof NotFoundException) throw new NotFoundException('No such house');
+      throw error;
+    }
+    return house;
+  }
+
+  /** A house is saved only if the engine can compute with it (ridge above eave, known ids …). */
+  private assertComputable(house: CreateHouseDto | HouseDto): void {
+    this.reference.assertHouseReferences(house);
+    try {
+      validateHouseDimensions(houseToSpec(house as HouseDto), 'house');
+    } catch (error) {
+      if (error instanceof EngineInputError) {
+        const field = error.field.replace(/^house\./, '');
+        throw new EngineInputError(field, error.message.replace(/house\./g, ''));
+      }
+      throw error;
+    }
+  }
+}

@@ -1,0 +1,29 @@
+import { Injectable } from '@nestjs/common';
+import { EngineInputError } from '../engine/errors';
+import type { HouseSpec } from '../engine/house.types';
+import { referenceRow, type ReferenceData } from '../engine/reference-data.types';
+import { loadReferenceData } from './load-reference-data';
+
+/** The handbook tables, read once at boot (a table without provenance stops the app). */
+@Injectable()
+export class ReferenceDataService {
+  readonly data: ReferenceData = loadReferenceData();
+
+  /** Unknown reference ids are refused at the edge, naming the field. */
+  assertHouseReferences(house: Partial<HouseSpec>, prefix = ''): void {
+    const check = (table: string, field: string, id: string | null | undefined) => {
+      if (id === undefined || id === null) return;
+      if (!referenceRow(this.data, table, id)) {
+        throw new EngineInputError(`${prefix}${field}`, `${prefix}${field}: "${id}" is not in reference-data/${table}.json`);
+      }
+    };
+    if (house.coverings) {
+      check('coverings', 'coverings.roof', house.coverings.roof);
+      check('coverings', 'coverings.sidewalls', house.coverings.sidewalls);
+      check('coverings', 'coverings.endwalls', house.coverings.endwalls);
+    }
+    check('air-leakage', 'airLeakageClassId', house.airLeakageClassId);
+    check('curtains', 'curtainId', house.curtainId);
+    house.heaters?.forEach((heater, index) => check('fuels', `heaters.${index}.fuelId`, heater.fuelId));
+  }
+}

@@ -1,0 +1,109 @@
+import type { FarmRole, SiteRole } from '../common/permissions';
+import type { HouseSpec } from '../engine/house.types';
+
+/**
+ * The demo scenario. INVENTED for demonstration: the farm, its people and its houses do not
+ * exist. The site is a real cold-winter place (central Minnesota) so the climate is plausible;
+ * house sizes are common trade sizes (30 ft and 20 ft freestanding houses, a three-span range).
+ */
+export const DEMO_PASSWORD = 'thermbay-demo';
+
+export interface DemoAccount {
+  email: string;
+  name: string;
+  description: string;
+  siteRole: SiteRole;
+  farmRole: FarmRole | null;
+}
+
+export const DEMO_ACCOUNTS: DemoAccount[] = [
+  { email: 'owner@example.com', name: 'Olive Owner', description: 'owns the demo farm', siteRole: 'user', farmRole: 'owner' },
+  { email: 'grower@example.com', name: 'Gus Grower', description: 'grower: edits houses, runs estimates', siteRole: 'user', farmRole: 'grower' },
+  { email: 'adviser@example.com', name: 'Ada Adviser', description: 'extension adviser: reads the farm, writes reports', siteRole: 'user', farmRole: 'adviser' },
+  { email: 'admin@example.com', name: 'Andy Admin', description: 'site administrator: manages users', siteRole: 'admin', farmRole: null },
+];
+
+export const DEMO_FARM = {
+  name: 'Birch Hollow Growers (invented demo farm)',
+  latitudeDeg: 45.56,
+  longitudeDeg: -94.16,
+  elevationM: 313,
+  timeZone: 'America/Chicago',
+};
+
+const FT = 0.3048;
+const BTU_PER_H_IN_W = 0.29307107;
+const CFM_IN_M3_PER_S = 0.00047194745;
+
+export interface DemoHouse extends HouseSpec {
+  name: string;
+  notes: string;
+}
+
+export const DEMO_HOUSES: DemoHouse[] = [
+  {
+    name: 'House A – tomatoes',
+    notes: 'Invented demo house: 30 × 96 ft gothic arch, double poly with IR inner film, two propane unit heaters.',
+    shape: 'gothic-arch',
+    spans: 1,
+    widthM: round(30 * FT),
+    lengthM: round(96 * FT),
+    eaveHeightM: round(8 * FT),
+    ridgeHeightM: round(17 * FT),
+    coverings: { roof: 'poly-double-ir-inner', sidewalls: 'poly-double-ir-inner', endwalls: 'polycarbonate-twin-8mm' },
+    coveringUOverridesWPerM2K: {},
+    airLeakageClassId: 'new-film-double',
+    airChangesPerHourOverride: null,
+    perimeterInsulated: true,
+    curtainId: null,
+    heaters: [{ count: 2, ratedInputW: round(250_000 * BTU_PER_H_IN_W, 0), efficiency: 0.8, fuelId: 'propane' }],
+    exhaustFans: { count: 2, capacityEachM3PerS: round(12_000 * CFM_IN_M3_PER_S) },
+    inletAreaM2: 4.5,
+    setpoints: { dayHeatingC: 20, nightHeatingC: 17, coolingC: 26 },
+  },
+  {
+    name: 'House B – bedding plants',
+    notes: 'Invented demo house: 20 × 96 ft quonset, single poly, one natural-gas heater and one small fan.',
+    shape: 'quonset',
+    spans: 1,
+    widthM: round(20 * FT),
+    lengthM: round(96 * FT),
+    eaveHeightM: round(4 * FT),
+    ridgeHeightM: round(11 * FT),
+    coverings: { roof: 'poly-single', sidewalls: 'poly-single', endwalls: 'poly-single' },
+    coveringUOverridesWPerM2K: {},
+    airLeakageClassId: 'new-film-single',
+    airChangesPerHourOverride: null,
+    perimeterInsulated: false,
+    curtainId: null,
+    heaters: [{ count: 1, ratedInputW: round(150_000 * BTU_PER_H_IN_W, 0), efficiency: 0.78, fuelId: 'natural-gas' }],
+    exhaustFans: { count: 1, capacityEachM3PerS: round(8_000 * CFM_IN_M3_PER_S) },
+    inletAreaM2: 1.2,
+    setpoints: { dayHeatingC: 15, nightHeatingC: 10, coolingC: 24 },
+  },
+  {
+    name: 'Range C – cucumbers',
+    notes: 'Invented demo range: three 30 × 150 ft gable spans, gutter-connected, double poly roof, twin-wall sides, energy curtain.',
+    shape: 'gable',
+    spans: 3,
+    widthM: round(30 * FT),
+    lengthM: round(150 * FT),
+    eaveHeightM: round(12 * FT),
+    ridgeHeightM: round(19 * FT),
+    coverings: { roof: 'poly-double-inflated', sidewalls: 'polycarbonate-twin-8mm', endwalls: 'polycarbonate-twin-8mm' },
+    coveringUOverridesWPerM2K: {},
+    airLeakageClassId: 'new-film-double',
+    airChangesPerHourOverride: null,
+    perimeterInsulated: true,
+    curtainId: 'energy-screen-aluminised',
+    heaters: [{ count: 4, ratedInputW: round(400_000 * BTU_PER_H_IN_W, 0), efficiency: 0.8, fuelId: 'natural-gas' }],
+    exhaustFans: { count: 10, capacityEachM3PerS: round(20_000 * CFM_IN_M3_PER_S) },
+    inletAreaM2: 20,
+    setpoints: { dayHeatingC: 21, nightHeatingC: 18, coolingC: 27 },
+  },
+];
+
+function round(value: number, digits = 3): number {
+  const f = 10 ** digits;
+  return Math.round(value * f) / f;
+}

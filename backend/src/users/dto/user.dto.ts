@@ -1,0 +1,22 @@
+import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
+import { IsIn, IsOptional, IsString, Length } from 'class-validator';
+import { SITE_ROLES, type SiteRole } from '../../common/permissions';
+import type { UnitSystem } from '../models/user.model';
+
+export class UserDto {
+  @ApiProperty() id: number;
+  @ApiProperty() email: string;
+  @ApiProperty() name: string;
+  @ApiProperty({ enum: SITE_ROLES }) siteRole: SiteRole;
+  @ApiProperty({ enum: ['si', 'us'], description: 'How numbers are shown: SI or US customary' }) unitSystem: UnitSystem;
+}
+
+export class UpdateMeDto {
+  @ApiPropertyOptional() @IsOptional() @IsString() @Length(1, 120) name?: string;
+  @ApiPropertyOptional({ enum: ['si', 'us'] }) @IsOptional() @IsIn(['si', 'us']) unitSystem?: UnitSystem;
+}
+
+export class AdminUpdateUserDto {
+  @ApiPropertyOptional() @IsOptional() @IsString() @Length(1, 120) name?: string;
+  @ApiPropertyOptional({ enum: SITE_ROLES }) @IsOptional() @IsIn(SITE_ROLES) siteRole?: SiteRole;
+}

@@ -1,0 +1,40 @@
+import { Body, Controller, Delete, Get, HttpCode, Param, ParseIntPipe, Patch } from '@nestjs/common';
+import { ApiBearerAuth, ApiOkResponse, ApiTags } from '@nestjs/swagger';
+import { CurrentUser, type AuthenticatedUser } from '../common/decorators/current-user.decorator';
+import { SiteRoles } from '../common/decorators/site-roles.decorator';
+import { AdminUpdateUserDto, UpdateMeDto, UserDto } from './dto/user.dto';
+import { UsersService } from './users.service';
+
+@ApiTags('users')
+@ApiBearerAuth()
+@Controller('users')
+export class UsersController {
+  constructor(private readonly users: UsersService) {}
+
+  @Patch('me')
+  @ApiOkResponse({ type: UserDto })
+  updateMe(@CurrentUser() me: AuthenticatedUser, @Body() body: UpdateMeDto): Promise<UserDto> {
+    return this.users.updateMe(me.id, body);
+  }
+
+  @Get()
+  @SiteRoles('admin')
+  @ApiOkResponse({ type: UserDto, isArray: true })
+  list(): Promise<UserDto[]> {
+    return this.users.list();
+  }
+
+  @Patch(':id')
+  @SiteRoles('admin')
+  @ApiOkResponse({ type: UserDto })
+  update(@CurrentUser() me: AuthenticatedUser, @Param('id', ParseIntPipe) id: number, @Body() body: AdminUpdateUserDto): Promise<UserDto> {
+    return this.users.adminUpdate(me.id, id, body);
+  }
+
+  @Delete(':id')
+  @HttpCode(204)
+  @SiteRoles('admin')
+  async remove(@CurrentUser() me: AuthenticatedUser, @Param('id', ParseIntPipe) id: number): Promise<void> {
+    await this.users.remove(me.id, id);
+  }
+}
