@@ -49,6 +49,12 @@ export interface HeaterTypeRow extends ReferenceRow {
   defaultForSizing?: boolean;
 }
 
+/** The part of a reference-data/fuels.json row the heating engine needs. */
+export interface FuelFiredRow extends ReferenceRow {
+  label: string;
+  fuelFired: boolean;
+}
+
 export interface HeaterSizingRow extends ReferenceRow {
   label: string;
   fraction?: number;
