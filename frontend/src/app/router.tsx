@@ -1,0 +1,55 @@
+import { lazy, Suspense, type ReactNode } from 'react';
+import { createBrowserRouter, Navigate, RouterProvider } from 'react-router-dom';
+import { LoadingState } from '../components/feedback';
+import { paths } from '../config/paths';
+import { AppShell } from './app-shell';
+import { RequireAuth } from './require-auth';
+import { RouteError } from './routes/route-error';
+
+// Each page is its own chunk: MUI's DataGrid and the form code load only where used.
+const LoginPage = lazy(() => import('./routes/login-page'));
+const RegisterPage = lazy(() => import('./routes/register-page'));
+const FarmsPage = lazy(() => import('./routes/farms-page'));
+const FarmPage = lazy(() => import('./routes/farm-page'));
+const NewHousePage = lazy(() => import('./routes/new-house-page'));
+const HousePage = lazy(() => import('./routes/house-page'));
+const SettingsPage = lazy(() => import('./routes/settings-page'));
+const AdminUsersPage = lazy(() => import('./routes/admin-users-page'));
+const NotFoundPage = lazy(() => import('./routes/not-found-page'));
+
+const publicPage = (page: ReactNode) => <Suspense fallback={<LoadingState />}>{page}</Suspense>;
+
+export function createAppRouter() {
+  return createBrowserRouter([
+    { path: paths.login, element: publicPage(<LoginPage />), errorElement: <RouteError /> },
+    { path: paths.register, element: publicPage(<RegisterPage />), errorElement: <RouteError /> },
+    {
+      element: <RequireAuth />,
+      errorElement: <RouteError />,
+      children: [
+        {
+          element: <AppShell />,
+          errorElement: <RouteError />,
+          children: [
+            { index: true, element: <Navigate to={paths.farms} replace /> },
+            { path: 'farms', element: <FarmsPage /> },
+            { path: 'farms/:farmId', element: <FarmPage /> },
+            { path: 'farms/:farmId/houses/new', element: <NewHousePage /> },
+            { path: 'houses/:houseId', element: <HousePage /> },
+            { path: 'settings', element: <SettingsPage /> },
+            { path: 'admin/users', element: <AdminUsersPage /> },
+          ],
+        },
+      ],
+    },
+    { path: '*', element: publicPage(<NotFoundPage />) },
+  ]);
+}
+
+let appRouter: ReturnType<typeof createAppRouter> | undefined;
+
+export function AppRouter() {
+  // One router for the page's life; created on first render so tests can build their own.
+  appRouter ??= createAppRouter();
+  return <RouterProvider router={appRouter} />;
+}

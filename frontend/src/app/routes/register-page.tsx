@@ -1,0 +1,20 @@
+import { Link, Typography } from '@mui/material';
+import { Link as RouterLink, useNavigate } from 'react-router-dom';
+import { paths } from '../../config/paths';
+import { RegisterForm } from '../../features/auth';
+import { AuthLayout } from './auth-layout';
+
+export default function RegisterPage() {
+  const navigate = useNavigate();
+  return (
+    <AuthLayout>
+      <RegisterForm onRegistered={() => navigate(paths.farms, { replace: true })} />
+      <Typography sx={{ mt: 3 }}>
+        Already have an account?{' '}
+        <Link component={RouterLink} to={paths.login}>
+          Sign in
+        </Link>
+      </Typography>
+    </AuthLayout>
+  );
+}

@@ -1,0 +1,12 @@
+/** The one route table: pages and links build URLs from here. */
+export const paths = {
+  home: '/',
+  login: '/login',
+  register: '/register',
+  farms: '/farms',
+  farm: (farmId: number | string) => `/farms/${farmId}`,
+  newHouse: (farmId: number | string) => `/farms/${farmId}/houses/new`,
+  house: (houseId: number | string) => `/houses/${houseId}`,
+  settings: '/settings',
+  adminUsers: '/admin/users',
+} as const;

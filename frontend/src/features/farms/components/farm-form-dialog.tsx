@@ -1,0 +1,154 @@
+import {
+  Autocomplete,
+  Button,
+  Dialog,
+  DialogActions,
+  DialogContent,
+  DialogTitle,
+  Stack,
+  TextField,
+} from '@mui/material';
+import { Form, Formik, getIn } from 'formik';
+import { useMemo } from 'react';
+import type { Farm, FarmInput } from '../../../api/types';
+import { ErrorAlert } from '../../../components/feedback';
+import { FormNumberField, FormTextField } from '../../../components/form-fields';
+import { useUnits, type Units } from '../../../lib/units';
+import { useCreateFarm, useUpdateFarm } from '../mutations';
+import { farmFormSchema, type FarmFormValues } from '../schemas';
+
+function allTimeZones(): string[] {
+  try {
+    return Intl.supportedValuesOf('timeZone');
+  } catch {
+    return ['UTC'];
+  }
+}
+
+function browserTimeZone(): string {
+  return Intl.DateTimeFormat().resolvedOptions().timeZone || 'UTC';
+}
+
+function toFormValues(farm: Farm | undefined, units: Units): FarmFormValues {
+  if (!farm) {
+    return { name: '', latitudeDeg: '', longitudeDeg: '', elevationM: '', timeZone: browserTimeZone() };
+  }
+  return {
+    name: farm.name,
+    latitudeDeg: String(farm.latitudeDeg),
+    longitudeDeg: String(farm.longitudeDeg),
+    elevationM: units.toInput('length', farm.elevationM),
+    timeZone: farm.timeZone,
+  };
+}
+
+function toFarmInput(values: FarmFormValues, initial: FarmFormValues, farm: Farm | undefined, units: Units): FarmInput {
+  // An untouched elevation keeps its stored SI value instead of a rounded round trip.
+  const elevationM =
+    farm && values.elevationM === initial.elevationM
+      ? farm.elevationM
+      : units.fromDisplay('length', Number(values.elevationM));
+  return {
+    name: values.name.trim(),
+    latitudeDeg: Number(values.latitudeDeg),
+    longitudeDeg: Number(values.longitudeDeg),
+    elevationM,
+    timeZone: values.timeZone,
+  };
+}
+
+export interface FarmFormDialogProps {
+  open: boolean;
+  onClose: () => void;
+  /** the farm to edit; omit to create one */
+  farm?: Farm;
+  onSaved?: (farm: Farm) => void;
+}
+
+export function FarmFormDialog({ open, onClose, farm, onSaved }: FarmFormDialogProps) {
+  const units = useUnits();
+  const create = useCreateFarm();
+  const update = useUpdateFarm(farm?.id ?? 0);
+  const mutation = farm ? update : create;
+  const schema = useMemo(() => farmFormSchema(units), [units]);
+  const initialValues = useMemo(() => toFormValues(farm, units), [farm, units]);
+  const timeZones = useMemo(allTimeZones, []);
+  const title = farm ? `Edit ${farm.name}` : 'New farm';
+
+  return (
+    <Dialog open={open} onClose={onClose} fullWidth maxWidth="sm" aria-labelledby="farm-dialog-title">
+      <Formik
+        initialValues={initialValues}
+        validationSchema={schema}
+        enableReinitialize
+        onSubmit={async (values) => {
+          try {
+            const saved = await mutation.mutateAsync(toFarmInput(values, initialValues, farm, units));
+            onSaved?.(saved);
+            onClose();
+          } catch {
+            // shown through the mutation's error
+          }
+        }}
+      >
+        {({ values, errors, touched, submitCount, setFieldValue, setFieldTouched, isSubmitting }) => {
+          const timeZoneError =
+            (getIn(touched, 'timeZone') || submitCount > 0) && typeof errors.timeZone === 'string'
+              ? errors.timeZone
+              : undefined;
+          return (
+            <Form noValidate>
+              <DialogTitle id="farm-dialog-title">{title}</DialogTitle>
+              <DialogContent>
+                <Stack spacing={2} sx={{ pt: 1 }}>
+                  {mutation.error ? <ErrorAlert error={mutation.error} /> : null}
+                  <FormTextField name="name" label="Farm name" required autoFocus />
+                  <Stack direction={{ xs: 'column', sm: 'row' }} spacing={2}>
+                    <FormNumberField
+                      name="latitudeDeg"
+                      label="Latitude"
+                      unit="°"
+                      helperText="North positive"
+                      required
+                    />
+                    <FormNumberField
+                      name="longitudeDeg"
+                      label="Longitude"
+                      unit="°"
+                      helperText="East positive"
+                      required
+                    />
+                  </Stack>
+                  <FormNumberField name="elevationM" label="Elevation" unit={units.label('length')} required />
+                  <Autocomplete
+                    options={timeZones}
+                    value={values.timeZone || null}
+                    onChange={(_event, value) => void setFieldValue('timeZone', value ?? '')}
+                    onBlur={() => void setFieldTouched('timeZone', true)}
+                    autoHighlight
+                    renderInput={(params) => (
+                      <TextField
+                        {...params}
+                        id="field-timeZone"
+                        label="Time zone"
+                        required
+                        error={Boolean(timeZoneError)}
+                        helperText={timeZoneError}
+                      />
+                    )}
+                  />
+                </Stack>
+              </DialogContent>
+              <DialogActions>
+                <Button onClick={onClose}>Cancel</Button>
+                <Button type="submit" variant="contained" disabled={isSubmitting}>
+                  {farm ? 'Save farm' : 'Create farm'}
+                </Button>
+              </DialogActions>
+            </Form>
+          );
+        }}
+      </Formik>
+    </Dialog>
+  );
+}

@@ -1,0 +1,37 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { api } from '../../api/client';
+import type { House, HouseInput } from '../../api/types';
+import { houseKeys } from './queries';
+
+export function useCreateHouse(farmId: number) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (body: HouseInput) => api.post<House>(`/api/farms/${farmId}/houses`, body),
+    onSuccess: (house) => {
+      queryClient.setQueryData(houseKeys.detail(house.id), house);
+      void queryClient.invalidateQueries({ queryKey: houseKeys.list(farmId) });
+    },
+  });
+}
+
+export function useUpdateHouse(houseId: number) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (body: Partial<HouseInput>) => api.patch<House>(`/api/houses/${houseId}`, body),
+    onSuccess: (house) => {
+      queryClient.setQueryData(houseKeys.detail(house.id), house);
+      void queryClient.invalidateQueries({ queryKey: houseKeys.list(house.farmId) });
+    },
+  });
+}
+
+export function useDeleteHouse() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (house: Pick<House, 'id' | 'farmId'>) => api.delete(`/api/houses/${house.id}`),
+    onSuccess: (_result, house) => {
+      queryClient.removeQueries({ queryKey: houseKeys.detail(house.id) });
+      void queryClient.invalidateQueries({ queryKey: houseKeys.list(house.farmId) });
+    },
+  });
+}

@@ -1,0 +1,100 @@
+import { BOUNDS } from '@bounds';
+import * as yup from 'yup';
+import type { Quantity, Units } from '../../lib/units';
+import { HOUSE_SHAPES } from './house-form-values';
+
+/**
+ * The house form's Yup schema. Values are strings typed in the user's units; each SI bound from
+ * the shared bounds module is converted to that unit (narrowed inward to the shown decimals) so
+ * the form refuses exactly what the API would.
+ */
+
+function numeric(label: string) {
+  return yup
+    .number()
+    .transform((value: number, original: unknown) =>
+      original === '' || original === null || original === undefined ? undefined : value,
+    )
+    .typeError(`${label} must be a number`);
+}
+
+function rangeMessage(label: string, range: { min: number; max: number }, unit: string) {
+  return `${label} must be between ${range.min} and ${range.max}${unit ? ` ${unit}` : ''}`;
+}
+
+export function houseFormSchema(units: Units) {
+  const measured = (label: string, quantity: Quantity, siRange: { min: number; max: number }) => {
+    const range = units.range(quantity, siRange);
+    const message = rangeMessage(label, range, units.label(quantity));
+    return numeric(label).min(range.min, message).max(range.max, message);
+  };
+  const counted = (label: string, range: { min: number; max: number }) => {
+    const message = rangeMessage(label, range, '');
+    return numeric(label).integer(`${label} must be a whole number`).min(range.min, message).max(range.max, message);
+  };
+  const efficiencyRangePct = {
+    min: Math.round(BOUNDS.heaterEfficiency.min * 100),
+    max: Math.round(BOUNDS.heaterEfficiency.max * 100),
+  };
+  const optionalU = (label: string) => measured(label, 'uValue', BOUNDS.uValueWPerM2K).optional();
+
+  return yup.object({
+    name: yup.string().trim().max(120, 'At most 120 characters').required('Enter a name for the house'),
+    notes: yup.string().max(2000, 'At most 2,000 characters'),
+    shape: yup.mixed().oneOf([...HOUSE_SHAPES], 'Choose a shape').required('Choose a shape'),
+    spans: counted('Spans', BOUNDS.spans).required('Enter the number of spans'),
+    widthM: measured('Width', 'length', BOUNDS.widthM).required('Enter the span width'),
+    lengthM: measured('Length', 'length', BOUNDS.lengthM).required('Enter the length'),
+    eaveHeightM: measured('Eave height', 'length', BOUNDS.eaveHeightM).required('Enter the eave height'),
+    ridgeHeightM: measured('Ridge height', 'length', BOUNDS.ridgeHeightM)
+      .required('Enter the ridge height')
+      .test('above-eave', 'The ridge must be higher than the eave', function ridgeAboveEave(ridge) {
+        const eave = Number(this.parent.eaveHeightM);
+        return ridge === undefined || !Number.isFinite(eave) || ridge > eave;
+      }),
+    coverings: yup.object({
+      roof: yup.string().required('Choose the roof covering'),
+      sidewalls: yup.string().required('Choose the sidewall covering'),
+      endwalls: yup.string().required('Choose the endwall covering'),
+    }),
+    coveringUOverridesWPerM2K: yup.object({
+      roof: optionalU('Roof U-value'),
+      sidewalls: optionalU('Sidewall U-value'),
+      endwalls: optionalU('Endwall U-value'),
+    }),
+    airLeakageClassId: yup.string().required('Choose how tight the house is'),
+    airChangesPerHourOverride: numeric('Air changes per hour')
+      .min(BOUNDS.airChangesPerHour.min, rangeMessage('Air changes per hour', BOUNDS.airChangesPerHour, '/h'))
+      .max(BOUNDS.airChangesPerHour.max, rangeMessage('Air changes per hour', BOUNDS.airChangesPerHour, '/h'))
+      .optional(),
+    perimeterInsulated: yup.boolean(),
+    curtainId: yup.string(),
+    heaters: yup
+      .array(
+        yup.object({
+          count: counted('Heater count', BOUNDS.heaterCount).required('Enter how many'),
+          ratedInputW: measured('Rated input', 'power', BOUNDS.heaterInputW).required('Enter the rated input'),
+          efficiency: numeric('Efficiency')
+            .min(efficiencyRangePct.min, rangeMessage('Efficiency', efficiencyRangePct, '%'))
+            .max(efficiencyRangePct.max, rangeMessage('Efficiency', efficiencyRangePct, '%'))
+            .required('Enter the efficiency'),
+          fuelId: yup.string().required('Choose the fuel'),
+        }),
+      )
+      .max(20, 'At most 20 heater groups'),
+    exhaustFans: yup.object({
+      count: counted('Fan count', BOUNDS.fanCount).required('Enter how many fans'),
+      capacityEachM3PerS: measured('Fan capacity', 'airFlow', BOUNDS.fanCapacityM3PerS).required(
+        'Enter the capacity of one fan',
+      ),
+    }),
+    inletAreaM2: measured('Inlet area', 'area', BOUNDS.inletAreaM2).required('Enter the inlet free area'),
+    setpoints: yup.object({
+      dayHeatingC: measured('Day heating setpoint', 'temperature', BOUNDS.setpointC).required('Enter a setpoint'),
+      nightHeatingC: measured('Night heating setpoint', 'temperature', BOUNDS.setpointC).required(
+        'Enter a setpoint',
+      ),
+      coolingC: measured('Cooling setpoint', 'temperature', BOUNDS.setpointC).required('Enter a setpoint'),
+    }),
+  });
+}

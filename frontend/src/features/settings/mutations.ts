@@ -1,0 +1,14 @@
+import { useMutation } from '@tanstack/react-query';
+import { api } from '../../api/client';
+import type { UpdateMeRequest, User } from '../../api/types';
+
+/**
+ * PATCH /api/users/me. The caller says what to do with the updated user (the app writes it into
+ * the current-user cache, which re-renders every number in the new unit system).
+ */
+export function useUpdateMe(options: { onSuccess?: (user: User) => void } = {}) {
+  return useMutation({
+    mutationFn: (body: UpdateMeRequest) => api.patch<User>('/api/users/me', body),
+    onSuccess: (user) => options.onSuccess?.(user),
+  });
+}

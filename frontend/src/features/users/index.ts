@@ -1,0 +1,2 @@
+export { UsersTable } from './components/users-table';
+export { usersListQueryOptions } from './queries';

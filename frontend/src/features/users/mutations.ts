@@ -1,0 +1,27 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { api } from '../../api/client';
+import type { UpdateUserRequest, User } from '../../api/types';
+import { userKeys } from './queries';
+
+export function useUpdateUser() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: ({ userId, body }: { userId: number; body: UpdateUserRequest }) =>
+      api.patch<User>(`/api/users/${userId}`, body),
+    onSuccess: (user) => {
+      queryClient.setQueryData<User[]>(userKeys.lists(), (users) =>
+        users?.map((existing) => (existing.id === user.id ? user : existing)),
+      );
+    },
+  });
+}
+
+export function useDeleteUser() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (userId: number) => api.delete(`/api/users/${userId}`),
+    onSuccess: (_result, userId) => {
+      queryClient.setQueryData<User[]>(userKeys.lists(), (users) => users?.filter((user) => user.id !== userId));
+    },
+  });
+}

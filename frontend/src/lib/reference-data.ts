@@ -1,0 +1,23 @@
+import { queryOptions } from '@tanstack/react-query';
+import { api } from '../api/client';
+import type { ReferenceData, ReferenceRow } from '../api/types';
+
+/**
+ * Handbook tables (coverings, air leakage, curtains, fuels …) are shared read-only data that
+ * several features pick from, so their query lives here rather than in one feature.
+ */
+export const referenceDataQueryOptions = () =>
+  queryOptions({
+    queryKey: ['reference-data'] as const,
+    queryFn: ({ signal }) => api.get<ReferenceData>('/api/reference-data', { signal }),
+    staleTime: Infinity,
+  });
+
+export function referenceRows(data: ReferenceData | undefined, table: string): ReferenceRow[] {
+  return data?.[table]?.rows ?? [];
+}
+
+export function referenceLabel(data: ReferenceData | undefined, table: string, id: string | null | undefined): string {
+  if (!id) return '—';
+  return referenceRows(data, table).find((row) => row.id === id)?.label ?? id;
+}

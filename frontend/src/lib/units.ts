@@ -1,0 +1,237 @@
+import { createContext, createElement, useContext, useMemo, type ReactNode } from 'react';
+
+/**
+ * The one place where SI values (as stored and computed) become what the user reads, and where
+ * typed values become SI again. Factors are exact definitions (NIST SP 811, Appendix B) or
+ * built from them, so a round trip loses nothing but floating-point noise.
+ */
+
+export type UnitSystem = 'si' | 'us';
+
+// Exact definitions.
+export const METRES_PER_FOOT = 0.3048;
+export const SQUARE_METRES_PER_SQUARE_FOOT = METRES_PER_FOOT ** 2; // 0.092 903 04
+export const CUBIC_METRES_PER_CUBIC_FOOT = METRES_PER_FOOT ** 3; // 0.028 316 846 592
+export const JOULES_PER_BTU = 1055.05585262; // International Table Btu
+export const SECONDS_PER_HOUR = 3600;
+export const JOULES_PER_KWH = 3.6e6;
+export const KELVIN_PER_FAHRENHEIT_DEGREE = 5 / 9;
+export const LITRES_PER_US_GALLON = 3.785411784;
+export const KILOGRAMS_PER_POUND = 0.45359237;
+/** 1 therm = 100 000 Btu_IT (the "EC" therm; the US-statute therm on the 59 °F Btu is 0.02 % smaller). */
+export const JOULES_PER_THERM = 1e5 * JOULES_PER_BTU;
+export const JOULES_PER_MMBTU = 1e6 * JOULES_PER_BTU;
+
+// Derived from the exact ones.
+export const WATTS_PER_BTU_PER_HOUR = JOULES_PER_BTU / SECONDS_PER_HOUR;
+export const WATTS_PER_M2K_PER_BTU_PER_HFT2F =
+  WATTS_PER_BTU_PER_HOUR / SQUARE_METRES_PER_SQUARE_FOOT / KELVIN_PER_FAHRENHEIT_DEGREE;
+export const CUBIC_METRES_PER_SECOND_PER_CFM = CUBIC_METRES_PER_CUBIC_FOOT / 60;
+export const M3_PER_S_M2_PER_CFM_PER_FT2 = CUBIC_METRES_PER_SECOND_PER_CFM / SQUARE_METRES_PER_SQUARE_FOOT;
+
+export type Quantity =
+  | 'length'
+  | 'area'
+  | 'volume'
+  | 'temperature'
+  | 'temperatureDifference'
+  | 'power'
+  | 'uValue'
+  | 'airFlow'
+  | 'airFlowPerFloorArea'
+  | 'energy'
+  | 'irradiance'
+  | 'heatContentPerVolume'
+  | 'heatContentPerLiquidVolume'
+  | 'heatContentPerMass';
+
+interface UnitDefinition {
+  /** symbol shown after the number */
+  label: string;
+  /** SI value (the API's unit) → value in this unit */
+  fromSi: (siValue: number) => number;
+  /** value in this unit → SI value */
+  toSi: (displayValue: number) => number;
+  /** decimals shown and offered in inputs */
+  decimals: number;
+}
+
+const scaled = (label: string, siPerUnit: number, decimals: number): UnitDefinition => ({
+  label,
+  fromSi: (siValue) => siValue / siPerUnit,
+  toSi: (displayValue) => displayValue * siPerUnit,
+  decimals,
+});
+
+/** SI units per quantity: the API's unit, except power (W shown as kW) and energy (J as kWh). */
+const UNITS: Record<Quantity, Record<UnitSystem, UnitDefinition>> = {
+  length: { si: scaled('m', 1, 2), us: scaled('ft', METRES_PER_FOOT, 1) },
+  area: { si: scaled('m²', 1, 1), us: scaled('ft²', SQUARE_METRES_PER_SQUARE_FOOT, 0) },
+  volume: { si: scaled('m³', 1, 0), us: scaled('ft³', CUBIC_METRES_PER_CUBIC_FOOT, 0) },
+  temperature: {
+    si: scaled('°C', 1, 1),
+    us: {
+      label: '°F',
+      fromSi: (celsius) => celsius * 1.8 + 32,
+      toSi: (fahrenheit) => (fahrenheit - 32) / 1.8,
+      decimals: 1,
+    },
+  },
+  temperatureDifference: {
+    si: scaled('K', 1, 1),
+    us: scaled('°F', KELVIN_PER_FAHRENHEIT_DEGREE, 1),
+  },
+  power: { si: scaled('kW', 1000, 1), us: scaled('Btu/h', WATTS_PER_BTU_PER_HOUR, 0) },
+  uValue: {
+    si: scaled('W/(m²·K)', 1, 2),
+    us: scaled('Btu/(h·ft²·°F)', WATTS_PER_M2K_PER_BTU_PER_HFT2F, 3),
+  },
+  airFlow: { si: scaled('m³/s', 1, 2), us: scaled('cfm', CUBIC_METRES_PER_SECOND_PER_CFM, 0) },
+  airFlowPerFloorArea: {
+    si: scaled('m³/(s·m²)', 1, 4),
+    us: scaled('cfm/ft²', M3_PER_S_M2_PER_CFM_PER_FT2, 1),
+  },
+  energy: { si: scaled('kWh', JOULES_PER_KWH, 0), us: scaled('MMBtu', JOULES_PER_MMBTU, 2) },
+  irradiance: { si: scaled('W/m²', 1, 0), us: scaled('W/m²', 1, 0) },
+  heatContentPerVolume: {
+    si: scaled('MJ/m³', 1e6, 1),
+    us: scaled('Btu/ft³', JOULES_PER_BTU / CUBIC_METRES_PER_CUBIC_FOOT, 0),
+  },
+  heatContentPerLiquidVolume: {
+    // SI value is J per litre here (fuel is bought by the litre)
+    si: scaled('MJ/L', 1e6, 2),
+    us: scaled('Btu/gal', JOULES_PER_BTU / LITRES_PER_US_GALLON, 0),
+  },
+  heatContentPerMass: {
+    si: scaled('MJ/kg', 1e6, 1),
+    us: scaled('Btu/lb', JOULES_PER_BTU / KILOGRAMS_PER_POUND, 0),
+  },
+};
+
+export function unitLabel(quantity: Quantity, system: UnitSystem): string {
+  return UNITS[quantity][system].label;
+}
+
+export function unitDecimals(quantity: Quantity, system: UnitSystem): number {
+  return UNITS[quantity][system].decimals;
+}
+
+/** SI value → number in the user's unit (unrounded). */
+export function toDisplay(quantity: Quantity, siValue: number, system: UnitSystem): number {
+  return UNITS[quantity][system].fromSi(siValue);
+}
+
+/** Number typed in the user's unit → SI value (unrounded). */
+export function fromDisplay(quantity: Quantity, displayValue: number, system: UnitSystem): number {
+  return UNITS[quantity][system].toSi(displayValue);
+}
+
+/** Rounds to the given decimals without the 1.005 → 1.00 surprise of toFixed on binary floats. */
+export function roundTo(value: number, decimals: number): number {
+  const factor = 10 ** decimals;
+  return Math.round((value + Number.EPSILON * Math.sign(value)) * factor) / factor;
+}
+
+/** The value an input shows for an SI number: rounded to the unit's decimals, trailing zeros dropped. */
+export function toInputString(
+  quantity: Quantity,
+  siValue: number | null | undefined,
+  system: UnitSystem,
+  extraDecimals = 0,
+): string {
+  if (siValue === null || siValue === undefined || !Number.isFinite(siValue)) return '';
+  return String(roundTo(toDisplay(quantity, siValue, system), unitDecimals(quantity, system) + extraDecimals));
+}
+
+export interface FormatOptions {
+  /** override the unit's decimals */
+  decimals?: number;
+  /** leave the unit symbol off */
+  withoutUnit?: boolean;
+}
+
+/** "9.14 m", "30.0 ft", "1,234,567 Btu/h" — grouping by the browser's locale. */
+export function formatQuantity(
+  quantity: Quantity,
+  siValue: number | null | undefined,
+  system: UnitSystem,
+  options: FormatOptions = {},
+): string {
+  if (siValue === null || siValue === undefined || !Number.isFinite(siValue)) return '—';
+  const decimals = options.decimals ?? unitDecimals(quantity, system);
+  const number = new Intl.NumberFormat('en-US', {
+    minimumFractionDigits: decimals,
+    maximumFractionDigits: decimals,
+  }).format(roundTo(toDisplay(quantity, siValue, system), decimals));
+  return options.withoutUnit ? number : `${number} ${unitLabel(quantity, system)}`;
+}
+
+/**
+ * An SI range [min, max] as the user's unit, narrowed inward to the shown decimals so that any
+ * value the user may type converts back inside the SI range.
+ */
+export function rangeInDisplay(
+  quantity: Quantity,
+  siRange: { min: number; max: number },
+  system: UnitSystem,
+  decimals = unitDecimals(quantity, system),
+): { min: number; max: number } {
+  const factor = 10 ** decimals;
+  const a = toDisplay(quantity, siRange.min, system);
+  const b = toDisplay(quantity, siRange.max, system);
+  // Strip float noise (23.000000000000004) before rounding inward.
+  const clean = (value: number) => Number(value.toPrecision(12));
+  return {
+    min: Math.ceil(clean(Math.min(a, b)) * factor) / factor,
+    max: Math.floor(clean(Math.max(a, b)) * factor) / factor,
+  };
+}
+
+/** Energy also shown as therms where fuel is billed that way (US natural gas). */
+export function joulesToTherms(joules: number): number {
+  return joules / JOULES_PER_THERM;
+}
+
+export function thermsToJoules(therms: number): number {
+  return therms * JOULES_PER_THERM;
+}
+
+export interface Units {
+  system: UnitSystem;
+  label: (quantity: Quantity) => string;
+  decimals: (quantity: Quantity) => number;
+  toDisplay: (quantity: Quantity, siValue: number) => number;
+  fromDisplay: (quantity: Quantity, displayValue: number) => number;
+  format: (quantity: Quantity, siValue: number | null | undefined, options?: FormatOptions) => string;
+  toInput: (quantity: Quantity, siValue: number | null | undefined) => string;
+  range: (quantity: Quantity, siRange: { min: number; max: number }) => { min: number; max: number };
+}
+
+export function unitsFor(system: UnitSystem): Units {
+  return {
+    system,
+    label: (quantity) => unitLabel(quantity, system),
+    decimals: (quantity) => unitDecimals(quantity, system),
+    toDisplay: (quantity, siValue) => toDisplay(quantity, siValue, system),
+    fromDisplay: (quantity, displayValue) => fromDisplay(quantity, displayValue, system),
+    format: (quantity, siValue, options) => formatQuantity(quantity, siValue, system, options),
+    toInput: (quantity, siValue) => toInputString(quantity, siValue, system),
+    range: (quantity, siRange) => rangeInDisplay(quantity, siRange, system),
+  };
+}
+
+/**
+ * The signed-in user's unit system. The app provides it from the current-user query, so this
+ * module depends on no feature.
+ */
+const UnitSystemContext = createContext<UnitSystem>('si');
+
+export function UnitSystemProvider({ system, children }: { system: UnitSystem; children: ReactNode }) {
+  return createElement(UnitSystemContext.Provider, { value: system }, children);
+}
+
+/** Conversions and formatting in the signed-in user's unit system. */
+export function useUnits(): Units {
+  const system = useContext(UnitSystemContext);
+  return useMemo(() => unitsFor(system), [system]);
+}

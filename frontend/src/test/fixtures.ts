@@ -1,0 +1,53 @@
+import type { House, ReferenceData } from '../api/types';
+
+/** Small reference tables shaped like GET /api/reference-data (labels only matter here). */
+export const referenceDataFixture: ReferenceData = {
+  coverings: {
+    title: 'Coverings',
+    description: 'test rows',
+    rows: [
+      { id: 'poly-double-inflated', label: 'Inflated double polyethylene', uWPerM2K: 4, source: 'test', confidence: 'memory' },
+      { id: 'glass-single', label: 'Single glass', uWPerM2K: 6.2, source: 'test', confidence: 'memory' },
+    ],
+  },
+  'air-leakage': {
+    title: 'Air leakage',
+    description: 'test rows',
+    rows: [{ id: 'new-tight', label: 'New, tight construction', airChangesPerHour: 0.75, source: 'test', confidence: 'memory' }],
+  },
+  curtains: {
+    title: 'Curtains',
+    description: 'test rows',
+    rows: [{ id: 'energy-screen', label: 'Energy screen', source: 'test', confidence: 'memory' }],
+  },
+  fuels: {
+    title: 'Fuels',
+    description: 'test rows',
+    rows: [{ id: 'natural-gas', label: 'Natural gas', source: 'test', confidence: 'derived' }],
+  },
+};
+
+export const houseFixture: House = {
+  id: 7,
+  farmId: 3,
+  name: 'Range A',
+  notes: null,
+  shape: 'gable',
+  spans: 1,
+  widthM: 9.144,
+  lengthM: 29.2608,
+  eaveHeightM: 2.4384,
+  ridgeHeightM: 4.2672,
+  coverings: { roof: 'poly-double-inflated', sidewalls: 'poly-double-inflated', endwalls: 'glass-single' },
+  coveringUOverridesWPerM2K: {},
+  airLeakageClassId: 'new-tight',
+  airChangesPerHourOverride: null,
+  perimeterInsulated: false,
+  curtainId: null,
+  heaters: [{ count: 2, ratedInputW: 73_267.77, efficiency: 0.8, fuelId: 'natural-gas' }],
+  exhaustFans: { count: 2, capacityEachM3PerS: 4.719474432 },
+  inletAreaM2: 2.4,
+  setpoints: { dayHeatingC: 18, nightHeatingC: 15.5, coolingC: 26 },
+  createdAt: '2026-11-01T00:00:00.000Z',
+  updatedAt: '2026-11-01T00:00:00.000Z',
+};
