@@ -1,6 +1,6 @@
 // Two projects: fast unit specs beside the code (engine included), and e2e specs that boot
 // the real app on a throwaway SQLite file.
-const tsJest = { '^.+\\.ts$': ['ts-jest', { tsconfig: '<rootDir>/tsconfig.json', isolatedModules: true }] };
+const tsJest = { '^.+\\.ts$': ['ts-jest', { tsconfig: '<rootDir>/tsconfig.json' }] };
 module.exports = {
   projects: [
     {
@@ -17,6 +17,7 @@ module.exports = {
       testEnvironment: 'node',
       rootDir: __dirname,
       roots: ['<rootDir>/test'],
+      setupFiles: ['<rootDir>/test/jest-setup.ts'],
       testMatch: ['**/*.e2e-spec.ts'],
       transform: tsJest,
       moduleFileExtensions: ['ts', 'js', 'json'],

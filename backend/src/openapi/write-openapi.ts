@@ -1,15 +1,17 @@
 import 'reflect-metadata';
 import { NestFactory } from '@nestjs/core';
-import { writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { rmSync, writeFileSync } from 'node:fs';
 import { join, resolve } from 'node:path';
-import { AppModule } from '../app.module';
 import { buildOpenApiDocument, configureApp } from '../app.setup';
 
 /** Writes backend/openapi.json, the contract the frontend's types are generated from. */
 async function main(): Promise<void> {
-  process.env.DATABASE_FILE ??= join(require('node:os').tmpdir(), `thermbay-openapi-${process.pid}.sqlite`);
+  process.env.DATABASE_FILE = join(tmpdir(), `thermbay-openapi-${process.pid}.sqlite`);
   process.env.DEMO_SEED = 'false';
-  process.env.NODE_ENV ??= 'test';
+  process.env.NODE_ENV = 'test';
+  // Loaded only now: the app module reads the environment when it is first imported.
+  const { AppModule } = await import('../app.module');
   const app = await NestFactory.create(AppModule, { logger: false });
   configureApp(app);
   await app.init();
@@ -17,6 +19,7 @@ async function main(): Promise<void> {
   const target = resolve(__dirname, '..', '..', 'openapi.json');
   writeFileSync(target, `${JSON.stringify(document, null, 2)}\n`);
   await app.close();
+  rmSync(process.env.DATABASE_FILE, { force: true });
   console.log(`wrote ${target}`);
 }
 

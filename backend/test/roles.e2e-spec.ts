@@ -1,0 +1,149 @@
+import { bearer, createTestApp, signIn, type TestApp } from './test-app';
+
+/**
+ * The role × route matrix: every farm role, a member of another farm and the site admin
+ * (who is not a member of the demo farm) against every farm and house route.
+ */
+type Who = 'owner' | 'grower' | 'adviser' | 'viewer' | 'outsider' | 'admin';
+const WHO: Who[] = ['owner', 'grower', 'adviser', 'viewer', 'outsider', 'admin'];
+
+const houseBody = {
+  name: 'Matrix house',
+  shape: 'gable',
+  spans: 1,
+  widthM: 9,
+  lengthM: 30,
+  eaveHeightM: 2.5,
+  ridgeHeightM: 4.5,
+  coverings: { roof: 'poly-double-inflated', sidewalls: 'poly-double-inflated', endwalls: 'polycarbonate-twin-8mm' },
+  airLeakageClassId: 'new-film-double',
+  perimeterInsulated: false,
+  heaters: [{ count: 2, ratedInputW: 50000, efficiency: 0.8, fuelId: 'propane' }],
+  exhaustFans: { count: 2, capacityEachM3PerS: 5 },
+  inletAreaM2: 3,
+  setpoints: { dayHeatingC: 18, nightHeatingC: 15, coolingC: 25 },
+};
+
+describe('roles × routes (e2e)', () => {
+  let t: TestApp;
+  const token: Record<Who, string> = {} as Record<Who, string>;
+  let farmId: number;
+  let houseId: number;
+
+  beforeAll(async () => {
+    t = await createTestApp();
+    for (const who of ['owner', 'grower', 'adviser', 'admin'] as const) token[who] = await signIn(t, `${who}@example.com`);
+    for (const who of ['viewer', 'outsider'] as const) {
+      const res = await t.http.post('/api/auth/register').send({ email: `${who}@example.org`, password: 'password-123', name: who }).expect(201);
+      token[who] = res.body.accessToken;
+    }
+    const farms = await t.http.get('/api/farms').set(bearer(token.owner)).expect(200);
+    farmId = farms.body[0].id;
+    await t.http.post(`/api/farms/${farmId}/members`).set(bearer(token.owner)).send({ email: 'viewer@example.org', role: 'viewer' }).expect(201);
+    // the outsider is a member (owner) of a farm of their own
+    await t.http.post('/api/farms').set(bearer(token.outsider)).send({ name: 'Elsewhere', latitudeDeg: 40, longitudeDeg: -80, elevationM: 200, timeZone: 'America/New_York' }).expect(201);
+    const houses = await t.http.get(`/api/farms/${farmId}/houses`).set(bearer(token.owner)).expect(200);
+    houseId = houses.body[0].id;
+  });
+  afterAll(() => t.close());
+
+  const newHouse = async () =>
+    (await t.http.post(`/api/farms/${farmId}/houses`).set(bearer(token.owner)).send(houseBody).expect(201)).body.id as number;
+
+  const matrix: Array<{ route: string; expected: Record<Who, number>; call: (who: Who) => Promise<{ status: number }> }> = [
+    {
+      route: 'GET /farms/:id',
+      expected: { owner: 200, grower: 200, adviser: 200, viewer: 200, outsider: 404, admin: 404 },
+      call: (who) => t.http.get(`/api/farms/${farmId}`).set(bearer(token[who])),
+    },
+    {
+      route: 'PATCH /farms/:id',
+      expected: { owner: 200, grower: 403, adviser: 403, viewer: 403, outsider: 404, admin: 404 },
+      call: (who) => t.http.patch(`/api/farms/${farmId}`).set(bearer(token[who])).send({ elevationM: 314 }),
+    },
+    {
+      route: 'GET /farms/:id/members',
+      expected: { owner: 200, grower: 200, adviser: 200, viewer: 200, outsider: 404, admin: 404 },
+      call: (who) => t.http.get(`/api/farms/${farmId}/members`).set(bearer(token[who])),
+    },
+    {
+      route: 'GET /farms/:id/houses',
+      expected: { owner: 200, grower: 200, adviser: 200, viewer: 200, outsider: 404, admin: 404 },
+      call: (who) => t.http.get(`/api/farms/${farmId}/houses`).set(bearer(token[who])),
+    },
+    {
+      route: 'POST /farms/:id/houses',
+      expected: { owner: 201, grower: 201, adviser: 403, viewer: 403, outsider: 404, admin: 404 },
+      call: (who) => t.http.post(`/api/farms/${farmId}/houses`).set(bearer(token[who])).send(houseBody),
+    },
+    {
+      route: 'GET /houses/:id',
+      expected: { owner: 200, grower: 200, adviser: 200, viewer: 200, outsider: 404, admin: 404 },
+      call: (who) => t.http.get(`/api/houses/${houseId}`).set(bearer(token[who])),
+    },
+    {
+      route: 'PATCH /houses/:id',
+      expected: { owner: 200, grower: 200, adviser: 403, viewer: 403, outsider: 404, admin: 404 },
+      call: (who) => t.http.patch(`/api/houses/${houseId}`).set(bearer(token[who])).send({ notes: `edited by ${who}` }),
+    },
+    {
+      route: 'DELETE /houses/:id',
+      expected: { owner: 204, grower: 204, adviser: 403, viewer: 403, outsider: 404, admin: 404 },
+      call: async (who) => t.http.delete(`/api/houses/${await newHouse()}`).set(bearer(token[who])),
+    },
+    {
+      route: 'POST /farms/:id/members',
+      expected: { owner: 201, grower: 403, adviser: 403, viewer: 403, outsider: 404, admin: 404 },
+      call: async (who) => {
+        const email = `invitee-${who}@example.org`;
+        await t.http.post('/api/auth/register').send({ email, password: 'password-123', name: email });
+        return t.http.post(`/api/farms/${farmId}/members`).set(bearer(token[who])).send({ email, role: 'viewer' });
+      },
+    },
+    {
+      route: 'GET /users (site admin only)',
+      expected: { owner: 403, grower: 403, adviser: 403, viewer: 403, outsider: 403, admin: 200 },
+      call: (who) => t.http.get('/api/users').set(bearer(token[who])),
+    },
+  ];
+
+  for (const row of matrix) {
+    for (const who of WHO) {
+      it(`${row.route} as ${who} → ${row.expected[who]}`, async () => {
+        const res = await row.call(who);
+        expect(res.status).toBe(row.expected[who]);
+      });
+    }
+  }
+
+  it('never leaks another farm: the outsider sees only their own farm in the list', async () => {
+    const res = await t.http.get('/api/farms').set(bearer(token.outsider)).expect(200);
+    expect(res.body.map((f: { name: string }) => f.name)).toEqual(['Elsewhere']);
+  });
+
+  it('gives each farm the permission list of the caller’s role, from the one map', async () => {
+    const map = (await t.http.get('/api/permissions').set(bearer(token.viewer)).expect(200)).body.roles;
+    const viewerFarm = (await t.http.get(`/api/farms/${farmId}`).set(bearer(token.viewer)).expect(200)).body;
+    expect(viewerFarm.myRole).toBe('viewer');
+    expect(viewerFarm.permissions).toEqual(map.viewer);
+    expect(map.grower).toContain('house:write');
+    expect(map.adviser).not.toContain('house:write');
+    expect(map.adviser).toContain('report:write');
+  });
+
+  it('only the owner deletes a farm, and its houses go with it', async () => {
+    const farm = (await t.http.post('/api/farms').set(bearer(token.grower)).send({ name: 'Temporary', latitudeDeg: 45, longitudeDeg: -94, elevationM: 300, timeZone: 'America/Chicago' }).expect(201)).body;
+    expect(farm.myRole).toBe('owner');
+    const house = (await t.http.post(`/api/farms/${farm.id}/houses`).set(bearer(token.grower)).send(houseBody).expect(201)).body;
+    await t.http.delete(`/api/farms/${farm.id}`).set(bearer(token.viewer)).expect(404);
+    await t.http.delete(`/api/farms/${farm.id}`).set(bearer(token.grower)).expect(204);
+    await t.http.get(`/api/houses/${house.id}`).set(bearer(token.grower)).expect(404);
+  });
+
+  it('keeps at least one owner on a farm', async () => {
+    const members = (await t.http.get(`/api/farms/${farmId}/members`).set(bearer(token.owner)).expect(200)).body;
+    const owner = members.find((m: { role: string }) => m.role === 'owner');
+    const res = await t.http.patch(`/api/farms/${farmId}/members/${owner.userId}`).set(bearer(token.owner)).send({ role: 'viewer' }).expect(400);
+    expect(res.body.message).toMatch(/at least one owner/);
+  });
+});
