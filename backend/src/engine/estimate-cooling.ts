@@ -244,6 +244,16 @@ export function estimateCooling(input: CoolingInput, ref: ReferenceData): Coolin
     overridden: false,
   });
   sourced('airSpecificHeat', 'Specific heat of air', cp.value, 'J/(kg·K)', cp.row);
+  assumptions.push({
+    key: 'designDayModel',
+    label: 'Design-day method',
+    value:
+      'hours are local apparent solar time (hour 12 = solar noon); clear sky; steady state each hour with no heat storage in floor, benches or crop; no shade cloth; heaters not modelled (night temperatures free-floating); fans staged continuously; fan fraction and "setpoint held" describe the house with its pads when pads are entered',
+    unit: '',
+    source: 'Thermbay method; sun positions from suncalc 2.0.2, irradiance and temperature profile as listed',
+    confidence: 'derived',
+    overridden: false,
+  });
   if (padType) {
     sourced('padFaceVelocityMPerS', `Pad design face velocity (${padType.label ?? padType.id})`, padType.faceVelocityMPerS, 'm/s', padType);
     sourced('padSaturationEfficiency', `Pad saturation efficiency (${padType.label ?? padType.id})`, padType.saturationEfficiency, '–', padType);
@@ -254,7 +264,7 @@ export function estimateCooling(input: CoolingInput, ref: ReferenceData): Coolin
   sourced('firstStageFraction', 'Share of fans in the first stage', stagingRow.firstStageFraction as number, '–', stagingRow);
   sourced('stageStepK', 'Temperature step between fan stages', stagingRow.stageStepK as number, 'K', stagingRow);
   sourced('winterVentilationFraction', 'Winter humidity ventilation as a share of the summer rate', winterFraction.value, '–', winterFraction.row);
-  sourced('winterDesignC', 'Outdoor temperature for the winter ventilation heat cost', winterDesignC, '°C', winterDefault.row, conditions.winterDesignC !== undefined);
+  sourced('winterDesignC', 'Outdoor temperature for the winter ventilation heat cost (house air at the night heating setpoint)', winterDesignC, '°C', winterDefault.row, conditions.winterDesignC !== undefined);
 
   // --- cautions
   const cautions = [...STANDARD_CAUTIONS];
