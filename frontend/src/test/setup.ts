@@ -10,5 +10,5 @@ vi.mock('react-chartjs-2', () => ({
 
 afterEach(() => {
   cleanup();
-  localStorage.clear();
+  globalThis.localStorage?.clear();
 });

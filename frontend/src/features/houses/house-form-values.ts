@@ -101,13 +101,15 @@ export function houseToFormValues(house: HouseInput, units: Units): HouseFormVal
     ridgeHeightM: t('length', house.ridgeHeightM),
     coverings: { ...house.coverings },
     coveringUOverridesWPerM2K: {
-      roof: t('uValue', house.coveringUOverridesWPerM2K.roof),
-      sidewalls: t('uValue', house.coveringUOverridesWPerM2K.sidewalls),
-      endwalls: t('uValue', house.coveringUOverridesWPerM2K.endwalls),
+      roof: t('uValue', house.coveringUOverridesWPerM2K?.roof),
+      sidewalls: t('uValue', house.coveringUOverridesWPerM2K?.sidewalls),
+      endwalls: t('uValue', house.coveringUOverridesWPerM2K?.endwalls),
     },
     airLeakageClassId: house.airLeakageClassId,
     airChangesPerHourOverride:
-      house.airChangesPerHourOverride === null ? '' : String(house.airChangesPerHourOverride),
+      house.airChangesPerHourOverride === null || house.airChangesPerHourOverride === undefined
+        ? ''
+        : String(house.airChangesPerHourOverride),
     perimeterInsulated: house.perimeterInsulated,
     curtainId: house.curtainId ?? '',
     heaters: house.heaters.map((heater) => ({
@@ -156,7 +158,7 @@ export function formValuesToHouseInput(
       'uValue',
       values.coveringUOverridesWPerM2K[group],
       initialValues.coveringUOverridesWPerM2K[group],
-      original.coveringUOverridesWPerM2K[group],
+      original.coveringUOverridesWPerM2K?.[group],
     );
     if (value !== undefined) uOverrides[group] = value;
   }

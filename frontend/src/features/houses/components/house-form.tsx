@@ -59,7 +59,8 @@ function optionsFrom(
 ): SelectOption[] {
   return referenceRows(referenceData, table).map((row) => {
     const extra = describe?.(row);
-    return { value: row.id, label: extra ? `${row.label} (${extra})` : row.label };
+    const label = row.label ?? row.id;
+    return { value: row.id, label: extra ? `${label} (${extra})` : label };
   });
 }
 
