@@ -1,0 +1,57 @@
+import { EngineInputError } from '../errors';
+import type { HouseSpec } from '../house.types';
+import { referenceRow, type ReferenceData, type ReferenceRow } from '../reference-data.types';
+import { computeHouseGeometry, type HouseGeometry } from '../geometry/house-geometry';
+import { heatLossCoefficients } from '../heating/heat-loss';
+import { dryAirDensityKgPerM3, standardAtmosphericPressurePa } from '../psychrometrics';
+
+export interface CoveringLightRow extends ReferenceRow {
+  lightTransmittance: number;
+  lightSource?: string;
+  lightConfidence?: ReferenceRow['confidence'];
+}
+
+/** What the season needs from a house: its heat-loss coefficients by day and night and its roof's light. */
+export interface HouseThermal {
+  geometry: HouseGeometry;
+  /** UA with the curtain open (or no curtain), W/K */
+  uaOpenWPerK: number;
+  /** UA with the curtain drawn (equal to uaOpenWPerK without a curtain), W/K */
+  uaClosedWPerK: number;
+  /** air density used for infiltration, kg/m³ */
+  airDensityKgPerM3: number;
+  roofCovering: CoveringLightRow;
+}
+
+export function coveringLightRow(ref: ReferenceData, coveringId: string, field: string): CoveringLightRow {
+  const row = referenceRow<CoveringLightRow>(ref, 'coverings', coveringId);
+  if (!row) throw new EngineInputError(field, `unknown covering '${coveringId}'`);
+  if (typeof row.lightTransmittance !== 'number') {
+    throw new Error(`reference-data/coverings.json row ${coveringId} has no lightTransmittance`);
+  }
+  return row;
+}
+
+/**
+ * Heat-loss coefficients of a house at a site's elevation. Infiltration uses the density of dry
+ * air at the night setpoint and the standard-atmosphere pressure of the elevation: the season
+ * spans many temperatures and humidities, and the difference to moist air is about 1 %.
+ */
+export function houseThermal(house: HouseSpec, elevationM: number, ref: ReferenceData): HouseThermal {
+  const geometry = computeHouseGeometry(house);
+  const airDensityKgPerM3 = dryAirDensityKgPerM3(
+    house.setpoints.nightHeatingC,
+    standardAtmosphericPressurePa(elevationM),
+  );
+  const open = heatLossCoefficients(house, geometry, ref, { curtainClosed: false, airDensityKgPerM3 });
+  const closed = house.curtainId
+    ? heatLossCoefficients(house, geometry, ref, { curtainClosed: true, airDensityKgPerM3 })
+    : open;
+  return {
+    geometry,
+    uaOpenWPerK: open.totalWPerK,
+    uaClosedWPerK: closed.totalWPerK,
+    airDensityKgPerM3,
+    roofCovering: coveringLightRow(ref, house.coverings.roof, 'house.coverings.roof'),
+  };
+}
