@@ -96,6 +96,30 @@ describe('sizeHeaters', () => {
     expect(result.fuelFired).toBe(false);
   });
 
+  it('with mixed units takes the largest one out (hand calculation: UA 2000 W/K, 15 °C inside)', () => {
+    // 2 × 30 kW input at 80 % (24 kW out each) + 1 × 60 kW at 90 % (54 kW out): 102 kW output
+    // all running: 15 − 102000/2000 = −36 °C; largest out (48 kW): −9 °C; largest alone (54 kW): −12 °C
+    const sizing = sizeHeaters(
+      {
+        designHeatLossW: 40_000,
+        totalConductanceWPerK: 2000,
+        insideC: 15,
+        heaters: [propane(2, 30_000), { count: 1, ratedInputW: 60_000, efficiency: 0.9, fuelId: 'natural-gas' }],
+      },
+      ref,
+    );
+    expect(sizing.result.unitCount).toBe(3);
+    expect(sizing.result.installedOutputW).toBeCloseTo(102_000, 6);
+    expect(sizing.result.lowestHeldOutdoorC).toBeCloseTo(-36, 9);
+    expect(sizing.result.largestUnitOutputW).toBeCloseTo(54_000, 6);
+    expect(sizing.result.holdsWithLargestUnitOutC).toBeCloseTo(-9, 9);
+    expect(sizing.oneLargestUnitAloneHoldsC).toBeCloseTo(-12, 9);
+    expect(sizing.result.splitAdvice).toContain('-9.0 °C');
+    expect(sizing.result.splitAdvice).toContain('-12.0 °C');
+    // required input at the installed input-weighted efficiency: 102 kW out / 120 kW in = 0.85
+    expect(sizing.efficiencyForRequiredInput).toBeCloseTo(0.85, 12);
+  });
+
   it.each([
     ['house.heaters.0.efficiency', [propane(1, 50_000, 1.5)]],
     ['house.heaters.1.fuelId', [propane(1, 50_000), { count: 1, ratedInputW: 50_000, efficiency: 0.8, fuelId: 'coal-tar' }]],

@@ -138,6 +138,10 @@ export function sizeHeaters(input: HeaterSizingInput, ref: ReferenceData): Heate
       `A single unit: if it fails the house has no heat. It alone holds ${degC(input.insideC)} inside down to ` +
       `${degC(oneLargestUnitAloneHoldsC as number)} outside. Use at least ${minimumUnitCount} units (for example ` +
       `${minimumUnitCount} × ${kW(splitOutputW)} output) so one failure does not leave the crop unheated.`;
+  } else if (unitCount === 2) {
+    splitAdvice =
+      `2 units. With one out of service (the larger, ${kW(largestUnitOutputW)} output, if they differ) the other holds ` +
+      `${degC(input.insideC)} inside down to ${degC(holdsWithLargestUnitOutC as number)} outside.`;
   } else {
     splitAdvice =
       `${unitCount} units. With the largest (${kW(largestUnitOutputW)} output) out of service the rest hold ` +
