@@ -5,6 +5,7 @@ import { ServeStaticModule } from '@nestjs/serve-static';
 import { existsSync } from 'node:fs';
 import { resolve } from 'node:path';
 import { AuthModule } from './auth/auth.module';
+import { ClimateModule } from './climate/climate.module';
 import { JwtAuthGuard } from './common/guards/jwt-auth.guard';
 import { SiteRolesGuard } from './common/guards/site-roles.guard';
 import { validateEnvironment } from './config/environment';
@@ -34,6 +35,7 @@ const staticFrontend = existsSync(frontendDist())
     AuthModule,
     FarmsModule,
     HousesModule,
+    ClimateModule,
     SeedModule,
     ...staticFrontend,
   ],

@@ -68,3 +68,40 @@ describe('houses (e2e)', () => {
     expect(doc.components.schemas.HouseDto).toBeDefined();
   });
 });
+
+describe('farm climate (e2e)', () => {
+  let t: TestApp;
+  let grower: string;
+  let farmId: number;
+
+  beforeAll(async () => {
+    t = await createTestApp();
+    grower = await signIn(t, 'grower@example.com');
+    farmId = (await t.http.get('/api/farms').set(bearer(grower)).expect(200)).body[0].id;
+  });
+  afterAll(() => t.close());
+
+  it('has the demo climate with 12 months', async () => {
+    const res = (await t.http.get(`/api/farms/${farmId}/climate`).set(bearer(grower)).expect(200)).body;
+    expect(res.climate.monthly).toHaveLength(12);
+    expect(res.climate.winterDesignC).toBeLessThan(-20);
+  });
+
+  it('saves a new climate and refuses one whose minimum is above its maximum, naming the month', async () => {
+    const current = (await t.http.get(`/api/farms/${farmId}/climate`).set(bearer(grower)).expect(200)).body.climate;
+    const warmer = { ...current, winterDesignC: -25 };
+    await t.http.put(`/api/farms/${farmId}/climate`).set(bearer(grower)).send(warmer).expect(200);
+    expect((await t.http.get(`/api/farms/${farmId}/climate`).set(bearer(grower)).expect(200)).body.climate.winterDesignC).toBe(-25);
+    const broken = { ...current, monthly: current.monthly.map((m: { month: number }) => (m.month === 3 ? { ...m, meanDailyMinC: 10, meanDailyMaxC: 2 } : m)) };
+    const res = await t.http.put(`/api/farms/${farmId}/climate`).set(bearer(grower)).send(broken).expect(422);
+    expect(res.body.field).toBe('climate.monthly[2].meanDailyMinC');
+    const elevenMonths = { ...current, monthly: current.monthly.slice(1) };
+    await t.http.put(`/api/farms/${farmId}/climate`).set(bearer(grower)).send(elevenMonths).expect(400);
+  });
+
+  it('lets the adviser read but not write the climate', async () => {
+    const adviser = await signIn(t, 'adviser@example.com');
+    const current = (await t.http.get(`/api/farms/${farmId}/climate`).set(bearer(adviser)).expect(200)).body.climate;
+    await t.http.put(`/api/farms/${farmId}/climate`).set(bearer(adviser)).send(current).expect(403);
+  });
+});

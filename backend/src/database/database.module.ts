@@ -5,13 +5,14 @@ import { mkdirSync } from 'node:fs';
 import { dirname, resolve } from 'node:path';
 import { Sequelize } from 'sequelize-typescript';
 import type { Environment } from '../config/environment';
+import { FarmClimate } from '../climate/models/farm-climate.model';
 import { Farm } from '../farms/models/farm.model';
 import { Membership } from '../farms/models/membership.model';
 import { House } from '../houses/models/house.model';
 import { User } from '../users/models/user.model';
 import { createMigrator, prepareSqlite } from './migrator';
 
-export const MODELS = [User, Farm, Membership, House];
+export const MODELS = [User, Farm, Membership, House, FarmClimate];
 
 /** Brings the schema up to date before anything else touches the database. */
 @Injectable()

@@ -31,6 +31,23 @@ export const DEMO_FARM = {
   timeZone: 'America/Chicago',
 };
 
+/**
+ * Demo climate for the invented farm: approximate central-Minnesota values recalled from memory
+ * for the demo only (not a source for anything else). Replace with the farm's own national
+ * climate normals and design temperatures in real use.
+ */
+export const DEMO_CLIMATE = {
+  winterDesignC: -29,
+  summerDesignC: 31,
+  summerDesignWetBulbC: 22,
+  summerDailyRangeK: 12,
+  sourceNote: 'Invented demo values, roughly like central Minnesota normals (recalled, not from a table).',
+  monthly: [
+    [-18, -6], [-16, -3], [-9, 3], [-1, 12], [6, 20], [12, 25],
+    [15, 28], [13, 26], [8, 21], [1, 13], [-7, 3], [-15, -5],
+  ].map(([meanDailyMinC, meanDailyMaxC], index) => ({ month: index + 1, meanDailyMinC, meanDailyMaxC })),
+};
+
 const FT = 0.3048;
 const BTU_PER_H_IN_W = 0.29307107;
 const CFM_IN_M3_PER_S = 0.00047194745;

@@ -9,7 +9,8 @@ import { Farm } from '../farms/models/farm.model';
 import { Membership } from '../farms/models/membership.model';
 import { House } from '../houses/models/house.model';
 import { User } from '../users/models/user.model';
-import { DEMO_ACCOUNTS, DEMO_FARM, DEMO_HOUSES, DEMO_PASSWORD } from './demo-scenario';
+import { FarmClimate } from '../climate/models/farm-climate.model';
+import { DEMO_ACCOUNTS, DEMO_CLIMATE, DEMO_FARM, DEMO_HOUSES, DEMO_PASSWORD } from './demo-scenario';
 
 /** Seeds the invented demo scenario once, on a database that has no demo accounts yet. */
 @Injectable()
@@ -32,6 +33,7 @@ export class DemoSeedService implements OnApplicationBootstrap {
     const passwordHash = await bcrypt.hash(DEMO_PASSWORD, BCRYPT_ROUNDS);
     await this.sequelize.transaction(async (transaction) => {
       const farm = await Farm.create({ ...DEMO_FARM }, { transaction });
+      await FarmClimate.create({ ...DEMO_CLIMATE, farmId: farm.id }, { transaction });
       for (const account of DEMO_ACCOUNTS) {
         const user = await User.create(
           { email: account.email, name: account.name, passwordHash, siteRole: account.siteRole },

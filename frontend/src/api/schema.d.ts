@@ -276,6 +276,22 @@ export interface paths {
         patch: operations["HousesController_update"];
         trace?: never;
     };
+    "/api/farms/{farmId}/climate": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["ClimateController_get"];
+        put: operations["ClimateController_put"];
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
 }
 export type webhooks = Record<string, never>;
 export interface components {
@@ -526,6 +542,34 @@ export interface components {
             /** @example House 3 */
             name?: string;
             notes?: string | null;
+        };
+        MonthlyClimateDto: {
+            month: number;
+            /** @description mean of the daily minimum temperatures, °C */
+            meanDailyMinC: number;
+            /** @description mean of the daily maximum temperatures, °C */
+            meanDailyMaxC: number;
+            /** @description actual ÷ clear-sky solar over the month; default from reference data */
+            clearness?: number | null;
+        };
+        SiteClimateDto: {
+            /** @description heating design dry bulb (99 % or 99.6 %), °C */
+            winterDesignC: number;
+            /** @description cooling design dry bulb (1 %), °C */
+            summerDesignC: number;
+            /** @description wet bulb coincident with the summer design dry bulb, °C */
+            summerDesignWetBulbC: number;
+            /** @description mean daily range on the summer design day, K */
+            summerDailyRangeK: number;
+            /** @description exactly 12 rows, one per month */
+            monthly: components["schemas"]["MonthlyClimateDto"][];
+            /** @description where the numbers came from (e.g. national climate normals, station name) */
+            sourceNote?: string | null;
+        };
+        FarmClimateDto: {
+            farmId: number;
+            /** @description null until someone enters the climate */
+            climate: components["schemas"]["SiteClimateDto"] | null;
         };
     };
     responses: never;
@@ -1117,6 +1161,59 @@ export interface operations {
                 content: {
                     "application/json": components["schemas"]["HouseDto"];
                 };
+            };
+        };
+    };
+    ClimateController_get: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                farmId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["FarmClimateDto"];
+                };
+            };
+        };
+    };
+    ClimateController_put: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                farmId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["SiteClimateDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["FarmClimateDto"];
+                };
+            };
+            /** @description physically impossible climate (e.g. minimum above maximum), field named */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
             };
         };
     };

@@ -1,7 +1,11 @@
 import * as initialSchema from './0001-initial-schema';
+import * as farmClimates from './0002-farm-climates';
 
 /**
  * Every schema change, in order. Add a file `NNNN-what-it-does.ts` exporting up/down and list it
  * here; migrations already applied to a database are recorded in its `migrations` table.
  */
-export const MIGRATIONS = [{ name: '0001-initial-schema', ...initialSchema }];
+export const MIGRATIONS = [
+  { name: '0001-initial-schema', ...initialSchema },
+  { name: '0002-farm-climates', ...farmClimates },
+];

@@ -1,0 +1,25 @@
+import { Body, Controller, Get, Param, ParseIntPipe, Put } from '@nestjs/common';
+import { ApiBearerAuth, ApiOkResponse, ApiTags, ApiUnprocessableEntityResponse } from '@nestjs/swagger';
+import { CurrentUser, type AuthenticatedUser } from '../common/decorators/current-user.decorator';
+import { ClimateService } from './climate.service';
+import { FarmClimateDto, SiteClimateDto } from './dto/climate.dto';
+
+@ApiTags('climate')
+@ApiBearerAuth()
+@Controller('farms/:farmId/climate')
+export class ClimateController {
+  constructor(private readonly climate: ClimateService) {}
+
+  @Get()
+  @ApiOkResponse({ type: FarmClimateDto })
+  get(@CurrentUser() me: AuthenticatedUser, @Param('farmId', ParseIntPipe) farmId: number): Promise<FarmClimateDto> {
+    return this.climate.get(me, farmId);
+  }
+
+  @Put()
+  @ApiOkResponse({ type: FarmClimateDto })
+  @ApiUnprocessableEntityResponse({ description: 'physically impossible climate (e.g. minimum above maximum), field named' })
+  put(@CurrentUser() me: AuthenticatedUser, @Param('farmId', ParseIntPipe) farmId: number, @Body() body: SiteClimateDto): Promise<FarmClimateDto> {
+    return this.climate.put(me, farmId, body);
+  }
+}
