@@ -1,4 +1,5 @@
 import {
+  Box,
   Checkbox,
   FormControlLabel,
   FormHelperText,
@@ -49,13 +50,36 @@ export function FormTextField({ name, helperText, ...rest }: BaseProps) {
 }
 
 /** A number typed in the user's unit; `unit` is shown after the value. */
-export function FormNumberField({ name, unit, helperText, ...rest }: BaseProps & { unit?: string }) {
+/** Present for screen readers, invisible on screen (the unit is already shown after the value). */
+const visuallyHidden = {
+  position: 'absolute',
+  width: 1,
+  height: 1,
+  overflow: 'hidden',
+  clip: 'rect(0 0 0 0)',
+  whiteSpace: 'nowrap',
+} as const;
+
+export function FormNumberField({ name, unit, helperText, label, ...rest }: BaseProps & { unit?: string }) {
   const [field] = useField<string>(name);
   const error = useFieldError(name);
   const readOnly = useContext(FormReadOnlyContext);
   return (
     <TextField
       {...rest}
+      // The unit joins the accessible name ("Width of one span (ft)") so it is announced too.
+      label={
+        unit ? (
+          <>
+            {label}
+            <Box component="span" sx={visuallyHidden}>
+              {` (${unit})`}
+            </Box>
+          </>
+        ) : (
+          label
+        )
+      }
       disabled={rest.disabled || readOnly}
       id={rest.id ?? `field-${name}`}
       name={field.name}
@@ -68,6 +92,8 @@ export function FormNumberField({ name, unit, helperText, ...rest }: BaseProps &
         ...rest.slotProps,
         htmlInput: { inputMode: 'decimal', ...(rest.slotProps?.htmlInput as object | undefined) },
         input: unit ? { endAdornment: <InputAdornment position="end">{unit}</InputAdornment> } : undefined,
+        // A resting label would run under the unit in an empty field: keep it above.
+        inputLabel: unit ? { shrink: true } : undefined,
       }}
     />
   );
@@ -80,6 +106,7 @@ export interface SelectOption {
 
 export function FormSelectField({ name, options, helperText, ...rest }: BaseProps & { options: SelectOption[] }) {
   const [field] = useField<string>(name);
+  const hasEmptyOption = options.some((option) => option.value === '');
   const error = useFieldError(name);
   const readOnly = useContext(FormReadOnlyContext);
   return (
@@ -87,6 +114,10 @@ export function FormSelectField({ name, options, helperText, ...rest }: BaseProp
       {...rest}
       disabled={rest.disabled || readOnly}
       select
+      // An option with the value '' (e.g. "No curtain") is shown, not treated as empty.
+      slotProps={
+        hasEmptyOption ? { select: { displayEmpty: true }, inputLabel: { shrink: true } } : rest.slotProps
+      }
       id={rest.id ?? `field-${name}`}
       name={field.name}
       value={field.value ?? ''}
