@@ -36,6 +36,9 @@ describe('production calendar', () => {
     expect(delayed[1].startMonthDay).toBe('10-29');
     expect(delayed[0]).toBe(calendar[0]);
     expect(shiftMonthDay('12-25', 10)).toBe('01-04');
+    // a delay longer than the period leaves it unheated rather than wrapping round the year
+    const short = [{ startMonthDay: '10-15', endMonthDay: '10-20', mode: 'heated' as const }];
+    expect(delayFirstHeatedPeriod(short, { month: 10, day: 1 }, 14)[0].mode).toBe('empty');
   });
 
   it('names malformed periods', () => {

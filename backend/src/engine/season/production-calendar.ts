@@ -137,9 +137,15 @@ export function delayFirstHeatedPeriod(calendar: ProductionCalendar, seasonStart
     }
   });
   if (chosen < 0) return calendar;
-  return calendar.map((period, index) =>
-    index === chosen ? { ...period, startMonthDay: shiftMonthDay(period.startMonthDay, days) } : period,
-  );
+  return calendar.map((period, index) => {
+    if (index !== chosen) return period;
+    const start = dayOfLeapYear(parseMonthDay(period.startMonthDay, `calendar[${index}].startMonthDay`));
+    const end = dayOfLeapYear(parseMonthDay(period.endMonthDay, `calendar[${index}].endMonthDay`));
+    const lengthDays = ((end - start + 366) % 366) + 1;
+    // Delayed past its own end, the period is not heated at all.
+    if (days >= lengthDays) return { ...period, mode: 'empty' as const };
+    return { ...period, startMonthDay: shiftMonthDay(period.startMonthDay, days) };
+  });
 }
 
 function dayOfLeapYear(monthDay: MonthDay): number {
