@@ -10,6 +10,7 @@ import { JwtAuthGuard } from './common/guards/jwt-auth.guard';
 import { SiteRolesGuard } from './common/guards/site-roles.guard';
 import { validateEnvironment } from './config/environment';
 import { DatabaseModule } from './database/database.module';
+import { EstimatesModule } from './estimates/estimates.module';
 import { FarmsModule } from './farms/farms.module';
 import { HealthController } from './health/health.controller';
 import { HousesModule } from './houses/houses.module';
@@ -36,6 +37,7 @@ const staticFrontend = existsSync(frontendDist())
     FarmsModule,
     HousesModule,
     ClimateModule,
+    EstimatesModule,
     SeedModule,
     ...staticFrontend,
   ],

@@ -92,6 +92,16 @@ describe('roles × routes (e2e)', () => {
       call: async (who) => t.http.delete(`/api/houses/${await newHouse()}`).set(bearer(token[who])),
     },
     {
+      route: 'POST /houses/:id/estimate',
+      expected: { owner: 200, grower: 200, adviser: 200, viewer: 403, outsider: 404, admin: 404 },
+      call: (who) => t.http.post(`/api/houses/${houseId}/estimate`).set(bearer(token[who])).send({}),
+    },
+    {
+      route: 'POST /houses/:id/cooling',
+      expected: { owner: 200, grower: 200, adviser: 200, viewer: 403, outsider: 404, admin: 404 },
+      call: (who) => t.http.post(`/api/houses/${houseId}/cooling`).set(bearer(token[who])).send({}),
+    },
+    {
       route: 'POST /farms/:id/members',
       expected: { owner: 201, grower: 403, adviser: 403, viewer: 403, outsider: 404, admin: 404 },
       call: async (who) => {

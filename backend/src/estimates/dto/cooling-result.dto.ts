@@ -1,0 +1,133 @@
+import { ApiProperty } from '@nestjs/swagger';
+import type { Confidence } from '../../engine/reference-data.types';
+import { CONFIDENCE_MARKS } from '../../reference-data/load-reference-data';
+import { CoolingConditionsDto, CoolingSiteDto } from './cooling-request.dto';
+
+/*
+ * The engine's CoolingEstimate, described class by class for the OpenAPI document so the
+ * frontend's generated types match what the engine returns. Property names are the engine's.
+ */
+
+export class AirExchangeDto {
+  @ApiProperty({ description: 'all installed fans together, m³/s' }) installedFlowM3PerS: number;
+  @ApiProperty({ description: '1/h' }) airChangesPerHour: number;
+  @ApiProperty({ description: '1/min' }) airChangesPerMinute: number;
+  @ApiProperty({ description: 'm³/s per m² of floor' }) flowPerFloorAreaM3PerSM2: number;
+}
+
+export class CapacityFactorsDto {
+  @ApiProperty() elevation: number;
+  @ApiProperty() light: number;
+  @ApiProperty() temperatureRise: number;
+  @ApiProperty() velocity: number;
+  @ApiProperty({ description: 'elevation × light × temperatureRise' }) house: number;
+  @ApiProperty({ description: 'the larger of house and velocity' }) applied: number;
+}
+
+export class CoolingCapacityDto {
+  @ApiProperty({ description: 'm³/s per m² of floor' }) baseRateM3PerSM2: number;
+  @ApiProperty({ type: CapacityFactorsDto }) factors: CapacityFactorsDto;
+  @ApiProperty({ description: 'm³/s' }) requiredFlowM3PerS: number;
+  @ApiProperty({ description: 'm³/s' }) installedFlowM3PerS: number;
+  @ApiProperty({ enum: ['adequate', 'short', 'no-fans'] }) verdict: 'adequate' | 'short' | 'no-fans';
+  @ApiProperty({ type: Number, nullable: true, description: 'fans of the installed size needed in all; null without fans' }) fansNeeded: number | null;
+  @ApiProperty({ type: Number, nullable: true, description: 'fans to add; null without fans' }) additionalFansNeeded: number | null;
+  @ApiProperty({ description: 'm²' }) inletAreaNeededM2: number;
+  @ApiProperty({ description: 'm²' }) inletAreaM2: number;
+  @ApiProperty({ enum: ['adequate', 'short'] }) inletVerdict: 'adequate' | 'short';
+}
+
+export class DesignDayHourDto {
+  @ApiProperty({ minimum: 0, maximum: 23, description: 'local apparent solar hour' }) hour: number;
+  @ApiProperty({ description: '°C' }) outdoorC: number;
+  @ApiProperty({ description: 'degrees above the horizon (negative at night)' }) sunAltitudeDeg: number;
+  @ApiProperty({ description: 'W/m²' }) globalHorizontalWPerM2: number;
+  @ApiProperty({ description: 'W' }) solarGainW: number;
+  @ApiProperty({ description: '°C' }) indoorWithFansC: number;
+  @ApiProperty({ minimum: 0, maximum: 1 }) fanFraction: number;
+  @ApiProperty({ type: Number, nullable: true, description: '°C; null without pads' }) indoorWithPadsC: number | null;
+  @ApiProperty() setpointHeld: boolean;
+}
+
+export class DesignDayDto {
+  @ApiProperty({ description: 'YYYY-MM-DD' }) date: string;
+  @ApiProperty({ type: DesignDayHourDto, isArray: true }) hours: DesignDayHourDto[];
+  @ApiProperty({ description: '°C' }) peakIndoorWithFansC: number;
+  @ApiProperty({ type: Number, nullable: true, description: '°C; null without pads' }) peakIndoorWithPadsC: number | null;
+  @ApiProperty({ type: Number, isArray: true, description: 'solar hours at which the cooling setpoint is not held' }) hoursNotHeld: number[];
+}
+
+export class PadSizingDto {
+  @ApiProperty() padTypeId: string;
+  @ApiProperty({ description: 'm/s' }) faceVelocityMPerS: number;
+  @ApiProperty({ minimum: 0, maximum: 1 }) saturationEfficiency: number;
+  @ApiProperty({ description: 'm²' }) areaNeededM2: number;
+  @ApiProperty({ description: 'm²' }) areaM2: number;
+  @ApiProperty({ enum: ['adequate', 'short'] }) verdict: 'adequate' | 'short';
+  @ApiProperty({ description: '°C' }) leavingAirAtPeakC: number;
+}
+
+export class FanStageDto {
+  @ApiProperty() stage: number;
+  @ApiProperty({ description: 'indoor temperature at which this stage switches on, °C' }) onAtC: number;
+  @ApiProperty({ description: 'fans switched on at this stage (not cumulative)' }) fans: number;
+}
+
+export class StagingDto {
+  @ApiProperty({ description: 'K' }) deadbandK: number;
+  @ApiProperty({ description: 'K' }) requiredDeadbandK: number;
+  @ApiProperty() ok: boolean;
+  @ApiProperty({ type: String, isArray: true }) warnings: string[];
+  @ApiProperty({ type: FanStageDto, isArray: true }) stages: FanStageDto[];
+}
+
+export class WinterVentilationDto {
+  @ApiProperty() fractionOfSummerRate: number;
+  @ApiProperty({ description: 'm³/s' }) flowM3PerS: number;
+  @ApiProperty({ description: '1/h' }) airChangesPerHour: number;
+  @ApiProperty({ description: 'W to warm the ventilation air to the night setpoint' }) heatCostW: number;
+  @ApiProperty({ description: '°C' }) atOutdoorC: number;
+}
+
+export class CoolingAssumptionDto {
+  @ApiProperty() key: string;
+  @ApiProperty() label: string;
+  @ApiProperty({ oneOf: [{ type: 'number' }, { type: 'string' }] }) value: number | string;
+  @ApiProperty() unit: string;
+  @ApiProperty() source: string;
+  @ApiProperty({ enum: CONFIDENCE_MARKS }) confidence: Confidence;
+  @ApiProperty({ description: 'true when the request replaced the default' }) overridden: boolean;
+}
+
+export class CoolingEstimateDto {
+  @ApiProperty({ type: AirExchangeDto }) airExchange: AirExchangeDto;
+  @ApiProperty({ type: CoolingCapacityDto }) capacity: CoolingCapacityDto;
+  @ApiProperty({ type: DesignDayDto }) designDay: DesignDayDto;
+  @ApiProperty({ type: PadSizingDto, nullable: true, description: 'null without evaporative pads' }) pads: PadSizingDto | null;
+  @ApiProperty({ type: StagingDto }) staging: StagingDto;
+  @ApiProperty({ type: WinterVentilationDto }) winterVentilation: WinterVentilationDto;
+  @ApiProperty({ type: CoolingAssumptionDto, isArray: true }) assumptions: CoolingAssumptionDto[];
+  @ApiProperty({ type: String, isArray: true, description: 'safety and planning cautions, to show with the result' }) cautions: string[];
+}
+
+/** Where each condition came from: the request, or the default named. */
+export class CoolingConditionsSourceDto {
+  @ApiProperty({ enum: ['calendar default', 'request'] }) designDate: 'calendar default' | 'request';
+  @ApiProperty({ enum: ['farm climate', 'request'] }) summerDesignC: 'farm climate' | 'request';
+  @ApiProperty({ enum: ['farm climate', 'request'] }) dailyRangeK: 'farm climate' | 'request';
+  @ApiProperty({ enum: ['farm climate', 'request'] }) summerDesignWetBulbC: 'farm climate' | 'request';
+  @ApiProperty({ enum: ['reference data', 'request'] }) allowedTemperatureRiseK: 'reference data' | 'request';
+  @ApiProperty({ enum: ['reference data', 'request'] }) peakInteriorLightLux: 'reference data' | 'request';
+  @ApiProperty({ enum: ['house length', 'request'] }) padToFanDistanceM: 'house length' | 'request';
+  @ApiProperty({ enum: ['reference data', 'request'] }) transpirationFraction: 'reference data' | 'request';
+  @ApiProperty({ enum: ['none', 'request'] }) evaporativePad: 'none' | 'request';
+  @ApiProperty({ enum: ['farm climate', 'reference data', 'request'] }) winterDesignC: 'farm climate' | 'reference data' | 'request';
+}
+
+export class HouseCoolingEstimateDto extends CoolingEstimateDto {
+  @ApiProperty() houseId: number;
+  @ApiProperty({ type: CoolingSiteDto, description: 'the farm’s position and elevation' }) siteUsed: CoolingSiteDto;
+  @ApiProperty({ type: CoolingConditionsDto, description: 'what the engine ran with; optional values left out took the defaults listed in assumptions' })
+  conditionsUsed: CoolingConditionsDto;
+  @ApiProperty({ type: CoolingConditionsSourceDto }) conditionsSource: CoolingConditionsSourceDto;
+}
