@@ -292,6 +292,74 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/estimates": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Design-night heating estimate for a house described in the body */
+        post: operations["EstimatesController_heating"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/estimates/cooling": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Summer ventilation and cooling estimate for a house and site described in the body */
+        post: operations["EstimatesController_cooling"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/houses/{houseId}/estimate": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Heating estimate for a stored house; unstated conditions come from the farm's climate, the farm, the house and reference data */
+        post: operations["EstimatesController_heatingForHouse"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/houses/{houseId}/cooling": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Cooling estimate for a stored house; unstated conditions come from the farm, its climate and reference data */
+        post: operations["EstimatesController_coolingForHouse"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
 }
 export type webhooks = Record<string, never>;
 export interface components {
@@ -570,6 +638,465 @@ export interface components {
             farmId: number;
             /** @description null until someone enters the climate */
             climate: components["schemas"]["SiteClimateDto"] | null;
+        };
+        HouseSpecDto: {
+            /** @enum {string} */
+            shape: "gable" | "gothic-arch" | "quonset";
+            spans: number;
+            /** @description width of one span, m */
+            widthM: number;
+            lengthM: number;
+            /** @description sidewall or gutter height, m */
+            eaveHeightM: number;
+            ridgeHeightM: number;
+            coverings: components["schemas"]["CoveringsDto"];
+            /** @description a maker's U-value replacing the reference value */
+            coveringUOverridesWPerM2K?: components["schemas"]["CoveringOverridesDto"];
+            /** @description reference-data air-leakage id */
+            airLeakageClassId: string;
+            /** @description measured air changes per hour */
+            airChangesPerHourOverride?: number | null;
+            perimeterInsulated: boolean;
+            /** @description reference-data curtains id, drawn at night */
+            curtainId?: string | null;
+            heaters: components["schemas"]["HeaterGroupDto"][];
+            exhaustFans: components["schemas"]["ExhaustFansDto"];
+            /** @description free louvre or inlet area, m² */
+            inletAreaM2: number;
+            setpoints: components["schemas"]["SetpointsDto"];
+        };
+        HeatingConditionsDto: {
+            /** @description winter design dry bulb (99 % or 99.6 %), °C */
+            designOutdoorC: number;
+            /** @description site elevation, m (sets air density) */
+            elevationM: number;
+            /** @description inside relative humidity on the design night, % */
+            insideRelativeHumidityPct: number;
+            /** @description inside temperature to hold, °C; default the house night heating setpoint */
+            insideC?: number;
+            /** @description credit a drawn curtain in the design loss; default false (heaters sized with the curtain open) */
+            curtainClosed?: boolean;
+        };
+        HeatingEstimateRequestDto: {
+            house: components["schemas"]["HouseSpecDto"];
+            conditions: components["schemas"]["HeatingConditionsDto"];
+        };
+        HouseGeometrySummaryDto: {
+            /** @description m² */
+            floorAreaM2: number;
+            /** @description m² */
+            roofAreaM2: number;
+            /** @description m² */
+            sidewallAreaM2: number;
+            /** @description m² */
+            endwallAreaM2: number;
+            /** @description roof + sidewalls + endwalls, m² */
+            coverAreaM2: number;
+            /** @description outside perimeter of the house at the ground, m */
+            perimeterM: number;
+            /** @description m³ */
+            volumeM3: number;
+        };
+        HeatLossComponentDto: {
+            /** @enum {string} */
+            key: "roof" | "sidewalls" | "endwalls" | "perimeter" | "infiltration";
+            label: string;
+            /** @description area (m²), perimeter (m) or volume (m³), see quantityUnit */
+            quantity: number;
+            /** @enum {string} */
+            quantityUnit: "m2" | "m" | "m3";
+            /** @description U in W/(m²·K) for surfaces, F in W/(m·K) for the perimeter, air changes per hour for infiltration */
+            coefficient: number;
+            /** @description W/K */
+            conductanceWPerK: number;
+            /** @description loss at the design ΔT, W */
+            watts: number;
+            /** @description share of the total, 0–1 */
+            share: number;
+        };
+        HeatLossBreakdownDto: {
+            /** @description °C */
+            insideC: number;
+            /** @description °C */
+            outsideC: number;
+            /** @description inside − outside, K (may be ≤ 0: then no heat is needed) */
+            deltaTK: number;
+            /** @description W */
+            totalW: number;
+            /** @description through the coverings, W */
+            coveringW: number;
+            /** @description through the perimeter, W */
+            perimeterW: number;
+            /** @description air leakage, W */
+            infiltrationW: number;
+            curtainApplied: boolean;
+            components: components["schemas"]["HeatLossComponentDto"][];
+        };
+        HeaterSizingDto: {
+            /** @description fraction added to the design loss */
+            safetyMargin: number;
+            /** @description W */
+            requiredOutputW: number;
+            /** @description W */
+            requiredInputW: number;
+            /** @description W */
+            installedInputW: number;
+            /** @description W */
+            installedOutputW: number;
+            /** @enum {string} */
+            verdict: "adequate" | "short" | "none-installed";
+            /** @description W (0 when adequate) */
+            shortfallW: number;
+            /** @description outdoor temperature at which the installed output just holds the inside temperature, °C */
+            lowestHeldOutdoorC: number | null;
+            unitCount: number;
+            /** @description W */
+            largestUnitOutputW: number;
+            /** @description same with the largest unit out of service, °C; null without a second unit */
+            holdsWithLargestUnitOutC: number | null;
+            splitAdvice: string;
+            fuelFired: boolean;
+        };
+        CondensationSurfaceDto: {
+            /** @enum {string} */
+            group: "roof" | "sidewalls" | "endwalls";
+            coveringId: string;
+            /** @description W/(m²·K) */
+            uWPerM2K: number;
+            /** @description °C */
+            insideSurfaceC: number;
+            condenses: boolean;
+            /** @description outdoor temperature below which water condenses on this surface, °C */
+            condensationBelowOutdoorC: number;
+        };
+        CondensationDto: {
+            /** @description °C */
+            insideC: number;
+            /** @description % */
+            insideRelativeHumidityPct: number;
+            /** @description °C */
+            dewPointC: number;
+            anyCondenses: boolean;
+            surfaces: components["schemas"]["CondensationSurfaceDto"][];
+        };
+        HeatingAssumptionDto: {
+            key: string;
+            label: string;
+            value: number | string;
+            unit: string;
+            source: string;
+            /** @enum {string} */
+            confidence: "verified" | "verified-secondary" | "derived" | "memory" | "common-practice" | "user-entered";
+            /** @description true when a value entered for the house replaced the reference value */
+            overridden: boolean;
+        };
+        HeatingEstimateDto: {
+            geometry: components["schemas"]["HouseGeometrySummaryDto"];
+            heatLoss: components["schemas"]["HeatLossBreakdownDto"];
+            heater: components["schemas"]["HeaterSizingDto"];
+            condensation: components["schemas"]["CondensationDto"];
+            assumptions: components["schemas"]["HeatingAssumptionDto"][];
+            /** @description safety and planning cautions, to show with the result */
+            cautions: string[];
+        };
+        CoolingSiteDto: {
+            /** @description degrees, north positive */
+            latitudeDeg: number;
+            /** @description degrees, east positive */
+            longitudeDeg: number;
+            /** @description m */
+            elevationM: number;
+        };
+        EvaporativePadDto: {
+            /**
+             * @description reference-data evaporative-pads id
+             * @example cellulose-150mm
+             */
+            padTypeId: string;
+            /** @description face area of the pads, m² */
+            areaM2: number;
+        };
+        CoolingConditionsDto: {
+            /**
+             * @description YYYY-MM-DD; hours of the result are local apparent solar time
+             * @example 2026-07-21
+             */
+            designDate: string;
+            /** @description summer design dry bulb (the day’s maximum), °C */
+            summerDesignC: number;
+            /** @description day’s maximum − minimum, K */
+            dailyRangeK: number;
+            /** @description wet bulb coincident with the design dry bulb (not above it), °C */
+            summerDesignWetBulbC: number;
+            /** @description allowed inlet-to-fan rise, K; default from reference data */
+            allowedTemperatureRiseK?: number;
+            /** @description peak light at plant height, lux; default from reference data */
+            peakInteriorLightLux?: number;
+            /** @description inlet (pad) wall to fans, m; default the house length */
+            padToFanDistanceM?: number;
+            /** @description share of transmitted solar heat taken up by transpiration; default from reference data */
+            transpirationFraction?: number;
+            /** @description evaporative pads on the inlet wall, or null for none */
+            evaporativePad?: components["schemas"]["EvaporativePadDto"] | null;
+            /** @description winter design temperature for the humidity-ventilation heat cost, °C */
+            winterDesignC?: number;
+        };
+        CoolingEstimateRequestDto: {
+            house: components["schemas"]["HouseSpecDto"];
+            site: components["schemas"]["CoolingSiteDto"];
+            conditions: components["schemas"]["CoolingConditionsDto"];
+        };
+        AirExchangeDto: {
+            /** @description all installed fans together, m³/s */
+            installedFlowM3PerS: number;
+            /** @description 1/h */
+            airChangesPerHour: number;
+            /** @description 1/min */
+            airChangesPerMinute: number;
+            /** @description m³/s per m² of floor */
+            flowPerFloorAreaM3PerSM2: number;
+        };
+        CapacityFactorsDto: {
+            elevation: number;
+            light: number;
+            temperatureRise: number;
+            velocity: number;
+            /** @description elevation × light × temperatureRise */
+            house: number;
+            /** @description the larger of house and velocity */
+            applied: number;
+        };
+        CoolingCapacityDto: {
+            /** @description m³/s per m² of floor */
+            baseRateM3PerSM2: number;
+            factors: components["schemas"]["CapacityFactorsDto"];
+            /** @description m³/s */
+            requiredFlowM3PerS: number;
+            /** @description m³/s */
+            installedFlowM3PerS: number;
+            /** @enum {string} */
+            verdict: "adequate" | "short" | "no-fans";
+            /** @description fans of the installed size needed in all; null without fans */
+            fansNeeded: number | null;
+            /** @description fans to add; null without fans */
+            additionalFansNeeded: number | null;
+            /** @description m² */
+            inletAreaNeededM2: number;
+            /** @description m² */
+            inletAreaM2: number;
+            /** @enum {string} */
+            inletVerdict: "adequate" | "short";
+        };
+        DesignDayHourDto: {
+            /** @description local apparent solar hour */
+            hour: number;
+            /** @description °C */
+            outdoorC: number;
+            /** @description degrees above the horizon (negative at night) */
+            sunAltitudeDeg: number;
+            /** @description W/m² */
+            globalHorizontalWPerM2: number;
+            /** @description W */
+            solarGainW: number;
+            /** @description °C */
+            indoorWithFansC: number;
+            fanFraction: number;
+            /** @description °C; null without pads */
+            indoorWithPadsC: number | null;
+            setpointHeld: boolean;
+        };
+        DesignDayDto: {
+            /** @description YYYY-MM-DD */
+            date: string;
+            hours: components["schemas"]["DesignDayHourDto"][];
+            /** @description °C */
+            peakIndoorWithFansC: number;
+            /** @description °C; null without pads */
+            peakIndoorWithPadsC: number | null;
+            /** @description solar hours at which the cooling setpoint is not held */
+            hoursNotHeld: number[];
+        };
+        PadSizingDto: {
+            padTypeId: string;
+            /** @description m/s */
+            faceVelocityMPerS: number;
+            saturationEfficiency: number;
+            /** @description m² */
+            areaNeededM2: number;
+            /** @description m² */
+            areaM2: number;
+            /** @enum {string} */
+            verdict: "adequate" | "short";
+            /** @description °C */
+            leavingAirAtPeakC: number;
+        };
+        FanStageDto: {
+            stage: number;
+            /** @description indoor temperature at which this stage switches on, °C */
+            onAtC: number;
+            /** @description fans switched on at this stage (not cumulative) */
+            fans: number;
+        };
+        StagingDto: {
+            /** @description K */
+            deadbandK: number;
+            /** @description K */
+            requiredDeadbandK: number;
+            ok: boolean;
+            warnings: string[];
+            stages: components["schemas"]["FanStageDto"][];
+        };
+        WinterVentilationDto: {
+            fractionOfSummerRate: number;
+            /** @description m³/s */
+            flowM3PerS: number;
+            /** @description 1/h */
+            airChangesPerHour: number;
+            /** @description W to warm the ventilation air to the night setpoint */
+            heatCostW: number;
+            /** @description °C */
+            atOutdoorC: number;
+        };
+        CoolingAssumptionDto: {
+            key: string;
+            label: string;
+            value: number | string;
+            unit: string;
+            source: string;
+            /** @enum {string} */
+            confidence: "verified" | "verified-secondary" | "derived" | "memory" | "common-practice";
+            /** @description true when the request replaced the default */
+            overridden: boolean;
+        };
+        CoolingEstimateDto: {
+            airExchange: components["schemas"]["AirExchangeDto"];
+            capacity: components["schemas"]["CoolingCapacityDto"];
+            designDay: components["schemas"]["DesignDayDto"];
+            /** @description null without evaporative pads */
+            pads: components["schemas"]["PadSizingDto"] | null;
+            staging: components["schemas"]["StagingDto"];
+            winterVentilation: components["schemas"]["WinterVentilationDto"];
+            assumptions: components["schemas"]["CoolingAssumptionDto"][];
+            /** @description safety and planning cautions, to show with the result */
+            cautions: string[];
+        };
+        PartialHeatingConditionsDto: {
+            /** @description winter design dry bulb (99 % or 99.6 %), °C */
+            designOutdoorC?: number;
+            /** @description site elevation, m (sets air density) */
+            elevationM?: number;
+            /** @description inside relative humidity on the design night, % */
+            insideRelativeHumidityPct?: number;
+            /** @description inside temperature to hold, °C; default the house night heating setpoint */
+            insideC?: number;
+            /** @description credit a drawn curtain in the design loss; default false (heaters sized with the curtain open) */
+            curtainClosed?: boolean;
+        };
+        HouseHeatingEstimateRequestDto: {
+            conditions?: components["schemas"]["PartialHeatingConditionsDto"];
+        };
+        HeatingConditionsUsedDto: {
+            /** @description °C */
+            designOutdoorC: number;
+            /** @description m */
+            elevationM: number;
+            /** @description % */
+            insideRelativeHumidityPct: number;
+            /** @description °C */
+            insideC: number;
+            curtainClosed: boolean;
+        };
+        HeatingConditionsSourceDto: {
+            /** @enum {string} */
+            designOutdoorC: "farm climate" | "request";
+            /** @enum {string} */
+            elevationM: "farm" | "request";
+            /** @enum {string} */
+            insideRelativeHumidityPct: "reference data" | "request";
+            /** @enum {string} */
+            insideC: "house night setpoint" | "request";
+            /** @enum {string} */
+            curtainClosed: "default" | "request";
+        };
+        HouseHeatingEstimateDto: {
+            geometry: components["schemas"]["HouseGeometrySummaryDto"];
+            heatLoss: components["schemas"]["HeatLossBreakdownDto"];
+            heater: components["schemas"]["HeaterSizingDto"];
+            condensation: components["schemas"]["CondensationDto"];
+            assumptions: components["schemas"]["HeatingAssumptionDto"][];
+            /** @description safety and planning cautions, to show with the result */
+            cautions: string[];
+            houseId: number;
+            conditionsUsed: components["schemas"]["HeatingConditionsUsedDto"];
+            conditionsSource: components["schemas"]["HeatingConditionsSourceDto"];
+        };
+        PartialCoolingConditionsDto: {
+            /**
+             * @description YYYY-MM-DD; hours of the result are local apparent solar time
+             * @example 2026-07-21
+             */
+            designDate?: string;
+            /** @description summer design dry bulb (the day’s maximum), °C */
+            summerDesignC?: number;
+            /** @description day’s maximum − minimum, K */
+            dailyRangeK?: number;
+            /** @description wet bulb coincident with the design dry bulb (not above it), °C */
+            summerDesignWetBulbC?: number;
+            /** @description allowed inlet-to-fan rise, K; default from reference data */
+            allowedTemperatureRiseK?: number;
+            /** @description peak light at plant height, lux; default from reference data */
+            peakInteriorLightLux?: number;
+            /** @description inlet (pad) wall to fans, m; default the house length */
+            padToFanDistanceM?: number;
+            /** @description share of transmitted solar heat taken up by transpiration; default from reference data */
+            transpirationFraction?: number;
+            /** @description evaporative pads on the inlet wall, or null for none */
+            evaporativePad?: components["schemas"]["EvaporativePadDto"] | null;
+            /** @description winter design temperature for the humidity-ventilation heat cost, °C */
+            winterDesignC?: number;
+        };
+        HouseCoolingEstimateRequestDto: {
+            conditions?: components["schemas"]["PartialCoolingConditionsDto"];
+        };
+        CoolingConditionsSourceDto: {
+            /** @enum {string} */
+            designDate: "calendar default" | "request";
+            /** @enum {string} */
+            summerDesignC: "farm climate" | "request";
+            /** @enum {string} */
+            dailyRangeK: "farm climate" | "request";
+            /** @enum {string} */
+            summerDesignWetBulbC: "farm climate" | "request";
+            /** @enum {string} */
+            allowedTemperatureRiseK: "reference data" | "request";
+            /** @enum {string} */
+            peakInteriorLightLux: "reference data" | "request";
+            /** @enum {string} */
+            padToFanDistanceM: "house length" | "request";
+            /** @enum {string} */
+            transpirationFraction: "reference data" | "request";
+            /** @enum {string} */
+            evaporativePad: "none" | "request";
+            /** @enum {string} */
+            winterDesignC: "farm climate" | "reference data" | "request";
+        };
+        HouseCoolingEstimateDto: {
+            airExchange: components["schemas"]["AirExchangeDto"];
+            capacity: components["schemas"]["CoolingCapacityDto"];
+            designDay: components["schemas"]["DesignDayDto"];
+            /** @description null without evaporative pads */
+            pads: components["schemas"]["PadSizingDto"] | null;
+            staging: components["schemas"]["StagingDto"];
+            winterVentilation: components["schemas"]["WinterVentilationDto"];
+            assumptions: components["schemas"]["CoolingAssumptionDto"][];
+            /** @description safety and planning cautions, to show with the result */
+            cautions: string[];
+            houseId: number;
+            /** @description the farm’s position and elevation */
+            siteUsed: components["schemas"]["CoolingSiteDto"];
+            /** @description what the engine ran with; optional values left out took the defaults listed in assumptions */
+            conditionsUsed: components["schemas"]["CoolingConditionsDto"];
+            conditionsSource: components["schemas"]["CoolingConditionsSourceDto"];
         };
     };
     responses: never;
@@ -1209,6 +1736,172 @@ export interface operations {
                 };
             };
             /** @description physically impossible climate (e.g. minimum above maximum), field named */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    EstimatesController_heating: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["HeatingEstimateRequestDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["HeatingEstimateDto"];
+                };
+            };
+            /** @description body fails validation; details per field */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description the engine cannot compute with the input (e.g. ridge below eave, unknown reference id); field named */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    EstimatesController_cooling: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["CoolingEstimateRequestDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["CoolingEstimateDto"];
+                };
+            };
+            /** @description body fails validation; details per field */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description the engine cannot compute with the input (e.g. ridge below eave, unknown reference id); field named */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    EstimatesController_heatingForHouse: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                houseId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["HouseHeatingEstimateRequestDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["HouseHeatingEstimateDto"];
+                };
+            };
+            /** @description role lacks estimate:run */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no such house, or not a member of its farm */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description the engine cannot compute with the input (e.g. ridge below eave, unknown reference id); field named; also when the farm has no climate and no designOutdoorC is given */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    EstimatesController_coolingForHouse: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                houseId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["HouseCoolingEstimateRequestDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["HouseCoolingEstimateDto"];
+                };
+            };
+            /** @description role lacks estimate:run */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no such house, or not a member of its farm */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description the engine cannot compute with the input (e.g. ridge below eave, unknown reference id); field named; also when the farm has no climate and the summer design values are not given */
             422: {
                 headers: {
                     [name: string]: unknown;
