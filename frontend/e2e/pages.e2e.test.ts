@@ -32,7 +32,16 @@ describe('pages around the house', () => {
     const firstFarm = page.getByRole('grid', { name: 'Farms' }).getByRole('link').first();
     await firstFarm.waitFor();
     await saveScreenshot(page, 'farms.png');
-    await firstFarm.click();
+
+    // Keyboard only: Tab into the grid's header, arrow down onto the farm link, Enter opens it.
+    const focusedRole = () => page.evaluate(() => document.activeElement?.getAttribute('role') ?? '');
+    for (let presses = 0; presses < 15 && (await focusedRole()) !== 'columnheader'; presses++) {
+      await page.keyboard.press('Tab');
+    }
+    expect(await focusedRole()).toBe('columnheader');
+    await page.keyboard.press('ArrowDown');
+    expect(await page.evaluate(() => document.activeElement?.tagName)).toBe('A');
+    await page.keyboard.press('Enter');
     await page.waitForURL(/\/farms\/\d+$/);
     await page.getByRole('grid', { name: 'Houses' }).getByRole('link').first().waitFor();
     expect(await page.getByRole('link', { name: 'New house' }).count()).toBe(1);

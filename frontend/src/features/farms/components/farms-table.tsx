@@ -22,8 +22,8 @@ export function FarmsTable({ farms, loading }: { farms: Farm[]; loading?: boolea
         headerName: 'Farm',
         flex: 1,
         minWidth: 180,
-        renderCell: ({ row }) => (
-          <Link component={RouterLink} to={paths.farm(row.id)}>
+        renderCell: ({ row, tabIndex }) => (
+          <Link component={RouterLink} tabIndex={tabIndex} to={paths.farm(row.id)}>
             {row.name}
           </Link>
         ),

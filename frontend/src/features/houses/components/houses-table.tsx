@@ -30,8 +30,8 @@ export function HousesTable({ houses, loading }: { houses: House[]; loading?: bo
         headerName: 'House',
         flex: 1,
         minWidth: 160,
-        renderCell: ({ row }) => (
-          <Link component={RouterLink} to={paths.house(row.id)}>
+        renderCell: ({ row, tabIndex }) => (
+          <Link component={RouterLink} tabIndex={tabIndex} to={paths.house(row.id)}>
             {row.name}
           </Link>
         ),

@@ -51,10 +51,10 @@ export function UsersTable({ users, currentUserId, loading }: { users: User[]; c
         headerName: 'Actions',
         width: 90,
         sortable: false,
-        renderCell: ({ row }) =>
+        renderCell: ({ row, tabIndex }) =>
           row.id === currentUserId ? null : (
             <Tooltip title={`Delete ${row.email}`}>
-              <IconButton aria-label={`Delete ${row.email}`} onClick={() => setUserToDelete(row)}>
+              <IconButton tabIndex={tabIndex} aria-label={`Delete ${row.email}`} onClick={() => setUserToDelete(row)}>
                 <DeleteOutlineIcon />
               </IconButton>
             </Tooltip>
