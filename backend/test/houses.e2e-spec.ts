@@ -36,6 +36,15 @@ describe('houses (e2e)', () => {
     expect(fields).toEqual(expect.arrayContaining(['widthM', 'setpoints.nightHeatingC']));
   });
 
+  it('refuses a house without its nested groups with 400 naming each', async () => {
+    const res = await t.http.post(`/api/farms/${farmId}/houses`).set(bearer(token)).send({
+      name: 'Incomplete', shape: 'gable', spans: 1, widthM: 9, lengthM: 30, eaveHeightM: 2.5, ridgeHeightM: 4.5,
+      airLeakageClassId: 'new-film-double', perimeterInsulated: false, heaters: [], inletAreaM2: 0,
+    }).expect(400);
+    const fields = res.body.details.map((d: { field: string }) => d.field);
+    expect(fields).toEqual(expect.arrayContaining(['coverings', 'exhaustFans', 'setpoints']));
+  });
+
   it('refuses a ridge below the eave and an unknown covering with 422 naming the field', async () => {
     const house = (await t.http.get(`/api/farms/${farmId}/houses`).set(bearer(token)).expect(200)).body[0];
     const ridge = await t.http.patch(`/api/houses/${house.id}`).set(bearer(token)).send({ eaveHeightM: 3, ridgeHeightM: 2.5 }).expect(422);

@@ -7,6 +7,7 @@ import {
   IsIn,
   IsInt,
   IsNumber,
+  IsObject,
   IsOptional,
   IsString,
   Length,
@@ -79,7 +80,7 @@ export class HouseSpecDto {
   eaveHeightM: number;
   @ApiProperty({ ...range('ridgeHeightM') }) @IsNumber() @Min(BOUNDS.ridgeHeightM.min) @Max(BOUNDS.ridgeHeightM.max) ridgeHeightM: number;
 
-  @ApiProperty({ type: CoveringsDto }) @ValidateNested() @Type(() => CoveringsDto) coverings: CoveringsDto;
+  @ApiProperty({ type: CoveringsDto }) @IsObject() @ValidateNested() @Type(() => CoveringsDto) coverings: CoveringsDto;
 
   @ApiPropertyOptional({ type: CoveringOverridesDto, description: "a maker's U-value replacing the reference value" })
   @IsOptional() @ValidateNested() @Type(() => CoveringOverridesDto)
@@ -101,13 +102,13 @@ export class HouseSpecDto {
   @IsArray() @ArrayMaxSize(10) @ValidateNested({ each: true }) @Type(() => HeaterGroupDto)
   heaters: HeaterGroupDto[];
 
-  @ApiProperty({ type: ExhaustFansDto }) @ValidateNested() @Type(() => ExhaustFansDto) exhaustFans: ExhaustFansDto;
+  @ApiProperty({ type: ExhaustFansDto }) @IsObject() @ValidateNested() @Type(() => ExhaustFansDto) exhaustFans: ExhaustFansDto;
 
   @ApiProperty({ ...range('inletAreaM2'), description: 'free louvre or inlet area, m²' })
   @IsNumber() @Min(BOUNDS.inletAreaM2.min) @Max(BOUNDS.inletAreaM2.max)
   inletAreaM2: number;
 
-  @ApiProperty({ type: SetpointsDto }) @ValidateNested() @Type(() => SetpointsDto) setpoints: SetpointsDto;
+  @ApiProperty({ type: SetpointsDto }) @IsObject() @ValidateNested() @Type(() => SetpointsDto) setpoints: SetpointsDto;
 }
 
 export class CreateHouseDto extends HouseSpecDto {
