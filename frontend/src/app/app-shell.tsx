@@ -14,7 +14,7 @@ import {
   Typography,
 } from '@mui/material';
 import { Suspense, useState } from 'react';
-import { Link as RouterLink, Outlet, useNavigate } from 'react-router-dom';
+import { Link as RouterLink, Outlet, ScrollRestoration, useNavigate } from 'react-router-dom';
 import { LoadingState } from '../components/feedback';
 import { paths } from '../config/paths';
 import { useLogout } from '../features/auth';
@@ -36,6 +36,8 @@ export function AppShell() {
 
   return (
     <Box sx={{ minHeight: '100vh', display: 'flex', flexDirection: 'column' }}>
+      {/* A new page starts at its top (e.g. after "Create house" at the foot of a long form). */}
+      <ScrollRestoration />
       <Link
         href="#main-content"
         sx={{
