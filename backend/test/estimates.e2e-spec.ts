@@ -185,9 +185,9 @@ describe('estimates (e2e)', () => {
       expect(noSite.body.details.map((d: { field: string }) => d.field)).toContain('site');
     });
 
-    it('names the missing part of a house instead of failing on the server', async () => {
+    it('names the missing part of a house (400) instead of failing on the server', async () => {
       const { setpoints: _setpoints, ...withoutSetpoints } = gableHouse;
-      const res = await t.http.post('/api/estimates').set(bearer(grower)).send({ house: withoutSetpoints, conditions: designNight }).expect(422);
+      const res = await t.http.post('/api/estimates').set(bearer(grower)).send({ house: withoutSetpoints, conditions: designNight }).expect(400);
       expect(res.body.field).toBe('house.setpoints');
     });
 
