@@ -71,4 +71,32 @@ describe('HouseForm', () => {
     await waitFor(() => expect(ridge.getAttribute('aria-invalid')).toBe('true'));
     expect(screen.getAllByText('house.ridgeHeightM must be between 1.5 and 15').length).toBeGreaterThan(0);
   });
+
+  it('keeps an unsaved edit when the user switches units, re-expressed in the new unit', async () => {
+    const user = userEvent.setup();
+    const onSubmit = vi.fn(async (_input: HouseInput) => {});
+    const form = (system: 'si' | 'us') => (
+      <UnitSystemProvider system={system}>
+        <HouseForm house={houseInputOf(houseFixture)} referenceData={referenceDataFixture} onSubmit={onSubmit} />
+      </UnitSystemProvider>
+    );
+    const { rerender } = render(form('si'));
+
+    const width = screen.getByRole('textbox', { name: /width of one span/i });
+    await user.clear(width);
+    await user.type(width, '10');
+    rerender(form('us'));
+
+    // 10 m ÷ 0.3048 m/ft = 32.808 ft, shown to one more decimal than usual; untouched length is 96 ft
+    await waitFor(() =>
+      expect((screen.getByRole('textbox', { name: /width of one span/i }) as HTMLInputElement).value).toBe('32.81'),
+    );
+    expect((screen.getByRole('textbox', { name: /^length/i }) as HTMLInputElement).value).toBe('96');
+
+    await user.click(screen.getByRole('button', { name: 'Save house' }));
+    await waitFor(() => expect(onSubmit).toHaveBeenCalledTimes(1));
+    const input = onSubmit.mock.calls[0]![0];
+    expect(input.widthM).toBeCloseTo(32.81 * 0.3048, 10);
+    expect(input.lengthM).toBe(houseFixture.lengthM);
+  });
 });

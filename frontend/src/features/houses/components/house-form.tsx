@@ -1,8 +1,8 @@
 import AddIcon from '@mui/icons-material/Add';
 import DeleteOutlineIcon from '@mui/icons-material/DeleteOutlined';
 import { Alert, Box, Button, Grid, IconButton, Paper, Stack, Tooltip, Typography } from '@mui/material';
-import { FieldArray, Form, Formik, setIn, type FormikErrors } from 'formik';
-import { Fragment, useMemo, useState, type ReactNode } from 'react';
+import { FieldArray, Form, Formik, setIn, useFormikContext, type FormikErrors } from 'formik';
+import { Fragment, useEffect, useMemo, useRef, useState, type ReactNode } from 'react';
 import { ApiError } from '../../../api/client';
 import type { HouseInput, ReferenceData } from '../../../api/types';
 import { ErrorAlert } from '../../../components/feedback';
@@ -18,6 +18,7 @@ import { referenceRows } from '../../../lib/reference-data';
 import { useUnits, type Units } from '../../../lib/units';
 import {
   apiErrorToFieldErrors,
+  convertFormValues,
   formValuesToHouseInput,
   HOUSE_SHAPES,
   houseToFormValues,
@@ -50,6 +51,22 @@ function Section({ id, title, children }: { id: string; title: string; children:
       {children}
     </Paper>
   );
+}
+
+/** Keeps the user's edits when they switch unit systems mid-edit (re-expressed in the new unit). */
+function FollowUnitSystem({ units, initialValues }: { units: Units; initialValues: HouseFormValues }) {
+  const { values, dirty, resetForm, setValues } = useFormikContext<HouseFormValues>();
+  const previous = useRef({ units, initialValues });
+  useEffect(() => {
+    const before = previous.current;
+    previous.current = { units, initialValues };
+    if (before.units.system === units.system) return;
+    const edited = dirty ? convertFormValues(values, before.initialValues, initialValues, before.units, units) : null;
+    resetForm({ values: initialValues });
+    if (edited) void setValues(edited, true);
+    // Runs only when the unit system changes; values/dirty are read at that moment on purpose.
+  }, [units, initialValues]);
+  return null;
 }
 
 function optionsFrom(
@@ -106,9 +123,10 @@ export function HouseForm({ house, referenceData, onSubmit, readOnly = false, su
 
   return (
     <Formik<HouseFormValues>
+      // A newly stored house (after a save or a refetch) starts the form afresh.
+      key={JSON.stringify(house)}
       initialValues={initialValues}
       validationSchema={schema}
-      enableReinitialize
       onSubmit={async (values, helpers) => {
         setSubmitError(null);
         setSavedAt(null);
@@ -129,6 +147,7 @@ export function HouseForm({ house, referenceData, onSubmit, readOnly = false, su
     >
       {({ values, isSubmitting, dirty }) => (
         <FormReadOnlyContext.Provider value={readOnly}>
+          <FollowUnitSystem units={units} initialValues={initialValues} />
           <Form noValidate aria-label="House details">
             <Stack spacing={2}>
               {readOnly ? (
