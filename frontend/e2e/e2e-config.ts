@@ -1,6 +1,7 @@
 import { fileURLToPath } from 'node:url';
 
-export const E2E_PORT = 3987;
+/** Set E2E_PORT to run two browser-test runs side by side on one machine. */
+export const E2E_PORT = Number(process.env.E2E_PORT ?? 3987);
 export const E2E_BASE_URL = `http://127.0.0.1:${E2E_PORT}`;
 export const CHROMIUM_PATH = '/usr/bin/chromium';
 export const CHROMIUM_INSTALL_COMMAND =

@@ -41,6 +41,10 @@ export default async function setup(): Promise<() => Promise<void>> {
     throw new Error('frontend/dist is missing: run `npm run build -w frontend` first.');
   }
 
+  if (await fetch(`${E2E_BASE_URL}/api/health`).then(() => true, () => false)) {
+    throw new Error(`port ${E2E_PORT} is already answering; stop that server or set E2E_PORT to a free port`);
+  }
+
   const databaseDir = mkdtempSync(join(tmpdir(), 'thermbay-e2e-'));
   let output = '';
   const backend = spawn(process.execPath, [backendMain], {
