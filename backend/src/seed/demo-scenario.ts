@@ -1,5 +1,7 @@
 import type { FarmRole, SiteRole } from '../common/permissions';
 import type { HouseSpec } from '../engine/house.types';
+import type { PriceUnit } from '../engine/season/fuel';
+import type { ProductionPeriod } from '../engine/season/production-calendar';
 
 /**
  * The demo scenario. INVENTED for demonstration: the farm, its people and its houses do not
@@ -80,7 +82,7 @@ export const DEMO_HOUSES: DemoHouse[] = [
   },
   {
     name: 'House B – bedding plants',
-    notes: 'Invented demo house: 20 × 96 ft quonset, single poly, one natural-gas heater and one small fan.',
+    notes: 'Invented demo house: 20 × 96 ft quonset, single poly, a single natural-gas heater and one small fan.',
     shape: 'quonset',
     spans: 1,
     widthM: round(20 * FT),
@@ -93,7 +95,7 @@ export const DEMO_HOUSES: DemoHouse[] = [
     airChangesPerHourOverride: null,
     perimeterInsulated: false,
     curtainId: null,
-    heaters: [{ count: 1, ratedInputW: round(150_000 * BTU_PER_H_IN_W, 0), efficiency: 0.78, fuelId: 'natural-gas' }],
+    heaters: [{ count: 1, ratedInputW: round(300_000 * BTU_PER_H_IN_W, 0), efficiency: 0.8, fuelId: 'natural-gas' }],
     exhaustFans: { count: 1, capacityEachM3PerS: round(8_000 * CFM_IN_M3_PER_S) },
     inletAreaM2: 1.2,
     setpoints: { dayHeatingC: 15, nightHeatingC: 10, coolingC: 24 },
@@ -113,7 +115,7 @@ export const DEMO_HOUSES: DemoHouse[] = [
     airChangesPerHourOverride: null,
     perimeterInsulated: true,
     curtainId: 'energy-screen-aluminised',
-    heaters: [{ count: 4, ratedInputW: round(400_000 * BTU_PER_H_IN_W, 0), efficiency: 0.8, fuelId: 'natural-gas' }],
+    heaters: [{ count: 6, ratedInputW: round(400_000 * BTU_PER_H_IN_W, 0), efficiency: 0.8, fuelId: 'natural-gas' }],
     exhaustFans: { count: 10, capacityEachM3PerS: round(20_000 * CFM_IN_M3_PER_S) },
     inletAreaM2: 20,
     setpoints: { dayHeatingC: 21, nightHeatingC: 18, coolingC: 27 },
@@ -124,3 +126,27 @@ function round(value: number, digits = 3): number {
   const f = 10 ** digits;
   return Math.round(value * f) / f;
 }
+
+/**
+ * Demo fuel prices: INVENTED round numbers for the demo only, not market data. Each row says so in
+ * its note, which the app shows beside the price.
+ */
+export const DEMO_FUEL_PRICES: Array<{ fuelId: string; pricePerUnit: number; priceUnit: PriceUnit; note: string }> = [
+  { fuelId: 'propane', pricePerUnit: 1.6, priceUnit: 'us', note: 'Invented demo price per US gal, not market data' },
+  { fuelId: 'natural-gas', pricePerUnit: 0.8, priceUnit: 'us', note: 'Invented demo price per therm, not market data' },
+  { fuelId: 'electricity', pricePerUnit: 0.12, priceUnit: 'si', note: 'Invented demo price per kWh, not market data' },
+];
+
+/**
+ * Demo production calendars (INVENTED), by house name. House A grows a fall and a spring tomato
+ * crop with a winter clean-out; House B is heated for spring bedding plants only; Range C has no
+ * calendar and is heated all season.
+ */
+export const DEMO_CALENDARS: Record<string, Array<ProductionPeriod & { label: string }>> = {
+  'House A – tomatoes': [
+    { startMonthDay: '09-01', endMonthDay: '11-30', mode: 'heated', nightHeatingC: 16, label: 'Fall tomato crop' },
+    { startMonthDay: '12-01', endMonthDay: '01-14', mode: 'empty', label: 'Clean-out' },
+    { startMonthDay: '01-15', endMonthDay: '08-31', mode: 'heated', label: 'Spring tomato crop' },
+  ],
+  'House B – bedding plants': [{ startMonthDay: '02-15', endMonthDay: '05-31', mode: 'heated', label: 'Spring bedding plants' }],
+};
