@@ -1,5 +1,6 @@
 import * as initialSchema from './0001-initial-schema';
 import * as farmClimates from './0002-farm-climates';
+import * as seasonData from './0003-season-data';
 
 /**
  * Every schema change, in order. Add a file `NNNN-what-it-does.ts` exporting up/down and list it
@@ -8,4 +9,5 @@ import * as farmClimates from './0002-farm-climates';
 export const MIGRATIONS = [
   { name: '0001-initial-schema', ...initialSchema },
   { name: '0002-farm-climates', ...farmClimates },
+  { name: '0003-season-data', ...seasonData },
 ];
