@@ -1,0 +1,14 @@
+import { Module } from '@nestjs/common';
+import { SequelizeModule } from '@nestjs/sequelize';
+import { FarmsModule } from '../farms/farms.module';
+import { TemperatureLog } from './models/temperature-log.model';
+import { TemperatureLogsController } from './temperature-logs.controller';
+import { TemperatureLogsService } from './temperature-logs.service';
+
+@Module({
+  imports: [SequelizeModule.forFeature([TemperatureLog]), FarmsModule],
+  controllers: [TemperatureLogsController],
+  providers: [TemperatureLogsService],
+  exports: [TemperatureLogsService],
+})
+export class TemperatureLogsModule {}
