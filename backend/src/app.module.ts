@@ -15,6 +15,7 @@ import { FarmsModule } from './farms/farms.module';
 import { HealthController } from './health/health.controller';
 import { HousesModule } from './houses/houses.module';
 import { ReferenceDataModule } from './reference-data/reference-data.module';
+import { SeasonModule } from './season/season.module';
 import { SeedModule } from './seed/seed.module';
 import { UsersModule } from './users/users.module';
 
@@ -38,6 +39,7 @@ const staticFrontend = existsSync(frontendDist())
     HousesModule,
     ClimateModule,
     EstimatesModule,
+    SeasonModule,
     SeedModule,
     ...staticFrontend,
   ],

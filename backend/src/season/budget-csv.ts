@@ -1,0 +1,102 @@
+import { JOULES_PER_BTU, JOULES_PER_KWH } from '../engine/season/fuel';
+import type { BudgetFuelTotalDto, SeasonBudgetDto } from './dto/season-budget.dto';
+
+export type CsvUnits = 'si' | 'us';
+
+/** kWh in one million Btu (from the Btu's definition in joules). */
+export const KWH_PER_MMBTU = (1e6 * JOULES_PER_BTU) / JOULES_PER_KWH;
+
+/** A field as CSV writes it: quoted when needed, and never read as a formula by a spreadsheet. */
+export function csvField(value: string | number | null): string {
+  if (value === null) return '';
+  let text = String(value);
+  if (typeof value === 'string' && /^[=+\-@\t\r]/.test(text)) text = `'${text}`;
+  return /[",\r\n]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
+}
+
+function fixed(value: number | null, digits: number): string | null {
+  return value === null ? null : value.toFixed(digits);
+}
+
+/**
+ * The budget as CSV: one row per house per month, a season total per house, then the farm's
+ * months and season total. The header names every unit: heat in kWh (SI) or MMBtu (US), and
+ * one fuel column per fuel in its SI or US purchase unit (m³ / therm, L / US gal …).
+ */
+export function budgetCsv(budget: SeasonBudgetDto, units: CsvUnits): string {
+  const energyUnit = units === 'si' ? 'kWh' : 'MMBtu';
+  const energy = (kWh: number) => (units === 'si' ? kWh.toFixed(0) : (kWh / KWH_PER_MMBTU).toFixed(3));
+  const fuels: BudgetFuelTotalDto[] = budget.byFuel;
+  const unitOf = (fuel: BudgetFuelTotalDto) => (units === 'si' ? fuel.unitSi : fuel.unitUs);
+  const quantity = (si: number, us: number) => (units === 'si' ? si : us).toFixed(1);
+
+  const header = [
+    'House',
+    'Year',
+    'Month',
+    'Fuel',
+    `Heat delivered (${energyUnit})`,
+    `Fuel burnt (${energyUnit})`,
+    ...fuels.map((fuel) => `${fuel.label} (${unitOf(fuel)})`),
+    'Cost',
+  ];
+  const lines: string[][] = [header];
+  const fuelCells = (fuelId: string | null, si: number, us: number) =>
+    fuels.map((fuel) => (fuel.fuelId === fuelId ? quantity(si, us) : ''));
+
+  for (const house of budget.houses) {
+    for (const month of house.monthly) {
+      lines.push([
+        house.name,
+        String(month.year),
+        String(month.month),
+        house.fuelLabel ?? '',
+        energy(month.energyKWh),
+        energy(month.fuelInputKWh),
+        ...fuelCells(house.fuelId, month.fuelQuantitySi, month.fuelQuantityUs),
+        fixed(month.cost, 2) ?? '',
+      ]);
+    }
+    lines.push([
+      house.name,
+      '',
+      'season total',
+      house.fuelLabel ?? '',
+      energy(house.energyKWh),
+      energy(house.fuelInputKWh),
+      ...fuelCells(house.fuelId, house.fuelQuantitySi, house.fuelQuantityUs),
+      fixed(house.cost, 2) ?? '',
+    ]);
+  }
+  for (const month of budget.monthly) {
+    lines.push([
+      'All houses',
+      String(month.year),
+      String(month.month),
+      '',
+      energy(month.energyKWh),
+      energy(month.fuelInputKWh),
+      ...fuels.map((fuel) => {
+        const entry = month.byFuel.find((item) => item.fuelId === fuel.fuelId);
+        return entry ? quantity(entry.fuelQuantitySi, entry.fuelQuantityUs) : '';
+      }),
+      month.cost.toFixed(2),
+    ]);
+  }
+  lines.push([
+    'All houses',
+    '',
+    'season total',
+    '',
+    energy(budget.totalEnergyKWh),
+    energy(budget.houses.reduce((sum, house) => sum + house.fuelInputKWh, 0)),
+    ...fuels.map((fuel) => quantity(fuel.fuelQuantitySi, fuel.fuelQuantityUs)),
+    budget.totalCost.toFixed(2),
+  ]);
+  return lines.map((cells) => cells.map(csvCell).join(',')).join('\r\n') + '\r\n';
+}
+
+/** Numbers (negative ones included) are written as they are; text is quoted and guarded. */
+function csvCell(cell: string): string {
+  return /^-?\d+(\.\d+)?$/.test(cell) ? cell : csvField(cell);
+}

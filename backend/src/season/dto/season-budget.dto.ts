@@ -1,0 +1,79 @@
+import { ApiProperty } from '@nestjs/swagger';
+import type { PriceUnit } from '../../engine/season/fuel';
+import { PRICE_UNITS } from './season-request.dto';
+
+export class BudgetMonthOfHouseDto {
+  @ApiProperty() year: number;
+  @ApiProperty({ minimum: 1, maximum: 12 }) month: number;
+  @ApiProperty({ description: 'heat delivered, kWh' }) energyKWh: number;
+  @ApiProperty({ description: 'fuel burnt, kWh' }) fuelInputKWh: number;
+  @ApiProperty() fuelQuantitySi: number;
+  @ApiProperty() fuelQuantityUs: number;
+  @ApiProperty({ type: Number, nullable: true, description: 'null when the farm has no price for the fuel' }) cost: number | null;
+}
+
+export class BudgetHouseDto {
+  @ApiProperty() houseId: number;
+  @ApiProperty() name: string;
+  @ApiProperty({ type: String, nullable: true, description: 'fuel of the first heater; null when the house has no heaters' }) fuelId: string | null;
+  @ApiProperty({ type: String, nullable: true }) fuelLabel: string | null;
+  @ApiProperty({ type: String, nullable: true }) unitSi: string | null;
+  @ApiProperty({ type: String, nullable: true }) unitUs: string | null;
+  @ApiProperty({ type: Number, nullable: true }) heaterEfficiency: number | null;
+  @ApiProperty({ type: Number, nullable: true }) pricePerUnit: number | null;
+  @ApiProperty({ enum: PRICE_UNITS, nullable: true }) priceUnit: PriceUnit | null;
+  @ApiProperty({ description: 'heat delivered, kWh' }) energyKWh: number;
+  @ApiProperty({ description: 'fuel burnt, kWh' }) fuelInputKWh: number;
+  @ApiProperty({ description: "in the fuel's unitSi" }) fuelQuantitySi: number;
+  @ApiProperty({ description: "in the fuel's unitUs" }) fuelQuantityUs: number;
+  @ApiProperty({ type: Number, nullable: true, description: 'null when the farm has no price for the fuel' }) cost: number | null;
+  @ApiProperty() heatedDays: number;
+  @ApiProperty({ description: "periods of the house's production calendar (0 = heated all season)" }) calendarPeriodCount: number;
+  @ApiProperty({ type: BudgetMonthOfHouseDto, isArray: true }) monthly: BudgetMonthOfHouseDto[];
+  @ApiProperty({ type: String, nullable: true, description: 'why the house is not (fully) budgeted, e.g. no heaters or no price' }) problem: string | null;
+}
+
+export class BudgetFuelTotalDto {
+  @ApiProperty() fuelId: string;
+  @ApiProperty() label: string;
+  @ApiProperty() unitSi: string;
+  @ApiProperty() unitUs: string;
+  @ApiProperty() houseCount: number;
+  @ApiProperty({ description: 'kWh' }) energyKWh: number;
+  @ApiProperty({ description: 'kWh' }) fuelInputKWh: number;
+  @ApiProperty() fuelQuantitySi: number;
+  @ApiProperty() fuelQuantityUs: number;
+  @ApiProperty({ type: Number, nullable: true, description: 'null when the farm has no price for the fuel' }) cost: number | null;
+}
+
+export class BudgetMonthFuelDto {
+  @ApiProperty() fuelId: string;
+  @ApiProperty() fuelQuantitySi: number;
+  @ApiProperty() fuelQuantityUs: number;
+}
+
+export class BudgetMonthDto {
+  @ApiProperty() year: number;
+  @ApiProperty({ minimum: 1, maximum: 12 }) month: number;
+  @ApiProperty({ description: 'heat delivered to all houses, kWh' }) energyKWh: number;
+  @ApiProperty({ description: 'kWh' }) fuelInputKWh: number;
+  @ApiProperty({ description: 'cost of the priced fuels' }) cost: number;
+  @ApiProperty({ type: BudgetMonthFuelDto, isArray: true }) byFuel: BudgetMonthFuelDto[];
+}
+
+export class SeasonBudgetDto {
+  @ApiProperty() farmId: number;
+  @ApiProperty() startDate: string;
+  @ApiProperty() endDate: string;
+  @ApiProperty({ enum: ['request', 'default-heating-season', 'temperature-log'] }) seasonFrom: 'request' | 'default-heating-season' | 'temperature-log';
+  @ApiProperty({ enum: ['normals', 'temperature-log'] }) climateSource: 'normals' | 'temperature-log';
+  @ApiProperty({ type: Number, nullable: true }) temperatureLogId: number | null;
+  @ApiProperty({ type: BudgetHouseDto, isArray: true }) houses: BudgetHouseDto[];
+  @ApiProperty({ type: BudgetFuelTotalDto, isArray: true }) byFuel: BudgetFuelTotalDto[];
+  @ApiProperty({ description: 'heat delivered to all houses, kWh' }) totalEnergyKWh: number;
+  @ApiProperty({ description: 'sum of the priced houses' }) totalCost: number;
+  @ApiProperty({ description: 'false when some house has no price (or no heaters) and is left out of totalCost' }) costComplete: boolean;
+  @ApiProperty({ type: BudgetMonthDto, isArray: true }) monthly: BudgetMonthDto[];
+  @ApiProperty({ type: String, isArray: true }) notes: string[];
+  @ApiProperty({ type: String, isArray: true }) cautions: string[];
+}

@@ -1,0 +1,211 @@
+import { ApiProperty } from '@nestjs/swagger';
+import type { DegreeDayStep } from '../../engine/estimate-season';
+import type { PriceUnit } from '../../engine/season/fuel';
+import { MEASURE_KINDS, type MeasureKind } from '../../engine/season/measures';
+import { CONFIDENCE_MARKS } from '../../reference-data/load-reference-data';
+import { PRICE_UNITS } from './season-request.dto';
+
+/*
+ * The engine's SeasonEstimate, NightDemand and MeasureComparison described class by class for the
+ * OpenAPI document, so the frontend's generated types match what the engine returns. Property
+ * names are the engine's (except costAmount, the API's name for a measure's cost).
+ */
+
+export const SEASON_ASSUMPTION_CONFIDENCES = [...CONFIDENCE_MARKS, 'user-entered'] as const;
+export const DEGREE_DAY_STEP_KEYS: ReadonlyArray<DegreeDayStep['key']> = ['degree-day', 'hourly-curve', 'day-setpoint', 'curtain', 'sun'];
+
+export class SeasonFuelAmountDto {
+  @ApiProperty({ description: 'heat delivered to the house, kWh' }) energyKWh: number;
+  @ApiProperty({ description: 'heat content of the fuel burnt (energy ÷ efficiency), kWh' }) fuelInputKWh: number;
+  @ApiProperty({ description: "fuel in its SI purchase unit (the fuel's unitSi)" }) fuelQuantitySi: number;
+  @ApiProperty({ description: "fuel in its US purchase unit (the fuel's unitUs)" }) fuelQuantityUs: number;
+  @ApiProperty({ description: 'money, in the currency of the price' }) cost: number;
+}
+
+export class SeasonPeriodDto {
+  @ApiProperty({ description: 'YYYY-MM-DD' }) startDate: string;
+  @ApiProperty({ description: 'YYYY-MM-DD, inclusive' }) endDate: string;
+  @ApiProperty() days: number;
+  @ApiProperty({ description: 'days the production calendar heats' }) heatedDays: number;
+}
+
+export class SeasonFuelDto {
+  @ApiProperty() fuelId: string;
+  @ApiProperty() label: string;
+  @ApiProperty({ example: 'L' }) unitSi: string;
+  @ApiProperty({ example: 'US gal' }) unitUs: string;
+  @ApiProperty() pricePerUnit: number;
+  @ApiProperty({ enum: PRICE_UNITS }) priceUnit: PriceUnit;
+  @ApiProperty({ description: "the unit the price is per, e.g. 'US gal'" }) priceUnitLabel: string;
+  @ApiProperty({ description: 'output ÷ input' }) heaterEfficiency: number;
+}
+
+export class SeasonHeatLossDto {
+  @ApiProperty({ description: 'W/K' }) uaCurtainOpenWPerK: number;
+  @ApiProperty({ description: 'W/K (equals the open value without a curtain)' }) uaCurtainClosedWPerK: number;
+  @ApiProperty({ description: 'm²' }) floorAreaM2: number;
+}
+
+export class SeasonMonthDto extends SeasonFuelAmountDto {
+  @ApiProperty() year: number;
+  @ApiProperty({ minimum: 1, maximum: 12 }) month: number;
+  @ApiProperty({ description: 'heated hours with any heat demand' }) heatingHours: number;
+  @ApiProperty({ description: 'highest hourly-average heat demand of the month, W' }) peakW: number;
+  @ApiProperty({ description: 'degree-days to the night setpoint, K·day' }) degreeDaysKDay: number;
+}
+
+export class SeasonTotalDto extends SeasonFuelAmountDto {
+  @ApiProperty() heatingHours: number;
+}
+
+export class SeasonPeakDto {
+  @ApiProperty({ description: 'W' }) heatW: number;
+  @ApiProperty({ description: 'local standard time, YYYY-MM-DDTHH:MM' }) at: string;
+  @ApiProperty({ description: '°C' }) outdoorC: number;
+}
+
+export class DegreeDayStepDto {
+  @ApiProperty({ enum: DEGREE_DAY_STEP_KEYS }) key: DegreeDayStep['key'];
+  @ApiProperty() label: string;
+  @ApiProperty({ description: 'kWh' }) energyKWh: number;
+  @ApiProperty({ description: 'change from the previous step, kWh' }) changeKWh: number;
+}
+
+export class DegreeDayCrossCheckDto extends SeasonFuelAmountDto {
+  @ApiProperty({ description: 'the base each heated day is counted to' }) baseDescription: string;
+  @ApiProperty({ type: Number, nullable: true, description: 'the base when it is the same all season, else null, °C' }) baseTemperatureC: number | null;
+  @ApiProperty({ description: 'UA used (curtain open), W/K' }) uaWPerK: number;
+  @ApiProperty({ description: 'K·day' }) degreeDaysKDay: number;
+  @ApiProperty({ description: '°F·day' }) degreeDaysFDay: number;
+  @ApiProperty({ type: Number, nullable: true, description: 'hourly result ÷ degree-day result − 1 (null when the degree-day result is 0)' })
+  hourlyDifferenceFraction: number | null;
+  @ApiProperty({ type: DegreeDayStepDto, isArray: true, description: 'from the degree-day figure to the hourly one, one effect at a time' })
+  steps: DegreeDayStepDto[];
+  @ApiProperty({ type: String, isArray: true }) explanation: string[];
+}
+
+export class SeasonAssumptionDto {
+  @ApiProperty() key: string;
+  @ApiProperty() label: string;
+  @ApiProperty({ oneOf: [{ type: 'number' }, { type: 'string' }] }) value: number | string;
+  @ApiProperty() unit: string;
+  @ApiProperty() source: string;
+  @ApiProperty({ enum: SEASON_ASSUMPTION_CONFIDENCES }) confidence: string;
+  @ApiProperty({ description: "true where the user's own value replaced the reference value" }) overridden: boolean;
+}
+
+export class SeasonEstimateDto {
+  @ApiProperty({ type: SeasonPeriodDto }) period: SeasonPeriodDto;
+  @ApiProperty({ type: SeasonFuelDto }) fuel: SeasonFuelDto;
+  @ApiProperty({ type: SeasonHeatLossDto }) heatLoss: SeasonHeatLossDto;
+  @ApiProperty({ type: SeasonMonthDto, isArray: true, description: 'one row per calendar month the season touches' }) monthly: SeasonMonthDto[];
+  @ApiProperty({ type: SeasonTotalDto }) total: SeasonTotalDto;
+  @ApiProperty({ type: SeasonPeakDto, nullable: true, description: 'the hour of highest heat demand; null if no heat was needed' }) peak: SeasonPeakDto | null;
+  @ApiProperty({ minimum: 0, maximum: 1, description: "share of the season's heat delivered at night (sunset to sunrise)" }) nightShareOfHeat: number;
+  @ApiProperty({ description: 'heat the sun supplied in place of the heater, kWh' }) solarOffsetKWh: number;
+  @ApiProperty({ type: DegreeDayCrossCheckDto }) degreeDays: DegreeDayCrossCheckDto;
+  @ApiProperty({ type: SeasonAssumptionDto, isArray: true }) assumptions: SeasonAssumptionDto[];
+  @ApiProperty({ type: String, isArray: true, description: 'combustion / electrical safety cautions' }) cautions: string[];
+}
+
+// ---------------------------------------------------------------------------------------------
+// Where each input of a per-house run came from
+
+export class SeasonRunInputsDto {
+  @ApiProperty({ enum: ['normals', 'temperature-log'] }) climateSource: 'normals' | 'temperature-log';
+  @ApiProperty({ type: Number, nullable: true }) temperatureLogId: number | null;
+  @ApiProperty({ type: String, nullable: true }) temperatureLogName: string | null;
+  @ApiProperty() fuelId: string;
+  @ApiProperty({ enum: ['request', 'house-heater'] }) fuelFrom: 'request' | 'house-heater';
+  @ApiProperty() pricePerUnit: number;
+  @ApiProperty({ enum: PRICE_UNITS }) priceUnit: PriceUnit;
+  @ApiProperty({ enum: ['request', 'farm-fuel-prices'] }) priceFrom: 'request' | 'farm-fuel-prices';
+  @ApiProperty() heaterEfficiency: number;
+  @ApiProperty({ enum: ['request', 'house-heater'] }) heaterEfficiencyFrom: 'request' | 'house-heater';
+  @ApiProperty({ description: "the farm's IANA zone" }) timeZone: string;
+  @ApiProperty({ description: "the zone's standard-time offset from UTC (daylight saving ignored), h" }) utcOffsetHours: number;
+}
+
+export class SeasonInputsUsedDto extends SeasonRunInputsDto {
+  @ApiProperty() startDate: string;
+  @ApiProperty() endDate: string;
+  @ApiProperty({ enum: ['request', 'default-heating-season', 'temperature-log'] })
+  seasonFrom: 'request' | 'default-heating-season' | 'temperature-log';
+  @ApiProperty({ description: "periods of the house's production calendar (0 = heated all season at the house setpoints)" })
+  calendarPeriodCount: number;
+}
+
+export class HouseSeasonEstimateDto extends SeasonEstimateDto {
+  @ApiProperty() houseId: number;
+  @ApiProperty({ type: SeasonInputsUsedDto }) inputsUsed: SeasonInputsUsedDto;
+}
+
+// ---------------------------------------------------------------------------------------------
+// One night
+
+export class NightHourDto {
+  @ApiProperty({ description: 'start of the hour, local standard time' }) at: string;
+  @ApiProperty({ description: '°C' }) outdoorC: number;
+  @ApiProperty({ minimum: 0, maximum: 1, description: 'share of the hour after sunset / before sunrise' }) nightShare: number;
+  @ApiProperty({ description: "average heat demand over the hour's night share, W" }) heatW: number;
+}
+
+export class HouseNightDemandDto extends SeasonFuelAmountDto {
+  @ApiProperty() houseId: number;
+  @ApiProperty({ description: 'the evening the night begins, YYYY-MM-DD' }) date: string;
+  @ApiProperty({ type: String, nullable: true, description: 'local standard time; null where the sun does not set' }) sunset: string | null;
+  @ApiProperty({ type: String, nullable: true, description: 'next morning, local standard time; null where the sun does not rise' }) sunrise: string | null;
+  @ApiProperty({ description: 'h' }) nightHours: number;
+  @ApiProperty({ description: '°C' }) nightSetpointC: number;
+  @ApiProperty({ description: 'UA with the curtain drawn (if any), W/K' }) uaWPerK: number;
+  @ApiProperty({ description: 'W' }) peakW: number;
+  @ApiProperty({ type: Number, nullable: true, description: 'coldest night hour, °C' }) minOutdoorC: number | null;
+  @ApiProperty({ type: NightHourDto, isArray: true }) hourly: NightHourDto[];
+  @ApiProperty({ type: String, isArray: true }) cautions: string[];
+  @ApiProperty({ type: SeasonRunInputsDto }) inputsUsed: SeasonRunInputsDto;
+}
+
+// ---------------------------------------------------------------------------------------------
+// Measures
+
+export class MeasureSeasonDto extends SeasonFuelAmountDto {
+  @ApiProperty() fuelId: string;
+  @ApiProperty() unitSi: string;
+  @ApiProperty() unitUs: string;
+}
+
+export class MeasureLightChangeDto {
+  @ApiProperty({ enum: ['roof', 'sidewalls'] }) surface: 'roof' | 'sidewalls';
+  @ApiProperty({ description: 'light transmittance before, 0–1' }) before: number;
+  @ApiProperty({ description: 'light transmittance after, 0–1' }) after: number;
+  @ApiProperty({ description: 'relative change of light reaching the crop, e.g. −0.11 for 11 % less' }) relativeChange: number;
+  @ApiProperty() source: string;
+}
+
+export class MeasureResultDto {
+  @ApiProperty({ description: 'position in the request list (or in the default list)' }) index: number;
+  @ApiProperty({ enum: MEASURE_KINDS }) kind: MeasureKind;
+  @ApiProperty() label: string;
+  @ApiProperty({ description: 'what changed, in words' }) description: string;
+  @ApiProperty() costAmount: number;
+  @ApiProperty({ type: MeasureSeasonDto, description: "the season with the measure" }) season: MeasureSeasonDto;
+  @ApiProperty({ description: 'heat the house no longer needs, kWh per season (0 for heater or fuel changes)' }) heatSavedKWh: number;
+  @ApiProperty({ description: 'fuel energy no longer bought, kWh per season' }) fuelInputSavedKWh: number;
+  @ApiProperty({ type: Number, nullable: true, description: "in the baseline fuel's unitSi; null when the measure burns another fuel" }) fuelSavedSi: number | null;
+  @ApiProperty({ type: Number, nullable: true, description: "in the baseline fuel's unitUs" }) fuelSavedUs: number | null;
+  @ApiProperty({ description: 'money saved per season (= per year with one season a year); negative when it costs more to run' }) yearlyMoneySaved: number;
+  @ApiProperty({ type: Number, nullable: true, description: 'cost ÷ yearly money saved, years; null = never pays back' }) paybackYears: number | null;
+  @ApiProperty({ example: '2.4 years' }) paybackText: string;
+  @ApiProperty({ type: MeasureLightChangeDto, nullable: true, description: 'light change for measures that add a layer or a screen' }) lightChange: MeasureLightChangeDto | null;
+  @ApiProperty({ type: String, isArray: true }) notes: string[];
+}
+
+export class MeasureComparisonDto {
+  @ApiProperty() houseId: number;
+  @ApiProperty({ type: MeasureSeasonDto, description: 'the season of the house as it is' }) baseline: MeasureSeasonDto;
+  @ApiProperty({ type: MeasureResultDto, isArray: true, description: 'shortest payback first (equal paybacks: larger saving first); never-paying measures last' })
+  measures: MeasureResultDto[];
+  @ApiProperty({ description: 'true when the request listed no measures and the default measures (at cost 0) were compared' }) defaultsUsed: boolean;
+  @ApiProperty({ type: String, isArray: true }) notes: string[];
+  @ApiProperty({ type: SeasonInputsUsedDto }) inputsUsed: SeasonInputsUsedDto;
+}

@@ -1,0 +1,23 @@
+import { Module } from '@nestjs/common';
+import { SequelizeModule } from '@nestjs/sequelize';
+import { ClimateModule } from '../climate/climate.module';
+import { FarmsModule } from '../farms/farms.module';
+import { HousesModule } from '../houses/houses.module';
+import { TemperatureLogsModule } from '../temperature-logs/temperature-logs.module';
+import { CalendarService } from './calendar.service';
+import { FuelPricesService } from './fuel-prices.service';
+import { FarmFuelPrice } from './models/farm-fuel-price.model';
+import { HouseCalendar } from './models/house-calendar.model';
+import { SeasonBudgetService } from './season-budget.service';
+import { SeasonInputsService } from './season-inputs.service';
+import { SeasonController } from './season.controller';
+import { SeasonService } from './season.service';
+import { SunCacheService } from './sun-cache.service';
+
+/** Season engine over HTTP; brings the temperature-log routes with it (one entry in AppModule). */
+@Module({
+  imports: [SequelizeModule.forFeature([FarmFuelPrice, HouseCalendar]), FarmsModule, HousesModule, ClimateModule, TemperatureLogsModule],
+  controllers: [SeasonController],
+  providers: [SunCacheService, SeasonInputsService, SeasonService, SeasonBudgetService, CalendarService, FuelPricesService],
+})
+export class SeasonModule {}
