@@ -1,3 +1,4 @@
+import { hourlyCsv, HOURLY_MAPPING } from './temperature-csv';
 import { bearer, createTestApp, signIn, type TestApp } from './test-app';
 
 /**
@@ -49,6 +50,21 @@ describe('roles × routes (e2e)', () => {
 
   const newHouse = async () =>
     (await t.http.post(`/api/farms/${farmId}/houses`).set(bearer(token.owner)).send(houseBody).expect(201)).body.id as number;
+
+  const SEASON = { startDate: '2026-12-01', endDate: '2027-02-28' };
+  const smallCsv = Buffer.from(hourlyCsv('2027-01-01', 2));
+  const uploadLog = (who: Who) =>
+    t.http
+      .post(`/api/farms/${farmId}/temperature-logs`)
+      .set(bearer(token[who]))
+      .field('name', `log by ${who}`)
+      .field('mapping', JSON.stringify(HOURLY_MAPPING))
+      .attach('file', smallCsv, { filename: 'log.csv', contentType: 'text/csv' });
+  const newLog = async () => (await uploadLog('owner').expect(201)).body.id as number;
+  const demoPrices = [
+    { fuelId: 'propane', pricePerUnit: 1.6, priceUnit: 'us', note: 'Invented demo price per US gal, not market data' },
+    { fuelId: 'natural-gas', pricePerUnit: 0.8, priceUnit: 'us', note: 'Invented demo price per therm, not market data' },
+  ];
 
   const matrix: Array<{ route: string; expected: Record<Who, number>; call: (who: Who) => Promise<{ status: number }> }> = [
     {
@@ -109,6 +125,88 @@ describe('roles × routes (e2e)', () => {
         await t.http.post('/api/auth/register').send({ email, password: 'password-123', name: email });
         return t.http.post(`/api/farms/${farmId}/members`).set(bearer(token[who])).send({ email, role: 'viewer' });
       },
+    },
+    {
+      route: 'GET /farms/:id/temperature-logs',
+      expected: { owner: 200, grower: 200, adviser: 200, viewer: 200, outsider: 404, admin: 404 },
+      call: (who) => t.http.get(`/api/farms/${farmId}/temperature-logs`).set(bearer(token[who])),
+    },
+    {
+      route: 'POST /farms/:id/temperature-logs/inspect',
+      expected: { owner: 200, grower: 200, adviser: 403, viewer: 403, outsider: 404, admin: 404 },
+      call: (who) =>
+        t.http
+          .post(`/api/farms/${farmId}/temperature-logs/inspect`)
+          .set(bearer(token[who]))
+          .attach('file', smallCsv, { filename: 'log.csv', contentType: 'text/csv' }),
+    },
+    {
+      route: 'POST /farms/:id/temperature-logs',
+      expected: { owner: 201, grower: 201, adviser: 403, viewer: 403, outsider: 404, admin: 404 },
+      call: (who) => uploadLog(who),
+    },
+    {
+      route: 'GET /temperature-logs/:id',
+      expected: { owner: 200, grower: 200, adviser: 200, viewer: 200, outsider: 404, admin: 404 },
+      call: async (who) => t.http.get(`/api/temperature-logs/${await newLog()}`).set(bearer(token[who])),
+    },
+    {
+      route: 'DELETE /temperature-logs/:id',
+      expected: { owner: 204, grower: 204, adviser: 403, viewer: 403, outsider: 404, admin: 404 },
+      call: async (who) => t.http.delete(`/api/temperature-logs/${await newLog()}`).set(bearer(token[who])),
+    },
+    {
+      route: 'GET /houses/:id/calendar',
+      expected: { owner: 200, grower: 200, adviser: 200, viewer: 200, outsider: 404, admin: 404 },
+      call: (who) => t.http.get(`/api/houses/${houseId}/calendar`).set(bearer(token[who])),
+    },
+    {
+      route: 'PUT /houses/:id/calendar',
+      expected: { owner: 200, grower: 200, adviser: 403, viewer: 403, outsider: 404, admin: 404 },
+      call: (who) =>
+        t.http
+          .put(`/api/houses/${houseId}/calendar`)
+          .set(bearer(token[who]))
+          .send({ periods: [{ startMonthDay: '10-01', endMonthDay: '04-30', mode: 'heated', label: `set by ${who}` }] }),
+    },
+    {
+      route: 'GET /farms/:id/fuel-prices',
+      expected: { owner: 200, grower: 200, adviser: 200, viewer: 200, outsider: 404, admin: 404 },
+      call: (who) => t.http.get(`/api/farms/${farmId}/fuel-prices`).set(bearer(token[who])),
+    },
+    {
+      route: 'PUT /farms/:id/fuel-prices',
+      expected: { owner: 200, grower: 200, adviser: 403, viewer: 403, outsider: 404, admin: 404 },
+      call: (who) => t.http.put(`/api/farms/${farmId}/fuel-prices`).set(bearer(token[who])).send({ prices: demoPrices }),
+    },
+    {
+      route: 'POST /houses/:id/season',
+      expected: { owner: 200, grower: 200, adviser: 200, viewer: 403, outsider: 404, admin: 404 },
+      call: (who) => t.http.post(`/api/houses/${houseId}/season`).set(bearer(token[who])).send(SEASON),
+    },
+    {
+      route: 'POST /houses/:id/night-demand',
+      expected: { owner: 200, grower: 200, adviser: 200, viewer: 403, outsider: 404, admin: 404 },
+      call: (who) => t.http.post(`/api/houses/${houseId}/night-demand`).set(bearer(token[who])).send({ date: '2027-01-15' }),
+    },
+    {
+      route: 'POST /houses/:id/measures',
+      expected: { owner: 200, grower: 200, adviser: 200, viewer: 403, outsider: 404, admin: 404 },
+      call: (who) =>
+        t.http
+          .post(`/api/houses/${houseId}/measures`)
+          .set(bearer(token[who]))
+          .send({ ...SEASON, measures: [{ kind: 'night-setpoint-lower', costAmount: 0 }] }),
+    },
+    {
+      route: 'POST /farms/:id/season-budget',
+      expected: { owner: 200, grower: 200, adviser: 200, viewer: 200, outsider: 404, admin: 404 },
+      call: (who) => t.http.post(`/api/farms/${farmId}/season-budget`).set(bearer(token[who])).send(SEASON),
+    },
+    {
+      route: 'GET /farms/:id/season-budget.csv',
+      expected: { owner: 200, grower: 200, adviser: 200, viewer: 200, outsider: 404, admin: 404 },
+      call: (who) => t.http.get(`/api/farms/${farmId}/season-budget.csv`).query({ units: 'us', ...SEASON }).set(bearer(token[who])),
     },
     {
       route: 'GET /users (site admin only)',

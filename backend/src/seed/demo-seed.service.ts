@@ -10,7 +10,9 @@ import { Membership } from '../farms/models/membership.model';
 import { House } from '../houses/models/house.model';
 import { User } from '../users/models/user.model';
 import { FarmClimate } from '../climate/models/farm-climate.model';
-import { DEMO_ACCOUNTS, DEMO_CLIMATE, DEMO_FARM, DEMO_HOUSES, DEMO_PASSWORD } from './demo-scenario';
+import { FarmFuelPrice } from '../season/models/farm-fuel-price.model';
+import { HouseCalendar } from '../season/models/house-calendar.model';
+import { DEMO_ACCOUNTS, DEMO_CALENDARS, DEMO_CLIMATE, DEMO_FARM, DEMO_FUEL_PRICES, DEMO_HOUSES, DEMO_PASSWORD } from './demo-scenario';
 
 /** Seeds the invented demo scenario once, on a database that has no demo accounts yet. */
 @Injectable()
@@ -44,7 +46,12 @@ export class DemoSeedService implements OnApplicationBootstrap {
         }
       }
       for (const house of DEMO_HOUSES) {
-        await House.create({ ...house, farmId: farm.id }, { transaction });
+        const row = await House.create({ ...house, farmId: farm.id }, { transaction });
+        const periods = DEMO_CALENDARS[house.name];
+        if (periods) await HouseCalendar.create({ houseId: row.id, periods }, { transaction });
+      }
+      for (const price of DEMO_FUEL_PRICES) {
+        await FarmFuelPrice.create({ ...price, farmId: farm.id }, { transaction });
       }
     });
   }
