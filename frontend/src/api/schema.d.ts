@@ -360,6 +360,180 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/houses/{houseId}/season": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** A house's heating season hour by hour: energy, fuel and cost by month, with a degree-day cross-check (estimate:run) */
+        post: operations["SeasonController_seasonOfHouse"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/houses/{houseId}/night-demand": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Heat, fuel and cost of one night, sunset to sunrise, hour by hour (estimate:run) */
+        post: operations["SeasonController_nightDemand"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/houses/{houseId}/measures": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Energy measures ranked by simple payback, each re-running the season (estimate:run); an empty list compares the defaults */
+        post: operations["SeasonController_measures"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/houses/{houseId}/calendar": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** The house's production calendar (house:read); no periods = heated all season at the house setpoints */
+        get: operations["SeasonController_getCalendar"];
+        /** Replace the house's production calendar (house:write) */
+        put: operations["SeasonController_putCalendar"];
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/farms/{farmId}/fuel-prices": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** The farm's fuel prices, one per fuel (farm:read) */
+        get: operations["SeasonController_getFuelPrices"];
+        /** Replace the farm's fuel prices (house:write: owners and growers, who hold the fuel bills) */
+        put: operations["SeasonController_putFuelPrices"];
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/farms/{farmId}/season-budget": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** The farm's season fuel budget: every house, totals per fuel and per month (farm:read) */
+        post: operations["SeasonController_budget"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/farms/{farmId}/season-budget.csv": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** The season budget as CSV: one row per house per month, totals, units named in the header (farm:read) */
+        get: operations["SeasonController_budgetCsv"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/farms/{farmId}/temperature-logs/inspect": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Read the start of a temperature CSV and propose which columns hold what; stores nothing (house:write) */
+        post: operations["TemperatureLogsController_inspect"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/farms/{farmId}/temperature-logs": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** The farm's temperature logs, newest first, without readings (farm:read) */
+        get: operations["TemperatureLogsController_list"];
+        put?: never;
+        /** Store a temperature log read with the confirmed column mapping; nothing is stored when any row is bad (house:write) */
+        post: operations["TemperatureLogsController_upload"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/temperature-logs/{logId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** A temperature log with one row per day (hourly readings reduced to min/mean/max) (farm:read) */
+        get: operations["TemperatureLogsController_get"];
+        put?: never;
+        post?: never;
+        /** Delete a temperature log (house:write) */
+        delete: operations["TemperatureLogsController_remove"];
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
 }
 export type webhooks = Record<string, never>;
 export interface components {
@@ -1097,6 +1271,706 @@ export interface components {
             /** @description what the engine ran with; optional values left out took the defaults listed in assumptions */
             conditionsUsed: components["schemas"]["CoolingConditionsDto"];
             conditionsSource: components["schemas"]["CoolingConditionsSourceDto"];
+        };
+        TemperatureLogClimateSourceDto: {
+            /** @description id of one of the farm’s temperature logs */
+            temperatureLogId: number;
+        };
+        SeasonRequestDto: {
+            /** @description 'normals' (default: the farm's monthly climate normals) or { temperatureLogId } to use a logged year instead */
+            climateSource?: "normals" | components["schemas"]["TemperatureLogClimateSourceDto"];
+            /** @description reference-data fuels id; default: the fuel of the house's first heater */
+            fuelId?: string;
+            /** @description money per purchase unit; default: the farm's price for the fuel */
+            pricePerUnit?: number;
+            /**
+             * @description unit the given pricePerUnit is per: 'si' (the fuel's unitSi, default) or 'us' (its unitUs)
+             * @enum {string}
+             */
+            priceUnit?: "si" | "us";
+            /** @description output ÷ input; default: the efficiency of the house's first heater burning the fuel */
+            heaterEfficiency?: number;
+            /**
+             * @description first day, YYYY-MM-DD; give both dates or neither. Default: the heating season in progress or, between seasons, the next one (1 Sep – 31 May north of the equator, 1 Mar – 30 Nov south); with a temperature log, the whole days the log covers (at most 366)
+             * @example 2026-09-01
+             */
+            startDate?: string;
+            /**
+             * @description last day (inclusive), YYYY-MM-DD; at most 366 days from startDate
+             * @example 2027-05-31
+             */
+            endDate?: string;
+        };
+        SeasonPeriodDto: {
+            /** @description YYYY-MM-DD */
+            startDate: string;
+            /** @description YYYY-MM-DD, inclusive */
+            endDate: string;
+            days: number;
+            /** @description days the production calendar heats */
+            heatedDays: number;
+        };
+        SeasonFuelDto: {
+            fuelId: string;
+            label: string;
+            /** @example L */
+            unitSi: string;
+            /** @example US gal */
+            unitUs: string;
+            pricePerUnit: number;
+            /** @enum {string} */
+            priceUnit: "si" | "us";
+            /** @description the unit the price is per, e.g. 'US gal' */
+            priceUnitLabel: string;
+            /** @description output ÷ input */
+            heaterEfficiency: number;
+        };
+        SeasonHeatLossDto: {
+            /** @description W/K */
+            uaCurtainOpenWPerK: number;
+            /** @description W/K (equals the open value without a curtain) */
+            uaCurtainClosedWPerK: number;
+            /** @description m² */
+            floorAreaM2: number;
+        };
+        SeasonMonthDto: {
+            /** @description heat delivered to the house, kWh */
+            energyKWh: number;
+            /** @description heat content of the fuel burnt (energy ÷ efficiency), kWh */
+            fuelInputKWh: number;
+            /** @description fuel in its SI purchase unit (the fuel's unitSi) */
+            fuelQuantitySi: number;
+            /** @description fuel in its US purchase unit (the fuel's unitUs) */
+            fuelQuantityUs: number;
+            /** @description money, in the currency of the price */
+            cost: number;
+            year: number;
+            month: number;
+            /** @description heated hours with any heat demand */
+            heatingHours: number;
+            /** @description highest hourly-average heat demand of the month, W */
+            peakW: number;
+            /** @description degree-days to the night setpoint, K·day */
+            degreeDaysKDay: number;
+        };
+        SeasonTotalDto: {
+            /** @description heat delivered to the house, kWh */
+            energyKWh: number;
+            /** @description heat content of the fuel burnt (energy ÷ efficiency), kWh */
+            fuelInputKWh: number;
+            /** @description fuel in its SI purchase unit (the fuel's unitSi) */
+            fuelQuantitySi: number;
+            /** @description fuel in its US purchase unit (the fuel's unitUs) */
+            fuelQuantityUs: number;
+            /** @description money, in the currency of the price */
+            cost: number;
+            heatingHours: number;
+        };
+        SeasonPeakDto: {
+            /** @description W */
+            heatW: number;
+            /** @description local standard time, YYYY-MM-DDTHH:MM */
+            at: string;
+            /** @description °C */
+            outdoorC: number;
+        };
+        DegreeDayStepDto: {
+            /** @enum {string} */
+            key: "degree-day" | "hourly-curve" | "day-setpoint" | "curtain" | "sun";
+            label: string;
+            /** @description kWh */
+            energyKWh: number;
+            /** @description change from the previous step, kWh */
+            changeKWh: number;
+        };
+        DegreeDayCrossCheckDto: {
+            /** @description heat delivered to the house, kWh */
+            energyKWh: number;
+            /** @description heat content of the fuel burnt (energy ÷ efficiency), kWh */
+            fuelInputKWh: number;
+            /** @description fuel in its SI purchase unit (the fuel's unitSi) */
+            fuelQuantitySi: number;
+            /** @description fuel in its US purchase unit (the fuel's unitUs) */
+            fuelQuantityUs: number;
+            /** @description money, in the currency of the price */
+            cost: number;
+            /** @description the base each heated day is counted to */
+            baseDescription: string;
+            /** @description the base when it is the same all season, else null, °C */
+            baseTemperatureC: number | null;
+            /** @description UA used (curtain open), W/K */
+            uaWPerK: number;
+            /** @description K·day */
+            degreeDaysKDay: number;
+            /** @description °F·day */
+            degreeDaysFDay: number;
+            /** @description hourly result ÷ degree-day result − 1 (null when the degree-day result is 0) */
+            hourlyDifferenceFraction: number | null;
+            /** @description from the degree-day figure to the hourly one, one effect at a time */
+            steps: components["schemas"]["DegreeDayStepDto"][];
+            explanation: string[];
+        };
+        SeasonAssumptionDto: {
+            key: string;
+            label: string;
+            value: number | string;
+            unit: string;
+            source: string;
+            /** @enum {string} */
+            confidence: "verified" | "verified-secondary" | "derived" | "memory" | "common-practice" | "user-entered";
+            /** @description true where the user's own value replaced the reference value */
+            overridden: boolean;
+        };
+        SeasonInputsUsedDto: {
+            /** @enum {string} */
+            climateSource: "normals" | "temperature-log";
+            temperatureLogId: number | null;
+            temperatureLogName: string | null;
+            fuelId: string;
+            /** @enum {string} */
+            fuelFrom: "request" | "house-heater";
+            pricePerUnit: number;
+            /** @enum {string} */
+            priceUnit: "si" | "us";
+            /** @enum {string} */
+            priceFrom: "request" | "farm-fuel-prices";
+            heaterEfficiency: number;
+            /** @enum {string} */
+            heaterEfficiencyFrom: "request" | "house-heater";
+            /** @description the farm's IANA zone */
+            timeZone: string;
+            /** @description the zone's standard-time offset from UTC (daylight saving ignored), h */
+            utcOffsetHours: number;
+            startDate: string;
+            endDate: string;
+            /** @enum {string} */
+            seasonFrom: "request" | "default-heating-season" | "temperature-log";
+            /** @description periods of the house's production calendar (0 = heated all season at the house setpoints) */
+            calendarPeriodCount: number;
+        };
+        HouseSeasonEstimateDto: {
+            period: components["schemas"]["SeasonPeriodDto"];
+            fuel: components["schemas"]["SeasonFuelDto"];
+            heatLoss: components["schemas"]["SeasonHeatLossDto"];
+            /** @description one row per calendar month the season touches */
+            monthly: components["schemas"]["SeasonMonthDto"][];
+            total: components["schemas"]["SeasonTotalDto"];
+            /** @description the hour of highest heat demand; null if no heat was needed */
+            peak: components["schemas"]["SeasonPeakDto"] | null;
+            /** @description share of the season's heat delivered at night (sunset to sunrise) */
+            nightShareOfHeat: number;
+            /** @description heat the sun supplied in place of the heater, kWh */
+            solarOffsetKWh: number;
+            degreeDays: components["schemas"]["DegreeDayCrossCheckDto"];
+            assumptions: components["schemas"]["SeasonAssumptionDto"][];
+            /** @description combustion / electrical safety cautions */
+            cautions: string[];
+            houseId: number;
+            inputsUsed: components["schemas"]["SeasonInputsUsedDto"];
+        };
+        NightDemandRequestDto: {
+            /** @description 'normals' (default: the farm's monthly climate normals) or { temperatureLogId } to use a logged year instead */
+            climateSource?: "normals" | components["schemas"]["TemperatureLogClimateSourceDto"];
+            /** @description reference-data fuels id; default: the fuel of the house's first heater */
+            fuelId?: string;
+            /** @description money per purchase unit; default: the farm's price for the fuel */
+            pricePerUnit?: number;
+            /**
+             * @description unit the given pricePerUnit is per: 'si' (the fuel's unitSi, default) or 'us' (its unitUs)
+             * @enum {string}
+             */
+            priceUnit?: "si" | "us";
+            /** @description output ÷ input; default: the efficiency of the house's first heater burning the fuel */
+            heaterEfficiency?: number;
+            /**
+             * @description the evening the night begins, YYYY-MM-DD
+             * @example 2027-01-15
+             */
+            date: string;
+            /** @description °C; default: the house's night setpoint */
+            nightSetpointC?: number;
+        };
+        NightHourDto: {
+            /** @description start of the hour, local standard time */
+            at: string;
+            /** @description °C */
+            outdoorC: number;
+            /** @description share of the hour after sunset / before sunrise */
+            nightShare: number;
+            /** @description average heat demand over the hour's night share, W */
+            heatW: number;
+        };
+        SeasonRunInputsDto: {
+            /** @enum {string} */
+            climateSource: "normals" | "temperature-log";
+            temperatureLogId: number | null;
+            temperatureLogName: string | null;
+            fuelId: string;
+            /** @enum {string} */
+            fuelFrom: "request" | "house-heater";
+            pricePerUnit: number;
+            /** @enum {string} */
+            priceUnit: "si" | "us";
+            /** @enum {string} */
+            priceFrom: "request" | "farm-fuel-prices";
+            heaterEfficiency: number;
+            /** @enum {string} */
+            heaterEfficiencyFrom: "request" | "house-heater";
+            /** @description the farm's IANA zone */
+            timeZone: string;
+            /** @description the zone's standard-time offset from UTC (daylight saving ignored), h */
+            utcOffsetHours: number;
+        };
+        HouseNightDemandDto: {
+            /** @description heat delivered to the house, kWh */
+            energyKWh: number;
+            /** @description heat content of the fuel burnt (energy ÷ efficiency), kWh */
+            fuelInputKWh: number;
+            /** @description fuel in its SI purchase unit (the fuel's unitSi) */
+            fuelQuantitySi: number;
+            /** @description fuel in its US purchase unit (the fuel's unitUs) */
+            fuelQuantityUs: number;
+            /** @description money, in the currency of the price */
+            cost: number;
+            houseId: number;
+            /** @description the evening the night begins, YYYY-MM-DD */
+            date: string;
+            /** @description local standard time; null where the sun does not set */
+            sunset: string | null;
+            /** @description next morning, local standard time; null where the sun does not rise */
+            sunrise: string | null;
+            /** @description h */
+            nightHours: number;
+            /** @description °C */
+            nightSetpointC: number;
+            /** @description UA with the curtain drawn (if any), W/K */
+            uaWPerK: number;
+            /** @description W */
+            peakW: number;
+            /** @description coldest night hour, °C */
+            minOutdoorC: number | null;
+            hourly: components["schemas"]["NightHourDto"][];
+            cautions: string[];
+            inputsUsed: components["schemas"]["SeasonRunInputsDto"];
+        };
+        MeasureFuelPriceDto: {
+            /** @description reference-data fuels id */
+            fuelId: string;
+            pricePerUnit: number;
+            /** @enum {string} */
+            priceUnit: "si" | "us";
+        };
+        MeasureDto: {
+            /** @enum {string} */
+            kind: "second-poly-layer" | "thermal-curtain" | "perimeter-insulation" | "sealing" | "night-setpoint-lower" | "later-start" | "heater-efficiency" | "fuel-switch";
+            /** @description what the measure costs, same currency as the fuel price */
+            costAmount: number;
+            label?: string;
+            /** @description second-poly-layer: surfaces to cover */
+            surfaces?: ("roof" | "sidewalls")[];
+            /** @description second-poly-layer: the coverings id the surfaces become */
+            coveringId?: string;
+            /** @description thermal-curtain: curtains id */
+            curtainId?: string;
+            /** @description sealing: air-leakage class to reach */
+            airLeakageClassId?: string;
+            /** @description sealing: measured air changes per hour after sealing */
+            airChangesPerHour?: number;
+            /** @description night-setpoint-lower: K */
+            lowerByK?: number;
+            /** @description later-start: days */
+            delayDays?: number;
+            /** @description heater-efficiency / fuel-switch: efficiency of the new heaters */
+            efficiency?: number;
+            /** @description fuel-switch: the new fuel and its price */
+            fuel?: components["schemas"]["MeasureFuelPriceDto"];
+        };
+        MeasuresRequestDto: {
+            /** @description 'normals' (default: the farm's monthly climate normals) or { temperatureLogId } to use a logged year instead */
+            climateSource?: "normals" | components["schemas"]["TemperatureLogClimateSourceDto"];
+            /** @description reference-data fuels id; default: the fuel of the house's first heater */
+            fuelId?: string;
+            /** @description money per purchase unit; default: the farm's price for the fuel */
+            pricePerUnit?: number;
+            /**
+             * @description unit the given pricePerUnit is per: 'si' (the fuel's unitSi, default) or 'us' (its unitUs)
+             * @enum {string}
+             */
+            priceUnit?: "si" | "us";
+            /** @description output ÷ input; default: the efficiency of the house's first heater burning the fuel */
+            heaterEfficiency?: number;
+            /**
+             * @description first day, YYYY-MM-DD; give both dates or neither. Default: the heating season in progress or, between seasons, the next one (1 Sep – 31 May north of the equator, 1 Mar – 30 Nov south); with a temperature log, the whole days the log covers (at most 366)
+             * @example 2026-09-01
+             */
+            startDate?: string;
+            /**
+             * @description last day (inclusive), YYYY-MM-DD; at most 366 days from startDate
+             * @example 2027-05-31
+             */
+            endDate?: string;
+            /** @description measures to compare; an empty list compares the default measures (reference-data/measures.json) at cost 0 so a ranking shows at once */
+            measures: components["schemas"]["MeasureDto"][];
+        };
+        MeasureSeasonDto: {
+            /** @description heat delivered to the house, kWh */
+            energyKWh: number;
+            /** @description heat content of the fuel burnt (energy ÷ efficiency), kWh */
+            fuelInputKWh: number;
+            /** @description fuel in its SI purchase unit (the fuel's unitSi) */
+            fuelQuantitySi: number;
+            /** @description fuel in its US purchase unit (the fuel's unitUs) */
+            fuelQuantityUs: number;
+            /** @description money, in the currency of the price */
+            cost: number;
+            fuelId: string;
+            unitSi: string;
+            unitUs: string;
+        };
+        MeasureLightChangeDto: {
+            /** @enum {string} */
+            surface: "roof" | "sidewalls";
+            /** @description light transmittance before, 0–1 */
+            before: number;
+            /** @description light transmittance after, 0–1 */
+            after: number;
+            /** @description relative change of light reaching the crop, e.g. −0.11 for 11 % less */
+            relativeChange: number;
+            source: string;
+        };
+        MeasureResultDto: {
+            /** @description position in the request list (or in the default list) */
+            index: number;
+            /** @enum {string} */
+            kind: "second-poly-layer" | "thermal-curtain" | "perimeter-insulation" | "sealing" | "night-setpoint-lower" | "later-start" | "heater-efficiency" | "fuel-switch";
+            label: string;
+            /** @description what changed, in words */
+            description: string;
+            costAmount: number;
+            /** @description the season with the measure */
+            season: components["schemas"]["MeasureSeasonDto"];
+            /** @description heat the house no longer needs, kWh per season (0 for heater or fuel changes) */
+            heatSavedKWh: number;
+            /** @description fuel energy no longer bought, kWh per season */
+            fuelInputSavedKWh: number;
+            /** @description in the baseline fuel's unitSi; null when the measure burns another fuel */
+            fuelSavedSi: number | null;
+            /** @description in the baseline fuel's unitUs */
+            fuelSavedUs: number | null;
+            /** @description money saved per season (= per year with one season a year); negative when it costs more to run */
+            yearlyMoneySaved: number;
+            /** @description cost ÷ yearly money saved, years; null = never pays back */
+            paybackYears: number | null;
+            /** @example 2.4 years */
+            paybackText: string;
+            /** @description light change for measures that add a layer or a screen */
+            lightChange: components["schemas"]["MeasureLightChangeDto"] | null;
+            notes: string[];
+        };
+        MeasureComparisonDto: {
+            houseId: number;
+            /** @description the season of the house as it is */
+            baseline: components["schemas"]["MeasureSeasonDto"];
+            /** @description shortest payback first (equal paybacks: larger saving first); never-paying measures last */
+            measures: components["schemas"]["MeasureResultDto"][];
+            /** @description true when the request listed no measures and the default measures (at cost 0) were compared */
+            defaultsUsed: boolean;
+            notes: string[];
+            inputsUsed: components["schemas"]["SeasonInputsUsedDto"];
+        };
+        ProductionPeriodDto: {
+            /**
+             * @description first day, 'MM-DD'
+             * @example 11-15
+             */
+            startMonthDay: string;
+            /**
+             * @description last day (inclusive), 'MM-DD'; may wrap the year end
+             * @example 03-31
+             */
+            endMonthDay: string;
+            /** @enum {string} */
+            mode: "heated" | "empty";
+            /** @description replaces the house's day heating setpoint in this period, °C */
+            dayHeatingC?: number;
+            /** @description replaces the house's night heating setpoint in this period, °C */
+            nightHeatingC?: number;
+            /** @example Spring bedding crop */
+            label?: string;
+        };
+        ProductionCalendarDto: {
+            /** @description empty list = heated all season at the house setpoints; otherwise days no period covers are unheated, and where periods overlap the later one wins */
+            periods: components["schemas"]["ProductionPeriodDto"][];
+            houseId: number;
+        };
+        PutProductionCalendarDto: {
+            /** @description empty list = heated all season at the house setpoints; otherwise days no period covers are unheated, and where periods overlap the later one wins */
+            periods: components["schemas"]["ProductionPeriodDto"][];
+        };
+        FuelPriceDto: {
+            /** @description reference-data fuels id (one price per fuel) */
+            fuelId: string;
+            /** @description money per purchase unit */
+            pricePerUnit: number;
+            /**
+             * @description 'si': per the fuel's unitSi (m³, L, kg, kWh); 'us': per its unitUs (therm, US gal, short ton, kWh)
+             * @enum {string}
+             */
+            priceUnit: "si" | "us";
+            /** @description where the price came from (supplier, contract, date) */
+            note?: string | null;
+            /** @example Propane */
+            fuelLabel: string;
+            /**
+             * @description the unit the price is per
+             * @example US gal
+             */
+            priceUnitLabel: string;
+        };
+        FarmFuelPricesDto: {
+            farmId: number;
+            prices: components["schemas"]["FuelPriceDto"][];
+        };
+        FuelPriceInputDto: {
+            /** @description reference-data fuels id (one price per fuel) */
+            fuelId: string;
+            /** @description money per purchase unit */
+            pricePerUnit: number;
+            /**
+             * @description 'si': per the fuel's unitSi (m³, L, kg, kWh); 'us': per its unitUs (therm, US gal, short ton, kWh)
+             * @enum {string}
+             */
+            priceUnit: "si" | "us";
+            /** @description where the price came from (supplier, contract, date) */
+            note?: string | null;
+        };
+        PutFuelPricesDto: {
+            /** @description replaces every price of the farm */
+            prices: components["schemas"]["FuelPriceInputDto"][];
+        };
+        SeasonBudgetRequestDto: {
+            /**
+             * @description first day, YYYY-MM-DD (default as for a house season)
+             * @example 2026-09-01
+             */
+            startDate?: string;
+            /**
+             * @description last day (inclusive), YYYY-MM-DD
+             * @example 2027-05-31
+             */
+            endDate?: string;
+            /** @description 'normals' (default: the farm's monthly climate normals) or { temperatureLogId } to use a logged year instead */
+            climateSource?: "normals" | components["schemas"]["TemperatureLogClimateSourceDto"];
+        };
+        BudgetMonthOfHouseDto: {
+            year: number;
+            month: number;
+            /** @description heat delivered, kWh */
+            energyKWh: number;
+            /** @description fuel burnt, kWh */
+            fuelInputKWh: number;
+            fuelQuantitySi: number;
+            fuelQuantityUs: number;
+            /** @description null when the farm has no price for the fuel */
+            cost: number | null;
+        };
+        BudgetHouseDto: {
+            houseId: number;
+            name: string;
+            /** @description fuel of the first heater; null when the house has no heaters */
+            fuelId: string | null;
+            fuelLabel: string | null;
+            unitSi: string | null;
+            unitUs: string | null;
+            heaterEfficiency: number | null;
+            pricePerUnit: number | null;
+            /** @enum {string|null} */
+            priceUnit: "si" | "us" | null;
+            /** @description heat delivered, kWh */
+            energyKWh: number;
+            /** @description fuel burnt, kWh */
+            fuelInputKWh: number;
+            /** @description in the fuel's unitSi */
+            fuelQuantitySi: number;
+            /** @description in the fuel's unitUs */
+            fuelQuantityUs: number;
+            /** @description null when the farm has no price for the fuel */
+            cost: number | null;
+            heatedDays: number;
+            /** @description periods of the house's production calendar (0 = heated all season) */
+            calendarPeriodCount: number;
+            monthly: components["schemas"]["BudgetMonthOfHouseDto"][];
+            /** @description why the house is not (fully) budgeted, e.g. no heaters or no price */
+            problem: string | null;
+        };
+        BudgetFuelTotalDto: {
+            fuelId: string;
+            label: string;
+            unitSi: string;
+            unitUs: string;
+            houseCount: number;
+            /** @description kWh */
+            energyKWh: number;
+            /** @description kWh */
+            fuelInputKWh: number;
+            fuelQuantitySi: number;
+            fuelQuantityUs: number;
+            /** @description null when the farm has no price for the fuel */
+            cost: number | null;
+        };
+        BudgetMonthFuelDto: {
+            fuelId: string;
+            fuelQuantitySi: number;
+            fuelQuantityUs: number;
+        };
+        BudgetMonthDto: {
+            year: number;
+            month: number;
+            /** @description heat delivered to all houses, kWh */
+            energyKWh: number;
+            /** @description kWh */
+            fuelInputKWh: number;
+            /** @description cost of the priced fuels */
+            cost: number;
+            byFuel: components["schemas"]["BudgetMonthFuelDto"][];
+        };
+        SeasonBudgetDto: {
+            farmId: number;
+            startDate: string;
+            endDate: string;
+            /** @enum {string} */
+            seasonFrom: "request" | "default-heating-season" | "temperature-log";
+            /** @enum {string} */
+            climateSource: "normals" | "temperature-log";
+            temperatureLogId: number | null;
+            houses: components["schemas"]["BudgetHouseDto"][];
+            byFuel: components["schemas"]["BudgetFuelTotalDto"][];
+            /** @description heat delivered to all houses, kWh */
+            totalEnergyKWh: number;
+            /** @description sum of the priced houses */
+            totalCost: number;
+            /** @description false when some house has no price (or no heaters) and is left out of totalCost */
+            costComplete: boolean;
+            monthly: components["schemas"]["BudgetMonthDto"][];
+            notes: string[];
+            cautions: string[];
+        };
+        ColumnProposalDto: {
+            /** @description one column holding date and time (or the date alone in a daily file) */
+            timestampColumn: string | null;
+            /** @description separate date column, when the file splits date and time */
+            dateColumn: string | null;
+            /** @description separate time-of-day column */
+            timeColumn: string | null;
+            /** @description the (mean) temperature; null when a daily file has only minimum and maximum */
+            temperatureColumn: string | null;
+            minColumn: string | null;
+            maxColumn: string | null;
+            /** @enum {string} */
+            unit: "C" | "F";
+            /** @description why the unit was guessed, in words */
+            unitReason: string;
+            /** @enum {string} */
+            resolution: "hourly" | "daily";
+            /**
+             * @description order of day, month and year in dates with the year last
+             * @enum {string}
+             */
+            dateOrder: "YMD" | "MDY" | "DMY";
+            /** @description true when day-first and month-first both fit the dates seen; the user should confirm */
+            dateOrderAmbiguous: boolean;
+            /** @description numbers are written with a decimal comma */
+            decimalComma: boolean;
+        };
+        TemperatureCsvInspectionDto: {
+            /**
+             * @description ',' ';' or a tab
+             * @enum {string}
+             */
+            delimiter: "," | ";" | "\t";
+            hasHeader: boolean;
+            /** @description column names (from the header, or 'Column 1', 'Column 2' … without one) */
+            headers: string[];
+            /** @description the first data rows as they appear */
+            sampleRows: string[][];
+            /** @description data rows in the file */
+            dataRowCount: number;
+            proposal: components["schemas"]["ColumnProposalDto"];
+            notes: string[];
+        };
+        TemperatureLogDto: {
+            id: number;
+            farmId: number;
+            name: string;
+            /** @enum {string} */
+            resolution: "hourly" | "daily";
+            /** @description first reading's date, YYYY-MM-DD */
+            startDate: string;
+            /** @description last reading's date, YYYY-MM-DD */
+            endDate: string;
+            /** @description data rows in the file */
+            rowCount: number;
+            /** @description readings kept (rows without any temperature are skipped) */
+            readingCount: number;
+            /** Format: date-time */
+            createdAt: string;
+        };
+        TemperatureColumnMappingDto: {
+            timestampColumn?: string | null;
+            dateColumn?: string | null;
+            timeColumn?: string | null;
+            temperatureColumn?: string | null;
+            minColumn?: string | null;
+            maxColumn?: string | null;
+            /** @enum {string} */
+            unit: "C" | "F";
+            /**
+             * @description inferred from the times when absent
+             * @enum {string}
+             */
+            resolution?: "hourly" | "daily";
+            /** @enum {string} */
+            dateOrder?: "YMD" | "MDY" | "DMY";
+            decimalComma?: boolean;
+            /**
+             * @description detected when absent
+             * @enum {string}
+             */
+            delimiter?: "," | ";" | "\t";
+            /** @description detected when absent */
+            hasHeader?: boolean;
+        };
+        TemperatureLogDayDto: {
+            /** @description YYYY-MM-DD (as logged) */
+            date: string;
+            /** @description lowest reading (hourly) or the logged minimum (daily), °C; null for a daily log with means only */
+            minC: number | null;
+            /** @description mean of the readings (hourly) or the logged temperature (daily), °C */
+            meanC: number;
+            /** @description °C */
+            maxC: number | null;
+            /** @description readings that day */
+            readingCount: number;
+        };
+        TemperatureLogDetailDto: {
+            id: number;
+            farmId: number;
+            name: string;
+            /** @enum {string} */
+            resolution: "hourly" | "daily";
+            /** @description first reading's date, YYYY-MM-DD */
+            startDate: string;
+            /** @description last reading's date, YYYY-MM-DD */
+            endDate: string;
+            /** @description data rows in the file */
+            rowCount: number;
+            /** @description readings kept (rows without any temperature are skipped) */
+            readingCount: number;
+            /** Format: date-time */
+            createdAt: string;
+            /** @description how the file was read */
+            mapping: components["schemas"]["TemperatureColumnMappingDto"];
+            days: components["schemas"]["TemperatureLogDayDto"][];
         };
     };
     responses: never;
@@ -1903,6 +2777,640 @@ export interface operations {
             };
             /** @description the engine cannot compute with the input (e.g. ridge below eave, unknown reference id); field named; also when the farm has no climate and the summer design values are not given */
             422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    SeasonController_seasonOfHouse: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                houseId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["SeasonRequestDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["HouseSeasonEstimateDto"];
+                };
+            };
+            /** @description body fails validation; details per field */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description role lacks estimate:run */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no such house, or not a member of its farm */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description the engine cannot compute with the input, field named: no climate and no log (climateSource), no fuel price (pricePerUnit), a log that does not cover the dates (climateSource), a season over 366 days (endDate) … */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    SeasonController_nightDemand: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                houseId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["NightDemandRequestDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["HouseNightDemandDto"];
+                };
+            };
+            /** @description body fails validation; details per field */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description role lacks estimate:run */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no such house, or not a member of its farm */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description the engine cannot compute with the input, field named: no climate and no log (climateSource), no fuel price (pricePerUnit), a log that does not cover the dates (climateSource), a season over 366 days (endDate) … */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    SeasonController_measures: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                houseId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["MeasuresRequestDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["MeasureComparisonDto"];
+                };
+            };
+            /** @description body fails validation; details per field */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description role lacks estimate:run */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no such house, or not a member of its farm */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description the engine cannot compute with the input, field named: no climate and no log (climateSource), no fuel price (pricePerUnit), a log that does not cover the dates (climateSource), a season over 366 days (endDate) …; measures[i].field for a measure's settings */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    SeasonController_getCalendar: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                houseId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProductionCalendarDto"];
+                };
+            };
+            /** @description no such house, or not a member of its farm */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    SeasonController_putCalendar: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                houseId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["PutProductionCalendarDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProductionCalendarDto"];
+                };
+            };
+            /** @description body fails validation; details per field */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description role lacks house:write */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no such house, or not a member of its farm */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description an impossible date such as 02-30, field named (periods[i].startMonthDay) */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    SeasonController_getFuelPrices: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                farmId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["FarmFuelPricesDto"];
+                };
+            };
+            /** @description no such farm, or not a member */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    SeasonController_putFuelPrices: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                farmId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["PutFuelPricesDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["FarmFuelPricesDto"];
+                };
+            };
+            /** @description body fails validation; details per field */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description role lacks house:write */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no such farm, or not a member */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description unknown fuel or a fuel listed twice (prices.i.fuelId) */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    SeasonController_budget: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                farmId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["SeasonBudgetRequestDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["SeasonBudgetDto"];
+                };
+            };
+            /** @description body fails validation; details per field */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no such farm, or not a member */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description the engine cannot compute with the input, field named: no climate and no log (climateSource), no fuel price (pricePerUnit), a log that does not cover the dates (climateSource), a season over 366 days (endDate) … */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    SeasonController_budgetCsv: {
+        parameters: {
+            query?: {
+                /** @description si (default): kWh and each fuel’s SI unit; us: MMBtu and each fuel’s US unit */
+                units?: "si" | "us";
+                startDate?: string;
+                endDate?: string;
+                /** @description use this temperature log instead of the climate normals */
+                temperatureLogId?: number;
+            };
+            header?: never;
+            path: {
+                farmId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description CSV file (attachment) */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "text/csv": string;
+                };
+            };
+            /** @description no such farm, or not a member */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description the engine cannot compute with the input, field named: no climate and no log (climateSource), no fuel price (pricePerUnit), a log that does not cover the dates (climateSource), a season over 366 days (endDate) … */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    TemperatureLogsController_inspect: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                farmId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "multipart/form-data": {
+                    /**
+                     * Format: binary
+                     * @description CSV file, UTF-8, at most 5 MB
+                     */
+                    file: string;
+                };
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["TemperatureCsvInspectionDto"];
+                };
+            };
+            /** @description no file part */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description role lacks house:write */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no such farm, or not a member */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description file over 5 MB */
+            413: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description the file cannot be read: not UTF-8, empty, unknown columns or bad rows; details = [{ field: 'line 12', message }] (field 'file' for the file as a whole) */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    TemperatureLogsController_list: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                farmId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["TemperatureLogDto"][];
+                };
+            };
+            /** @description no such farm, or not a member */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    TemperatureLogsController_upload: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                farmId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "multipart/form-data": {
+                    /**
+                     * Format: binary
+                     * @description CSV file, UTF-8, at most 5 MB
+                     */
+                    file: string;
+                    name: string;
+                    /** @description TemperatureColumnMappingDto as JSON, e.g. {"timestampColumn":"Time","temperatureColumn":"Temp (°C)","unit":"C"} */
+                    mapping: string;
+                };
+            };
+        };
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["TemperatureLogDto"];
+                };
+            };
+            /** @description no file part, or name/mapping invalid (details per field, mapping.* for the mapping) */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description role lacks house:write */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no such farm, or not a member */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description file over 5 MB */
+            413: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description the file cannot be read: not UTF-8, empty, unknown columns or bad rows; details = [{ field: 'line 12', message }] (field 'file' for the file as a whole) */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    TemperatureLogsController_get: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                logId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["TemperatureLogDetailDto"];
+                };
+            };
+            /** @description no such log, or not a member of its farm */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    TemperatureLogsController_remove: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                logId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description role lacks house:write */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no such log, or not a member of its farm */
+            404: {
                 headers: {
                     [name: string]: unknown;
                 };
