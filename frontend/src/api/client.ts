@@ -143,8 +143,147 @@ export const api = {
   get: <T>(path: string, options?: RequestOptions) => apiRequest<T>('GET', path, undefined, options),
   post: <T>(path: string, body?: unknown, options?: RequestOptions) =>
     apiRequest<T>('POST', path, body, options),
+  put: <T>(path: string, body?: unknown, options?: RequestOptions) => apiRequest<T>('PUT', path, body, options),
   patch: <T>(path: string, body?: unknown, options?: RequestOptions) =>
     apiRequest<T>('PATCH', path, body, options),
   delete: <T = void>(path: string, options?: RequestOptions) =>
     apiRequest<T>('DELETE', path, undefined, options),
 };
+
+export interface UploadProgress {
+  loadedBytes: number;
+  /** null when the browser cannot tell the body's size */
+  totalBytes: number | null;
+  /** 0–1, or null when the total is unknown */
+  fraction: number | null;
+}
+
+export interface UploadOptions extends RequestOptions {
+  method?: 'POST' | 'PUT';
+  onProgress?: (progress: UploadProgress) => void;
+}
+
+function parseXhrBody(request: XMLHttpRequest): unknown {
+  const text = request.responseText;
+  if (!text) return undefined;
+  if ((request.getResponseHeader('content-type') ?? '').includes('json')) {
+    try {
+      return JSON.parse(text) as unknown;
+    } catch {
+      return text;
+    }
+  }
+  return text;
+}
+
+/**
+ * Sends a multipart body and reports how much of it has left the browser. fetch cannot report
+ * upload progress, so this one call uses XMLHttpRequest — with the same bearer token, the same
+ * error shape (ApiError) and the same sign-out on 401 as every other request.
+ */
+export function uploadWithProgress<T>(path: string, body: FormData, options: UploadOptions = {}): Promise<T> {
+  return new Promise<T>((resolve, reject) => {
+    const { signal, onProgress, method = 'POST' } = options;
+    if (signal?.aborted) {
+      reject(new DOMException('The upload was cancelled', 'AbortError'));
+      return;
+    }
+    const request = new XMLHttpRequest();
+    request.open(method, path);
+    request.setRequestHeader('Accept', 'application/json');
+    const token = tokenStorage.get();
+    if (token) request.setRequestHeader('Authorization', `Bearer ${token}`);
+    // No Content-Type: the browser writes the multipart boundary itself.
+
+    const onAbortSignal = () => request.abort();
+    signal?.addEventListener('abort', onAbortSignal, { once: true });
+    const settle = () => signal?.removeEventListener('abort', onAbortSignal);
+
+    request.upload.addEventListener('progress', (event: ProgressEvent) => {
+      const totalBytes = event.lengthComputable && event.total > 0 ? event.total : null;
+      onProgress?.({
+        loadedBytes: event.loaded,
+        totalBytes,
+        fraction: totalBytes === null ? null : Math.min(1, event.loaded / totalBytes),
+      });
+    });
+    request.addEventListener('load', () => {
+      settle();
+      const payload = parseXhrBody(request);
+      if (request.status >= 200 && request.status < 300) {
+        resolve(payload as T);
+        return;
+      }
+      if (request.status === 401 && token) tokenStorage.clear();
+      reject(parseApiError(request.status, request.statusText, payload));
+    });
+    request.addEventListener('error', () => {
+      settle();
+      reject(new ApiError(0, 'Cannot reach the Thermbay server. Check your connection and try again.'));
+    });
+    request.addEventListener('abort', () => {
+      settle();
+      reject(new DOMException('The upload was cancelled', 'AbortError'));
+    });
+    request.send(body);
+  });
+}
+
+/** Sends a small multipart body with fetch (no progress needed), same token and errors. */
+export async function postForm<T>(path: string, body: FormData, options: RequestOptions = {}): Promise<T> {
+  const headers: Record<string, string> = { Accept: 'application/json' };
+  const token = tokenStorage.get();
+  if (token) headers.Authorization = `Bearer ${token}`;
+  let response: Response;
+  try {
+    response = await fetch(path, { method: 'POST', headers, body, signal: options.signal });
+  } catch (cause) {
+    if (cause instanceof DOMException && cause.name === 'AbortError') throw cause;
+    throw new ApiError(0, 'Cannot reach the Thermbay server. Check your connection and try again.');
+  }
+  const payload = await readBody(response);
+  if (!response.ok) {
+    if (response.status === 401 && token) tokenStorage.clear();
+    throw parseApiError(response.status, response.statusText, payload);
+  }
+  return payload as T;
+}
+
+export interface DownloadedFile {
+  blob: Blob;
+  /** from Content-Disposition, or the fallback */
+  fileName: string;
+}
+
+function fileNameFrom(contentDisposition: string | null, fallback: string): string {
+  const match = /filename\*?=(?:UTF-8'')?"?([^";]+)"?/i.exec(contentDisposition ?? '');
+  if (!match?.[1]) return fallback;
+  try {
+    return decodeURIComponent(match[1]);
+  } catch {
+    return match[1];
+  }
+}
+
+/** GETs a file (e.g. a CSV export) with the token, as a Blob; errors as ApiError. */
+export async function downloadFile(path: string, fallbackFileName: string, options: RequestOptions = {}): Promise<DownloadedFile> {
+  const headers: Record<string, string> = {};
+  const token = tokenStorage.get();
+  if (token) headers.Authorization = `Bearer ${token}`;
+  let response: Response;
+  try {
+    response = await fetch(path, { method: 'GET', headers, signal: options.signal });
+  } catch (cause) {
+    if (cause instanceof DOMException && cause.name === 'AbortError') throw cause;
+    throw new ApiError(0, 'Cannot reach the Thermbay server. Check your connection and try again.');
+  }
+  if (!response.ok) {
+    const payload = await readBody(response);
+    if (response.status === 401 && token) tokenStorage.clear();
+    throw parseApiError(response.status, response.statusText, payload);
+  }
+  return {
+    blob: await response.blob(),
+    fileName: fileNameFrom(response.headers.get('content-disposition'), fallbackFileName),
+  };
+}

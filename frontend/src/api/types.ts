@@ -39,3 +39,45 @@ export type ReferenceData =
   operations['ReferenceDataController_all']['responses'][200]['content']['application/json'];
 export type ReferenceTable = ReferenceData[string];
 export type ReferenceRow = ReferenceTable['rows'][number];
+
+export type FarmClimate = Schemas['FarmClimateDto'];
+export type SiteClimate = Schemas['SiteClimateDto'];
+export type MonthlyClimate = Schemas['MonthlyClimateDto'];
+export type AddMemberRequest = Schemas['AddMemberDto'];
+export type UpdateMemberRequest = Schemas['UpdateMemberDto'];
+
+export type TemperatureColumnProposal = Schemas['ColumnProposalDto'];
+export type TemperatureCsvInspection = Schemas['TemperatureCsvInspectionDto'];
+export type TemperatureColumnMapping = Schemas['TemperatureColumnMappingDto'];
+export type TemperatureLog = Schemas['TemperatureLogDto'];
+export type TemperatureLogDetail = Schemas['TemperatureLogDetailDto'];
+export type TemperatureLogDay = Schemas['TemperatureLogDayDto'];
+
+export type ProductionCalendar = Schemas['ProductionCalendarDto'];
+export type ProductionCalendarInput = Schemas['PutProductionCalendarDto'];
+export type ProductionPeriod = Schemas['ProductionPeriodDto'];
+
+export type FarmFuelPrices = Schemas['FarmFuelPricesDto'];
+export type FuelPrice = Schemas['FuelPriceDto'];
+export type FuelPriceInput = Schemas['FuelPriceInputDto'];
+export type FuelPricesInput = Schemas['PutFuelPricesDto'];
+export type PriceUnit = FuelPriceInput['priceUnit'];
+
+export type SeasonBudget = Schemas['SeasonBudgetDto'];
+export type SeasonBudgetHouse = Schemas['BudgetHouseDto'];
+export type SeasonBudgetMonth = Schemas['BudgetMonthDto'];
+export type SeasonBudgetFuelTotal = Schemas['BudgetFuelTotalDto'];
+export type SeasonBudgetRequest = Schemas['SeasonBudgetRequestDto'];
+
+export type SeasonRequest = Schemas['SeasonRequestDto'];
+export type HouseSeasonEstimate = Schemas['HouseSeasonEstimateDto'];
+export type SeasonMonth = Schemas['SeasonMonthDto'];
+export type DegreeDayCrossCheck = Schemas['DegreeDayCrossCheckDto'];
+export type SeasonAssumption = Schemas['SeasonAssumptionDto'];
+export type NightDemandRequest = Schemas['NightDemandRequestDto'];
+export type HouseNightDemand = Schemas['HouseNightDemandDto'];
+export type MeasuresRequest = Schemas['MeasuresRequestDto'];
+export type Measure = Schemas['MeasureDto'];
+export type MeasureKind = Measure['kind'];
+export type MeasureComparison = Schemas['MeasureComparisonDto'];
+export type MeasureResult = Schemas['MeasureResultDto'];

@@ -13,6 +13,7 @@ const FarmsPage = lazy(() => import('./routes/farms-page'));
 const FarmPage = lazy(() => import('./routes/farm-page'));
 const NewHousePage = lazy(() => import('./routes/new-house-page'));
 const HousePage = lazy(() => import('./routes/house-page'));
+const HouseSeasonPage = lazy(() => import('./routes/house-season-page'));
 const SettingsPage = lazy(() => import('./routes/settings-page'));
 const AdminUsersPage = lazy(() => import('./routes/admin-users-page'));
 const NotFoundPage = lazy(() => import('./routes/not-found-page'));
@@ -36,6 +37,7 @@ export function createAppRouter() {
             { path: 'farms/:farmId', element: <FarmPage /> },
             { path: 'farms/:farmId/houses/new', element: <NewHousePage /> },
             { path: 'houses/:houseId', element: <HousePage /> },
+            { path: 'houses/:houseId/season', element: <HouseSeasonPage /> },
             { path: 'settings', element: <SettingsPage /> },
             { path: 'admin/users', element: <AdminUsersPage /> },
           ],

@@ -7,6 +7,7 @@ export const paths = {
   farm: (farmId: number | string) => `/farms/${farmId}`,
   newHouse: (farmId: number | string) => `/farms/${farmId}/houses/new`,
   house: (houseId: number | string) => `/houses/${houseId}`,
+  houseSeason: (houseId: number | string) => `/houses/${houseId}/season`,
   settings: '/settings',
   adminUsers: '/admin/users',
 } as const;

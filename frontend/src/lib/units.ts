@@ -43,7 +43,11 @@ export type Quantity =
   | 'irradiance'
   | 'heatContentPerVolume'
   | 'heatContentPerLiquidVolume'
-  | 'heatContentPerMass';
+  | 'heatContentPerMass'
+  | 'energyKWh'
+  | 'degreeDays'
+  | 'fraction'
+  | 'durationHours';
 
 interface UnitDefinition {
   /** symbol shown after the number */
@@ -106,6 +110,13 @@ const UNITS: Record<Quantity, Record<UnitSystem, UnitDefinition>> = {
     si: scaled('MJ/kg', 1e6, 1),
     us: scaled('Btu/lb', JOULES_PER_BTU / KILOGRAMS_PER_POUND, 0),
   },
+  // The season routes give energy in kWh (not J): this quantity's SI value is kWh.
+  energyKWh: { si: scaled('kWh', 1, 0), us: scaled('MMBtu', JOULES_PER_MMBTU / JOULES_PER_KWH, 2) },
+  // K·day to a base temperature; a °F·day is 5/9 of a K·day.
+  degreeDays: { si: scaled('K·d', 1, 0), us: scaled('°F·d', KELVIN_PER_FAHRENHEIT_DEGREE, 0) },
+  // A share 0–1 shown as a percentage (clearness, light transmission, efficiency).
+  fraction: { si: scaled('%', 0.01, 0), us: scaled('%', 0.01, 0) },
+  durationHours: { si: scaled('h', 1, 1), us: scaled('h', 1, 1) },
 };
 
 export function unitLabel(quantity: Quantity, system: UnitSystem): string {
@@ -196,6 +207,71 @@ export function thermsToJoules(therms: number): number {
   return therms * JOULES_PER_THERM;
 }
 
+/** kWh of heat as therms (US gas bills); 1 kWh = 3.6 MJ, 1 therm = 10^5 Btu_IT. */
+export function kWhToTherms(kWh: number): number {
+  return (kWh * JOULES_PER_KWH) / JOULES_PER_THERM;
+}
+
+/**
+ * Money has no unit conversion (prices are entered in the grower's own currency): grouped
+ * thousands, two decimals, no currency symbol.
+ */
+export function formatMoney(amount: number | null | undefined, decimals = 2): string {
+  if (amount === null || amount === undefined || !Number.isFinite(amount)) return '—';
+  return new Intl.NumberFormat('en-US', { minimumFractionDigits: decimals, maximumFractionDigits: decimals }).format(
+    roundTo(amount, decimals),
+  );
+}
+
+/** A fuel amount the API gives in both of the fuel's purchase units (e.g. m³ and therm). */
+export interface FuelAmount {
+  fuelQuantitySi: number;
+  fuelQuantityUs: number;
+}
+
+/** The fuel's purchase units as the reference data names them (e.g. 'L' and 'US gal'). */
+export interface FuelUnits {
+  unitSi: string;
+  unitUs: string;
+}
+
+/**
+ * Fuel quantities are not converted here: natural gas by the m³ and by the therm differ by a
+ * heat content, so the API gives both and this picks the one for the user's system.
+ */
+export function fuelQuantityIn(amount: FuelAmount, system: UnitSystem): number {
+  return system === 'us' ? amount.fuelQuantityUs : amount.fuelQuantitySi;
+}
+
+export function fuelUnitIn(units: FuelUnits, system: UnitSystem): string {
+  return system === 'us' ? units.unitUs : units.unitSi;
+}
+
+/** Decimals for a fuel amount: whole units for large amounts, more for small ones. */
+function fuelDecimals(value: number): number {
+  const magnitude = Math.abs(value);
+  if (magnitude >= 100) return 0;
+  if (magnitude >= 1) return 1;
+  return 2;
+}
+
+export function formatFuelQuantity(
+  amount: FuelAmount | null | undefined,
+  fuelUnits: FuelUnits | null | undefined,
+  system: UnitSystem,
+  options: FormatOptions = {},
+): string {
+  if (!amount || !fuelUnits) return '—';
+  const value = fuelQuantityIn(amount, system);
+  if (!Number.isFinite(value)) return '—';
+  const decimals = options.decimals ?? fuelDecimals(value);
+  const number = new Intl.NumberFormat('en-US', {
+    minimumFractionDigits: decimals,
+    maximumFractionDigits: decimals,
+  }).format(roundTo(value, decimals));
+  return options.withoutUnit ? number : `${number} ${fuelUnitIn(fuelUnits, system)}`;
+}
+
 export interface Units {
   system: UnitSystem;
   label: (quantity: Quantity) => string;
@@ -205,6 +281,11 @@ export interface Units {
   format: (quantity: Quantity, siValue: number | null | undefined, options?: FormatOptions) => string;
   toInput: (quantity: Quantity, siValue: number | null | undefined) => string;
   range: (quantity: Quantity, siRange: { min: number; max: number }) => { min: number; max: number };
+  /** money in the grower's currency (no conversion) */
+  money: (amount: number | null | undefined, decimals?: number) => string;
+  fuel: (amount: FuelAmount | null | undefined, fuelUnits: FuelUnits | null | undefined, options?: FormatOptions) => string;
+  fuelValue: (amount: FuelAmount) => number;
+  fuelUnit: (fuelUnits: FuelUnits) => string;
 }
 
 export function unitsFor(system: UnitSystem): Units {
@@ -217,6 +298,10 @@ export function unitsFor(system: UnitSystem): Units {
     format: (quantity, siValue, options) => formatQuantity(quantity, siValue, system, options),
     toInput: (quantity, siValue) => toInputString(quantity, siValue, system),
     range: (quantity, siRange) => rangeInDisplay(quantity, siRange, system),
+    money: (amount, decimals) => formatMoney(amount, decimals),
+    fuel: (amount, fuelUnits, options) => formatFuelQuantity(amount, fuelUnits, system, options),
+    fuelValue: (amount) => fuelQuantityIn(amount, system),
+    fuelUnit: (fuelUnits) => fuelUnitIn(fuelUnits, system),
   };
 }
 

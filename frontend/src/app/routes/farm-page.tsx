@@ -1,13 +1,34 @@
 import AddIcon from '@mui/icons-material/Add';
-import { Breadcrumbs, Button, Link, Stack, Typography } from '@mui/material';
+import { Box, Breadcrumbs, Button, Link, Stack, Tab, Tabs, Typography } from '@mui/material';
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
-import { Link as RouterLink, useNavigate, useParams } from 'react-router-dom';
+import { Link as RouterLink, useNavigate, useParams, useSearchParams } from 'react-router-dom';
 import { ConfirmDialog } from '../../components/confirm-dialog';
 import { ErrorAlert, LoadingState } from '../../components/feedback';
 import { paths } from '../../config/paths';
 import { farmAllows, farmDetailQueryOptions, FarmFormDialog, FarmSummary, useDeleteFarm } from '../../features/farms';
 import { farmHousesQueryOptions, HousesTable } from '../../features/houses';
+import { ClimateSection } from '../../features/climate';
+import { FuelPricesEditor } from '../../features/fuel-prices';
+import { MembersSection } from '../../features/members';
+import { SeasonBudgetSection } from '../../features/season-budget';
+import { TemperatureLogsSection } from '../../features/temperature-logs';
+import { referenceDataQueryOptions } from '../../lib/reference-data';
+import { useCurrentUser } from '../session';
+
+/** The farm page's tabs; the open one is kept in the URL (?tab=climate) so a reload keeps it. */
+const FARM_TABS = [
+  { id: 'houses', label: 'Houses' },
+  { id: 'climate', label: 'Climate' },
+  { id: 'temperature-logs', label: 'Temperature logs' },
+  { id: 'season', label: 'Fuel & season budget' },
+  { id: 'members', label: 'Members' },
+] as const;
+type FarmTab = (typeof FARM_TABS)[number]['id'];
+
+function isFarmTab(value: string | null): value is FarmTab {
+  return FARM_TABS.some((tab) => tab.id === value);
+}
 
 export default function FarmPage() {
   const farmId = Number(useParams().farmId);
@@ -17,6 +38,13 @@ export default function FarmPage() {
   const navigate = useNavigate();
   const [editing, setEditing] = useState(false);
   const [confirmingDelete, setConfirmingDelete] = useState(false);
+  const currentUser = useCurrentUser();
+  const referenceData = useQuery(referenceDataQueryOptions());
+  const [searchParams, setSearchParams] = useSearchParams();
+  const requestedTab = searchParams.get('tab');
+  const tab: FarmTab = isFarmTab(requestedTab) ? requestedTab : 'houses';
+  const openTab = (next: FarmTab) =>
+    setSearchParams(next === 'houses' ? {} : { tab: next }, { replace: true, preventScrollReset: true });
 
   if (farm.isPending) return <LoadingState label="Loading farm…" />;
   if (farm.isError) return <ErrorAlert error={farm.error} title="Farm could not be loaded" />;
@@ -47,25 +75,77 @@ export default function FarmPage() {
       <FarmSummary farm={farm.data} />
       <ErrorAlert error={deleteFarm.error} />
 
-      <Stack component="section" aria-labelledby="houses-heading" spacing={2}>
-        <Stack direction="row" sx={{ alignItems: 'center', justifyContent: 'space-between' }}>
-          <Typography id="houses-heading" variant="h2">
-            Houses
-          </Typography>
-          {farmAllows(farm.data, 'house:write') ? (
-            <Button
-              variant="contained"
-              startIcon={<AddIcon />}
-              component={RouterLink}
-              to={paths.newHouse(farmId)}
-            >
-              New house
-            </Button>
-          ) : null}
-        </Stack>
-        <ErrorAlert error={houses.error} title="Houses could not be loaded" />
-        <HousesTable houses={houses.data ?? []} loading={houses.isPending} />
-      </Stack>
+      <Box sx={{ borderBottom: 1, borderColor: 'divider' }}>
+        <Tabs
+          value={tab}
+          onChange={(_event, next: FarmTab) => openTab(next)}
+          aria-label="Farm sections"
+          variant="scrollable"
+          scrollButtons="auto"
+        >
+          {FARM_TABS.map((item) => (
+            <Tab
+              key={item.id}
+              value={item.id}
+              label={item.label}
+              id={`farm-tab-${item.id}`}
+              aria-controls={`farm-tabpanel-${item.id}`}
+            />
+          ))}
+        </Tabs>
+      </Box>
+
+      <Box role="tabpanel" id={`farm-tabpanel-${tab}`} aria-labelledby={`farm-tab-${tab}`}>
+        {tab === 'houses' ? (
+          <Stack component="section" aria-labelledby="houses-heading" spacing={2}>
+            <Stack direction="row" sx={{ alignItems: 'center', justifyContent: 'space-between' }}>
+              <Typography id="houses-heading" variant="h2">
+                Houses
+              </Typography>
+              {farmAllows(farm.data, 'house:write') ? (
+                <Button
+                  variant="contained"
+                  startIcon={<AddIcon />}
+                  component={RouterLink}
+                  to={paths.newHouse(farmId)}
+                >
+                  New house
+                </Button>
+                ) : null}
+              </Stack>
+              <ErrorAlert error={houses.error} title="Houses could not be loaded" />
+              <HousesTable houses={houses.data ?? []} loading={houses.isPending} />
+            </Stack>
+        ) : null}
+        {tab === 'climate' ? (
+          <ClimateSection farmId={farmId} canEdit={farmAllows(farm.data, 'house:write')} />
+        ) : null}
+        {tab === 'temperature-logs' ? (
+          <TemperatureLogsSection farmId={farmId} canEdit={farmAllows(farm.data, 'house:write')} />
+        ) : null}
+        {tab === 'season' ? (
+          <Stack spacing={3}>
+            <SeasonBudgetSection farmId={farmId} />
+            {referenceData.data ? (
+              <FuelPricesEditor
+                farmId={farmId}
+                referenceData={referenceData.data}
+                canEdit={farmAllows(farm.data, 'house:write')}
+              />
+            ) : (
+              <ErrorAlert error={referenceData.error} title="Reference tables could not be loaded" />
+            )}
+          </Stack>
+        ) : null}
+        {tab === 'members' ? (
+          <MembersSection
+            farmId={farmId}
+            canManage={farmAllows(farm.data, 'members:manage')}
+            currentUserId={currentUser.data?.id}
+            onLeftFarm={() => navigate(paths.farms, { replace: true })}
+          />
+        ) : null}
+      </Box>
 
       <FarmFormDialog open={editing} onClose={() => setEditing(false)} farm={farm.data} />
       <ConfirmDialog

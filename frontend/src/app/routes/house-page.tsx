@@ -51,6 +51,9 @@ export default function HousePage() {
         <Typography color="text.primary">{house.data.name}</Typography>
       </Breadcrumbs>
       <Typography variant="h1">{house.data.name}</Typography>
+      <Link component={RouterLink} to={paths.houseSeason(house.data.id)} sx={{ alignSelf: 'flex-start' }}>
+        Heating season, fuel budget and measures →
+      </Link>
 
       <Grid container spacing={3} sx={{ alignItems: 'flex-start' }}>
         <Grid size={{ xs: 12, lg: 7 }}>

@@ -1,0 +1,46 @@
+import { Breadcrumbs, Link, Stack, Typography } from '@mui/material';
+import { useQuery } from '@tanstack/react-query';
+import { Link as RouterLink, useParams } from 'react-router-dom';
+import { ErrorAlert, LoadingState } from '../../components/feedback';
+import { paths } from '../../config/paths';
+import { farmAllows, farmDetailQueryOptions } from '../../features/farms';
+import { houseDetailQueryOptions } from '../../features/houses';
+import { SeasonView } from '../../features/season';
+import { farmTemperatureLogsQueryOptions } from '../../features/temperature-logs';
+
+/** A house's heating season: night demand, hourly season with the degree-day check, calendar, measures. */
+export default function HouseSeasonPage() {
+  const houseId = Number(useParams().houseId);
+  const house = useQuery(houseDetailQueryOptions(houseId));
+  const farmId = house.data?.farmId ?? 0;
+  const farm = useQuery({ ...farmDetailQueryOptions(farmId), enabled: house.isSuccess });
+  const logs = useQuery({ ...farmTemperatureLogsQueryOptions(farmId), enabled: house.isSuccess });
+
+  if (house.isError) return <ErrorAlert error={house.error} title="House could not be loaded" />;
+  if (farm.isError) return <ErrorAlert error={farm.error} title="Farm could not be loaded" />;
+  if (!house.data || !farm.data) return <LoadingState label="Loading house…" />;
+
+  return (
+    <Stack spacing={2}>
+      <Breadcrumbs aria-label="Breadcrumb">
+        <Link component={RouterLink} to={paths.farms}>
+          Farms
+        </Link>
+        <Link component={RouterLink} to={paths.farm(farm.data.id)}>
+          {farm.data.name}
+        </Link>
+        <Link component={RouterLink} to={paths.house(house.data.id)}>
+          {house.data.name}
+        </Link>
+        <Typography color="text.primary">Season</Typography>
+      </Breadcrumbs>
+      <Typography variant="h1">Heating season: {house.data.name}</Typography>
+      <SeasonView
+        houseId={houseId}
+        canRun={farmAllows(farm.data, 'estimate:run')}
+        canEditCalendar={farmAllows(farm.data, 'house:write')}
+        logs={logs.data ?? []}
+      />
+    </Stack>
+  );
+}

@@ -1,0 +1,72 @@
+import * as yup from 'yup';
+import type { FuelPrice, FuelPricesInput, PriceUnit, ReferenceRow, UnitSystem } from '../../api/types';
+
+/** One fuel's row as typed: a blank price means the farm has no price for that fuel. */
+export interface FuelPriceRowValues {
+  fuelId: string;
+  label: string;
+  unitSi: string;
+  unitUs: string;
+  price: string;
+  priceUnit: PriceUnit;
+  note: string;
+}
+
+export interface FuelPriceFormValues {
+  rows: FuelPriceRowValues[];
+}
+
+const text = (value: unknown) => (typeof value === 'string' ? value : '');
+
+/** Every fuel of the reference table, with the farm's stored price where it has one. */
+export function fuelPriceFormValues(fuels: ReferenceRow[], stored: FuelPrice[], system: UnitSystem): FuelPriceFormValues {
+  return {
+    rows: fuels.map((fuel) => {
+      const price = stored.find((row) => row.fuelId === fuel.id);
+      return {
+        fuelId: fuel.id,
+        label: fuel.label ?? fuel.id,
+        unitSi: text(fuel.unitSi),
+        unitUs: text(fuel.unitUs),
+        price: price ? String(price.pricePerUnit) : '',
+        // A fuel not priced yet offers the unit of the user's own system first.
+        priceUnit: price?.priceUnit ?? system,
+        note: price?.note ?? '',
+      };
+    }),
+  };
+}
+
+export function toFuelPricesInput(values: FuelPriceFormValues): FuelPricesInput {
+  return {
+    prices: values.rows
+      .filter((row) => row.price.trim() !== '')
+      .map((row) => ({
+        fuelId: row.fuelId,
+        pricePerUnit: Number(row.price),
+        priceUnit: row.priceUnit,
+        note: row.note.trim() || null,
+      })),
+  };
+}
+
+/** The unit a row's price is per, e.g. 'therm' or 'm³'. */
+export function priceUnitLabel(row: Pick<FuelPriceRowValues, 'unitSi' | 'unitUs' | 'priceUnit'>): string {
+  return row.priceUnit === 'us' ? row.unitUs : row.unitSi;
+}
+
+export const fuelPriceFormSchema = yup.object({
+  rows: yup.array(
+    yup.object({
+      price: yup
+        .string()
+        .test('price', 'Enter a price of 0 or more, or leave it blank', (value) => {
+          if (!value || value.trim() === '') return true;
+          const number = Number(value);
+          return Number.isFinite(number) && number >= 0 && number <= 1e6;
+        }),
+      priceUnit: yup.mixed<PriceUnit>().oneOf(['si', 'us']).required(),
+      note: yup.string().max(300, 'At most 300 characters'),
+    }),
+  ),
+});

@@ -1,0 +1,18 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { api } from '../../api/client';
+import type { FarmFuelPrices, FuelPricesInput } from '../../api/types';
+import { fuelPriceKeys } from './queries';
+
+/** Season results (keys under 'season') are priced with these: they recompute after a change. */
+const SEASON_RESULTS_KEY = ['season'] as const;
+
+export function usePutFuelPrices(farmId: number) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (body: FuelPricesInput) => api.put<FarmFuelPrices>(`/api/farms/${farmId}/fuel-prices`, body),
+    onSuccess: (saved) => {
+      queryClient.setQueryData(fuelPriceKeys.farm(farmId), saved);
+      void queryClient.invalidateQueries({ queryKey: SEASON_RESULTS_KEY });
+    },
+  });
+}

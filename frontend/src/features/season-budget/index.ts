@@ -1,0 +1,2 @@
+export { SeasonBudgetSection } from './components/season-budget-section';
+export { seasonBudgetQueryOptions, seasonBudgetKeys } from './queries';

@@ -1,0 +1,17 @@
+import { queryOptions } from '@tanstack/react-query';
+import { api } from '../../api/client';
+import type { SeasonBudget, SeasonBudgetRequest } from '../../api/types';
+
+/** Under 'season' so that a change of prices, climate or calendar refreshes every season result. */
+export const seasonBudgetKeys = {
+  all: ['season', 'budget'] as const,
+  farm: (farmId: number, request: SeasonBudgetRequest) => [...seasonBudgetKeys.all, farmId, request] as const,
+};
+
+/** The budget is computed (and stored nowhere), so it is a POST read like a query. */
+export const seasonBudgetQueryOptions = (farmId: number, request: SeasonBudgetRequest = {}) =>
+  queryOptions({
+    queryKey: seasonBudgetKeys.farm(farmId, request),
+    queryFn: ({ signal }) => api.post<SeasonBudget>(`/api/farms/${farmId}/season-budget`, request, { signal }),
+    staleTime: 5 * 60_000,
+  });

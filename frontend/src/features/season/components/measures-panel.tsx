@@ -1,0 +1,183 @@
+import AddIcon from '@mui/icons-material/Add';
+import {
+  Alert,
+  Box,
+  Button,
+  MenuItem,
+  Paper,
+  Stack,
+  Table,
+  TableBody,
+  TableCell,
+  TableContainer,
+  TableHead,
+  TableRow,
+  TextField,
+  Typography,
+} from '@mui/material';
+import { keepPreviousData, useQuery } from '@tanstack/react-query';
+import { useEffect, useState } from 'react';
+import type { Measure, MeasureKind, SeasonRequest } from '../../../api/types';
+import { ErrorAlert, LoadingState } from '../../../components/feedback';
+import { useUnits } from '../../../lib/units';
+import {
+  ADDABLE_MEASURE_KINDS,
+  isValidCost,
+  lightChangeText,
+  MEASURE_KIND_LABELS,
+  measuresRequestBody,
+  paybackText,
+  rowsFromComparison,
+  type MeasureRow,
+} from '../measures-values';
+import { measuresQueryOptions } from '../queries';
+
+/** Energy measures for this house, each priced by the user and ranked by simple payback. */
+export function MeasuresPanel({ houseId, climateSource }: { houseId: number; climateSource: SeasonRequest['climateSource'] }) {
+  const units = useUnits();
+  // [] asks the API for its default measures at cost 0; after that, the user's list and costs.
+  const [requested, setRequested] = useState<Measure[]>([]);
+  const [rows, setRows] = useState<MeasureRow[] | null>(null);
+  const [kindToAdd, setKindToAdd] = useState<MeasureKind>('second-poly-layer');
+  const comparison = useQuery({
+    ...measuresQueryOptions(houseId, { measures: requested, climateSource }),
+    placeholderData: keepPreviousData,
+  });
+
+  useEffect(() => {
+    if (rows === null && comparison.data?.defaultsUsed) setRows(rowsFromComparison(comparison.data));
+  }, [rows, comparison.data]);
+
+  const allCostsValid = (rows ?? []).every((row) => isValidCost(row.cost));
+  const setCost = (index: number, cost: string) =>
+    setRows((current) => current?.map((row, at) => (at === index ? { ...row, cost } : row)) ?? null);
+  const result = comparison.data;
+  const baselineFuel = result?.baseline;
+
+  return (
+    <Paper component="section" aria-labelledby="measures-heading" sx={{ p: 2 }}>
+      <Stack spacing={2}>
+        <Typography id="measures-heading" variant="h3" component="h2">
+          Energy measures ranked by payback
+        </Typography>
+        <Typography variant="body2" color="text.secondary">
+          Enter what each measure would cost (installed, in the currency of your fuel prices), then rank them. Each is
+          compared alone against the house as it is.
+        </Typography>
+        {comparison.isPending ? <LoadingState label="Comparing measures (each re-runs the season)…" /> : null}
+        <ErrorAlert error={comparison.error} title="The measures could not be compared" />
+        {result && rows ? (
+          <>
+            {baselineFuel ? (
+              <Typography variant="body2">
+                As it is, the house burns {units.fuel(baselineFuel, baselineFuel)} a season, costing{' '}
+                {units.money(baselineFuel.cost, 0)}.
+              </Typography>
+            ) : null}
+            <TableContainer>
+              <Table size="small" aria-label="Measures ranked by payback">
+                <TableHead>
+                  <TableRow>
+                    <TableCell>Rank</TableCell>
+                    <TableCell sx={{ minWidth: 220 }}>Measure</TableCell>
+                    <TableCell sx={{ minWidth: 120 }}>Cost</TableCell>
+                    <TableCell align="right">Saves a season</TableCell>
+                    <TableCell align="right">Fuel saved</TableCell>
+                    <TableCell align="right">Heat saved</TableCell>
+                    <TableCell align="right">Payback</TableCell>
+                    <TableCell sx={{ minWidth: 180 }}>Light to the crop</TableCell>
+                  </TableRow>
+                </TableHead>
+                <TableBody>
+                  {result.measures.map((measure, rank) => {
+                    const row = rows[measure.index];
+                    const fuelSaved =
+                      measure.fuelSavedSi === null || measure.fuelSavedUs === null || !baselineFuel
+                        ? '—'
+                        : units.fuel({ fuelQuantitySi: measure.fuelSavedSi, fuelQuantityUs: measure.fuelSavedUs }, baselineFuel);
+                    return (
+                      <TableRow key={`${measure.index}-${measure.kind}`}>
+                        <TableCell>{rank + 1}</TableCell>
+                        <TableCell>
+                          <Typography variant="body2" sx={{ fontWeight: 500 }}>
+                            {measure.label}
+                          </Typography>
+                          <Typography variant="caption" color="text.secondary" component="div">
+                            {measure.description}
+                          </Typography>
+                          {measure.notes.map((note) => (
+                            <Typography variant="caption" color="warning.main" component="div" key={note}>
+                              {note}
+                            </Typography>
+                          ))}
+                        </TableCell>
+                        <TableCell>
+                          {row ? (
+                            <TextField
+                              value={row.cost}
+                              onChange={(event) => setCost(measure.index, event.target.value)}
+                              placeholder="0"
+                              error={!isValidCost(row.cost)}
+                              slotProps={{ htmlInput: { inputMode: 'decimal', 'aria-label': `Cost of: ${measure.label}` } }}
+                            />
+                          ) : (
+                            units.money(measure.costAmount, 0)
+                          )}
+                        </TableCell>
+                        <TableCell align="right">{units.money(measure.yearlyMoneySaved, 0)}</TableCell>
+                        <TableCell align="right">{fuelSaved}</TableCell>
+                        <TableCell align="right">{units.format('energyKWh', measure.heatSavedKWh)}</TableCell>
+                        <TableCell align="right">{paybackText(measure)}</TableCell>
+                        <TableCell>{lightChangeText(measure, units)}</TableCell>
+                      </TableRow>
+                    );
+                  })}
+                </TableBody>
+              </Table>
+            </TableContainer>
+            <Stack direction={{ xs: 'column', sm: 'row' }} spacing={2} sx={{ alignItems: { sm: 'center' } }}>
+              <Button
+                variant="contained"
+                disabled={!allCostsValid || comparison.isFetching}
+                onClick={() => setRequested(measuresRequestBody(rows))}
+              >
+                {comparison.isFetching ? 'Ranking…' : 'Rank by payback'}
+              </Button>
+              <TextField
+                select
+                label="Another measure"
+                value={kindToAdd}
+                onChange={(event) => setKindToAdd(event.target.value as MeasureKind)}
+                sx={{ maxWidth: 280 }}
+              >
+                {ADDABLE_MEASURE_KINDS.map((kind) => (
+                  <MenuItem key={kind} value={kind}>
+                    {MEASURE_KIND_LABELS[kind]}
+                  </MenuItem>
+                ))}
+              </TextField>
+              <Button
+                startIcon={<AddIcon />}
+                onClick={() => {
+                  const next = [...rows, { kind: kindToAdd, cost: '' }];
+                  setRows(next);
+                  if (next.every((row) => isValidCost(row.cost))) setRequested(measuresRequestBody(next));
+                }}
+              >
+                Add and compare
+              </Button>
+            </Stack>
+            {!allCostsValid ? <Alert severity="error">Costs must be numbers of 0 or more.</Alert> : null}
+            <Box component="ul" sx={{ m: 0, pl: 2.5 }}>
+              {result.notes.map((note) => (
+                <Typography component="li" variant="body2" color="text.secondary" key={note}>
+                  {note}
+                </Typography>
+              ))}
+            </Box>
+          </>
+        ) : null}
+      </Stack>
+    </Paper>
+  );
+}

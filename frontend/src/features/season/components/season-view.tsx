@@ -1,0 +1,111 @@
+import { Alert, Grid, MenuItem, Stack, TextField, Typography } from '@mui/material';
+import { useQuery } from '@tanstack/react-query';
+import { useCallback, useState } from 'react';
+import type { SeasonRequest } from '../../../api/types';
+import { ErrorAlert, LoadingState } from '../../../components/feedback';
+import { referenceDataQueryOptions, referenceRows } from '../../../lib/reference-data';
+import type { FuelUnits } from '../../../lib/units';
+import { houseSeasonQueryOptions } from '../queries';
+import { CalendarEditor } from './calendar-editor';
+import { FuelCautions } from './fuel-cautions';
+import { MeasuresPanel } from './measures-panel';
+import { NightDemandPanel } from './night-demand-panel';
+import { DegreeDayPanel, SeasonResultPanel } from './season-result-panel';
+
+/** A stored temperature log the user may run the season on instead of the normals. */
+export interface ClimateLogOption {
+  id: number;
+  name: string;
+  startDate: string;
+  endDate: string;
+}
+
+export interface SeasonViewProps {
+  houseId: number;
+  /** estimate:run */
+  canRun: boolean;
+  /** house:write */
+  canEditCalendar: boolean;
+  logs: ClimateLogOption[];
+}
+
+/** The house's heating season: one night, the hourly season beside the degree-day check, the calendar, measures. */
+export function SeasonView({ houseId, canRun, canEditCalendar, logs }: SeasonViewProps) {
+  const [climateChoice, setClimateChoice] = useState('normals');
+  const climateSource: SeasonRequest['climateSource'] =
+    climateChoice === 'normals' ? 'normals' : { temperatureLogId: Number(climateChoice) };
+  const request: SeasonRequest = { climateSource };
+  const season = useQuery({ ...houseSeasonQueryOptions(houseId, request), enabled: canRun });
+  const referenceData = useQuery(referenceDataQueryOptions());
+  const fuelUnitsFor = useCallback(
+    (fuelId: string): FuelUnits | null => {
+      const row = referenceRows(referenceData.data, 'fuels').find((fuel) => fuel.id === fuelId);
+      return row && typeof row.unitSi === 'string' && typeof row.unitUs === 'string'
+        ? { unitSi: row.unitSi, unitUs: row.unitUs }
+        : null;
+    },
+    [referenceData.data],
+  );
+
+  if (!canRun) {
+    return (
+      <Stack spacing={3}>
+        <Alert severity="info">Your role on this farm does not run estimates; ask a grower or the owner.</Alert>
+        <CalendarEditor houseId={houseId} canEdit={canEditCalendar} />
+      </Stack>
+    );
+  }
+
+  // The night shown first: the evening of the season's coldest hour, else mid-January.
+  const peakDate = season.data?.peak?.at.slice(0, 10);
+  const nightDate = peakDate ?? `${season.data?.period.endDate.slice(0, 4) ?? '2027'}-01-15`;
+
+  return (
+    <Stack spacing={3}>
+      <Stack direction={{ xs: 'column', sm: 'row' }} spacing={2} sx={{ alignItems: { sm: 'center' } }}>
+        <TextField
+          select
+          label="Outdoor temperatures from"
+          value={climateChoice}
+          onChange={(event) => setClimateChoice(event.target.value)}
+          sx={{ maxWidth: 380 }}
+        >
+          <MenuItem value="normals">The farm&apos;s climate normals</MenuItem>
+          {logs.map((log) => (
+            <MenuItem key={log.id} value={String(log.id)}>
+              Log: {log.name} ({log.startDate} to {log.endDate})
+            </MenuItem>
+          ))}
+        </TextField>
+        <Typography variant="body2" color="text.secondary">
+          Logged temperatures limit the season to the days the log covers.
+        </Typography>
+      </Stack>
+
+      {season.isPending ? <LoadingState label="Computing the season hour by hour…" /> : null}
+      <ErrorAlert error={season.error} title="The season could not be computed" />
+      {season.data ? (
+        <>
+          <Grid container spacing={3} sx={{ alignItems: 'stretch' }}>
+            <Grid size={{ xs: 12, lg: 7 }}>
+              <SeasonResultPanel season={season.data} />
+            </Grid>
+            <Grid size={{ xs: 12, lg: 5 }}>
+              <DegreeDayPanel season={season.data} />
+            </Grid>
+          </Grid>
+          <FuelCautions cautions={season.data.cautions} />
+          <NightDemandPanel
+            key={`${nightDate}-${climateChoice}`}
+            houseId={houseId}
+            initialDate={nightDate}
+            climateSource={climateSource}
+            fuelUnitsFor={fuelUnitsFor}
+          />
+        </>
+      ) : null}
+      <CalendarEditor houseId={houseId} canEdit={canEditCalendar} />
+      <MeasuresPanel key={climateChoice} houseId={houseId} climateSource={climateSource} />
+    </Stack>
+  );
+}

@@ -1,0 +1,2 @@
+export { SeasonView, type ClimateLogOption } from './components/season-view';
+export { seasonKeys } from './queries';

@@ -1,0 +1,52 @@
+import { queryOptions } from '@tanstack/react-query';
+import { api } from '../../api/client';
+import type {
+  MeasureComparison,
+  MeasuresRequest,
+  HouseNightDemand,
+  HouseSeasonEstimate,
+  NightDemandRequest,
+  ProductionCalendar,
+  SeasonRequest,
+} from '../../api/types';
+
+/**
+ * Season results are computed on request and stored nowhere: POST reads cached like queries.
+ * Everything sits under 'season' so that a change of prices, climate or calendar refreshes it.
+ */
+export const seasonKeys = {
+  all: ['season'] as const,
+  house: (houseId: number) => [...seasonKeys.all, 'house', houseId] as const,
+  estimate: (houseId: number, request: SeasonRequest) => [...seasonKeys.house(houseId), 'estimate', request] as const,
+  night: (houseId: number, request: NightDemandRequest) => [...seasonKeys.house(houseId), 'night', request] as const,
+  calendar: (houseId: number) => [...seasonKeys.house(houseId), 'calendar'] as const,
+  measures: (houseId: number, request: MeasuresRequest) => [...seasonKeys.house(houseId), 'measures', request] as const,
+};
+
+export const houseSeasonQueryOptions = (houseId: number, request: SeasonRequest) =>
+  queryOptions({
+    queryKey: seasonKeys.estimate(houseId, request),
+    queryFn: ({ signal }) => api.post<HouseSeasonEstimate>(`/api/houses/${houseId}/season`, request, { signal }),
+    staleTime: 5 * 60_000,
+  });
+
+export const nightDemandQueryOptions = (houseId: number, request: NightDemandRequest) =>
+  queryOptions({
+    queryKey: seasonKeys.night(houseId, request),
+    queryFn: ({ signal }) => api.post<HouseNightDemand>(`/api/houses/${houseId}/night-demand`, request, { signal }),
+    staleTime: 5 * 60_000,
+  });
+
+export const productionCalendarQueryOptions = (houseId: number) =>
+  queryOptions({
+    queryKey: seasonKeys.calendar(houseId),
+    queryFn: ({ signal }) => api.get<ProductionCalendar>(`/api/houses/${houseId}/calendar`, { signal }),
+  });
+
+/** Each measure re-runs the season, so the comparison is cached per list of measures and costs. */
+export const measuresQueryOptions = (houseId: number, request: MeasuresRequest) =>
+  queryOptions({
+    queryKey: seasonKeys.measures(houseId, request),
+    queryFn: ({ signal }) => api.post<MeasureComparison>(`/api/houses/${houseId}/measures`, request, { signal }),
+    staleTime: 5 * 60_000,
+  });

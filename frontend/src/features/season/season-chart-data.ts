@@ -1,0 +1,36 @@
+import type { DegreeDayCrossCheck, HouseSeasonEstimate } from '../../api/types';
+import type { Units } from '../../lib/units';
+
+const MONTHS = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'];
+
+export interface SeasonChartSeries {
+  labels: string[];
+  /** fuel per month in the fuel's unit for the user's system */
+  fuel: number[];
+  fuelUnitLabel: string;
+  /** heat delivered per month in the user's energy unit */
+  heat: number[];
+  heatUnitLabel: string;
+}
+
+/** The hourly season's months, oldest first, for the monthly bar chart. */
+export function seasonChartSeries(season: Pick<HouseSeasonEstimate, 'monthly' | 'fuel'>, units: Units): SeasonChartSeries {
+  const months = [...season.monthly].sort((a, b) => a.year - b.year || a.month - b.month);
+  const energyDecimals = units.decimals('energyKWh');
+  return {
+    labels: months.map((month) => `${MONTHS[month.month - 1]} ${month.year}`),
+    fuel: months.map((month) => Math.round(units.fuelValue(month) * 10) / 10),
+    fuelUnitLabel: units.fuelUnit(season.fuel),
+    heat: months.map((month) => Number(units.toDisplay('energyKWh', month.energyKWh).toFixed(energyDecimals))),
+    heatUnitLabel: units.label('energyKWh'),
+  };
+}
+
+/** "12 % lower", "3 % higher", "the same" — the hourly result beside the degree-day one. */
+export function hourlyVersusDegreeDayText(degreeDays: Pick<DegreeDayCrossCheck, 'hourlyDifferenceFraction'>): string {
+  const fraction = degreeDays.hourlyDifferenceFraction;
+  if (fraction === null) return 'The degree-day method finds no heat needed, so there is nothing to compare.';
+  const percent = Math.round(Math.abs(fraction) * 100);
+  if (percent === 0) return 'The hour-by-hour estimate and the degree-day estimate agree to within 1 %.';
+  return `The hour-by-hour estimate is ${percent} % ${fraction < 0 ? 'lower' : 'higher'} than the degree-day estimate.`;
+}

@@ -1,0 +1,2 @@
+export { TemperatureLogsSection } from './components/temperature-logs-section';
+export { farmTemperatureLogsQueryOptions, temperatureLogKeys } from './queries';

@@ -1,0 +1,52 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { api, postForm, uploadWithProgress, type UploadProgress } from '../../api/client';
+import type { TemperatureColumnMapping, TemperatureCsvInspection, TemperatureLog } from '../../api/types';
+import { temperatureLogKeys } from './queries';
+
+function fileForm(file: File, fields: Record<string, string> = {}): FormData {
+  const form = new FormData();
+  for (const [name, value] of Object.entries(fields)) form.append(name, value);
+  // The file part last, so the text fields are read before it.
+  form.append('file', file, file.name);
+  return form;
+}
+
+/** Reads the start of the file on the server and proposes a column mapping; stores nothing. */
+export function useInspectTemperatureCsv(farmId: number) {
+  return useMutation({
+    mutationFn: (file: File) =>
+      postForm<TemperatureCsvInspection>(`/api/farms/${farmId}/temperature-logs/inspect`, fileForm(file)),
+  });
+}
+
+export interface UploadTemperatureLogVariables {
+  file: File;
+  name: string;
+  mapping: TemperatureColumnMapping;
+  onProgress?: (progress: UploadProgress) => void;
+  signal?: AbortSignal;
+}
+
+export function useUploadTemperatureLog(farmId: number) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: ({ file, name, mapping, onProgress, signal }: UploadTemperatureLogVariables) =>
+      uploadWithProgress<TemperatureLog>(
+        `/api/farms/${farmId}/temperature-logs`,
+        fileForm(file, { name, mapping: JSON.stringify(mapping) }),
+        { onProgress, signal },
+      ),
+    onSuccess: () => void queryClient.invalidateQueries({ queryKey: temperatureLogKeys.farm(farmId) }),
+  });
+}
+
+export function useDeleteTemperatureLog(farmId: number) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (logId: number) => api.delete(`/api/temperature-logs/${logId}`),
+    onSuccess: (_result, logId) => {
+      queryClient.removeQueries({ queryKey: temperatureLogKeys.detail(logId) });
+      void queryClient.invalidateQueries({ queryKey: temperatureLogKeys.farm(farmId) });
+    },
+  });
+}
