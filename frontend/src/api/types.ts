@@ -46,6 +46,32 @@ export type MonthlyClimate = Schemas['MonthlyClimateDto'];
 export type AddMemberRequest = Schemas['AddMemberDto'];
 export type UpdateMemberRequest = Schemas['UpdateMemberDto'];
 
+export type HouseSpec = Schemas['HouseSpecDto'];
+export type HeatingConditions = Schemas['HeatingConditionsDto'];
+export type PartialHeatingConditions = Schemas['PartialHeatingConditionsDto'];
+export type HeatingEstimateRequest = Schemas['HeatingEstimateRequestDto'];
+export type HouseHeatingEstimateRequest = Schemas['HouseHeatingEstimateRequestDto'];
+export type HeatingEstimate = Schemas['HeatingEstimateDto'];
+export type HouseHeatingEstimate = Schemas['HouseHeatingEstimateDto'];
+export type HeatingConditionsUsed = Schemas['HeatingConditionsUsedDto'];
+export type HeatingConditionsSource = Schemas['HeatingConditionsSourceDto'];
+export type HeatLossComponent = Schemas['HeatLossComponentDto'];
+export type HeaterSizing = Schemas['HeaterSizingDto'];
+export type CondensationSurface = Schemas['CondensationSurfaceDto'];
+export type HeatingAssumption = Schemas['HeatingAssumptionDto'];
+
+export type CoolingSite = Schemas['CoolingSiteDto'];
+export type CoolingConditions = Schemas['CoolingConditionsDto'];
+export type PartialCoolingConditions = Schemas['PartialCoolingConditionsDto'];
+export type EvaporativePad = Schemas['EvaporativePadDto'];
+export type CoolingEstimateRequest = Schemas['CoolingEstimateRequestDto'];
+export type HouseCoolingEstimateRequest = Schemas['HouseCoolingEstimateRequestDto'];
+export type CoolingEstimate = Schemas['CoolingEstimateDto'];
+export type HouseCoolingEstimate = Schemas['HouseCoolingEstimateDto'];
+export type CoolingConditionsSource = Schemas['CoolingConditionsSourceDto'];
+export type DesignDayHour = Schemas['DesignDayHourDto'];
+export type CoolingAssumption = Schemas['CoolingAssumptionDto'];
+
 export type TemperatureColumnProposal = Schemas['ColumnProposalDto'];
 export type TemperatureCsvInspection = Schemas['TemperatureCsvInspectionDto'];
 export type TemperatureColumnMapping = Schemas['TemperatureColumnMappingDto'];

@@ -3,6 +3,7 @@ import {
   formatQuantity,
   fromDisplay,
   joulesToTherms,
+  quantityOfSiUnit,
   rangeInDisplay,
   toDisplay,
   toInputString,
@@ -133,5 +134,68 @@ describe('units: display', () => {
     // −5 °C = 23 °F and 40 °C = 104 °F exactly: no rounding inward past float noise
     expect(rangeInDisplay('temperature', { min: -5, max: 40 }, 'us')).toEqual({ min: 23, max: 104 });
     expect(rangeInDisplay('length', { min: 2, max: 20 }, 'si')).toEqual({ min: 2, max: 20 });
+  });
+});
+
+describe('units: quantities of the estimate panels (NIST SP 811, Appendix B.8)', () => {
+  it('1 Btu_IT/(h·ft·°F) = 1.730 735 W/(m·K) (SP 811 B.8 "British thermal unit_IT foot per hour square foot degree Fahrenheit", same dimension)', () => {
+    expect(fromDisplay('perimeterFactor', 1, 'us')).toBeCloseTo(1.730735, 6);
+  });
+
+  it('1 Btu_IT/(h·°F) = 0.527 527 W/K (from SP 811 B.8 "British thermal unit_IT per hour" 2.930 711 E-01 W × 1.8)', () => {
+    expect(fromDisplay('conductance', 1, 'us')).toBeCloseTo(0.2930711 * 1.8, 6);
+  });
+
+  it('1 ft/min = 5.08 E-03 m/s exactly (SP 811 B.8 "foot per minute")', () => {
+    expect(fromDisplay('velocity', 1, 'us')).toBeCloseTo(0.00508, 15);
+  });
+
+  it('1 footcandle = 1.076 391 E+01 lx (SP 811 B.8 "footcandle")', () => {
+    expect(fromDisplay('illuminance', 1, 'us')).toBeCloseTo(10.76391, 5);
+  });
+
+  it('1 psi = 6.894 757 E+03 Pa (SP 811 B.8 "pound-force per square inch")', () => {
+    expect(fromDisplay('pressure', 1, 'us')).toBeCloseTo(6894.757, 3);
+    expect(fromDisplay('pressure', 1, 'si')).toBe(1000);
+  });
+
+  it('1 lb/ft³ = 1.601 846 E+01 kg/m³ (SP 811 B.8 "pound per cubic foot")', () => {
+    expect(fromDisplay('density', 1, 'us')).toBeCloseTo(16.01846, 5);
+  });
+
+  it('1 Btu_IT/(lb·°F) = 4.1868 E+03 J/(kg·K) exactly (SP 811 B.8 "British thermal unit_IT per pound degree Fahrenheit")', () => {
+    expect(fromDisplay('specificHeat', 1, 'us')).toBeCloseTo(4186.8, 9);
+  });
+
+  it('combustion-air area: 1 in² per 2,500 Btu/h is 8.805 E-07 m²/W, from SP 811 B.8 "square inch" (6.4516 E-04 m²) and "British thermal unit_IT per hour"', () => {
+    expect(fromDisplay('areaPerPower', 0.4, 'us')).toBeCloseTo(6.4516e-4 / (2500 * 0.2930711), 12);
+    expect(toDisplay('areaPerPower', 8.805e-7, 'si')).toBeCloseTo(8.805, 9); // cm² per kW
+  });
+
+  it('round trip for the new quantities in both systems', () => {
+    const quantities: Quantity[] = [
+      'perimeterFactor', 'conductance', 'velocity', 'illuminance', 'pressure', 'density', 'specificHeat', 'areaPerPower',
+    ];
+    for (const quantity of quantities) {
+      for (const system of ['si', 'us'] as const) {
+        const back = fromDisplay(quantity, toDisplay(quantity, 1.2345, system), system);
+        expect(back, `${quantity} ${system}`).toBeCloseTo(1.2345, 9);
+      }
+    }
+  });
+
+  it('maps the API\'s unit strings to quantities and leaves system-free units alone', () => {
+    expect(quantityOfSiUnit('W/(m²·K)')).toBe('uValue');
+    expect(quantityOfSiUnit('°C')).toBe('temperature');
+    expect(quantityOfSiUnit('m³/(s·m²)')).toBe('airFlowPerFloorArea');
+    expect(quantityOfSiUnit('1/h')).toBeNull();
+    expect(quantityOfSiUnit('fraction')).toBeNull();
+  });
+});
+
+describe('units: display of values that round to zero', () => {
+  it('shows −0.04 °C as 0.0 °C, not -0.0 °C', () => {
+    expect(formatQuantity('temperature', -0.04, 'si')).toBe('0.0 °C');
+    expect(formatQuantity('temperature', -0.06, 'si')).toBe('-0.1 °C');
   });
 });

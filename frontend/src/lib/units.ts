@@ -18,6 +18,11 @@ export const JOULES_PER_KWH = 3.6e6;
 export const KELVIN_PER_FAHRENHEIT_DEGREE = 5 / 9;
 export const LITRES_PER_US_GALLON = 3.785411784;
 export const KILOGRAMS_PER_POUND = 0.45359237;
+export const SQUARE_METRES_PER_SQUARE_INCH = 0.0254 ** 2; // 6.4516 E-04
+export const LUX_PER_FOOTCANDLE = 1 / SQUARE_METRES_PER_SQUARE_FOOT; // lumen per ft² → lumen per m²
+export const STANDARD_GRAVITY_M_PER_S2 = 9.80665; // defines the pound-force
+/** lbf/in² = 0.453 592 37 kg × 9.806 65 m/s² / (0.0254 m)² */
+export const PASCALS_PER_PSI = (KILOGRAMS_PER_POUND * STANDARD_GRAVITY_M_PER_S2) / SQUARE_METRES_PER_SQUARE_INCH;
 /** 1 therm = 100 000 Btu_IT (the "EC" therm; the US-statute therm on the 59 °F Btu is 0.02 % smaller). */
 export const JOULES_PER_THERM = 1e5 * JOULES_PER_BTU;
 export const JOULES_PER_MMBTU = 1e6 * JOULES_PER_BTU;
@@ -28,6 +33,13 @@ export const WATTS_PER_M2K_PER_BTU_PER_HFT2F =
   WATTS_PER_BTU_PER_HOUR / SQUARE_METRES_PER_SQUARE_FOOT / KELVIN_PER_FAHRENHEIT_DEGREE;
 export const CUBIC_METRES_PER_SECOND_PER_CFM = CUBIC_METRES_PER_CUBIC_FOOT / 60;
 export const M3_PER_S_M2_PER_CFM_PER_FT2 = CUBIC_METRES_PER_SECOND_PER_CFM / SQUARE_METRES_PER_SQUARE_FOOT;
+export const W_PER_MK_PER_BTU_PER_HFTF = WATTS_PER_BTU_PER_HOUR / METRES_PER_FOOT / KELVIN_PER_FAHRENHEIT_DEGREE;
+export const W_PER_K_PER_BTU_PER_HF = WATTS_PER_BTU_PER_HOUR / KELVIN_PER_FAHRENHEIT_DEGREE;
+export const METRES_PER_SECOND_PER_FOOT_PER_MINUTE = METRES_PER_FOOT / 60;
+export const KG_PER_M3_PER_LB_PER_FT3 = KILOGRAMS_PER_POUND / CUBIC_METRES_PER_CUBIC_FOOT;
+export const J_PER_KGK_PER_BTU_PER_LBF = JOULES_PER_BTU / KILOGRAMS_PER_POUND / KELVIN_PER_FAHRENHEIT_DEGREE;
+/** combustion-air inlet sizing: in² of free area per 1000 Btu/h of heater input */
+export const M2_PER_W_PER_IN2_PER_KBTUH = SQUARE_METRES_PER_SQUARE_INCH / (1000 * WATTS_PER_BTU_PER_HOUR);
 
 export type Quantity =
   | 'length'
@@ -47,7 +59,15 @@ export type Quantity =
   | 'energyKWh'
   | 'degreeDays'
   | 'fraction'
-  | 'durationHours';
+  | 'durationHours'
+  | 'perimeterFactor'
+  | 'conductance'
+  | 'velocity'
+  | 'illuminance'
+  | 'pressure'
+  | 'density'
+  | 'specificHeat'
+  | 'areaPerPower';
 
 interface UnitDefinition {
   /** symbol shown after the number */
@@ -117,7 +137,50 @@ const UNITS: Record<Quantity, Record<UnitSystem, UnitDefinition>> = {
   // A share 0–1 shown as a percentage (clearness, light transmission, efficiency).
   fraction: { si: scaled('%', 0.01, 0), us: scaled('%', 0.01, 0) },
   durationHours: { si: scaled('h', 1, 1), us: scaled('h', 1, 1) },
+  // perimeter heat-loss factor F (W per metre of perimeter per kelvin)
+  perimeterFactor: {
+    si: scaled('W/(m·K)', 1, 2),
+    us: scaled('Btu/(h·ft·°F)', W_PER_MK_PER_BTU_PER_HFTF, 3),
+  },
+  // UA of a whole house
+  conductance: { si: scaled('W/K', 1, 0), us: scaled('Btu/(h·°F)', W_PER_K_PER_BTU_PER_HF, 0) },
+  velocity: { si: scaled('m/s', 1, 2), us: scaled('ft/min', METRES_PER_SECOND_PER_FOOT_PER_MINUTE, 0) },
+  illuminance: { si: scaled('lx', 1, 0), us: scaled('fc', LUX_PER_FOOTCANDLE, 0) },
+  pressure: { si: scaled('kPa', 1000, 1), us: scaled('psi', PASCALS_PER_PSI, 2) },
+  density: { si: scaled('kg/m³', 1, 3), us: scaled('lb/ft³', KG_PER_M3_PER_LB_PER_FT3, 4) },
+  specificHeat: { si: scaled('J/(kg·K)', 1, 0), us: scaled('Btu/(lb·°F)', J_PER_KGK_PER_BTU_PER_LBF, 3) },
+  // SI value in m² per W; shown as cm² per kW (1 cm²/kW = 1E-07 m²/W)
+  areaPerPower: { si: scaled('cm²/kW', 1e-7, 1), us: scaled('in² per 1,000 Btu/h', M2_PER_W_PER_IN2_PER_KBTUH, 2) },
 };
+
+/**
+ * The unit strings the API writes beside SI numbers (e.g. in assumption lists) → the quantity that
+ * converts them. Null for units that read the same in both systems (1/h, %, ppm, fraction, counts).
+ */
+const QUANTITY_OF_SI_UNIT: Record<string, Quantity> = {
+  m: 'length',
+  'm²': 'area',
+  'm³': 'volume',
+  '°C': 'temperature',
+  K: 'temperatureDifference',
+  W: 'power',
+  'W/(m²·K)': 'uValue',
+  'W/(m·K)': 'perimeterFactor',
+  'W/K': 'conductance',
+  'm³/s': 'airFlow',
+  'm³/(s·m²)': 'airFlowPerFloorArea',
+  'W/m²': 'irradiance',
+  'm/s': 'velocity',
+  lx: 'illuminance',
+  Pa: 'pressure',
+  'kg/m³': 'density',
+  'J/(kg·K)': 'specificHeat',
+  'm²/W': 'areaPerPower',
+};
+
+export function quantityOfSiUnit(unit: string): Quantity | null {
+  return QUANTITY_OF_SI_UNIT[unit.trim()] ?? null;
+}
 
 export function unitLabel(quantity: Quantity, system: UnitSystem): string {
   return UNITS[quantity][system].label;
@@ -173,7 +236,7 @@ export function formatQuantity(
   const number = new Intl.NumberFormat('en-US', {
     minimumFractionDigits: decimals,
     maximumFractionDigits: decimals,
-  }).format(roundTo(toDisplay(quantity, siValue, system), decimals));
+  }).format(roundTo(toDisplay(quantity, siValue, system), decimals) || 0); // `|| 0`: no "-0.0" for −0.04
   return options.withoutUnit ? number : `${number} ${unitLabel(quantity, system)}`;
 }
 
@@ -250,7 +313,7 @@ export function fuelUnitIn(units: FuelUnits, system: UnitSystem): string {
 /** Decimals for a fuel amount: whole units for large amounts, more for small ones. */
 function fuelDecimals(value: number): number {
   const magnitude = Math.abs(value);
-  if (magnitude >= 100) return 0;
+  if (magnitude >= 100 || magnitude === 0) return 0;
   if (magnitude >= 1) return 1;
   return 2;
 }
