@@ -40,6 +40,11 @@ export interface HouseFormProps {
   submitLabel?: string;
   /** extra buttons beside Save (e.g. Delete) */
   actions?: ReactNode;
+  /**
+   * Told the current values on every change (and once at the start), converted to SI as on
+   * submit; `null` while they are invalid. `dirty` says whether they differ from the stored house.
+   */
+  onValuesChange?: (input: HouseInput | null, state: { dirty: boolean }) => void;
 }
 
 function Section({ id, title, children }: { id: string; title: string; children: ReactNode }) {
@@ -66,6 +71,30 @@ function FollowUnitSystem({ units, initialValues }: { units: Units; initialValue
     if (edited) void setValues(edited, true);
     // Runs only when the unit system changes; values/dirty are read at that moment on purpose.
   }, [units, initialValues]);
+  return null;
+}
+
+/** Reports the form's values upward (SI, or null while invalid) as the user edits. */
+function ReportValues({
+  schema,
+  initialValues,
+  house,
+  units,
+  onValuesChange,
+}: {
+  schema: ReturnType<typeof houseFormSchema>;
+  initialValues: HouseFormValues;
+  house: HouseInput;
+  units: Units;
+  onValuesChange: NonNullable<HouseFormProps['onValuesChange']>;
+}) {
+  const { values, dirty } = useFormikContext<HouseFormValues>();
+  const report = useRef(onValuesChange);
+  report.current = onValuesChange;
+  useEffect(() => {
+    const valid = schema.isValidSync(values);
+    report.current(valid ? formValuesToHouseInput(values, initialValues, house, units) : null, { dirty });
+  }, [values, dirty, schema, initialValues, house, units]);
   return null;
 }
 
@@ -97,7 +126,15 @@ function newHeaterRow(referenceData: ReferenceData, units: Units): HeaterFormVal
   };
 }
 
-export function HouseForm({ house, referenceData, onSubmit, readOnly = false, submitLabel = 'Save house', actions }: HouseFormProps) {
+export function HouseForm({
+  house,
+  referenceData,
+  onSubmit,
+  readOnly = false,
+  submitLabel = 'Save house',
+  actions,
+  onValuesChange,
+}: HouseFormProps) {
   const units = useUnits();
   const schema = useMemo(() => houseFormSchema(units), [units]);
   const initialValues = useMemo(() => houseToFormValues(house, units), [house, units]);
@@ -148,6 +185,15 @@ export function HouseForm({ house, referenceData, onSubmit, readOnly = false, su
       {({ values, isSubmitting, dirty }) => (
         <FormReadOnlyContext.Provider value={readOnly}>
           <FollowUnitSystem units={units} initialValues={initialValues} />
+          {onValuesChange ? (
+            <ReportValues
+              schema={schema}
+              initialValues={initialValues}
+              house={house}
+              units={units}
+              onValuesChange={onValuesChange}
+            />
+          ) : null}
           <Form noValidate aria-label="House details">
             <Stack spacing={2}>
               {readOnly ? (
