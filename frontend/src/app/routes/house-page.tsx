@@ -1,11 +1,14 @@
-import { Box, Breadcrumbs, Button, Grid, Link, Paper, Stack, Typography } from '@mui/material';
+import { Box, Breadcrumbs, Button, Grid, Link, Stack, Typography } from '@mui/material';
 import { useQuery } from '@tanstack/react-query';
-import { useMemo, useState } from 'react';
+import { useCallback, useMemo, useState } from 'react';
 import { Link as RouterLink, useNavigate, useParams } from 'react-router-dom';
 import { ConfirmDialog } from '../../components/confirm-dialog';
 import { ErrorAlert, LoadingState } from '../../components/feedback';
 import { paths } from '../../config/paths';
+import type { HouseInput, HouseSpec } from '../../api/types';
+import { CoolingPanel } from '../../features/cooling-estimate';
 import { farmAllows, farmDetailQueryOptions } from '../../features/farms';
+import { HeatingPanel } from '../../features/heating-estimate';
 import {
   HouseForm,
   houseDetailQueryOptions,
@@ -13,7 +16,18 @@ import {
   useDeleteHouse,
   useUpdateHouse,
 } from '../../features/houses';
+import { houseSpecOf } from '../../lib/house-spec';
 import { referenceDataQueryOptions } from '../../lib/reference-data';
+import { useDebouncedValue } from '../../lib/use-debounced-value';
+
+/** The form's unsaved edits as the result panels use them: null spec = show the stored house. */
+interface FormEdits {
+  houseId: number | null;
+  editedHouse: HouseSpec | null;
+  editsInvalid: boolean;
+}
+
+const NO_EDITS: FormEdits = { houseId: null, editedHouse: null, editsInvalid: false };
 
 /**
  * One house: its form on the left, a column of result panels on the right.
@@ -29,6 +43,18 @@ export default function HousePage() {
   const navigate = useNavigate();
   const [confirmingDelete, setConfirmingDelete] = useState(false);
   const houseInput = useMemo(() => (house.data ? houseInputOf(house.data) : undefined), [house.data]);
+  // Panels follow the form as the user types (debounced); invalid values keep the last valid ones.
+  const [formEdits, setFormEdits] = useState<FormEdits>(NO_EDITS);
+  const onFormValuesChange = useCallback((input: HouseInput | null, { dirty }: { dirty: boolean }) => {
+    setFormEdits((previous) => {
+      if (!dirty) return previous === NO_EDITS ? previous : NO_EDITS;
+      if (!input) return { houseId, editedHouse: previous.editedHouse, editsInvalid: true };
+      return { houseId, editedHouse: houseSpecOf(input), editsInvalid: false };
+    });
+  }, [houseId]);
+  const debouncedEdits = useDebouncedValue(formEdits, 400);
+  // Never another house's edits (the page stays mounted when moving between houses).
+  const settledEdits = debouncedEdits.houseId === houseId ? debouncedEdits : NO_EDITS;
 
   if (house.isError) return <ErrorAlert error={house.error} title="House could not be loaded" />;
   if (farm.isError) return <ErrorAlert error={farm.error} title="Farm could not be loaded" />;
@@ -38,6 +64,7 @@ export default function HousePage() {
   if (!house.data || !houseInput || !farm.data || !referenceData.data) return <LoadingState label="Loading house…" />;
 
   const canWrite = farmAllows(farm.data, 'house:write');
+  const canRunEstimates = farmAllows(farm.data, 'estimate:run');
 
   return (
     <Stack spacing={2}>
@@ -64,6 +91,7 @@ export default function HousePage() {
             onSubmit={async (input) => {
               await updateHouse.mutateAsync(input);
             }}
+            onValuesChange={onFormValuesChange}
             actions={
               canWrite ? (
                 <Button color="error" onClick={() => setConfirmingDelete(true)}>
@@ -75,11 +103,8 @@ export default function HousePage() {
         </Grid>
 
         <Grid size={{ xs: 12, lg: 5 }}>
-          <Box
-            component="aside"
-            aria-labelledby="house-results-heading"
-            sx={{ position: { lg: 'sticky' }, top: { lg: 88 } }}
-          >
+          {/* Not sticky: the result panels are taller than the window. */}
+          <Box component="aside" aria-labelledby="house-results-heading">
             <Typography id="house-results-heading" variant="h2" sx={{ mb: 2 }}>
               Results
             </Typography>
@@ -89,12 +114,20 @@ export default function HousePage() {
                 each taking the stored house (SI) and its farm, e.g.
                   <HeatingPanel house={house.data} farm={farm.data} />
                 Panels come from their own features; this page is where they meet the house.
+                `settledEdits` carries the form's unsaved values (debounced) for panels that follow them.
               */}
-              <Paper sx={{ p: 2, borderStyle: 'dashed' }}>
-                <Typography color="text.secondary">
-                  Heating, cooling and season results for this house will appear here.
-                </Typography>
-              </Paper>
+              <HeatingPanel
+                house={house.data}
+                canRunEstimates={canRunEstimates}
+                editedHouse={settledEdits.editedHouse}
+                editsInvalid={settledEdits.editsInvalid}
+              />
+              <CoolingPanel
+                house={house.data}
+                canRunEstimates={canRunEstimates}
+                editedHouse={settledEdits.editedHouse}
+                editsInvalid={settledEdits.editsInvalid}
+              />
             </Stack>
           </Box>
         </Grid>

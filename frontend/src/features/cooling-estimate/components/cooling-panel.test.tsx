@@ -1,0 +1,137 @@
+import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
+import { render, screen, waitFor } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
+import type { ReactNode } from 'react';
+import { MemoryRouter } from 'react-router-dom';
+import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
+import { api, ApiError } from '../../../api/client';
+import type { HouseSpec } from '../../../api/types';
+import { houseSpecOf } from '../../../lib/house-spec';
+import { UnitSystemProvider, type UnitSystem } from '../../../lib/units';
+import { demoHouseB, demoHouseBCooling } from '../../../test/estimate-fixtures';
+import { referenceDataFixture } from '../../../test/fixtures';
+import { CoolingPanel, type CoolingPanelProps } from './cooling-panel';
+
+vi.mock('../../../api/client', async (importOriginal) => {
+  const actual = await importOriginal<typeof import('../../../api/client')>();
+  return { ...actual, api: { get: vi.fn(), post: vi.fn(), patch: vi.fn(), delete: vi.fn() } };
+});
+
+const post = vi.mocked(api.post);
+const get = vi.mocked(api.get);
+
+const referenceData = {
+  ...referenceDataFixture,
+  'evaporative-pads': {
+    title: 'Pads',
+    description: 'test rows',
+    rows: [{ id: 'cellulose-100mm', label: 'Cellulose pad, 100 mm', source: 'test', confidence: 'memory' }],
+  },
+};
+
+function renderPanel(props: Partial<CoolingPanelProps> = {}, system: UnitSystem = 'si') {
+  const queryClient = new QueryClient({ defaultOptions: { queries: { retry: false } } });
+  const wrapper = ({ children }: { children: ReactNode }) => (
+    <QueryClientProvider client={queryClient}>
+      <UnitSystemProvider system={system}>
+        <MemoryRouter>{children}</MemoryRouter>
+      </UnitSystemProvider>
+    </QueryClientProvider>
+  );
+  return render(<CoolingPanel house={demoHouseB} canRunEstimates {...props} />, { wrapper });
+}
+
+beforeEach(() => {
+  get.mockImplementation(async (path: string) => {
+    if (path === '/api/reference-data') return referenceData as never;
+    throw new Error(`unexpected GET ${path}`);
+  });
+  post.mockImplementation(async (path: string) => {
+    if (path === `/api/houses/${demoHouseB.id}/cooling`) return demoHouseBCooling as never;
+    throw new Error(`unexpected POST ${path}`);
+  });
+});
+
+afterEach(() => {
+  vi.clearAllMocks();
+});
+
+describe('CoolingPanel', () => {
+  it('flags the undersized fans with the number of fans needed', async () => {
+    renderPanel();
+    const verdict = await screen.findByTestId('fan-verdict');
+    expect(verdict.textContent).toContain('Fans are short');
+    expect(verdict.textContent).toContain('3.78 m³/s installed against 7.55 m³/s required');
+    expect(verdict.textContent).toContain('2 fans of this size are needed in all (add 1)');
+    expect(screen.getByText('27.5 per hour · 0.46 per minute')).toBeTruthy();
+    expect(screen.getByText(/1.2 m² entered, 3.7 m² needed/)).toBeTruthy();
+    expect(screen.getByTestId('hours-not-held').textContent).toBe('15 (solar 7–21 h)');
+  });
+
+  it('carries the electrical and backdraft cautions', async () => {
+    renderPanel();
+    await screen.findByTestId('fan-verdict');
+    const cautions = screen.getByRole('note');
+    expect(cautions.textContent).toMatch(/qualified electrician with ground-fault protection/);
+    expect(cautions.textContent).toMatch(/backdrafting/);
+  });
+
+  it('shows flows in cfm and cfm/ft² to a US user', async () => {
+    renderPanel({}, 'us');
+    const verdict = await screen.findByTestId('fan-verdict');
+    // 3.776 m³/s ÷ 4.719 474 E-04 = 8,001 cfm (NIST SP 811 B.8 "cubic foot per minute")
+    expect(verdict.textContent).toContain('8,001 cfm installed');
+    expect(screen.getByText('4.2 cfm/ft²')).toBeTruthy();
+  });
+
+  it('sends an evaporative pad what-if in SI', async () => {
+    const user = userEvent.setup();
+    renderPanel({}, 'us');
+    await screen.findByTestId('fan-verdict');
+    await user.click(screen.getByRole('combobox', { name: /Evaporative pads/ }));
+    await user.click(await screen.findByRole('option', { name: 'Cellulose pad, 100 mm' }));
+    await user.type(screen.getByRole('textbox', { name: /Pad face area/ }), '100');
+    // 100 ft² = 9.290 304 m² (NIST SP 811 B.8 "square foot", exact)
+    await waitFor(() =>
+      expect(post).toHaveBeenCalledWith(
+        `/api/houses/${demoHouseB.id}/cooling`,
+        { conditions: { evaporativePad: { padTypeId: 'cellulose-100mm', areaM2: expect.closeTo(9.290304, 9) } } },
+        expect.anything(),
+      ),
+    );
+  });
+
+  it('computes unsaved edits on the stateless route with the farm site and conditions', async () => {
+    const edited: HouseSpec = { ...houseSpecOf(demoHouseB), exhaustFans: { count: 2, capacityEachM3PerS: 3.776 } };
+    post.mockImplementation(async (path: string) => {
+      if (path === `/api/houses/${demoHouseB.id}/cooling`) return demoHouseBCooling as never;
+      if (path === '/api/estimates/cooling') {
+        return {
+          ...demoHouseBCooling,
+          capacity: { ...demoHouseBCooling.capacity, installedFlowM3PerS: 7.552, verdict: 'adequate', additionalFansNeeded: 0 },
+        } as never;
+      }
+      throw new Error(`unexpected POST ${path}`);
+    });
+    renderPanel({ editedHouse: edited });
+    await waitFor(() => expect(screen.getByTestId('fan-verdict').textContent).toContain('Fans are adequate'));
+    expect(post).toHaveBeenCalledWith(
+      '/api/estimates/cooling',
+      { house: edited, site: demoHouseBCooling.siteUsed, conditions: demoHouseBCooling.conditionsUsed },
+      expect.anything(),
+    );
+  });
+
+  it('links to the farm page when the farm has no climate', async () => {
+    post.mockRejectedValue(new ApiError(422, 'no climate', 'conditions.summerDesignC'));
+    renderPanel();
+    expect(await screen.findByText('This farm has no climate yet')).toBeTruthy();
+    expect(screen.getByRole('link', { name: 'farm page' }).getAttribute('href')).toBe(`/farms/${demoHouseB.farmId}`);
+  });
+
+  it('tells a viewer why there is no result, without asking the API', () => {
+    renderPanel({ canRunEstimates: false });
+    expect(screen.getByRole('note').textContent).toMatch(/not run cooling estimates/);
+    expect(post).not.toHaveBeenCalled();
+  });
+});

@@ -1,0 +1,2 @@
+export { CoolingPanel, type CoolingPanelProps } from './components/cooling-panel';
+export { coolingEstimateKeys } from './queries';

@@ -1,0 +1,54 @@
+import { queryOptions } from '@tanstack/react-query';
+import { api } from '../../api/client';
+import type {
+  CoolingConditions,
+  CoolingEstimate,
+  CoolingSite,
+  HouseCoolingEstimate,
+  HouseSpec,
+  PartialCoolingConditions,
+} from '../../api/types';
+
+/**
+ * Keys: ['estimates', 'cooling', houseId, 'stored', storedVersion, conditions] for the stored
+ * house (its updatedAt makes a save refetch) and ['estimates', 'cooling', houseId, 'edited',
+ * { spec, site, conditions }] for unsaved edits.
+ */
+export const coolingEstimateKeys = {
+  all: ['estimates', 'cooling'] as const,
+  house: (houseId: number) => [...coolingEstimateKeys.all, houseId] as const,
+  stored: (houseId: number, storedVersion: string, conditions: PartialCoolingConditions) =>
+    [...coolingEstimateKeys.house(houseId), 'stored', storedVersion, conditions] as const,
+  edited: (houseId: number, spec: HouseSpec, site: CoolingSite, conditions: CoolingConditions) =>
+    [...coolingEstimateKeys.house(houseId), 'edited', { spec, site, conditions }] as const,
+};
+
+/** Keep the previous result on screen while the next computes, but never another house's. */
+const sameHouse = (houseId: number, previousKey: readonly unknown[] | undefined) => previousKey?.[2] === houseId;
+
+export const storedCoolingEstimateQueryOptions = (
+  houseId: number,
+  storedVersion: string,
+  conditions: PartialCoolingConditions,
+) =>
+  queryOptions({
+    queryKey: coolingEstimateKeys.stored(houseId, storedVersion, conditions),
+    queryFn: ({ signal }) =>
+      api.post<HouseCoolingEstimate>(`/api/houses/${houseId}/cooling`, { conditions }, { signal }),
+    placeholderData: (previous, previousQuery) => (sameHouse(houseId, previousQuery?.queryKey) ? previous : undefined),
+    // The farm's climate may have changed on the farm page: ask again whenever the panel mounts.
+    staleTime: 0,
+  });
+
+export const editedCoolingEstimateQueryOptions = (
+  houseId: number,
+  spec: HouseSpec,
+  site: CoolingSite,
+  conditions: CoolingConditions,
+) =>
+  queryOptions({
+    queryKey: coolingEstimateKeys.edited(houseId, spec, site, conditions),
+    queryFn: ({ signal }) =>
+      api.post<CoolingEstimate>('/api/estimates/cooling', { house: spec, site, conditions }, { signal }),
+    placeholderData: (previous, previousQuery) => (sameHouse(houseId, previousQuery?.queryKey) ? previous : undefined),
+  });

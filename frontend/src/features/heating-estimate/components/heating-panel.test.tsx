@@ -1,0 +1,156 @@
+import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
+import { render, screen, waitFor, within } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
+import type { ReactNode } from 'react';
+import { MemoryRouter } from 'react-router-dom';
+import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
+import { api, ApiError } from '../../../api/client';
+import type { HouseSpec } from '../../../api/types';
+import { houseSpecOf } from '../../../lib/house-spec';
+import { UnitSystemProvider, type UnitSystem } from '../../../lib/units';
+import { demoHouseB, demoHouseBHeating } from '../../../test/estimate-fixtures';
+import { referenceDataFixture } from '../../../test/fixtures';
+import { HeatingPanel, type HeatingPanelProps } from './heating-panel';
+
+vi.mock('../../../api/client', async (importOriginal) => {
+  const actual = await importOriginal<typeof import('../../../api/client')>();
+  return { ...actual, api: { get: vi.fn(), post: vi.fn(), patch: vi.fn(), delete: vi.fn() } };
+});
+
+const post = vi.mocked(api.post);
+const get = vi.mocked(api.get);
+
+const referenceData = {
+  ...referenceDataFixture,
+  coverings: {
+    ...referenceDataFixture.coverings!,
+    rows: [{ id: 'poly-single', label: 'Single polyethylene film', layers: 1, source: 'test', confidence: 'memory' }],
+  },
+};
+
+function renderPanel(props: Partial<HeatingPanelProps> = {}, system: UnitSystem = 'si') {
+  const queryClient = new QueryClient({ defaultOptions: { queries: { retry: false } } });
+  const wrapper = ({ children }: { children: ReactNode }) => (
+    <QueryClientProvider client={queryClient}>
+      <UnitSystemProvider system={system}>
+        <MemoryRouter>{children}</MemoryRouter>
+      </UnitSystemProvider>
+    </QueryClientProvider>
+  );
+  return render(<HeatingPanel house={demoHouseB} canRunEstimates {...props} />, { wrapper });
+}
+
+beforeEach(() => {
+  get.mockImplementation(async (path: string) => {
+    if (path === '/api/reference-data') return referenceData as never;
+    throw new Error(`unexpected GET ${path}`);
+  });
+  post.mockImplementation(async (path: string) => {
+    if (path === `/api/houses/${demoHouseB.id}/estimate`) return demoHouseBHeating as never;
+    throw new Error(`unexpected POST ${path}`);
+  });
+});
+
+afterEach(() => {
+  vi.clearAllMocks();
+});
+
+describe('HeatingPanel', () => {
+  it('shows the design loss in kW, the heater shortfall and the conditions with their source', async () => {
+    renderPanel();
+    expect(await screen.findByTestId('heating-total')).toHaveProperty('textContent', '96.6 kW');
+    expect(post).toHaveBeenCalledWith(`/api/houses/${demoHouseB.id}/estimate`, { conditions: {} }, expect.anything());
+
+    const verdict = screen.getByTestId('heater-verdict');
+    expect(verdict.textContent).toContain('Heaters are short by 40.8 kW');
+    expect(verdict.textContent).toContain('111.1 kW required');
+    expect(screen.getByText('Design outdoor (farm climate)')).toBeTruthy();
+    expect(screen.getByText('-29.0 °C')).toBeTruthy();
+    // one unit: what it alone holds, and the advice to split
+    expect(screen.getByText(/A single unit is all the heat/).textContent).toContain('at least 2 units');
+  });
+
+  it('reads single poly clearly in the condensation verdict and marks weak sources', async () => {
+    renderPanel();
+    await screen.findByTestId('heating-total');
+    const table = screen.getByRole('table', { name: 'Condensation by surface' });
+    expect(within(table).getAllByText('single layer:')).toHaveLength(3);
+    expect(within(table).getAllByText('drips')).toHaveLength(3);
+    expect(screen.getByTestId('condensation-verdict').textContent).toContain('dew point 7.6 °C');
+    expect(screen.getAllByText('from memory').length).toBeGreaterThan(0);
+    expect(screen.getAllByText('rule of thumb').length).toBeGreaterThan(0);
+    expect(screen.getByRole('note').textContent).toMatch(/carbon monoxide/i);
+  });
+
+  it('speaks Btu/h and °F to a US user', async () => {
+    renderPanel({}, 'us');
+    expect((await screen.findByTestId('heating-total')).textContent).toBe('329,748 Btu/h');
+    expect(screen.getByText('-20.2 °F')).toBeTruthy();
+  });
+
+  it('tells a viewer why there is no result, without asking the API', () => {
+    renderPanel({ canRunEstimates: false });
+    expect(screen.getByRole('note').textContent).toMatch(/not run heating estimates/);
+    expect(post).not.toHaveBeenCalled();
+  });
+
+  it('turns a 403 into the same note', async () => {
+    post.mockRejectedValue(new ApiError(403, 'Forbidden'));
+    renderPanel();
+    expect((await screen.findByRole('note')).textContent).toMatch(/not run heating estimates/);
+  });
+
+  it('links to the farm page when the farm has no climate', async () => {
+    post.mockRejectedValue(new ApiError(422, 'no climate', 'conditions.designOutdoorC'));
+    renderPanel();
+    expect(await screen.findByText('This farm has no climate yet')).toBeTruthy();
+    expect(screen.getByRole('link', { name: 'farm page' }).getAttribute('href')).toBe(`/farms/${demoHouseB.farmId}`);
+  });
+
+  it('computes unsaved edits on the stateless route with the farm conditions, not the stored setpoint', async () => {
+    const edited: HouseSpec = { ...houseSpecOf(demoHouseB), setpoints: { ...demoHouseB.setpoints, nightHeatingC: 15 } };
+    post.mockImplementation(async (path: string) => {
+      if (path === `/api/houses/${demoHouseB.id}/estimate`) return demoHouseBHeating as never;
+      if (path === '/api/estimates') {
+        return { ...demoHouseBHeating, heatLoss: { ...demoHouseBHeating.heatLoss, insideC: 15, totalW: 109_000 } } as never;
+      }
+      throw new Error(`unexpected POST ${path}`);
+    });
+    renderPanel({ editedHouse: edited });
+    await waitFor(() => expect(screen.getByTestId('heating-total').textContent).toBe('109.0 kW'));
+    expect(post).toHaveBeenCalledWith(
+      '/api/estimates',
+      {
+        house: edited,
+        conditions: { designOutdoorC: -29, elevationM: 313, insideRelativeHumidityPct: 85, curtainClosed: false },
+      },
+      expect.anything(),
+    );
+    expect(screen.getByText('Unsaved edits')).toBeTruthy();
+  });
+
+  it('sends a what-if design temperature typed in °F as °C', async () => {
+    const user = userEvent.setup();
+    renderPanel({}, 'us');
+    await screen.findByTestId('heating-total');
+    await user.type(screen.getByRole('textbox', { name: /Design outdoor/ }), '-31');
+    // −31 °F = −35 °C
+    await waitFor(() =>
+      expect(post).toHaveBeenCalledWith(
+        `/api/houses/${demoHouseB.id}/estimate`,
+        { conditions: { designOutdoorC: expect.closeTo(-35, 9) } },
+        expect.anything(),
+      ),
+    );
+  });
+
+  it('refuses a what-if temperature outside the shared bounds and does not send it', async () => {
+    const user = userEvent.setup();
+    renderPanel();
+    await screen.findByTestId('heating-total');
+    await user.type(screen.getByRole('textbox', { name: /Design outdoor/ }), '-80');
+    expect(await screen.findByText('Between -50 and 25 °C')).toBeTruthy();
+    await new Promise((resolve) => setTimeout(resolve, 500));
+    expect(post.mock.calls.every(([, body]) => JSON.stringify(body) === '{"conditions":{}}')).toBe(true);
+  });
+});

@@ -1,0 +1,2 @@
+export { HeatingPanel, type HeatingPanelProps } from './components/heating-panel';
+export { heatingEstimateKeys } from './queries';
