@@ -34,3 +34,16 @@ export function hourlyVersusDegreeDayText(degreeDays: Pick<DegreeDayCrossCheck, 
   if (percent === 0) return 'The hour-by-hour estimate and the degree-day estimate agree to within 1 %.';
   return `The hour-by-hour estimate is ${percent} % ${fraction < 0 ? 'lower' : 'higher'} than the degree-day estimate.`;
 }
+
+/**
+ * The evening a night begins, for a local time within it: an hour before noon belongs to the
+ * night that began the evening before ('2027-01-16T08:00' → '2027-01-15').
+ */
+export function nightStartDate(localTime: string): string {
+  const [datePart = '', timePart = '00:00'] = localTime.split('T');
+  const hour = Number(timePart.slice(0, 2));
+  if (hour >= 12) return datePart;
+  const [year, month, day] = datePart.split('-').map(Number) as [number, number, number];
+  const previous = new Date(Date.UTC(year, month - 1, day - 1));
+  return previous.toISOString().slice(0, 10);
+}

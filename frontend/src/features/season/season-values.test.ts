@@ -3,7 +3,7 @@ import type { HouseSeasonEstimate, MeasureComparison, MeasureResult } from '../.
 import { unitsFor } from '../../lib/units';
 import { calendarFormSchema, calendarFormValues, isMonthDay, toCalendarInput } from './calendar-values';
 import { lightChangeText, measuresRequestBody, paybackText, rowsFromComparison } from './measures-values';
-import { hourlyVersusDegreeDayText, seasonChartSeries } from './season-chart-data';
+import { hourlyVersusDegreeDayText, nightStartDate, seasonChartSeries } from './season-chart-data';
 
 const month = (year: number, monthNumber: number, energyKWh: number, fuelQuantitySi: number, fuelQuantityUs: number) => ({
   year,
@@ -44,6 +44,15 @@ describe('season chart data', () => {
     expect(hourlyVersusDegreeDayText({ hourlyDifferenceFraction: 0.05 })).toContain('5 % higher');
     expect(hourlyVersusDegreeDayText({ hourlyDifferenceFraction: 0.001 })).toContain('agree to within 1 %');
     expect(hourlyVersusDegreeDayText({ hourlyDifferenceFraction: null })).toContain('no heat needed');
+  });
+});
+
+describe('night of the peak hour', () => {
+  it('puts a morning hour in the night that began the evening before, across month and year ends', () => {
+    expect(nightStartDate('2027-01-16T08:00')).toBe('2027-01-15');
+    expect(nightStartDate('2027-01-01T03:00')).toBe('2026-12-31');
+    expect(nightStartDate('2027-03-01T00:00')).toBe('2027-02-28');
+    expect(nightStartDate('2027-01-16T19:00')).toBe('2027-01-16');
   });
 });
 

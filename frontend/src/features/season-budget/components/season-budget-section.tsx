@@ -112,11 +112,11 @@ function BudgetTable({ budget, units }: { budget: SeasonBudget; units: Units }) 
             </TableRow>
           ))}
         </TableBody>
-        <TableFooter>
+        <TableFooter sx={{ '& td, & th': { color: 'text.primary', fontSize: 'body2.fontSize' } }}>
           {budget.byFuel.map((fuel) => (
             <TableRow key={fuel.fuelId}>
               <TableCell component="th" scope="row" colSpan={3}>
-                All {fuel.label.toLowerCase()} ({fuel.houseCount} {fuel.houseCount === 1 ? 'house' : 'houses'})
+                {fuel.label}: {fuel.houseCount} {fuel.houseCount === 1 ? 'house' : 'houses'}
               </TableCell>
               <TableCell align="right">{units.format('energyKWh', fuel.energyKWh)}</TableCell>
               <TableCell align="right">{units.fuel(fuel, fuel)}</TableCell>

@@ -83,7 +83,7 @@ export function MeasuresPanel({ houseId, climateSource }: { houseId: number; cli
                     <TableCell sx={{ minWidth: 120 }}>Cost</TableCell>
                     <TableCell align="right">Saves a season</TableCell>
                     <TableCell align="right">Fuel saved</TableCell>
-                    <TableCell align="right">Heat saved</TableCell>
+                    <TableCell align="right">Heat saved ({units.label('energyKWh')})</TableCell>
                     <TableCell align="right">Payback</TableCell>
                     <TableCell sx={{ minWidth: 180 }}>Light to the crop</TableCell>
                   </TableRow>
@@ -126,8 +126,12 @@ export function MeasuresPanel({ houseId, climateSource }: { houseId: number; cli
                         </TableCell>
                         <TableCell align="right">{units.money(measure.yearlyMoneySaved, 0)}</TableCell>
                         <TableCell align="right">{fuelSaved}</TableCell>
-                        <TableCell align="right">{units.format('energyKWh', measure.heatSavedKWh)}</TableCell>
-                        <TableCell align="right">{paybackText(measure)}</TableCell>
+                        <TableCell align="right">
+                          {units.format('energyKWh', measure.heatSavedKWh, { withoutUnit: true })}
+                        </TableCell>
+                        <TableCell align="right" sx={{ whiteSpace: 'nowrap' }}>
+                          {paybackText(measure)}
+                        </TableCell>
                         <TableCell>{lightChangeText(measure, units)}</TableCell>
                       </TableRow>
                     );

@@ -23,7 +23,7 @@ export function SeasonResultPanel({ season }: { season: HouseSeasonEstimate }) {
         </Typography>
         <Typography variant="body2" color="text.secondary">
           {season.period.startDate} to {season.period.endDate}: {season.period.heatedDays} of {season.period.days} days
-          heated, {season.fuel.label.toLowerCase()} at {units.money(season.fuel.pricePerUnit)} per{' '}
+          heated; {season.fuel.label} at {units.money(season.fuel.pricePerUnit)} per{' '}
           {season.fuel.priceUnitLabel}, heater efficiency {units.format('fraction', season.fuel.heaterEfficiency)}.
         </Typography>
         <Stack direction="row" spacing={3} useFlexGap sx={{ flexWrap: 'wrap' }}>
@@ -145,7 +145,7 @@ export function DegreeDayPanel({ season }: { season: HouseSeasonEstimate }) {
           <TableHead>
             <TableRow>
               <TableCell>Step</TableCell>
-              <TableCell align="right">Heat</TableCell>
+              <TableCell align="right">Heat ({units.label('energyKWh')})</TableCell>
               <TableCell align="right">Change</TableCell>
             </TableRow>
           </TableHead>
@@ -153,11 +153,11 @@ export function DegreeDayPanel({ season }: { season: HouseSeasonEstimate }) {
             {degreeDays.steps.map((step) => (
               <TableRow key={step.key}>
                 <TableCell>{step.label}</TableCell>
-                <TableCell align="right">{units.format('energyKWh', step.energyKWh)}</TableCell>
-                <TableCell align="right">
+                <TableCell align="right">{units.format('energyKWh', step.energyKWh, { withoutUnit: true })}</TableCell>
+                <TableCell align="right" sx={{ whiteSpace: 'nowrap' }}>
                   {step.changeKWh === 0
                     ? '—'
-                    : `${step.changeKWh > 0 ? '+' : '−'}${units.format('energyKWh', Math.abs(step.changeKWh))}`}
+                    : `${step.changeKWh > 0 ? '+' : '−'}${units.format('energyKWh', Math.abs(step.changeKWh), { withoutUnit: true })}`}
                 </TableCell>
               </TableRow>
             ))}

@@ -6,6 +6,7 @@ import { ErrorAlert, LoadingState } from '../../../components/feedback';
 import { referenceDataQueryOptions, referenceRows } from '../../../lib/reference-data';
 import type { FuelUnits } from '../../../lib/units';
 import { houseSeasonQueryOptions } from '../queries';
+import { nightStartDate } from '../season-chart-data';
 import { CalendarEditor } from './calendar-editor';
 import { FuelCautions } from './fuel-cautions';
 import { MeasuresPanel } from './measures-panel';
@@ -56,8 +57,8 @@ export function SeasonView({ houseId, canRun, canEditCalendar, logs }: SeasonVie
     );
   }
 
-  // The night shown first: the evening of the season's coldest hour, else mid-January.
-  const peakDate = season.data?.peak?.at.slice(0, 10);
+  // The night shown first: the one holding the season's peak hour, else mid-January.
+  const peakDate = season.data?.peak ? nightStartDate(season.data.peak.at) : undefined;
   const nightDate = peakDate ?? `${season.data?.period.endDate.slice(0, 4) ?? '2027'}-01-15`;
 
   return (

@@ -1,0 +1,214 @@
+import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import type { Browser, Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { launchBrowser, newPage, saveScreenshot, signIn } from './browser';
+import { DEMO_GROWER } from './e2e-config';
+
+const DEMO_OWNER = { email: 'owner@example.com', password: DEMO_GROWER.password };
+
+let browser: Browser;
+let csvDir: string;
+
+beforeAll(async () => {
+  browser = await launchBrowser();
+  csvDir = mkdtempSync(join(tmpdir(), 'thermbay-e2e-csv-'));
+});
+
+afterAll(async () => {
+  await browser?.close();
+  rmSync(csvDir, { recursive: true, force: true });
+});
+
+async function useUnitSystem(page: Page, system: 'si' | 'us'): Promise<void> {
+  const button = page.getByRole('button', { name: system === 'si' ? 'SI units (metric)' : 'US customary units' });
+  if ((await button.getAttribute('aria-pressed')) !== 'true') await button.click();
+  await expect.poll(() => button.getAttribute('aria-pressed')).toBe('true');
+}
+
+async function openFirstFarmTab(page: Page, tabName: string): Promise<void> {
+  await page.getByRole('grid', { name: 'Farms' }).getByRole('link').first().click();
+  await page.waitForURL(/\/farms\/\d+$/);
+  await page.getByRole('tab', { name: tabName }).click();
+}
+
+/** Three days of hourly readings, a gentle daily swing around −7 °C. */
+function hourlyCsv(): string {
+  const lines = ['Time,Outdoor (°C)'];
+  for (let hour = 0; hour < 72; hour++) {
+    const day = 10 + Math.floor(hour / 24);
+    const clock = String(hour % 24).padStart(2, '0');
+    const celsius = -7 - 3 * Math.cos(((hour % 24) - 15) * (Math.PI / 12));
+    lines.push(`2026-01-${day} ${clock}:00,${celsius.toFixed(1)}`);
+  }
+  return `${lines.join('\n')}\n`;
+}
+
+/** The app bar is sticky: scroll to the top so a full-page screenshot shows it once, at the top. */
+async function screenshot(page: Page, fileName: string): Promise<void> {
+  await page.evaluate(() => window.scrollTo(0, 0));
+  await saveScreenshot(page, fileName);
+}
+
+function writeCsv(name: string, text: string): string {
+  const path = join(csvDir, name);
+  writeFileSync(path, text, 'utf8');
+  return path;
+}
+
+describe('farm climate, temperature logs and the season', () => {
+  it('the grower edits the farm climate and sees it kept after reload', async () => {
+    const { page, pageErrors } = await newPage(browser);
+    await signIn(page, DEMO_GROWER.email, DEMO_GROWER.password);
+    await useUnitSystem(page, 'si');
+    await openFirstFarmTab(page, 'Climate');
+
+    const januaryMin = page.getByRole('textbox', { name: 'January mean daily minimum (°C)' });
+    await januaryMin.waitFor();
+    const original = await januaryMin.inputValue();
+    const changed = String(Number(original) - 0.5);
+    await januaryMin.fill(changed);
+    const note = page.getByRole('textbox', { name: /Source of these numbers/ });
+    const originalNote = await note.inputValue();
+    await note.fill('Edited in a browser test');
+    await page.getByRole('button', { name: 'Save climate' }).click();
+    await page.getByRole('status').filter({ hasText: 'Climate saved.' }).waitFor();
+
+    await page.reload();
+    await januaryMin.waitFor();
+    expect(page.url()).toContain('tab=climate');
+    expect(await januaryMin.inputValue()).toBe(changed);
+    expect(await note.inputValue()).toBe('Edited in a browser test');
+    // The chart of the monthly normals is drawn beside the table.
+    await page.getByRole('img', { name: /monthly mean daily minimum and maximum/ }).locator('canvas').waitFor();
+    await screenshot(page, 'farm-climate.png');
+
+    // Put the demo climate back for the other tests.
+    await januaryMin.fill(original);
+    await note.fill(originalNote);
+    await page.getByRole('button', { name: 'Save climate' }).click();
+    await page.getByRole('status').filter({ hasText: 'Climate saved.' }).waitFor();
+    expect(pageErrors).toEqual([]);
+    await page.context().close();
+  });
+
+  it('the grower uploads hourly temperatures, confirms the columns and sees the log listed', async () => {
+    const { page, pageErrors } = await newPage(browser);
+    await signIn(page, DEMO_GROWER.email, DEMO_GROWER.password);
+    await openFirstFarmTab(page, 'Temperature logs');
+
+    await page.getByLabel('CSV file of temperatures').setInputFiles(writeCsv('north-station-jan.csv', hourlyCsv()));
+    const sample = page.getByRole('table', { name: 'First rows of the file' });
+    await sample.waitFor();
+    expect(await sample.textContent()).toContain('temperature (°C)');
+    await screenshot(page, 'temperature-log-mapping.png');
+
+    await page.getByRole('button', { name: 'Upload log' }).click();
+    await page.getByRole('status').filter({ hasText: 'Stored “north-station-jan”' }).waitFor();
+    const stored = page.getByRole('table', { name: 'Stored temperature logs' });
+    const row = stored.getByRole('row').filter({ hasText: 'north-station-jan' });
+    await row.waitFor();
+    expect(await row.textContent()).toContain('2026-01-10');
+    expect(await row.textContent()).toContain('2026-01-12');
+    await page.getByRole('img', { name: /daily temperatures of north-station-jan/ }).locator('canvas').waitFor();
+    await screenshot(page, 'temperature-logs.png');
+    expect(pageErrors).toEqual([]);
+    await page.context().close();
+  });
+
+  it('a bad CSV shows its problems line by line and nothing is stored', async () => {
+    const { page, pageErrors } = await newPage(browser);
+    await signIn(page, DEMO_GROWER.email, DEMO_GROWER.password);
+    await openFirstFarmTab(page, 'Temperature logs');
+    const stored = page.getByRole('table', { name: 'Stored temperature logs' });
+    await stored.or(page.getByText('No temperature logs stored yet.')).first().waitFor();
+    const rowsBefore = await stored.getByRole('row').count();
+
+    const lines = hourlyCsv().trim().split('\n');
+    lines[3] = '2026-01-10 02:00,abc'; // file line 4
+    lines[6] = 'yesterday,-6.5'; // file line 7
+    await page.getByLabel('CSV file of temperatures').setInputFiles(writeCsv('broken.csv', `${lines.join('\n')}\n`));
+    await page.getByRole('button', { name: 'Upload log' }).click();
+
+    const problems = page.getByRole('list', { name: 'Problems in the file' });
+    await problems.waitFor();
+    const text = (await problems.textContent()) ?? '';
+    expect(text).toContain('Line 4:');
+    expect(text).toContain('Line 7:');
+    expect(await page.getByText('Nothing was stored').count()).toBe(1);
+    await screenshot(page, 'temperature-log-errors.png');
+    expect(await stored.getByRole('row').count()).toBe(rowsBefore);
+    expect(pageErrors).toEqual([]);
+    await page.context().close();
+  });
+
+  it("the owner sees the farm's season cost and downloads the CSV export", async () => {
+    const { page, pageErrors } = await newPage(browser);
+    await signIn(page, DEMO_OWNER.email, DEMO_OWNER.password);
+    await useUnitSystem(page, 'us');
+    await openFirstFarmTab(page, 'Fuel & season budget');
+
+    const cost = page.getByTestId('farm-season-cost');
+    await cost.waitFor({ timeout: 60_000 });
+    expect(Number((await cost.textContent())?.replace(/,/g, ''))).toBeGreaterThan(0);
+    const perHouse = page.getByRole('table', { name: 'Season fuel budget per house' });
+    expect(await perHouse.textContent()).toMatch(/US gal|therm/);
+    expect(await perHouse.textContent()).toContain('MMBtu');
+    await page.getByRole('img', { name: /fuel cost and heat per month/ }).locator('canvas').waitFor();
+    // Fuel-fired heat carries the safety cautions.
+    expect(await page.getByRole('note').textContent()).toMatch(/carbon monoxide/);
+
+    const [download] = await Promise.all([
+      page.waitForEvent('download'),
+      page.getByRole('button', { name: /Export CSV/ }).click(),
+    ]);
+    expect(download.suggestedFilename()).toMatch(/^season-budget-farm-\d+-.*-us\.csv$/);
+    const csv = readFileSync(await download.path(), 'utf8');
+    expect(csv).toContain('MMBtu');
+    expect(csv.split('\n').length).toBeGreaterThan(5);
+    await screenshot(page, 'farm-season-budget.png');
+    await useUnitSystem(page, 'si');
+    expect(pageErrors).toEqual([]);
+    await page.context().close();
+  });
+
+  it('the owner manages members: an unknown e-mail is told to register first, the last owner cannot be removed', async () => {
+    const { page, pageErrors } = await newPage(browser);
+    await signIn(page, DEMO_OWNER.email, DEMO_OWNER.password);
+    await openFirstFarmTab(page, 'Members');
+    const grid = page.getByRole('grid', { name: 'Farm members' });
+    await grid.getByText('grower@example.com').waitFor();
+    expect(await page.getByRole('button', { name: 'Remove owner@example.com' }).isDisabled()).toBe(true);
+
+    await page.getByRole('textbox', { name: /E-mail of a registered user/ }).fill('nobody-yet@example.com');
+    await page.getByRole('button', { name: 'Add member' }).click();
+    await page.getByRole('alert').filter({ hasText: 'Ask them to register first' }).waitFor();
+    await screenshot(page, 'farm-members.png');
+    expect(pageErrors).toEqual([]);
+    await page.context().close();
+  });
+
+  it('the season page shows the monthly chart and the degree-day cross-check', async () => {
+    const { page, pageErrors } = await newPage(browser);
+    await signIn(page, DEMO_GROWER.email, DEMO_GROWER.password);
+    await page.getByRole('grid', { name: 'Farms' }).getByRole('link').first().click();
+    await page.getByRole('grid', { name: 'Houses' }).getByRole('link').first().click();
+    await page.waitForURL(/\/houses\/\d+$/);
+    await page.getByRole('link', { name: /Heating season, fuel budget and measures/ }).click();
+    await page.waitForURL(/\/houses\/\d+\/season$/);
+
+    await page.getByRole('img', { name: 'Monthly chart of fuel and heat for the season' }).locator('canvas').waitFor({ timeout: 60_000 });
+    await page.getByRole('heading', { name: 'Degree-day cross-check' }).waitFor();
+    const difference = await page.getByTestId('degree-day-difference').textContent();
+    expect(difference).toMatch(/hour-by-hour estimate (is \d+ % (lower|higher)|and the degree-day estimate agree)/);
+    expect(await page.getByTestId('season-total-cost').textContent()).toMatch(/\d/);
+    await page.getByTestId('night-length').waitFor({ timeout: 60_000 });
+    expect(await page.getByTestId('night-length').textContent()).toMatch(/\d+(\.\d)? h/);
+    await page.getByRole('table', { name: 'Measures ranked by payback' }).waitFor({ timeout: 60_000 });
+    await page.getByRole('heading', { name: 'Production calendar' }).waitFor();
+    await screenshot(page, 'house-season.png');
+    expect(pageErrors).toEqual([]);
+    await page.context().close();
+  });
+});
