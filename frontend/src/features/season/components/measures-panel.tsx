@@ -66,6 +66,19 @@ export function MeasuresPanel({ houseId, climateSource }: { houseId: number; cli
         </Typography>
         {comparison.isPending ? <LoadingState label="Comparing measures (each re-runs the season)…" /> : null}
         <ErrorAlert error={comparison.error} title="The measures could not be compared" />
+        {comparison.isError && rows && rows.length > 0 && requested.length > 0 ? (
+          <Box>
+            <Button
+              onClick={() => {
+                const fewer = rows.slice(0, -1);
+                setRows(fewer);
+                setRequested(measuresRequestBody(fewer));
+              }}
+            >
+              Remove the last measure ({MEASURE_KIND_LABELS[rows[rows.length - 1]!.kind]})
+            </Button>
+          </Box>
+        ) : null}
         {result && rows ? (
           <>
             {baselineFuel ? (
@@ -124,7 +137,14 @@ export function MeasuresPanel({ houseId, climateSource }: { houseId: number; cli
                             units.money(measure.costAmount, 0)
                           )}
                         </TableCell>
-                        <TableCell align="right">{units.money(measure.yearlyMoneySaved, 0)}</TableCell>
+                        <TableCell align="right">
+                          {units.money(measure.yearlyMoneySaved, 0)}
+                          {measure.yearlyMoneySaved < 0 ? (
+                            <Typography variant="caption" color="warning.main" component="div">
+                              costs more to run
+                            </Typography>
+                          ) : null}
+                        </TableCell>
                         <TableCell align="right">{fuelSaved}</TableCell>
                         <TableCell align="right">
                           {units.format('energyKWh', measure.heatSavedKWh, { withoutUnit: true })}

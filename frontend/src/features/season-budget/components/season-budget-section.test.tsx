@@ -1,0 +1,118 @@
+import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
+import { render, screen, waitFor, within } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
+import { afterEach, describe, expect, it, onTestFinished, vi } from 'vitest';
+import type { SeasonBudget } from '../../../api/types';
+import { UnitSystemProvider } from '../../../lib/units';
+import { SeasonBudgetSection } from './season-budget-section';
+
+const propaneHouse = {
+  houseId: 1,
+  name: 'House A',
+  fuelId: 'propane',
+  fuelLabel: 'Propane',
+  unitSi: 'L',
+  unitUs: 'US gal',
+  heaterEfficiency: 0.8,
+  pricePerUnit: 1.6,
+  priceUnit: 'us' as const,
+  energyKWh: 141_081.37,
+  fuelInputKWh: 176_351.71,
+  fuelQuantitySi: 24_939.75,
+  fuelQuantityUs: 6_588.39,
+  cost: 10_541.42,
+  heatedDays: 228,
+  calendarPeriodCount: 3,
+  monthly: [],
+  problem: null,
+};
+
+const budget: SeasonBudget = {
+  farmId: 3,
+  startDate: '2026-09-01',
+  endDate: '2027-05-31',
+  seasonFrom: 'default-heating-season',
+  climateSource: 'normals',
+  temperatureLogId: null,
+  houses: [propaneHouse, { ...propaneHouse, houseId: 2, name: 'House B', cost: null, problem: 'no price for the fuel' }],
+  byFuel: [
+    {
+      fuelId: 'propane',
+      label: 'Propane',
+      unitSi: 'L',
+      unitUs: 'US gal',
+      houseCount: 2,
+      energyKWh: 282_162.74,
+      fuelInputKWh: 352_703.42,
+      fuelQuantitySi: 49_879.5,
+      fuelQuantityUs: 13_176.78,
+      cost: 10_541.42,
+    },
+  ],
+  totalEnergyKWh: 282_162.74,
+  totalCost: 10_541.42,
+  costComplete: false,
+  monthly: [{ year: 2026, month: 9, energyKWh: 3984.7, fuelInputKWh: 4980.9, cost: 297.73, byFuel: [] }],
+  notes: ['Heat is delivered heat.'],
+  cautions: ['Propane heaters need combustion air and proper venting; carbon monoxide and ethylene.'],
+};
+
+function jsonResponse(body: unknown): Response {
+  return new Response(JSON.stringify(body), { status: 200, headers: { 'content-type': 'application/json' } });
+}
+
+afterEach(() => {
+  vi.unstubAllGlobals();
+  vi.restoreAllMocks();
+});
+
+describe('SeasonBudgetSection', () => {
+  it('shows each house and the farm total in US units, flags unpriced houses, and downloads the US CSV', async () => {
+    const user = userEvent.setup();
+    const fetchMock = vi.fn(async (url: string) =>
+      url.endsWith('.csv?units=us')
+        ? new Response('house,month\n', {
+            status: 200,
+            headers: { 'content-type': 'text/csv', 'content-disposition': 'attachment; filename="season-budget-farm-3-us.csv"' },
+          })
+        : jsonResponse(budget),
+    );
+    vi.stubGlobal('fetch', fetchMock);
+    // jsdom has no object URLs: lend URL the two methods for this test only.
+    const urlMethods = URL as unknown as Record<'createObjectURL' | 'revokeObjectURL', unknown>;
+    const originals = { create: urlMethods.createObjectURL, revoke: urlMethods.revokeObjectURL };
+    urlMethods.createObjectURL = vi.fn(() => 'blob:budget');
+    urlMethods.revokeObjectURL = vi.fn();
+    onTestFinished(() => {
+      urlMethods.createObjectURL = originals.create;
+      urlMethods.revokeObjectURL = originals.revoke;
+    });
+    const clicked: string[] = [];
+    vi.spyOn(HTMLAnchorElement.prototype, 'click').mockImplementation(function record(this: HTMLAnchorElement) {
+      clicked.push(this.download);
+    });
+
+    const client = new QueryClient({ defaultOptions: { queries: { retry: false } } });
+    render(
+      <QueryClientProvider client={client}>
+        <UnitSystemProvider system="us">
+          <SeasonBudgetSection farmId={3} />
+        </UnitSystemProvider>
+      </QueryClientProvider>,
+    );
+
+    expect(await screen.findByTestId('farm-season-cost')).toHaveProperty('textContent', '10,541');
+    const table = screen.getByRole('table', { name: 'Season fuel budget per house' });
+    const houseA = within(table).getByRole('row', { name: /House A/ });
+    // 141 081.37 kWh = 481.39 MMBtu (1 MMBtu = 293.0711 kWh, NIST SP 811 B.8)
+    expect(houseA.textContent).toContain('481.39 MMBtu');
+    expect(houseA.textContent).toContain('6,588 US gal');
+    expect(within(table).getByText('no price for the fuel')).toBeTruthy();
+    expect(screen.getByText(/left out of the total cost/)).toBeTruthy();
+    expect(screen.getByRole('note').textContent).toContain('carbon monoxide');
+
+    await user.click(screen.getByRole('button', { name: 'Export CSV (US units)' }));
+    await waitFor(() => expect(clicked).toEqual(['season-budget-farm-3-us.csv']));
+    expect(fetchMock).toHaveBeenCalledWith('/api/farms/3/season-budget.csv?units=us', expect.anything());
+  });
+});
