@@ -55,6 +55,9 @@ export default async function setup(): Promise<() => Promise<void>> {
       DATABASE_FILE: join(databaseDir, 'thermbay-e2e.sqlite'),
       DEMO_SEED: 'true',
       NODE_ENV: 'test',
+      // Every browser test signs in from the same address; the default 10 a minute would refuse
+      // the later ones with 429 once the suite grows.
+      LOGIN_RATE_LIMIT_PER_MINUTE: '1000',
     },
     stdio: ['ignore', 'pipe', 'pipe'],
   });
