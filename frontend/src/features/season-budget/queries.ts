@@ -13,5 +13,5 @@ export const seasonBudgetQueryOptions = (farmId: number, request: SeasonBudgetRe
   queryOptions({
     queryKey: seasonBudgetKeys.farm(farmId, request),
     queryFn: ({ signal }) => api.post<SeasonBudget>(`/api/farms/${farmId}/season-budget`, request, { signal }),
-    staleTime: 5 * 60_000,
+    staleTime: 0, // the house, climate, prices or calendar may change elsewhere; a rerun is quick
   });

@@ -27,14 +27,14 @@ export const houseSeasonQueryOptions = (houseId: number, request: SeasonRequest)
   queryOptions({
     queryKey: seasonKeys.estimate(houseId, request),
     queryFn: ({ signal }) => api.post<HouseSeasonEstimate>(`/api/houses/${houseId}/season`, request, { signal }),
-    staleTime: 5 * 60_000,
+    staleTime: 0, // the house, climate, prices or calendar may change elsewhere; a rerun is quick
   });
 
 export const nightDemandQueryOptions = (houseId: number, request: NightDemandRequest) =>
   queryOptions({
     queryKey: seasonKeys.night(houseId, request),
     queryFn: ({ signal }) => api.post<HouseNightDemand>(`/api/houses/${houseId}/night-demand`, request, { signal }),
-    staleTime: 5 * 60_000,
+    staleTime: 0, // the house, climate, prices or calendar may change elsewhere; a rerun is quick
   });
 
 export const productionCalendarQueryOptions = (houseId: number) =>
@@ -48,5 +48,5 @@ export const measuresQueryOptions = (houseId: number, request: MeasuresRequest) 
   queryOptions({
     queryKey: seasonKeys.measures(houseId, request),
     queryFn: ({ signal }) => api.post<MeasureComparison>(`/api/houses/${houseId}/measures`, request, { signal }),
-    staleTime: 5 * 60_000,
+    staleTime: 0, // the house, climate, prices or calendar may change elsewhere; a rerun is quick
   });
