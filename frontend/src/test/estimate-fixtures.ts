@@ -100,7 +100,7 @@ export const demoHouseBHeating: HouseHeatingEstimate = {
       },
       {
         "key": "perimeter",
-        "label": "Perimeter (uninsulated perimeter)",
+        "label": "Uninsulated perimeter",
         "quantity": 70.714,
         "quantityUnit": "m",
         "coefficient": 1.38,

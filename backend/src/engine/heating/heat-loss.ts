@@ -244,7 +244,7 @@ export function designHeatLoss(
     ),
     component(
       'perimeter',
-      `Perimeter (${coefficients.rows.perimeter.label.toLowerCase()})`,
+      coefficients.rows.perimeter.label ?? 'Perimeter',
       geometry.perimeterM,
       'm',
       coefficients.perimeterFactorWPerMK,

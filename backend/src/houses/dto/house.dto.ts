@@ -98,8 +98,8 @@ export class HouseSpecDto {
   @IsOptional() @IsString() @Length(1, 80)
   curtainId?: string | null;
 
-  @ApiProperty({ type: HeaterGroupDto, isArray: true })
-  @IsArray() @ArrayMaxSize(10) @ValidateNested({ each: true }) @Type(() => HeaterGroupDto)
+  @ApiProperty({ type: HeaterGroupDto, isArray: true, maxItems: BOUNDS.heaterGroups.max })
+  @IsArray() @ArrayMaxSize(BOUNDS.heaterGroups.max) @ValidateNested({ each: true }) @Type(() => HeaterGroupDto)
   heaters: HeaterGroupDto[];
 
   @ApiProperty({ type: ExhaustFansDto }) @IsObject() @ValidateNested() @Type(() => ExhaustFansDto) exhaustFans: ExhaustFansDto;
@@ -112,8 +112,12 @@ export class HouseSpecDto {
 }
 
 export class CreateHouseDto extends HouseSpecDto {
-  @ApiProperty({ example: 'House 3' }) @IsString() @Length(1, 120) name: string;
-  @ApiPropertyOptional({ nullable: true, type: String }) @IsOptional() @IsString() @MaxLength(4000) notes?: string | null;
+  @ApiProperty({ example: 'House 3', maxLength: BOUNDS.nameLength.max })
+  @IsString() @Length(BOUNDS.nameLength.min, BOUNDS.nameLength.max)
+  name: string;
+  @ApiPropertyOptional({ nullable: true, type: String, maxLength: BOUNDS.notesLength.max })
+  @IsOptional() @IsString() @MaxLength(BOUNDS.notesLength.max)
+  notes?: string | null;
 }
 
 export class UpdateHouseDto extends PartialType(CreateHouseDto) {}

@@ -39,8 +39,12 @@ export function houseFormSchema(units: Units) {
   const optionalU = (label: string) => measured(label, 'uValue', BOUNDS.uValueWPerM2K).optional();
 
   return yup.object({
-    name: yup.string().trim().max(120, 'At most 120 characters').required('Enter a name for the house'),
-    notes: yup.string().max(2000, 'At most 2,000 characters'),
+    name: yup
+      .string()
+      .trim()
+      .max(BOUNDS.nameLength.max, `At most ${BOUNDS.nameLength.max} characters`)
+      .required('Enter a name for the house'),
+    notes: yup.string().max(BOUNDS.notesLength.max, `At most ${BOUNDS.notesLength.max.toLocaleString('en-US')} characters`),
     shape: yup.mixed().oneOf([...HOUSE_SHAPES], 'Choose a shape').required('Choose a shape'),
     spans: counted('Spans', BOUNDS.spans).required('Enter the number of spans'),
     widthM: measured('Width', 'length', BOUNDS.widthM).required('Enter the span width'),
@@ -81,7 +85,7 @@ export function houseFormSchema(units: Units) {
           fuelId: yup.string().required('Choose the fuel'),
         }),
       )
-      .max(20, 'At most 20 heater groups'),
+      .max(BOUNDS.heaterGroups.max, `At most ${BOUNDS.heaterGroups.max} heater groups`),
     exhaustFans: yup.object({
       count: counted('Fan count', BOUNDS.fanCount).required('Enter how many fans'),
       capacityEachM3PerS: measured('Fan capacity', 'airFlow', BOUNDS.fanCapacityM3PerS).required(
