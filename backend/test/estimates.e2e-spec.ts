@@ -1,23 +1,9 @@
 import { DEMO_CLIMATE, DEMO_FARM } from '../src/seed/demo-scenario';
+import { GABLE_HOUSE_SPEC } from './fixtures';
 import { bearer, createTestApp, signIn, type TestApp } from './test-app';
 
 /** A 9 × 30 m freestanding gable house, described in the request (nothing stored). */
-const gableHouse = {
-  shape: 'gable',
-  spans: 1,
-  widthM: 9,
-  lengthM: 30,
-  eaveHeightM: 2.5,
-  ridgeHeightM: 4.5,
-  coverings: { roof: 'poly-double-inflated', sidewalls: 'poly-double-inflated', endwalls: 'polycarbonate-twin-8mm' },
-  airLeakageClassId: 'new-film-double',
-  perimeterInsulated: false,
-  curtainId: null,
-  heaters: [{ count: 2, ratedInputW: 50_000, efficiency: 0.8, fuelId: 'propane' }],
-  exhaustFans: { count: 2, capacityEachM3PerS: 5 },
-  inletAreaM2: 3,
-  setpoints: { dayHeatingC: 18, nightHeatingC: 15, coolingC: 25 },
-};
+const gableHouse = GABLE_HOUSE_SPEC;
 const designNight = { designOutdoorC: -20, elevationM: 0, insideRelativeHumidityPct: 80 };
 const summerDay = { designDate: '2026-07-21', summerDesignC: 32, dailyRangeK: 11, summerDesignWetBulbC: 23 };
 const site = { latitudeDeg: 40, longitudeDeg: -83, elevationM: 250 };

@@ -1,4 +1,5 @@
 import { hourlyCsv, HOURLY_MAPPING } from './temperature-csv';
+import { houseBody as houseBodyNamed } from './fixtures';
 import { bearer, createTestApp, signIn, type TestApp } from './test-app';
 
 /**
@@ -8,22 +9,7 @@ import { bearer, createTestApp, signIn, type TestApp } from './test-app';
 type Who = 'owner' | 'grower' | 'adviser' | 'viewer' | 'outsider' | 'admin';
 const WHO: Who[] = ['owner', 'grower', 'adviser', 'viewer', 'outsider', 'admin'];
 
-const houseBody = {
-  name: 'Matrix house',
-  shape: 'gable',
-  spans: 1,
-  widthM: 9,
-  lengthM: 30,
-  eaveHeightM: 2.5,
-  ridgeHeightM: 4.5,
-  coverings: { roof: 'poly-double-inflated', sidewalls: 'poly-double-inflated', endwalls: 'polycarbonate-twin-8mm' },
-  airLeakageClassId: 'new-film-double',
-  perimeterInsulated: false,
-  heaters: [{ count: 2, ratedInputW: 50000, efficiency: 0.8, fuelId: 'propane' }],
-  exhaustFans: { count: 2, capacityEachM3PerS: 5 },
-  inletAreaM2: 3,
-  setpoints: { dayHeatingC: 18, nightHeatingC: 15, coolingC: 25 },
-};
+const houseBody = houseBodyNamed('Matrix house');
 
 describe('roles × routes (e2e)', () => {
   let t: TestApp;

@@ -1,4 +1,5 @@
 import { hourlyCsv, HOURLY_MAPPING } from './temperature-csv';
+import { houseBody } from './fixtures';
 import { bearer, createTestApp, signIn, type TestApp } from './test-app';
 
 interface House {
@@ -210,22 +211,7 @@ describe('season, calendars, fuel prices and the farm budget (e2e)', () => {
         await t.http
           .post(`/api/farms/${farm.id}/houses`)
           .set(bearer(owner))
-          .send({
-            name: 'Bare house',
-            shape: 'gable',
-            spans: 1,
-            widthM: 9,
-            lengthM: 30,
-            eaveHeightM: 2.5,
-            ridgeHeightM: 4.5,
-            coverings: { roof: 'poly-double-inflated', sidewalls: 'poly-double-inflated', endwalls: 'polycarbonate-twin-8mm' },
-            airLeakageClassId: 'new-film-double',
-            perimeterInsulated: false,
-            heaters: [{ count: 1, ratedInputW: 50000, efficiency: 0.8, fuelId: 'propane' }],
-            exhaustFans: { count: 2, capacityEachM3PerS: 5 },
-            inletAreaM2: 3,
-            setpoints: { dayHeatingC: 18, nightHeatingC: 15, coolingC: 25 },
-          })
+          .send({ ...houseBody('Bare house'), heaters: [{ count: 1, ratedInputW: 50000, efficiency: 0.8, fuelId: 'propane' }] })
           .expect(201)
       ).body;
       const post = (body: object) => t.http.post(`/api/houses/${house.id}/season`).set(bearer(owner)).send(body);
