@@ -22,6 +22,7 @@ import { ErrorAlert, LoadingState } from '../../../components/feedback';
 import { useUnits } from '../../../lib/units';
 import {
   ADDABLE_MEASURE_KINDS,
+  descriptionInUserUnits,
   isValidCost,
   lightChangeText,
   MEASURE_KIND_LABELS,
@@ -116,7 +117,7 @@ export function MeasuresPanel({ houseId, climateSource }: { houseId: number; cli
                             {measure.label}
                           </Typography>
                           <Typography variant="caption" color="text.secondary" component="div">
-                            {measure.description}
+                            {descriptionInUserUnits(measure.description, units)}
                           </Typography>
                           {measure.notes.map((note) => (
                             <Typography variant="caption" color="warning.main" component="div" key={note}>
@@ -145,7 +146,9 @@ export function MeasuresPanel({ houseId, climateSource }: { houseId: number; cli
                             </Typography>
                           ) : null}
                         </TableCell>
-                        <TableCell align="right">{fuelSaved}</TableCell>
+                        <TableCell align="right" sx={{ whiteSpace: 'nowrap' }}>
+                          {fuelSaved}
+                        </TableCell>
                         <TableCell align="right">
                           {units.format('energyKWh', measure.heatSavedKWh, { withoutUnit: true })}
                         </TableCell>

@@ -4,7 +4,7 @@ import { Bar } from 'react-chartjs-2';
 import type { HouseSeasonEstimate } from '../../../api/types';
 import '../../../lib/chart';
 import { useUnits } from '../../../lib/units';
-import { hourlyVersusDegreeDayText, seasonChartSeries } from '../season-chart-data';
+import { explanationInWords, hourlyVersusDegreeDayText, seasonChartSeries, withoutCelsius } from '../season-chart-data';
 import { Fact } from './fuel-cautions';
 
 /** "2027-01-16T08:00" → "2027-01-16 08:00" */
@@ -113,10 +113,6 @@ export function SeasonResultPanel({ season }: { season: HouseSeasonEstimate }) {
  * The API's sentences, minus any that quote SI energy figures (those are shown above in the
  * user's units).
  */
-function explanationInWords(sentences: string[]): string[] {
-  return sentences.filter((sentence) => !/\d\s*kWh/.test(sentence));
-}
-
 /** The degree-day figure beside the hourly one, the gap taken apart effect by effect, in words. */
 export function DegreeDayPanel({ season }: { season: HouseSeasonEstimate }) {
   const units = useUnits();
@@ -133,8 +129,8 @@ export function DegreeDayPanel({ season }: { season: HouseSeasonEstimate }) {
           <Fact label="Cost (degree-day)" value={units.money(degreeDays.cost, 0)} />
         </Stack>
         <Typography variant="body2">
-          Base: {degreeDays.baseDescription}
-          {degreeDays.baseTemperatureC !== null ? ` (${units.format('temperature', degreeDays.baseTemperatureC)})` : ''}.
+          Base: {withoutCelsius(degreeDays.baseDescription)}
+          {degreeDays.baseTemperatureC !== null ? `, ${units.format('temperature', degreeDays.baseTemperatureC)}` : ''}.
           The degree-day method gives {units.format('energyKWh', degreeDays.energyKWh)} of heat; hour by hour gives{' '}
           {units.format('energyKWh', season.total.energyKWh)}.
         </Typography>
