@@ -6,7 +6,11 @@ import { estimateCooling, type CoolingConditions, type CoolingInput } from './es
 import { computeHouseGeometry } from './geometry/house-geometry';
 import { exampleDoublePolyGableHouse } from './heating/example-houses';
 import type { HouseSpec } from './house.types';
+import { proseToPlainSi } from './prose';
 import { dryAirDensityKgPerM3, standardAtmosphericPressurePa } from './psychrometrics';
+
+/** A number with an SI unit written into prose instead of a {{kind:value}} token. */
+const BARE_SI_QUANTITY = /\d\s*(kW|W\b|°C|K\b|m\b|m²|m³|cm²|kWh)/;
 
 const ref = loadReferenceData();
 
@@ -128,6 +132,30 @@ describe('estimateCooling', () => {
     const density = dryAirDensityKgPerM3(15, standardAtmosphericPressurePa(300));
     expect(winter.heatCostW).toBeCloseTo(density * 1006 * winter.flowM3PerS * (15 - -8), 6);
     expect(winter.atOutdoorC).toBe(-8);
+  });
+
+  it('writes quantities in cautions and staging warnings as tokens, never as SI numbers', () => {
+    // too few fans, a small inlet, small pads, a long house, a high site and a tight deadband
+    const crowded = run({
+      house: {
+        lengthM: 80,
+        exhaustFans: { count: 1, capacityEachM3PerS: 2 },
+        inletAreaM2: 0.5,
+        setpoints: { dayHeatingC: 20, nightHeatingC: 16, coolingC: 21 },
+      },
+      site: { elevationM: 3000 },
+      conditions: { evaporativePad: { padTypeId: 'cellulose-100mm', areaM2: 1 } },
+    });
+    expect(crowded.capacity.verdict).toBe('short');
+    expect(crowded.capacity.inletVerdict).toBe('short');
+    for (const text of crowded.cautions) expect(text).not.toMatch(BARE_SI_QUANTITY);
+    const plain = crowded.cautions.map(proseToPlainSi).join('\n');
+    expect(plain).toContain(`Free inlet area 0.50 m² is below the ${crowded.capacity.inletAreaNeededM2.toFixed(2)} m² needed`);
+    expect(plain).toContain(`Installed fans move 2.00 m³/s against ${crowded.capacity.requiredFlowM3PerS.toFixed(2)} m³/s required`);
+    // the elevation table ends at 8,000 ft = 2,438.4 m (1 ft = 0.3048 m exactly)
+    expect(plain).toContain('above the elevation table (2,438.40 m)');
+    expect(plain).toContain('only 1.0 K above the heating setpoint; keep at least');
+    expect(plain).not.toMatch(/\{\{/);
   });
 
   it('always carries the electrical, backdraft and planning cautions', () => {

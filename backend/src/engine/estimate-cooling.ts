@@ -11,7 +11,7 @@ import {
 } from './cooling/cooling-reference';
 import { designDayBalance, type DesignDayHour } from './cooling/design-day';
 import { padSizing, type PadSizing } from './cooling/pads';
-import { designFlowM3PerS, requiredCapacity, type CapacityResult } from './cooling/required-capacity';
+import { designFlowM3PerS, METRES_PER_FOOT, requiredCapacity, type CapacityResult } from './cooling/required-capacity';
 import { thermostatStaging, type StagingResult } from './cooling/staging';
 import { winterVentilation, type WinterVentilation } from './cooling/winter-ventilation';
 import { EngineInputError, requireInRange } from './errors';
@@ -19,6 +19,7 @@ import { computeHouseGeometry } from './geometry/house-geometry';
 import { heatLossCoefficients } from './heating/heat-loss';
 import type { HouseSpec } from './house.types';
 import { dryAirDensityKgPerM3, standardAtmosphericPressurePa } from './psychrometrics';
+import { quantityToken } from './prose';
 import { referenceRow, type Confidence, type ReferenceData, type ReferenceRow } from './reference-data.types';
 import { clearSkyMonthRow } from './solar/clear-sky';
 
@@ -80,6 +81,7 @@ export interface CoolingEstimate {
   staging: StagingResult;
   winterVentilation: WinterVentilation;
   assumptions: CoolingAssumption[];
+  /** may hold {{kind:valueSI}} quantity tokens (see prose.ts) */
   cautions: string[];
 }
 
@@ -272,31 +274,36 @@ export function estimateCooling(input: CoolingInput, ref: ReferenceData): Coolin
     cautions.push('The house has no exhaust fans: the design day shows it closed up, with solar heat leaving only through the cover.');
   } else if (capacity.verdict === 'short') {
     cautions.push(
-      `Installed fans move ${round2(capacity.installedFlowM3PerS)} m³/s against ${round2(capacity.requiredFlowM3PerS)} m³/s required${capacity.additionalFansNeeded ? `; about ${capacity.additionalFansNeeded} more fan(s) of the same size are needed` : ''}.`,
+      `Installed fans move ${quantityToken('airFlow', capacity.installedFlowM3PerS)} against ${quantityToken('airFlow', capacity.requiredFlowM3PerS)} required${capacity.additionalFansNeeded ? `; about ${capacity.additionalFansNeeded} more fan(s) of the same size are needed` : ''}.`,
     );
   }
   if (capacity.inletVerdict === 'short') {
     cautions.push(
-      `Free inlet area ${round2(capacity.inletAreaM2)} m² is below the ${round2(capacity.inletAreaNeededM2)} m² needed: fans will move less air than rated and may backdraft heater chimneys.`,
+      `Free inlet area ${quantityToken('area', capacity.inletAreaM2)} is below the ${quantityToken('area', capacity.inletAreaNeededM2)} needed: fans will move less air than rated and may backdraft heater chimneys.`,
     );
   }
   if (designDay.hoursNotHeld.length > 0) {
     cautions.push(
-      `On the design day the cooling setpoint is not held at solar hours ${designDay.hoursNotHeld.join(', ')}; peak indoor ${round1(padType ? (designDay.peakIndoorWithPadsC as number) : designDay.peakIndoorWithFansC)} °C.`,
+      `On the design day the cooling setpoint is not held at solar hours ${designDay.hoursNotHeld.join(', ')}; peak indoor ${quantityToken('temperature', padType ? (designDay.peakIndoorWithPadsC as number) : designDay.peakIndoorWithFansC)}.`,
     );
   }
   if (pads && pads.verdict === 'short') {
     cautions.push(
-      `Pad area ${round2(pads.areaM2)} m² is below the ${round2(pads.areaNeededM2)} m² needed at the design face velocity: air will pass faster, cool less than the stated efficiency and may carry water droplets.`,
+      `Pad area ${quantityToken('area', pads.areaM2)} is below the ${quantityToken('area', pads.areaNeededM2)} needed at the design face velocity: air will pass faster, cool less than the stated efficiency and may carry water droplets.`,
     );
   }
   if (elevationBeyondTable) {
-    cautions.push('The site is above the elevation table (2,438 m): the elevation factor is extrapolated from air density.');
+    // the table's last elevation (feet in the source) is where extrapolation starts
+    const tableElevationsFt = referenceRowOrThrow(ref, 'ventilation', 'elevation-factor').elevationsFt as number[];
+    const tableTopM = tableElevationsFt[tableElevationsFt.length - 1] * METRES_PER_FOOT;
+    cautions.push(
+      `The site is above the elevation table (${quantityToken('length', tableTopM)}): the elevation factor is extrapolated from air density.`,
+    );
   }
   const longestRun = ventilationValue(ref, 'pad-to-fan-distance-max', 'maxDistanceM');
   if (padToFanDistanceM > longestRun.value) {
     cautions.push(
-      `Inlet-to-fan distance ${round1(padToFanDistanceM)} m is over the usual ${round1(longestRun.value)} m: the air warms too much along the house; consider inlets or pads along the side or fans at both ends.`,
+      `Inlet-to-fan distance ${quantityToken('length', padToFanDistanceM)} is over the usual ${quantityToken('length', longestRun.value)}: the air warms too much along the house; consider inlets or pads along the side or fans at both ends.`,
     );
   }
   for (const warning of staging.warnings) cautions.push(warning);
@@ -431,12 +438,4 @@ function referenceRowOrThrow(ref: ReferenceData, table: string, id: string): Ref
   const row = referenceRow(ref, table, id);
   if (!row) throw new Error(`reference-data/${table}.json needs a row ${id}`);
   return row;
-}
-
-function round1(value: number): number {
-  return Math.round(value * 10) / 10;
-}
-
-function round2(value: number): number {
-  return Math.round(value * 100) / 100;
 }

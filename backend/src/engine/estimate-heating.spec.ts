@@ -6,6 +6,11 @@ import { exampleDoublePolyGableHouse } from './heating/example-houses';
 import type { HouseShape, HouseSpec } from './house.types';
 import { insideAirDensityKgPerM3 } from './psychrometrics/psychrometrics';
 import { loadReferenceData } from '../reference-data/load-reference-data';
+import { proseToPlainSi } from './prose';
+import { referenceRow } from './reference-data.types';
+
+/** A number with an SI unit written into prose instead of a {{kind:value}} token. */
+const BARE_SI_QUANTITY = /\d\s*(kW|W\b|°C|K\b|m\b|m²|m³|cm²|kWh)/;
 
 const ref = loadReferenceData();
 const conditions: HeatingConditions = { designOutdoorC: -10, elevationM: 0, insideRelativeHumidityPct: 70 };
@@ -126,6 +131,35 @@ describe('estimateHeating', () => {
     expect(electric.heater.fuelFired).toBe(false);
     expect(electric.cautions.join('\n')).not.toMatch(/ethylene|carbon monoxide/i);
     expect(electric.cautions.join('\n')).toMatch(/planning/i);
+  });
+
+  it('writes quantities in cautions, advice and labels as tokens, never as SI numbers', () => {
+    // one small propane heater, a curtain taken as open, humid night: short, single-unit,
+    // curtain, condensation and fuel-fired cautions all appear
+    const short = estimateHeating(
+      {
+        house: exampleDoublePolyGableHouse({
+          curtainId: 'energy-screen-aluminised',
+          heaters: [{ count: 1, ratedInputW: 20_000, efficiency: 0.8, fuelId: 'propane' }],
+        }),
+        conditions: { ...conditions, insideRelativeHumidityPct: 90 },
+      },
+      ref,
+    );
+    expect(short.heater.verdict).toBe('short');
+    const prose = [...short.cautions, short.heater.splitAdvice, ...short.assumptions.map((assumption) => assumption.label)];
+    for (const text of prose) expect(text).not.toMatch(BARE_SI_QUANTITY);
+
+    const plain = short.cautions.map(proseToPlainSi).join('\n');
+    const kW = (watts: number) => `${(watts / 1000).toFixed(1)} kW`;
+    expect(plain).toContain(
+      `Installed output ${kW(short.heater.installedOutputW)} is ${kW(short.heater.shortfallW)} short of the ${kW(short.heater.requiredOutputW)} required`,
+    );
+    const ridge = referenceRow(ref, 'safety', 'chimney-above-ridge')!.valueM as number;
+    expect(short.cautions.join('\n')).toContain(`{{length:${ridge}}} above the ridge`);
+    expect(plain).toContain(`at least ${ridge.toFixed(2)} m above the ridge`);
+    expect(plain).toMatch(/\d cm²\/kW of heater input/);
+    expect(plain).not.toMatch(/\{\{/);
   });
 
   it('sizes heaters without curtain credit unless asked, and says so', () => {

@@ -7,6 +7,7 @@ import { requiredRow, type SafetyRow } from './heating/heating-reference';
 import { sizeHeaters, type HeaterSizingResult } from './heating/heater-sizing';
 import { SURFACE_GROUPS, type HouseSpec, type SurfaceGroup } from './house.types';
 import { insideAirDensityKgPerM3 } from './psychrometrics/psychrometrics';
+import { quantityToken } from './prose';
 import type { ReferenceData, ReferenceRow } from './reference-data.types';
 
 export interface HeatingConditions {
@@ -54,6 +55,7 @@ export interface HeatingEstimate {
   heater: HeaterSizingResult;
   condensation: CondensationResult;
   assumptions: HeatingAssumption[];
+  /** may hold {{kind:valueSI}} quantity tokens (see prose.ts), as may assumption labels */
   cautions: string[];
 }
 
@@ -100,8 +102,10 @@ function validateConditions(conditions: HeatingConditions, house: HouseSpec): nu
   );
 }
 
-const kW = (watts: number) => `${(watts / 1000).toFixed(1)} kW`;
-const degC = (celsius: number) => `${celsius.toFixed(1)} °C`;
+// Quantities in labels and cautions are tokens (see prose.ts): the reader's unit system shows them.
+const kW = (watts: number) => quantityToken('power', watts);
+const degC = (celsius: number) => quantityToken('temperature', celsius);
+const metres = (lengthM: number) => quantityToken('length', lengthM);
 
 /**
  * Design-night heating estimate for one house: heat loss with its breakdown, heater sizing,
@@ -150,7 +154,7 @@ export function estimateHeating(input: HeatingEstimateInput, ref: ReferenceData)
       overridden
         ? {
             key: `coverings.${group}.uWPerM2K`,
-            label: `U-value, ${groupLabel[group]}: ${row.label} (replaces the reference ${row.uWPerM2K})`,
+            label: `U-value, ${groupLabel[group]}: ${row.label} (replaces the reference ${quantityToken('uValue', row.uWPerM2K)})`,
             value: coefficients.coveringUWPerM2K[group],
             unit: 'W/(m²·K)',
             source: USER_SOURCE,
@@ -194,7 +198,7 @@ export function estimateHeating(input: HeatingEstimateInput, ref: ReferenceData)
   );
   assumptions.push({
     key: 'air.pressurePa',
-    label: `Barometric pressure at ${conditions.elevationM} m (standard atmosphere)`,
+    label: `Barometric pressure at ${metres(conditions.elevationM)} (standard atmosphere)`,
     value: air.pressurePa,
     unit: 'Pa',
     source: PSYCHROLIB_SOURCE,
@@ -294,12 +298,12 @@ export function estimateHeating(input: HeatingEstimateInput, ref: ReferenceData)
     const coLimit = safety('co-niosh-rel');
     const ethylene = safety('ethylene-crop-injury');
     const sulfurDioxide = safety('so2-crop-injury');
-    const inletAreaCm2 = sizing.fuelFiredInputW * (inlet.valueM2PerW as number) * 10_000;
+    const inletAreaM2 = sizing.fuelFiredInputW * (inlet.valueM2PerW as number);
     cautions.push(
-      `Fuel-fired heaters need a fresh-air inlet for combustion: at least about ${((inlet.valueM2PerW as number) * 1e7).toFixed(1)} cm² of free area per kW of input ` +
-        `(about ${Math.ceil(inletAreaCm2)} cm² for the ${kW(sizing.fuelFiredInputW)} entered); local codes may require more.`,
-      `Vent every fuel-fired heater to the outside through a sound flue. Chimneys: at least ${aboveRidge.valueM} m above the ridge, ${aboveRoof.valueM} m above the roof where they pass through, ` +
-        `and ${clearance.valueM} m horizontally from the nearest roof; exhaust fans can pull flue gas back into the house.`,
+      `Fuel-fired heaters need a fresh-air inlet for combustion: a free area of at least about ${quantityToken('areaPerPower', inlet.valueM2PerW as number)} of heater input ` +
+        `(about ${quantityToken('smallArea', inletAreaM2)} for the ${kW(sizing.fuelFiredInputW)} entered); local codes may require more.`,
+      `Vent every fuel-fired heater to the outside through a sound flue. Chimneys: at least ${metres(aboveRidge.valueM as number)} above the ridge, ${metres(aboveRoof.valueM as number)} above the roof where they pass through, ` +
+        `and ${metres(clearance.valueM as number)} horizontally from the nearest roof; exhaust fans can pull flue gas back into the house.`,
       `Carbon monoxide from a faulty, unvented or back-drafting heater can kill people. Fit carbon monoxide alarms (NIOSH recommended limit ${coLimit.valuePpm} ppm over 8 h).`,
       `Incomplete combustion releases ethylene, which injures sensitive crops from about ${ethylene.valuePpm} ppm, and sulfur-bearing fuels release sulfur dioxide, injurious from about ${sulfurDioxide.valuePpm} ppm. ` +
         'A yellow or orange flame signals trouble; unvented heaters are not recommended even as back-up.',

@@ -8,6 +8,7 @@ import { dryAirDensityKgPerM3, standardAtmosphericPressurePa } from './psychrome
 import type { SiteClimate } from './climate/site-climate';
 import { demoClimate, demoSeasonInput } from './season/demo-season';
 import { SunCache } from './season/sun-hours';
+import { proseToPlainSi } from './prose';
 
 const ref = loadReferenceData();
 const sunCache = new SunCache();
@@ -89,6 +90,15 @@ describe('estimateSeason', () => {
     expect(steps[4].changeKWh).toBeCloseTo(-estimate.solarOffsetKWh, 6);
     expect(explanation.join(' ')).toMatch(/sun/i);
     expect(estimate.degreeDays.baseTemperatureC).toBe(15);
+    // quantities are tokens (energy in joules, temperature in °C); the reader's units show them
+    expect(estimate.degreeDays.baseDescription).toBe('the night setpoint, {{temperature:15}}');
+    expect(proseToPlainSi(estimate.degreeDays.baseDescription)).toBe('the night setpoint, 15.0 °C');
+    expect(explanation[0]).toContain(`{{energy:${Number((estimate.degreeDays.energyKWh * 3.6e6).toPrecision(6))}}}`);
+    const kWh = (value: number) => `${Math.round(value).toLocaleString('en-US')} kWh`;
+    expect(proseToPlainSi(explanation[0])).toContain(
+      `It gives ${kWh(estimate.degreeDays.energyKWh)} of heat; the hour-by-hour estimate gives ${kWh(estimate.total.energyKWh)}.`,
+    );
+    for (const sentence of explanation) expect(sentence).not.toMatch(/\d\s*(kWh|°C|K)\b/);
   });
 
   it('draws the curtain at night only', () => {

@@ -1,6 +1,7 @@
 import { BOUNDS } from './bounds';
 import { EngineInputError, requireInRange } from './errors';
 import type { HouseSpec } from './house.types';
+import { quantityToken } from './prose';
 import { referenceRow, type Confidence, type ReferenceData, type ReferenceRow } from './reference-data.types';
 import { isoLocalHour } from './climate/calendar-days';
 import { PEAK_ROW_ID, peakHoursAfterSolarNoon } from './climate/daily-temperature-curve';
@@ -123,7 +124,7 @@ export interface DegreeDayStep {
 }
 
 export interface DegreeDayCrossCheck extends FuelAmount {
-  /** the base each heated day is counted to */
+  /** the base each heated day is counted to; may hold {{kind:valueSI}} quantity tokens (see prose.ts) */
   baseDescription: string;
   /** the base when it is the same all season, else null, °C */
   baseTemperatureC: number | null;
@@ -135,6 +136,7 @@ export interface DegreeDayCrossCheck extends FuelAmount {
   hourlyDifferenceFraction: number | null;
   /** from the degree-day figure to the hourly figure, one effect at a time (order matters) */
   steps: DegreeDayStep[];
+  /** sentences that may hold {{kind:valueSI}} quantity tokens (see prose.ts) */
   explanation: string[];
 }
 
@@ -485,7 +487,7 @@ function degreeDayCrossCheck(
     baseDescription:
       baseTemperatureC === null
         ? "each heated day's night setpoint (the calendar's setpoints differ)"
-        : `the night setpoint, ${baseTemperatureC.toFixed(1)} °C`,
+        : `the night setpoint, ${quantityToken('temperature', baseTemperatureC)}`,
     baseTemperatureC,
     uaWPerK,
     degreeDaysKDay,
@@ -496,8 +498,15 @@ function degreeDayCrossCheck(
   };
 }
 
+const JOULES_PER_KWH = 3.6e6;
+
+/** Energy in kWh as a prose token (the token holds joules, the SI unit). */
+function energyToken(kWh: number): string {
+  return quantityToken('energy', kWh * JOULES_PER_KWH);
+}
+
 function percentOf(change: number, base: number): string {
-  if (base <= 0) return `${Math.round(change)} kWh`;
+  if (base <= 0) return energyToken(change);
   return `${change >= 0 ? '+' : '−'}${Math.abs((100 * change) / base).toFixed(0)} %`;
 }
 
@@ -507,7 +516,7 @@ function explainDifference(steps: DegreeDayStep[], variant: SeasonVariant, hourl
   lines.push(
     'The degree-day method multiplies the heat-loss coefficient by 24 h and by the degree-days to the night setpoint, ' +
       'as if the house were held at the night setpoint all day with the curtain open and no sun. ' +
-      `It gives ${Math.round(degreeDayKWh).toLocaleString('en-US')} kWh of heat; the hour-by-hour estimate gives ${Math.round(hourlyKWh).toLocaleString('en-US')} kWh.`,
+      `It gives ${energyToken(degreeDayKWh)} of heat; the hour-by-hour estimate gives ${energyToken(hourlyKWh)}.`,
   );
   const [, curve, daySetpoint, curtain, sun] = steps;
   lines.push(

@@ -3,7 +3,7 @@ import { standardAtmosphericPressurePa } from '../psychrometrics';
 import type { ReferenceData } from '../reference-data.types';
 import { elevationFactorRow, ventilationValue } from './cooling-reference';
 
-const METRES_PER_FOOT = 0.3048;
+export const METRES_PER_FOOT = 0.3048; // exact by definition
 
 export interface CapacityFactors {
   elevation: number;

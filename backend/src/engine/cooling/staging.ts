@@ -1,4 +1,5 @@
 import type { Setpoints } from '../house.types';
+import { quantityToken } from '../prose';
 
 export interface FanStage {
   stage: number;
@@ -12,6 +13,7 @@ export interface StagingResult {
   deadbandK: number;
   requiredDeadbandK: number;
   ok: boolean;
+  /** may hold {{kind:valueSI}} quantity tokens (see ../prose.ts) */
   warnings: string[];
   stages: FanStage[];
 }
@@ -36,11 +38,11 @@ export function thermostatStaging(setpoints: Setpoints, fanCount: number, patter
   const warnings: string[] = [];
   if (deadbandK <= 0) {
     warnings.push(
-      `The cooling setpoint (${setpoints.coolingC} °C) is not above the heating setpoint (${highestHeatingC} °C): heaters and fans would run at the same time. Raise the cooling setpoint to at least ${highestHeatingC + pattern.requiredDeadbandK} °C.`,
+      `The cooling setpoint (${degC(setpoints.coolingC)}) is not above the heating setpoint (${degC(highestHeatingC)}): heaters and fans would run at the same time. Raise the cooling setpoint to at least ${degC(highestHeatingC + pattern.requiredDeadbandK)}.`,
     );
   } else if (!ok) {
     warnings.push(
-      `The cooling setpoint is only ${round1(deadbandK)} K above the heating setpoint; keep at least ${pattern.requiredDeadbandK} K so heaters and fans do not run together (cooling setpoint ${highestHeatingC + pattern.requiredDeadbandK} °C or more).`,
+      `The cooling setpoint is only ${kelvin(deadbandK)} above the heating setpoint; keep at least ${kelvin(pattern.requiredDeadbandK)} so heaters and fans do not run together (cooling setpoint ${degC(highestHeatingC + pattern.requiredDeadbandK)} or more).`,
     );
   }
 
@@ -59,6 +61,11 @@ export function thermostatStaging(setpoints: Setpoints, fanCount: number, patter
   return { deadbandK, requiredDeadbandK: pattern.requiredDeadbandK, ok, warnings, stages };
 }
 
-function round1(value: number): number {
-  return Math.round(value * 10) / 10;
+// Quantities in warnings are tokens (see ../prose.ts): the reader's unit system shows them.
+function degC(celsius: number): string {
+  return quantityToken('temperature', celsius);
+}
+
+function kelvin(differenceK: number): string {
+  return quantityToken('temperatureDifference', differenceK);
 }

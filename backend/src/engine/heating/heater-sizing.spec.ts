@@ -3,6 +3,7 @@ import { EngineInputError } from '../errors';
 import type { HeaterGroup } from '../house.types';
 import { referenceRow } from '../reference-data.types';
 import { loadReferenceData } from '../../reference-data/load-reference-data';
+import { proseToPlainSi } from '../prose';
 import { sizeHeaters } from './heater-sizing';
 
 const ref = loadReferenceData();
@@ -50,7 +51,9 @@ describe('sizeHeaters', () => {
     expect(result.largestUnitOutputW).toBeCloseTo(36_000, 6);
     expect(result.holdsWithLargestUnitOutC).toBeCloseTo(-3, 9);
     expect(result.fuelFired).toBe(true);
-    expect(result.splitAdvice).toContain('-3.0 °C');
+    expect(result.splitAdvice).toContain('{{temperature:-3}}');
+    expect(proseToPlainSi(result.splitAdvice)).toContain('36.0 kW output');
+    expect(proseToPlainSi(result.splitAdvice)).toContain('-3.0 °C');
     expect(sizing.efficiencyBasis).toBe('installed');
   });
 
@@ -114,8 +117,8 @@ describe('sizeHeaters', () => {
     expect(sizing.result.largestUnitOutputW).toBeCloseTo(54_000, 6);
     expect(sizing.result.holdsWithLargestUnitOutC).toBeCloseTo(-9, 9);
     expect(sizing.oneLargestUnitAloneHoldsC).toBeCloseTo(-12, 9);
-    expect(sizing.result.splitAdvice).toContain('-9.0 °C');
-    expect(sizing.result.splitAdvice).toContain('-12.0 °C');
+    expect(proseToPlainSi(sizing.result.splitAdvice)).toContain('-9.0 °C');
+    expect(proseToPlainSi(sizing.result.splitAdvice)).toContain('-12.0 °C');
     // required input at the installed input-weighted efficiency: 102 kW out / 120 kW in = 0.85
     expect(sizing.efficiencyForRequiredInput).toBeCloseTo(0.85, 12);
   });

@@ -1,6 +1,7 @@
 import { BOUNDS } from '../bounds';
 import { EngineInputError, requireInRange } from '../errors';
 import type { HeaterGroup } from '../house.types';
+import { quantityToken } from '../prose';
 import { referenceTable, type ReferenceData } from '../reference-data.types';
 import {
   chosenRow,
@@ -26,6 +27,7 @@ export interface HeaterSizingResult {
   largestUnitOutputW: number;
   /** same, with the largest unit out of service; null when there is no second unit */
   holdsWithLargestUnitOutC: number | null;
+  /** may hold {{kind:valueSI}} quantity tokens (see ../prose.ts) */
   splitAdvice: string;
   fuelFired: boolean;
 }
@@ -76,8 +78,9 @@ export function validateHeaterGroups(
   });
 }
 
-const kW = (watts: number) => `${(watts / 1000).toFixed(1)} kW`;
-const degC = (celsius: number) => `${celsius.toFixed(1)} °C`;
+// Quantities in the advice are tokens (see ../prose.ts): the reader's unit system shows them.
+const kW = (watts: number) => quantityToken('power', watts);
+const degC = (celsius: number) => quantityToken('temperature', celsius);
 
 /**
  * Heater sizing for the design night.

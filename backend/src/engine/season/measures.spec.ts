@@ -2,6 +2,7 @@ import { loadReferenceData } from '../../reference-data/load-reference-data';
 import { demoSeasonInput } from './demo-season';
 import { compareMeasures, paybackText, type Measure } from './measures';
 import { SunCache } from './sun-hours';
+import { proseToPlainSi } from '../prose';
 
 const ref = loadReferenceData();
 const sunCache = new SunCache();
@@ -31,6 +32,15 @@ describe('measure comparison', () => {
     for (const kind of ['second-poly-layer', 'thermal-curtain', 'perimeter-insulation', 'night-setpoint-lower', 'later-start'] as const) {
       expect(byKind.get(kind)!.heatSavedKWh).toBeGreaterThan(0);
       expect(byKind.get(kind)!.fuelSavedUs).toBeGreaterThan(0);
+    }
+  });
+
+  it('describes each measure with its quantities as tokens (the reader picks the units)', () => {
+    const lower = byKind.get('night-setpoint-lower')!;
+    expect(lower.description).toBe('night setpoint lowered by {{temperatureDifference:2}}');
+    expect(proseToPlainSi(lower.description)).toBe('night setpoint lowered by 2.0 K');
+    for (const result of comparison.measures) {
+      expect(result.description).not.toMatch(/\d\s*(K|°C|kW|m²)\b/);
     }
   });
 

@@ -1,6 +1,7 @@
 import { EngineInputError, requireInRange } from '../errors';
 import { BOUNDS } from '../bounds';
 import type { HouseSpec } from '../house.types';
+import { quantityToken } from '../prose';
 import { referenceRow, type ReferenceData, type ReferenceRow } from '../reference-data.types';
 import { civilDate, dayNumber, isoDate, parseIsoDate } from '../climate/calendar-days';
 import {
@@ -70,7 +71,7 @@ export interface MeasureResult {
   index: number;
   kind: MeasureKind;
   label: string;
-  /** what changed, in words */
+  /** what changed, in words; may hold {{kind:valueSI}} quantity tokens (see ../prose.ts) */
   description: string;
   costMoney: number;
   /** the variant's season */
@@ -226,7 +227,7 @@ function prepareMeasure(measure: Measure, index: number, prepared: PreparedSeaso
       return {
         variant: base,
         options: { nightSetpointLowerK: lowerByK },
-        description: `night setpoint lowered by ${lowerByK} K`,
+        description: `night setpoint lowered by ${quantityToken('temperatureDifference', lowerByK)}`,
         lightChange: null,
         notes: ['Check that the crop tolerates the cooler nights; growth may slow.'],
       };
