@@ -118,3 +118,6 @@ export function proseToPlainSi(text: string): string {
 export function hasQuantityTokens(text: string): boolean {
   return new RegExp(QUANTITY_TOKEN_PATTERN.source).test(text);
 }
+
+/** API documentation for every field that carries engine prose. */
+export const PROSE_TOKENS_NOTE = "may contain {{kind:valueSI}} quantity tokens; show them in the reader's units";

@@ -928,6 +928,7 @@ export interface components {
             largestUnitOutputW: number;
             /** @description same with the largest unit out of service, °C; null without a second unit */
             holdsWithLargestUnitOutC: number | null;
+            /** @description how the output is split over units; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
             splitAdvice: string;
             fuelFired: boolean;
         };
@@ -955,6 +956,7 @@ export interface components {
         };
         HeatingAssumptionDto: {
             key: string;
+            /** @description may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
             label: string;
             value: number | string;
             unit: string;
@@ -970,7 +972,7 @@ export interface components {
             heater: components["schemas"]["HeaterSizingDto"];
             condensation: components["schemas"]["CondensationDto"];
             assumptions: components["schemas"]["HeatingAssumptionDto"][];
-            /** @description safety and planning cautions, to show with the result */
+            /** @description safety and planning cautions, to show with the result; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
             cautions: string[];
         };
         CoolingSiteDto: {
@@ -1117,6 +1119,7 @@ export interface components {
             /** @description K */
             requiredDeadbandK: number;
             ok: boolean;
+            /** @description may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
             warnings: string[];
             stages: components["schemas"]["FanStageDto"][];
         };
@@ -1133,6 +1136,7 @@ export interface components {
         };
         CoolingAssumptionDto: {
             key: string;
+            /** @description may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
             label: string;
             value: number | string;
             unit: string;
@@ -1151,7 +1155,7 @@ export interface components {
             staging: components["schemas"]["StagingDto"];
             winterVentilation: components["schemas"]["WinterVentilationDto"];
             assumptions: components["schemas"]["CoolingAssumptionDto"][];
-            /** @description safety and planning cautions, to show with the result */
+            /** @description safety and planning cautions, to show with the result; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
             cautions: string[];
         };
         PartialHeatingConditionsDto: {
@@ -1198,7 +1202,7 @@ export interface components {
             heater: components["schemas"]["HeaterSizingDto"];
             condensation: components["schemas"]["CondensationDto"];
             assumptions: components["schemas"]["HeatingAssumptionDto"][];
-            /** @description safety and planning cautions, to show with the result */
+            /** @description safety and planning cautions, to show with the result; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
             cautions: string[];
             houseId: number;
             conditionsUsed: components["schemas"]["HeatingConditionsUsedDto"];
@@ -1263,7 +1267,7 @@ export interface components {
             staging: components["schemas"]["StagingDto"];
             winterVentilation: components["schemas"]["WinterVentilationDto"];
             assumptions: components["schemas"]["CoolingAssumptionDto"][];
-            /** @description safety and planning cautions, to show with the result */
+            /** @description safety and planning cautions, to show with the result; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
             cautions: string[];
             houseId: number;
             /** @description the farm’s position and elevation */
@@ -1394,7 +1398,7 @@ export interface components {
             fuelQuantityUs: number;
             /** @description money, in the currency of the price */
             cost: number;
-            /** @description the base each heated day is counted to */
+            /** @description the base each heated day is counted to; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
             baseDescription: string;
             /** @description the base when it is the same all season, else null, °C */
             baseTemperatureC: number | null;
@@ -1408,10 +1412,12 @@ export interface components {
             hourlyDifferenceFraction: number | null;
             /** @description from the degree-day figure to the hourly one, one effect at a time */
             steps: components["schemas"]["DegreeDayStepDto"][];
+            /** @description may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
             explanation: string[];
         };
         SeasonAssumptionDto: {
             key: string;
+            /** @description may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
             label: string;
             value: number | string;
             unit: string;
@@ -1463,7 +1469,7 @@ export interface components {
             solarOffsetKWh: number;
             degreeDays: components["schemas"]["DegreeDayCrossCheckDto"];
             assumptions: components["schemas"]["SeasonAssumptionDto"][];
-            /** @description combustion / electrical safety cautions */
+            /** @description combustion / electrical safety cautions; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
             cautions: string[];
             houseId: number;
             inputsUsed: components["schemas"]["SeasonInputsUsedDto"];
@@ -1550,6 +1556,7 @@ export interface components {
             /** @description coldest night hour, °C */
             minOutdoorC: number | null;
             hourly: components["schemas"]["NightHourDto"][];
+            /** @description may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
             cautions: string[];
             inputsUsed: components["schemas"]["SeasonRunInputsDto"];
         };
@@ -1644,7 +1651,7 @@ export interface components {
             /** @enum {string} */
             kind: "second-poly-layer" | "thermal-curtain" | "perimeter-insulation" | "sealing" | "night-setpoint-lower" | "later-start" | "heater-efficiency" | "fuel-switch";
             label: string;
-            /** @description what changed, in words */
+            /** @description what changed, in words; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
             description: string;
             costAmount: number;
             /** @description the season with the measure */
@@ -1665,6 +1672,7 @@ export interface components {
             paybackText: string;
             /** @description light change for measures that add a layer or a screen */
             lightChange: components["schemas"]["MeasureLightChangeDto"] | null;
+            /** @description may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
             notes: string[];
         };
         MeasureComparisonDto: {
@@ -1675,6 +1683,7 @@ export interface components {
             measures: components["schemas"]["MeasureResultDto"][];
             /** @description true when the request listed no measures and the default measures (at cost 0) were compared */
             defaultsUsed: boolean;
+            /** @description may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
             notes: string[];
             inputsUsed: components["schemas"]["SeasonInputsUsedDto"];
         };
@@ -1852,7 +1861,9 @@ export interface components {
             /** @description false when some house has no price (or no heaters) and is left out of totalCost */
             costComplete: boolean;
             monthly: components["schemas"]["BudgetMonthDto"][];
+            /** @description may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
             notes: string[];
+            /** @description may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
             cautions: string[];
         };
         ColumnProposalDto: {

@@ -2,6 +2,7 @@ import { ApiProperty } from '@nestjs/swagger';
 import type { Confidence } from '../../engine/reference-data.types';
 import { CONFIDENCE_MARKS } from '../../reference-data/load-reference-data';
 import { CoolingConditionsDto, CoolingSiteDto } from './cooling-request.dto';
+import { PROSE_TOKENS_NOTE } from '../../engine/prose';
 
 /*
  * The engine's CoolingEstimate, described class by class for the OpenAPI document so the
@@ -77,7 +78,7 @@ export class StagingDto {
   @ApiProperty({ description: 'K' }) deadbandK: number;
   @ApiProperty({ description: 'K' }) requiredDeadbandK: number;
   @ApiProperty() ok: boolean;
-  @ApiProperty({ type: String, isArray: true }) warnings: string[];
+  @ApiProperty({ type: String, isArray: true, description: PROSE_TOKENS_NOTE }) warnings: string[];
   @ApiProperty({ type: FanStageDto, isArray: true }) stages: FanStageDto[];
 }
 
@@ -91,7 +92,7 @@ export class WinterVentilationDto {
 
 export class CoolingAssumptionDto {
   @ApiProperty() key: string;
-  @ApiProperty() label: string;
+  @ApiProperty({ description: PROSE_TOKENS_NOTE }) label: string;
   @ApiProperty({ oneOf: [{ type: 'number' }, { type: 'string' }] }) value: number | string;
   @ApiProperty() unit: string;
   @ApiProperty() source: string;
@@ -107,7 +108,7 @@ export class CoolingEstimateDto {
   @ApiProperty({ type: StagingDto }) staging: StagingDto;
   @ApiProperty({ type: WinterVentilationDto }) winterVentilation: WinterVentilationDto;
   @ApiProperty({ type: CoolingAssumptionDto, isArray: true }) assumptions: CoolingAssumptionDto[];
-  @ApiProperty({ type: String, isArray: true, description: 'safety and planning cautions, to show with the result' }) cautions: string[];
+  @ApiProperty({ type: String, isArray: true, description: `safety and planning cautions, to show with the result; ${PROSE_TOKENS_NOTE}` }) cautions: string[];
 }
 
 /** Where each condition came from: the request, or the default named. */

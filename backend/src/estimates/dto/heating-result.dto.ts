@@ -3,6 +3,7 @@ import { CONFIDENCE_MARKS } from '../../reference-data/load-reference-data';
 import { SURFACE_GROUPS, type SurfaceGroup } from '../../engine/house.types';
 import type { HeatLossComponentKey } from '../../engine/heating/heat-loss';
 import type { HeaterVerdict } from '../../engine/heating/heater-sizing';
+import { PROSE_TOKENS_NOTE } from '../../engine/prose';
 
 /*
  * The engine's HeatingEstimate, described class by class for the OpenAPI document so the
@@ -61,7 +62,7 @@ export class HeaterSizingDto {
   @ApiProperty({ description: 'W' }) largestUnitOutputW: number;
   @ApiProperty({ type: Number, nullable: true, description: 'same with the largest unit out of service, °C; null without a second unit' })
   holdsWithLargestUnitOutC: number | null;
-  @ApiProperty() splitAdvice: string;
+  @ApiProperty({ description: `how the output is split over units; ${PROSE_TOKENS_NOTE}` }) splitAdvice: string;
   @ApiProperty() fuelFired: boolean;
 }
 
@@ -84,7 +85,7 @@ export class CondensationDto {
 
 export class HeatingAssumptionDto {
   @ApiProperty() key: string;
-  @ApiProperty() label: string;
+  @ApiProperty({ description: PROSE_TOKENS_NOTE }) label: string;
   @ApiProperty({ oneOf: [{ type: 'number' }, { type: 'string' }] }) value: number | string;
   @ApiProperty() unit: string;
   @ApiProperty() source: string;
@@ -98,7 +99,7 @@ export class HeatingEstimateDto {
   @ApiProperty({ type: HeaterSizingDto }) heater: HeaterSizingDto;
   @ApiProperty({ type: CondensationDto }) condensation: CondensationDto;
   @ApiProperty({ type: HeatingAssumptionDto, isArray: true }) assumptions: HeatingAssumptionDto[];
-  @ApiProperty({ type: String, isArray: true, description: 'safety and planning cautions, to show with the result' }) cautions: string[];
+  @ApiProperty({ type: String, isArray: true, description: `safety and planning cautions, to show with the result; ${PROSE_TOKENS_NOTE}` }) cautions: string[];
 }
 
 /** Conditions the per-house estimate ran with, every default filled in. */

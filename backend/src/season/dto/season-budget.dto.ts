@@ -1,6 +1,7 @@
 import { ApiProperty } from '@nestjs/swagger';
 import type { PriceUnit } from '../../engine/season/fuel';
 import { PRICE_UNITS } from './season-request.dto';
+import { PROSE_TOKENS_NOTE } from '../../engine/prose';
 
 export class BudgetMonthOfHouseDto {
   @ApiProperty() year: number;
@@ -74,6 +75,6 @@ export class SeasonBudgetDto {
   @ApiProperty({ description: 'sum of the priced houses' }) totalCost: number;
   @ApiProperty({ description: 'false when some house has no price (or no heaters) and is left out of totalCost' }) costComplete: boolean;
   @ApiProperty({ type: BudgetMonthDto, isArray: true }) monthly: BudgetMonthDto[];
-  @ApiProperty({ type: String, isArray: true }) notes: string[];
-  @ApiProperty({ type: String, isArray: true }) cautions: string[];
+  @ApiProperty({ type: String, isArray: true, description: PROSE_TOKENS_NOTE }) notes: string[];
+  @ApiProperty({ type: String, isArray: true, description: PROSE_TOKENS_NOTE }) cautions: string[];
 }

@@ -4,6 +4,7 @@ import type { PriceUnit } from '../../engine/season/fuel';
 import { MEASURE_KINDS, type MeasureKind } from '../../engine/season/measures';
 import { CONFIDENCE_MARKS } from '../../reference-data/load-reference-data';
 import { PRICE_UNITS } from './season-request.dto';
+import { PROSE_TOKENS_NOTE } from '../../engine/prose';
 
 /*
  * The engine's SeasonEstimate, NightDemand and MeasureComparison described class by class for the
@@ -72,7 +73,7 @@ export class DegreeDayStepDto {
 }
 
 export class DegreeDayCrossCheckDto extends SeasonFuelAmountDto {
-  @ApiProperty({ description: 'the base each heated day is counted to' }) baseDescription: string;
+  @ApiProperty({ description: `the base each heated day is counted to; ${PROSE_TOKENS_NOTE}` }) baseDescription: string;
   @ApiProperty({ type: Number, nullable: true, description: 'the base when it is the same all season, else null, °C' }) baseTemperatureC: number | null;
   @ApiProperty({ description: 'UA used (curtain open), W/K' }) uaWPerK: number;
   @ApiProperty({ description: 'K·day' }) degreeDaysKDay: number;
@@ -81,12 +82,12 @@ export class DegreeDayCrossCheckDto extends SeasonFuelAmountDto {
   hourlyDifferenceFraction: number | null;
   @ApiProperty({ type: DegreeDayStepDto, isArray: true, description: 'from the degree-day figure to the hourly one, one effect at a time' })
   steps: DegreeDayStepDto[];
-  @ApiProperty({ type: String, isArray: true }) explanation: string[];
+  @ApiProperty({ type: String, isArray: true, description: PROSE_TOKENS_NOTE }) explanation: string[];
 }
 
 export class SeasonAssumptionDto {
   @ApiProperty() key: string;
-  @ApiProperty() label: string;
+  @ApiProperty({ description: PROSE_TOKENS_NOTE }) label: string;
   @ApiProperty({ oneOf: [{ type: 'number' }, { type: 'string' }] }) value: number | string;
   @ApiProperty() unit: string;
   @ApiProperty() source: string;
@@ -105,7 +106,7 @@ export class SeasonEstimateDto {
   @ApiProperty({ description: 'heat the sun supplied in place of the heater, kWh' }) solarOffsetKWh: number;
   @ApiProperty({ type: DegreeDayCrossCheckDto }) degreeDays: DegreeDayCrossCheckDto;
   @ApiProperty({ type: SeasonAssumptionDto, isArray: true }) assumptions: SeasonAssumptionDto[];
-  @ApiProperty({ type: String, isArray: true, description: 'combustion / electrical safety cautions' }) cautions: string[];
+  @ApiProperty({ type: String, isArray: true, description: `combustion / electrical safety cautions; ${PROSE_TOKENS_NOTE}` }) cautions: string[];
 }
 
 // ---------------------------------------------------------------------------------------------
@@ -161,7 +162,7 @@ export class HouseNightDemandDto extends SeasonFuelAmountDto {
   @ApiProperty({ description: 'W' }) peakW: number;
   @ApiProperty({ type: Number, nullable: true, description: 'coldest night hour, °C' }) minOutdoorC: number | null;
   @ApiProperty({ type: NightHourDto, isArray: true }) hourly: NightHourDto[];
-  @ApiProperty({ type: String, isArray: true }) cautions: string[];
+  @ApiProperty({ type: String, isArray: true, description: PROSE_TOKENS_NOTE }) cautions: string[];
   @ApiProperty({ type: SeasonRunInputsDto }) inputsUsed: SeasonRunInputsDto;
 }
 
@@ -186,7 +187,7 @@ export class MeasureResultDto {
   @ApiProperty({ description: 'position in the request list (or in the default list)' }) index: number;
   @ApiProperty({ enum: MEASURE_KINDS }) kind: MeasureKind;
   @ApiProperty() label: string;
-  @ApiProperty({ description: 'what changed, in words' }) description: string;
+  @ApiProperty({ description: `what changed, in words; ${PROSE_TOKENS_NOTE}` }) description: string;
   @ApiProperty() costAmount: number;
   @ApiProperty({ type: MeasureSeasonDto, description: "the season with the measure" }) season: MeasureSeasonDto;
   @ApiProperty({ description: 'heat the house no longer needs, kWh per season (0 for heater or fuel changes)' }) heatSavedKWh: number;
@@ -197,7 +198,7 @@ export class MeasureResultDto {
   @ApiProperty({ type: Number, nullable: true, description: 'cost ÷ yearly money saved, years; null = never pays back' }) paybackYears: number | null;
   @ApiProperty({ example: '2.4 years' }) paybackText: string;
   @ApiProperty({ type: MeasureLightChangeDto, nullable: true, description: 'light change for measures that add a layer or a screen' }) lightChange: MeasureLightChangeDto | null;
-  @ApiProperty({ type: String, isArray: true }) notes: string[];
+  @ApiProperty({ type: String, isArray: true, description: PROSE_TOKENS_NOTE }) notes: string[];
 }
 
 export class MeasureComparisonDto {
@@ -206,6 +207,6 @@ export class MeasureComparisonDto {
   @ApiProperty({ type: MeasureResultDto, isArray: true, description: 'shortest payback first (equal paybacks: larger saving first); never-paying measures last' })
   measures: MeasureResultDto[];
   @ApiProperty({ description: 'true when the request listed no measures and the default measures (at cost 0) were compared' }) defaultsUsed: boolean;
-  @ApiProperty({ type: String, isArray: true }) notes: string[];
+  @ApiProperty({ type: String, isArray: true, description: PROSE_TOKENS_NOTE }) notes: string[];
   @ApiProperty({ type: SeasonInputsUsedDto }) inputsUsed: SeasonInputsUsedDto;
 }
