@@ -111,4 +111,33 @@ describe('result panels on the house page', () => {
     expect(pageErrors).toEqual([]);
     await page.context().close();
   });
+
+  it("writes the quantities in House B's cautions in the reader's units (US: Btu/h, ft; no raw tokens)", async () => {
+    const { page, pageErrors } = await newPage(browser);
+    await signIn(page, DEMO_GROWER.email, DEMO_GROWER.password);
+    await openHouseNamed(page, 'House B – bedding plants');
+    await useUnitSystem(page, 'us');
+
+    // House B's single heater is short and fuel-fired: the cautions quote outputs and chimney heights
+    const heatingCautions = heatingPanel(page).getByRole('note').filter({ hasText: 'Cautions' });
+    await heatingCautions.waitFor();
+    const heatingText = (await heatingCautions.textContent()) ?? '';
+    expect(heatingText).toMatch(/Installed output [\d,]+ Btu\/h is [\d,]+ Btu\/h short/);
+    expect(heatingText).toMatch(/at least [\d.]+ ft above the ridge/);
+    expect(heatingText).not.toContain('{{');
+    expect(heatingText).not.toMatch(/\d (kW|m|°C)\b/);
+
+    // its fans and inlet are short: flows in cfm, areas in ft²
+    const coolingCautions = coolingPanel(page).getByRole('note').filter({ hasText: 'Cautions' });
+    await coolingCautions.waitFor();
+    const coolingText = (await coolingCautions.textContent()) ?? '';
+    expect(coolingText).toMatch(/Installed fans move [\d,]+ cfm/);
+    expect(coolingText).toMatch(/Free inlet area [\d,]+ ft²/);
+    expect(coolingText).not.toContain('{{');
+
+    await useUnitSystem(page, 'si');
+    await expect.poll(async () => (await heatingCautions.textContent()) ?? '').toMatch(/Installed output [\d,.]+ kW is/);
+    expect(pageErrors).toEqual([]);
+    await page.context().close();
+  });
 });

@@ -3,7 +3,7 @@ import type { ReactNode } from 'react';
 import { Link as RouterLink } from 'react-router-dom';
 import { ApiError } from '../api/client';
 import { paths } from '../config/paths';
-import { quantityOfSiUnit, type Units } from '../lib/units';
+import { quantityOfSiUnit, useUnits, type Units } from '../lib/units';
 import { ErrorAlert } from './feedback';
 
 /**
@@ -46,7 +46,10 @@ export function isWeakConfidence(confidence: Confidence): boolean {
 /** An assumption's value in the user's units where its unit is a physical one; as given otherwise. */
 export function formatAssumptionValue(assumption: Pick<EstimateAssumption, 'value' | 'unit'>, units: Units): string {
   const { value, unit } = assumption;
-  if (typeof value === 'string') return unit && unit !== '–' ? `${value} ${unit}` : value;
+  if (typeof value === 'string') {
+    const text = units.prose(value);
+    return unit && unit !== '–' ? `${text} ${unit}` : text;
+  }
   const quantity = quantityOfSiUnit(unit);
   if (quantity) return units.format(quantity, value, { decimals: Math.max(units.decimals(quantity), 1) });
   const number = new Intl.NumberFormat('en-US', { maximumSignificantDigits: 4 }).format(value);
@@ -75,7 +78,7 @@ export function AssumptionList({ assumptions, units }: { assumptions: EstimateAs
           >
             <Box tabIndex={0} sx={{ cursor: 'help' }}>
               <Stack direction="row" spacing={1} useFlexGap sx={{ flexWrap: 'wrap', alignItems: 'baseline' }}>
-                <Typography variant="body2">{assumption.label}:</Typography>
+                <Typography variant="body2">{units.prose(assumption.label)}:</Typography>
                 <Typography variant="body2" sx={{ fontWeight: 500 }}>
                   {formatAssumptionValue(assumption, units)}
                 </Typography>
@@ -98,7 +101,9 @@ export function AssumptionList({ assumptions, units }: { assumptions: EstimateAs
   );
 }
 
+/** The API's cautions, their {{kind:value}} quantity tokens written in the user's units. */
 export function CautionsAlert({ title, cautions }: { title: string; cautions: string[] }) {
+  const units = useUnits();
   if (cautions.length === 0) return null;
   return (
     <Alert severity="warning" role="note">
@@ -106,7 +111,7 @@ export function CautionsAlert({ title, cautions }: { title: string; cautions: st
       <Box component="ul" sx={{ m: 0, pl: 2 }}>
         {cautions.map((caution) => (
           <li key={caution}>
-            <Typography variant="body2">{caution}</Typography>
+            <Typography variant="body2">{units.prose(caution)}</Typography>
           </li>
         ))}
       </Box>

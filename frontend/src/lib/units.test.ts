@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import {
+  formatProse,
   formatQuantity,
   fromDisplay,
   joulesToTherms,
@@ -96,7 +97,7 @@ describe('units: conversion factors (NIST SP 811, Appendix B)', () => {
 
   it('round trip SI → display → SI returns the value for every quantity and system', () => {
     const quantities: Quantity[] = [
-      'length', 'area', 'volume', 'temperature', 'temperatureDifference', 'power', 'uValue', 'airFlow',
+      'length', 'area', 'smallArea', 'volume', 'temperature', 'temperatureDifference', 'power', 'uValue', 'airFlow',
       'airFlowPerFloorArea', 'energy', 'irradiance', 'heatContentPerVolume', 'heatContentPerLiquidVolume',
       'heatContentPerMass',
     ];
@@ -197,5 +198,41 @@ describe('units: display of values that round to zero', () => {
   it('shows −0.04 °C as 0.0 °C, not -0.0 °C', () => {
     expect(formatQuantity('temperature', -0.04, 'si')).toBe('0.0 °C');
     expect(formatQuantity('temperature', -0.06, 'si')).toBe('-0.1 °C');
+  });
+});
+
+describe('units: engine prose with {{kind:valueSI}} quantity tokens', () => {
+  const caution =
+    'Installed output {{power:70300}} is short; chimneys at least {{length:0.61}} above the ridge; holds {{temperature:-18.4}}.';
+
+  it('writes every token in SI', () => {
+    expect(formatProse(caution, 'si')).toBe(
+      'Installed output 70.3 kW is short; chimneys at least 0.61 m above the ridge; holds -18.4 °C.',
+    );
+    expect(formatProse('lowered by {{temperatureDifference:2}}', 'si')).toBe('lowered by 2.0 K');
+    expect(formatProse('{{energy:3600000000}}', 'si')).toBe('1,000 kWh'); // 1 kWh = 3.6 E+06 J
+    expect(formatProse('{{smallArea:0.0619}}', 'si')).toBe('619 cm²');
+    expect(formatProse('{{areaPerPower:8.805e-7}}', 'si')).toBe('8.8 cm²/kW');
+  });
+
+  it('writes every token in US customary units (factors as checked above, NIST SP 811 B.8)', () => {
+    // 70 300 W ÷ 0.293 071 1 W per Btu/h = 239 873.6 Btu/h; 0.61 m ÷ 0.3048 = 2.001 ft; −18.4 × 1.8 + 32 = −1.12 °F
+    expect(formatProse(caution, 'us')).toBe(
+      'Installed output 239,874 Btu/h is short; chimneys at least 2.0 ft above the ridge; holds -1.1 °F.',
+    );
+    expect(formatProse('lowered by {{temperatureDifference:2}}', 'us')).toBe('lowered by 3.6 °F'); // 2 K × 1.8
+    expect(formatProse('{{energy:3600000000}}', 'us')).toBe('3.41 MMBtu'); // 3.6 E+09 J ÷ 1.055 056 E+09 J
+    expect(formatProse('{{smallArea:0.0619}}', 'us')).toBe('96 in²'); // 0.0619 m² ÷ 6.4516 E-04 m²
+    expect(formatProse('{{areaPerPower:8.805e-7}}', 'us')).toBe('0.40 in² per 1,000 Btu/h'); // see the check above
+  });
+
+  it('shows an unknown kind as its bare number, never the braces', () => {
+    expect(formatProse('about {{furlongs:3}} away', 'us')).toBe('about 3 away');
+  });
+
+  it('leaves text without tokens, and malformed braces, as they are', () => {
+    expect(formatProse('NIOSH limit 35 ppm over 8 h; 12 %.', 'us')).toBe('NIOSH limit 35 ppm over 8 h; 12 %.');
+    expect(formatProse('{{power:}} {power:5}', 'us')).toBe('{{power:}} {power:5}');
+    expect(formatProse(null, 'si')).toBe('');
   });
 });

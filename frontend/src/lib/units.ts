@@ -44,6 +44,7 @@ export const M2_PER_W_PER_IN2_PER_KBTUH = SQUARE_METRES_PER_SQUARE_INCH / (1000 
 export type Quantity =
   | 'length'
   | 'area'
+  | 'smallArea'
   | 'volume'
   | 'temperature'
   | 'temperatureDifference'
@@ -91,6 +92,8 @@ const scaled = (label: string, siPerUnit: number, decimals: number): UnitDefinit
 const UNITS: Record<Quantity, Record<UnitSystem, UnitDefinition>> = {
   length: { si: scaled('m', 1, 2), us: scaled('ft', METRES_PER_FOOT, 1) },
   area: { si: scaled('m²', 1, 1), us: scaled('ft²', SQUARE_METRES_PER_SQUARE_FOOT, 0) },
+  // SI value in m², for openings such as a combustion-air inlet: cm² / in²
+  smallArea: { si: scaled('cm²', 1e-4, 0), us: scaled('in²', SQUARE_METRES_PER_SQUARE_INCH, 0) },
   volume: { si: scaled('m³', 1, 0), us: scaled('ft³', CUBIC_METRES_PER_CUBIC_FOOT, 0) },
   temperature: {
     si: scaled('°C', 1, 1),
@@ -335,6 +338,33 @@ export function formatFuelQuantity(
   return options.withoutUnit ? number : `${number} ${fuelUnitIn(fuelUnits, system)}`;
 }
 
+/**
+ * Engine prose (cautions, advice, explanations) carries its quantities as tokens
+ * `{{kind:valueSI}}`, e.g. `{{power:70300}}`, where kind is a Quantity and the value is in the
+ * SI unit of the API (W, m, °C, K, m², J, m²/W …).
+ */
+const PROSE_TOKEN = /\{\{([A-Za-z]+):(-?\d+(?:\.\d+)?(?:[eE][-+]?\d+)?)\}\}/g;
+
+function isQuantity(kind: string): kind is Quantity {
+  return Object.prototype.hasOwnProperty.call(UNITS, kind);
+}
+
+/**
+ * Engine prose with each quantity token written in the user's units:
+ * 'Installed output {{power:70300}} …' → 'Installed output 239,869 Btu/h …' (US). A kind this
+ * module does not know shows its bare number (its unit is unknown here), never the braces.
+ */
+export function formatProse(text: string | null | undefined, system: UnitSystem): string {
+  if (!text) return '';
+  return text.replace(PROSE_TOKEN, (_token, kind: string, raw: string) => {
+    const valueSi = Number(raw);
+    if (!isQuantity(kind)) {
+      return new Intl.NumberFormat('en-US', { maximumSignificantDigits: 4 }).format(valueSi);
+    }
+    return formatQuantity(kind, valueSi, system);
+  });
+}
+
 export interface Units {
   system: UnitSystem;
   label: (quantity: Quantity) => string;
@@ -349,6 +379,8 @@ export interface Units {
   fuel: (amount: FuelAmount | null | undefined, fuelUnits: FuelUnits | null | undefined, options?: FormatOptions) => string;
   fuelValue: (amount: FuelAmount) => number;
   fuelUnit: (fuelUnits: FuelUnits) => string;
+  /** engine prose with its {{kind:valueSI}} tokens in the user's units */
+  prose: (text: string | null | undefined) => string;
 }
 
 export function unitsFor(system: UnitSystem): Units {
@@ -365,6 +397,7 @@ export function unitsFor(system: UnitSystem): Units {
     fuel: (amount, fuelUnits, options) => formatFuelQuantity(amount, fuelUnits, system, options),
     fuelValue: (amount) => fuelQuantityIn(amount, system),
     fuelUnit: (fuelUnits) => fuelUnitIn(fuelUnits, system),
+    prose: (text) => formatProse(text, system),
   };
 }
 

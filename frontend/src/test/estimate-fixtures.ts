@@ -132,7 +132,7 @@ export const demoHouseBHeating: HouseHeatingEstimate = {
     "unitCount": 1,
     "largestUnitOutputW": 70336.8,
     "holdsWithLargestUnitOutC": null,
-    "splitAdvice": "A single unit: if it fails the house has no heat. It alone holds 10.0 °C inside down to -18.4 °C outside. Use at least 2 units (for example 2 × 55.6 kW output) so one failure does not leave the crop unheated.",
+    "splitAdvice": "A single unit: if it fails the house has no heat. It alone holds {{temperature:10}} inside down to {{temperature:-18.3853}} outside. Use at least 2 units (for example 2 × {{power:55567.7}} output) so one failure does not leave the crop unheated.",
     "fuelFired": true
   },
   "condensation": {
@@ -196,6 +196,15 @@ export const demoHouseBHeating: HouseHeatingEstimate = {
       "overridden": false
     },
     {
+      "key": "air.pressurePa",
+      "label": "Barometric pressure at {{length:313}} (standard atmosphere)",
+      "value": 97620.9329600094,
+      "unit": "Pa",
+      "source": "computed with psychrolib (ASHRAE 2017 Fundamentals ch. 1): standard-atmosphere pressure at the site elevation",
+      "confidence": "derived",
+      "overridden": false
+    },
+    {
       "key": "heater.safetyMargin",
       "label": "Sizing margin over design heat loss",
       "value": 0.15,
@@ -224,12 +233,12 @@ export const demoHouseBHeating: HouseHeatingEstimate = {
     }
   ],
   "cautions": [
-    "Installed output 70.3 kW is 40.8 kW short of the 111.1 kW required; it holds 10.0 °C inside only down to -18.4 °C outside.",
+    "Installed output {{power:70337.1}} is {{power:40798.4}} short of the {{power:111135}} required; it holds {{temperature:10}} inside only down to {{temperature:-18.3853}} outside.",
     "Only one heating unit: if it fails the crop has no heat. Split the output over at least two units.",
-    "Water condenses on the inside of the roof, sidewalls, endwalls at these conditions (dew point 7.6 °C). Drip wets foliage and spreads disease: consider a second layer or anti-condensate film, air movement, or venting and heating to lower humidity.",
+    "Water condenses on the inside of the roof, sidewalls, endwalls at these conditions (dew point {{temperature:7.5975}}). Drip wets foliage and spreads disease: consider a second layer or anti-condensate film, air movement, or venting and heating to lower humidity.",
     "Covering U-values and air-change rates are handbook values not yet checked against the primary tables; treat the heat loss as a planning range and enter a maker's tested U-value where you have one.",
-    "Fuel-fired heaters need a fresh-air inlet for combustion: at least about 8.8 cm² of free area per kW of input (about 775 cm² for the 87.9 kW entered); local codes may require more.",
-    "Vent every fuel-fired heater to the outside through a sound flue. Chimneys: at least 0.61 m above the ridge, 0.91 m above the roof where they pass through, and 3.05 m horizontally from the nearest roof; exhaust fans can pull flue gas back into the house.",
+    "Fuel-fired heaters need a fresh-air inlet for combustion: a free area of at least about {{areaPerPower:8.805e-7}} of heater input (about {{smallArea:0.0774147}} for the {{power:87921.3}} entered); local codes may require more.",
+    "Vent every fuel-fired heater to the outside through a sound flue. Chimneys: at least {{length:0.61}} above the ridge, {{length:0.91}} above the roof where they pass through, and {{length:3.05}} horizontally from the nearest roof; exhaust fans can pull flue gas back into the house.",
     "Carbon monoxide from a faulty, unvented or back-drafting heater can kill people. Fit carbon monoxide alarms (NIOSH recommended limit 35 ppm over 8 h).",
     "Incomplete combustion releases ethylene, which injures sensitive crops from about 0.05 ppm, and sulfur-bearing fuels release sulfur dioxide, injurious from about 0.5 ppm. A yellow or orange flame signals trouble; unvented heaters are not recommended even as back-up.",
     "Have fuel-fired equipment sized, installed and serviced by licensed installers under local codes.",
@@ -629,9 +638,9 @@ export const demoHouseBCooling: HouseCoolingEstimate = {
     "Fans, motors, pad pumps and their controls sit in wet locations: wiring must be done by a qualified electrician with ground-fault protection, following local electrical codes.",
     "Exhaust fans lower the house pressure; with too little inlet area they can pull flue gases back down the chimneys of vented heaters (backdrafting), bringing carbon monoxide and ethylene into the house. Keep inlets open whenever fans run and have the venting checked by a licensed installer.",
     "These figures are planning estimates from handbook methods and a clear-sky design day; final fan, inlet and pad selection rests with the equipment supplier, a licensed installer and local codes.",
-    "Installed fans move 3.78 m³/s against 7.55 m³/s required; about 1 more fan(s) of the same size are needed.",
-    "Free inlet area 1.2 m² is below the 3.71 m² needed: fans will move less air than rated and may backdraft heater chimneys.",
-    "On the design day the cooling setpoint is not held at solar hours 7, 8, 9, 10, 11, 12, 13, 14, 15, 16, 17, 18, 19, 20, 21; peak indoor 40.4 °C."
+    "Installed fans move {{airFlow:3.776}} against {{airFlow:7.54693}} required; about 1 more fan(s) of the same size are needed.",
+    "Free inlet area {{area:1.2}} is below the {{area:3.71404}} needed: fans will move less air than rated and may backdraft heater chimneys.",
+    "On the design day the cooling setpoint is not held at solar hours 7, 8, 9, 10, 11, 12, 13, 14, 15, 16, 17, 18, 19, 20, 21; peak indoor {{temperature:40.3938}}."
   ],
   "houseId": 2,
   "siteUsed": {

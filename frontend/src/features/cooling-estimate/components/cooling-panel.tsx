@@ -376,7 +376,7 @@ export function CoolingPanel({ house, canRunEstimates, editedHouse = null, edits
                 <Stack spacing={1}>
                   {estimate.staging.warnings.map((warning) => (
                     <Alert key={warning} severity="warning">
-                      {warning}
+                      {units.prose(warning)}
                     </Alert>
                   ))}
                   <Typography variant="body2">

@@ -88,6 +88,29 @@ describe('HeatingPanel', () => {
     expect(screen.getByText('-20.2 °F')).toBeTruthy();
   });
 
+  it("writes the cautions' quantities in the reader's units, never as raw tokens", async () => {
+    renderPanel({}, 'us');
+    const cautions = await screen.findByRole('note');
+    const text = cautions.textContent ?? '';
+    // House B's heater: 300,000 Btu/h input × 0.80 efficiency = 240,000 Btu/h output (demo scenario)
+    expect(text).toContain('Installed output 240,000 Btu/h is 139,210 Btu/h short of the 379,208 Btu/h required');
+    // chimney 0.61 m ÷ 0.3048 m/ft = 2.0 ft; combustion air 8.805 E-07 m²/W = 0.40 in² per 1,000 Btu/h
+    expect(text).toContain('at least 2.0 ft above the ridge');
+    expect(text).toContain('at least about 0.40 in² per 1,000 Btu/h of heater input');
+    expect(text).not.toMatch(/\{\{|\}\}/);
+    expect(text).not.toMatch(/\d (kW|m|°C|cm²)\b/);
+    // the assumption labels too (elevation 313 m ÷ 0.3048 = 1,026.9 ft)
+    expect(screen.getByText(/Barometric pressure at 1,026\.9 ft/)).toBeTruthy();
+  });
+
+  it('writes the same cautions in SI for an SI reader', async () => {
+    renderPanel({}, 'si');
+    const text = (await screen.findByRole('note')).textContent ?? '';
+    expect(text).toContain('Installed output 70.3 kW is 40.8 kW short of the 111.1 kW required');
+    expect(text).toContain('at least 0.61 m above the ridge');
+    expect(text).not.toContain('{{');
+  });
+
   it('tells a viewer why there is no result, without asking the API', () => {
     renderPanel({ canRunEstimates: false });
     expect(screen.getByRole('note').textContent).toMatch(/not run heating estimates/);
