@@ -61,13 +61,3 @@ export function paybackText(measure: Pick<MeasureResult, 'paybackYears' | 'payba
   if (measure.paybackYears === null) return 'never';
   return measure.paybackText;
 }
-
-/**
- * The API writes measure descriptions in SI ('night setpoint lowered by 2 K'); temperatures and
- * temperature differences in them are re-stated in the user's unit.
- */
-export function descriptionInUserUnits(text: string, units: Units): string {
-  return text
-    .replace(/(-?\d+(?:\.\d+)?)\s*°C\b/g, (_match, value: string) => units.format('temperature', Number(value)))
-    .replace(/(-?\d+(?:\.\d+)?)\s*K\b/g, (_match, value: string) => units.format('temperatureDifference', Number(value)));
-}

@@ -47,16 +47,3 @@ export function nightStartDate(localTime: string): string {
   const previous = new Date(Date.UTC(year, month - 1, day - 1));
   return previous.toISOString().slice(0, 10);
 }
-
-/** The API's base description may quote the base in °C; the panel adds it in the user's unit. */
-export function withoutCelsius(description: string): string {
-  return description.replace(/,?\s*-?\d+(\.\d+)?\s*°C/g, '');
-}
-
-/**
- * The API's sentences, minus any that quote SI energy figures (those are shown above in the
- * user's units).
- */
-export function explanationInWords(sentences: string[]): string[] {
-  return sentences.filter((sentence) => !/\d\s*kWh/.test(sentence));
-}

@@ -2,20 +2,8 @@ import { describe, expect, it } from 'vitest';
 import type { HouseSeasonEstimate, MeasureComparison, MeasureResult } from '../../api/types';
 import { unitsFor } from '../../lib/units';
 import { calendarFormSchema, calendarFormValues, isMonthDay, toCalendarInput } from './calendar-values';
-import {
-  descriptionInUserUnits,
-  lightChangeText,
-  measuresRequestBody,
-  paybackText,
-  rowsFromComparison,
-} from './measures-values';
-import {
-  explanationInWords,
-  hourlyVersusDegreeDayText,
-  nightStartDate,
-  seasonChartSeries,
-  withoutCelsius,
-} from './season-chart-data';
+import { lightChangeText, measuresRequestBody, paybackText, rowsFromComparison } from './measures-values';
+import { hourlyVersusDegreeDayText, nightStartDate, seasonChartSeries } from './season-chart-data';
 
 const month = (year: number, monthNumber: number, energyKWh: number, fuelQuantitySi: number, fuelQuantityUs: number) => ({
   year,
@@ -56,17 +44,6 @@ describe('season chart data', () => {
     expect(hourlyVersusDegreeDayText({ hourlyDifferenceFraction: 0.05 })).toContain('5 % higher');
     expect(hourlyVersusDegreeDayText({ hourlyDifferenceFraction: 0.001 })).toContain('agree to within 1 %');
     expect(hourlyVersusDegreeDayText({ hourlyDifferenceFraction: null })).toContain('no heat needed');
-  });
-});
-
-describe('degree-day words in the user’s units', () => {
-  it('drops the API’s °C figures from text the panel re-states in the user’s unit', () => {
-    expect(withoutCelsius('the night setpoint, 10.0 °C')).toBe('the night setpoint');
-    expect(withoutCelsius('the night setpoint, -2.5 °C')).toBe('the night setpoint');
-    expect(withoutCelsius("each heated day's night setpoint")).toBe("each heated day's night setpoint");
-    expect(
-      explanationInWords(['It gives 46,838 kWh of heat; the hour-by-hour estimate gives 45,813 kWh.', 'Holding the day setpoint adds +27 %.']),
-    ).toEqual(['Holding the day setpoint adds +27 %.']);
   });
 });
 
@@ -143,14 +120,6 @@ describe('measures values', () => {
       { kind: 'thermal-curtain', costAmount: 9500 },
       { kind: 'sealing', costAmount: 0 },
     ]);
-  });
-
-  it('re-states temperatures in a measure description in the user’s unit', () => {
-    // 2 K = 3.6 °F (a temperature interval of 1 °F = 5/9 K, NIST SP 811 B.8)
-    expect(descriptionInUserUnits('night setpoint lowered by 2 K', unitsFor('us'))).toBe('night setpoint lowered by 3.6 °F');
-    expect(descriptionInUserUnits('night setpoint 16 °C', unitsFor('us'))).toBe('night setpoint 60.8 °F');
-    expect(descriptionInUserUnits('heater efficiency 80 % → 92 %', unitsFor('us'))).toBe('heater efficiency 80 % → 92 %');
-    expect(descriptionInUserUnits('night setpoint lowered by 2 K', unitsFor('si'))).toBe('night setpoint lowered by 2.0 K');
   });
 
   it('shows the light change beside layer and screen measures, and payback in words', () => {

@@ -98,7 +98,7 @@ function BudgetTable({ budget, units }: { budget: SeasonBudget; units: Units }) 
                 {house.name}
                 {house.problem ? (
                   <Typography variant="caption" color="warning.main" component="div">
-                    {house.problem}
+                    {units.prose(house.problem)}
                   </Typography>
                 ) : null}
               </TableCell>
@@ -211,7 +211,7 @@ export function SeasonBudgetSection({ farmId }: { farmId: number }) {
               <Box component="ul" sx={{ m: 0, pl: 2.5 }}>
                 {budget.data.notes.map((note) => (
                   <Typography component="li" variant="body2" color="text.secondary" key={note}>
-                    {note}
+                    {units.prose(note)}
                   </Typography>
                 ))}
               </Box>
@@ -221,7 +221,7 @@ export function SeasonBudgetSection({ farmId }: { farmId: number }) {
                 <AlertTitle>Safety</AlertTitle>
                 <Box component="ul" sx={{ m: 0, pl: 2 }}>
                   {budget.data.cautions.map((caution) => (
-                    <li key={caution}>{caution}</li>
+                    <li key={caution}>{units.prose(caution)}</li>
                   ))}
                 </Box>
               </Alert>

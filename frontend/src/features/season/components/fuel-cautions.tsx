@@ -1,17 +1,19 @@
 import { Alert, AlertTitle, Box } from '@mui/material';
+import { useUnits } from '../../../lib/units';
 
 /**
  * The API's cautions for fuel-fired heat (combustion air, venting, carbon monoxide, ethylene;
  * licensed installers and local codes). Shown wherever a fuel quantity is shown.
  */
 export function FuelCautions({ cautions }: { cautions: string[] }) {
+  const units = useUnits();
   if (cautions.length === 0) return null;
   return (
     <Alert severity="warning" role="note">
       <AlertTitle>Safety</AlertTitle>
       <Box component="ul" sx={{ m: 0, pl: 2 }}>
         {cautions.map((caution) => (
-          <li key={caution}>{caution}</li>
+          <li key={caution}>{units.prose(caution)}</li>
         ))}
       </Box>
     </Alert>

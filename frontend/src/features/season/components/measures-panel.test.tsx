@@ -22,7 +22,7 @@ function measure(index: number, kind: MeasureResult['kind'], costAmount: number,
     index,
     kind,
     label: kind === 'thermal-curtain' ? 'Install a thermal curtain' : 'Lower the night setpoint',
-    description: '',
+    description: kind === 'night-setpoint-lower' ? 'night setpoint lowered by {{temperatureDifference:2}}' : '',
     costAmount,
     season,
     heatSavedKWh: 10_000,
@@ -73,6 +73,8 @@ describe('MeasuresPanel', () => {
 
     const curtainCost = await screen.findByRole('textbox', { name: 'Cost of: Install a thermal curtain' });
     expect(screen.getByText('Roof: 78 % → 76 % (3 % less light)')).toBeTruthy();
+    // The API's prose carries quantities as tokens; they are written in the user's units.
+    expect(screen.getByText('night setpoint lowered by 2.0 K')).toBeTruthy();
     await user.type(curtainCost, '12000');
     await user.type(screen.getByRole('textbox', { name: 'Cost of: Lower the night setpoint' }), '100');
     await user.click(screen.getByRole('button', { name: 'Rank by payback' }));

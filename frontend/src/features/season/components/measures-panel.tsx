@@ -22,7 +22,6 @@ import { ErrorAlert, LoadingState } from '../../../components/feedback';
 import { useUnits } from '../../../lib/units';
 import {
   ADDABLE_MEASURE_KINDS,
-  descriptionInUserUnits,
   isValidCost,
   lightChangeText,
   MEASURE_KIND_LABELS,
@@ -117,11 +116,11 @@ export function MeasuresPanel({ houseId, climateSource }: { houseId: number; cli
                             {measure.label}
                           </Typography>
                           <Typography variant="caption" color="text.secondary" component="div">
-                            {descriptionInUserUnits(measure.description, units)}
+                            {units.prose(measure.description)}
                           </Typography>
                           {measure.notes.map((note) => (
                             <Typography variant="caption" color="warning.main" component="div" key={note}>
-                              {note}
+                              {units.prose(note)}
                             </Typography>
                           ))}
                         </TableCell>
@@ -198,7 +197,7 @@ export function MeasuresPanel({ houseId, climateSource }: { houseId: number; cli
             <Box component="ul" sx={{ m: 0, pl: 2.5 }}>
               {result.notes.map((note) => (
                 <Typography component="li" variant="body2" color="text.secondary" key={note}>
-                  {note}
+                  {units.prose(note)}
                 </Typography>
               ))}
             </Box>

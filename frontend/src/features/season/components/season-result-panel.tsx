@@ -4,7 +4,7 @@ import { Bar } from 'react-chartjs-2';
 import type { HouseSeasonEstimate } from '../../../api/types';
 import '../../../lib/chart';
 import { useUnits } from '../../../lib/units';
-import { explanationInWords, hourlyVersusDegreeDayText, seasonChartSeries, withoutCelsius } from '../season-chart-data';
+import { hourlyVersusDegreeDayText, seasonChartSeries } from '../season-chart-data';
 import { Fact } from './fuel-cautions';
 
 /** "2027-01-16T08:00" → "2027-01-16 08:00" */
@@ -128,12 +128,7 @@ export function DegreeDayPanel({ season }: { season: HouseSeasonEstimate }) {
           <Fact label="Fuel (degree-day)" value={units.fuel(degreeDays, season.fuel)} />
           <Fact label="Cost (degree-day)" value={units.money(degreeDays.cost, 0)} />
         </Stack>
-        <Typography variant="body2">
-          Base: {withoutCelsius(degreeDays.baseDescription)}
-          {degreeDays.baseTemperatureC !== null ? `, ${units.format('temperature', degreeDays.baseTemperatureC)}` : ''}.
-          The degree-day method gives {units.format('energyKWh', degreeDays.energyKWh)} of heat; hour by hour gives{' '}
-          {units.format('energyKWh', season.total.energyKWh)}.
-        </Typography>
+        <Typography variant="body2">Base: {units.prose(degreeDays.baseDescription)}.</Typography>
         <Typography variant="body1" sx={{ fontWeight: 500 }} data-testid="degree-day-difference">
           {hourlyVersusDegreeDayText(degreeDays)}
         </Typography>
@@ -160,9 +155,9 @@ export function DegreeDayPanel({ season }: { season: HouseSeasonEstimate }) {
           </TableBody>
         </Table>
         <Box component="ul" sx={{ m: 0, pl: 2.5, '& li': { mb: 0.5 } }}>
-          {explanationInWords(degreeDays.explanation).map((sentence) => (
+          {degreeDays.explanation.map((sentence) => (
             <Typography component="li" variant="body2" key={sentence}>
-              {sentence}
+              {units.prose(sentence)}
             </Typography>
           ))}
         </Box>
