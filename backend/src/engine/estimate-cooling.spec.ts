@@ -134,6 +134,19 @@ describe('estimateCooling', () => {
     expect(winter.atOutdoorC).toBe(-8);
   });
 
+  it('warns when running the winter fan stage all night would cost more than half the house loss (common practice, no source)', () => {
+    const cold = run({ conditions: { winterDesignC: -29 } });
+    const winter = cold.winterVentilation;
+    expect(winter.houseHeatLossW).toBeGreaterThan(0);
+    expect(winter.heatCostW).toBeGreaterThan(0.5 * winter.houseHeatLossW);
+    expect(cold.cautions.some((c) => c.includes('heat-and-vent'))).toBe(true);
+    const mild = run({ conditions: { winterDesignC: 14 } });
+    expect(mild.winterVentilation.heatCostW).toBeGreaterThan(0);
+    expect(mild.cautions.some((c) => c.includes('heat-and-vent'))).toBe(
+      mild.winterVentilation.heatCostW > 0.5 * mild.winterVentilation.houseHeatLossW,
+    );
+  });
+
   it('writes quantities in cautions and staging warnings as tokens, never as SI numbers', () => {
     // too few fans, a small inlet, small pads, a long house, a high site and a tight deadband
     const crowded = run({

@@ -200,6 +200,7 @@ export function estimateCooling(input: CoolingInput, ref: ReferenceData): Coolin
     // the fans move house air, so its density is taken at the night setpoint
     airDensityKgPerM3: dryAirDensityKgPerM3(house.setpoints.nightHeatingC, pressurePa),
     cpJPerKgK: cp.value,
+    houseConductanceWPerK: conductanceWPerK,
   });
 
   // --- assumptions
@@ -307,6 +308,12 @@ export function estimateCooling(input: CoolingInput, ref: ReferenceData): Coolin
     );
   }
   for (const warning of staging.warnings) cautions.push(warning);
+  if (winter.heatCostW > 0.5 * winter.houseHeatLossW && winter.heatCostW > 0) {
+    // Common practice, no source: humidity is vented in short heat-and-vent cycles, not all night.
+    cautions.push(
+      `Run all night at ${quantityToken('temperature', winter.atOutdoorC)} outside, the winter fan stage would need ${quantityToken('power', winter.heatCostW)} of heat on top of the house's own ${quantityToken('power', winter.houseHeatLossW)} loss. Vent humidity in short heat-and-vent cycles around sunset and sunrise instead, with the heaters sized for it.`,
+    );
+  }
 
   return {
     airExchange: exchange,

@@ -594,7 +594,8 @@ export const demoHouseBCooling: HouseCoolingEstimate = {
     "flowM3PerS": 1.8867324256640001,
     "airChangesPerHour": 13.733395074409035,
     "heatCostW": 88910.66154474112,
-    "atOutdoorC": -29
+    "atOutdoorC": -29,
+    "houseHeatLossW": 96302.82105209633
   },
   "assumptions": [
     {

@@ -5,6 +5,8 @@ export interface WinterVentilation {
   /** sensible heat to warm the ventilation air from outdoor to the night heating setpoint, W */
   heatCostW: number;
   atOutdoorC: number;
+  /** the house's own loss through cover, perimeter and leaks at the same temperatures, W, for comparison */
+  houseHeatLossW: number;
 }
 
 export interface WinterVentilationInput {
@@ -15,16 +17,23 @@ export interface WinterVentilationInput {
   outdoorC: number;
   airDensityKgPerM3: number;
   cpJPerKgK: number;
+  /** the house's conductance (cover, perimeter, leaks), W/K */
+  houseConductanceWPerK: number;
 }
 
-/** Minimum winter ventilation for humidity and its heat cost ρ·c_p·V̇·(T_i − T_o). */
+/**
+ * The winter fan stage (a fraction of the summer rate) and what running it costs in heat,
+ * ρ·c_p·V̇·(T_i − T_o), beside the house's own loss at the same temperatures so the two can be weighed.
+ */
 export function winterVentilation(input: WinterVentilationInput): WinterVentilation {
   const flowM3PerS = input.fractionOfSummerRate * input.summerRequiredFlowM3PerS;
+  const deltaTK = Math.max(0, input.indoorC - input.outdoorC);
   return {
     fractionOfSummerRate: input.fractionOfSummerRate,
     flowM3PerS,
     airChangesPerHour: (flowM3PerS * 3600) / input.volumeM3,
-    heatCostW: input.airDensityKgPerM3 * input.cpJPerKgK * flowM3PerS * Math.max(0, input.indoorC - input.outdoorC),
+    heatCostW: input.airDensityKgPerM3 * input.cpJPerKgK * flowM3PerS * deltaTK,
     atOutdoorC: input.outdoorC,
+    houseHeatLossW: input.houseConductanceWPerK * deltaTK,
   };
 }

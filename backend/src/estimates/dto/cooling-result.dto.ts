@@ -88,6 +88,8 @@ export class WinterVentilationDto {
   @ApiProperty({ description: '1/h' }) airChangesPerHour: number;
   @ApiProperty({ description: 'W to warm the ventilation air to the night setpoint' }) heatCostW: number;
   @ApiProperty({ description: '°C' }) atOutdoorC: number;
+  @ApiProperty({ description: "W lost by the house itself (cover, perimeter, leaks) at the same temperatures, for comparison" })
+  houseHeatLossW: number;
 }
 
 export class CoolingAssumptionDto {

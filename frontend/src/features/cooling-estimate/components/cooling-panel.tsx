@@ -409,7 +409,7 @@ export function CoolingPanel({ house, canRunEstimates, editedHouse = null, edits
             <Accordion disableGutters>
               <AccordionSummary expandIcon={<ExpandMoreIcon />}>
                 <Typography variant="h4" component="h4">
-                  Winter ventilation
+                  Winter fan stage
                 </Typography>
               </AccordionSummary>
               <AccordionDetails>
@@ -426,13 +426,22 @@ export function CoolingPanel({ house, canRunEstimates, editedHouse = null, edits
                       value={`${fmtNumber(estimate.winterVentilation.airChangesPerHour, 1)} per hour`}
                     />
                   </Grid>
-                  <Grid size={12}>
+                  <Grid size={6}>
                     <Figure
                       label={`Heat to warm it at ${units.format('temperature', estimate.winterVentilation.atOutdoorC)} outdoors`}
                       value={units.format('power', estimate.winterVentilation.heatCostW)}
                     />
                   </Grid>
+                  <Grid size={6}>
+                    <Figure
+                      label="The house's own loss then"
+                      value={units.format('power', estimate.winterVentilation.houseHeatLossW)}
+                    />
+                  </Grid>
                 </Grid>
+                <Typography variant="body2" color="text.secondary" sx={{ mt: 1 }}>
+                  The winter fan stage is for cool sunny days and short humidity purges, not for running all night.
+                </Typography>
               </AccordionDetails>
             </Accordion>
 
