@@ -253,3 +253,58 @@ describe('estimateSeason', () => {
     );
   });
 });
+
+describe('estimateSeason with the installed heaters as a limit', () => {
+  const winter = { startDate: '2026-12-01', endDate: '2027-02-28' };
+  const house = demoSeasonInput().house;
+  const withHeaters = (heaters: EstimateSeasonInput['house']['heaters']) =>
+    estimateSeason(demoSeasonInput({ house: { ...house, heaters }, season: winter }), ref, sunCache);
+
+  it('a tiny heater leaves hours below the setpoint; fuel is the capped heat ÷ efficiency', () => {
+    const ample = withHeaters([{ count: 4, ratedInputW: 100_000, efficiency: 0.8, fuelId: 'propane' }]);
+    const tiny = withHeaters([{ count: 1, ratedInputW: 10_000, efficiency: 0.8, fuelId: 'propane' }]);
+    expect(tiny.heaterCapacity.installedOutputW).toBeCloseTo(8000, 9);
+    expect(tiny.total.hoursBelowSetpoint).toBeGreaterThan(0);
+    expect(tiny.total.unmetHeatKWh).toBeGreaterThan(0);
+    // delivered ≤ output × heating hours, and delivered + unmet = what the house needs
+    expect(tiny.total.energyKWh).toBeLessThanOrEqual((8000 * tiny.total.heatingHours) / 1000 + 1e-9);
+    expect(tiny.total.energyKWh + tiny.total.unmetHeatKWh).toBeCloseTo(ample.total.energyKWh, 3);
+    expect(tiny.total.fuelInputKWh).toBeCloseTo(tiny.total.energyKWh / 0.8, 6);
+    const sum = (values: number[]) => values.reduce((a, b) => a + b, 0);
+    expect(sum(tiny.monthly.map((m) => m.hoursBelowSetpoint))).toBe(tiny.total.hoursBelowSetpoint);
+    expect(sum(tiny.monthly.map((m) => m.unmetHeatKWh))).toBeCloseTo(tiny.total.unmetHeatKWh, 6);
+    // the caution names the hours and carries its quantities as tokens
+    const caution = tiny.heaterCapacity.caution!;
+    expect(caution).toContain(`for ${tiny.total.hoursBelowSetpoint} hours of the season`);
+    expect(caution).toContain('{{power:8000}}');
+    expect(caution).toMatch(/crop sits below its setpoint/);
+    expect(caution).toMatch(/heater sizing/);
+    expect(proseToPlainSi(caution)).toMatch(/8\.0 kW/);
+    // the degree-day walk stays uncapped and ends with the heaters' limit as its own step
+    const steps = tiny.degreeDays.steps;
+    expect(steps.map((s) => s.key)).toEqual(['degree-day', 'hourly-curve', 'day-setpoint', 'curtain', 'sun', 'heater-capacity']);
+    expect(steps[4].energyKWh).toBeCloseTo(ample.total.energyKWh, 3);
+    expect(steps[5].changeKWh).toBeCloseTo(-tiny.total.unmetHeatKWh, 3);
+    expect(tiny.degreeDays.energyKWh).toBeCloseTo(ample.degreeDays.energyKWh, 9);
+    expect(tiny.degreeDays.explanation.join(' ')).toMatch(/assumes the heaters deliver whatever the house needs/);
+  });
+
+  it('with ample heaters the result is the uncapped one: nothing unmet, no caution, no extra step', () => {
+    const ample = withHeaters([{ count: 4, ratedInputW: 100_000, efficiency: 0.8, fuelId: 'propane' }]);
+    const huge = withHeaters([{ count: 40, ratedInputW: 1_000_000, efficiency: 0.8, fuelId: 'propane' }]);
+    expect(ample.total).toEqual(huge.total);
+    expect(ample.monthly).toEqual(huge.monthly);
+    expect(ample.total.hoursBelowSetpoint).toBe(0);
+    expect(ample.total.unmetHeatKWh).toBe(0);
+    expect(ample.heaterCapacity.caution).toBeNull();
+    expect(ample.degreeDays.steps).toHaveLength(5);
+  });
+
+  it('without heaters nothing is delivered, no fuel is burnt and every heating hour is below the setpoint', () => {
+    const none = withHeaters([]);
+    expect(none.total.energyKWh).toBe(0);
+    expect(none.total.fuelInputKWh).toBe(0);
+    expect(none.total.hoursBelowSetpoint).toBe(none.total.heatingHours);
+    expect(none.heaterCapacity.caution).toMatch(/^The house has no heaters/);
+  });
+});

@@ -35,6 +35,7 @@ import {
 } from './season/season-hours';
 import { simulateSeason, type SeasonHours, type SimulationParameters, type SimulationResult } from './season/season-simulation';
 import { SunCache, type SunSite } from './season/sun-hours';
+import { validateHeaterGroups } from './heating/heater-sizing';
 
 // ---------------------------------------------------------------------------------------------
 // Input
@@ -113,10 +114,14 @@ export interface SeasonMonth extends FuelAmount {
   peakW: number;
   /** degree-days to the night setpoint, K·day */
   degreeDaysKDay: number;
+  /** heat the installed heaters could not deliver, kWh */
+  unmetHeatKWh: number;
+  /** hours in which the heaters could not hold the setpoint */
+  hoursBelowSetpoint: number;
 }
 
 export interface DegreeDayStep {
-  key: 'degree-day' | 'hourly-curve' | 'day-setpoint' | 'curtain' | 'sun';
+  key: 'degree-day' | 'hourly-curve' | 'day-setpoint' | 'curtain' | 'sun' | 'heater-capacity';
   label: string;
   energyKWh: number;
   /** change from the previous step, kWh */
@@ -140,6 +145,14 @@ export interface DegreeDayCrossCheck extends FuelAmount {
   explanation: string[];
 }
 
+export interface HeaterCapacity {
+  /** Σ count × rated input × efficiency over the house's heater groups, W */
+  installedOutputW: number;
+  heaterCount: number;
+  /** set when the heaters cannot hold the setpoint in some hour; may hold {{kind:valueSI}} tokens */
+  caution: string | null;
+}
+
 export interface SeasonEstimate {
   period: { startDate: string; endDate: string; days: number; heatedDays: number };
   fuel: {
@@ -155,7 +168,9 @@ export interface SeasonEstimate {
   };
   heatLoss: { uaCurtainOpenWPerK: number; uaCurtainClosedWPerK: number; floorAreaM2: number };
   monthly: SeasonMonth[];
-  total: FuelAmount & { heatingHours: number };
+  total: FuelAmount & { heatingHours: number; unmetHeatKWh: number; hoursBelowSetpoint: number };
+  /** what the house's heaters can deliver, and a caution when they fall short of the demand */
+  heaterCapacity: HeaterCapacity;
   /** the hour of highest heat demand, null if no heat was needed */
   peak: { heatW: number; at: string; outdoorC: number } | null;
   /** share of the season's heat delivered at night (sunset to sunrise) */
@@ -185,6 +200,9 @@ export interface PreparedSeason {
   clearnessFromUser: boolean;
   solarUsefulFraction: number;
   solarUsefulFractionRow: UsefulFractionRow;
+  /** installed output of the house's heaters, W */
+  heaterOutputW: number;
+  heaterCount: number;
 }
 
 export interface SeasonVariant {
@@ -194,6 +212,8 @@ export interface SeasonVariant {
   fuel: FuelPrice;
   fuelRow: FuelRow;
   heaterEfficiency: number;
+  /** installed heater output the hourly simulation caps delivered heat at, W (0 without heaters) */
+  heaterOutputW: number;
 }
 
 export interface VariantRun {
@@ -277,8 +297,28 @@ export function prepareSeason(input: EstimateSeasonInput, ref: ReferenceData, su
     solarUsefulFraction = requireInRange('solarUsefulFraction', input.solarUsefulFraction, 0, 1);
   }
 
+  const heaters = installedHeaterOutput(input.house, ref);
   const hours = buildSeasonHours({ site, range: input.season, climate, clearnessByMonth: clearness }, ref, sunCache);
-  return { input, hours, fuel, clearness, clearnessFromUser, solarUsefulFraction, solarUsefulFractionRow: usefulRow };
+  return {
+    input,
+    hours,
+    fuel,
+    clearness,
+    clearnessFromUser,
+    solarUsefulFraction,
+    solarUsefulFractionRow: usefulRow,
+    heaterOutputW: heaters.outputW,
+    heaterCount: heaters.heaterCount,
+  };
+}
+
+/** Installed output of a house's heaters: Σ count × rated input × efficiency, W. */
+export function installedHeaterOutput(house: HouseSpec, ref: ReferenceData): { outputW: number; heaterCount: number } {
+  const groups = validateHeaterGroups(house.heaters ?? [], ref);
+  return {
+    outputW: groups.reduce((sum, { group }) => sum + group.count * group.ratedInputW * group.efficiency, 0),
+    heaterCount: groups.reduce((sum, { group }) => sum + group.count, 0),
+  };
 }
 
 export function baseVariant(prepared: PreparedSeason): SeasonVariant {
@@ -290,6 +330,7 @@ export function baseVariant(prepared: PreparedSeason): SeasonVariant {
     fuel: input.fuel,
     fuelRow: prepared.fuel,
     heaterEfficiency: input.heaterEfficiency,
+    heaterOutputW: prepared.heaterOutputW,
   };
 }
 
@@ -304,6 +345,8 @@ export interface VariantOptions {
   nightSetpointLowerK?: number;
   /** reuse a house's heat loss already computed */
   thermal?: HouseThermal;
+  /** deliver whatever the house needs, ignoring the heaters' output (degree-day comparison steps) */
+  uncapped?: boolean;
 }
 
 /** Simulation parameters for a variant of the house on the prepared season. */
@@ -332,6 +375,7 @@ export function variantParameters(
         : thermal.roofCovering.lightTransmittance * thermal.geometry.floorAreaM2 * prepared.solarUsefulFraction,
       daySetpointC: options.nightSetpointAllDay ? nightSetpointC : daySetpointC,
       nightSetpointC,
+      heaterOutputW: options.uncapped ? Infinity : variant.heaterOutputW,
     },
   };
 }
@@ -392,6 +436,8 @@ function describeSeason(prepared: PreparedSeason, variant: SeasonVariant, run: V
     heatingHours: result.monthlyHeatingHours[index],
     peakW: result.monthlyPeakW[index],
     degreeDaysKDay: degreeDays.byMonthSlot[index],
+    unmetHeatKWh: result.monthlyUnmetHeatWh[index] / 1000,
+    hoursBelowSetpoint: result.monthlyHoursBelowSetpoint[index],
   }));
 
   let heatedDays = 0;
@@ -424,7 +470,17 @@ function describeSeason(prepared: PreparedSeason, variant: SeasonVariant, run: V
       floorAreaM2: thermal.geometry.floorAreaM2,
     },
     monthly,
-    total: { ...fuelAmount(result.totalHeatWh / 1000, variant), heatingHours: result.heatingHours },
+    total: {
+      ...fuelAmount(result.totalHeatWh / 1000, variant),
+      heatingHours: result.heatingHours,
+      unmetHeatKWh: result.unmetHeatWh / 1000,
+      hoursBelowSetpoint: result.hoursBelowSetpoint,
+    },
+    heaterCapacity: {
+      installedOutputW: variant.heaterOutputW,
+      heaterCount: prepared.heaterCount,
+      caution: capacityCaution(variant.heaterOutputW, result, 'season'),
+    },
     peak,
     nightShareOfHeat: result.totalHeatWh > 0 ? result.nightHeatWh / result.totalHeatWh : 0,
     solarOffsetKWh: result.solarOffsetWh / 1000,
@@ -446,15 +502,25 @@ function degreeDayCrossCheck(
   const degreeDayKWh = degreeDayHeatKWh(uaWPerK, degreeDaysKDay);
 
   // Walk from the degree-day figure to the hourly one, adding one effect at a time.
-  const hourlyNoSunNight = runVariant(prepared, variant, ref, { thermal, withoutSun: true, nightSetpointAllDay: true, curtainOpen: true });
-  const withDaySetpoint = runVariant(prepared, variant, ref, { thermal, withoutSun: true, curtainOpen: true });
-  const withCurtain = runVariant(prepared, variant, ref, { thermal, withoutSun: true });
+  // Like the degree-day figure, these steps deliver whatever the house needs; the heaters' limit
+  // comes last, as its own step, when they fall short.
+  const hourlyNoSunNight = runVariant(prepared, variant, ref, {
+    thermal,
+    withoutSun: true,
+    nightSetpointAllDay: true,
+    curtainOpen: true,
+    uncapped: true,
+  });
+  const withDaySetpoint = runVariant(prepared, variant, ref, { thermal, withoutSun: true, curtainOpen: true, uncapped: true });
+  const withCurtain = runVariant(prepared, variant, ref, { thermal, withoutSun: true, uncapped: true });
+  const short = result.unmetHeatWh > 0;
+  const uncappedKWh = short ? runVariant(prepared, variant, ref, { thermal, uncapped: true }).result.totalHeatWh / 1000 : result.totalHeatWh / 1000;
   const energies = [
     degreeDayKWh,
     hourlyNoSunNight.result.totalHeatWh / 1000,
     withDaySetpoint.result.totalHeatWh / 1000,
     withCurtain.result.totalHeatWh / 1000,
-    result.totalHeatWh / 1000,
+    uncappedKWh,
   ];
   const labels: Array<[DegreeDayStep['key'], string]> = [
     ['degree-day', 'Degree-day method: daily mean temperatures, night setpoint all day, curtain open, no sun'],
@@ -463,6 +529,10 @@ function degreeDayCrossCheck(
     ['curtain', 'Curtain drawn at night'],
     ['sun', 'Sunlight through the roof offsets heating by day'],
   ];
+  if (short) {
+    energies.push(result.totalHeatWh / 1000);
+    labels.push(['heater-capacity', 'Heat the installed heaters cannot deliver in the coldest hours']);
+  }
   const steps: DegreeDayStep[] = labels.map(([key, label], index) => ({
     key,
     label,
@@ -494,7 +564,7 @@ function degreeDayCrossCheck(
     degreeDaysFDay: degreeDaysKDay * FAHRENHEIT_DEGREES_PER_KELVIN,
     hourlyDifferenceFraction: degreeDayKWh > 0 ? hourlyKWh / degreeDayKWh - 1 : null,
     steps,
-    explanation: explainDifference(steps, variant, hourlyKWh, degreeDayKWh),
+    explanation: explainDifference(steps, variant, hourlyKWh, degreeDayKWh, result),
   };
 }
 
@@ -510,7 +580,13 @@ function percentOf(change: number, base: number): string {
   return `${change >= 0 ? '+' : '−'}${Math.abs((100 * change) / base).toFixed(0)} %`;
 }
 
-function explainDifference(steps: DegreeDayStep[], variant: SeasonVariant, hourlyKWh: number, degreeDayKWh: number): string[] {
+function explainDifference(
+  steps: DegreeDayStep[],
+  variant: SeasonVariant,
+  hourlyKWh: number,
+  degreeDayKWh: number,
+  result: SimulationResult,
+): string[] {
   const lines: string[] = [];
   const base = degreeDayKWh;
   lines.push(
@@ -535,10 +611,42 @@ function explainDifference(steps: DegreeDayStep[], variant: SeasonVariant, hourl
   lines.push(
     `Sunlight through the roof covers part of the daytime loss: ${percentOf(sun.changeKWh, base)}. The degree-day method leaves the sun out, which is why it usually reads high for greenhouses.`,
   );
+  if (result.unmetHeatWh > 0) {
+    lines.push(
+      `The degree-day figure assumes the heaters deliver whatever the house needs. The installed heaters (${quantityToken('power', variant.heaterOutputW)}) ` +
+        `fall short for ${result.hoursBelowSetpoint} hours, so the hour-by-hour figure delivers ${energyToken(result.unmetHeatWh / 1000)} less heat ` +
+        `(${percentOf(-result.unmetHeatWh / 1000, base)}) than the house needs; fuel is counted on the heat delivered.`,
+    );
+  }
   lines.push(
     'Both methods use the same climate, so neither sees the cold snaps and cloudy spells that monthly normals average away; logged temperatures show them.',
   );
   return lines;
+}
+
+/**
+ * The caution shown when the heaters cannot hold the setpoint in some hour; null when they can.
+ * `scope` names the span of time the numbers cover.
+ */
+export function capacityCaution(
+  heaterOutputW: number,
+  shortfall: { unmetHeatWh: number; hoursBelowSetpoint: number; peakW: number },
+  scope: 'season' | 'night',
+): string | null {
+  if (shortfall.hoursBelowSetpoint <= 0) return null;
+  const hours = `${shortfall.hoursBelowSetpoint} ${shortfall.hoursBelowSetpoint === 1 ? 'hour' : 'hours'}`;
+  const span = scope === 'season' ? 'of the season' : 'of the night';
+  if (heaterOutputW <= 0) {
+    return (
+      `The house has no heaters: the crop sits below its setpoint for ${hours} ${span}, ` +
+      `and none of the ${energyToken(shortfall.unmetHeatWh / 1000)} of heat it needs is delivered. See the heater sizing.`
+    );
+  }
+  return (
+    `The heaters (installed output ${quantityToken('power', heaterOutputW)}) cannot hold the setpoint for ${hours} ${span}, ` +
+    `when the house needs up to ${quantityToken('power', shortfall.peakW)}: the crop sits below its setpoint for those hours and ` +
+    `${energyToken(shortfall.unmetHeatWh / 1000)} of heat goes undelivered. See the heater sizing.`
+  );
 }
 
 function rowAssumption(
@@ -652,6 +760,15 @@ function assumptions(prepared: PreparedSeason, variant: SeasonVariant, thermal: 
     ...rowAssumption('fuel-heat-content-us', `Heat content of ${fuel.label}`, fuel.heatContentBtuPerUnitUs, `Btu/${fuel.unitUs}`, fuel),
     confidence: (fuel.usConfidence as Confidence | undefined) ?? fuel.confidence,
   });
+  list.push(
+    derived(
+      'installed-heater-output',
+      'Installed heater output (count × rated input × efficiency); heat delivered in an hour is capped at it',
+      round(variant.heaterOutputW, 0),
+      'W',
+      "computed from the house's heater groups",
+    ),
+  );
   list.push({
     key: 'heater-efficiency',
     label: 'Heater efficiency (output ÷ input)',

@@ -46,3 +46,28 @@ describe('night heating demand', () => {
     expect(cooler.nightSetpointC).toBe(10);
   });
 });
+
+describe('night heating demand with the installed heaters as a limit', () => {
+  it('flags each hour the heaters cannot hold and counts fuel on the heat delivered', () => {
+    const { house } = nightInput();
+    const ample = nightHeatingDemand(nightInput({ climate: constantClimate(-5) }), ref, sunCache);
+    const outputW = ample.peakW / 2;
+    const small = nightHeatingDemand(
+      nightInput({ climate: constantClimate(-5), house: { ...house, heaters: [{ count: 1, ratedInputW: outputW / 0.8, efficiency: 0.8, fuelId: 'propane' }] } }),
+      ref,
+      sunCache,
+    );
+    expect(ample.hoursBelowSetpoint).toBe(0);
+    expect(ample.capacityCaution).toBeNull();
+    expect(small.installedOutputW).toBeCloseTo(outputW, 6);
+    expect(small.hoursBelowSetpoint).toBe(small.hourly.length);
+    for (const hour of small.hourly) {
+      expect(hour.belowSetpoint).toBe(true);
+      expect(hour.deliveredW).toBeCloseTo(outputW, 6);
+    }
+    expect(small.energyKWh).toBeCloseTo(ample.energyKWh / 2, 6);
+    expect(small.unmetHeatKWh).toBeCloseTo(ample.energyKWh / 2, 6);
+    expect(small.fuelInputKWh).toBeCloseTo(small.energyKWh / 0.8, 6);
+    expect(small.capacityCaution).toMatch(/of the night/);
+  });
+});

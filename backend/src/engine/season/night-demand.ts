@@ -4,6 +4,7 @@ import type { ReferenceData } from '../reference-data.types';
 import { civilDate, dayNumber, isoDate, isoLocalHour, parseIsoDate } from '../climate/calendar-days';
 import {
   baseVariant,
+  capacityCaution,
   fuelAmount,
   prepareSeason,
   variantParameters,
@@ -16,7 +17,8 @@ import { SunCache } from './sun-hours';
 /**
  * Heat and fuel for one night: from sunset on `date` to sunrise the next morning, the curtain
  * drawn (if the house has one), the house held at the night setpoint:
- *   E = Σ_hours (night share of the hour) × max(0, UA_curtain · (T_night − T_out)) × 1 h.
+ *   E = Σ_hours (night share of the hour) × min(P, max(0, UA_curtain · (T_night − T_out))) × 1 h,
+ * P the installed heater output: an hour that needs more than P is one the heaters cannot hold.
  * Outdoor temperature comes from the climate's daily curve (or logged readings) at mid-hour.
  */
 export interface NightDemandInput extends Omit<EstimateSeasonInput, 'season' | 'calendar'> {
@@ -34,6 +36,10 @@ export interface NightHour {
   nightShare: number;
   /** average heat demand over the hour's night share, W */
   heatW: number;
+  /** heat the heaters deliver (at most their installed output), W */
+  deliveredW: number;
+  /** true when the heaters cannot hold the night setpoint this hour */
+  belowSetpoint: boolean;
 }
 
 export interface NightDemand extends FuelAmount {
@@ -46,6 +52,14 @@ export interface NightDemand extends FuelAmount {
   uaWPerK: number;
   peakW: number;
   minOutdoorC: number;
+  /** installed heater output, W */
+  installedOutputW: number;
+  /** heat needed but not delivered (heaters too small), kWh */
+  unmetHeatKWh: number;
+  /** night hours in which the heaters cannot hold the setpoint */
+  hoursBelowSetpoint: number;
+  /** set when some hour cannot be held; may hold {{kind:valueSI}} tokens */
+  capacityCaution: string | null;
   hourly: NightHour[];
   cautions: string[];
 }
@@ -67,6 +81,8 @@ export function nightHeatingDemand(input: NightDemandInput, ref: ReferenceData, 
 
   const hourly: NightHour[] = [];
   let heatWh = 0;
+  let unmetHeatWh = 0;
+  let hoursBelowSetpoint = 0;
   let nightHours = 0;
   let peakW = 0;
   let minOutdoorC = Infinity;
@@ -77,11 +93,15 @@ export function nightHeatingDemand(input: NightDemandInput, ref: ReferenceData, 
     const outdoorC = hours.outdoorC[hour];
     const setpointC = parameters.nightSetpointC[Math.floor(hour / 24)];
     const lossW = Math.max(0, parameters.uaNightWPerK * (setpointC - outdoorC));
-    heatWh += nightShare * lossW;
+    const deliveredW = Math.min(lossW, parameters.heaterOutputW);
+    const belowSetpoint = lossW > deliveredW;
+    heatWh += nightShare * deliveredW;
+    unmetHeatWh += nightShare * (lossW - deliveredW);
+    if (belowSetpoint) hoursBelowSetpoint++;
     nightHours += nightShare;
     if (lossW > peakW) peakW = lossW;
     if (outdoorC < minOutdoorC) minOutdoorC = outdoorC;
-    hourly.push({ at: isoLocalHour(first + Math.floor(hour / 24), hour % 24), outdoorC, nightShare, heatW: lossW });
+    hourly.push({ at: isoLocalHour(first + Math.floor(hour / 24), hour % 24), outdoorC, nightShare, heatW: lossW, deliveredW, belowSetpoint });
   }
 
   const sunToday = sunCache.get(prepared.input.site, date.year, ref);
@@ -104,6 +124,10 @@ export function nightHeatingDemand(input: NightDemandInput, ref: ReferenceData, 
     ...fuelAmount(heatWh / 1000, variant),
     peakW,
     minOutdoorC: Number.isFinite(minOutdoorC) ? minOutdoorC : NaN,
+    installedOutputW: variant.heaterOutputW,
+    unmetHeatKWh: unmetHeatWh / 1000,
+    hoursBelowSetpoint,
+    capacityCaution: capacityCaution(variant.heaterOutputW, { unmetHeatWh, hoursBelowSetpoint, peakW }, 'night'),
     hourly,
     cautions: fuelCautions(variant.fuelRow),
   };

@@ -8,6 +8,10 @@
  *   by night (share 1 − f):
  *            q_night = max(0, UA_curtain · (T_night − T_out))
  *   heat = f · q_day + (1 − f) · q_night (W, average over the hour)
+ * The heaters deliver at most their installed output P: each part of the hour gets min(q, P);
+ * what they cannot deliver is unmet heat (the house falls below its setpoint), and an hour in
+ * which either part needs more than P counts as an hour below the setpoint. Fuel follows the
+ * delivered heat. P = Infinity leaves the demand uncapped.
  * Unheated (empty) days contribute nothing. Heat stored in the structure, soil and crop is not
  * modelled: each hour balances on its own.
  *
@@ -53,19 +57,31 @@ export interface SimulationParameters {
   /** per day; NaN on unheated days, °C */
   daySetpointC: Float64Array;
   nightSetpointC: Float64Array;
+  /** installed heater output, W; Infinity = uncapped (deliver whatever the house needs) */
+  heaterOutputW: number;
 }
 
 export interface SimulationResult {
   /** heat delivered per month slot, Wh */
   monthlyHeatWh: Float64Array;
   monthlyHeatingHours: Uint32Array;
+  /** highest hourly-average heat demand per month slot (before any heater limit), W */
   monthlyPeakW: Float64Array;
+  /** heat the heaters could not deliver per month slot, Wh */
+  monthlyUnmetHeatWh: Float64Array;
+  /** hours in which the heaters could not hold the setpoint, per month slot */
+  monthlyHoursBelowSetpoint: Uint32Array;
+  /** heat delivered, Wh */
   totalHeatWh: number;
+  /** heat needed but not delivered (heaters too small), Wh */
+  unmetHeatWh: number;
+  hoursBelowSetpoint: number;
   /** heat delivered in the night share of hours, Wh */
   nightHeatWh: number;
   /** heat the sun supplied that the heater would otherwise have had to, Wh */
   solarOffsetWh: number;
   heatingHours: number;
+  /** highest hourly-average heat demand (before any heater limit), W */
   peakW: number;
   /** hour index (from the first hour of the range) of the peak, −1 if no heat was needed */
   peakHourIndex: number;
@@ -76,12 +92,17 @@ export function simulateSeason(hours: SeasonHours, parameters: SimulationParamet
   const monthlyHeatWh = new Float64Array(monthCount);
   const monthlyHeatingHours = new Uint32Array(monthCount);
   const monthlyPeakW = new Float64Array(monthCount);
+  const monthlyUnmetHeatWh = new Float64Array(monthCount);
+  const monthlyHoursBelowSetpoint = new Uint32Array(monthCount);
   const outdoorC = hours.outdoorC;
   const dayFraction = hours.dayFraction;
   const irradiance = hours.clearSkyGlobalHorizontalWPerM2;
   const { uaDayWPerK, uaNightWPerK, solarGainAreaM2, daySetpointC, nightSetpointC } = parameters;
+  const capW = Number.isNaN(parameters.heaterOutputW) ? Infinity : Math.max(0, parameters.heaterOutputW);
 
   let totalHeatWh = 0;
+  let unmetHeatWh = 0;
+  let hoursBelowSetpoint = 0;
   let nightHeatWh = 0;
   let solarOffsetWh = 0;
   let heatingHours = 0;
@@ -95,6 +116,8 @@ export function simulateSeason(hours: SeasonHours, parameters: SimulationParamet
     const gainPerIrradiance = solarGainAreaM2 * hours.clearnessOfDay[day];
     const slot = hours.monthSlotOfDay[day];
     let monthWh = 0;
+    let monthUnmetWh = 0;
+    let monthHoursBelow = 0;
     let monthHours = 0;
     let monthPeak = monthlyPeakW[slot];
     const firstHour = day * 24;
@@ -102,13 +125,23 @@ export function simulateSeason(hours: SeasonHours, parameters: SimulationParamet
     for (let hour = firstHour; hour < lastHour; hour++) {
       const tOut = outdoorC[hour];
       const share = dayFraction[hour];
-      let heatW = 0;
+      // demand (what holding the setpoint takes) and delivered (at most the heaters' output)
+      let demandW = 0;
+      let deliveredW = 0;
+      let short = false;
       if (share > 0) {
         const lossW = uaDayWPerK * (dayC - tOut);
         if (lossW > 0) {
           const gainW = gainPerIrradiance * irradiance[hour];
           if (lossW > gainW) {
-            heatW = share * (lossW - gainW);
+            const needW = lossW - gainW;
+            demandW = share * needW;
+            if (needW > capW) {
+              deliveredW = share * capW;
+              short = true;
+            } else {
+              deliveredW = demandW;
+            }
             solarOffsetWh += share * gainW;
           } else {
             solarOffsetWh += share * lossW;
@@ -118,17 +151,27 @@ export function simulateSeason(hours: SeasonHours, parameters: SimulationParamet
       if (share < 1) {
         const lossW = uaNightWPerK * (nightC - tOut);
         if (lossW > 0) {
-          const nightW = (1 - share) * lossW;
-          heatW += nightW;
+          const nightDemandW = (1 - share) * lossW;
+          demandW += nightDemandW;
+          let nightW = nightDemandW;
+          if (lossW > capW) {
+            nightW = (1 - share) * capW;
+            short = true;
+          }
+          deliveredW += nightW;
           nightHeatWh += nightW;
         }
       }
-      if (heatW > 0) {
-        monthWh += heatW;
+      if (demandW > 0) {
+        monthWh += deliveredW;
         monthHours++;
-        if (heatW > monthPeak) monthPeak = heatW;
-        if (heatW > peakW) {
-          peakW = heatW;
+        if (short) {
+          monthUnmetWh += demandW - deliveredW;
+          monthHoursBelow++;
+        }
+        if (demandW > monthPeak) monthPeak = demandW;
+        if (demandW > peakW) {
+          peakW = demandW;
           peakHourIndex = hour;
         }
       }
@@ -136,7 +179,11 @@ export function simulateSeason(hours: SeasonHours, parameters: SimulationParamet
     monthlyHeatWh[slot] += monthWh;
     monthlyHeatingHours[slot] += monthHours;
     monthlyPeakW[slot] = monthPeak;
+    monthlyUnmetHeatWh[slot] += monthUnmetWh;
+    monthlyHoursBelowSetpoint[slot] += monthHoursBelow;
     totalHeatWh += monthWh;
+    unmetHeatWh += monthUnmetWh;
+    hoursBelowSetpoint += monthHoursBelow;
     heatingHours += monthHours;
   }
 
@@ -144,7 +191,11 @@ export function simulateSeason(hours: SeasonHours, parameters: SimulationParamet
     monthlyHeatWh,
     monthlyHeatingHours,
     monthlyPeakW,
+    monthlyUnmetHeatWh,
+    monthlyHoursBelowSetpoint,
     totalHeatWh,
+    unmetHeatWh,
+    hoursBelowSetpoint,
     nightHeatWh,
     solarOffsetWh,
     heatingHours,
