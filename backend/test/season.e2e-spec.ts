@@ -17,10 +17,13 @@ interface Month {
 }
 interface MeasureResult {
   kind: string;
+  applicable: boolean;
+  notApplicableReason: string | null;
+  paybackStatus: 'years' | 'immediate' | 'enter-cost' | 'never' | 'not-applicable';
   paybackYears: number | null;
   paybackText: string;
   yearlyMoneySaved: number;
-  costAmount: number;
+  costAmount: number | null;
   lightChange: { relativeChange: number } | null;
 }
 
@@ -142,6 +145,29 @@ describe('season, calendars, fuel prices and the farm budget (e2e)', () => {
       expect(body.total.fuelInputKWh).toBeCloseTo(body.total.energyKWh / 0.8, 3);
       expect(body.cautions.join(' ')).toMatch(/carbon monoxide/);
       expect(body.assumptions.length).toBeGreaterThan(5);
+      // Range C's six heaters hold it all year
+      expect(body.total).toMatchObject({ unmetHeatKWh: 0, hoursBelowSetpoint: 0 });
+      expect(body.heaterCapacity.caution).toBeNull();
+    });
+
+    it("flags House B's hours below the setpoint: one unit heater gives less than its coldest hours need", async () => {
+      const body = (await season(houses.B, SEASON).expect(200)).body;
+      // demo House B: one heater, input 300,000 Btu/h × 0.80 = 240,000 Btu/h ≈ 70.3 kW output (1 Btu/h = 0.29307 W)
+      expect(body.heaterCapacity.installedOutputW).toBeCloseTo(300_000 * 0.29307107 * 0.8, 0);
+      expect(body.peak.heatW).toBeGreaterThan(body.heaterCapacity.installedOutputW);
+      expect(body.total.hoursBelowSetpoint).toBeGreaterThan(0);
+      expect(body.total.unmetHeatKWh).toBeGreaterThan(0);
+      expect(sum(body.monthly.map((m: { hoursBelowSetpoint: number }) => m.hoursBelowSetpoint))).toBe(body.total.hoursBelowSetpoint);
+      expect(body.total.fuelInputKWh).toBeCloseTo(body.total.energyKWh / 0.8, 3);
+      expect(body.heaterCapacity.caution).toMatch(/crop sits below its setpoint/);
+      expect(body.heaterCapacity.caution).toContain(`${body.total.hoursBelowSetpoint} hours`);
+      expect(body.degreeDays.steps[body.degreeDays.steps.length - 1].key).toBe('heater-capacity');
+
+      const budget = (await t.http.post(`/api/farms/${farmId}/season-budget`).set(bearer(grower)).send(SEASON).expect(200)).body;
+      const inBudget = budget.houses.find((house: { houseId: number }) => house.houseId === houses.B.id);
+      expect(inBudget.hoursBelowSetpoint).toBe(body.total.hoursBelowSetpoint);
+      expect(inBudget.unmetHeatKWh).toBeCloseTo(body.total.unmetHeatKWh, 6);
+      expect(inBudget.capacityCaution).toBe(body.heaterCapacity.caution);
     });
 
     it('cross-checks against degree-days worked out by hand from the farm climate normals', async () => {
@@ -322,6 +348,8 @@ describe('season, calendars, fuel prices and the farm budget (e2e)', () => {
       const paying = results.filter((m) => m.paybackYears !== null);
       const never = results.filter((m) => m.paybackYears === null);
       expect(never.map((m) => m.kind)).toEqual(['fuel-switch']);
+      expect(never[0].paybackStatus).toBe('never');
+      expect(results.find((m) => m.kind === 'night-setpoint-lower')).toMatchObject({ paybackStatus: 'immediate', paybackYears: 0 });
       expect(never[0].paybackText).toBe('never');
       expect(never[0].yearlyMoneySaved).toBeLessThan(0);
       expect(results[results.length - 1].kind).toBe('fuel-switch');
@@ -333,16 +361,55 @@ describe('season, calendars, fuel prices and the farm budget (e2e)', () => {
       expect(layer.lightChange!.relativeChange).toBeLessThan(0);
     });
 
-    it('compares the default measures at cost 0 when the list is empty', async () => {
+    it('compares the default measures that apply, without costs, when the list is empty', async () => {
       const body = (await t.http.post(`/api/houses/${houses.B.id}/measures`).set(bearer(grower)).send({ ...SEASON, measures: [] }).expect(200)).body;
       expect(body.defaultsUsed).toBe(true);
       expect(body.notes[0]).toMatch(/cost/);
       const kinds = body.measures.map((m: MeasureResult) => m.kind);
       // House B: single poly, no curtain, perimeter not insulated
       expect(kinds).toEqual(expect.arrayContaining(['second-poly-layer', 'thermal-curtain', 'perimeter-insulation', 'night-setpoint-lower']));
-      for (const measure of body.measures as MeasureResult[]) expect(measure.costAmount).toBe(0);
-      const savings = body.measures.filter((m: MeasureResult) => m.paybackYears !== null).map((m: MeasureResult) => m.yearlyMoneySaved);
+      for (const measure of body.measures as MeasureResult[]) {
+        expect(measure).toMatchObject({ costAmount: null, applicable: true, notApplicableReason: null, paybackStatus: 'enter-cost', paybackYears: null });
+        expect(measure.paybackText).toBe('enter a cost');
+      }
+      const savings = body.measures.map((m: MeasureResult) => m.yearlyMoneySaved);
       expect(savings).toEqual([...savings].sort((a: number, b: number) => b - a));
+    });
+
+    it("leaves out of House A's defaults what it already has (double poly with IR film, insulated perimeter)", async () => {
+      const body = (await t.http.post(`/api/houses/${houses.A.id}/measures`).set(bearer(grower)).send({ ...SEASON, measures: [] }).expect(200)).body;
+      const kinds = body.measures.map((m: MeasureResult) => m.kind);
+      expect(kinds).not.toContain('second-poly-layer');
+      expect(kinds).not.toContain('perimeter-insulation');
+      expect(kinds).toContain('thermal-curtain');
+      for (const measure of body.measures as MeasureResult[]) expect(measure.applicable).toBe(true);
+    });
+
+    it('lists measures that do not apply last, with the reason and no payback; a fuel switch without a price is one of them', async () => {
+      const body = (
+        await t.http
+          .post(`/api/houses/${houses.A.id}/measures`)
+          .set(bearer(grower))
+          .send({
+            ...SEASON,
+            measures: [
+              { kind: 'second-poly-layer', costAmount: 3000 },
+              { kind: 'fuel-switch', costAmount: 1000 },
+              { kind: 'night-setpoint-lower', lowerByK: 0 },
+              { kind: 'thermal-curtain', costAmount: 9000 },
+              { kind: 'later-start' },
+            ],
+          })
+          .expect(200)
+      ).body;
+      const results: MeasureResult[] = body.measures;
+      expect(results.map((m) => m.paybackStatus)).toEqual(['years', 'enter-cost', 'not-applicable', 'not-applicable', 'not-applicable']);
+      expect(results.slice(2).map((m) => m.kind)).toEqual(['second-poly-layer', 'fuel-switch', 'night-setpoint-lower']);
+      for (const measure of results.slice(2)) {
+        expect(measure).toMatchObject({ applicable: false, paybackYears: null, paybackText: 'not applicable', yearlyMoneySaved: 0 });
+        expect(measure.notApplicableReason).toEqual(expect.any(String));
+      }
+      expect(results[3].notApplicableReason).toMatch(/price/);
     });
 
     it('names a bad measure setting', async () => {

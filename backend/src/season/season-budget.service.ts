@@ -75,6 +75,9 @@ export class SeasonBudgetService {
         fuelQuantitySi: estimate.total.fuelQuantitySi,
         fuelQuantityUs: estimate.total.fuelQuantityUs,
         cost: stored ? estimate.total.cost : null,
+        unmetHeatKWh: estimate.total.unmetHeatKWh,
+        hoursBelowSetpoint: estimate.total.hoursBelowSetpoint,
+        capacityCaution: estimate.heaterCapacity.caution,
         heatedDays: estimate.period.heatedDays,
         calendarPeriodCount: calendar?.length ?? 0,
         monthly: estimate.monthly.map((month) => ({
@@ -85,6 +88,8 @@ export class SeasonBudgetService {
           fuelQuantitySi: month.fuelQuantitySi,
           fuelQuantityUs: month.fuelQuantityUs,
           cost: stored ? month.cost : null,
+          unmetHeatKWh: month.unmetHeatKWh,
+          hoursBelowSetpoint: month.hoursBelowSetpoint,
         })),
         problem: stored ? null : `the farm has no price for ${fuel.label}: set it in the farm's fuel prices to include this house's cost`,
       });
@@ -134,8 +139,11 @@ export class SeasonBudgetService {
     const costComplete = houses.every((house) => house.cost !== null);
     const notes = [
       "Each house is estimated with its first heater's fuel and efficiency, its production calendar and the farm's price for that fuel.",
-      'Heat is delivered heat; fuel burnt = heat ÷ heater efficiency.',
+      'Heat is delivered heat; fuel burnt = heat ÷ heater efficiency. In an hour that needs more than the installed heaters give, only their output is delivered.',
     ];
+    if (houses.some((house) => house.hoursBelowSetpoint > 0)) {
+      notes.push('Some houses cannot be held at their setpoints in the coldest hours; see each house’s heater sizing.');
+    }
     if (!costComplete) notes.push('Some houses have no heaters or no fuel price; their cost is left out of the total.');
     if (houses.length === 0) notes.push('The farm has no houses yet.');
 
@@ -174,6 +182,9 @@ function emptyHouse(row: House, calendarPeriodCount: number, problem: string): B
     fuelQuantitySi: 0,
     fuelQuantityUs: 0,
     cost: null,
+    unmetHeatKWh: 0,
+    hoursBelowSetpoint: 0,
+    capacityCaution: null,
     heatedDays: 0,
     calendarPeriodCount,
     monthly: [],

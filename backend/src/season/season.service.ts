@@ -1,9 +1,7 @@
 import { Injectable } from '@nestjs/common';
 import type { AuthenticatedUser } from '../common/decorators/current-user.decorator';
 import { estimateSeason, type EstimateSeasonInput } from '../engine/estimate-season';
-import type { HouseSpec } from '../engine/house.types';
-import { referenceRow, type ReferenceData, type ReferenceRow } from '../engine/reference-data.types';
-import { compareMeasures, type Measure, type MeasureResult } from '../engine/season/measures';
+import { compareMeasures, defaultMeasures, type Measure, type MeasureResult } from '../engine/season/measures';
 import { nightHeatingDemand } from '../engine/season/night-demand';
 import { houseToSpec } from '../houses/house.mapper';
 import { HousesService } from '../houses/houses.service';
@@ -13,61 +11,14 @@ import type { HouseNightDemandDto, HouseSeasonEstimateDto, MeasureComparisonDto,
 import { SeasonInputsService, withRequestFields, type FarmSeasonContext, type HouseFuelChoice } from './season-inputs.service';
 import { SunCacheService } from './sun-cache.service';
 
-interface MeasureDefaultsRow extends ReferenceRow {
-  targetCoveringId?: string;
-  defaultCurtainId?: string;
-  defaultEfficiency?: number;
-}
-
-/**
- * The measures compared when the request lists none: every kind with a default in
- * reference-data/measures.json that would change this house, at cost 0 (costs are the user's).
- * A fuel switch needs a price for the other fuel, so it is never a default.
- */
-export function defaultMeasures(house: HouseSpec, heaterEfficiency: number, ref: ReferenceData): MeasureDto[] {
-  const row = (id: string) => referenceRow<MeasureDefaultsRow>(ref, 'measures', id);
-  const list: MeasureDto[] = [];
-  const layer = row('second-poly-layer');
-  if (layer?.targetCoveringId && (house.coverings.roof !== layer.targetCoveringId || house.coverings.sidewalls !== layer.targetCoveringId)) {
-    const target = referenceRow<ReferenceRow & { uWPerM2K?: number }>(ref, 'coverings', layer.targetCoveringId);
-    const roof = referenceRow<ReferenceRow & { uWPerM2K?: number }>(ref, 'coverings', house.coverings.roof);
-    // Only where the second layer would be an improvement on the roof as it is.
-    if (target?.uWPerM2K !== undefined && roof?.uWPerM2K !== undefined && target.uWPerM2K < roof.uWPerM2K) {
-      list.push({ kind: 'second-poly-layer', costAmount: 0 });
-    }
-  }
-  const curtain = row('thermal-curtain');
-  if (curtain && !house.curtainId) list.push({ kind: 'thermal-curtain', costAmount: 0 });
-  if (row('perimeter-insulation') && !house.perimeterInsulated) list.push({ kind: 'perimeter-insulation', costAmount: 0 });
-  if (row('sealing')) list.push({ kind: 'sealing', costAmount: 0 });
-  if (row('night-setpoint-lower')) list.push({ kind: 'night-setpoint-lower', costAmount: 0 });
-  if (row('later-start')) list.push({ kind: 'later-start', costAmount: 0 });
-  const efficiency = row('heater-efficiency');
-  if (efficiency?.defaultEfficiency !== undefined && efficiency.defaultEfficiency > heaterEfficiency) {
-    list.push({ kind: 'heater-efficiency', costAmount: 0 });
-  }
-  return list;
-}
-
 function toEngineMeasure(dto: MeasureDto): Measure {
   const { costAmount, ...settings } = dto;
-  return { ...settings, costMoney: costAmount } as Measure;
+  return { ...settings, costMoney: costAmount ?? null } as Measure;
 }
 
 function measureResultToDto(result: MeasureResult): MeasureResultDto {
   const { costMoney, ...rest } = result;
   return { ...rest, costAmount: costMoney };
-}
-
-/** Shortest payback first; equal paybacks (e.g. measures at cost 0) by larger saving; never last. */
-function rankMeasures(results: MeasureResultDto[]): MeasureResultDto[] {
-  return [...results].sort((a, b) => {
-    if (a.paybackYears === null || b.paybackYears === null) {
-      if (a.paybackYears === null && b.paybackYears === null) return b.yearlyMoneySaved - a.yearlyMoneySaved;
-      return a.paybackYears === null ? 1 : -1;
-    }
-    return a.paybackYears - b.paybackYears || b.yearlyMoneySaved - a.yearlyMoneySaved;
-  });
 }
 
 /** Season, one night and measures for a stored house, with defaults from the house and its farm. */
@@ -120,22 +71,22 @@ export class SeasonService {
   async measures(user: AuthenticatedUser, houseId: number, body: MeasuresRequestDto): Promise<MeasureComparisonDto> {
     const run = await this.prepare(user, houseId, body);
     const defaultsUsed = body.measures.length === 0;
-    const measures = defaultsUsed ? defaultMeasures(run.input.house, run.input.heaterEfficiency, this.reference.data) : body.measures;
-    const comparison = withRequestFields(() =>
-      compareMeasures(run.input, measures.map(toEngineMeasure), this.reference.data, this.sun.cache),
-    );
+    const comparison = withRequestFields(() => {
+      const measures = defaultsUsed
+        ? defaultMeasures(run.input, this.reference.data, this.sun.cache)
+        : body.measures.map(toEngineMeasure);
+      return compareMeasures(run.input, measures, this.reference.data, this.sun.cache);
+    });
     const notes = [...comparison.notes];
     if (defaultsUsed) {
-      notes.unshift('No measures were given, so the default measures are compared at cost 0: enter what each would cost to see its payback.');
+      notes.unshift(
+        'No measures were given, so the default measures that apply to this house are compared without costs: enter what each would cost to see its payback.',
+      );
     }
-    const results = comparison.measures.map(measureResultToDto).map((result) =>
-      // Cost 0 gives a payback of 0 years; say what that means instead.
-      result.costAmount === 0 && result.paybackYears !== null ? { ...result, paybackText: defaultsUsed ? 'enter a cost' : 'immediately' } : result,
-    );
     return {
       houseId,
       baseline: comparison.baseline,
-      measures: rankMeasures(results),
+      measures: comparison.measures.map(measureResultToDto),
       defaultsUsed,
       notes,
       inputsUsed: run.inputsUsed,

@@ -1133,6 +1133,8 @@ export interface components {
             heatCostW: number;
             /** @description °C */
             atOutdoorC: number;
+            /** @description W lost by the house itself (cover, perimeter, leaks) at the same temperatures, for comparison */
+            houseHeatLossW: number;
         };
         CoolingAssumptionDto: {
             key: string;
@@ -1356,6 +1358,10 @@ export interface components {
             peakW: number;
             /** @description degree-days to the night setpoint, K·day */
             degreeDaysKDay: number;
+            /** @description heat the installed heaters could not deliver, kWh */
+            unmetHeatKWh: number;
+            /** @description hours in which the heaters could not hold the setpoint */
+            hoursBelowSetpoint: number;
         };
         SeasonTotalDto: {
             /** @description heat delivered to the house, kWh */
@@ -1369,6 +1375,18 @@ export interface components {
             /** @description money, in the currency of the price */
             cost: number;
             heatingHours: number;
+            /** @description heat the installed heaters could not deliver, kWh */
+            unmetHeatKWh: number;
+            /** @description hours in which the heaters could not hold the setpoint */
+            hoursBelowSetpoint: number;
+        };
+        SeasonHeaterCapacityDto: {
+            /** @description Σ count × rated input × efficiency of the house’s heaters, W; heat delivered in an hour is capped at it */
+            installedOutputW: number;
+            /** @description heater units installed */
+            heaterCount: number;
+            /** @description set when the heaters cannot hold the setpoint in some hour; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
+            caution: string | null;
         };
         SeasonPeakDto: {
             /** @description W */
@@ -1380,7 +1398,7 @@ export interface components {
         };
         DegreeDayStepDto: {
             /** @enum {string} */
-            key: "degree-day" | "hourly-curve" | "day-setpoint" | "curtain" | "sun";
+            key: "degree-day" | "hourly-curve" | "day-setpoint" | "curtain" | "sun" | "heater-capacity";
             label: string;
             /** @description kWh */
             energyKWh: number;
@@ -1461,6 +1479,7 @@ export interface components {
             /** @description one row per calendar month the season touches */
             monthly: components["schemas"]["SeasonMonthDto"][];
             total: components["schemas"]["SeasonTotalDto"];
+            heaterCapacity: components["schemas"]["SeasonHeaterCapacityDto"];
             /** @description the hour of highest heat demand; null if no heat was needed */
             peak: components["schemas"]["SeasonPeakDto"] | null;
             /** @description share of the season's heat delivered at night (sunset to sunrise) */
@@ -1505,6 +1524,10 @@ export interface components {
             nightShare: number;
             /** @description average heat demand over the hour's night share, W */
             heatW: number;
+            /** @description heat the heaters deliver (at most their installed output), W */
+            deliveredW: number;
+            /** @description true when the heaters cannot hold the night setpoint this hour */
+            belowSetpoint: boolean;
         };
         SeasonRunInputsDto: {
             /** @enum {string} */
@@ -1551,10 +1574,18 @@ export interface components {
             nightSetpointC: number;
             /** @description UA with the curtain drawn (if any), W/K */
             uaWPerK: number;
-            /** @description W */
+            /** @description highest hourly heat demand, W */
             peakW: number;
             /** @description coldest night hour, °C */
             minOutdoorC: number | null;
+            /** @description installed heater output, W */
+            installedOutputW: number;
+            /** @description heat the heaters could not deliver, kWh */
+            unmetHeatKWh: number;
+            /** @description night hours in which the heaters cannot hold the setpoint */
+            hoursBelowSetpoint: number;
+            /** @description set when some hour cannot be held; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
+            capacityCaution: string | null;
             hourly: components["schemas"]["NightHourDto"][];
             /** @description may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
             cautions: string[];
@@ -1570,8 +1601,8 @@ export interface components {
         MeasureDto: {
             /** @enum {string} */
             kind: "second-poly-layer" | "thermal-curtain" | "perimeter-insulation" | "sealing" | "night-setpoint-lower" | "later-start" | "heater-efficiency" | "fuel-switch";
-            /** @description what the measure costs, same currency as the fuel price */
-            costAmount: number;
+            /** @description what the measure costs, same currency as the fuel price; omit (or null) when not known yet: the payback then asks for it */
+            costAmount?: number | null;
             label?: string;
             /** @description second-poly-layer: surfaces to cover */
             surfaces?: ("roof" | "sidewalls")[];
@@ -1583,13 +1614,13 @@ export interface components {
             airLeakageClassId?: string;
             /** @description sealing: measured air changes per hour after sealing */
             airChangesPerHour?: number;
-            /** @description night-setpoint-lower: K */
+            /** @description night-setpoint-lower: K (0 is accepted and reported as not applicable) */
             lowerByK?: number;
             /** @description later-start: days */
             delayDays?: number;
             /** @description heater-efficiency / fuel-switch: efficiency of the new heaters */
             efficiency?: number;
-            /** @description fuel-switch: the new fuel and its price */
+            /** @description fuel-switch: the new fuel and its price (without it the measure is reported as not applicable) */
             fuel?: components["schemas"]["MeasureFuelPriceDto"];
         };
         MeasuresRequestDto: {
@@ -1616,7 +1647,7 @@ export interface components {
              * @example 2027-05-31
              */
             endDate?: string;
-            /** @description measures to compare; an empty list compares the default measures (reference-data/measures.json) at cost 0 so a ranking shows at once */
+            /** @description measures to compare; an empty list compares the default measures (reference-data/measures.json) that apply to the house, without costs, so a ranking shows at once */
             measures: components["schemas"]["MeasureDto"][];
         };
         MeasureSeasonDto: {
@@ -1653,8 +1684,13 @@ export interface components {
             label: string;
             /** @description what changed, in words; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
             description: string;
-            costAmount: number;
-            /** @description the season with the measure */
+            /** @description null when no cost was entered */
+            costAmount: number | null;
+            /** @description false when the measure changes nothing for this house (already done, or no better than what it has) */
+            applicable: boolean;
+            /** @description why the measure does not apply, in plain words; null when it applies; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
+            notApplicableReason: string | null;
+            /** @description the season with the measure (the house as it is when the measure does not apply) */
             season: components["schemas"]["MeasureSeasonDto"];
             /** @description heat the house no longer needs, kWh per season (0 for heater or fuel changes) */
             heatSavedKWh: number;
@@ -1666,9 +1702,17 @@ export interface components {
             fuelSavedUs: number | null;
             /** @description money saved per season (= per year with one season a year); negative when it costs more to run */
             yearlyMoneySaved: number;
-            /** @description cost ÷ yearly money saved, years; null = never pays back */
+            /**
+             * @description 'years': cost ÷ saving; 'immediate': cost 0 and a saving; 'enter-cost': a saving but no cost entered; 'never': no money saved; 'not-applicable': changes nothing for this house
+             * @enum {string}
+             */
+            paybackStatus: "years" | "immediate" | "enter-cost" | "never" | "not-applicable";
+            /** @description cost ÷ yearly money saved, years (0 when 'immediate'); null for the other statuses */
             paybackYears: number | null;
-            /** @example 2.4 years */
+            /**
+             * @description '2.4 years', 'immediately', 'enter a cost', 'never' or 'not applicable'
+             * @example 2.4 years
+             */
             paybackText: string;
             /** @description light change for measures that add a layer or a screen */
             lightChange: components["schemas"]["MeasureLightChangeDto"] | null;
@@ -1679,9 +1723,9 @@ export interface components {
             houseId: number;
             /** @description the season of the house as it is */
             baseline: components["schemas"]["MeasureSeasonDto"];
-            /** @description shortest payback first (equal paybacks: larger saving first); never-paying measures last */
+            /** @description shortest payback first (equal paybacks: larger saving first), then measures without a cost, then those that never pay back, then those that do not apply */
             measures: components["schemas"]["MeasureResultDto"][];
-            /** @description true when the request listed no measures and the default measures (at cost 0) were compared */
+            /** @description true when the request listed no measures and the default measures that apply to the house were compared without costs */
             defaultsUsed: boolean;
             /** @description may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
             notes: string[];
@@ -1782,6 +1826,10 @@ export interface components {
             fuelQuantityUs: number;
             /** @description null when the farm has no price for the fuel */
             cost: number | null;
+            /** @description heat the heaters could not deliver, kWh */
+            unmetHeatKWh: number;
+            /** @description hours in which the heaters could not hold the setpoint */
+            hoursBelowSetpoint: number;
         };
         BudgetHouseDto: {
             houseId: number;
@@ -1808,6 +1856,12 @@ export interface components {
             heatedDays: number;
             /** @description periods of the house's production calendar (0 = heated all season) */
             calendarPeriodCount: number;
+            /** @description heat the house's heaters could not deliver, kWh */
+            unmetHeatKWh: number;
+            /** @description hours in which the heaters could not hold the setpoint */
+            hoursBelowSetpoint: number;
+            /** @description set when the heaters cannot hold the setpoint in some hour; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
+            capacityCaution: string | null;
             monthly: components["schemas"]["BudgetMonthOfHouseDto"][];
             /** @description why the house is not (fully) budgeted, e.g. no heaters or no price */
             problem: string | null;

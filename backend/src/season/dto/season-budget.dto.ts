@@ -11,6 +11,8 @@ export class BudgetMonthOfHouseDto {
   @ApiProperty() fuelQuantitySi: number;
   @ApiProperty() fuelQuantityUs: number;
   @ApiProperty({ type: Number, nullable: true, description: 'null when the farm has no price for the fuel' }) cost: number | null;
+  @ApiProperty({ minimum: 0, description: 'heat the heaters could not deliver, kWh' }) unmetHeatKWh: number;
+  @ApiProperty({ minimum: 0, description: 'hours in which the heaters could not hold the setpoint' }) hoursBelowSetpoint: number;
 }
 
 export class BudgetHouseDto {
@@ -30,6 +32,10 @@ export class BudgetHouseDto {
   @ApiProperty({ type: Number, nullable: true, description: 'null when the farm has no price for the fuel' }) cost: number | null;
   @ApiProperty() heatedDays: number;
   @ApiProperty({ description: "periods of the house's production calendar (0 = heated all season)" }) calendarPeriodCount: number;
+  @ApiProperty({ minimum: 0, description: "heat the house's heaters could not deliver, kWh" }) unmetHeatKWh: number;
+  @ApiProperty({ minimum: 0, description: 'hours in which the heaters could not hold the setpoint' }) hoursBelowSetpoint: number;
+  @ApiProperty({ type: String, nullable: true, description: `set when the heaters cannot hold the setpoint in some hour; ${PROSE_TOKENS_NOTE}` })
+  capacityCaution: string | null;
   @ApiProperty({ type: BudgetMonthOfHouseDto, isArray: true }) monthly: BudgetMonthOfHouseDto[];
   @ApiProperty({ type: String, nullable: true, description: 'why the house is not (fully) budgeted, e.g. no heaters or no price' }) problem: string | null;
 }

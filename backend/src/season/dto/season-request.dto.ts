@@ -117,9 +117,15 @@ export class MeasureFuelPriceDto {
 export class MeasureDto {
   @ApiProperty({ enum: MEASURE_KINDS }) @IsIn(MEASURE_KINDS) kind: MeasureKind;
 
-  @ApiProperty({ minimum: 0, maximum: 1e9, description: 'what the measure costs, same currency as the fuel price' })
-  @IsNumber() @Min(0) @Max(1e9)
-  costAmount: number;
+  @ApiPropertyOptional({
+    type: Number,
+    nullable: true,
+    minimum: 0,
+    maximum: 1e9,
+    description: 'what the measure costs, same currency as the fuel price; omit (or null) when not known yet: the payback then asks for it',
+  })
+  @IsOptional() @IsNumber() @Min(0) @Max(1e9)
+  costAmount?: number | null;
 
   @ApiPropertyOptional({ maxLength: 100 }) @IsOptional() @IsString() @MaxLength(100) label?: string;
 
@@ -139,8 +145,8 @@ export class MeasureDto {
   @IsOptional() @IsNumber() @Min(BOUNDS.airChangesPerHour.min) @Max(BOUNDS.airChangesPerHour.max)
   airChangesPerHour?: number;
 
-  @ApiPropertyOptional({ minimum: 0.1, maximum: 15, description: 'night-setpoint-lower: K' })
-  @IsOptional() @IsNumber() @Min(0.1) @Max(15)
+  @ApiPropertyOptional({ minimum: 0, maximum: 15, description: 'night-setpoint-lower: K (0 is accepted and reported as not applicable)' })
+  @IsOptional() @IsNumber() @Min(0) @Max(15)
   lowerByK?: number;
 
   @ApiPropertyOptional({ minimum: 1, maximum: 180, description: 'later-start: days' })
@@ -151,7 +157,7 @@ export class MeasureDto {
   @IsOptional() @IsNumber() @Min(BOUNDS.heaterEfficiency.min) @Max(BOUNDS.heaterEfficiency.max)
   efficiency?: number;
 
-  @ApiPropertyOptional({ type: MeasureFuelPriceDto, description: 'fuel-switch: the new fuel and its price' })
+  @ApiPropertyOptional({ type: MeasureFuelPriceDto, description: 'fuel-switch: the new fuel and its price (without it the measure is reported as not applicable)' })
   @IsOptional() @ValidateNested() @Type(() => MeasureFuelPriceDto)
   fuel?: MeasureFuelPriceDto;
 }
@@ -161,7 +167,8 @@ export class MeasuresRequestDto extends SeasonRequestDto {
     type: MeasureDto,
     isArray: true,
     maxItems: 30,
-    description: 'measures to compare; an empty list compares the default measures (reference-data/measures.json) at cost 0 so a ranking shows at once',
+    description:
+      'measures to compare; an empty list compares the default measures (reference-data/measures.json) that apply to the house, without costs, so a ranking shows at once',
   })
   @IsArray() @ArrayMaxSize(30) @ValidateNested({ each: true }) @Type(() => MeasureDto)
   measures: MeasureDto[];

@@ -1,7 +1,7 @@
 import { ApiProperty } from '@nestjs/swagger';
 import type { DegreeDayStep } from '../../engine/estimate-season';
 import type { PriceUnit } from '../../engine/season/fuel';
-import { MEASURE_KINDS, type MeasureKind } from '../../engine/season/measures';
+import { MEASURE_KINDS, PAYBACK_STATUSES, type MeasureKind, type PaybackStatus } from '../../engine/season/measures';
 import { CONFIDENCE_MARKS } from '../../reference-data/load-reference-data';
 import { PRICE_UNITS } from './season-request.dto';
 import { PROSE_TOKENS_NOTE } from '../../engine/prose';
@@ -13,7 +13,7 @@ import { PROSE_TOKENS_NOTE } from '../../engine/prose';
  */
 
 export const SEASON_ASSUMPTION_CONFIDENCES = [...CONFIDENCE_MARKS, 'user-entered'] as const;
-export const DEGREE_DAY_STEP_KEYS: ReadonlyArray<DegreeDayStep['key']> = ['degree-day', 'hourly-curve', 'day-setpoint', 'curtain', 'sun'];
+export const DEGREE_DAY_STEP_KEYS: ReadonlyArray<DegreeDayStep['key']> = ['degree-day', 'hourly-curve', 'day-setpoint', 'curtain', 'sun', 'heater-capacity'];
 
 export class SeasonFuelAmountDto {
   @ApiProperty({ description: 'heat delivered to the house, kWh' }) energyKWh: number;
@@ -53,10 +53,22 @@ export class SeasonMonthDto extends SeasonFuelAmountDto {
   @ApiProperty({ description: 'heated hours with any heat demand' }) heatingHours: number;
   @ApiProperty({ description: 'highest hourly-average heat demand of the month, W' }) peakW: number;
   @ApiProperty({ description: 'degree-days to the night setpoint, K·day' }) degreeDaysKDay: number;
+  @ApiProperty({ minimum: 0, description: 'heat the installed heaters could not deliver, kWh' }) unmetHeatKWh: number;
+  @ApiProperty({ minimum: 0, description: 'hours in which the heaters could not hold the setpoint' }) hoursBelowSetpoint: number;
 }
 
 export class SeasonTotalDto extends SeasonFuelAmountDto {
   @ApiProperty() heatingHours: number;
+  @ApiProperty({ minimum: 0, description: 'heat the installed heaters could not deliver, kWh' }) unmetHeatKWh: number;
+  @ApiProperty({ minimum: 0, description: 'hours in which the heaters could not hold the setpoint' }) hoursBelowSetpoint: number;
+}
+
+export class SeasonHeaterCapacityDto {
+  @ApiProperty({ description: 'Σ count × rated input × efficiency of the house’s heaters, W; heat delivered in an hour is capped at it' })
+  installedOutputW: number;
+  @ApiProperty({ description: 'heater units installed' }) heaterCount: number;
+  @ApiProperty({ type: String, nullable: true, description: `set when the heaters cannot hold the setpoint in some hour; ${PROSE_TOKENS_NOTE}` })
+  caution: string | null;
 }
 
 export class SeasonPeakDto {
@@ -101,6 +113,7 @@ export class SeasonEstimateDto {
   @ApiProperty({ type: SeasonHeatLossDto }) heatLoss: SeasonHeatLossDto;
   @ApiProperty({ type: SeasonMonthDto, isArray: true, description: 'one row per calendar month the season touches' }) monthly: SeasonMonthDto[];
   @ApiProperty({ type: SeasonTotalDto }) total: SeasonTotalDto;
+  @ApiProperty({ type: SeasonHeaterCapacityDto }) heaterCapacity: SeasonHeaterCapacityDto;
   @ApiProperty({ type: SeasonPeakDto, nullable: true, description: 'the hour of highest heat demand; null if no heat was needed' }) peak: SeasonPeakDto | null;
   @ApiProperty({ minimum: 0, maximum: 1, description: "share of the season's heat delivered at night (sunset to sunrise)" }) nightShareOfHeat: number;
   @ApiProperty({ description: 'heat the sun supplied in place of the heater, kWh' }) solarOffsetKWh: number;
@@ -149,6 +162,8 @@ export class NightHourDto {
   @ApiProperty({ description: '°C' }) outdoorC: number;
   @ApiProperty({ minimum: 0, maximum: 1, description: 'share of the hour after sunset / before sunrise' }) nightShare: number;
   @ApiProperty({ description: "average heat demand over the hour's night share, W" }) heatW: number;
+  @ApiProperty({ description: 'heat the heaters deliver (at most their installed output), W' }) deliveredW: number;
+  @ApiProperty({ description: 'true when the heaters cannot hold the night setpoint this hour' }) belowSetpoint: boolean;
 }
 
 export class HouseNightDemandDto extends SeasonFuelAmountDto {
@@ -159,8 +174,12 @@ export class HouseNightDemandDto extends SeasonFuelAmountDto {
   @ApiProperty({ description: 'h' }) nightHours: number;
   @ApiProperty({ description: '°C' }) nightSetpointC: number;
   @ApiProperty({ description: 'UA with the curtain drawn (if any), W/K' }) uaWPerK: number;
-  @ApiProperty({ description: 'W' }) peakW: number;
+  @ApiProperty({ description: 'highest hourly heat demand, W' }) peakW: number;
   @ApiProperty({ type: Number, nullable: true, description: 'coldest night hour, °C' }) minOutdoorC: number | null;
+  @ApiProperty({ description: 'installed heater output, W' }) installedOutputW: number;
+  @ApiProperty({ minimum: 0, description: 'heat the heaters could not deliver, kWh' }) unmetHeatKWh: number;
+  @ApiProperty({ minimum: 0, description: 'night hours in which the heaters cannot hold the setpoint' }) hoursBelowSetpoint: number;
+  @ApiProperty({ type: String, nullable: true, description: `set when some hour cannot be held; ${PROSE_TOKENS_NOTE}` }) capacityCaution: string | null;
   @ApiProperty({ type: NightHourDto, isArray: true }) hourly: NightHourDto[];
   @ApiProperty({ type: String, isArray: true, description: PROSE_TOKENS_NOTE }) cautions: string[];
   @ApiProperty({ type: SeasonRunInputsDto }) inputsUsed: SeasonRunInputsDto;
@@ -188,15 +207,26 @@ export class MeasureResultDto {
   @ApiProperty({ enum: MEASURE_KINDS }) kind: MeasureKind;
   @ApiProperty() label: string;
   @ApiProperty({ description: `what changed, in words; ${PROSE_TOKENS_NOTE}` }) description: string;
-  @ApiProperty() costAmount: number;
-  @ApiProperty({ type: MeasureSeasonDto, description: "the season with the measure" }) season: MeasureSeasonDto;
+  @ApiProperty({ type: Number, nullable: true, description: 'null when no cost was entered' }) costAmount: number | null;
+  @ApiProperty({ description: 'false when the measure changes nothing for this house (already done, or no better than what it has)' })
+  applicable: boolean;
+  @ApiProperty({ type: String, nullable: true, description: `why the measure does not apply, in plain words; null when it applies; ${PROSE_TOKENS_NOTE}` })
+  notApplicableReason: string | null;
+  @ApiProperty({ type: MeasureSeasonDto, description: 'the season with the measure (the house as it is when the measure does not apply)' }) season: MeasureSeasonDto;
   @ApiProperty({ description: 'heat the house no longer needs, kWh per season (0 for heater or fuel changes)' }) heatSavedKWh: number;
   @ApiProperty({ description: 'fuel energy no longer bought, kWh per season' }) fuelInputSavedKWh: number;
   @ApiProperty({ type: Number, nullable: true, description: "in the baseline fuel's unitSi; null when the measure burns another fuel" }) fuelSavedSi: number | null;
   @ApiProperty({ type: Number, nullable: true, description: "in the baseline fuel's unitUs" }) fuelSavedUs: number | null;
   @ApiProperty({ description: 'money saved per season (= per year with one season a year); negative when it costs more to run' }) yearlyMoneySaved: number;
-  @ApiProperty({ type: Number, nullable: true, description: 'cost ÷ yearly money saved, years; null = never pays back' }) paybackYears: number | null;
-  @ApiProperty({ example: '2.4 years' }) paybackText: string;
+  @ApiProperty({
+    enum: PAYBACK_STATUSES,
+    description:
+      "'years': cost ÷ saving; 'immediate': cost 0 and a saving; 'enter-cost': a saving but no cost entered; 'never': no money saved; 'not-applicable': changes nothing for this house",
+  })
+  paybackStatus: PaybackStatus;
+  @ApiProperty({ type: Number, nullable: true, description: "cost ÷ yearly money saved, years (0 when 'immediate'); null for the other statuses" })
+  paybackYears: number | null;
+  @ApiProperty({ example: '2.4 years', description: "'2.4 years', 'immediately', 'enter a cost', 'never' or 'not applicable'" }) paybackText: string;
   @ApiProperty({ type: MeasureLightChangeDto, nullable: true, description: 'light change for measures that add a layer or a screen' }) lightChange: MeasureLightChangeDto | null;
   @ApiProperty({ type: String, isArray: true, description: PROSE_TOKENS_NOTE }) notes: string[];
 }
@@ -204,9 +234,14 @@ export class MeasureResultDto {
 export class MeasureComparisonDto {
   @ApiProperty() houseId: number;
   @ApiProperty({ type: MeasureSeasonDto, description: 'the season of the house as it is' }) baseline: MeasureSeasonDto;
-  @ApiProperty({ type: MeasureResultDto, isArray: true, description: 'shortest payback first (equal paybacks: larger saving first); never-paying measures last' })
+  @ApiProperty({
+    type: MeasureResultDto,
+    isArray: true,
+    description: 'shortest payback first (equal paybacks: larger saving first), then measures without a cost, then those that never pay back, then those that do not apply',
+  })
   measures: MeasureResultDto[];
-  @ApiProperty({ description: 'true when the request listed no measures and the default measures (at cost 0) were compared' }) defaultsUsed: boolean;
+  @ApiProperty({ description: 'true when the request listed no measures and the default measures that apply to the house were compared without costs' })
+  defaultsUsed: boolean;
   @ApiProperty({ type: String, isArray: true, description: PROSE_TOKENS_NOTE }) notes: string[];
   @ApiProperty({ type: SeasonInputsUsedDto }) inputsUsed: SeasonInputsUsedDto;
 }
