@@ -355,7 +355,7 @@ describe('season, calendars, fuel prices and the farm budget (e2e)', () => {
       expect(results[results.length - 1].kind).toBe('fuel-switch');
       for (let i = 1; i < paying.length; i++) expect(paying[i].paybackYears!).toBeGreaterThanOrEqual(paying[i - 1].paybackYears!);
       expect(results[0].kind).toBe('night-setpoint-lower');
-      for (const measure of paying) expect(measure.paybackYears).toBeCloseTo(measure.costAmount / measure.yearlyMoneySaved, 6);
+      for (const measure of paying) expect(measure.paybackYears).toBeCloseTo(measure.costAmount! / measure.yearlyMoneySaved, 6);
       const layer = results.find((m) => m.kind === 'second-poly-layer')!;
       expect(layer.yearlyMoneySaved).toBeGreaterThan(0);
       expect(layer.lightChange!.relativeChange).toBeLessThan(0);

@@ -643,9 +643,9 @@ export function capacityCaution(
     );
   }
   return (
-    `The heaters (installed output ${quantityToken('power', heaterOutputW)}) cannot hold the setpoint for ${hours} ${span}, ` +
-    `when the house needs up to ${quantityToken('power', shortfall.peakW)}: the crop sits below its setpoint for those hours and ` +
-    `${energyToken(shortfall.unmetHeatWh / 1000)} of heat goes undelivered. See the heater sizing.`
+    `The crop sits below its setpoint for ${hours} ${span}: the heaters (installed output ${quantityToken('power', heaterOutputW)}) ` +
+    `cannot give the up to ${quantityToken('power', shortfall.peakW)} the house needs then, and ${energyToken(shortfall.unmetHeatWh / 1000)} ` +
+    'of heat goes undelivered. See the heater sizing.'
   );
 }
 
