@@ -206,11 +206,27 @@ describe('farm climate, temperature logs and the season', () => {
     expect(await page.getByTestId('season-total-cost').textContent()).toMatch(/\d/);
     await page.getByTestId('night-length').waitFor({ timeout: 60_000 });
     expect(await page.getByTestId('night-length').textContent()).toMatch(/\d+(\.\d)? h/);
-    await page.getByRole('table', { name: 'Measures ranked by payback' }).waitFor({ timeout: 60_000 });
+    const measures = page.getByRole('table', { name: 'Measures ranked by payback' });
+    await measures.waitFor({ timeout: 60_000 });
+    // the default list holds only measures that apply to the house
+    expect(await measures.textContent()).not.toContain('Does not apply');
+    await page.getByRole('columnheader', { name: 'Hours below setpoint' }).waitFor();
     await page.getByRole('heading', { name: 'Production calendar' }).waitFor();
     // The API's prose carries quantities as {{kind:value}} tokens: none may reach the reader.
     expect(await page.evaluate(() => document.body.innerText)).not.toContain('{{');
     await screenshot(page, 'house-season.png');
+
+    // Demo House B's one heater cannot hold it in the coldest hours: the season says so.
+    await page.goBack();
+    await page.waitForURL(/\/houses\/\d+$/);
+    await page.goBack();
+    await page.getByRole('grid', { name: 'Houses' }).getByRole('link', { name: /House B/ }).click();
+    await page.waitForURL(/\/houses\/\d+$/);
+    await page.getByRole('link', { name: /Heating season, fuel budget and measures/ }).click();
+    const warning = page.getByTestId('season-below-setpoint');
+    await warning.waitFor({ timeout: 60_000 });
+    expect(await warning.textContent()).toMatch(/crop sits below its setpoint for \d+ hours of the season/);
+    expect(await page.evaluate(() => document.body.innerText)).not.toContain('{{');
     expect(pageErrors).toEqual([]);
     await page.context().close();
   });

@@ -40,9 +40,9 @@ export function isValidCost(text: string): boolean {
   return Number.isFinite(value) && value >= 0 && value <= 1e9;
 }
 
-/** Rows → the request's measures; an unpriced measure is compared at cost 0. */
+/** Rows → the request's measures; an unpriced measure goes without a cost (its payback then asks for one). */
 export function measuresRequestBody(rows: MeasureRow[]): Measure[] {
-  return rows.map((row) => ({ kind: row.kind, costAmount: row.cost.trim() === '' ? 0 : Number(row.cost) }));
+  return rows.map((row) => (row.cost.trim() === '' ? { kind: row.kind } : { kind: row.kind, costAmount: Number(row.cost) }));
 }
 
 /** "Roof: 78 % → 76 % (3 % less light)" for layer and screen measures. */
@@ -55,9 +55,15 @@ export function lightChangeText(measure: Pick<MeasureResult, 'lightChange'>, uni
   return `${surface}: ${units.format('fraction', change.before)} → ${units.format('fraction', change.after)} (${relative} ${direction} light)`;
 }
 
-/** The payback as the table shows it; unpriced measures say so instead of "0 years". */
-export function paybackText(measure: Pick<MeasureResult, 'paybackYears' | 'paybackText' | 'costAmount'>): string {
-  if (measure.costAmount === 0 && measure.paybackYears === 0) return 'enter a cost';
-  if (measure.paybackYears === null) return 'never';
-  return measure.paybackText;
+const PAYBACK_WORDS: Record<Exclude<MeasureResult['paybackStatus'], 'years'>, string> = {
+  immediate: 'immediately',
+  'enter-cost': 'enter a cost',
+  never: 'never',
+  'not-applicable': '—',
+};
+
+/** The payback as the table shows it, from the API's status (never from its wording). */
+export function paybackText(measure: Pick<MeasureResult, 'paybackStatus' | 'paybackYears' | 'paybackText'>): string {
+  if (measure.paybackStatus === 'years') return measure.paybackText;
+  return PAYBACK_WORDS[measure.paybackStatus];
 }

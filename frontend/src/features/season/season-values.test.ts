@@ -96,20 +96,23 @@ describe('measures values', () => {
       kind: 'thermal-curtain',
       label: 'Curtain',
       description: '',
-      costAmount: 0,
+      costAmount: null,
+      applicable: true,
+      notApplicableReason: null,
       heatSavedKWh: 0,
       fuelInputSavedKWh: 0,
       fuelSavedSi: 0,
       fuelSavedUs: 0,
       yearlyMoneySaved: 0,
-      paybackYears: 0,
+      paybackStatus: 'enter-cost',
+      paybackYears: null,
       paybackText: 'enter a cost',
       lightChange: null,
       notes: [],
       ...overrides,
     }) as MeasureResult;
 
-  it('prices the default measures in request order and sends unpriced ones at cost 0', () => {
+  it('prices the default measures in request order and sends unpriced ones without a cost', () => {
     const comparison = {
       measures: [result({ index: 1, kind: 'sealing' }), result({ index: 0, kind: 'thermal-curtain' })],
     } as MeasureComparison;
@@ -118,8 +121,10 @@ describe('measures values', () => {
     rows[0]!.cost = '9500';
     expect(measuresRequestBody(rows)).toEqual([
       { kind: 'thermal-curtain', costAmount: 9500 },
-      { kind: 'sealing', costAmount: 0 },
+      { kind: 'sealing' },
     ]);
+    rows[1]!.cost = '0';
+    expect(measuresRequestBody(rows)[1]).toEqual({ kind: 'sealing', costAmount: 0 });
   });
 
   it('shows the light change beside layer and screen measures, and payback in words', () => {
@@ -127,7 +132,9 @@ describe('measures values', () => {
     expect(lightChangeText(curtain, unitsFor('si'))).toBe('Roof: 78 % → 76 % (3 % less light)');
     expect(lightChangeText(result({}), unitsFor('si'))).toBe('—');
     expect(paybackText(result({}))).toBe('enter a cost');
-    expect(paybackText(result({ costAmount: 100, paybackYears: null, paybackText: 'never' }))).toBe('never');
-    expect(paybackText(result({ costAmount: 9500, paybackYears: 4.5, paybackText: '4.5 years' }))).toBe('4.5 years');
+    expect(paybackText(result({ costAmount: 100, paybackStatus: 'never', paybackText: 'never' }))).toBe('never');
+    expect(paybackText(result({ costAmount: 0, paybackStatus: 'immediate', paybackYears: 0, paybackText: 'immediately' }))).toBe('immediately');
+    expect(paybackText(result({ costAmount: 9500, paybackStatus: 'years', paybackYears: 4.5, paybackText: '4.5 years' }))).toBe('4.5 years');
+    expect(paybackText(result({ applicable: false, paybackStatus: 'not-applicable', paybackText: 'not applicable' }))).toBe('—');
   });
 });

@@ -23,6 +23,9 @@ const propaneHouse = {
   cost: 10_541.42,
   heatedDays: 228,
   calendarPeriodCount: 3,
+  unmetHeatKWh: 0,
+  hoursBelowSetpoint: 0,
+  capacityCaution: null as string | null,
   monthly: [],
   problem: null,
 };
@@ -34,7 +37,19 @@ const budget: SeasonBudget = {
   seasonFrom: 'default-heating-season',
   climateSource: 'normals',
   temperatureLogId: null,
-  houses: [propaneHouse, { ...propaneHouse, houseId: 2, name: 'House B', cost: null, problem: 'no price for the fuel' }],
+  houses: [
+    propaneHouse,
+    {
+      ...propaneHouse,
+      houseId: 2,
+      name: 'House B',
+      cost: null,
+      problem: 'no price for the fuel',
+      unmetHeatKWh: 293.0711,
+      hoursBelowSetpoint: 37,
+      capacityCaution: 'The heaters (installed output {{power:70337}}) cannot hold the setpoint for 37 hours of the season.',
+    },
+  ],
   byFuel: [
     {
       fuelId: 'propane',
@@ -108,6 +123,10 @@ describe('SeasonBudgetSection', () => {
     expect(houseA.textContent).toContain('481.39 MMBtu');
     expect(houseA.textContent).toContain('6,588 US gal');
     expect(within(table).getByText('no price for the fuel')).toBeTruthy();
+    // House B's heaters cannot hold its setpoint: flagged with the hours and the heat not delivered (1 MMBtu)
+    const houseB = within(table).getByRole('row', { name: /House B/ });
+    expect(houseB.textContent).toContain('37 h below setpoint: heaters too small (1.00 MMBtu not delivered)');
+    expect(houseA.textContent).not.toContain('below setpoint');
     expect(screen.getByText(/left out of the total cost/)).toBeTruthy();
     expect(screen.getByRole('note').textContent).toContain('carbon monoxide');
 

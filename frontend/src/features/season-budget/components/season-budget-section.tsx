@@ -101,6 +101,17 @@ function BudgetTable({ budget, units }: { budget: SeasonBudget; units: Units }) 
                     {units.prose(house.problem)}
                   </Typography>
                 ) : null}
+                {house.hoursBelowSetpoint > 0 ? (
+                  <Typography
+                    variant="caption"
+                    color="warning.main"
+                    component="div"
+                    title={house.capacityCaution ? units.prose(house.capacityCaution) : undefined}
+                  >
+                    {house.hoursBelowSetpoint} h below setpoint: heaters too small ({units.format('energyKWh', house.unmetHeatKWh)}{' '}
+                    not delivered)
+                  </Typography>
+                ) : null}
               </TableCell>
               <TableCell>{house.fuelLabel ?? '—'}</TableCell>
               <TableCell align="right">{house.heatedDays}</TableCell>

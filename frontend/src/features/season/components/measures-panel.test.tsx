@@ -1,5 +1,5 @@
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { render, screen, waitFor } from '@testing-library/react';
+import { render, screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import type { MeasureComparison, MeasureResult } from '../../../api/types';
@@ -17,21 +17,25 @@ const season = {
   unitUs: 'US gal',
 };
 
-function measure(index: number, kind: MeasureResult['kind'], costAmount: number, yearlyMoneySaved: number): MeasureResult {
+function measure(index: number, kind: MeasureResult['kind'], costAmount: number | null, yearlyMoneySaved: number): MeasureResult {
+  const paybackYears = costAmount === null ? null : costAmount / yearlyMoneySaved;
   return {
     index,
     kind,
     label: kind === 'thermal-curtain' ? 'Install a thermal curtain' : 'Lower the night setpoint',
     description: kind === 'night-setpoint-lower' ? 'night setpoint lowered by {{temperatureDifference:2}}' : '',
     costAmount,
+    applicable: true,
+    notApplicableReason: null,
     season,
     heatSavedKWh: 10_000,
     fuelInputSavedKWh: 12_500,
     fuelSavedSi: 1_768,
     fuelSavedUs: 467,
     yearlyMoneySaved,
-    paybackYears: costAmount === 0 ? 0 : costAmount / yearlyMoneySaved,
-    paybackText: costAmount === 0 ? 'enter a cost' : `${(costAmount / yearlyMoneySaved).toFixed(1)} years`,
+    paybackStatus: paybackYears === null ? 'enter-cost' : 'years',
+    paybackYears,
+    paybackText: paybackYears === null ? 'enter a cost' : `${paybackYears.toFixed(1)} years`,
     lightChange:
       kind === 'thermal-curtain'
         ? { surface: 'roof', before: 0.78, after: 0.7566, relativeChange: -0.03, source: 'rule of thumb' }
@@ -57,7 +61,7 @@ describe('MeasuresPanel', () => {
         bodies.push(body);
         const result =
           body.measures.length === 0
-            ? comparison([measure(0, 'thermal-curtain', 0, 2116), measure(1, 'night-setpoint-lower', 0, 847)], true)
+            ? comparison([measure(0, 'thermal-curtain', null, 2116), measure(1, 'night-setpoint-lower', null, 847)], true)
             : comparison([measure(1, 'night-setpoint-lower', 100, 847), measure(0, 'thermal-curtain', 12_000, 2116)], false);
         return new Response(JSON.stringify(result), { status: 200, headers: { 'content-type': 'application/json' } });
       }),
@@ -91,5 +95,53 @@ describe('MeasuresPanel', () => {
     const rows = screen.getAllByRole('row').slice(1);
     expect(rows[0]!.textContent).toContain('Lower the night setpoint');
     expect(rows[1]!.textContent).toContain('Install a thermal curtain');
+  });
+
+  it('shows why a measure does not apply in place of its savings and payback, listed last without a rank', async () => {
+    const notApplicable: MeasureResult = {
+      ...measure(1, 'night-setpoint-lower', 500, 0),
+      kind: 'second-poly-layer',
+      label: 'Add a second, inflated poly layer',
+      description: 'roof and sidewalls covered with Inflated double polyethylene',
+      applicable: false,
+      notApplicableReason:
+        'The roof and sidewalls already lose as little heat as Inflated double polyethylene or less (U now: roof {{uValue:3.41}}, sidewalls {{uValue:3.41}}; Inflated double polyethylene: {{uValue:3.97}}).',
+      heatSavedKWh: 0,
+      fuelInputSavedKWh: 0,
+      fuelSavedSi: 0,
+      fuelSavedUs: 0,
+      yearlyMoneySaved: 0,
+      paybackStatus: 'not-applicable',
+      paybackYears: null,
+      paybackText: 'not applicable',
+    };
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(async () => {
+        const result = comparison([measure(0, 'thermal-curtain', null, 2116), notApplicable], true);
+        return new Response(JSON.stringify(result), { status: 200, headers: { 'content-type': 'application/json' } });
+      }),
+    );
+    const client = new QueryClient({ defaultOptions: { queries: { retry: false } } });
+    render(
+      <QueryClientProvider client={client}>
+        <UnitSystemProvider system="us">
+          <MeasuresPanel houseId={7} climateSource="normals" />
+        </UnitSystemProvider>
+      </QueryClientProvider>,
+    );
+    const table = await screen.findByRole('table', { name: 'Measures ranked by payback' });
+    const rows = within(table).getAllByRole('row').slice(1);
+    expect(rows[0]!.textContent).toContain('enter a cost');
+    const layer = rows[1]!;
+    // the reason, with its U-values in the user's units (3.41 W/(m²·K) ÷ 5.678263 = 0.601 Btu/(h·ft²·°F), NIST SP 811 B.8)
+    expect(layer.textContent).toContain('Does not apply: The roof and sidewalls already lose as little heat');
+    expect(layer.textContent).toMatch(/0\.601 Btu/);
+    expect(layer.textContent).not.toMatch(/\{\{/);
+    // no rank, no savings and no payback for it
+    expect(within(layer).getAllByRole('cell')[0]!.textContent).toBe('—');
+    expect(layer.textContent).not.toContain('years');
+    expect(layer.textContent).not.toContain('never');
+    expect(layer.textContent).not.toContain('$0');
   });
 });

@@ -109,8 +109,8 @@ export function MeasuresPanel({ houseId, climateSource }: { houseId: number; cli
                         ? '—'
                         : units.fuel({ fuelQuantitySi: measure.fuelSavedSi, fuelQuantityUs: measure.fuelSavedUs }, baselineFuel);
                     return (
-                      <TableRow key={`${measure.index}-${measure.kind}`}>
-                        <TableCell>{rank + 1}</TableCell>
+                      <TableRow key={`${measure.index}-${measure.kind}`} data-applicable={measure.applicable}>
+                        <TableCell>{measure.applicable ? rank + 1 : '—'}</TableCell>
                         <TableCell>
                           <Typography variant="body2" sx={{ fontWeight: 500 }}>
                             {measure.label}
@@ -133,28 +133,40 @@ export function MeasuresPanel({ houseId, climateSource }: { houseId: number; cli
                               error={!isValidCost(row.cost)}
                               slotProps={{ htmlInput: { inputMode: 'decimal', 'aria-label': `Cost of: ${measure.label}` } }}
                             />
+                          ) : measure.costAmount === null ? (
+                            '—'
                           ) : (
                             units.money(measure.costAmount, 0)
                           )}
                         </TableCell>
-                        <TableCell align="right">
-                          {units.money(measure.yearlyMoneySaved, 0)}
-                          {measure.yearlyMoneySaved < 0 ? (
-                            <Typography variant="caption" color="warning.main" component="div">
-                              costs more to run
+                        {measure.applicable ? (
+                          <>
+                            <TableCell align="right">
+                              {units.money(measure.yearlyMoneySaved, 0)}
+                              {measure.yearlyMoneySaved < 0 ? (
+                                <Typography variant="caption" color="warning.main" component="div">
+                                  costs more to run
+                                </Typography>
+                              ) : null}
+                            </TableCell>
+                            <TableCell align="right" sx={{ whiteSpace: 'nowrap' }}>
+                              {fuelSaved}
+                            </TableCell>
+                            <TableCell align="right">
+                              {units.format('energyKWh', measure.heatSavedKWh, { withoutUnit: true })}
+                            </TableCell>
+                            <TableCell align="right" sx={{ whiteSpace: 'nowrap' }}>
+                              {paybackText(measure)}
+                            </TableCell>
+                            <TableCell>{lightChangeText(measure, units)}</TableCell>
+                          </>
+                        ) : (
+                          <TableCell colSpan={5}>
+                            <Typography variant="body2" color="text.secondary" component="div">
+                              Does not apply: {units.prose(measure.notApplicableReason ?? '')}
                             </Typography>
-                          ) : null}
-                        </TableCell>
-                        <TableCell align="right" sx={{ whiteSpace: 'nowrap' }}>
-                          {fuelSaved}
-                        </TableCell>
-                        <TableCell align="right">
-                          {units.format('energyKWh', measure.heatSavedKWh, { withoutUnit: true })}
-                        </TableCell>
-                        <TableCell align="right" sx={{ whiteSpace: 'nowrap' }}>
-                          {paybackText(measure)}
-                        </TableCell>
-                        <TableCell>{lightChangeText(measure, units)}</TableCell>
+                          </TableCell>
+                        )}
                       </TableRow>
                     );
                   })}

@@ -1,4 +1,4 @@
-import { Paper, Stack, TextField, Typography } from '@mui/material';
+import { Alert, Paper, Stack, TextField, Typography } from '@mui/material';
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import type { SeasonRequest } from '../../../api/types';
@@ -62,6 +62,7 @@ export function NightDemandPanel({
               {units.format('temperature', result.minOutdoorC)} and needs {units.format('power', result.peakW)}. Times
               are local standard time.
             </Typography>
+            {result.capacityCaution ? <Alert severity="warning">{units.prose(result.capacityCaution)}</Alert> : null}
             <FuelCautions cautions={result.cautions} />
           </>
         ) : null}

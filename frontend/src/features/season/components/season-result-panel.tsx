@@ -1,4 +1,4 @@
-import { Box, Paper, Stack, Table, TableBody, TableCell, TableHead, TableRow, Typography } from '@mui/material';
+import { Alert, AlertTitle, Box, Paper, Stack, Table, TableBody, TableCell, TableHead, TableRow, Typography } from '@mui/material';
 import { useTheme } from '@mui/material/styles';
 import { Bar } from 'react-chartjs-2';
 import type { HouseSeasonEstimate } from '../../../api/types';
@@ -26,6 +26,15 @@ export function SeasonResultPanel({ season }: { season: HouseSeasonEstimate }) {
           heated; {season.fuel.label} at {units.money(season.fuel.pricePerUnit)} per{' '}
           {season.fuel.priceUnitLabel}, heater efficiency {units.format('fraction', season.fuel.heaterEfficiency)}.
         </Typography>
+        {season.total.hoursBelowSetpoint > 0 ? (
+          <Alert severity="warning" data-testid="season-below-setpoint">
+            <AlertTitle>The heaters cannot hold the setpoint</AlertTitle>
+            {season.heaterCapacity.caution
+              ? units.prose(season.heaterCapacity.caution)
+              : `${season.total.hoursBelowSetpoint} hours below the setpoint.`}{' '}
+            Heat and fuel below count only what the heaters deliver.
+          </Alert>
+        ) : null}
         <Stack direction="row" spacing={3} useFlexGap sx={{ flexWrap: 'wrap' }}>
           <Fact label="Fuel" value={units.fuel(season.total, fuelUnits)} testId="season-total-fuel" />
           <Fact label="Cost" value={units.money(season.total.cost, 0)} testId="season-total-cost" />
@@ -88,6 +97,7 @@ export function SeasonResultPanel({ season }: { season: HouseSeasonEstimate }) {
               <TableCell align="right">Cost</TableCell>
               <TableCell align="right">Heating hours</TableCell>
               <TableCell align="right">Peak</TableCell>
+              <TableCell align="right">Hours below setpoint</TableCell>
             </TableRow>
           </TableHead>
           <TableBody>
@@ -100,6 +110,9 @@ export function SeasonResultPanel({ season }: { season: HouseSeasonEstimate }) {
                 <TableCell align="right">{units.money(month.cost, 0)}</TableCell>
                 <TableCell align="right">{month.heatingHours}</TableCell>
                 <TableCell align="right">{units.format('power', month.peakW)}</TableCell>
+                <TableCell align="right" sx={month.hoursBelowSetpoint > 0 ? { color: 'warning.main', fontWeight: 500 } : undefined}>
+                  {month.hoursBelowSetpoint}
+                </TableCell>
               </TableRow>
             ))}
           </TableBody>
