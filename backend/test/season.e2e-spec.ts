@@ -394,7 +394,7 @@ describe('season, calendars, fuel prices and the farm budget (e2e)', () => {
             ...SEASON,
             measures: [
               { kind: 'second-poly-layer', costAmount: 3000 },
-              { kind: 'fuel-switch', costAmount: 1000 },
+              { kind: 'fuel-switch', costAmount: 1000, fuel: { fuelId: 'natural-gas' } },
               { kind: 'night-setpoint-lower', lowerByK: 0 },
               { kind: 'thermal-curtain', costAmount: 9000 },
               { kind: 'later-start' },

@@ -1594,9 +1594,13 @@ export interface components {
         MeasureFuelPriceDto: {
             /** @description reference-data fuels id */
             fuelId: string;
-            pricePerUnit: number;
-            /** @enum {string} */
-            priceUnit: "si" | "us";
+            /** @description without a price the fuel switch is reported as not applicable */
+            pricePerUnit?: number;
+            /**
+             * @description needed with a price
+             * @enum {string}
+             */
+            priceUnit?: "si" | "us";
         };
         MeasureDto: {
             /** @enum {string} */

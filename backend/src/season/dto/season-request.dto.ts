@@ -109,8 +109,10 @@ export class NightDemandRequestDto extends SeasonOptionsDto {
 
 export class MeasureFuelPriceDto {
   @ApiProperty({ description: 'reference-data fuels id' }) @IsString() @MaxLength(100) fuelId: string;
-  @ApiProperty({ minimum: 0, maximum: 1e6 }) @IsNumber() @Min(0) @Max(1e6) pricePerUnit: number;
-  @ApiProperty({ enum: PRICE_UNITS }) @IsIn(PRICE_UNITS) priceUnit: PriceUnit;
+  @ApiPropertyOptional({ minimum: 0, maximum: 1e6, description: 'without a price the fuel switch is reported as not applicable' })
+  @IsOptional() @IsNumber() @Min(0) @Max(1e6)
+  pricePerUnit?: number;
+  @ApiPropertyOptional({ enum: PRICE_UNITS, description: 'needed with a price' }) @IsOptional() @IsIn(PRICE_UNITS) priceUnit?: PriceUnit;
 }
 
 /** One energy measure; only the settings of its kind apply, the rest default from reference-data/measures.json. */
