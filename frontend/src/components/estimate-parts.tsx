@@ -1,4 +1,4 @@
-import { Alert, AlertTitle, Box, Chip, Link, List, ListItem, Stack, Tooltip, Typography } from '@mui/material';
+import { Alert, AlertTitle, Box, Chip, Link, List, ListItem, Paper, Stack, Tooltip, Typography } from '@mui/material';
 import type { ReactNode } from 'react';
 import { Link as RouterLink } from 'react-router-dom';
 import { ApiError } from '../api/client';
@@ -181,4 +181,33 @@ export function formatPercent(fraction: number, decimals = 0): string {
   return `${new Intl.NumberFormat('en-US', { minimumFractionDigits: decimals, maximumFractionDigits: decimals }).format(
     fraction * 100,
   )} %`;
+}
+
+/** The frame every result panel on the house page shares: a titled section, flagged while it shows unsaved edits. */
+export function ResultPanel({
+  headingId,
+  title,
+  unsavedEdits = false,
+  busy = false,
+  children,
+}: {
+  headingId: string;
+  title: string;
+  unsavedEdits?: boolean;
+  busy?: boolean;
+  children: ReactNode;
+}) {
+  return (
+    <Paper component="section" aria-labelledby={headingId} aria-busy={busy} sx={{ p: 2 }}>
+      <Stack spacing={2}>
+        <Stack direction="row" spacing={1} sx={{ alignItems: 'center', flexWrap: 'wrap' }}>
+          <Typography id={headingId} variant="h3" component="h3" sx={{ flexGrow: 1 }}>
+            {title}
+          </Typography>
+          {unsavedEdits ? <Chip size="small" color="secondary" label="Unsaved edits" /> : null}
+        </Stack>
+        {children}
+      </Stack>
+    </Paper>
+  );
 }

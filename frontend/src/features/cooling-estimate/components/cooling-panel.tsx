@@ -8,7 +8,6 @@ import {
   Chip,
   Grid,
   LinearProgress,
-  Paper,
   Stack,
   Table,
   TableBody,
@@ -27,6 +26,7 @@ import {
   Figure,
   formatPercent,
   NoPermissionNote,
+  ResultPanel,
 } from '../../../components/estimate-parts';
 import { ErrorAlert } from '../../../components/feedback';
 import { houseSpecOf } from '../../../lib/house-spec';
@@ -188,23 +188,11 @@ export function CoolingPanel({ house, canRunEstimates, editedHouse = null, edits
     enabled: canRunEstimates && editedHouse !== null && storedResult !== undefined,
   });
 
-  const header = (
-    <Stack direction="row" spacing={1} sx={{ alignItems: 'center', flexWrap: 'wrap' }}>
-      <Typography id="cooling-panel-heading" variant="h3" component="h3" sx={{ flexGrow: 1 }}>
-        Cooling and ventilation
-      </Typography>
-      {editedHouse && edited.data ? <Chip size="small" color="secondary" label="Unsaved edits" /> : null}
-    </Stack>
-  );
-
   if (!canRunEstimates) {
     return (
-      <Paper component="section" aria-labelledby="cooling-panel-heading" sx={{ p: 2 }}>
-        <Stack spacing={2}>
-          {header}
-          <NoPermissionNote what="cooling estimates" />
-        </Stack>
-      </Paper>
+      <ResultPanel headingId="cooling-panel-heading" title="Cooling and ventilation">
+        <NoPermissionNote what="cooling estimates" />
+      </ResultPanel>
     );
   }
 
@@ -215,255 +203,257 @@ export function CoolingPanel({ house, canRunEstimates, editedHouse = null, edits
   const floorAreaM2 = spec.spans * spec.widthM * spec.lengthM;
 
   return (
-    <Paper component="section" aria-labelledby="cooling-panel-heading" aria-busy={busy} sx={{ p: 2 }}>
-      <Stack spacing={2}>
-        {header}
-        <Box sx={{ height: 4 }}>{busy ? <LinearProgress aria-label="Updating the cooling estimate" /> : null}</Box>
+    <ResultPanel
+      headingId="cooling-panel-heading"
+      title="Cooling and ventilation"
+      unsavedEdits={Boolean(editedHouse && edited.data)}
+      busy={busy}
+    >
+      <Box sx={{ height: 4 }}>{busy ? <LinearProgress aria-label="Updating the cooling estimate" /> : null}</Box>
 
-        {stored.error && !stored.data ? (
-          <EstimateError error={stored.error} farmId={house.farmId} what="cooling estimates" missingClimateHint="." />
-        ) : null}
-        {edited.error ? <ErrorAlert error={edited.error} title="Your unsaved edits could not be computed" /> : null}
-        {editsInvalid ? (
-          <Alert severity="info">Some fields in the form are not valid: these results are for the last valid values.</Alert>
-        ) : null}
+      {stored.error && !stored.data ? (
+        <EstimateError error={stored.error} farmId={house.farmId} what="cooling estimates" missingClimateHint="." />
+      ) : null}
+      {edited.error ? <ErrorAlert error={edited.error} title="Your unsaved edits could not be computed" /> : null}
+      {editsInvalid ? (
+        <Alert severity="info">Some fields in the form are not valid: these results are for the last valid values.</Alert>
+      ) : null}
 
-        {!estimate && !stored.error ? (
-          <Typography color="text.secondary" role="status">
-            Computing the cooling estimate…
-          </Typography>
-        ) : null}
+      {!estimate && !stored.error ? (
+        <Typography color="text.secondary" role="status">
+          Computing the cooling estimate…
+        </Typography>
+      ) : null}
 
-        {estimate && stored.data ? (
-          <>
-            <Grid container spacing={2}>
-              <Grid size={6}>
-                <Figure
-                  label={`Summer design dry bulb (${SOURCE_WORDS[stored.data.conditionsSource.summerDesignC]})`}
-                  value={units.format('temperature', stored.data.conditionsUsed.summerDesignC)}
-                />
-              </Grid>
-              <Grid size={6}>
-                <Figure
-                  label={`Coincident wet bulb (${SOURCE_WORDS[stored.data.conditionsSource.summerDesignWetBulbC]})`}
-                  value={units.format('temperature', stored.data.conditionsUsed.summerDesignWetBulbC)}
-                />
-              </Grid>
-              <Grid size={6}>
-                <Figure
-                  label={`Daily range (${SOURCE_WORDS[stored.data.conditionsSource.dailyRangeK]})`}
-                  value={units.format('temperatureDifference', stored.data.conditionsUsed.dailyRangeK)}
-                />
-              </Grid>
-              <Grid size={6}>
-                <Figure
-                  label={`Design day (${SOURCE_WORDS[stored.data.conditionsSource.designDate]})`}
-                  value={estimate.designDay.date}
-                />
-              </Grid>
+      {estimate && stored.data ? (
+        <>
+          <Grid container spacing={2}>
+            <Grid size={6}>
+              <Figure
+                label={`Summer design dry bulb (${SOURCE_WORDS[stored.data.conditionsSource.summerDesignC]})`}
+                value={units.format('temperature', stored.data.conditionsUsed.summerDesignC)}
+              />
             </Grid>
-
-            <FanVerdict estimate={estimate} units={units} />
-
-            <Grid container spacing={2}>
-              <Grid size={6}>
-                <Figure
-                  label="Air changes with all fans"
-                  value={`${fmtNumber(estimate.airExchange.airChangesPerHour, 1)} per hour · ${fmtNumber(
-                    estimate.airExchange.airChangesPerMinute,
-                    2,
-                  )} per minute`}
-                />
-              </Grid>
-              <Grid size={6}>
-                <Figure
-                  label="Installed flow per floor area"
-                  value={units.format('airFlowPerFloorArea', estimate.airExchange.flowPerFloorAreaM3PerSM2)}
-                />
-              </Grid>
-              <Grid size={6}>
-                <Figure label="Installed exhaust" value={units.format('airFlow', estimate.capacity.installedFlowM3PerS)} />
-              </Grid>
-              <Grid size={6}>
-                <Figure
-                  label="Required exhaust"
-                  value={`${units.format('airFlow', estimate.capacity.requiredFlowM3PerS)} (${units.format(
-                    'airFlowPerFloorArea',
-                    floorAreaM2 > 0 ? estimate.capacity.requiredFlowM3PerS / floorAreaM2 : null,
-                  )})`}
-                />
-              </Grid>
-              <Grid size={12}>
-                <Figure
-                  label="Inlet free area"
-                  value={
-                    <Stack direction="row" spacing={1} sx={{ alignItems: 'center' }} component="span">
-                      <span>
-                        {units.format('area', estimate.capacity.inletAreaM2)} entered,{' '}
-                        {units.format('area', estimate.capacity.inletAreaNeededM2)} needed
-                      </span>
-                      <Chip
-                        size="small"
-                        variant="outlined"
-                        color={estimate.capacity.inletVerdict === 'adequate' ? 'success' : 'warning'}
-                        label={estimate.capacity.inletVerdict === 'adequate' ? 'enough' : 'too small'}
-                      />
-                    </Stack>
-                  }
-                />
-              </Grid>
+            <Grid size={6}>
+              <Figure
+                label={`Coincident wet bulb (${SOURCE_WORDS[stored.data.conditionsSource.summerDesignWetBulbC]})`}
+                value={units.format('temperature', stored.data.conditionsUsed.summerDesignWetBulbC)}
+              />
             </Grid>
+            <Grid size={6}>
+              <Figure
+                label={`Daily range (${SOURCE_WORDS[stored.data.conditionsSource.dailyRangeK]})`}
+                value={units.format('temperatureDifference', stored.data.conditionsUsed.dailyRangeK)}
+              />
+            </Grid>
+            <Grid size={6}>
+              <Figure
+                label={`Design day (${SOURCE_WORDS[stored.data.conditionsSource.designDate]})`}
+                value={estimate.designDay.date}
+              />
+            </Grid>
+          </Grid>
 
-            <Accordion disableGutters>
-              <AccordionSummary expandIcon={<ExpandMoreIcon />}>
-                <Typography variant="h4" component="h4">
-                  How the required rate is built
-                </Typography>
-              </AccordionSummary>
-              <AccordionDetails>
-                <Typography variant="body2" sx={{ mb: 1 }}>
-                  Base rate {units.format('airFlowPerFloorArea', estimate.capacity.baseRateM3PerSM2)} of floor, times:
-                </Typography>
-                <CapacityFactors estimate={estimate} />
-              </AccordionDetails>
-            </Accordion>
+          <FanVerdict estimate={estimate} units={units} />
 
-            <Accordion defaultExpanded disableGutters>
-              <AccordionSummary expandIcon={<ExpandMoreIcon />}>
-                <Typography variant="h4" component="h4">
-                  Design day
-                </Typography>
-              </AccordionSummary>
-              <AccordionDetails>
-                <Stack spacing={1.5}>
-                  <DesignDayChart hours={estimate.designDay.hours} coolingSetpointC={spec.setpoints.coolingC} />
-                  <Grid container spacing={2}>
-                    <Grid size={6}>
-                      <Figure
-                        label="Peak indoor with fans"
-                        value={units.format('temperature', estimate.designDay.peakIndoorWithFansC)}
-                      />
-                    </Grid>
-                    <Grid size={6}>
-                      <Figure
-                        label="Hours the setpoint is not held"
-                        testId="hours-not-held"
-                        value={
-                          estimate.designDay.hoursNotHeld.length === 0
-                            ? 'none'
-                            : `${estimate.designDay.hoursNotHeld.length} (solar ${hourRanges(estimate.designDay.hoursNotHeld)} h)`
-                        }
-                      />
-                    </Grid>
-                  </Grid>
-                  <Typography variant="body2" color="text.secondary">
-                    Cooling setpoint {units.format('temperature', spec.setpoints.coolingC)}. Ventilation alone cannot
-                    cool below the outdoor air; pads cool toward the wet bulb.
-                  </Typography>
-                  <PadWhatIf values={padWhatIf} onChange={setPadWhatIf} units={units} referenceData={referenceData.data} />
-                  <PadsResult estimate={estimate} units={units} referenceData={referenceData.data} />
-                </Stack>
-              </AccordionDetails>
-            </Accordion>
+          <Grid container spacing={2}>
+            <Grid size={6}>
+              <Figure
+                label="Air changes with all fans"
+                value={`${fmtNumber(estimate.airExchange.airChangesPerHour, 1)} per hour · ${fmtNumber(
+                  estimate.airExchange.airChangesPerMinute,
+                  2,
+                )} per minute`}
+              />
+            </Grid>
+            <Grid size={6}>
+              <Figure
+                label="Installed flow per floor area"
+                value={units.format('airFlowPerFloorArea', estimate.airExchange.flowPerFloorAreaM3PerSM2)}
+              />
+            </Grid>
+            <Grid size={6}>
+              <Figure label="Installed exhaust" value={units.format('airFlow', estimate.capacity.installedFlowM3PerS)} />
+            </Grid>
+            <Grid size={6}>
+              <Figure
+                label="Required exhaust"
+                value={`${units.format('airFlow', estimate.capacity.requiredFlowM3PerS)} (${units.format(
+                  'airFlowPerFloorArea',
+                  floorAreaM2 > 0 ? estimate.capacity.requiredFlowM3PerS / floorAreaM2 : null,
+                )})`}
+              />
+            </Grid>
+            <Grid size={12}>
+              <Figure
+                label="Inlet free area"
+                value={
+                  <Stack direction="row" spacing={1} sx={{ alignItems: 'center' }} component="span">
+                    <span>
+                      {units.format('area', estimate.capacity.inletAreaM2)} entered,{' '}
+                      {units.format('area', estimate.capacity.inletAreaNeededM2)} needed
+                    </span>
+                    <Chip
+                      size="small"
+                      variant="outlined"
+                      color={estimate.capacity.inletVerdict === 'adequate' ? 'success' : 'warning'}
+                      label={estimate.capacity.inletVerdict === 'adequate' ? 'enough' : 'too small'}
+                    />
+                  </Stack>
+                }
+              />
+            </Grid>
+          </Grid>
 
-            <Accordion disableGutters>
-              <AccordionSummary expandIcon={<ExpandMoreIcon />}>
-                <Typography variant="h4" component="h4">
-                  Fan staging{estimate.staging.ok ? '' : ' (check)'}
-                </Typography>
-              </AccordionSummary>
-              <AccordionDetails>
-                <Stack spacing={1}>
-                  {estimate.staging.warnings.map((warning) => (
-                    <Alert key={warning} severity="warning">
-                      {units.prose(warning)}
-                    </Alert>
-                  ))}
-                  <Typography variant="body2">
-                    Gap between night heating and the first fan stage:{' '}
-                    {units.format('temperatureDifference', estimate.staging.deadbandK)} (at least{' '}
-                    {units.format('temperatureDifference', estimate.staging.requiredDeadbandK)}).
-                  </Typography>
-                  <Table size="small" aria-label="Suggested fan stages">
-                    <TableHead>
-                      <TableRow>
-                        <TableCell>Stage</TableCell>
-                        <TableCell align="right">On at</TableCell>
-                        <TableCell align="right">Fans</TableCell>
-                      </TableRow>
-                    </TableHead>
-                    <TableBody>
-                      {estimate.staging.stages.map((stage) => (
-                        <TableRow key={stage.stage}>
-                          <TableCell>{stage.stage}</TableCell>
-                          <TableCell align="right">{units.format('temperature', stage.onAtC)}</TableCell>
-                          <TableCell align="right">{stage.fans}</TableCell>
-                        </TableRow>
-                      ))}
-                    </TableBody>
-                  </Table>
-                </Stack>
-              </AccordionDetails>
-            </Accordion>
+          <Accordion disableGutters>
+            <AccordionSummary expandIcon={<ExpandMoreIcon />}>
+              <Typography variant="h4" component="h4">
+                How the required rate is built
+              </Typography>
+            </AccordionSummary>
+            <AccordionDetails>
+              <Typography variant="body2" sx={{ mb: 1 }}>
+                Base rate {units.format('airFlowPerFloorArea', estimate.capacity.baseRateM3PerSM2)} of floor, times:
+              </Typography>
+              <CapacityFactors estimate={estimate} />
+            </AccordionDetails>
+          </Accordion>
 
-            <Accordion disableGutters>
-              <AccordionSummary expandIcon={<ExpandMoreIcon />}>
-                <Typography variant="h4" component="h4">
-                  Winter fan stage
-                </Typography>
-              </AccordionSummary>
-              <AccordionDetails>
+          <Accordion defaultExpanded disableGutters>
+            <AccordionSummary expandIcon={<ExpandMoreIcon />}>
+              <Typography variant="h4" component="h4">
+                Design day
+              </Typography>
+            </AccordionSummary>
+            <AccordionDetails>
+              <Stack spacing={1.5}>
+                <DesignDayChart hours={estimate.designDay.hours} coolingSetpointC={spec.setpoints.coolingC} />
                 <Grid container spacing={2}>
                   <Grid size={6}>
                     <Figure
-                      label={`Rate (${formatPercent(estimate.winterVentilation.fractionOfSummerRate)} of summer)`}
-                      value={units.format('airFlow', estimate.winterVentilation.flowM3PerS)}
+                      label="Peak indoor with fans"
+                      value={units.format('temperature', estimate.designDay.peakIndoorWithFansC)}
                     />
                   </Grid>
                   <Grid size={6}>
                     <Figure
-                      label="Air changes"
-                      value={`${fmtNumber(estimate.winterVentilation.airChangesPerHour, 1)} per hour`}
-                    />
-                  </Grid>
-                  <Grid size={6}>
-                    <Figure
-                      label={`Heat to warm it at ${units.format('temperature', estimate.winterVentilation.atOutdoorC)} outdoors`}
-                      value={units.format('power', estimate.winterVentilation.heatCostW)}
-                    />
-                  </Grid>
-                  <Grid size={6}>
-                    <Figure
-                      label="The house's own loss then"
-                      value={units.format('power', estimate.winterVentilation.houseHeatLossW)}
+                      label="Hours the setpoint is not held"
+                      testId="hours-not-held"
+                      value={
+                        estimate.designDay.hoursNotHeld.length === 0
+                          ? 'none'
+                          : `${estimate.designDay.hoursNotHeld.length} (solar ${hourRanges(estimate.designDay.hoursNotHeld)} h)`
+                      }
                     />
                   </Grid>
                 </Grid>
-                <Typography variant="body2" color="text.secondary" sx={{ mt: 1 }}>
-                  The winter fan stage is for cool sunny days and short humidity purges, not for running all night.
+                <Typography variant="body2" color="text.secondary">
+                  Cooling setpoint {units.format('temperature', spec.setpoints.coolingC)}. Ventilation alone cannot
+                  cool below the outdoor air; pads cool toward the wet bulb.
                 </Typography>
-              </AccordionDetails>
-            </Accordion>
+                <PadWhatIf values={padWhatIf} onChange={setPadWhatIf} units={units} referenceData={referenceData.data} />
+                <PadsResult estimate={estimate} units={units} referenceData={referenceData.data} />
+              </Stack>
+            </AccordionDetails>
+          </Accordion>
 
-            <Accordion disableGutters>
-              <AccordionSummary expandIcon={<ExpandMoreIcon />}>
-                <Typography variant="h4" component="h4">
-                  Assumptions and sources ({estimate.assumptions.length})
+          <Accordion disableGutters>
+            <AccordionSummary expandIcon={<ExpandMoreIcon />}>
+              <Typography variant="h4" component="h4">
+                Fan staging{estimate.staging.ok ? '' : ' (check)'}
+              </Typography>
+            </AccordionSummary>
+            <AccordionDetails>
+              <Stack spacing={1}>
+                {estimate.staging.warnings.map((warning) => (
+                  <Alert key={warning} severity="warning">
+                    {units.prose(warning)}
+                  </Alert>
+                ))}
+                <Typography variant="body2">
+                  Gap between night heating and the first fan stage:{' '}
+                  {units.format('temperatureDifference', estimate.staging.deadbandK)} (at least{' '}
+                  {units.format('temperatureDifference', estimate.staging.requiredDeadbandK)}).
                 </Typography>
-              </AccordionSummary>
-              <AccordionDetails>
-                <Typography variant="body2" color="text.secondary" sx={{ mb: 1 }}>
-                  Hover or focus a line for its source. Values marked “from memory” or “rule of thumb” are not yet
-                  checked against a primary table.
-                </Typography>
-                <AssumptionList assumptions={estimate.assumptions} units={units} />
-              </AccordionDetails>
-            </Accordion>
+                <Table size="small" aria-label="Suggested fan stages">
+                  <TableHead>
+                    <TableRow>
+                      <TableCell>Stage</TableCell>
+                      <TableCell align="right">On at</TableCell>
+                      <TableCell align="right">Fans</TableCell>
+                    </TableRow>
+                  </TableHead>
+                  <TableBody>
+                    {estimate.staging.stages.map((stage) => (
+                      <TableRow key={stage.stage}>
+                        <TableCell>{stage.stage}</TableCell>
+                        <TableCell align="right">{units.format('temperature', stage.onAtC)}</TableCell>
+                        <TableCell align="right">{stage.fans}</TableCell>
+                      </TableRow>
+                    ))}
+                  </TableBody>
+                </Table>
+              </Stack>
+            </AccordionDetails>
+          </Accordion>
 
-            <CautionsAlert title="Cautions" cautions={estimate.cautions} />
-          </>
-        ) : null}
-      </Stack>
-    </Paper>
+          <Accordion disableGutters>
+            <AccordionSummary expandIcon={<ExpandMoreIcon />}>
+              <Typography variant="h4" component="h4">
+                Winter fan stage
+              </Typography>
+            </AccordionSummary>
+            <AccordionDetails>
+              <Grid container spacing={2}>
+                <Grid size={6}>
+                  <Figure
+                    label={`Rate (${formatPercent(estimate.winterVentilation.fractionOfSummerRate)} of summer)`}
+                    value={units.format('airFlow', estimate.winterVentilation.flowM3PerS)}
+                  />
+                </Grid>
+                <Grid size={6}>
+                  <Figure
+                    label="Air changes"
+                    value={`${fmtNumber(estimate.winterVentilation.airChangesPerHour, 1)} per hour`}
+                  />
+                </Grid>
+                <Grid size={6}>
+                  <Figure
+                    label={`Heat to warm it at ${units.format('temperature', estimate.winterVentilation.atOutdoorC)} outdoors`}
+                    value={units.format('power', estimate.winterVentilation.heatCostW)}
+                  />
+                </Grid>
+                <Grid size={6}>
+                  <Figure
+                    label="The house's own loss then"
+                    value={units.format('power', estimate.winterVentilation.houseHeatLossW)}
+                  />
+                </Grid>
+              </Grid>
+              <Typography variant="body2" color="text.secondary" sx={{ mt: 1 }}>
+                The winter fan stage is for cool sunny days and short humidity purges, not for running all night.
+              </Typography>
+            </AccordionDetails>
+          </Accordion>
+
+          <Accordion disableGutters>
+            <AccordionSummary expandIcon={<ExpandMoreIcon />}>
+              <Typography variant="h4" component="h4">
+                Assumptions and sources ({estimate.assumptions.length})
+              </Typography>
+            </AccordionSummary>
+            <AccordionDetails>
+              <Typography variant="body2" color="text.secondary" sx={{ mb: 1 }}>
+                Hover or focus a line for its source. Values marked “from memory” or “rule of thumb” are not yet
+                checked against a primary table.
+              </Typography>
+              <AssumptionList assumptions={estimate.assumptions} units={units} />
+            </AccordionDetails>
+          </Accordion>
+
+          <CautionsAlert title="Cautions" cautions={estimate.cautions} />
+        </>
+      ) : null}
+    </ResultPanel>
   );
 }

@@ -8,7 +8,6 @@ import {
   Chip,
   Grid,
   LinearProgress,
-  Paper,
   Stack,
   Table,
   TableBody,
@@ -33,6 +32,7 @@ import {
   Figure,
   isMissingClimateError,
   NoPermissionNote,
+  ResultPanel,
 } from '../../../components/estimate-parts';
 import { ErrorAlert } from '../../../components/feedback';
 import { houseSpecOf } from '../../../lib/house-spec';
@@ -306,23 +306,11 @@ export function HeatingPanel({ house, canRunEstimates, editedHouse = null, edits
     enabled: canRunEstimates && editedHouse !== null && storedResult !== undefined,
   });
 
-  const header = (
-    <Stack direction="row" spacing={1} sx={{ alignItems: 'center', flexWrap: 'wrap' }}>
-      <Typography id="heating-panel-heading" variant="h3" component="h3" sx={{ flexGrow: 1 }}>
-        Heating on the design night
-      </Typography>
-      {editedHouse && edited.data ? <Chip size="small" color="secondary" label="Unsaved edits" /> : null}
-    </Stack>
-  );
-
   if (!canRunEstimates) {
     return (
-      <Paper component="section" aria-labelledby="heating-panel-heading" sx={{ p: 2 }}>
-        <Stack spacing={2}>
-          {header}
-          <NoPermissionNote what="heating estimates" />
-        </Stack>
-      </Paper>
+      <ResultPanel headingId="heating-panel-heading" title="Heating on the design night">
+        <NoPermissionNote what="heating estimates" />
+      </ResultPanel>
     );
   }
 
@@ -333,122 +321,124 @@ export function HeatingPanel({ house, canRunEstimates, editedHouse = null, edits
   const climateMissing = !stored.data && isMissingClimateError(stored.error);
 
   return (
-    <Paper component="section" aria-labelledby="heating-panel-heading" aria-busy={busy} sx={{ p: 2 }}>
-      <Stack spacing={2}>
-        {header}
-        <Box sx={{ height: 4 }}>{busy ? <LinearProgress aria-label="Updating the heating estimate" /> : null}</Box>
+    <ResultPanel
+      headingId="heating-panel-heading"
+      title="Heating on the design night"
+      unsavedEdits={Boolean(editedHouse && edited.data)}
+      busy={busy}
+    >
+      <Box sx={{ height: 4 }}>{busy ? <LinearProgress aria-label="Updating the heating estimate" /> : null}</Box>
 
-        {stored.error && !stored.data ? (
-          <EstimateError
-            error={stored.error}
-            farmId={house.farmId}
-            what="heating estimates"
-            missingClimateHint=", or type a design outdoor temperature below to try one."
-          />
-        ) : null}
-        {edited.error ? <ErrorAlert error={edited.error} title="Your unsaved edits could not be computed" /> : null}
-        {editsInvalid ? (
-          <Alert severity="info">Some fields in the form are not valid: these results are for the last valid values.</Alert>
-        ) : null}
-
-        <HeatingWhatIf
-          values={whatIf}
-          onChange={setWhatIf}
-          units={units}
-          hasCurtain={Boolean(spec.curtainId)}
-          placeholders={{
-            designOutdoor: stored.data ? units.toInput('temperature', stored.data.conditionsUsed.designOutdoorC) : undefined,
-            insideRelativeHumidityPct: stored.data ? String(stored.data.conditionsUsed.insideRelativeHumidityPct) : undefined,
-          }}
+      {stored.error && !stored.data ? (
+        <EstimateError
+          error={stored.error}
+          farmId={house.farmId}
+          what="heating estimates"
+          missingClimateHint=", or type a design outdoor temperature below to try one."
         />
+      ) : null}
+      {edited.error ? <ErrorAlert error={edited.error} title="Your unsaved edits could not be computed" /> : null}
+      {editsInvalid ? (
+        <Alert severity="info">Some fields in the form are not valid: these results are for the last valid values.</Alert>
+      ) : null}
 
-        {!estimate && !stored.error && !climateMissing ? (
-          <Typography color="text.secondary" role="status">
-            Computing the heating estimate…
-          </Typography>
-        ) : null}
+      <HeatingWhatIf
+        values={whatIf}
+        onChange={setWhatIf}
+        units={units}
+        hasCurtain={Boolean(spec.curtainId)}
+        placeholders={{
+          designOutdoor: stored.data ? units.toInput('temperature', stored.data.conditionsUsed.designOutdoorC) : undefined,
+          insideRelativeHumidityPct: stored.data ? String(stored.data.conditionsUsed.insideRelativeHumidityPct) : undefined,
+        }}
+      />
 
-        {estimate && stored.data ? (
-          <>
-            <Grid container spacing={2}>
-              <Grid size={6}>
-                <Figure
-                  label={`Design outdoor (${sourceWord(stored.data.conditionsSource.designOutdoorC)})`}
-                  value={units.format('temperature', estimate.heatLoss.outsideC)}
-                />
-              </Grid>
-              <Grid size={6}>
-                <Figure
-                  label={`Inside (${sourceWord(stored.data.conditionsSource.insideC)}${showingEdits ? ', unsaved' : ''})`}
-                  value={units.format('temperature', estimate.heatLoss.insideC)}
-                />
-              </Grid>
-              <Grid size={6}>
-                <Figure
-                  label={`Inside RH (${sourceWord(stored.data.conditionsSource.insideRelativeHumidityPct)})`}
-                  value={`${estimate.condensation.insideRelativeHumidityPct} %`}
-                />
-              </Grid>
-              <Grid size={6}>
-                <Figure
-                  label={`Curtain (${sourceWord(stored.data.conditionsSource.curtainClosed)})`}
-                  value={estimate.heatLoss.curtainApplied ? 'drawn, credited' : 'open'}
-                />
-              </Grid>
+      {!estimate && !stored.error && !climateMissing ? (
+        <Typography color="text.secondary" role="status">
+          Computing the heating estimate…
+        </Typography>
+      ) : null}
+
+      {estimate && stored.data ? (
+        <>
+          <Grid container spacing={2}>
+            <Grid size={6}>
+              <Figure
+                label={`Design outdoor (${sourceWord(stored.data.conditionsSource.designOutdoorC)})`}
+                value={units.format('temperature', estimate.heatLoss.outsideC)}
+              />
             </Grid>
+            <Grid size={6}>
+              <Figure
+                label={`Inside (${sourceWord(stored.data.conditionsSource.insideC)}${showingEdits ? ', unsaved' : ''})`}
+                value={units.format('temperature', estimate.heatLoss.insideC)}
+              />
+            </Grid>
+            <Grid size={6}>
+              <Figure
+                label={`Inside RH (${sourceWord(stored.data.conditionsSource.insideRelativeHumidityPct)})`}
+                value={`${estimate.condensation.insideRelativeHumidityPct} %`}
+              />
+            </Grid>
+            <Grid size={6}>
+              <Figure
+                label={`Curtain (${sourceWord(stored.data.conditionsSource.curtainClosed)})`}
+                value={estimate.heatLoss.curtainApplied ? 'drawn, credited' : 'open'}
+              />
+            </Grid>
+          </Grid>
 
-            <Box>
-              <Typography variant="caption" color="text.secondary" component="div">
-                Design heat loss (ΔT {units.format('temperatureDifference', estimate.heatLoss.deltaTK)})
+          <Box>
+            <Typography variant="caption" color="text.secondary" component="div">
+              Design heat loss (ΔT {units.format('temperatureDifference', estimate.heatLoss.deltaTK)})
+            </Typography>
+            <Typography variant="h4" component="p" data-testid="heating-total" sx={{ fontSize: '1.6rem' }}>
+              {units.format('power', estimate.heatLoss.totalW)}
+            </Typography>
+          </Box>
+
+          <HeaterVerdict estimate={estimate} units={units} />
+
+          <Accordion defaultExpanded disableGutters>
+            <AccordionSummary expandIcon={<ExpandMoreIcon />}>
+              <Typography variant="h4" component="h4">
+                Where the heat goes
               </Typography>
-              <Typography variant="h4" component="p" data-testid="heating-total" sx={{ fontSize: '1.6rem' }}>
-                {units.format('power', estimate.heatLoss.totalW)}
+            </AccordionSummary>
+            <AccordionDetails>
+              <Breakdown estimate={estimate} units={units} />
+            </AccordionDetails>
+          </Accordion>
+
+          <Accordion defaultExpanded disableGutters>
+            <AccordionSummary expandIcon={<ExpandMoreIcon />}>
+              <Typography variant="h4" component="h4">
+                Condensation
               </Typography>
-            </Box>
+            </AccordionSummary>
+            <AccordionDetails>
+              <CondensationVerdict estimate={estimate} units={units} referenceData={referenceData.data} />
+            </AccordionDetails>
+          </Accordion>
 
-            <HeaterVerdict estimate={estimate} units={units} />
+          <Accordion disableGutters>
+            <AccordionSummary expandIcon={<ExpandMoreIcon />}>
+              <Typography variant="h4" component="h4">
+                Assumptions and sources ({estimate.assumptions.length})
+              </Typography>
+            </AccordionSummary>
+            <AccordionDetails>
+              <Typography variant="body2" color="text.secondary" sx={{ mb: 1 }}>
+                Hover or focus a line for its source. Values marked “from memory” or “rule of thumb” are not yet
+                checked against a primary table: treat the result as a planning range.
+              </Typography>
+              <AssumptionList assumptions={estimate.assumptions} units={units} />
+            </AccordionDetails>
+          </Accordion>
 
-            <Accordion defaultExpanded disableGutters>
-              <AccordionSummary expandIcon={<ExpandMoreIcon />}>
-                <Typography variant="h4" component="h4">
-                  Where the heat goes
-                </Typography>
-              </AccordionSummary>
-              <AccordionDetails>
-                <Breakdown estimate={estimate} units={units} />
-              </AccordionDetails>
-            </Accordion>
-
-            <Accordion defaultExpanded disableGutters>
-              <AccordionSummary expandIcon={<ExpandMoreIcon />}>
-                <Typography variant="h4" component="h4">
-                  Condensation
-                </Typography>
-              </AccordionSummary>
-              <AccordionDetails>
-                <CondensationVerdict estimate={estimate} units={units} referenceData={referenceData.data} />
-              </AccordionDetails>
-            </Accordion>
-
-            <Accordion disableGutters>
-              <AccordionSummary expandIcon={<ExpandMoreIcon />}>
-                <Typography variant="h4" component="h4">
-                  Assumptions and sources ({estimate.assumptions.length})
-                </Typography>
-              </AccordionSummary>
-              <AccordionDetails>
-                <Typography variant="body2" color="text.secondary" sx={{ mb: 1 }}>
-                  Hover or focus a line for its source. Values marked “from memory” or “rule of thumb” are not yet
-                  checked against a primary table: treat the result as a planning range.
-                </Typography>
-                <AssumptionList assumptions={estimate.assumptions} units={units} />
-              </AccordionDetails>
-            </Accordion>
-
-            <CautionsAlert title="Cautions" cautions={estimate.cautions} />
-          </>
-        ) : null}
-      </Stack>
-    </Paper>
+          <CautionsAlert title="Cautions" cautions={estimate.cautions} />
+        </>
+      ) : null}
+    </ResultPanel>
   );
 }
