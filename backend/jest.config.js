@@ -8,6 +8,8 @@ module.exports = {
       testEnvironment: 'node',
       rootDir: __dirname,
       roots: ['<rootDir>/src'],
+      // A cold run compiles the TypeScript on first import; property tests run many cases.
+      setupFilesAfterEnv: ['<rootDir>/test/jest-timeout.ts'],
       testMatch: ['**/*.spec.ts'],
       transform: tsJest,
       moduleFileExtensions: ['ts', 'js', 'json'],
@@ -18,6 +20,8 @@ module.exports = {
       rootDir: __dirname,
       roots: ['<rootDir>/test'],
       setupFiles: ['<rootDir>/test/jest-setup.ts'],
+      // Booting the whole app on a cold cache (ts-jest compiling it first) can take several seconds.
+      setupFilesAfterEnv: ['<rootDir>/test/jest-timeout.ts'],
       testMatch: ['**/*.e2e-spec.ts'],
       transform: tsJest,
       moduleFileExtensions: ['ts', 'js', 'json'],
