@@ -1,15 +1,13 @@
-import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { render, screen, waitFor } from '@testing-library/react';
+import { screen, waitFor } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
-import type { ReactNode } from 'react';
-import { MemoryRouter } from 'react-router-dom';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { api, ApiError } from '../../../api/client';
 import type { HouseSpec } from '../../../api/types';
 import { houseSpecOf } from '../../../lib/house-spec';
-import { UnitSystemProvider, type UnitSystem } from '../../../lib/units';
+import type { UnitSystem } from '../../../lib/units';
 import { demoHouseB, demoHouseBCooling } from '../../../test/estimate-fixtures';
 import { referenceDataFixture } from '../../../test/fixtures';
+import { renderWithProviders } from '../../../test/render-with-providers';
 import { CoolingPanel, type CoolingPanelProps } from './cooling-panel';
 
 vi.mock('../../../api/client', async (importOriginal) => {
@@ -30,15 +28,7 @@ const referenceData = {
 };
 
 function renderPanel(props: Partial<CoolingPanelProps> = {}, system: UnitSystem = 'si') {
-  const queryClient = new QueryClient({ defaultOptions: { queries: { retry: false } } });
-  const wrapper = ({ children }: { children: ReactNode }) => (
-    <QueryClientProvider client={queryClient}>
-      <UnitSystemProvider system={system}>
-        <MemoryRouter>{children}</MemoryRouter>
-      </UnitSystemProvider>
-    </QueryClientProvider>
-  );
-  return render(<CoolingPanel house={demoHouseB} canRunEstimates {...props} />, { wrapper });
+  return renderWithProviders(<CoolingPanel house={demoHouseB} canRunEstimates {...props} />, system);
 }
 
 beforeEach(() => {

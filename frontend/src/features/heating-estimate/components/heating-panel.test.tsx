@@ -1,15 +1,13 @@
-import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { render, screen, waitFor, within } from '@testing-library/react';
+import { screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
-import type { ReactNode } from 'react';
-import { MemoryRouter } from 'react-router-dom';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { api, ApiError } from '../../../api/client';
 import type { HouseSpec } from '../../../api/types';
 import { houseSpecOf } from '../../../lib/house-spec';
-import { UnitSystemProvider, type UnitSystem } from '../../../lib/units';
+import type { UnitSystem } from '../../../lib/units';
 import { demoHouseB, demoHouseBHeating } from '../../../test/estimate-fixtures';
 import { referenceDataFixture } from '../../../test/fixtures';
+import { renderWithProviders } from '../../../test/render-with-providers';
 import { HeatingPanel, type HeatingPanelProps } from './heating-panel';
 
 vi.mock('../../../api/client', async (importOriginal) => {
@@ -29,15 +27,7 @@ const referenceData = {
 };
 
 function renderPanel(props: Partial<HeatingPanelProps> = {}, system: UnitSystem = 'si') {
-  const queryClient = new QueryClient({ defaultOptions: { queries: { retry: false } } });
-  const wrapper = ({ children }: { children: ReactNode }) => (
-    <QueryClientProvider client={queryClient}>
-      <UnitSystemProvider system={system}>
-        <MemoryRouter>{children}</MemoryRouter>
-      </UnitSystemProvider>
-    </QueryClientProvider>
-  );
-  return render(<HeatingPanel house={demoHouseB} canRunEstimates {...props} />, { wrapper });
+  return renderWithProviders(<HeatingPanel house={demoHouseB} canRunEstimates {...props} />, system);
 }
 
 beforeEach(() => {

@@ -1,9 +1,8 @@
-import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { render, screen, waitFor, within } from '@testing-library/react';
+import { screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, onTestFinished, vi } from 'vitest';
 import type { SeasonBudget } from '../../../api/types';
-import { UnitSystemProvider } from '../../../lib/units';
+import { renderWithProviders } from '../../../test/render-with-providers';
 import { SeasonBudgetSection } from './season-budget-section';
 
 const propaneHouse = {
@@ -107,14 +106,7 @@ describe('SeasonBudgetSection', () => {
       clicked.push(this.download);
     });
 
-    const client = new QueryClient({ defaultOptions: { queries: { retry: false } } });
-    render(
-      <QueryClientProvider client={client}>
-        <UnitSystemProvider system="us">
-          <SeasonBudgetSection farmId={3} />
-        </UnitSystemProvider>
-      </QueryClientProvider>,
-    );
+    renderWithProviders(<SeasonBudgetSection farmId={3} />, 'us');
 
     expect(await screen.findByTestId('farm-season-cost')).toHaveProperty('textContent', '10,541');
     const table = screen.getByRole('table', { name: 'Season fuel budget per house' });

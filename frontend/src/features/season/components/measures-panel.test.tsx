@@ -1,9 +1,8 @@
-import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { render, screen, waitFor, within } from '@testing-library/react';
+import { screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import type { MeasureComparison, MeasureResult } from '../../../api/types';
-import { UnitSystemProvider } from '../../../lib/units';
+import { renderWithProviders } from '../../../test/render-with-providers';
 import { MeasuresPanel } from './measures-panel';
 
 const season = {
@@ -66,14 +65,7 @@ describe('MeasuresPanel', () => {
         return new Response(JSON.stringify(result), { status: 200, headers: { 'content-type': 'application/json' } });
       }),
     );
-    const client = new QueryClient({ defaultOptions: { queries: { retry: false } } });
-    render(
-      <QueryClientProvider client={client}>
-        <UnitSystemProvider system="si">
-          <MeasuresPanel houseId={7} climateSource="normals" />
-        </UnitSystemProvider>
-      </QueryClientProvider>,
-    );
+    renderWithProviders(<MeasuresPanel houseId={7} climateSource="normals" />, 'si');
 
     const curtainCost = await screen.findByRole('textbox', { name: 'Cost of: Install a thermal curtain' });
     expect(screen.getByText('Roof: 78 % → 76 % (3 % less light)')).toBeTruthy();
@@ -122,14 +114,7 @@ describe('MeasuresPanel', () => {
         return new Response(JSON.stringify(result), { status: 200, headers: { 'content-type': 'application/json' } });
       }),
     );
-    const client = new QueryClient({ defaultOptions: { queries: { retry: false } } });
-    render(
-      <QueryClientProvider client={client}>
-        <UnitSystemProvider system="us">
-          <MeasuresPanel houseId={7} climateSource="normals" />
-        </UnitSystemProvider>
-      </QueryClientProvider>,
-    );
+    renderWithProviders(<MeasuresPanel houseId={7} climateSource="normals" />, 'us');
     const table = await screen.findByRole('table', { name: 'Measures ranked by payback' });
     const rows = within(table).getAllByRole('row').slice(1);
     expect(rows[0]!.textContent).toContain('enter a cost');
