@@ -1,6 +1,11 @@
 // Two projects: fast unit specs beside the code (engine included), and e2e specs that boot
 // the real app on a throwaway SQLite file.
 const tsJest = { '^.+\\.ts$': ['ts-jest', { tsconfig: '<rootDir>/tsconfig.json' }] };
+// The engine package is used from its TypeScript source in specs, so they need no engine build.
+const moduleNameMapper = {
+  '^@thermbay/engine/(.*)$': '<rootDir>/engine/src/$1',
+  '^@thermbay/engine$': '<rootDir>/engine/src',
+};
 module.exports = {
   projects: [
     {
@@ -12,6 +17,7 @@ module.exports = {
       setupFilesAfterEnv: ['<rootDir>/test/jest-timeout.ts'],
       testMatch: ['**/*.spec.ts'],
       transform: tsJest,
+      moduleNameMapper,
       moduleFileExtensions: ['ts', 'js', 'json'],
     },
     {
@@ -24,6 +30,7 @@ module.exports = {
       setupFilesAfterEnv: ['<rootDir>/test/jest-timeout.ts'],
       testMatch: ['**/*.e2e-spec.ts'],
       transform: tsJest,
+      moduleNameMapper,
       moduleFileExtensions: ['ts', 'js', 'json'],
     },
   ],

@@ -8,8 +8,8 @@ const fromHere = (relativePath: string) => fileURLToPath(new URL(relativePath, i
 export default defineConfig({
   plugins: [react()],
   resolve: {
-    // The UI's Yup schemas and the API's DTOs refuse the same values: one bounds module.
-    alias: { '@bounds': fromHere('../backend/src/engine/bounds.ts') },
+    // The UI and the API share one vocabulary (bounds, shapes, quantity kinds): the engine's.
+    alias: { '@thermbay/engine/vocabulary': fromHere('../backend/engine/src/vocabulary/index.ts') },
   },
   server: {
     proxy: { '/api': 'http://localhost:3000' },

@@ -13,28 +13,43 @@ describe('auth (e2e)', () => {
   });
 
   it('signs the demo grower in and returns the token and the user, never the hash', async () => {
-    const res = await t.http.post('/api/auth/login').send({ email: 'Grower@Example.com', password: 'thermbay-demo' }).expect(200);
+    const res = await t.http
+      .post('/api/auth/login')
+      .send({ email: 'Grower@Example.com', password: 'thermbay-demo' })
+      .expect(200);
     expect(res.body.accessToken).toEqual(expect.any(String));
     expect(res.body.user).toMatchObject({ email: 'grower@example.com', siteRole: 'user', unitSystem: 'si' });
     expect(JSON.stringify(res.body)).not.toMatch(/passwordHash|\$2[aby]\$/);
   });
 
   it('refuses a wrong password with one error shape and no stack trace', async () => {
-    const res = await t.http.post('/api/auth/login').send({ email: 'grower@example.com', password: 'nope' }).expect(401);
+    const res = await t.http
+      .post('/api/auth/login')
+      .send({ email: 'grower@example.com', password: 'nope' })
+      .expect(401);
     expect(res.body).toEqual({ statusCode: 401, error: 'Unauthorized', message: 'E-mail or password is not right' });
   });
 
   it('rejects unknown fields and bad e-mails naming the field', async () => {
-    const res = await t.http.post('/api/auth/register').send({ email: 'not-an-email', password: 'longenough', name: 'X', admin: true }).expect(400);
+    const res = await t.http
+      .post('/api/auth/register')
+      .send({ email: 'not-an-email', password: 'longenough', name: 'X', admin: true })
+      .expect(400);
     expect(res.body.statusCode).toBe(400);
     const fields = res.body.details.map((d: { field: string }) => d.field);
     expect(fields).toEqual(expect.arrayContaining(['email', 'admin']));
   });
 
   it('registers, reads itself, changes the unit preference and signs out for good', async () => {
-    const reg = await t.http.post('/api/auth/register').send({ email: 'new@example.com', password: 'a-good-password', name: 'New Grower' }).expect(201);
+    const reg = await t.http
+      .post('/api/auth/register')
+      .send({ email: 'new@example.com', password: 'a-good-password', name: 'New Grower' })
+      .expect(201);
     const token = reg.body.accessToken;
-    await t.http.post('/api/auth/register').send({ email: 'NEW@example.com', password: 'a-good-password', name: 'Again' }).expect(409);
+    await t.http
+      .post('/api/auth/register')
+      .send({ email: 'NEW@example.com', password: 'a-good-password', name: 'Again' })
+      .expect(409);
     const me = await t.http.get('/api/auth/me').set(bearer(token)).expect(200);
     expect(me.body).toMatchObject({ email: 'new@example.com', unitSystem: 'si' });
     const patched = await t.http.patch('/api/users/me').set(bearer(token)).send({ unitSystem: 'us' }).expect(200);
@@ -60,7 +75,9 @@ describe('auth (e2e)', () => {
   it('rate-limits sign-in attempts', async () => {
     const statuses: number[] = [];
     for (let i = 0; i < 8; i += 1) {
-      statuses.push((await t.http.post('/api/auth/login').send({ email: 'owner@example.com', password: 'wrong' })).status);
+      statuses.push(
+        (await t.http.post('/api/auth/login').send({ email: 'owner@example.com', password: 'wrong' })).status,
+      );
     }
     expect(statuses).toContain(429);
     const limited = await t.http.post('/api/auth/login').send({ email: 'owner@example.com', password: 'wrong' });

@@ -27,13 +27,17 @@ type Schema = {
  * are exactly what the engine returns.
  */
 function schemaProblems(value: unknown, schema: Schema, schemas: Record<string, Schema>, path = '$'): string[] {
-  if (schema.$ref) return schemaProblems(value, schemas[schema.$ref.replace('#/components/schemas/', '')], schemas, path);
+  if (schema.$ref)
+    return schemaProblems(value, schemas[schema.$ref.replace('#/components/schemas/', '')], schemas, path);
   if (value === null) return schema.nullable ? [] : [`${path} is null but not nullable`];
   if (schema.allOf) return schema.allOf.flatMap((part) => schemaProblems(value, part, schemas, path));
   if (schema.oneOf) {
-    return schema.oneOf.some((option) => schemaProblems(value, option, schemas, path).length === 0) ? [] : [`${path} matches none of oneOf`];
+    return schema.oneOf.some((option) => schemaProblems(value, option, schemas, path).length === 0)
+      ? []
+      : [`${path} matches none of oneOf`];
   }
-  if (schema.enum && !schema.enum.includes(value)) return [`${path} = ${JSON.stringify(value)} is not in ${JSON.stringify(schema.enum)}`];
+  if (schema.enum && !schema.enum.includes(value))
+    return [`${path} = ${JSON.stringify(value)} is not in ${JSON.stringify(schema.enum)}`];
   if (schema.type === 'array') {
     if (!Array.isArray(value)) return [`${path} is not an array`];
     return value.flatMap((item, index) => schemaProblems(item, schema.items as Schema, schemas, `${path}[${index}]`));
@@ -47,7 +51,8 @@ function schemaProblems(value: unknown, schema: Schema, schemas: Record<string, 
     const problems = Object.keys(record)
       .filter((key) => !(key in (schema.properties as object)))
       .map((key) => `${path}.${key} is not described in the schema`);
-    for (const key of schema.required ?? []) if (!(key in record)) problems.push(`${path}.${key} is required but missing`);
+    for (const key of schema.required ?? [])
+      if (!(key in record)) problems.push(`${path}.${key} is required but missing`);
     for (const [key, property] of Object.entries(schema.properties)) {
       if (key in record) problems.push(...schemaProblems(record[key], property, schemas, `${path}.${key}`));
     }
@@ -91,7 +96,11 @@ describe('estimates (e2e)', () => {
 
   describe('POST /api/estimates (house in the body)', () => {
     it('reproduces a hand calculation of U×A×ΔT + F×P×ΔT + ρ·cp·V·ACH·ΔT/3600 from the reference rows', async () => {
-      const res = await t.http.post('/api/estimates').set(bearer(grower)).send({ house: gableHouse, conditions: designNight }).expect(200);
+      const res = await t.http
+        .post('/api/estimates')
+        .set(bearer(grower))
+        .send({ house: gableHouse, conditions: designNight })
+        .expect(200);
       const { geometry, heatLoss, assumptions } = res.body;
 
       // gable geometry by hand: rise 2 m, slope √(4.5² + 2²) m per side
@@ -138,15 +147,41 @@ describe('estimates (e2e)', () => {
     });
 
     it('describes the result fully in the OpenAPI document', async () => {
-      const res = await t.http.post('/api/estimates').set(bearer(grower)).send({ house: gableHouse, conditions: designNight }).expect(200);
+      const res = await t.http
+        .post('/api/estimates')
+        .set(bearer(grower))
+        .send({ house: gableHouse, conditions: designNight })
+        .expect(200);
       expectSchema(res.body, 'HeatingEstimateDto');
     });
 
     it('single poly loses more than double poly for the same house', async () => {
-      const single = { ...gableHouse, coverings: { roof: 'poly-single', sidewalls: 'poly-single', endwalls: 'poly-single' } };
-      const double = { ...gableHouse, coverings: { roof: 'poly-double-inflated', sidewalls: 'poly-double-inflated', endwalls: 'poly-double-inflated' } };
-      const singleLoss = (await t.http.post('/api/estimates').set(bearer(grower)).send({ house: single, conditions: designNight }).expect(200)).body.heatLoss;
-      const doubleLoss = (await t.http.post('/api/estimates').set(bearer(grower)).send({ house: double, conditions: designNight }).expect(200)).body.heatLoss;
+      const single = {
+        ...gableHouse,
+        coverings: { roof: 'poly-single', sidewalls: 'poly-single', endwalls: 'poly-single' },
+      };
+      const double = {
+        ...gableHouse,
+        coverings: {
+          roof: 'poly-double-inflated',
+          sidewalls: 'poly-double-inflated',
+          endwalls: 'poly-double-inflated',
+        },
+      };
+      const singleLoss = (
+        await t.http
+          .post('/api/estimates')
+          .set(bearer(grower))
+          .send({ house: single, conditions: designNight })
+          .expect(200)
+      ).body.heatLoss;
+      const doubleLoss = (
+        await t.http
+          .post('/api/estimates')
+          .set(bearer(grower))
+          .send({ house: double, conditions: designNight })
+          .expect(200)
+      ).body.heatLoss;
       expect(singleLoss.coveringW).toBeGreaterThan(doubleLoss.coveringW * 1.5);
       expect(singleLoss.totalW).toBeGreaterThan(doubleLoss.totalW);
       // same house, same air: perimeter and leakage do not change with the covering
@@ -167,13 +202,21 @@ describe('estimates (e2e)', () => {
     it('answers 400 when house or conditions are missing', async () => {
       const res = await t.http.post('/api/estimates').set(bearer(grower)).send({ conditions: designNight }).expect(400);
       expect(res.body.details.map((d: { field: string }) => d.field)).toContain('house');
-      const noSite = await t.http.post('/api/estimates/cooling').set(bearer(grower)).send({ house: gableHouse, conditions: summerDay }).expect(400);
+      const noSite = await t.http
+        .post('/api/estimates/cooling')
+        .set(bearer(grower))
+        .send({ house: gableHouse, conditions: summerDay })
+        .expect(400);
       expect(noSite.body.details.map((d: { field: string }) => d.field)).toContain('site');
     });
 
     it('names the missing part of a house (400) instead of failing on the server', async () => {
       const { setpoints: _setpoints, ...withoutSetpoints } = gableHouse;
-      const res = await t.http.post('/api/estimates').set(bearer(grower)).send({ house: withoutSetpoints, conditions: designNight }).expect(400);
+      const res = await t.http
+        .post('/api/estimates')
+        .set(bearer(grower))
+        .send({ house: withoutSetpoints, conditions: designNight })
+        .expect(400);
       expect(res.body.field).toBe('house.setpoints');
     });
 
@@ -190,19 +233,37 @@ describe('estimates (e2e)', () => {
       const res = await t.http
         .post('/api/estimates')
         .set(bearer(grower))
-        .send({ house: { ...gableHouse, coverings: { ...gableHouse.coverings, sidewalls: 'cling-film' } }, conditions: designNight })
+        .send({
+          house: { ...gableHouse, coverings: { ...gableHouse.coverings, sidewalls: 'cling-film' } },
+          conditions: designNight,
+        })
         .expect(422);
       expect(res.body.field).toBe('house.coverings.sidewalls');
       expect(res.body.message).toMatch(/cling-film/);
     });
 
     it('carries carbon monoxide and ethylene cautions for fuel-fired heaters and not for electric ones', async () => {
-      const fuel = (await t.http.post('/api/estimates').set(bearer(grower)).send({ house: gableHouse, conditions: designNight }).expect(200)).body;
+      const fuel = (
+        await t.http
+          .post('/api/estimates')
+          .set(bearer(grower))
+          .send({ house: gableHouse, conditions: designNight })
+          .expect(200)
+      ).body;
       expect(fuel.heater.fuelFired).toBe(true);
       expect(fuel.cautions.join(' ')).toMatch(/carbon monoxide/i);
       expect(fuel.cautions.join(' ')).toMatch(/ethylene/i);
-      const electricHouse = { ...gableHouse, heaters: [{ count: 2, ratedInputW: 30_000, efficiency: 1, fuelId: 'electricity' }] };
-      const electric = (await t.http.post('/api/estimates').set(bearer(grower)).send({ house: electricHouse, conditions: designNight }).expect(200)).body;
+      const electricHouse = {
+        ...gableHouse,
+        heaters: [{ count: 2, ratedInputW: 30_000, efficiency: 1, fuelId: 'electricity' }],
+      };
+      const electric = (
+        await t.http
+          .post('/api/estimates')
+          .set(bearer(grower))
+          .send({ house: electricHouse, conditions: designNight })
+          .expect(200)
+      ).body;
       expect(electric.heater.fuelFired).toBe(false);
       expect(electric.cautions.join(' ')).not.toMatch(/carbon monoxide/i);
     });
@@ -243,7 +304,13 @@ describe('estimates (e2e)', () => {
     it('lets the request replace any default, and a warmer night needs less heat', async () => {
       const house = houseNamed('House A');
       const farmNight = (await t.http.post(`/api/houses/${house.id}/estimate`).set(bearer(grower)).expect(200)).body;
-      const mild = (await t.http.post(`/api/houses/${house.id}/estimate`).set(bearer(grower)).send({ conditions: { designOutdoorC: -10, insideRelativeHumidityPct: 70 } }).expect(200)).body;
+      const mild = (
+        await t.http
+          .post(`/api/houses/${house.id}/estimate`)
+          .set(bearer(grower))
+          .send({ conditions: { designOutdoorC: -10, insideRelativeHumidityPct: 70 } })
+          .expect(200)
+      ).body;
       expect(mild.conditionsSource.designOutdoorC).toBe('request');
       expect(mild.conditionsSource.insideRelativeHumidityPct).toBe('request');
       expect(mild.conditionsSource.elevationM).toBe('farm');
@@ -254,12 +321,22 @@ describe('estimates (e2e)', () => {
     it('gives every demo house a full breakdown whose parts add up to the total', async () => {
       expect(houses.length).toBeGreaterThanOrEqual(3);
       for (const house of houses) {
-        const body = (await t.http.post(`/api/houses/${house.id}/estimate`).set(bearer(grower)).send({}).expect(200)).body;
-        expect(body.heatLoss.components.map((c: Json) => c.key)).toEqual(['roof', 'sidewalls', 'endwalls', 'perimeter', 'infiltration']);
+        const body = (await t.http.post(`/api/houses/${house.id}/estimate`).set(bearer(grower)).send({}).expect(200))
+          .body;
+        expect(body.heatLoss.components.map((c: Json) => c.key)).toEqual([
+          'roof',
+          'sidewalls',
+          'endwalls',
+          'perimeter',
+          'infiltration',
+        ]);
         const sumW = body.heatLoss.components.reduce((sum: number, c: Json) => sum + (c.watts as number), 0);
         expect(body.heatLoss.totalW).toBeGreaterThan(0);
         expect(sumW).toBeCloseTo(body.heatLoss.totalW, 3);
-        expect(body.heatLoss.coveringW + body.heatLoss.perimeterW + body.heatLoss.infiltrationW).toBeCloseTo(body.heatLoss.totalW, 3);
+        expect(body.heatLoss.coveringW + body.heatLoss.perimeterW + body.heatLoss.infiltrationW).toBeCloseTo(
+          body.heatLoss.totalW,
+          3,
+        );
         expect(body.heater.requiredOutputW).toBeGreaterThan(body.heatLoss.totalW);
         expect(body.condensation.surfaces).toHaveLength(3);
         expect(body.assumptions.length).toBeGreaterThan(5);
@@ -269,7 +346,12 @@ describe('estimates (e2e)', () => {
 
     it('carries carbon monoxide and ethylene cautions on the fuel-fired demo houses', async () => {
       for (const prefix of ['House A', 'House B']) {
-        const body = (await t.http.post(`/api/houses/${houseNamed(prefix).id}/estimate`).set(bearer(grower)).expect(200)).body;
+        const body = (
+          await t.http
+            .post(`/api/houses/${houseNamed(prefix).id}/estimate`)
+            .set(bearer(grower))
+            .expect(200)
+        ).body;
         expect(body.heater.fuelFired).toBe(true);
         const cautions = body.cautions.join(' ');
         expect(cautions).toMatch(/carbon monoxide/i);
@@ -279,20 +361,42 @@ describe('estimates (e2e)', () => {
     });
 
     it("answers 422 on conditions.designOutdoorC when the farm has no climate, asking for the farm's climate", async () => {
-      const farm = (await t.http.post('/api/farms').set(bearer(grower)).send({ name: 'No climate yet', latitudeDeg: -33.9, longitudeDeg: 18.4, elevationM: 40, timeZone: 'Africa/Johannesburg' }).expect(201)).body;
+      const farm = (
+        await t.http
+          .post('/api/farms')
+          .set(bearer(grower))
+          .send({
+            name: 'No climate yet',
+            latitudeDeg: -33.9,
+            longitudeDeg: 18.4,
+            elevationM: 40,
+            timeZone: 'Africa/Johannesburg',
+          })
+          .expect(201)
+      ).body;
       const { id: _id, farmId: _farmId, createdAt: _c, updatedAt: _u, ...spec } = houseNamed('House B');
       const house = (await t.http.post(`/api/farms/${farm.id}/houses`).set(bearer(grower)).send(spec).expect(201)).body;
       const res = await t.http.post(`/api/houses/${house.id}/estimate`).set(bearer(grower)).send({}).expect(422);
       expect(res.body.field).toBe('conditions.designOutdoorC');
       expect(res.body.message).toMatch(/climate/);
-      const given = await t.http.post(`/api/houses/${house.id}/estimate`).set(bearer(grower)).send({ conditions: { designOutdoorC: 2 } }).expect(200);
+      const given = await t.http
+        .post(`/api/houses/${house.id}/estimate`)
+        .set(bearer(grower))
+        .send({ conditions: { designOutdoorC: 2 } })
+        .expect(200);
       expect(given.body.conditionsUsed.elevationM).toBe(40);
 
       const cooling = await t.http.post(`/api/houses/${house.id}/cooling`).set(bearer(grower)).send({}).expect(422);
       expect(cooling.body.field).toBe('conditions.summerDesignC');
       expect(cooling.body.message).toMatch(/climate/);
       // southern farm: the default design day is in January; no climate, so the winter figure is the reference default
-      const stated = (await t.http.post(`/api/houses/${house.id}/cooling`).set(bearer(grower)).send({ conditions: { summerDesignC: 30, dailyRangeK: 10, summerDesignWetBulbC: 20 } }).expect(200)).body;
+      const stated = (
+        await t.http
+          .post(`/api/houses/${house.id}/cooling`)
+          .set(bearer(grower))
+          .send({ conditions: { summerDesignC: 30, dailyRangeK: 10, summerDesignWetBulbC: 20 } })
+          .expect(200)
+      ).body;
       expect(stated.conditionsUsed.designDate).toMatch(/^\d{4}-01-21$/);
       expect(stated.conditionsSource.winterDesignC).toBe('reference data');
     });
@@ -303,7 +407,11 @@ describe('estimates (e2e)', () => {
     });
 
     it('refuses an out-of-bounds override with 400', async () => {
-      const res = await t.http.post(`/api/houses/${houseNamed('House A').id}/estimate`).set(bearer(grower)).send({ conditions: { designOutdoorC: -90 } }).expect(400);
+      const res = await t.http
+        .post(`/api/houses/${houseNamed('House A').id}/estimate`)
+        .set(bearer(grower))
+        .send({ conditions: { designOutdoorC: -90 } })
+        .expect(400);
       expect(res.body.field).toBe('conditions.designOutdoorC');
     });
   });
@@ -311,7 +419,11 @@ describe('estimates (e2e)', () => {
   describe('cooling', () => {
     it('POST /api/estimates/cooling returns the design day and pad sizing, described fully in the OpenAPI document', async () => {
       const conditions = { ...summerDay, evaporativePad: { padTypeId: 'cellulose-150mm', areaM2: 8 } };
-      const res = await t.http.post('/api/estimates/cooling').set(bearer(grower)).send({ house: gableHouse, site, conditions }).expect(200);
+      const res = await t.http
+        .post('/api/estimates/cooling')
+        .set(bearer(grower))
+        .send({ house: gableHouse, site, conditions })
+        .expect(200);
       expect(res.body.designDay.date).toBe('2026-07-21');
       expect(res.body.designDay.hours).toHaveLength(24);
       expect(res.body.pads.padTypeId).toBe('cellulose-150mm');
@@ -321,14 +433,26 @@ describe('estimates (e2e)', () => {
     });
 
     it('POST /api/estimates/cooling refuses a malformed date (400) and an unknown pad type (422)', async () => {
-      const badDate = await t.http.post('/api/estimates/cooling').set(bearer(grower)).send({ house: gableHouse, site, conditions: { ...summerDay, designDate: '21/07/2026' } }).expect(400);
+      const badDate = await t.http
+        .post('/api/estimates/cooling')
+        .set(bearer(grower))
+        .send({ house: gableHouse, site, conditions: { ...summerDay, designDate: '21/07/2026' } })
+        .expect(400);
       expect(badDate.body.field).toBe('conditions.designDate');
-      const notADay = await t.http.post('/api/estimates/cooling').set(bearer(grower)).send({ house: gableHouse, site, conditions: { ...summerDay, designDate: '2026-02-30' } }).expect(422);
+      const notADay = await t.http
+        .post('/api/estimates/cooling')
+        .set(bearer(grower))
+        .send({ house: gableHouse, site, conditions: { ...summerDay, designDate: '2026-02-30' } })
+        .expect(422);
       expect(notADay.body.field).toBe('conditions.designDate');
       const pad = await t.http
         .post('/api/estimates/cooling')
         .set(bearer(grower))
-        .send({ house: gableHouse, site, conditions: { ...summerDay, evaporativePad: { padTypeId: 'straw-bale', areaM2: 8 } } })
+        .send({
+          house: gableHouse,
+          site,
+          conditions: { ...summerDay, evaporativePad: { padTypeId: 'straw-bale', areaM2: 8 } },
+        })
         .expect(422);
       expect(pad.body.field).toBe('conditions.evaporativePad.padTypeId');
     });
@@ -340,31 +464,52 @@ describe('estimates (e2e)', () => {
       expect(body.houseId).toBe(houseB.id);
       expect(body.designDay.hours).toHaveLength(24);
       expect(body.designDay.date).toMatch(/^\d{4}-07-21$/);
-      expect(body.siteUsed).toEqual({ latitudeDeg: DEMO_FARM.latitudeDeg, longitudeDeg: DEMO_FARM.longitudeDeg, elevationM: DEMO_FARM.elevationM });
+      expect(body.siteUsed).toEqual({
+        latitudeDeg: DEMO_FARM.latitudeDeg,
+        longitudeDeg: DEMO_FARM.longitudeDeg,
+        elevationM: DEMO_FARM.elevationM,
+      });
       expect(body.conditionsUsed).toMatchObject({
         summerDesignC: DEMO_CLIMATE.summerDesignC,
         summerDesignWetBulbC: DEMO_CLIMATE.summerDesignWetBulbC,
         dailyRangeK: DEMO_CLIMATE.summerDailyRangeK,
         winterDesignC: DEMO_CLIMATE.winterDesignC,
       });
-      expect(body.conditionsSource).toMatchObject({ designDate: 'calendar default', summerDesignC: 'farm climate', winterDesignC: 'farm climate', padToFanDistanceM: 'house length', evaporativePad: 'none' });
+      expect(body.conditionsSource).toMatchObject({
+        designDate: 'calendar default',
+        summerDesignC: 'farm climate',
+        winterDesignC: 'farm climate',
+        padToFanDistanceM: 'house length',
+        evaporativePad: 'none',
+      });
       expect(body.winterVentilation.atOutdoorC).toBe(DEMO_CLIMATE.winterDesignC);
-      expect(Math.max(...body.designDay.hours.map((h: Json) => h.outdoorC as number))).toBeCloseTo(DEMO_CLIMATE.summerDesignC, 6);
+      expect(Math.max(...body.designDay.hours.map((h: Json) => h.outdoorC as number))).toBeCloseTo(
+        DEMO_CLIMATE.summerDesignC,
+        6,
+      );
 
       expect(body.capacity.verdict).toBe('short');
-      expect(body.capacity.fansNeeded).toBeGreaterThan(houseB.exhaustFans ? (houseB.exhaustFans as { count: number }).count : 1);
-      expect(body.capacity.additionalFansNeeded).toBe(body.capacity.fansNeeded - (houseB.exhaustFans as { count: number }).count);
+      expect(body.capacity.fansNeeded).toBeGreaterThan(
+        houseB.exhaustFans ? (houseB.exhaustFans as { count: number }).count : 1,
+      );
+      expect(body.capacity.additionalFansNeeded).toBe(
+        body.capacity.fansNeeded - (houseB.exhaustFans as { count: number }).count,
+      );
       expect(body.cautions.join(' ')).toMatch(/more fan/);
       expectSchema(body, 'HouseCoolingEstimateDto');
     });
 
     it('per house: a stated design date and pads replace the defaults', async () => {
       const houseC = houseNamed('Range C');
-      const body = (await t.http
-        .post(`/api/houses/${houseC.id}/cooling`)
-        .set(bearer(grower))
-        .send({ conditions: { designDate: '2026-08-21', evaporativePad: { padTypeId: 'cellulose-100mm', areaM2: 40 } } })
-        .expect(200)).body;
+      const body = (
+        await t.http
+          .post(`/api/houses/${houseC.id}/cooling`)
+          .set(bearer(grower))
+          .send({
+            conditions: { designDate: '2026-08-21', evaporativePad: { padTypeId: 'cellulose-100mm', areaM2: 40 } },
+          })
+          .expect(200)
+      ).body;
       expect(body.designDay.date).toBe('2026-08-21');
       expect(body.conditionsSource.designDate).toBe('request');
       expect(body.conditionsSource.evaporativePad).toBe('request');
@@ -380,9 +525,23 @@ describe('estimates (e2e)', () => {
     beforeAll(async () => {
       adviser = await signIn(t, 'adviser@example.com');
       const owner = await signIn(t, 'owner@example.com');
-      viewer = (await t.http.post('/api/auth/register').send({ email: 'estimate-viewer@example.org', password: 'password-123', name: 'Viewer' }).expect(201)).body.accessToken;
-      await t.http.post(`/api/farms/${farmId}/members`).set(bearer(owner)).send({ email: 'estimate-viewer@example.org', role: 'viewer' }).expect(201);
-      outsider = (await t.http.post('/api/auth/register').send({ email: 'estimate-outsider@example.org', password: 'password-123', name: 'Outsider' }).expect(201)).body.accessToken;
+      viewer = (
+        await t.http
+          .post('/api/auth/register')
+          .send({ email: 'estimate-viewer@example.org', password: 'password-123', name: 'Viewer' })
+          .expect(201)
+      ).body.accessToken;
+      await t.http
+        .post(`/api/farms/${farmId}/members`)
+        .set(bearer(owner))
+        .send({ email: 'estimate-viewer@example.org', role: 'viewer' })
+        .expect(201);
+      outsider = (
+        await t.http
+          .post('/api/auth/register')
+          .send({ email: 'estimate-outsider@example.org', password: 'password-123', name: 'Outsider' })
+          .expect(201)
+      ).body.accessToken;
     });
 
     it('an adviser runs heating and cooling estimates', async () => {

@@ -18,7 +18,9 @@ describe('houses (e2e)', () => {
     expect(farm.houseCount).toBeGreaterThanOrEqual(3);
     const houses = (await t.http.get(`/api/farms/${farmId}/houses`).set(bearer(token)).expect(200)).body;
     expect(new Set(houses.map((h: { shape: string }) => h.shape)).size).toBe(3);
-    expect(new Set(houses.map((h: { coverings: { roof: string } }) => h.coverings.roof)).size).toBeGreaterThanOrEqual(3);
+    expect(new Set(houses.map((h: { coverings: { roof: string } }) => h.coverings.roof)).size).toBeGreaterThanOrEqual(
+      3,
+    );
   });
 
   it('keeps an edit: PATCH then GET returns the new width', async () => {
@@ -31,25 +33,50 @@ describe('houses (e2e)', () => {
 
   it('refuses out-of-bounds numbers naming the field (400)', async () => {
     const house = (await t.http.get(`/api/farms/${farmId}/houses`).set(bearer(token)).expect(200)).body[0];
-    const res = await t.http.patch(`/api/houses/${house.id}`).set(bearer(token)).send({ widthM: 500, setpoints: { dayHeatingC: 18, nightHeatingC: 99, coolingC: 25 } }).expect(400);
+    const res = await t.http
+      .patch(`/api/houses/${house.id}`)
+      .set(bearer(token))
+      .send({ widthM: 500, setpoints: { dayHeatingC: 18, nightHeatingC: 99, coolingC: 25 } })
+      .expect(400);
     const fields = res.body.details.map((d: { field: string }) => d.field);
     expect(fields).toEqual(expect.arrayContaining(['widthM', 'setpoints.nightHeatingC']));
   });
 
   it('refuses a house without its nested groups with 400 naming each', async () => {
-    const res = await t.http.post(`/api/farms/${farmId}/houses`).set(bearer(token)).send({
-      name: 'Incomplete', shape: 'gable', spans: 1, widthM: 9, lengthM: 30, eaveHeightM: 2.5, ridgeHeightM: 4.5,
-      airLeakageClassId: 'new-film-double', perimeterInsulated: false, heaters: [], inletAreaM2: 0,
-    }).expect(400);
+    const res = await t.http
+      .post(`/api/farms/${farmId}/houses`)
+      .set(bearer(token))
+      .send({
+        name: 'Incomplete',
+        shape: 'gable',
+        spans: 1,
+        widthM: 9,
+        lengthM: 30,
+        eaveHeightM: 2.5,
+        ridgeHeightM: 4.5,
+        airLeakageClassId: 'new-film-double',
+        perimeterInsulated: false,
+        heaters: [],
+        inletAreaM2: 0,
+      })
+      .expect(400);
     const fields = res.body.details.map((d: { field: string }) => d.field);
     expect(fields).toEqual(expect.arrayContaining(['coverings', 'exhaustFans', 'setpoints']));
   });
 
   it('refuses a ridge below the eave and an unknown covering with 422 naming the field', async () => {
     const house = (await t.http.get(`/api/farms/${farmId}/houses`).set(bearer(token)).expect(200)).body[0];
-    const ridge = await t.http.patch(`/api/houses/${house.id}`).set(bearer(token)).send({ eaveHeightM: 3, ridgeHeightM: 2.5 }).expect(422);
+    const ridge = await t.http
+      .patch(`/api/houses/${house.id}`)
+      .set(bearer(token))
+      .send({ eaveHeightM: 3, ridgeHeightM: 2.5 })
+      .expect(422);
     expect(ridge.body.field).toBe('ridgeHeightM');
-    const covering = await t.http.patch(`/api/houses/${house.id}`).set(bearer(token)).send({ coverings: { roof: 'cling-film', sidewalls: 'poly-single', endwalls: 'poly-single' } }).expect(422);
+    const covering = await t.http
+      .patch(`/api/houses/${house.id}`)
+      .set(bearer(token))
+      .send({ coverings: { roof: 'cling-film', sidewalls: 'poly-single', endwalls: 'poly-single' } })
+      .expect(422);
     expect(covering.body.field).toBe('coverings.roof');
     const kept = (await t.http.get(`/api/houses/${house.id}`).set(bearer(token)).expect(200)).body;
     expect(kept.ridgeHeightM).toBe(house.ridgeHeightM);
@@ -100,8 +127,15 @@ describe('farm climate (e2e)', () => {
     const current = (await t.http.get(`/api/farms/${farmId}/climate`).set(bearer(grower)).expect(200)).body.climate;
     const warmer = { ...current, winterDesignC: -25 };
     await t.http.put(`/api/farms/${farmId}/climate`).set(bearer(grower)).send(warmer).expect(200);
-    expect((await t.http.get(`/api/farms/${farmId}/climate`).set(bearer(grower)).expect(200)).body.climate.winterDesignC).toBe(-25);
-    const broken = { ...current, monthly: current.monthly.map((m: { month: number }) => (m.month === 3 ? { ...m, meanDailyMinC: 10, meanDailyMaxC: 2 } : m)) };
+    expect(
+      (await t.http.get(`/api/farms/${farmId}/climate`).set(bearer(grower)).expect(200)).body.climate.winterDesignC,
+    ).toBe(-25);
+    const broken = {
+      ...current,
+      monthly: current.monthly.map((m: { month: number }) =>
+        m.month === 3 ? { ...m, meanDailyMinC: 10, meanDailyMaxC: 2 } : m,
+      ),
+    };
     const res = await t.http.put(`/api/farms/${farmId}/climate`).set(bearer(grower)).send(broken).expect(422);
     expect(res.body.field).toBe('climate.monthly[2].meanDailyMinC');
     const elevenMonths = { ...current, monthly: current.monthly.slice(1) };

@@ -5,7 +5,7 @@ import { createTestApp, type TestApp } from './test-app';
 
 /**
  * backend/openapi.json is the contract the frontend's types are generated from. If a DTO or a
- * route changes without `npm run openapi -w backend` (and then `npm run gen:api -w frontend`),
+ * route changes without `npm run openapi -w @thermbay/backend` (and then `npm run gen:api -w @thermbay/frontend`),
  * this fails; the frontend has the matching check for its generated file.
  */
 describe('OpenAPI contract (e2e)', () => {

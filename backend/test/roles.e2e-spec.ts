@@ -19,23 +19,36 @@ describe('roles × routes (e2e)', () => {
 
   beforeAll(async () => {
     t = await createTestApp();
-    for (const who of ['owner', 'grower', 'adviser', 'admin'] as const) token[who] = await signIn(t, `${who}@example.com`);
+    for (const who of ['owner', 'grower', 'adviser', 'admin'] as const)
+      token[who] = await signIn(t, `${who}@example.com`);
     for (const who of ['viewer', 'outsider'] as const) {
-      const res = await t.http.post('/api/auth/register').send({ email: `${who}@example.org`, password: 'password-123', name: who }).expect(201);
+      const res = await t.http
+        .post('/api/auth/register')
+        .send({ email: `${who}@example.org`, password: 'password-123', name: who })
+        .expect(201);
       token[who] = res.body.accessToken;
     }
     const farms = await t.http.get('/api/farms').set(bearer(token.owner)).expect(200);
     farmId = farms.body[0].id;
-    await t.http.post(`/api/farms/${farmId}/members`).set(bearer(token.owner)).send({ email: 'viewer@example.org', role: 'viewer' }).expect(201);
+    await t.http
+      .post(`/api/farms/${farmId}/members`)
+      .set(bearer(token.owner))
+      .send({ email: 'viewer@example.org', role: 'viewer' })
+      .expect(201);
     // the outsider is a member (owner) of a farm of their own
-    await t.http.post('/api/farms').set(bearer(token.outsider)).send({ name: 'Elsewhere', latitudeDeg: 40, longitudeDeg: -80, elevationM: 200, timeZone: 'America/New_York' }).expect(201);
+    await t.http
+      .post('/api/farms')
+      .set(bearer(token.outsider))
+      .send({ name: 'Elsewhere', latitudeDeg: 40, longitudeDeg: -80, elevationM: 200, timeZone: 'America/New_York' })
+      .expect(201);
     const houses = await t.http.get(`/api/farms/${farmId}/houses`).set(bearer(token.owner)).expect(200);
     houseId = houses.body[0].id;
   });
   afterAll(() => t.close());
 
   const newHouse = async () =>
-    (await t.http.post(`/api/farms/${farmId}/houses`).set(bearer(token.owner)).send(houseBody).expect(201)).body.id as number;
+    (await t.http.post(`/api/farms/${farmId}/houses`).set(bearer(token.owner)).send(houseBody).expect(201)).body
+      .id as number;
 
   const SEASON = { startDate: '2026-12-01', endDate: '2027-02-28' };
   const smallCsv = Buffer.from(hourlyCsv('2027-01-01', 2));
@@ -49,10 +62,19 @@ describe('roles × routes (e2e)', () => {
   const newLog = async () => (await uploadLog('owner').expect(201)).body.id as number;
   const demoPrices = [
     { fuelId: 'propane', pricePerUnit: 1.6, priceUnit: 'us', note: 'Invented demo price per US gal, not market data' },
-    { fuelId: 'natural-gas', pricePerUnit: 0.8, priceUnit: 'us', note: 'Invented demo price per therm, not market data' },
+    {
+      fuelId: 'natural-gas',
+      pricePerUnit: 0.8,
+      priceUnit: 'us',
+      note: 'Invented demo price per therm, not market data',
+    },
   ];
 
-  const matrix: Array<{ route: string; expected: Record<Who, number>; call: (who: Who) => Promise<{ status: number }> }> = [
+  const matrix: Array<{
+    route: string;
+    expected: Record<Who, number>;
+    call: (who: Who) => Promise<{ status: number }>;
+  }> = [
     {
       route: 'GET /farms/:id',
       expected: { owner: 200, grower: 200, adviser: 200, viewer: 200, outsider: 404, admin: 404 },
@@ -86,7 +108,11 @@ describe('roles × routes (e2e)', () => {
     {
       route: 'PATCH /houses/:id',
       expected: { owner: 200, grower: 200, adviser: 403, viewer: 403, outsider: 404, admin: 404 },
-      call: (who) => t.http.patch(`/api/houses/${houseId}`).set(bearer(token[who])).send({ notes: `edited by ${who}` }),
+      call: (who) =>
+        t.http
+          .patch(`/api/houses/${houseId}`)
+          .set(bearer(token[who]))
+          .send({ notes: `edited by ${who}` }),
     },
     {
       route: 'DELETE /houses/:id',
@@ -153,7 +179,9 @@ describe('roles × routes (e2e)', () => {
         t.http
           .put(`/api/houses/${houseId}/calendar`)
           .set(bearer(token[who]))
-          .send({ periods: [{ startMonthDay: '10-01', endMonthDay: '04-30', mode: 'heated', label: `set by ${who}` }] }),
+          .send({
+            periods: [{ startMonthDay: '10-01', endMonthDay: '04-30', mode: 'heated', label: `set by ${who}` }],
+          }),
     },
     {
       route: 'GET /farms/:id/fuel-prices',
@@ -163,7 +191,8 @@ describe('roles × routes (e2e)', () => {
     {
       route: 'PUT /farms/:id/fuel-prices',
       expected: { owner: 200, grower: 200, adviser: 403, viewer: 403, outsider: 404, admin: 404 },
-      call: (who) => t.http.put(`/api/farms/${farmId}/fuel-prices`).set(bearer(token[who])).send({ prices: demoPrices }),
+      call: (who) =>
+        t.http.put(`/api/farms/${farmId}/fuel-prices`).set(bearer(token[who])).send({ prices: demoPrices }),
     },
     {
       route: 'POST /houses/:id/season',
@@ -173,7 +202,8 @@ describe('roles × routes (e2e)', () => {
     {
       route: 'POST /houses/:id/night-demand',
       expected: { owner: 200, grower: 200, adviser: 200, viewer: 403, outsider: 404, admin: 404 },
-      call: (who) => t.http.post(`/api/houses/${houseId}/night-demand`).set(bearer(token[who])).send({ date: '2027-01-15' }),
+      call: (who) =>
+        t.http.post(`/api/houses/${houseId}/night-demand`).set(bearer(token[who])).send({ date: '2027-01-15' }),
     },
     {
       route: 'POST /houses/:id/measures',
@@ -192,7 +222,11 @@ describe('roles × routes (e2e)', () => {
     {
       route: 'GET /farms/:id/season-budget.csv',
       expected: { owner: 200, grower: 200, adviser: 200, viewer: 200, outsider: 404, admin: 404 },
-      call: (who) => t.http.get(`/api/farms/${farmId}/season-budget.csv`).query({ units: 'us', ...SEASON }).set(bearer(token[who])),
+      call: (who) =>
+        t.http
+          .get(`/api/farms/${farmId}/season-budget.csv`)
+          .query({ units: 'us', ...SEASON })
+          .set(bearer(token[who])),
     },
     {
       route: 'GET /users (site admin only)',
@@ -226,9 +260,17 @@ describe('roles × routes (e2e)', () => {
   });
 
   it('only the owner deletes a farm, and its houses go with it', async () => {
-    const farm = (await t.http.post('/api/farms').set(bearer(token.grower)).send({ name: 'Temporary', latitudeDeg: 45, longitudeDeg: -94, elevationM: 300, timeZone: 'America/Chicago' }).expect(201)).body;
+    const farm = (
+      await t.http
+        .post('/api/farms')
+        .set(bearer(token.grower))
+        .send({ name: 'Temporary', latitudeDeg: 45, longitudeDeg: -94, elevationM: 300, timeZone: 'America/Chicago' })
+        .expect(201)
+    ).body;
     expect(farm.myRole).toBe('owner');
-    const house = (await t.http.post(`/api/farms/${farm.id}/houses`).set(bearer(token.grower)).send(houseBody).expect(201)).body;
+    const house = (
+      await t.http.post(`/api/farms/${farm.id}/houses`).set(bearer(token.grower)).send(houseBody).expect(201)
+    ).body;
     await t.http.delete(`/api/farms/${farm.id}`).set(bearer(token.viewer)).expect(404);
     await t.http.delete(`/api/farms/${farm.id}`).set(bearer(token.grower)).expect(204);
     await t.http.get(`/api/houses/${house.id}`).set(bearer(token.grower)).expect(404);
@@ -237,7 +279,11 @@ describe('roles × routes (e2e)', () => {
   it('keeps at least one owner on a farm', async () => {
     const members = (await t.http.get(`/api/farms/${farmId}/members`).set(bearer(token.owner)).expect(200)).body;
     const owner = members.find((m: { role: string }) => m.role === 'owner');
-    const res = await t.http.patch(`/api/farms/${farmId}/members/${owner.userId}`).set(bearer(token.owner)).send({ role: 'viewer' }).expect(400);
+    const res = await t.http
+      .patch(`/api/farms/${farmId}/members/${owner.userId}`)
+      .set(bearer(token.owner))
+      .send({ role: 'viewer' })
+      .expect(400);
     expect(res.body.message).toMatch(/at least one owner/);
   });
 });

@@ -48,7 +48,8 @@ describe('season, calendars, fuel prices and the farm budget (e2e)', () => {
   });
   afterAll(() => t.close());
 
-  const season = (house: House, body: object = {}) => t.http.post(`/api/houses/${house.id}/season`).set(bearer(grower)).send(body);
+  const season = (house: House, body: object = {}) =>
+    t.http.post(`/api/houses/${house.id}/season`).set(bearer(grower)).send(body);
 
   describe('fuel prices', () => {
     it('seeds invented demo prices, labelled as invented', async () => {
@@ -69,7 +70,12 @@ describe('season, calendars, fuel prices and the farm budget (e2e)', () => {
       const twice = await t.http
         .put(`/api/farms/${farmId}/fuel-prices`)
         .set(bearer(grower))
-        .send({ prices: [{ fuelId: 'propane', pricePerUnit: 1, priceUnit: 'si' }, { fuelId: 'propane', pricePerUnit: 2, priceUnit: 'us' }] })
+        .send({
+          prices: [
+            { fuelId: 'propane', pricePerUnit: 1, priceUnit: 'si' },
+            { fuelId: 'propane', pricePerUnit: 2, priceUnit: 'us' },
+          ],
+        })
         .expect(422);
       expect(twice.body.field).toBe('prices.1.fuelId');
       const negative = await t.http
@@ -84,13 +90,24 @@ describe('season, calendars, fuel prices and the farm budget (e2e)', () => {
   describe('production calendar', () => {
     it('returns the demo calendar and keeps a replacement', async () => {
       const demo = (await t.http.get(`/api/houses/${houses.B.id}/calendar`).set(bearer(grower)).expect(200)).body;
-      expect(demo).toEqual({ houseId: houses.B.id, periods: [{ startMonthDay: '02-15', endMonthDay: '05-31', mode: 'heated', label: 'Spring bedding plants' }] });
-      expect((await t.http.get(`/api/houses/${houses.C.id}/calendar`).set(bearer(grower)).expect(200)).body.periods).toEqual([]);
+      expect(demo).toEqual({
+        houseId: houses.B.id,
+        periods: [{ startMonthDay: '02-15', endMonthDay: '05-31', mode: 'heated', label: 'Spring bedding plants' }],
+      });
+      expect(
+        (await t.http.get(`/api/houses/${houses.C.id}/calendar`).set(bearer(grower)).expect(200)).body.periods,
+      ).toEqual([]);
 
-      const periods = [{ startMonthDay: '11-15', endMonthDay: '03-31', mode: 'heated', nightHeatingC: 12, label: 'Winter crop' }];
-      const put = (await t.http.put(`/api/houses/${houses.C.id}/calendar`).set(bearer(grower)).send({ periods }).expect(200)).body;
+      const periods = [
+        { startMonthDay: '11-15', endMonthDay: '03-31', mode: 'heated', nightHeatingC: 12, label: 'Winter crop' },
+      ];
+      const put = (
+        await t.http.put(`/api/houses/${houses.C.id}/calendar`).set(bearer(grower)).send({ periods }).expect(200)
+      ).body;
       expect(put.periods).toEqual(periods);
-      expect((await t.http.get(`/api/houses/${houses.C.id}/calendar`).set(bearer(grower)).expect(200)).body.periods).toEqual(periods);
+      expect(
+        (await t.http.get(`/api/houses/${houses.C.id}/calendar`).set(bearer(grower)).expect(200)).body.periods,
+      ).toEqual(periods);
       await t.http.put(`/api/houses/${houses.C.id}/calendar`).set(bearer(grower)).send({ periods: [] }).expect(200);
     });
 
@@ -157,13 +174,17 @@ describe('season, calendars, fuel prices and the farm budget (e2e)', () => {
       expect(body.peak.heatW).toBeGreaterThan(body.heaterCapacity.installedOutputW);
       expect(body.total.hoursBelowSetpoint).toBeGreaterThan(0);
       expect(body.total.unmetHeatKWh).toBeGreaterThan(0);
-      expect(sum(body.monthly.map((m: { hoursBelowSetpoint: number }) => m.hoursBelowSetpoint))).toBe(body.total.hoursBelowSetpoint);
+      expect(sum(body.monthly.map((m: { hoursBelowSetpoint: number }) => m.hoursBelowSetpoint))).toBe(
+        body.total.hoursBelowSetpoint,
+      );
       expect(body.total.fuelInputKWh).toBeCloseTo(body.total.energyKWh / 0.8, 3);
       expect(body.heaterCapacity.caution).toMatch(/crop sits below its setpoint/);
       expect(body.heaterCapacity.caution).toContain(`${body.total.hoursBelowSetpoint} hours`);
       expect(body.degreeDays.steps[body.degreeDays.steps.length - 1].key).toBe('heater-capacity');
 
-      const budget = (await t.http.post(`/api/farms/${farmId}/season-budget`).set(bearer(grower)).send(SEASON).expect(200)).body;
+      const budget = (
+        await t.http.post(`/api/farms/${farmId}/season-budget`).set(bearer(grower)).send(SEASON).expect(200)
+      ).body;
       const inBudget = budget.houses.find((house: { houseId: number }) => house.houseId === houses.B.id);
       expect(inBudget.hoursBelowSetpoint).toBe(body.total.hoursBelowSetpoint);
       expect(inBudget.unmetHeatKWh).toBeCloseTo(body.total.unmetHeatKWh, 6);
@@ -181,7 +202,10 @@ describe('season, calendars, fuel prices and the farm budget (e2e)', () => {
       const byHand = sum(
         climate.monthly
           .filter((m: { month: number }) => daysIn[m.month])
-          .map((m: { month: number; meanDailyMinC: number; meanDailyMaxC: number }) => daysIn[m.month] * Math.max(0, 18 - (m.meanDailyMinC + m.meanDailyMaxC) / 2)),
+          .map(
+            (m: { month: number; meanDailyMinC: number; meanDailyMaxC: number }) =>
+              daysIn[m.month] * Math.max(0, 18 - (m.meanDailyMinC + m.meanDailyMaxC) / 2),
+          ),
       );
       expect(dd.baseTemperatureC).toBe(18);
       expect(dd.degreeDaysKDay).toBeGreaterThan(byHand * 0.9);
@@ -190,7 +214,13 @@ describe('season, calendars, fuel prices and the farm budget (e2e)', () => {
       expect(sum(body.monthly.map((m: Month) => m.degreeDaysKDay))).toBeCloseTo(dd.degreeDaysKDay, 3);
       // degree-day heat = UA × degree-days × 24 h
       expect(dd.energyKWh).toBeCloseTo((dd.uaWPerK * dd.degreeDaysKDay * 24) / 1000, 3);
-      expect(dd.steps.map((s: { key: string }) => s.key)).toEqual(['degree-day', 'hourly-curve', 'day-setpoint', 'curtain', 'sun']);
+      expect(dd.steps.map((s: { key: string }) => s.key)).toEqual([
+        'degree-day',
+        'hourly-curve',
+        'day-setpoint',
+        'curtain',
+        'sun',
+      ]);
       expect(dd.steps[4].energyKWh).toBeCloseTo(body.total.energyKWh, 3);
       expect(dd.hourlyDifferenceFraction).toBeCloseTo(body.total.energyKWh / dd.energyKWh - 1, 6);
     });
@@ -216,14 +246,30 @@ describe('season, calendars, fuel prices and the farm budget (e2e)', () => {
     });
 
     it('takes the fuel, price and efficiency from the request over the defaults', async () => {
-      const body = (await season(houses.C, { ...SEASON, fuelId: 'propane', pricePerUnit: 0.5, priceUnit: 'si', heaterEfficiency: 0.9 }).expect(200)).body;
-      expect(body.inputsUsed).toMatchObject({ fuelId: 'propane', fuelFrom: 'request', priceFrom: 'request', heaterEfficiencyFrom: 'request', heaterEfficiency: 0.9 });
+      const body = (
+        await season(houses.C, {
+          ...SEASON,
+          fuelId: 'propane',
+          pricePerUnit: 0.5,
+          priceUnit: 'si',
+          heaterEfficiency: 0.9,
+        }).expect(200)
+      ).body;
+      expect(body.inputsUsed).toMatchObject({
+        fuelId: 'propane',
+        fuelFrom: 'request',
+        priceFrom: 'request',
+        heaterEfficiencyFrom: 'request',
+        heaterEfficiency: 0.9,
+      });
       expect(body.total.cost).toBeCloseTo(body.total.fuelQuantitySi * 0.5, 6);
     });
 
     it('refuses half a date range, a season over 366 days and an unknown fuel, naming the field', async () => {
       expect((await season(houses.C, { startDate: '2026-09-01' }).expect(422)).body.field).toBe('endDate');
-      expect((await season(houses.C, { startDate: '2026-01-01', endDate: '2027-06-30' }).expect(422)).body.field).toBe('endDate');
+      expect((await season(houses.C, { startDate: '2026-01-01', endDate: '2027-06-30' }).expect(422)).body.field).toBe(
+        'endDate',
+      );
       expect((await season(houses.C, { ...SEASON, fuelId: 'unobtainium' }).expect(422)).body.field).toBe('fuelId');
       const bad = await season(houses.C, { climateSource: 'guesswork' }).expect(400);
       expect(bad.body.details[0].field).toBe('climateSource');
@@ -231,19 +277,27 @@ describe('season, calendars, fuel prices and the farm budget (e2e)', () => {
 
     it('needs a climate or a log, and a price, naming the field (422)', async () => {
       const farm = (
-        await t.http.post('/api/farms').set(bearer(owner)).send({ name: 'Bare farm', latitudeDeg: 44, longitudeDeg: -93, elevationM: 250, timeZone: 'America/Chicago' }).expect(201)
+        await t.http
+          .post('/api/farms')
+          .set(bearer(owner))
+          .send({ name: 'Bare farm', latitudeDeg: 44, longitudeDeg: -93, elevationM: 250, timeZone: 'America/Chicago' })
+          .expect(201)
       ).body;
       const house = (
         await t.http
           .post(`/api/farms/${farm.id}/houses`)
           .set(bearer(owner))
-          .send({ ...houseBody('Bare house'), heaters: [{ count: 1, ratedInputW: 50000, efficiency: 0.8, fuelId: 'propane' }] })
+          .send({
+            ...houseBody('Bare house'),
+            heaters: [{ count: 1, ratedInputW: 50000, efficiency: 0.8, fuelId: 'propane' }],
+          })
           .expect(201)
       ).body;
       const post = (body: object) => t.http.post(`/api/houses/${house.id}/season`).set(bearer(owner)).send(body);
       expect((await post(SEASON).expect(422)).body.field).toBe('climateSource');
 
-      const demoClimate = (await t.http.get(`/api/farms/${farmId}/climate`).set(bearer(owner)).expect(200)).body.climate;
+      const demoClimate = (await t.http.get(`/api/farms/${farmId}/climate`).set(bearer(owner)).expect(200)).body
+        .climate;
       await t.http.put(`/api/farms/${farm.id}/climate`).set(bearer(owner)).send(demoClimate).expect(200);
       const noPrice = await post(SEASON).expect(422);
       expect(noPrice.body.field).toBe('pricePerUnit');
@@ -262,14 +316,21 @@ describe('season, calendars, fuel prices and the farm budget (e2e)', () => {
         .set(bearer(grower))
         .field('name', 'January, two weeks')
         .field('mapping', JSON.stringify(HOURLY_MAPPING))
-        .attach('file', Buffer.from(hourlyCsv('2027-01-01', 14, -10)), { filename: 'january.csv', contentType: 'text/csv' })
+        .attach('file', Buffer.from(hourlyCsv('2027-01-01', 14, -10)), {
+          filename: 'january.csv',
+          contentType: 'text/csv',
+        })
         .expect(201);
       logId = res.body.id;
     });
 
     it('runs the season over the days the log covers', async () => {
       const body = (await season(houses.C, { climateSource: { temperatureLogId: logId } }).expect(200)).body;
-      expect(body.inputsUsed).toMatchObject({ climateSource: 'temperature-log', temperatureLogId: logId, seasonFrom: 'temperature-log' });
+      expect(body.inputsUsed).toMatchObject({
+        climateSource: 'temperature-log',
+        temperatureLogId: logId,
+        seasonFrom: 'temperature-log',
+      });
       expect(body.period).toMatchObject({ startDate: '2027-01-01', endDate: '2027-01-14', days: 14 });
       expect(body.monthly).toHaveLength(1);
       expect(body.total.energyKWh).toBeGreaterThan(0);
@@ -289,7 +350,11 @@ describe('season, calendars, fuel prices and the farm budget (e2e)', () => {
 
     it('prices a night from the log', async () => {
       const body = (
-        await t.http.post(`/api/houses/${houses.C.id}/night-demand`).set(bearer(grower)).send({ date: '2027-01-05', climateSource: { temperatureLogId: logId } }).expect(200)
+        await t.http
+          .post(`/api/houses/${houses.C.id}/night-demand`)
+          .set(bearer(grower))
+          .send({ date: '2027-01-05', climateSource: { temperatureLogId: logId } })
+          .expect(200)
       ).body;
       expect(body.energyKWh).toBeGreaterThan(0);
       expect(body.minOutdoorC).toBeCloseTo(-15, 0);
@@ -298,7 +363,13 @@ describe('season, calendars, fuel prices and the farm budget (e2e)', () => {
 
   describe('one night', () => {
     it('runs from sunset to the next sunrise with hourly outdoor temperatures, heat and cost', async () => {
-      const body = (await t.http.post(`/api/houses/${houses.A.id}/night-demand`).set(bearer(grower)).send({ date: '2027-01-15' }).expect(200)).body;
+      const body = (
+        await t.http
+          .post(`/api/houses/${houses.A.id}/night-demand`)
+          .set(bearer(grower))
+          .send({ date: '2027-01-15' })
+          .expect(200)
+      ).body;
       expect(body.houseId).toBe(houses.A.id);
       expect(body.sunset.startsWith('2027-01-15T')).toBe(true);
       expect(body.sunrise.startsWith('2027-01-16T')).toBe(true);
@@ -313,7 +384,9 @@ describe('season, calendars, fuel prices and the farm budget (e2e)', () => {
       expect(body.hourly.length).toBeGreaterThanOrEqual(14);
       expect(body.nightSetpointC).toBe(17);
       for (const hour of body.hourly) expect(hour.outdoorC).toBeLessThan(0);
-      expect(sum(body.hourly.map((h: { nightShare: number; heatW: number }) => (h.nightShare * h.heatW) / 1000))).toBeCloseTo(body.energyKWh, 6);
+      expect(
+        sum(body.hourly.map((h: { nightShare: number; heatW: number }) => (h.nightShare * h.heatW) / 1000)),
+      ).toBeCloseTo(body.energyKWh, 6);
       expect(body.inputsUsed).toMatchObject({ fuelId: 'propane', priceFrom: 'farm-fuel-prices' });
     });
 
@@ -332,7 +405,12 @@ describe('season, calendars, fuel prices and the farm budget (e2e)', () => {
           .send({
             ...SEASON,
             measures: [
-              { kind: 'fuel-switch', costAmount: 1000, fuel: { fuelId: 'electricity', pricePerUnit: 0.5, priceUnit: 'si' }, efficiency: 1 },
+              {
+                kind: 'fuel-switch',
+                costAmount: 1000,
+                fuel: { fuelId: 'electricity', pricePerUnit: 0.5, priceUnit: 'si' },
+                efficiency: 1,
+              },
               { kind: 'second-poly-layer', costAmount: 3000 },
               { kind: 'sealing', costAmount: 800 },
               { kind: 'night-setpoint-lower', costAmount: 0, lowerByK: 2 },
@@ -349,27 +427,51 @@ describe('season, calendars, fuel prices and the farm budget (e2e)', () => {
       const never = results.filter((m) => m.paybackYears === null);
       expect(never.map((m) => m.kind)).toEqual(['fuel-switch']);
       expect(never[0].paybackStatus).toBe('never');
-      expect(results.find((m) => m.kind === 'night-setpoint-lower')).toMatchObject({ paybackStatus: 'immediate', paybackYears: 0 });
+      expect(results.find((m) => m.kind === 'night-setpoint-lower')).toMatchObject({
+        paybackStatus: 'immediate',
+        paybackYears: 0,
+      });
       expect(never[0].paybackText).toBe('never');
       expect(never[0].yearlyMoneySaved).toBeLessThan(0);
       expect(results[results.length - 1].kind).toBe('fuel-switch');
-      for (let i = 1; i < paying.length; i++) expect(paying[i].paybackYears!).toBeGreaterThanOrEqual(paying[i - 1].paybackYears!);
+      for (let i = 1; i < paying.length; i++)
+        expect(paying[i].paybackYears!).toBeGreaterThanOrEqual(paying[i - 1].paybackYears!);
       expect(results[0].kind).toBe('night-setpoint-lower');
-      for (const measure of paying) expect(measure.paybackYears).toBeCloseTo(measure.costAmount! / measure.yearlyMoneySaved, 6);
+      for (const measure of paying)
+        expect(measure.paybackYears).toBeCloseTo(measure.costAmount! / measure.yearlyMoneySaved, 6);
       const layer = results.find((m) => m.kind === 'second-poly-layer')!;
       expect(layer.yearlyMoneySaved).toBeGreaterThan(0);
       expect(layer.lightChange!.relativeChange).toBeLessThan(0);
     });
 
     it('compares the default measures that apply, without costs, when the list is empty', async () => {
-      const body = (await t.http.post(`/api/houses/${houses.B.id}/measures`).set(bearer(grower)).send({ ...SEASON, measures: [] }).expect(200)).body;
+      const body = (
+        await t.http
+          .post(`/api/houses/${houses.B.id}/measures`)
+          .set(bearer(grower))
+          .send({ ...SEASON, measures: [] })
+          .expect(200)
+      ).body;
       expect(body.defaultsUsed).toBe(true);
       expect(body.notes[0]).toMatch(/cost/);
       const kinds = body.measures.map((m: MeasureResult) => m.kind);
       // House B: single poly, no curtain, perimeter not insulated
-      expect(kinds).toEqual(expect.arrayContaining(['second-poly-layer', 'thermal-curtain', 'perimeter-insulation', 'night-setpoint-lower']));
+      expect(kinds).toEqual(
+        expect.arrayContaining([
+          'second-poly-layer',
+          'thermal-curtain',
+          'perimeter-insulation',
+          'night-setpoint-lower',
+        ]),
+      );
       for (const measure of body.measures as MeasureResult[]) {
-        expect(measure).toMatchObject({ costAmount: null, applicable: true, notApplicableReason: null, paybackStatus: 'enter-cost', paybackYears: null });
+        expect(measure).toMatchObject({
+          costAmount: null,
+          applicable: true,
+          notApplicableReason: null,
+          paybackStatus: 'enter-cost',
+          paybackYears: null,
+        });
         expect(measure.paybackText).toBe('enter a cost');
       }
       const savings = body.measures.map((m: MeasureResult) => m.yearlyMoneySaved);
@@ -377,7 +479,13 @@ describe('season, calendars, fuel prices and the farm budget (e2e)', () => {
     });
 
     it("leaves out of House A's defaults what it already has (double poly with IR film, insulated perimeter)", async () => {
-      const body = (await t.http.post(`/api/houses/${houses.A.id}/measures`).set(bearer(grower)).send({ ...SEASON, measures: [] }).expect(200)).body;
+      const body = (
+        await t.http
+          .post(`/api/houses/${houses.A.id}/measures`)
+          .set(bearer(grower))
+          .send({ ...SEASON, measures: [] })
+          .expect(200)
+      ).body;
       const kinds = body.measures.map((m: MeasureResult) => m.kind);
       expect(kinds).not.toContain('second-poly-layer');
       expect(kinds).not.toContain('perimeter-insulation');
@@ -403,10 +511,21 @@ describe('season, calendars, fuel prices and the farm budget (e2e)', () => {
           .expect(200)
       ).body;
       const results: MeasureResult[] = body.measures;
-      expect(results.map((m) => m.paybackStatus)).toEqual(['years', 'enter-cost', 'not-applicable', 'not-applicable', 'not-applicable']);
+      expect(results.map((m) => m.paybackStatus)).toEqual([
+        'years',
+        'enter-cost',
+        'not-applicable',
+        'not-applicable',
+        'not-applicable',
+      ]);
       expect(results.slice(2).map((m) => m.kind)).toEqual(['second-poly-layer', 'fuel-switch', 'night-setpoint-lower']);
       for (const measure of results.slice(2)) {
-        expect(measure).toMatchObject({ applicable: false, paybackYears: null, paybackText: 'not applicable', yearlyMoneySaved: 0 });
+        expect(measure).toMatchObject({
+          applicable: false,
+          paybackYears: null,
+          paybackText: 'not applicable',
+          yearlyMoneySaved: 0,
+        });
         expect(measure.notApplicableReason).toEqual(expect.any(String));
       }
       expect(results[3].notApplicableReason).toMatch(/price/);
@@ -424,8 +543,16 @@ describe('season, calendars, fuel prices and the farm budget (e2e)', () => {
 
   describe('farm season budget', () => {
     it('sums the houses, by fuel and by month, each as its own season run', async () => {
-      const budget = (await t.http.post(`/api/farms/${farmId}/season-budget`).set(bearer(grower)).send(SEASON).expect(200)).body;
-      expect(budget).toMatchObject({ farmId, ...SEASON, seasonFrom: 'request', climateSource: 'normals', costComplete: true });
+      const budget = (
+        await t.http.post(`/api/farms/${farmId}/season-budget`).set(bearer(grower)).send(SEASON).expect(200)
+      ).body;
+      expect(budget).toMatchObject({
+        farmId,
+        ...SEASON,
+        seasonFrom: 'request',
+        climateSource: 'normals',
+        costComplete: true,
+      });
       expect(budget.houses).toHaveLength(3);
       for (const house of budget.houses) {
         const own = (await season({ id: house.houseId, name: house.name }, SEASON).expect(200)).body;
@@ -439,7 +566,11 @@ describe('season, calendars, fuel prices and the farm budget (e2e)', () => {
       const gas = budget.byFuel.find((f: { fuelId: string }) => f.fuelId === 'natural-gas');
       expect(gas.houseCount).toBe(2);
       expect(gas.fuelQuantityUs).toBeCloseTo(
-        sum(budget.houses.filter((h: { fuelId: string }) => h.fuelId === 'natural-gas').map((h: { fuelQuantityUs: number }) => h.fuelQuantityUs)),
+        sum(
+          budget.houses
+            .filter((h: { fuelId: string }) => h.fuelId === 'natural-gas')
+            .map((h: { fuelQuantityUs: number }) => h.fuelQuantityUs),
+        ),
         6,
       );
       expect(sum(budget.byFuel.map((f: { cost: number }) => f.cost))).toBeCloseTo(budget.totalCost, 6);
@@ -449,7 +580,9 @@ describe('season, calendars, fuel prices and the farm budget (e2e)', () => {
     });
 
     it('exports CSV in US units with the units in the header', async () => {
-      const budget = (await t.http.post(`/api/farms/${farmId}/season-budget`).set(bearer(grower)).send(SEASON).expect(200)).body;
+      const budget = (
+        await t.http.post(`/api/farms/${farmId}/season-budget`).set(bearer(grower)).send(SEASON).expect(200)
+      ).body;
       const res = await t.http
         .get(`/api/farms/${farmId}/season-budget.csv`)
         .query({ units: 'us', ...SEASON })
@@ -478,7 +611,11 @@ describe('season, calendars, fuel prices and the farm budget (e2e)', () => {
     });
 
     it('exports CSV in SI units by default', async () => {
-      const res = await t.http.get(`/api/farms/${farmId}/season-budget.csv`).query(SEASON).set(bearer(grower)).expect(200);
+      const res = await t.http
+        .get(`/api/farms/${farmId}/season-budget.csv`)
+        .query(SEASON)
+        .set(bearer(grower))
+        .expect(200);
       const header = res.text.split('\r\n')[0];
       expect(header).toContain('Heat delivered (kWh)');
       expect(header).toContain('(L)');

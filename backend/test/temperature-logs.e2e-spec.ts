@@ -1,4 +1,4 @@
-import { TEMPERATURE_LOG_MAX_BYTES } from '../src/engine/climate/temperature-log';
+import { TEMPERATURE_LOG_MAX_BYTES } from '../src/temperature-logs/csv/temperature-log-csv';
 import { dailyMinMaxCsv, hourlyCsv, HOURLY_MAPPING } from './temperature-csv';
 import { bearer, createTestApp, signIn, type TestApp } from './test-app';
 
@@ -21,19 +21,26 @@ describe('temperature logs (e2e)', () => {
   });
   afterAll(() => t.close());
 
-  const listCount = async () => (await t.http.get(`/api/farms/${farmId}/temperature-logs`).set(bearer(grower)).expect(200)).body.length as number;
+  const listCount = async () =>
+    (await t.http.get(`/api/farms/${farmId}/temperature-logs`).set(bearer(grower)).expect(200)).body.length as number;
   const upload = (csv: string | Buffer, mapping: object | string, name = 'Test log') =>
     t.http
       .post(`/api/farms/${farmId}/temperature-logs`)
       .set(bearer(grower))
       .field('name', name)
       .field('mapping', typeof mapping === 'string' ? mapping : JSON.stringify(mapping))
-      .attach('file', Buffer.isBuffer(csv) ? csv : Buffer.from(csv, 'utf8'), { filename: 'log.csv', contentType: 'text/csv' });
+      .attach('file', Buffer.isBuffer(csv) ? csv : Buffer.from(csv, 'utf8'), {
+        filename: 'log.csv',
+        contentType: 'text/csv',
+      });
   const inspect = (csv: string | Buffer) =>
     t.http
       .post(`/api/farms/${farmId}/temperature-logs/inspect`)
       .set(bearer(grower))
-      .attach('file', Buffer.isBuffer(csv) ? csv : Buffer.from(csv, 'utf8'), { filename: 'log.csv', contentType: 'text/csv' });
+      .attach('file', Buffer.isBuffer(csv) ? csv : Buffer.from(csv, 'utf8'), {
+        filename: 'log.csv',
+        contentType: 'text/csv',
+      });
 
   it('inspects an hourly file and proposes its columns without storing anything', async () => {
     const before = await listCount();
@@ -43,13 +50,25 @@ describe('temperature logs (e2e)', () => {
     expect(res.body.headers).toEqual(['Time', 'Outdoor temp (°C)', 'RH (%)']);
     expect(res.body.sampleRows[0]).toEqual(['2027-01-01 00:00', '-13.5', '80']); // −10 − 5·cos(−π/4)
     expect(res.body.dataRowCount).toBe(72);
-    expect(res.body.proposal).toMatchObject({ timestampColumn: 'Time', temperatureColumn: 'Outdoor temp (°C)', unit: 'C', resolution: 'hourly' });
+    expect(res.body.proposal).toMatchObject({
+      timestampColumn: 'Time',
+      temperatureColumn: 'Outdoor temp (°C)',
+      unit: 'C',
+      resolution: 'hourly',
+    });
     expect(await listCount()).toBe(before);
   });
 
   it('stores an hourly log read with the confirmed mapping and shows it day by day', async () => {
     const res = await upload(hourlyCsv('2027-01-01', 14), HOURLY_MAPPING, 'North station, January').expect(201);
-    expect(res.body).toMatchObject({ name: 'North station, January', resolution: 'hourly', startDate: '2027-01-01', endDate: '2027-01-14', rowCount: 336, readingCount: 336 });
+    expect(res.body).toMatchObject({
+      name: 'North station, January',
+      resolution: 'hourly',
+      startDate: '2027-01-01',
+      endDate: '2027-01-14',
+      rowCount: 336,
+      readingCount: 336,
+    });
     const list = (await t.http.get(`/api/farms/${farmId}/temperature-logs`).set(bearer(adviser)).expect(200)).body;
     expect(list.map((log: { id: number }) => log.id)).toContain(res.body.id);
     expect(list[0]).not.toHaveProperty('readings');
@@ -71,10 +90,22 @@ describe('temperature logs (e2e)', () => {
   it('stores a daily min/max log with semicolons, day-first dates and decimal commas', async () => {
     const csv = dailyMinMaxCsv('2027-01-01', 31);
     const proposal = (await inspect(csv).expect(200)).body.proposal;
-    expect(proposal).toMatchObject({ timestampColumn: 'Datum', minColumn: 'Min °C', maxColumn: 'Max °C', resolution: 'daily', dateOrder: 'DMY', decimalComma: true });
+    expect(proposal).toMatchObject({
+      timestampColumn: 'Datum',
+      minColumn: 'Min °C',
+      maxColumn: 'Max °C',
+      resolution: 'daily',
+      dateOrder: 'DMY',
+      decimalComma: true,
+    });
     const { unitReason: _reason, dateOrderAmbiguous: _ambiguous, ...mapping } = proposal;
     const res = await upload(csv, mapping, 'Daily extremes').expect(201);
-    expect(res.body).toMatchObject({ resolution: 'daily', startDate: '2027-01-01', endDate: '2027-01-31', rowCount: 31 });
+    expect(res.body).toMatchObject({
+      resolution: 'daily',
+      startDate: '2027-01-01',
+      endDate: '2027-01-31',
+      rowCount: 31,
+    });
     const detail = (await t.http.get(`/api/temperature-logs/${res.body.id}`).set(bearer(grower)).expect(200)).body;
     expect(detail.days[0]).toMatchObject({ date: '2027-01-01', minC: -15, maxC: -6.5, readingCount: 1 });
     expect(detail.days[0].meanC).toBeCloseTo(-10.75, 5);
@@ -95,7 +126,9 @@ describe('temperature logs (e2e)', () => {
   });
 
   it('names a mapped column the file does not have', async () => {
-    const res = await upload(hourlyCsv('2027-01-01', 1), { ...HOURLY_MAPPING, temperatureColumn: 'Outside' }).expect(422);
+    const res = await upload(hourlyCsv('2027-01-01', 1), { ...HOURLY_MAPPING, temperatureColumn: 'Outside' }).expect(
+      422,
+    );
     expect(res.body.details[0].field).toBe('line 1');
     expect(res.body.details[0].message).toMatch(/'Outside' is not in the file/);
   });
@@ -108,7 +141,11 @@ describe('temperature logs (e2e)', () => {
   });
 
   it('refuses a file that is not UTF-8 (Latin-1 é) with a clear 422', async () => {
-    const latin1 = Buffer.concat([Buffer.from('Time,Temp', 'ascii'), Buffer.from([0xe9]), Buffer.from('rature\n2027-01-01 00:00,-5.0\n', 'ascii')]);
+    const latin1 = Buffer.concat([
+      Buffer.from('Time,Temp', 'ascii'),
+      Buffer.from([0xe9]),
+      Buffer.from('rature\n2027-01-01 00:00,-5.0\n', 'ascii'),
+    ]);
     const res = await inspect(latin1).expect(422);
     expect(res.body.message).toMatch(/not UTF-8/);
     expect(res.body.details[0]).toMatchObject({ field: 'line 1' });

@@ -17,7 +17,10 @@ export interface TestApp {
  * demo scenario, exactly as main.ts configures it.
  */
 export async function createTestApp(env: Record<string, string> = {}): Promise<TestApp> {
-  const databaseFile = join(tmpdir(), `thermbay-e2e-${process.pid}-${Date.now()}-${Math.random().toString(36).slice(2)}.sqlite`);
+  const databaseFile = join(
+    tmpdir(),
+    `thermbay-e2e-${process.pid}-${Date.now()}-${Math.random().toString(36).slice(2)}.sqlite`,
+  );
   Object.assign(process.env, {
     NODE_ENV: 'test',
     DATABASE_FILE: databaseFile,

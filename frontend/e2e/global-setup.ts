@@ -35,13 +35,18 @@ export default async function setup(): Promise<() => Promise<void>> {
   }
   const backendMain = join(BACKEND_DIR, 'dist', 'main.js');
   if (!existsSync(backendMain)) {
-    throw new Error(`${backendMain} is missing: run \`npm run build -w backend\` first.`);
+    throw new Error(`${backendMain} is missing: run \`npm run build -w @thermbay/backend\` first.`);
   }
   if (!existsSync(join(FRONTEND_DIR, 'dist', 'index.html'))) {
-    throw new Error('frontend/dist is missing: run `npm run build -w frontend` first.');
+    throw new Error('frontend/dist is missing: run `npm run build -w @thermbay/frontend` first.');
   }
 
-  if (await fetch(`${E2E_BASE_URL}/api/health`).then(() => true, () => false)) {
+  if (
+    await fetch(`${E2E_BASE_URL}/api/health`).then(
+      () => true,
+      () => false,
+    )
+  ) {
     throw new Error(`port ${E2E_PORT} is already answering; stop that server or set E2E_PORT to a free port`);
   }
 

@@ -136,7 +136,9 @@ describe('result panels on the house page', () => {
     expect(coolingText).not.toContain('{{');
 
     await useUnitSystem(page, 'si');
-    await expect.poll(async () => (await heatingCautions.textContent()) ?? '').toMatch(/Installed output [\d,.]+ kW is/);
+    await expect
+      .poll(async () => (await heatingCautions.textContent()) ?? '')
+      .toMatch(/Installed output [\d,.]+ kW is/);
     expect(pageErrors).toEqual([]);
     await page.context().close();
   });

@@ -81,7 +81,10 @@ describe('farm climate, temperature logs and the season', () => {
     expect(await januaryMin.inputValue()).toBe(changed);
     expect(await note.inputValue()).toBe('Edited in a browser test');
     // The chart of the monthly normals is drawn beside the table.
-    await page.getByRole('img', { name: /monthly mean daily minimum and maximum/ }).locator('canvas').waitFor();
+    await page
+      .getByRole('img', { name: /monthly mean daily minimum and maximum/ })
+      .locator('canvas')
+      .waitFor();
     await screenshot(page, 'farm-climate.png');
 
     // Put the demo climate back for the other tests.
@@ -111,7 +114,10 @@ describe('farm climate, temperature logs and the season', () => {
     await row.waitFor();
     expect(await row.textContent()).toContain('2026-01-10');
     expect(await row.textContent()).toContain('2026-01-12');
-    await page.getByRole('img', { name: /daily temperatures of north-station-jan/ }).locator('canvas').waitFor();
+    await page
+      .getByRole('img', { name: /daily temperatures of north-station-jan/ })
+      .locator('canvas')
+      .waitFor();
     await screenshot(page, 'temperature-logs.png');
     expect(pageErrors).toEqual([]);
     await page.context().close();
@@ -155,7 +161,10 @@ describe('farm climate, temperature logs and the season', () => {
     const perHouse = page.getByRole('table', { name: 'Season fuel budget per house' });
     expect(await perHouse.textContent()).toMatch(/US gal|therm/);
     expect(await perHouse.textContent()).toContain('MMBtu');
-    await page.getByRole('img', { name: /fuel cost and heat per month/ }).locator('canvas').waitFor();
+    await page
+      .getByRole('img', { name: /fuel cost and heat per month/ })
+      .locator('canvas')
+      .waitFor();
     // Fuel-fired heat carries the safety cautions.
     expect(await page.getByRole('note').textContent()).toMatch(/carbon monoxide/);
 
@@ -199,7 +208,10 @@ describe('farm climate, temperature logs and the season', () => {
     await page.getByRole('link', { name: /Heating season, fuel budget and measures/ }).click();
     await page.waitForURL(/\/houses\/\d+\/season$/);
 
-    await page.getByRole('img', { name: 'Monthly chart of fuel and heat for the season' }).locator('canvas').waitFor({ timeout: 60_000 });
+    await page
+      .getByRole('img', { name: 'Monthly chart of fuel and heat for the season' })
+      .locator('canvas')
+      .waitFor({ timeout: 60_000 });
     await page.getByRole('heading', { name: 'Degree-day cross-check' }).waitFor();
     const difference = await page.getByTestId('degree-day-difference').textContent();
     expect(difference).toMatch(/hour-by-hour estimate (is \d+ % (lower|higher)|and the degree-day estimate agree)/);
@@ -220,7 +232,10 @@ describe('farm climate, temperature logs and the season', () => {
     await page.goBack();
     await page.waitForURL(/\/houses\/\d+$/);
     await page.goBack();
-    await page.getByRole('grid', { name: 'Houses' }).getByRole('link', { name: /House B/ }).click();
+    await page
+      .getByRole('grid', { name: 'Houses' })
+      .getByRole('link', { name: /House B/ })
+      .click();
     await page.waitForURL(/\/houses\/\d+$/);
     await page.getByRole('link', { name: /Heating season, fuel budget and measures/ }).click();
     const warning = page.getByTestId('season-below-setpoint');

@@ -1,5 +1,5 @@
 /**
- * Speed of the season engine (run: npm run bench -w backend). Prints medians; no assertions.
+ * Speed of the season engine (run: npm run bench -w @thermbay/backend). Prints medians; no assertions.
  *  1. one hourly-year simulation of a demo-like house (the loop measures and comparisons re-run),
  *  2. a bare loop doing the same per-hour arithmetic over 8,760 precomputed hours, and the ratio 1 ÷ 2,
  *  3. computing a site's sun positions and clear-sky irradiance for a year (done once per site-year),
@@ -7,10 +7,10 @@
  *     simulation and the four extra runs of the degree-day comparison).
  */
 import { loadReferenceData } from '../reference-data/load-reference-data';
-import { baseVariant, estimateSeason, prepareSeason, variantParameters } from '../engine/estimate-season';
-import { demoSeasonInput } from '../engine/season/demo-season';
-import { simulateSeason } from '../engine/season/season-simulation';
-import { precomputeSunHours, SunCache } from '../engine/season/sun-hours';
+import { baseVariant, estimateSeason, prepareSeason, variantParameters } from '@thermbay/engine/estimate-season';
+import { demoSeasonInput } from '@thermbay/engine/season/demo-season';
+import { simulateSeason } from '@thermbay/engine/season/season-simulation';
+import { precomputeSunHours, SunCache } from '@thermbay/engine/season/sun-hours';
 
 /** Median time of one call, timing batches of `batch` calls to stay well above the timer's resolution. */
 function medianMs(runs: number, work: () => number, batch = 1): { medianMs: number; sink: number } {
@@ -72,7 +72,10 @@ function main(): void {
   }
   const bare = medianMs(201, bareLoop, 20);
   const simulated = medianMs(201, simulation, 20);
-  const sun = medianMs(9, () => precomputeSunHours({ latitudeDeg: 42, longitudeDeg: -72.5, utcOffsetHours: -5 }, 2026, ref).hourCount);
+  const sun = medianMs(
+    9,
+    () => precomputeSunHours({ latitudeDeg: 42, longitudeDeg: -72.5, utcOffsetHours: -5 }, 2026, ref).hourCount,
+  );
   estimateSeason(input, ref, sunCache);
   const whole = medianMs(51, () => estimateSeason(input, ref, sunCache).total.energyKWh);
 

@@ -18,8 +18,14 @@ export class ClimateController {
 
   @Put()
   @ApiOkResponse({ type: FarmClimateDto })
-  @ApiUnprocessableEntityResponse({ description: 'physically impossible climate (e.g. minimum above maximum), field named' })
-  put(@CurrentUser() me: AuthenticatedUser, @Param('farmId', ParseIntPipe) farmId: number, @Body() body: SiteClimateDto): Promise<FarmClimateDto> {
+  @ApiUnprocessableEntityResponse({
+    description: 'physically impossible climate (e.g. minimum above maximum), field named',
+  })
+  put(
+    @CurrentUser() me: AuthenticatedUser,
+    @Param('farmId', ParseIntPipe) farmId: number,
+    @Body() body: SiteClimateDto,
+  ): Promise<FarmClimateDto> {
     return this.climate.put(me, farmId, body);
   }
 }

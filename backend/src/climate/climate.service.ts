@@ -1,7 +1,7 @@
 import { Injectable } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
 import type { AuthenticatedUser } from '../common/decorators/current-user.decorator';
-import { validateSiteClimate } from '../engine/climate/site-climate';
+import { validateSiteClimate } from '@thermbay/engine/climate/site-climate';
 import { FarmAccessService } from '../farms/farm-access.service';
 import type { FarmClimateDto, SiteClimateDto } from './dto/climate.dto';
 import { FarmClimate } from './models/farm-climate.model';
@@ -37,7 +37,10 @@ export class ClimateService {
 
   async put(user: AuthenticatedUser, farmId: number, body: SiteClimateDto): Promise<FarmClimateDto> {
     await this.access.require(user, farmId, 'house:write');
-    validateSiteClimate({ ...body, monthly: body.monthly.map((m) => ({ ...m, clearness: m.clearness ?? undefined })) }, 'climate');
+    validateSiteClimate(
+      { ...body, monthly: body.monthly.map((m) => ({ ...m, clearness: m.clearness ?? undefined })) },
+      'climate',
+    );
     const values = { ...body, sourceNote: body.sourceNote ?? null, farmId };
     const existing = await this.climates.findOne({ where: { farmId } });
     const row = existing ? await existing.update(values) : await this.climates.create(values);

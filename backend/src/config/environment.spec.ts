@@ -15,7 +15,9 @@ describe('validateEnvironment', () => {
 
   it('names the variable that is wrong', () => {
     expect(() => validateEnvironment({ NODE_ENV: 'test', PORT: 'eighty' })).toThrow(/PORT must be a whole number/);
-    expect(() => validateEnvironment({ NODE_ENV: 'test', DEMO_SEED: 'maybe' })).toThrow(/DEMO_SEED must be true or false/);
+    expect(() => validateEnvironment({ NODE_ENV: 'test', DEMO_SEED: 'maybe' })).toThrow(
+      /DEMO_SEED must be true or false/,
+    );
     expect(() => validateEnvironment({ NODE_ENV: 'staging' })).toThrow(/NODE_ENV must be/);
     expect(() => validateEnvironment({ NODE_ENV: 'test', JWT_SECRET: 'short' })).toThrow(/at least 16/);
   });

@@ -59,9 +59,21 @@ export function validateEnvironment(raw: Record<string, unknown>): Environment {
     PORT: parseInteger('PORT', env.PORT, 3000, 1, 65535),
     DATABASE_FILE: databaseFile,
     JWT_SECRET: jwtSecret,
-    JWT_EXPIRES_IN_SECONDS: parseInteger('JWT_EXPIRES_IN_SECONDS', env.JWT_EXPIRES_IN_SECONDS, 12 * 3600, 60, 30 * 24 * 3600),
+    JWT_EXPIRES_IN_SECONDS: parseInteger(
+      'JWT_EXPIRES_IN_SECONDS',
+      env.JWT_EXPIRES_IN_SECONDS,
+      12 * 3600,
+      60,
+      30 * 24 * 3600,
+    ),
     DEMO_SEED: parseBoolean('DEMO_SEED', env.DEMO_SEED, nodeEnv !== 'production'),
-    LOGIN_RATE_LIMIT_PER_MINUTE: parseInteger('LOGIN_RATE_LIMIT_PER_MINUTE', env.LOGIN_RATE_LIMIT_PER_MINUTE, 10, 1, 10000),
+    LOGIN_RATE_LIMIT_PER_MINUTE: parseInteger(
+      'LOGIN_RATE_LIMIT_PER_MINUTE',
+      env.LOGIN_RATE_LIMIT_PER_MINUTE,
+      10,
+      1,
+      10000,
+    ),
     FRONTEND_DIST: env.FRONTEND_DIST === '' ? null : (env.FRONTEND_DIST ?? null),
   };
 }

@@ -1,4 +1,4 @@
-import { referenceRow, type ReferenceData, type ReferenceRow } from '../engine/reference-data.types';
+import { referenceRow, type ReferenceData, type ReferenceRow } from '@thermbay/engine/reference-data.types';
 
 interface DesignDateRow extends ReferenceRow {
   monthDayNorth: string;
@@ -22,7 +22,9 @@ export function yearAtFarm(now: Date, timeZone: string): number {
 export function defaultCoolingDesignDate(latitudeDeg: number, now: Date, timeZone: string, ref: ReferenceData): string {
   const row = referenceRow<DesignDateRow>(ref, 'estimate-defaults', 'cooling-design-date');
   if (!row || typeof row.monthDayNorth !== 'string' || typeof row.monthDaySouth !== 'string') {
-    throw new Error('reference-data/estimate-defaults.json needs a row cooling-design-date with monthDayNorth and monthDaySouth');
+    throw new Error(
+      'reference-data/estimate-defaults.json needs a row cooling-design-date with monthDayNorth and monthDaySouth',
+    );
   }
   const monthDay = latitudeDeg >= 0 ? row.monthDayNorth : row.monthDaySouth;
   return `${yearAtFarm(now, timeZone)}-${monthDay}`;

@@ -16,7 +16,8 @@ import { HeatingEstimateRequestDto, HouseHeatingEstimateRequestDto } from './dto
 import { HeatingEstimateDto, HouseHeatingEstimateDto } from './dto/heating-result.dto';
 import { EstimatesService } from './estimates.service';
 
-const ENGINE_422 = 'the engine cannot compute with the input (e.g. ridge below eave, unknown reference id); field named';
+const ENGINE_422 =
+  'the engine cannot compute with the input (e.g. ridge below eave, unknown reference id); field named';
 
 /** Estimates compute and store nothing, so they answer 200, not 201. */
 @ApiTags('estimates')
@@ -47,11 +48,16 @@ export class EstimatesController {
 
   @Post('houses/:houseId/estimate')
   @HttpCode(200)
-  @ApiOperation({ summary: "Heating estimate for a stored house; unstated conditions come from the farm's climate, the farm, the house and reference data" })
+  @ApiOperation({
+    summary:
+      "Heating estimate for a stored house; unstated conditions come from the farm's climate, the farm, the house and reference data",
+  })
   @ApiOkResponse({ type: HouseHeatingEstimateDto })
   @ApiForbiddenResponse({ description: 'role lacks estimate:run' })
   @ApiNotFoundResponse({ description: 'no such house, or not a member of its farm' })
-  @ApiUnprocessableEntityResponse({ description: `${ENGINE_422}; also when the farm has no climate and no designOutdoorC is given` })
+  @ApiUnprocessableEntityResponse({
+    description: `${ENGINE_422}; also when the farm has no climate and no designOutdoorC is given`,
+  })
   heatingForHouse(
     @CurrentUser() me: AuthenticatedUser,
     @Param('houseId', ParseIntPipe) houseId: number,
@@ -62,11 +68,16 @@ export class EstimatesController {
 
   @Post('houses/:houseId/cooling')
   @HttpCode(200)
-  @ApiOperation({ summary: "Cooling estimate for a stored house; unstated conditions come from the farm, its climate and reference data" })
+  @ApiOperation({
+    summary:
+      'Cooling estimate for a stored house; unstated conditions come from the farm, its climate and reference data',
+  })
   @ApiOkResponse({ type: HouseCoolingEstimateDto })
   @ApiForbiddenResponse({ description: 'role lacks estimate:run' })
   @ApiNotFoundResponse({ description: 'no such house, or not a member of its farm' })
-  @ApiUnprocessableEntityResponse({ description: `${ENGINE_422}; also when the farm has no climate and the summer design values are not given` })
+  @ApiUnprocessableEntityResponse({
+    description: `${ENGINE_422}; also when the farm has no climate and the summer design values are not given`,
+  })
   coolingForHouse(
     @CurrentUser() me: AuthenticatedUser,
     @Param('houseId', ParseIntPipe) houseId: number,

@@ -3,11 +3,11 @@ import { InjectModel } from '@nestjs/sequelize';
 import { ClimateService } from '../climate/climate.service';
 import type { SiteClimateDto } from '../climate/dto/climate.dto';
 import type { AuthenticatedUser } from '../common/decorators/current-user.decorator';
-import { estimateCooling, type CoolingConditions } from '../engine/estimate-cooling';
-import { estimateHeating, type HeatingConditions } from '../engine/estimate-heating';
-import { EngineInputError } from '../engine/errors';
-import type { HouseSpec } from '../engine/house.types';
-import { referenceRow, type ReferenceRow } from '../engine/reference-data.types';
+import { estimateCooling, type CoolingConditions } from '@thermbay/engine/estimate-cooling';
+import { estimateHeating, type HeatingConditions } from '@thermbay/engine/estimate-heating';
+import { EngineInputError } from '@thermbay/engine/errors';
+import type { HouseSpec } from '@thermbay/engine/house.types';
+import { referenceRow, type ReferenceRow } from '@thermbay/engine/reference-data.types';
 import { Farm } from '../farms/models/farm.model';
 import { houseToSpec } from '../houses/house.mapper';
 import { HousesService } from '../houses/houses.service';
@@ -101,19 +101,29 @@ export class EstimatesService {
     const house = houseToSpec(stored);
     const siteUsed = { latitudeDeg: farm.latitudeDeg, longitudeDeg: farm.longitudeDeg, elevationM: farm.elevationM };
 
-    const fromClimate = (field: 'summerDesignC' | 'dailyRangeK' | 'summerDesignWetBulbC', climateKey: keyof SiteClimateDto): number => {
+    const fromClimate = (
+      field: 'summerDesignC' | 'dailyRangeK' | 'summerDesignWetBulbC',
+      climateKey: keyof SiteClimateDto,
+    ): number => {
       const value = given[field] ?? (climate?.[climateKey] as number | undefined);
-      if (value === undefined) throw new EngineInputError(`conditions.${field}`, `${ENTER_CLIMATE} conditions.${field}`);
+      if (value === undefined)
+        throw new EngineInputError(`conditions.${field}`, `${ENTER_CLIMATE} conditions.${field}`);
       return value;
     };
     const conditionsUsed: CoolingConditions = {
-      designDate: given.designDate ?? defaultCoolingDesignDate(farm.latitudeDeg, now, farm.timeZone, this.reference.data),
+      designDate:
+        given.designDate ?? defaultCoolingDesignDate(farm.latitudeDeg, now, farm.timeZone, this.reference.data),
       summerDesignC: fromClimate('summerDesignC', 'summerDesignC'),
       dailyRangeK: fromClimate('dailyRangeK', 'summerDailyRangeK'),
       summerDesignWetBulbC: fromClimate('summerDesignWetBulbC', 'summerDesignWetBulbC'),
     };
     // optional conditions: passed on only when stated, so the engine's sourced defaults apply otherwise
-    for (const key of ['allowedTemperatureRiseK', 'peakInteriorLightLux', 'padToFanDistanceM', 'transpirationFraction'] as const) {
+    for (const key of [
+      'allowedTemperatureRiseK',
+      'peakInteriorLightLux',
+      'padToFanDistanceM',
+      'transpirationFraction',
+    ] as const) {
       if (given[key] !== undefined) conditionsUsed[key] = given[key];
     }
     if (given.evaporativePad !== undefined) conditionsUsed.evaporativePad = given.evaporativePad;

@@ -2,7 +2,15 @@ import { Body, Controller, Delete, Get, HttpCode, Param, ParseIntPipe, Patch, Po
 import { ApiBearerAuth, ApiCreatedResponse, ApiNoContentResponse, ApiOkResponse, ApiTags } from '@nestjs/swagger';
 import { CurrentUser, type AuthenticatedUser } from '../common/decorators/current-user.decorator';
 import { ROLE_PERMISSIONS } from '../common/permissions';
-import { AddMemberDto, CreateFarmDto, FarmDto, MemberDto, PermissionsDto, UpdateFarmDto, UpdateMemberDto } from './dto/farm.dto';
+import {
+  AddMemberDto,
+  CreateFarmDto,
+  FarmDto,
+  MemberDto,
+  PermissionsDto,
+  UpdateFarmDto,
+  UpdateMemberDto,
+} from './dto/farm.dto';
 import { FarmsService } from './farms.service';
 
 @ApiTags('farms')
@@ -44,7 +52,11 @@ export class FarmsController {
 
   @Patch('farms/:farmId')
   @ApiOkResponse({ type: FarmDto })
-  update(@CurrentUser() me: AuthenticatedUser, @Param('farmId', ParseIntPipe) farmId: number, @Body() body: UpdateFarmDto): Promise<FarmDto> {
+  update(
+    @CurrentUser() me: AuthenticatedUser,
+    @Param('farmId', ParseIntPipe) farmId: number,
+    @Body() body: UpdateFarmDto,
+  ): Promise<FarmDto> {
     return this.farms.update(me, farmId, body);
   }
 
@@ -63,7 +75,11 @@ export class FarmsController {
 
   @Post('farms/:farmId/members')
   @ApiCreatedResponse({ type: MemberDto })
-  addMember(@CurrentUser() me: AuthenticatedUser, @Param('farmId', ParseIntPipe) farmId: number, @Body() body: AddMemberDto): Promise<MemberDto> {
+  addMember(
+    @CurrentUser() me: AuthenticatedUser,
+    @Param('farmId', ParseIntPipe) farmId: number,
+    @Body() body: AddMemberDto,
+  ): Promise<MemberDto> {
     return this.farms.addMember(me, farmId, body);
   }
 

@@ -39,7 +39,10 @@ export class FarmsService {
   async create(user: AuthenticatedUser, body: CreateFarmDto): Promise<FarmDto> {
     return this.sequelize.transaction(async (transaction) => {
       const farm = await this.farms.create({ ...body }, { transaction });
-      const membership = await this.memberships.create({ farmId: farm.id, userId: user.id, role: 'owner' }, { transaction });
+      const membership = await this.memberships.create(
+        { farmId: farm.id, userId: user.id, role: 'owner' },
+        { transaction },
+      );
       return this.toDto(farm, membership, 0);
     });
   }
@@ -76,7 +79,12 @@ export class FarmsService {
     return { userId: invitee.id, email: invitee.email, name: invitee.name, role: membership.role };
   }
 
-  async updateMember(user: AuthenticatedUser, farmId: number, userId: number, body: UpdateMemberDto): Promise<MemberDto> {
+  async updateMember(
+    user: AuthenticatedUser,
+    farmId: number,
+    userId: number,
+    body: UpdateMemberDto,
+  ): Promise<MemberDto> {
     await this.access.require(user, farmId, 'members:manage');
     const membership = await this.memberships.findOne({ where: { farmId, userId }, include: [User] });
     if (!membership) throw new NotFoundException('No such member');

@@ -1,4 +1,4 @@
-import type { HouseSpec } from '../engine/house.types';
+import type { HouseSpec } from '@thermbay/engine/house.types';
 import type { HouseDto } from './dto/house.dto';
 import type { House } from './models/house.model';
 

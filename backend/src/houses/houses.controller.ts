@@ -1,5 +1,12 @@
 import { Body, Controller, Delete, Get, HttpCode, Param, ParseIntPipe, Patch, Post } from '@nestjs/common';
-import { ApiBearerAuth, ApiCreatedResponse, ApiNoContentResponse, ApiOkResponse, ApiTags, ApiUnprocessableEntityResponse } from '@nestjs/swagger';
+import {
+  ApiBearerAuth,
+  ApiCreatedResponse,
+  ApiNoContentResponse,
+  ApiOkResponse,
+  ApiTags,
+  ApiUnprocessableEntityResponse,
+} from '@nestjs/swagger';
 import { CurrentUser, type AuthenticatedUser } from '../common/decorators/current-user.decorator';
 import { CreateHouseDto, HouseDto, UpdateHouseDto } from './dto/house.dto';
 import { HousesService } from './houses.service';
@@ -18,8 +25,14 @@ export class HousesController {
 
   @Post('farms/:farmId/houses')
   @ApiCreatedResponse({ type: HouseDto })
-  @ApiUnprocessableEntityResponse({ description: 'dimensions the engine cannot compute with, or an unknown reference id' })
-  create(@CurrentUser() me: AuthenticatedUser, @Param('farmId', ParseIntPipe) farmId: number, @Body() body: CreateHouseDto): Promise<HouseDto> {
+  @ApiUnprocessableEntityResponse({
+    description: 'dimensions the engine cannot compute with, or an unknown reference id',
+  })
+  create(
+    @CurrentUser() me: AuthenticatedUser,
+    @Param('farmId', ParseIntPipe) farmId: number,
+    @Body() body: CreateHouseDto,
+  ): Promise<HouseDto> {
     return this.houses.create(me, farmId, body);
   }
 
@@ -31,7 +44,11 @@ export class HousesController {
 
   @Patch('houses/:houseId')
   @ApiOkResponse({ type: HouseDto })
-  update(@CurrentUser() me: AuthenticatedUser, @Param('houseId', ParseIntPipe) houseId: number, @Body() body: UpdateHouseDto): Promise<HouseDto> {
+  update(
+    @CurrentUser() me: AuthenticatedUser,
+    @Param('houseId', ParseIntPipe) houseId: number,
+    @Body() body: UpdateHouseDto,
+  ): Promise<HouseDto> {
     return this.houses.update(me, houseId, body);
   }
 

@@ -1,6 +1,6 @@
 import { Controller, Get } from '@nestjs/common';
 import { ApiBearerAuth, ApiOkResponse, ApiTags } from '@nestjs/swagger';
-import type { ReferenceData } from '../engine/reference-data.types';
+import type { ReferenceData } from '@thermbay/engine/reference-data.types';
 import { ReferenceDataService } from './reference-data.service';
 
 @ApiTags('reference-data')
@@ -11,7 +11,8 @@ export class ReferenceDataController {
 
   @Get()
   @ApiOkResponse({
-    description: 'Every handbook table by name: { title, description, rows: [{ id, label, source, confidence, ...values }] }',
+    description:
+      'Every handbook table by name: { title, description, rows: [{ id, label, source, confidence, ...values }] }',
     schema: {
       type: 'object',
       additionalProperties: {
@@ -29,7 +30,10 @@ export class ReferenceDataController {
                 id: { type: 'string' },
                 label: { type: 'string' },
                 source: { type: 'string' },
-                confidence: { type: 'string', enum: ['verified', 'verified-secondary', 'derived', 'memory', 'common-practice'] },
+                confidence: {
+                  type: 'string',
+                  enum: ['verified', 'verified-secondary', 'derived', 'memory', 'common-practice'],
+                },
                 notes: { type: 'string' },
               },
               additionalProperties: true,

@@ -1,7 +1,7 @@
 import { Injectable } from '@nestjs/common';
-import { EngineInputError } from '../engine/errors';
-import type { HouseSpec } from '../engine/house.types';
-import { referenceRow, type ReferenceData } from '../engine/reference-data.types';
+import { EngineInputError } from '@thermbay/engine/errors';
+import type { HouseSpec } from '@thermbay/engine/house.types';
+import { referenceRow, type ReferenceData } from '@thermbay/engine/reference-data.types';
 import { loadReferenceData } from './load-reference-data';
 
 /** The handbook tables, read once at boot (a table without provenance stops the app). */
@@ -14,7 +14,10 @@ export class ReferenceDataService {
     const check = (table: string, field: string, id: string | null | undefined) => {
       if (id === undefined || id === null) return;
       if (!referenceRow(this.data, table, id)) {
-        throw new EngineInputError(`${prefix}${field}`, `${prefix}${field}: "${id}" is not in reference-data/${table}.json`);
+        throw new EngineInputError(
+          `${prefix}${field}`,
+          `${prefix}${field}: "${id}" is not in reference-data/${table}.json`,
+        );
       }
     };
     if (house.coverings) {

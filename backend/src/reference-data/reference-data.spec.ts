@@ -1,8 +1,10 @@
 import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import type { ReferenceTable } from '../engine/reference-data.types';
-import { CONFIDENCE_MARKS, DEFAULT_REFERENCE_DATA_DIR, loadReferenceData, provenanceProblems } from './load-reference-data';
+import type { ReferenceTable } from '@thermbay/engine/reference-data.types';
+import { CONFIDENCE_LEVELS } from '@thermbay/engine/vocabulary';
+import { provenanceProblems } from '@thermbay/engine/reference-data.types';
+import { DEFAULT_REFERENCE_DATA_DIR, loadReferenceData } from './load-reference-data';
 
 describe('reference-data provenance', () => {
   const ref = loadReferenceData();
@@ -30,7 +32,7 @@ describe('reference-data provenance', () => {
       for (const row of table.rows) {
         expect(typeof row.id).toBe('string');
         expect(row.source.trim().length).toBeGreaterThanOrEqual(8);
-        expect(CONFIDENCE_MARKS).toContain(row.confidence);
+        expect(CONFIDENCE_LEVELS).toContain(row.confidence);
       }
     }
   });
@@ -60,7 +62,10 @@ describe('reference-data provenance', () => {
   it('refuses to load a folder holding a table with a row lacking provenance', () => {
     const dir = mkdtempSync(join(tmpdir(), 'thermbay-ref-'));
     try {
-      writeFileSync(join(dir, 'good.json'), JSON.stringify({ title: 'Good', rows: [{ id: 'a', source: 'A publication, table 1', confidence: 'derived' }] }));
+      writeFileSync(
+        join(dir, 'good.json'),
+        JSON.stringify({ title: 'Good', rows: [{ id: 'a', source: 'A publication, table 1', confidence: 'derived' }] }),
+      );
       expect(Object.keys(loadReferenceData(dir))).toEqual(['good']);
       writeFileSync(join(dir, 'bad.json'), JSON.stringify({ title: 'Bad', rows: [{ id: 'b', confidence: 'memory' }] }));
       expect(() => loadReferenceData(dir)).toThrow(/bad\.json.*no source/);

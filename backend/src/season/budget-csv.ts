@@ -1,4 +1,4 @@
-import { JOULES_PER_BTU, JOULES_PER_KWH } from '../engine/season/fuel';
+import { JOULES_PER_BTU, JOULES_PER_KWH } from '@thermbay/engine/season/fuel';
 import type { BudgetFuelTotalDto, SeasonBudgetDto } from './dto/season-budget.dto';
 
 export type CsvUnits = 'si' | 'us';

@@ -1,14 +1,18 @@
 import { Injectable } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
 import type { AuthenticatedUser } from '../common/decorators/current-user.decorator';
-import { validateCalendar } from '../engine/season/production-calendar';
+import { validateCalendar } from '@thermbay/engine/season/production-calendar';
 import { HousesService } from '../houses/houses.service';
 import type { ProductionCalendarDto, PutProductionCalendarDto } from './dto/calendar.dto';
 import { HouseCalendar, type StoredProductionPeriod } from './models/house-calendar.model';
 
 /** Keeps only the fields a period has (no undefined keys in the stored JSON). */
 function cleanPeriod(period: StoredProductionPeriod): StoredProductionPeriod {
-  const clean: StoredProductionPeriod = { startMonthDay: period.startMonthDay, endMonthDay: period.endMonthDay, mode: period.mode };
+  const clean: StoredProductionPeriod = {
+    startMonthDay: period.startMonthDay,
+    endMonthDay: period.endMonthDay,
+    mode: period.mode,
+  };
   if (period.dayHeatingC !== undefined && period.dayHeatingC !== null) clean.dayHeatingC = period.dayHeatingC;
   if (period.nightHeatingC !== undefined && period.nightHeatingC !== null) clean.nightHeatingC = period.nightHeatingC;
   if (period.label) clean.label = period.label;

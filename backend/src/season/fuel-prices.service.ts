@@ -2,8 +2,8 @@ import { Injectable } from '@nestjs/common';
 import { InjectConnection, InjectModel } from '@nestjs/sequelize';
 import { Sequelize } from 'sequelize-typescript';
 import type { AuthenticatedUser } from '../common/decorators/current-user.decorator';
-import { EngineInputError } from '../engine/errors';
-import { fuelRow, priceUnitLabel } from '../engine/season/fuel';
+import { EngineInputError } from '@thermbay/engine/errors';
+import { fuelRow, priceUnitLabel } from '@thermbay/engine/season/fuel';
 import { FarmAccessService } from '../farms/farm-access.service';
 import { ReferenceDataService } from '../reference-data/reference-data.service';
 import type { FarmFuelPricesDto, FuelPriceDto, PutFuelPricesDto } from './dto/fuel-price.dto';
@@ -32,14 +32,24 @@ export class FuelPricesService {
     const seen = new Set<string>();
     body.prices.forEach((price, index) => {
       fuelRow(this.reference.data, price.fuelId, `prices.${index}.fuelId`);
-      if (seen.has(price.fuelId)) throw new EngineInputError(`prices.${index}.fuelId`, `${price.fuelId} is listed twice; give one price per fuel`);
+      if (seen.has(price.fuelId))
+        throw new EngineInputError(
+          `prices.${index}.fuelId`,
+          `${price.fuelId} is listed twice; give one price per fuel`,
+        );
       seen.add(price.fuelId);
     });
     await this.sequelize.transaction(async (transaction) => {
       await this.prices.destroy({ where: { farmId }, transaction });
       for (const price of body.prices) {
         await this.prices.create(
-          { farmId, fuelId: price.fuelId, pricePerUnit: price.pricePerUnit, priceUnit: price.priceUnit, note: price.note ?? null },
+          {
+            farmId,
+            fuelId: price.fuelId,
+            pricePerUnit: price.pricePerUnit,
+            priceUnit: price.priceUnit,
+            note: price.note ?? null,
+          },
           { transaction },
         );
       }

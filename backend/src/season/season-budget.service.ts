@@ -1,8 +1,8 @@
 import { Injectable } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
 import type { AuthenticatedUser } from '../common/decorators/current-user.decorator';
-import { estimateSeason } from '../engine/estimate-season';
-import { fuelRow } from '../engine/season/fuel';
+import { estimateSeason } from '@thermbay/engine/estimate-season';
+import { fuelRow } from '@thermbay/engine/season/fuel';
 import { FarmAccessService } from '../farms/farm-access.service';
 import { houseToSpec } from '../houses/house.mapper';
 import { House } from '../houses/models/house.model';
@@ -33,7 +33,13 @@ export class SeasonBudgetService {
     const farm = await this.inputs.farm(farmId);
     const context = await this.inputs.farmContext(farm, request, new Date());
     const prices = await this.inputs.pricesOf(farmId);
-    const rows = await this.houses.findAll({ where: { farmId }, order: [['name', 'ASC'], ['id', 'ASC']] });
+    const rows = await this.houses.findAll({
+      where: { farmId },
+      order: [
+        ['name', 'ASC'],
+        ['id', 'ASC'],
+      ],
+    });
     const ref = this.reference.data;
 
     const houses: BudgetHouseDto[] = [];
@@ -43,7 +49,9 @@ export class SeasonBudgetService {
       const calendar = await this.inputs.calendarOf(row.id);
       const heater = house.heaters[0];
       if (!heater) {
-        houses.push(emptyHouse(row, calendar?.length ?? 0, 'the house has no heaters, so it burns no fuel in this budget'));
+        houses.push(
+          emptyHouse(row, calendar?.length ?? 0, 'the house has no heaters, so it burns no fuel in this budget'),
+        );
         continue;
       }
       const stored = prices.get(heater.fuelId);
@@ -54,7 +62,15 @@ export class SeasonBudgetService {
         : { fuelId: heater.fuelId, pricePerUnit: 0, priceUnit: 'si' as const };
       const estimate = withRequestFields(() =>
         estimateSeason(
-          { house, site: context.site, climate: context.climate, season: context.season, calendar, fuel: price, heaterEfficiency: heater.efficiency },
+          {
+            house,
+            site: context.site,
+            climate: context.climate,
+            season: context.season,
+            calendar,
+            fuel: price,
+            heaterEfficiency: heater.efficiency,
+          },
           ref,
           this.sun.cache,
         ),
@@ -91,7 +107,9 @@ export class SeasonBudgetService {
           unmetHeatKWh: month.unmetHeatKWh,
           hoursBelowSetpoint: month.hoursBelowSetpoint,
         })),
-        problem: stored ? null : `the farm has no price for ${fuel.label}: set it in the farm's fuel prices to include this house's cost`,
+        problem: stored
+          ? null
+          : `the farm has no price for ${fuel.label}: set it in the farm's fuel prices to include this house's cost`,
       });
     }
 
@@ -121,7 +139,14 @@ export class SeasonBudgetService {
       byFuel.set(house.fuelId, total);
       for (const month of house.monthly) {
         const key = `${month.year}-${month.month}`;
-        const entry = monthly.get(key) ?? { year: month.year, month: month.month, energyKWh: 0, fuelInputKWh: 0, cost: 0, byFuel: [] };
+        const entry = monthly.get(key) ?? {
+          year: month.year,
+          month: month.month,
+          energyKWh: 0,
+          fuelInputKWh: 0,
+          cost: 0,
+          byFuel: [],
+        };
         entry.energyKWh += month.energyKWh;
         entry.fuelInputKWh += month.fuelInputKWh;
         entry.cost += month.cost ?? 0;

@@ -1,13 +1,13 @@
 import { Injectable, NotFoundException } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
 import { ClimateService } from '../climate/climate.service';
-import type { LoggedClimateInput, SeasonSite } from '../engine/estimate-season';
-import { clearnessByMonth, type SiteClimate } from '../engine/climate/site-climate';
-import { EngineInputError } from '../engine/errors';
-import type { HouseSpec } from '../engine/house.types';
-import { fuelRow, type FuelPrice, type PriceUnit } from '../engine/season/fuel';
-import type { ProductionCalendar } from '../engine/season/production-calendar';
-import type { SeasonRange } from '../engine/season/season-hours';
+import type { LoggedClimateInput, SeasonSite } from '@thermbay/engine/estimate-season';
+import { clearnessByMonth, type SiteClimate } from '@thermbay/engine/climate/site-climate';
+import { EngineInputError } from '@thermbay/engine/errors';
+import type { HouseSpec } from '@thermbay/engine/house.types';
+import { fuelRow, type FuelPrice, type PriceUnit } from '@thermbay/engine/season/fuel';
+import type { ProductionCalendar } from '@thermbay/engine/season/production-calendar';
+import type { SeasonRange } from '@thermbay/engine/season/season-hours';
 import { Farm } from '../farms/models/farm.model';
 import { ReferenceDataService } from '../reference-data/reference-data.service';
 import type { TemperatureLog } from '../temperature-logs/models/temperature-log.model';
@@ -116,7 +116,10 @@ export class SeasonInputsService {
       throw new EngineInputError(missing, 'give both startDate and endDate, or neither for the default heating season');
     }
     const source = request.climateSource ?? 'normals';
-    const log = source === 'normals' ? null : await this.logs.findForFarm(farm.id, source.temperatureLogId, 'climateSource.temperatureLogId');
+    const log =
+      source === 'normals'
+        ? null
+        : await this.logs.findForFarm(farm.id, source.temperatureLogId, 'climateSource.temperatureLogId');
 
     let season: SeasonRange;
     let seasonFrom: SeasonFrom;
@@ -135,7 +138,10 @@ export class SeasonInputsService {
       latitudeDeg: farm.latitudeDeg,
       longitudeDeg: farm.longitudeDeg,
       elevationM: farm.elevationM,
-      utcOffsetHours: standardUtcOffsetHours(farm.timeZone, Number(season.startDate.slice(0, 4)) || today.getUTCFullYear()),
+      utcOffsetHours: standardUtcOffsetHours(
+        farm.timeZone,
+        Number(season.startDate.slice(0, 4)) || today.getUTCFullYear(),
+      ),
     };
 
     const stored = await this.climates.findForFarm(farm.id);
@@ -185,7 +191,8 @@ export class SeasonInputsService {
 
     const heaterOfFuel = house.heaters.find((heater) => heater.fuelId === fuelId) ?? firstHeater;
     const heaterEfficiency = options.heaterEfficiency ?? heaterOfFuel?.efficiency;
-    if (heaterEfficiency === undefined) throw new EngineInputError('heaterEfficiency', 'the house has no heaters: give heaterEfficiency');
+    if (heaterEfficiency === undefined)
+      throw new EngineInputError('heaterEfficiency', 'the house has no heaters: give heaterEfficiency');
 
     let pricePerUnit: number;
     let priceUnit: PriceUnit;

@@ -49,7 +49,10 @@ export class SeasonController {
 
   @Post('houses/:houseId/season')
   @HttpCode(200)
-  @ApiOperation({ summary: "A house's heating season hour by hour: energy, fuel and cost by month, with a degree-day cross-check (estimate:run)" })
+  @ApiOperation({
+    summary:
+      "A house's heating season hour by hour: energy, fuel and cost by month, with a degree-day cross-check (estimate:run)",
+  })
   @ApiOkResponse({ type: HouseSeasonEstimateDto })
   @ApiBadRequestResponse({ description: 'body fails validation; details per field' })
   @ApiForbiddenResponse({ description: 'role lacks estimate:run' })
@@ -81,7 +84,10 @@ export class SeasonController {
 
   @Post('houses/:houseId/measures')
   @HttpCode(200)
-  @ApiOperation({ summary: 'Energy measures ranked by simple payback, each re-running the season (estimate:run); an empty list compares the defaults' })
+  @ApiOperation({
+    summary:
+      'Energy measures ranked by simple payback, each re-running the season (estimate:run); an empty list compares the defaults',
+  })
   @ApiOkResponse({ type: MeasureComparisonDto })
   @ApiBadRequestResponse({ description: 'body fails validation; details per field' })
   @ApiForbiddenResponse({ description: 'role lacks estimate:run' })
@@ -96,10 +102,15 @@ export class SeasonController {
   }
 
   @Get('houses/:houseId/calendar')
-  @ApiOperation({ summary: "The house's production calendar (house:read); no periods = heated all season at the house setpoints" })
+  @ApiOperation({
+    summary: "The house's production calendar (house:read); no periods = heated all season at the house setpoints",
+  })
   @ApiOkResponse({ type: ProductionCalendarDto })
   @ApiNotFoundResponse({ description: 'no such house, or not a member of its farm' })
-  getCalendar(@CurrentUser() me: AuthenticatedUser, @Param('houseId', ParseIntPipe) houseId: number): Promise<ProductionCalendarDto> {
+  getCalendar(
+    @CurrentUser() me: AuthenticatedUser,
+    @Param('houseId', ParseIntPipe) houseId: number,
+  ): Promise<ProductionCalendarDto> {
     return this.calendars.get(me, houseId);
   }
 
@@ -109,7 +120,9 @@ export class SeasonController {
   @ApiBadRequestResponse({ description: 'body fails validation; details per field' })
   @ApiForbiddenResponse({ description: 'role lacks house:write' })
   @ApiNotFoundResponse({ description: 'no such house, or not a member of its farm' })
-  @ApiUnprocessableEntityResponse({ description: 'an impossible date such as 02-30, field named (periods[i].startMonthDay)' })
+  @ApiUnprocessableEntityResponse({
+    description: 'an impossible date such as 02-30, field named (periods[i].startMonthDay)',
+  })
   putCalendar(
     @CurrentUser() me: AuthenticatedUser,
     @Param('houseId', ParseIntPipe) houseId: number,
@@ -122,12 +135,17 @@ export class SeasonController {
   @ApiOperation({ summary: "The farm's fuel prices, one per fuel (farm:read)" })
   @ApiOkResponse({ type: FarmFuelPricesDto })
   @ApiNotFoundResponse({ description: 'no such farm, or not a member' })
-  getFuelPrices(@CurrentUser() me: AuthenticatedUser, @Param('farmId', ParseIntPipe) farmId: number): Promise<FarmFuelPricesDto> {
+  getFuelPrices(
+    @CurrentUser() me: AuthenticatedUser,
+    @Param('farmId', ParseIntPipe) farmId: number,
+  ): Promise<FarmFuelPricesDto> {
     return this.fuelPrices.get(me, farmId);
   }
 
   @Put('farms/:farmId/fuel-prices')
-  @ApiOperation({ summary: "Replace the farm's fuel prices (house:write: owners and growers, who hold the fuel bills)" })
+  @ApiOperation({
+    summary: "Replace the farm's fuel prices (house:write: owners and growers, who hold the fuel bills)",
+  })
   @ApiOkResponse({ type: FarmFuelPricesDto })
   @ApiBadRequestResponse({ description: 'body fails validation; details per field' })
   @ApiForbiddenResponse({ description: 'role lacks house:write' })
@@ -158,7 +176,9 @@ export class SeasonController {
 
   @Get('farms/:farmId/season-budget.csv')
   @Header('Content-Type', 'text/csv; charset=utf-8')
-  @ApiOperation({ summary: 'The season budget as CSV: one row per house per month, totals, units named in the header (farm:read)' })
+  @ApiOperation({
+    summary: 'The season budget as CSV: one row per house per month, totals, units named in the header (farm:read)',
+  })
   @ApiProduces('text/csv')
   @ApiOkResponse({ description: 'CSV file (attachment)', schema: { type: 'string' } })
   @ApiNotFoundResponse({ description: 'no such farm, or not a member' })

@@ -16,8 +16,21 @@ import { SunCacheService } from './sun-cache.service';
 
 /** Season engine over HTTP; brings the temperature-log routes with it (one entry in AppModule). */
 @Module({
-  imports: [SequelizeModule.forFeature([FarmFuelPrice, HouseCalendar]), FarmsModule, HousesModule, ClimateModule, TemperatureLogsModule],
+  imports: [
+    SequelizeModule.forFeature([FarmFuelPrice, HouseCalendar]),
+    FarmsModule,
+    HousesModule,
+    ClimateModule,
+    TemperatureLogsModule,
+  ],
   controllers: [SeasonController],
-  providers: [SunCacheService, SeasonInputsService, SeasonService, SeasonBudgetService, CalendarService, FuelPricesService],
+  providers: [
+    SunCacheService,
+    SeasonInputsService,
+    SeasonService,
+    SeasonBudgetService,
+    CalendarService,
+    FuelPricesService,
+  ],
 })
 export class SeasonModule {}

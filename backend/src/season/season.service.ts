@@ -1,14 +1,25 @@
 import { Injectable } from '@nestjs/common';
 import type { AuthenticatedUser } from '../common/decorators/current-user.decorator';
-import { estimateSeason, type EstimateSeasonInput } from '../engine/estimate-season';
-import { compareMeasures, defaultMeasures, type Measure, type MeasureResult } from '../engine/season/measures';
-import { nightHeatingDemand } from '../engine/season/night-demand';
+import { estimateSeason, type EstimateSeasonInput } from '@thermbay/engine/estimate-season';
+import { compareMeasures, defaultMeasures, type Measure, type MeasureResult } from '@thermbay/engine/season/measures';
+import { nightHeatingDemand } from '@thermbay/engine/season/night-demand';
 import { houseToSpec } from '../houses/house.mapper';
 import { HousesService } from '../houses/houses.service';
 import { ReferenceDataService } from '../reference-data/reference-data.service';
 import type { MeasureDto, MeasuresRequestDto, NightDemandRequestDto, SeasonRequestDto } from './dto/season-request.dto';
-import type { HouseNightDemandDto, HouseSeasonEstimateDto, MeasureComparisonDto, MeasureResultDto, SeasonInputsUsedDto } from './dto/season-result.dto';
-import { SeasonInputsService, withRequestFields, type FarmSeasonContext, type HouseFuelChoice } from './season-inputs.service';
+import type {
+  HouseNightDemandDto,
+  HouseSeasonEstimateDto,
+  MeasureComparisonDto,
+  MeasureResultDto,
+  SeasonInputsUsedDto,
+} from './dto/season-result.dto';
+import {
+  SeasonInputsService,
+  withRequestFields,
+  type FarmSeasonContext,
+  type HouseFuelChoice,
+} from './season-inputs.service';
 import { SunCacheService } from './sun-cache.service';
 
 function toEngineMeasure(dto: MeasureDto): Measure {
@@ -37,13 +48,21 @@ export class SeasonService {
     return { ...estimate, houseId, inputsUsed: run.inputsUsed };
   }
 
-  async nightDemand(user: AuthenticatedUser, houseId: number, body: NightDemandRequestDto): Promise<HouseNightDemandDto> {
+  async nightDemand(
+    user: AuthenticatedUser,
+    houseId: number,
+    body: NightDemandRequestDto,
+  ): Promise<HouseNightDemandDto> {
     const stored = await this.houses.loadFor(user, houseId, 'estimate:run');
     const farm = await this.inputs.farm(stored.farmId);
     const house = houseToSpec(stored);
     // The night and the next morning are the "season"; a log must cover both days.
     const nextDay = new Date(Date.parse(`${body.date}T00:00:00Z`) + 86_400_000).toISOString().slice(0, 10);
-    const context = await this.inputs.farmContext(farm, { startDate: body.date, endDate: nextDay, climateSource: body.climateSource }, new Date());
+    const context = await this.inputs.farmContext(
+      farm,
+      { startDate: body.date, endDate: nextDay, climateSource: body.climateSource },
+      new Date(),
+    );
     const choice = this.inputs.fuelChoice(house, await this.inputs.pricesOf(farm.id), body);
     const night = withRequestFields(() =>
       nightHeatingDemand(
@@ -97,7 +116,12 @@ export class SeasonService {
     user: AuthenticatedUser,
     houseId: number,
     body: SeasonRequestDto,
-  ): Promise<{ input: EstimateSeasonInput; inputsUsed: SeasonInputsUsedDto; context: FarmSeasonContext; choice: HouseFuelChoice }> {
+  ): Promise<{
+    input: EstimateSeasonInput;
+    inputsUsed: SeasonInputsUsedDto;
+    context: FarmSeasonContext;
+    choice: HouseFuelChoice;
+  }> {
     const stored = await this.houses.loadFor(user, houseId, 'estimate:run');
     const farm = await this.inputs.farm(stored.farmId);
     const house = houseToSpec(stored);

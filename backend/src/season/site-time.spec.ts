@@ -1,4 +1,4 @@
-import { EngineInputError } from '../engine/errors';
+import { EngineInputError } from '@thermbay/engine/errors';
 import { defaultHeatingSeason, standardUtcOffsetHours, zoneOffsetHoursAt } from './site-time';
 
 describe('standardUtcOffsetHours', () => {
@@ -31,17 +31,35 @@ describe('standardUtcOffsetHours', () => {
 
 describe('defaultHeatingSeason', () => {
   it('north: the season in progress from September to May', () => {
-    expect(defaultHeatingSeason(45, new Date('2026-12-01T00:00:00Z'))).toEqual({ startDate: '2026-09-01', endDate: '2027-05-31' });
-    expect(defaultHeatingSeason(45, new Date('2027-03-10T00:00:00Z'))).toEqual({ startDate: '2026-09-01', endDate: '2027-05-31' });
+    expect(defaultHeatingSeason(45, new Date('2026-12-01T00:00:00Z'))).toEqual({
+      startDate: '2026-09-01',
+      endDate: '2027-05-31',
+    });
+    expect(defaultHeatingSeason(45, new Date('2027-03-10T00:00:00Z'))).toEqual({
+      startDate: '2026-09-01',
+      endDate: '2027-05-31',
+    });
   });
 
   it('north: between seasons, the coming one', () => {
-    expect(defaultHeatingSeason(45, new Date('2027-05-31T23:00:00Z'))).toEqual({ startDate: '2026-09-01', endDate: '2027-05-31' });
-    expect(defaultHeatingSeason(45, new Date('2027-06-01T00:00:00Z'))).toEqual({ startDate: '2027-09-01', endDate: '2028-05-31' });
+    expect(defaultHeatingSeason(45, new Date('2027-05-31T23:00:00Z'))).toEqual({
+      startDate: '2026-09-01',
+      endDate: '2027-05-31',
+    });
+    expect(defaultHeatingSeason(45, new Date('2027-06-01T00:00:00Z'))).toEqual({
+      startDate: '2027-09-01',
+      endDate: '2028-05-31',
+    });
   });
 
   it('south: March to November, the coming one after November', () => {
-    expect(defaultHeatingSeason(-34, new Date('2026-12-01T00:00:00Z'))).toEqual({ startDate: '2027-03-01', endDate: '2027-11-30' });
-    expect(defaultHeatingSeason(-34, new Date('2027-07-01T00:00:00Z'))).toEqual({ startDate: '2027-03-01', endDate: '2027-11-30' });
+    expect(defaultHeatingSeason(-34, new Date('2026-12-01T00:00:00Z'))).toEqual({
+      startDate: '2027-03-01',
+      endDate: '2027-11-30',
+    });
+    expect(defaultHeatingSeason(-34, new Date('2027-07-01T00:00:00Z'))).toEqual({
+      startDate: '2027-03-01',
+      endDate: '2027-11-30',
+    });
   });
 });

@@ -1,5 +1,5 @@
-import { EngineInputError } from '../engine/errors';
-import type { SeasonRange } from '../engine/season/season-hours';
+import { EngineInputError } from '@thermbay/engine/errors';
+import type { SeasonRange } from '@thermbay/engine/season/season-hours';
 
 /** Offset of an IANA zone from UTC at an instant, hours (e.g. −6 for 'GMT-06:00'). */
 export function zoneOffsetHoursAt(timeZone: string, instant: Date): number {

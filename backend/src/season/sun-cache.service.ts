@@ -1,5 +1,5 @@
 import { Injectable } from '@nestjs/common';
-import { SunCache } from '../engine/season/sun-hours';
+import { SunCache } from '@thermbay/engine/season/sun-hours';
 
 /** One sun cache for the whole process: every season run at a site-year after the first skips the astronomy. */
 @Injectable()

@@ -1,7 +1,7 @@
 import type { FarmRole, SiteRole } from '../common/permissions';
-import type { HouseSpec } from '../engine/house.types';
-import type { PriceUnit } from '../engine/season/fuel';
-import type { ProductionPeriod } from '../engine/season/production-calendar';
+import type { HouseSpec } from '@thermbay/engine/house.types';
+import type { PriceUnit } from '@thermbay/engine/season/fuel';
+import type { ProductionPeriod } from '@thermbay/engine/season/production-calendar';
 
 /**
  * The demo scenario. INVENTED for demonstration: the farm, its people and its houses do not
@@ -19,10 +19,34 @@ export interface DemoAccount {
 }
 
 export const DEMO_ACCOUNTS: DemoAccount[] = [
-  { email: 'owner@example.com', name: 'Olive Owner', description: 'owns the demo farm', siteRole: 'user', farmRole: 'owner' },
-  { email: 'grower@example.com', name: 'Gus Grower', description: 'grower: edits houses, runs estimates', siteRole: 'user', farmRole: 'grower' },
-  { email: 'adviser@example.com', name: 'Ada Adviser', description: 'extension adviser: reads the farm, writes reports', siteRole: 'user', farmRole: 'adviser' },
-  { email: 'admin@example.com', name: 'Andy Admin', description: 'site administrator: manages users', siteRole: 'admin', farmRole: null },
+  {
+    email: 'owner@example.com',
+    name: 'Olive Owner',
+    description: 'owns the demo farm',
+    siteRole: 'user',
+    farmRole: 'owner',
+  },
+  {
+    email: 'grower@example.com',
+    name: 'Gus Grower',
+    description: 'grower: edits houses, runs estimates',
+    siteRole: 'user',
+    farmRole: 'grower',
+  },
+  {
+    email: 'adviser@example.com',
+    name: 'Ada Adviser',
+    description: 'extension adviser: reads the farm, writes reports',
+    siteRole: 'user',
+    farmRole: 'adviser',
+  },
+  {
+    email: 'admin@example.com',
+    name: 'Andy Admin',
+    description: 'site administrator: manages users',
+    siteRole: 'admin',
+    farmRole: null,
+  },
 ];
 
 export const DEMO_FARM = {
@@ -45,8 +69,18 @@ export const DEMO_CLIMATE = {
   summerDailyRangeK: 12,
   sourceNote: 'Invented demo values, roughly like central Minnesota normals (recalled, not from a table).',
   monthly: [
-    [-18, -6], [-16, -3], [-9, 3], [-1, 12], [6, 20], [12, 25],
-    [15, 28], [13, 26], [8, 21], [1, 13], [-7, 3], [-15, -5],
+    [-18, -6],
+    [-16, -3],
+    [-9, 3],
+    [-1, 12],
+    [6, 20],
+    [12, 25],
+    [15, 28],
+    [13, 26],
+    [8, 21],
+    [1, 13],
+    [-7, 3],
+    [-15, -5],
   ].map(([meanDailyMinC, meanDailyMaxC], index) => ({ month: index + 1, meanDailyMinC, meanDailyMaxC })),
 };
 
@@ -102,14 +136,19 @@ export const DEMO_HOUSES: DemoHouse[] = [
   },
   {
     name: 'Range C – cucumbers',
-    notes: 'Invented demo range: three 30 × 150 ft gable spans, gutter-connected, double poly roof, twin-wall sides, energy curtain.',
+    notes:
+      'Invented demo range: three 30 × 150 ft gable spans, gutter-connected, double poly roof, twin-wall sides, energy curtain.',
     shape: 'gable',
     spans: 3,
     widthM: round(30 * FT),
     lengthM: round(150 * FT),
     eaveHeightM: round(12 * FT),
     ridgeHeightM: round(19 * FT),
-    coverings: { roof: 'poly-double-inflated', sidewalls: 'polycarbonate-twin-8mm', endwalls: 'polycarbonate-twin-8mm' },
+    coverings: {
+      roof: 'poly-double-inflated',
+      sidewalls: 'polycarbonate-twin-8mm',
+      endwalls: 'polycarbonate-twin-8mm',
+    },
     coveringUOverridesWPerM2K: {},
     airLeakageClassId: 'new-film-double',
     airChangesPerHourOverride: null,
@@ -148,5 +187,7 @@ export const DEMO_CALENDARS: Record<string, Array<ProductionPeriod & { label: st
     { startMonthDay: '12-01', endMonthDay: '01-14', mode: 'empty', label: 'Clean-out' },
     { startMonthDay: '01-15', endMonthDay: '08-31', mode: 'heated', label: 'Spring tomato crop' },
   ],
-  'House B – bedding plants': [{ startMonthDay: '02-15', endMonthDay: '05-31', mode: 'heated', label: 'Spring bedding plants' }],
+  'House B – bedding plants': [
+    { startMonthDay: '02-15', endMonthDay: '05-31', mode: 'heated', label: 'Spring bedding plants' },
+  ],
 };

@@ -12,7 +12,15 @@ import { User } from '../users/models/user.model';
 import { FarmClimate } from '../climate/models/farm-climate.model';
 import { FarmFuelPrice } from '../season/models/farm-fuel-price.model';
 import { HouseCalendar } from '../season/models/house-calendar.model';
-import { DEMO_ACCOUNTS, DEMO_CALENDARS, DEMO_CLIMATE, DEMO_FARM, DEMO_FUEL_PRICES, DEMO_HOUSES, DEMO_PASSWORD } from './demo-scenario';
+import {
+  DEMO_ACCOUNTS,
+  DEMO_CALENDARS,
+  DEMO_CLIMATE,
+  DEMO_FARM,
+  DEMO_FUEL_PRICES,
+  DEMO_HOUSES,
+  DEMO_PASSWORD,
+} from './demo-scenario';
 
 /** Seeds the invented demo scenario once, on a database that has no demo accounts yet. */
 @Injectable()

@@ -33,8 +33,13 @@ import {
 } from '@nestjs/swagger';
 import { catchError, throwError, type Observable } from 'rxjs';
 import { CurrentUser, type AuthenticatedUser } from '../common/decorators/current-user.decorator';
-import { TEMPERATURE_LOG_MAX_BYTES } from '../engine/climate/temperature-log';
-import { TemperatureCsvInspectionDto, TemperatureLogDetailDto, TemperatureLogDto, UploadTemperatureLogDto } from './dto/temperature-log.dto';
+import { TEMPERATURE_LOG_MAX_BYTES } from './csv/temperature-log-csv';
+import {
+  TemperatureCsvInspectionDto,
+  TemperatureLogDetailDto,
+  TemperatureLogDto,
+  UploadTemperatureLogDto,
+} from './dto/temperature-log.dto';
 import { TemperatureLogsService } from './temperature-logs.service';
 import type { UploadedCsvFile } from './uploaded-file';
 
@@ -44,15 +49,17 @@ const MAX_MB = TEMPERATURE_LOG_MAX_BYTES / 1024 / 1024;
 @Injectable()
 class FileTooLargeMessage implements NestInterceptor {
   intercept(_context: ExecutionContext, next: CallHandler): Observable<unknown> {
-    return next.handle().pipe(
-      catchError((error: unknown) =>
-        throwError(() =>
-          error instanceof PayloadTooLargeException
-            ? new PayloadTooLargeException(`the file is larger than ${MAX_MB} MB; split the log into shorter periods`)
-            : error,
+    return next
+      .handle()
+      .pipe(
+        catchError((error: unknown) =>
+          throwError(() =>
+            error instanceof PayloadTooLargeException
+              ? new PayloadTooLargeException(`the file is larger than ${MAX_MB} MB; split the log into shorter periods`)
+              : error,
+          ),
         ),
-      ),
-    );
+      );
   }
 }
 
@@ -72,7 +79,9 @@ export class TemperatureLogsController {
   @Post('farms/:farmId/temperature-logs/inspect')
   @HttpCode(200)
   @UseInterceptors(FileTooLargeMessage, csvUpload)
-  @ApiOperation({ summary: 'Read the start of a temperature CSV and propose which columns hold what; stores nothing (house:write)' })
+  @ApiOperation({
+    summary: 'Read the start of a temperature CSV and propose which columns hold what; stores nothing (house:write)',
+  })
   @ApiConsumes('multipart/form-data')
   @ApiBody({ schema: { type: 'object', required: ['file'], properties: { file: fileSchema } } })
   @ApiOkResponse({ type: TemperatureCsvInspectionDto })
@@ -91,7 +100,10 @@ export class TemperatureLogsController {
 
   @Post('farms/:farmId/temperature-logs')
   @UseInterceptors(FileTooLargeMessage, csvUpload)
-  @ApiOperation({ summary: 'Store a temperature log read with the confirmed column mapping; nothing is stored when any row is bad (house:write)' })
+  @ApiOperation({
+    summary:
+      'Store a temperature log read with the confirmed column mapping; nothing is stored when any row is bad (house:write)',
+  })
   @ApiConsumes('multipart/form-data')
   @ApiBody({
     schema: {
@@ -100,12 +112,18 @@ export class TemperatureLogsController {
       properties: {
         file: fileSchema,
         name: { type: 'string', maxLength: 200 },
-        mapping: { type: 'string', description: 'TemperatureColumnMappingDto as JSON, e.g. {"timestampColumn":"Time","temperatureColumn":"Temp (°C)","unit":"C"}' },
+        mapping: {
+          type: 'string',
+          description:
+            'TemperatureColumnMappingDto as JSON, e.g. {"timestampColumn":"Time","temperatureColumn":"Temp (°C)","unit":"C"}',
+        },
       },
     },
   })
   @ApiCreatedResponse({ type: TemperatureLogDto })
-  @ApiBadRequestResponse({ description: 'no file part, or name/mapping invalid (details per field, mapping.* for the mapping)' })
+  @ApiBadRequestResponse({
+    description: 'no file part, or name/mapping invalid (details per field, mapping.* for the mapping)',
+  })
   @ApiForbiddenResponse({ description: 'role lacks house:write' })
   @ApiNotFoundResponse({ description: 'no such farm, or not a member' })
   @ApiPayloadTooLargeResponse({ description: `file over ${MAX_MB} MB` })
@@ -123,15 +141,23 @@ export class TemperatureLogsController {
   @ApiOperation({ summary: "The farm's temperature logs, newest first, without readings (farm:read)" })
   @ApiOkResponse({ type: TemperatureLogDto, isArray: true })
   @ApiNotFoundResponse({ description: 'no such farm, or not a member' })
-  list(@CurrentUser() me: AuthenticatedUser, @Param('farmId', ParseIntPipe) farmId: number): Promise<TemperatureLogDto[]> {
+  list(
+    @CurrentUser() me: AuthenticatedUser,
+    @Param('farmId', ParseIntPipe) farmId: number,
+  ): Promise<TemperatureLogDto[]> {
     return this.logs.list(me, farmId);
   }
 
   @Get('temperature-logs/:logId')
-  @ApiOperation({ summary: 'A temperature log with one row per day (hourly readings reduced to min/mean/max) (farm:read)' })
+  @ApiOperation({
+    summary: 'A temperature log with one row per day (hourly readings reduced to min/mean/max) (farm:read)',
+  })
   @ApiOkResponse({ type: TemperatureLogDetailDto })
   @ApiNotFoundResponse({ description: 'no such log, or not a member of its farm' })
-  get(@CurrentUser() me: AuthenticatedUser, @Param('logId', ParseIntPipe) logId: number): Promise<TemperatureLogDetailDto> {
+  get(
+    @CurrentUser() me: AuthenticatedUser,
+    @Param('logId', ParseIntPipe) logId: number,
+  ): Promise<TemperatureLogDetailDto> {
     return this.logs.get(me, logId);
   }
 

@@ -10,8 +10,8 @@ import {
   parseTemperatureCsv,
   type TemperatureColumnMapping,
   type TemperatureLogReading,
-} from '../engine/climate/temperature-log';
-import { EngineInputError } from '../engine/errors';
+} from './csv/temperature-log-csv';
+import { EngineInputError } from '@thermbay/engine/errors';
 import { FarmAccessService } from '../farms/farm-access.service';
 import {
   TemperatureColumnMappingDto,
@@ -25,7 +25,17 @@ import { TemperatureLog } from './models/temperature-log.model';
 import type { UploadedCsvFile } from './uploaded-file';
 
 /** Columns listed without the readings (which can run to a year of hours). */
-const SUMMARY_ATTRIBUTES = ['id', 'farmId', 'name', 'resolution', 'startDate', 'endDate', 'rowCount', 'readingCount', 'createdAt'];
+const SUMMARY_ATTRIBUTES = [
+  'id',
+  'farmId',
+  'name',
+  'resolution',
+  'startDate',
+  'endDate',
+  'rowCount',
+  'readingCount',
+  'createdAt',
+];
 
 export function temperatureLogToDto(row: TemperatureLog): TemperatureLogDto {
   return {
@@ -46,7 +56,14 @@ export function dailySummary(readings: TemperatureLogReading[]): TemperatureLogD
   const days: TemperatureLogDayDto[] = [];
   let current: { date: string; sum: number; count: number; min: number | null; max: number | null } | null = null;
   const flush = () => {
-    if (current) days.push({ date: current.date, minC: current.min, meanC: current.sum / current.count, maxC: current.max, readingCount: current.count });
+    if (current)
+      days.push({
+        date: current.date,
+        minC: current.min,
+        meanC: current.sum / current.count,
+        maxC: current.max,
+        readingCount: current.count,
+      });
   };
   for (const reading of readings) {
     const date = reading.at.slice(0, 10);
@@ -73,7 +90,10 @@ function flattenErrors(errors: ValidationError[], parent: string): FieldProblem[
   return errors.flatMap((error) => {
     const field = `${parent}.${error.property}`;
     return [
-      ...Object.values(error.constraints ?? {}).map((message) => ({ field, message: message.replace(error.property, field) })),
+      ...Object.values(error.constraints ?? {}).map((message) => ({
+        field,
+        message: message.replace(error.property, field),
+      })),
       ...flattenErrors(error.children ?? [], field),
     ];
   });
@@ -91,7 +111,11 @@ export class TemperatureLogsService {
     private readonly access: FarmAccessService,
   ) {}
 
-  async inspect(user: AuthenticatedUser, farmId: number, file: UploadedCsvFile | undefined): Promise<TemperatureCsvInspectionDto> {
+  async inspect(
+    user: AuthenticatedUser,
+    farmId: number,
+    file: UploadedCsvFile | undefined,
+  ): Promise<TemperatureCsvInspectionDto> {
     // Inspecting is the first step of an upload, so it needs the upload's permission.
     await this.access.require(user, farmId, 'house:write');
     return inspectTemperatureCsv(new Uint8Array(requireFile(file).buffer));
@@ -123,7 +147,14 @@ export class TemperatureLogsService {
 
   async list(user: AuthenticatedUser, farmId: number): Promise<TemperatureLogDto[]> {
     await this.access.require(user, farmId, 'farm:read');
-    const rows = await this.logs.findAll({ where: { farmId }, attributes: SUMMARY_ATTRIBUTES, order: [['createdAt', 'DESC'], ['id', 'DESC']] });
+    const rows = await this.logs.findAll({
+      where: { farmId },
+      attributes: SUMMARY_ATTRIBUTES,
+      order: [
+        ['createdAt', 'DESC'],
+        ['id', 'DESC'],
+      ],
+    });
     return rows.map(temperatureLogToDto);
   }
 
@@ -162,7 +193,9 @@ export class TemperatureLogsService {
 
 function requireFile(file: UploadedCsvFile | undefined): UploadedCsvFile {
   if (!file || !file.buffer) {
-    throw new RequestValidationException([{ field: 'file', message: 'choose a CSV file to upload (multipart field "file")' }]);
+    throw new RequestValidationException([
+      { field: 'file', message: 'choose a CSV file to upload (multipart field "file")' },
+    ]);
   }
   return file;
 }
@@ -173,10 +206,14 @@ function parseMapping(text: string): TemperatureColumnMapping {
   try {
     value = JSON.parse(text);
   } catch {
-    throw new RequestValidationException([{ field: 'mapping', message: 'mapping must be a JSON object (the columns you confirmed)' }]);
+    throw new RequestValidationException([
+      { field: 'mapping', message: 'mapping must be a JSON object (the columns you confirmed)' },
+    ]);
   }
   if (!value || typeof value !== 'object' || Array.isArray(value)) {
-    throw new RequestValidationException([{ field: 'mapping', message: 'mapping must be a JSON object (the columns you confirmed)' }]);
+    throw new RequestValidationException([
+      { field: 'mapping', message: 'mapping must be a JSON object (the columns you confirmed)' },
+    ]);
   }
   const instance = plainToInstance(TemperatureColumnMappingDto, value);
   const errors = validateSync(instance, { whitelist: true, forbidNonWhitelisted: true });

@@ -27,7 +27,11 @@ export class UsersController {
   @Patch(':id')
   @SiteRoles('admin')
   @ApiOkResponse({ type: UserDto })
-  update(@CurrentUser() me: AuthenticatedUser, @Param('id', ParseIntPipe) id: number, @Body() body: AdminUpdateUserDto): Promise<UserDto> {
+  update(
+    @CurrentUser() me: AuthenticatedUser,
+    @Param('id', ParseIntPipe) id: number,
+    @Body() body: AdminUpdateUserDto,
+  ): Promise<UserDto> {
     return this.users.adminUpdate(me.id, id, body);
   }
 

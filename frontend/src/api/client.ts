@@ -141,13 +141,10 @@ export async function apiRequest<T>(
 
 export const api = {
   get: <T>(path: string, options?: RequestOptions) => apiRequest<T>('GET', path, undefined, options),
-  post: <T>(path: string, body?: unknown, options?: RequestOptions) =>
-    apiRequest<T>('POST', path, body, options),
+  post: <T>(path: string, body?: unknown, options?: RequestOptions) => apiRequest<T>('POST', path, body, options),
   put: <T>(path: string, body?: unknown, options?: RequestOptions) => apiRequest<T>('PUT', path, body, options),
-  patch: <T>(path: string, body?: unknown, options?: RequestOptions) =>
-    apiRequest<T>('PATCH', path, body, options),
-  delete: <T = void>(path: string, options?: RequestOptions) =>
-    apiRequest<T>('DELETE', path, undefined, options),
+  patch: <T>(path: string, body?: unknown, options?: RequestOptions) => apiRequest<T>('PATCH', path, body, options),
+  delete: <T = void>(path: string, options?: RequestOptions) => apiRequest<T>('DELETE', path, undefined, options),
 };
 
 export interface UploadProgress {
@@ -266,7 +263,11 @@ function fileNameFrom(contentDisposition: string | null, fallback: string): stri
 }
 
 /** GETs a file (e.g. a CSV export) with the token, as a Blob; errors as ApiError. */
-export async function downloadFile(path: string, fallbackFileName: string, options: RequestOptions = {}): Promise<DownloadedFile> {
+export async function downloadFile(
+  path: string,
+  fallbackFileName: string,
+  options: RequestOptions = {},
+): Promise<DownloadedFile> {
   const headers: Record<string, string> = {};
   const token = tokenStorage.get();
   if (token) headers.Authorization = `Bearer ${token}`;

@@ -35,8 +35,7 @@ export type HouseShape = House['shape'];
 export type HeaterGroup = Schemas['HeaterGroupDto'];
 export type SurfaceGroup = keyof Schemas['CoveringsDto'];
 
-export type ReferenceData =
-  operations['ReferenceDataController_all']['responses'][200]['content']['application/json'];
+export type ReferenceData = operations['ReferenceDataController_all']['responses'][200]['content']['application/json'];
 export type ReferenceTable = ReferenceData[string];
 export type ReferenceRow = ReferenceTable['rows'][number];
 

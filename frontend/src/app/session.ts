@@ -17,8 +17,5 @@ export function useCurrentUser() {
 /** Writes an updated user (e.g. a new unit preference) into the current-user cache. */
 export function useSetCurrentUser(): (user: User) => void {
   const queryClient = useQueryClient();
-  return useCallback(
-    (user: User) => queryClient.setQueryData(currentUserQueryOptions().queryKey, user),
-    [queryClient],
-  );
+  return useCallback((user: User) => queryClient.setQueryData(currentUserQueryOptions().queryKey, user), [queryClient]);
 }

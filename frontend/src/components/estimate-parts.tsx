@@ -11,13 +11,7 @@ import { ErrorAlert } from './feedback';
  * cautions alert, and the notes shown instead of a result (no permission, no farm climate).
  */
 
-export type Confidence =
-  | 'verified'
-  | 'verified-secondary'
-  | 'derived'
-  | 'memory'
-  | 'common-practice'
-  | 'user-entered';
+export type Confidence = 'verified' | 'verified-secondary' | 'derived' | 'memory' | 'common-practice' | 'user-entered';
 
 export interface EstimateAssumption {
   key: string;
@@ -159,7 +153,8 @@ export function EstimateError({
   missingClimateHint?: ReactNode;
 }) {
   if (error instanceof ApiError && error.status === 403) return <NoPermissionNote what={what} />;
-  if (isMissingClimateError(error)) return <MissingClimateNote farmId={farmId}>{missingClimateHint}</MissingClimateNote>;
+  if (isMissingClimateError(error))
+    return <MissingClimateNote farmId={farmId}>{missingClimateHint}</MissingClimateNote>;
   return <ErrorAlert error={error} title={`The ${what} could not be computed`} />;
 }
 

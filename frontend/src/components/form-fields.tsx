@@ -115,9 +115,7 @@ export function FormSelectField({ name, options, helperText, ...rest }: BaseProp
       disabled={rest.disabled || readOnly}
       select
       // An option with the value '' (e.g. "No curtain") is shown, not treated as empty.
-      slotProps={
-        hasEmptyOption ? { select: { displayEmpty: true }, inputLabel: { shrink: true } } : rest.slotProps
-      }
+      slotProps={hasEmptyOption ? { select: { displayEmpty: true }, inputLabel: { shrink: true } } : rest.slotProps}
       id={rest.id ?? `field-${name}`}
       name={field.name}
       value={field.value ?? ''}

@@ -6,7 +6,12 @@ import type { HouseInput, HouseSpec } from '../api/types';
  */
 export function houseSpecOf(house: HouseInput): HouseSpec {
   const { name: _name, notes: _notes, ...rest } = house;
-  const { id: _id, farmId: _farmId, createdAt: _createdAt, updatedAt: _updatedAt, ...spec } = rest as typeof rest &
-    Partial<{ id: number; farmId: number; createdAt: string; updatedAt: string }>;
+  const {
+    id: _id,
+    farmId: _farmId,
+    createdAt: _createdAt,
+    updatedAt: _updatedAt,
+    ...spec
+  } = rest as typeof rest & Partial<{ id: number; farmId: number; createdAt: string; updatedAt: string }>;
   return spec;
 }

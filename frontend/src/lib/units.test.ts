@@ -97,8 +97,20 @@ describe('units: conversion factors (NIST SP 811, Appendix B)', () => {
 
   it('round trip SI → display → SI returns the value for every quantity and system', () => {
     const quantities: Quantity[] = [
-      'length', 'area', 'smallArea', 'volume', 'temperature', 'temperatureDifference', 'power', 'uValue', 'airFlow',
-      'airFlowPerFloorArea', 'energy', 'irradiance', 'heatContentPerVolume', 'heatContentPerLiquidVolume',
+      'length',
+      'area',
+      'smallArea',
+      'volume',
+      'temperature',
+      'temperatureDifference',
+      'power',
+      'uValue',
+      'airFlow',
+      'airFlowPerFloorArea',
+      'energy',
+      'irradiance',
+      'heatContentPerVolume',
+      'heatContentPerLiquidVolume',
       'heatContentPerMass',
     ];
     for (const quantity of quantities) {
@@ -175,7 +187,14 @@ describe('units: quantities of the estimate panels (NIST SP 811, Appendix B.8)',
 
   it('round trip for the new quantities in both systems', () => {
     const quantities: Quantity[] = [
-      'perimeterFactor', 'conductance', 'velocity', 'illuminance', 'pressure', 'density', 'specificHeat', 'areaPerPower',
+      'perimeterFactor',
+      'conductance',
+      'velocity',
+      'illuminance',
+      'pressure',
+      'density',
+      'specificHeat',
+      'areaPerPower',
     ];
     for (const quantity of quantities) {
       for (const system of ['si', 'us'] as const) {
@@ -185,7 +204,7 @@ describe('units: quantities of the estimate panels (NIST SP 811, Appendix B.8)',
     }
   });
 
-  it('maps the API\'s unit strings to quantities and leaves system-free units alone', () => {
+  it("maps the API's unit strings to quantities and leaves system-free units alone", () => {
     expect(quantityOfSiUnit('W/(m²·K)')).toBe('uValue');
     expect(quantityOfSiUnit('°C')).toBe('temperature');
     expect(quantityOfSiUnit('m³/(s·m²)')).toBe('airFlowPerFloorArea');

@@ -376,7 +376,11 @@ export interface Units {
   range: (quantity: Quantity, siRange: { min: number; max: number }) => { min: number; max: number };
   /** money in the grower's currency (no conversion) */
   money: (amount: number | null | undefined, decimals?: number) => string;
-  fuel: (amount: FuelAmount | null | undefined, fuelUnits: FuelUnits | null | undefined, options?: FormatOptions) => string;
+  fuel: (
+    amount: FuelAmount | null | undefined,
+    fuelUnits: FuelUnits | null | undefined,
+    options?: FormatOptions,
+  ) => string;
   fuelValue: (amount: FuelAmount) => number;
   fuelUnit: (fuelUnits: FuelUnits) => string;
   /** engine prose with its {{kind:valueSI}} tokens in the user's units */

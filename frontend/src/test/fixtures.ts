@@ -6,14 +6,28 @@ export const referenceDataFixture: ReferenceData = {
     title: 'Coverings',
     description: 'test rows',
     rows: [
-      { id: 'poly-double-inflated', label: 'Inflated double polyethylene', uWPerM2K: 4, source: 'test', confidence: 'memory' },
+      {
+        id: 'poly-double-inflated',
+        label: 'Inflated double polyethylene',
+        uWPerM2K: 4,
+        source: 'test',
+        confidence: 'memory',
+      },
       { id: 'glass-single', label: 'Single glass', uWPerM2K: 6.2, source: 'test', confidence: 'memory' },
     ],
   },
   'air-leakage': {
     title: 'Air leakage',
     description: 'test rows',
-    rows: [{ id: 'new-tight', label: 'New, tight construction', airChangesPerHour: 0.75, source: 'test', confidence: 'memory' }],
+    rows: [
+      {
+        id: 'new-tight',
+        label: 'New, tight construction',
+        airChangesPerHour: 0.75,
+        source: 'test',
+        confidence: 'memory',
+      },
+    ],
   },
   curtains: {
     title: 'Curtains',

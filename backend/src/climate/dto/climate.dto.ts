@@ -1,38 +1,95 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
-import { ArrayMaxSize, ArrayMinSize, IsArray, IsInt, IsNumber, IsOptional, IsString, Max, MaxLength, Min, ValidateNested } from 'class-validator';
-import { BOUNDS } from '../../engine/bounds';
+import {
+  ArrayMaxSize,
+  ArrayMinSize,
+  IsArray,
+  IsInt,
+  IsNumber,
+  IsOptional,
+  IsString,
+  Max,
+  MaxLength,
+  Min,
+  ValidateNested,
+} from 'class-validator';
+import { BOUNDS } from '@thermbay/engine/vocabulary';
 
 export class MonthlyClimateDto {
   @ApiProperty({ minimum: 1, maximum: 12 }) @IsInt() @Min(1) @Max(12) month: number;
-  @ApiProperty({ description: 'mean of the daily minimum temperatures, °C' }) @IsNumber() @Min(-60) @Max(60) meanDailyMinC: number;
-  @ApiProperty({ description: 'mean of the daily maximum temperatures, °C' }) @IsNumber() @Min(-60) @Max(60) meanDailyMaxC: number;
-  @ApiPropertyOptional({ minimum: 0, maximum: 1, nullable: true, type: Number, description: 'actual ÷ clear-sky solar over the month; default from reference data' })
-  @IsOptional() @IsNumber() @Min(0) @Max(1)
+  @ApiProperty({ description: 'mean of the daily minimum temperatures, °C' })
+  @IsNumber()
+  @Min(-60)
+  @Max(60)
+  meanDailyMinC: number;
+  @ApiProperty({ description: 'mean of the daily maximum temperatures, °C' })
+  @IsNumber()
+  @Min(-60)
+  @Max(60)
+  meanDailyMaxC: number;
+  @ApiPropertyOptional({
+    minimum: 0,
+    maximum: 1,
+    nullable: true,
+    type: Number,
+    description: 'actual ÷ clear-sky solar over the month; default from reference data',
+  })
+  @IsOptional()
+  @IsNumber()
+  @Min(0)
+  @Max(1)
   clearness?: number | null;
 }
 
 export class SiteClimateDto {
-  @ApiProperty({ minimum: BOUNDS.designOutdoorC.min, maximum: BOUNDS.designOutdoorC.max, description: 'heating design dry bulb (99 % or 99.6 %), °C' })
-  @IsNumber() @Min(BOUNDS.designOutdoorC.min) @Max(BOUNDS.designOutdoorC.max)
+  @ApiProperty({
+    minimum: BOUNDS.designOutdoorC.min,
+    maximum: BOUNDS.designOutdoorC.max,
+    description: 'heating design dry bulb (99 % or 99.6 %), °C',
+  })
+  @IsNumber()
+  @Min(BOUNDS.designOutdoorC.min)
+  @Max(BOUNDS.designOutdoorC.max)
   winterDesignC: number;
 
-  @ApiProperty({ minimum: BOUNDS.summerDesignC.min, maximum: BOUNDS.summerDesignC.max, description: 'cooling design dry bulb (1 %), °C' })
-  @IsNumber() @Min(BOUNDS.summerDesignC.min) @Max(BOUNDS.summerDesignC.max)
+  @ApiProperty({
+    minimum: BOUNDS.summerDesignC.min,
+    maximum: BOUNDS.summerDesignC.max,
+    description: 'cooling design dry bulb (1 %), °C',
+  })
+  @IsNumber()
+  @Min(BOUNDS.summerDesignC.min)
+  @Max(BOUNDS.summerDesignC.max)
   summerDesignC: number;
 
-  @ApiProperty({ description: 'wet bulb coincident with the summer design dry bulb, °C' }) @IsNumber() @Min(-10) @Max(40) summerDesignWetBulbC: number;
+  @ApiProperty({ description: 'wet bulb coincident with the summer design dry bulb, °C' })
+  @IsNumber()
+  @Min(-10)
+  @Max(40)
+  summerDesignWetBulbC: number;
 
   @ApiProperty({ minimum: 2, maximum: 25, description: 'mean daily range on the summer design day, K' })
-  @IsNumber() @Min(2) @Max(25)
+  @IsNumber()
+  @Min(2)
+  @Max(25)
   summerDailyRangeK: number;
 
   @ApiProperty({ type: MonthlyClimateDto, isArray: true, description: 'exactly 12 rows, one per month' })
-  @IsArray() @ArrayMinSize(12) @ArrayMaxSize(12) @ValidateNested({ each: true }) @Type(() => MonthlyClimateDto)
+  @IsArray()
+  @ArrayMinSize(12)
+  @ArrayMaxSize(12)
+  @ValidateNested({ each: true })
+  @Type(() => MonthlyClimateDto)
   monthly: MonthlyClimateDto[];
 
-  @ApiPropertyOptional({ nullable: true, type: String, description: 'where the numbers came from (e.g. national climate normals, station name)' })
-  @IsOptional() @IsString() @MaxLength(1000)
+  @ApiPropertyOptional({
+    nullable: true,
+    type: String,
+    description: 'where the numbers came from (e.g. national climate normals, station name)',
+  })
+  @IsOptional()
+  @IsString()
+  @MaxLength(1000)
   sourceNote?: string | null;
 }
 

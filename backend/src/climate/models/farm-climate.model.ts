@@ -1,5 +1,5 @@
 import { BelongsTo, Column, DataType, ForeignKey, Model, Table } from 'sequelize-typescript';
-import type { MonthlyClimate } from '../../engine/climate/site-climate';
+import type { MonthlyClimate } from '@thermbay/engine/climate/site-climate';
 import { Farm } from '../../farms/models/farm.model';
 
 @Table({ tableName: 'farm_climates' })

@@ -2,8 +2,8 @@ import { ArgumentsHost, Catch, ExceptionFilter, HttpException, HttpStatus, Logge
 import { ThrottlerException } from '@nestjs/throttler';
 import type { Response } from 'express';
 import { UniqueConstraintError } from 'sequelize';
-import { TemperatureLogError } from '../../engine/climate/temperature-log';
-import { EngineInputError } from '../../engine/errors';
+import { TemperatureLogError } from '../../temperature-logs/csv/temperature-log-csv';
+import { EngineInputError } from '@thermbay/engine/errors';
 
 export interface FieldProblem {
   field: string;
@@ -55,8 +55,12 @@ export class AllExceptionsFilter implements ExceptionFilter {
   private toBody(exception: unknown): ErrorBody {
     if (exception instanceof TemperatureLogError) {
       // A file's problems, line by line: `field` is 'line 12' (or 'file' for the file as a whole).
-      const details = exception.errors.map((problem) => ({ field: problem.line === null ? 'file' : `line ${problem.line}`, message: problem.message }));
-      if (exception.moreErrorCount > 0) details.push({ field: 'file', message: `${exception.moreErrorCount} more problems not listed` });
+      const details = exception.errors.map((problem) => ({
+        field: problem.line === null ? 'file' : `line ${problem.line}`,
+        message: problem.message,
+      }));
+      if (exception.moreErrorCount > 0)
+        details.push({ field: 'file', message: `${exception.moreErrorCount} more problems not listed` });
       return { statusCode: 422, error: REASONS[422], message: exception.message, field: exception.field, details };
     }
     if (exception instanceof EngineInputError) {

@@ -8,7 +8,10 @@ export class SiteRolesGuard implements CanActivate {
   constructor(private readonly reflector: Reflector) {}
 
   canActivate(context: ExecutionContext): boolean {
-    const roles = this.reflector.getAllAndOverride<SiteRole[]>(SITE_ROLES_KEY, [context.getHandler(), context.getClass()]);
+    const roles = this.reflector.getAllAndOverride<SiteRole[]>(SITE_ROLES_KEY, [
+      context.getHandler(),
+      context.getClass(),
+    ]);
     if (!roles || roles.length === 0) return true;
     const user = context.switchToHttp().getRequest().user;
     if (!user || !roles.includes(user.siteRole)) {

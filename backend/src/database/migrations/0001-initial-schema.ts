@@ -27,8 +27,18 @@ export async function up({ context: qi }: { context: QueryInterface }): Promise<
   });
   await qi.createTable('memberships', {
     id: { type: DataTypes.INTEGER, primaryKey: true, autoIncrement: true },
-    farmId: { type: DataTypes.INTEGER, allowNull: false, references: { model: 'farms', key: 'id' }, onDelete: 'CASCADE' },
-    userId: { type: DataTypes.INTEGER, allowNull: false, references: { model: 'users', key: 'id' }, onDelete: 'CASCADE' },
+    farmId: {
+      type: DataTypes.INTEGER,
+      allowNull: false,
+      references: { model: 'farms', key: 'id' },
+      onDelete: 'CASCADE',
+    },
+    userId: {
+      type: DataTypes.INTEGER,
+      allowNull: false,
+      references: { model: 'users', key: 'id' },
+      onDelete: 'CASCADE',
+    },
     role: { type: DataTypes.STRING, allowNull: false },
     ...timestamps,
   });
@@ -36,7 +46,12 @@ export async function up({ context: qi }: { context: QueryInterface }): Promise<
   await qi.addIndex('memberships', ['userId'], { name: 'memberships_user' });
   await qi.createTable('houses', {
     id: { type: DataTypes.INTEGER, primaryKey: true, autoIncrement: true },
-    farmId: { type: DataTypes.INTEGER, allowNull: false, references: { model: 'farms', key: 'id' }, onDelete: 'CASCADE' },
+    farmId: {
+      type: DataTypes.INTEGER,
+      allowNull: false,
+      references: { model: 'farms', key: 'id' },
+      onDelete: 'CASCADE',
+    },
     name: { type: DataTypes.STRING, allowNull: false },
     notes: { type: DataTypes.TEXT, allowNull: true },
     shape: { type: DataTypes.STRING, allowNull: false },

@@ -4,7 +4,13 @@ import { DataTypes, QueryInterface } from 'sequelize';
 export async function up({ context: qi }: { context: QueryInterface }): Promise<void> {
   await qi.createTable('farm_climates', {
     id: { type: DataTypes.INTEGER, primaryKey: true, autoIncrement: true },
-    farmId: { type: DataTypes.INTEGER, allowNull: false, unique: true, references: { model: 'farms', key: 'id' }, onDelete: 'CASCADE' },
+    farmId: {
+      type: DataTypes.INTEGER,
+      allowNull: false,
+      unique: true,
+      references: { model: 'farms', key: 'id' },
+      onDelete: 'CASCADE',
+    },
     winterDesignC: { type: DataTypes.DOUBLE, allowNull: false },
     summerDesignC: { type: DataTypes.DOUBLE, allowNull: false },
     summerDesignWetBulbC: { type: DataTypes.DOUBLE, allowNull: false },

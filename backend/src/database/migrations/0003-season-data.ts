@@ -7,7 +7,12 @@ import { DataTypes, QueryInterface } from 'sequelize';
 export async function up({ context: qi }: { context: QueryInterface }): Promise<void> {
   await qi.createTable('temperature_logs', {
     id: { type: DataTypes.INTEGER, primaryKey: true, autoIncrement: true },
-    farmId: { type: DataTypes.INTEGER, allowNull: false, references: { model: 'farms', key: 'id' }, onDelete: 'CASCADE' },
+    farmId: {
+      type: DataTypes.INTEGER,
+      allowNull: false,
+      references: { model: 'farms', key: 'id' },
+      onDelete: 'CASCADE',
+    },
     name: { type: DataTypes.STRING, allowNull: false },
     resolution: { type: DataTypes.STRING, allowNull: false },
     startDate: { type: DataTypes.STRING(10), allowNull: false },
@@ -25,7 +30,13 @@ export async function up({ context: qi }: { context: QueryInterface }): Promise<
 
   await qi.createTable('house_calendars', {
     id: { type: DataTypes.INTEGER, primaryKey: true, autoIncrement: true },
-    houseId: { type: DataTypes.INTEGER, allowNull: false, unique: true, references: { model: 'houses', key: 'id' }, onDelete: 'CASCADE' },
+    houseId: {
+      type: DataTypes.INTEGER,
+      allowNull: false,
+      unique: true,
+      references: { model: 'houses', key: 'id' },
+      onDelete: 'CASCADE',
+    },
     periods: { type: DataTypes.JSON, allowNull: false },
     createdAt: { type: DataTypes.DATE, allowNull: false },
     updatedAt: { type: DataTypes.DATE, allowNull: false },
@@ -33,7 +44,12 @@ export async function up({ context: qi }: { context: QueryInterface }): Promise<
 
   await qi.createTable('farm_fuel_prices', {
     id: { type: DataTypes.INTEGER, primaryKey: true, autoIncrement: true },
-    farmId: { type: DataTypes.INTEGER, allowNull: false, references: { model: 'farms', key: 'id' }, onDelete: 'CASCADE' },
+    farmId: {
+      type: DataTypes.INTEGER,
+      allowNull: false,
+      references: { model: 'farms', key: 'id' },
+      onDelete: 'CASCADE',
+    },
     fuelId: { type: DataTypes.STRING, allowNull: false },
     pricePerUnit: { type: DataTypes.DOUBLE, allowNull: false },
     priceUnit: { type: DataTypes.STRING(2), allowNull: false },

@@ -1,8 +1,8 @@
 import { ApiProperty } from '@nestjs/swagger';
-import type { Confidence } from '../../engine/reference-data.types';
-import { CONFIDENCE_MARKS } from '../../reference-data/load-reference-data';
+import type { Confidence } from '@thermbay/engine/vocabulary';
+import { CONFIDENCE_LEVELS } from '@thermbay/engine/vocabulary';
 import { CoolingConditionsDto, CoolingSiteDto } from './cooling-request.dto';
-import { PROSE_TOKENS_NOTE } from '../../engine/prose';
+import { PROSE_TOKENS_NOTE } from '@thermbay/engine/vocabulary';
 
 /*
  * The engine's CoolingEstimate, described class by class for the OpenAPI document so the
@@ -31,8 +31,14 @@ export class CoolingCapacityDto {
   @ApiProperty({ description: 'm³/s' }) requiredFlowM3PerS: number;
   @ApiProperty({ description: 'm³/s' }) installedFlowM3PerS: number;
   @ApiProperty({ enum: ['adequate', 'short', 'no-fans'] }) verdict: 'adequate' | 'short' | 'no-fans';
-  @ApiProperty({ type: Number, nullable: true, description: 'fans of the installed size needed in all; null without fans' }) fansNeeded: number | null;
-  @ApiProperty({ type: Number, nullable: true, description: 'fans to add; null without fans' }) additionalFansNeeded: number | null;
+  @ApiProperty({
+    type: Number,
+    nullable: true,
+    description: 'fans of the installed size needed in all; null without fans',
+  })
+  fansNeeded: number | null;
+  @ApiProperty({ type: Number, nullable: true, description: 'fans to add; null without fans' }) additionalFansNeeded:
+    number | null;
   @ApiProperty({ description: 'm²' }) inletAreaNeededM2: number;
   @ApiProperty({ description: 'm²' }) inletAreaM2: number;
   @ApiProperty({ enum: ['adequate', 'short'] }) inletVerdict: 'adequate' | 'short';
@@ -54,8 +60,10 @@ export class DesignDayDto {
   @ApiProperty({ description: 'YYYY-MM-DD' }) date: string;
   @ApiProperty({ type: DesignDayHourDto, isArray: true }) hours: DesignDayHourDto[];
   @ApiProperty({ description: '°C' }) peakIndoorWithFansC: number;
-  @ApiProperty({ type: Number, nullable: true, description: '°C; null without pads' }) peakIndoorWithPadsC: number | null;
-  @ApiProperty({ type: Number, isArray: true, description: 'solar hours at which the cooling setpoint is not held' }) hoursNotHeld: number[];
+  @ApiProperty({ type: Number, nullable: true, description: '°C; null without pads' }) peakIndoorWithPadsC:
+    number | null;
+  @ApiProperty({ type: Number, isArray: true, description: 'solar hours at which the cooling setpoint is not held' })
+  hoursNotHeld: number[];
 }
 
 export class PadSizingDto {
@@ -88,7 +96,9 @@ export class WinterVentilationDto {
   @ApiProperty({ description: '1/h' }) airChangesPerHour: number;
   @ApiProperty({ description: 'W to warm the ventilation air to the night setpoint' }) heatCostW: number;
   @ApiProperty({ description: '°C' }) atOutdoorC: number;
-  @ApiProperty({ description: "W lost by the house itself (cover, perimeter, leaks) at the same temperatures, for comparison" })
+  @ApiProperty({
+    description: 'W lost by the house itself (cover, perimeter, leaks) at the same temperatures, for comparison',
+  })
   houseHeatLossW: number;
 }
 
@@ -98,7 +108,7 @@ export class CoolingAssumptionDto {
   @ApiProperty({ oneOf: [{ type: 'number' }, { type: 'string' }] }) value: number | string;
   @ApiProperty() unit: string;
   @ApiProperty() source: string;
-  @ApiProperty({ enum: CONFIDENCE_MARKS }) confidence: Confidence;
+  @ApiProperty({ enum: CONFIDENCE_LEVELS }) confidence: Confidence;
   @ApiProperty({ description: 'true when the request replaced the default' }) overridden: boolean;
 }
 
@@ -106,11 +116,17 @@ export class CoolingEstimateDto {
   @ApiProperty({ type: AirExchangeDto }) airExchange: AirExchangeDto;
   @ApiProperty({ type: CoolingCapacityDto }) capacity: CoolingCapacityDto;
   @ApiProperty({ type: DesignDayDto }) designDay: DesignDayDto;
-  @ApiProperty({ type: PadSizingDto, nullable: true, description: 'null without evaporative pads' }) pads: PadSizingDto | null;
+  @ApiProperty({ type: PadSizingDto, nullable: true, description: 'null without evaporative pads' })
+  pads: PadSizingDto | null;
   @ApiProperty({ type: StagingDto }) staging: StagingDto;
   @ApiProperty({ type: WinterVentilationDto }) winterVentilation: WinterVentilationDto;
   @ApiProperty({ type: CoolingAssumptionDto, isArray: true }) assumptions: CoolingAssumptionDto[];
-  @ApiProperty({ type: String, isArray: true, description: `safety and planning cautions, to show with the result; ${PROSE_TOKENS_NOTE}` }) cautions: string[];
+  @ApiProperty({
+    type: String,
+    isArray: true,
+    description: `safety and planning cautions, to show with the result; ${PROSE_TOKENS_NOTE}`,
+  })
+  cautions: string[];
 }
 
 /** Where each condition came from: the request, or the default named. */
@@ -124,13 +140,17 @@ export class CoolingConditionsSourceDto {
   @ApiProperty({ enum: ['house length', 'request'] }) padToFanDistanceM: 'house length' | 'request';
   @ApiProperty({ enum: ['reference data', 'request'] }) transpirationFraction: 'reference data' | 'request';
   @ApiProperty({ enum: ['none', 'request'] }) evaporativePad: 'none' | 'request';
-  @ApiProperty({ enum: ['farm climate', 'reference data', 'request'] }) winterDesignC: 'farm climate' | 'reference data' | 'request';
+  @ApiProperty({ enum: ['farm climate', 'reference data', 'request'] }) winterDesignC:
+    'farm climate' | 'reference data' | 'request';
 }
 
 export class HouseCoolingEstimateDto extends CoolingEstimateDto {
   @ApiProperty() houseId: number;
   @ApiProperty({ type: CoolingSiteDto, description: 'the farm’s position and elevation' }) siteUsed: CoolingSiteDto;
-  @ApiProperty({ type: CoolingConditionsDto, description: 'what the engine ran with; optional values left out took the defaults listed in assumptions' })
+  @ApiProperty({
+    type: CoolingConditionsDto,
+    description: 'what the engine ran with; optional values left out took the defaults listed in assumptions',
+  })
   conditionsUsed: CoolingConditionsDto;
   @ApiProperty({ type: CoolingConditionsSourceDto }) conditionsSource: CoolingConditionsSourceDto;
 }

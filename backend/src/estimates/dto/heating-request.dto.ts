@@ -1,29 +1,57 @@
 import { ApiProperty, ApiPropertyOptional, PartialType } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
 import { IsBoolean, IsNumber, IsObject, IsOptional, Max, Min, ValidateNested } from 'class-validator';
-import { BOUNDS } from '../../engine/bounds';
+import { BOUNDS } from '@thermbay/engine/vocabulary';
 import { HouseSpecDto } from '../../houses/dto/house.dto';
 
 /** Conditions of the heating design night, as the engine takes them. */
 export class HeatingConditionsDto {
-  @ApiProperty({ minimum: BOUNDS.designOutdoorC.min, maximum: BOUNDS.designOutdoorC.max, description: 'winter design dry bulb (99 % or 99.6 %), °C' })
-  @IsNumber() @Min(BOUNDS.designOutdoorC.min) @Max(BOUNDS.designOutdoorC.max)
+  @ApiProperty({
+    minimum: BOUNDS.designOutdoorC.min,
+    maximum: BOUNDS.designOutdoorC.max,
+    description: 'winter design dry bulb (99 % or 99.6 %), °C',
+  })
+  @IsNumber()
+  @Min(BOUNDS.designOutdoorC.min)
+  @Max(BOUNDS.designOutdoorC.max)
   designOutdoorC: number;
 
-  @ApiProperty({ minimum: BOUNDS.elevationM.min, maximum: BOUNDS.elevationM.max, description: 'site elevation, m (sets air density)' })
-  @IsNumber() @Min(BOUNDS.elevationM.min) @Max(BOUNDS.elevationM.max)
+  @ApiProperty({
+    minimum: BOUNDS.elevationM.min,
+    maximum: BOUNDS.elevationM.max,
+    description: 'site elevation, m (sets air density)',
+  })
+  @IsNumber()
+  @Min(BOUNDS.elevationM.min)
+  @Max(BOUNDS.elevationM.max)
   elevationM: number;
 
-  @ApiProperty({ minimum: BOUNDS.relativeHumidityPct.min, maximum: BOUNDS.relativeHumidityPct.max, description: 'inside relative humidity on the design night, %' })
-  @IsNumber() @Min(BOUNDS.relativeHumidityPct.min) @Max(BOUNDS.relativeHumidityPct.max)
+  @ApiProperty({
+    minimum: BOUNDS.relativeHumidityPct.min,
+    maximum: BOUNDS.relativeHumidityPct.max,
+    description: 'inside relative humidity on the design night, %',
+  })
+  @IsNumber()
+  @Min(BOUNDS.relativeHumidityPct.min)
+  @Max(BOUNDS.relativeHumidityPct.max)
   insideRelativeHumidityPct: number;
 
-  @ApiPropertyOptional({ minimum: BOUNDS.setpointC.min, maximum: BOUNDS.setpointC.max, description: 'inside temperature to hold, °C; default the house night heating setpoint' })
-  @IsOptional() @IsNumber() @Min(BOUNDS.setpointC.min) @Max(BOUNDS.setpointC.max)
+  @ApiPropertyOptional({
+    minimum: BOUNDS.setpointC.min,
+    maximum: BOUNDS.setpointC.max,
+    description: 'inside temperature to hold, °C; default the house night heating setpoint',
+  })
+  @IsOptional()
+  @IsNumber()
+  @Min(BOUNDS.setpointC.min)
+  @Max(BOUNDS.setpointC.max)
   insideC?: number;
 
-  @ApiPropertyOptional({ description: 'credit a drawn curtain in the design loss; default false (heaters sized with the curtain open)' })
-  @IsOptional() @IsBoolean()
+  @ApiPropertyOptional({
+    description: 'credit a drawn curtain in the design loss; default false (heaters sized with the curtain open)',
+  })
+  @IsOptional()
+  @IsBoolean()
   curtainClosed?: boolean;
 }
 
@@ -32,12 +60,18 @@ export class PartialHeatingConditionsDto extends PartialType(HeatingConditionsDt
 /** POST /api/estimates: a house described in the request, nothing stored. */
 export class HeatingEstimateRequestDto {
   @ApiProperty({ type: HouseSpecDto }) @IsObject() @ValidateNested() @Type(() => HouseSpecDto) house: HouseSpecDto;
-  @ApiProperty({ type: HeatingConditionsDto }) @IsObject() @ValidateNested() @Type(() => HeatingConditionsDto) conditions: HeatingConditionsDto;
+  @ApiProperty({ type: HeatingConditionsDto })
+  @IsObject()
+  @ValidateNested()
+  @Type(() => HeatingConditionsDto)
+  conditions: HeatingConditionsDto;
 }
 
 /** POST /api/houses/:houseId/estimate: anything left out comes from the farm, its climate, the house or reference data. */
 export class HouseHeatingEstimateRequestDto {
   @ApiPropertyOptional({ type: PartialHeatingConditionsDto })
-  @IsOptional() @ValidateNested() @Type(() => PartialHeatingConditionsDto)
+  @IsOptional()
+  @ValidateNested()
+  @Type(() => PartialHeatingConditionsDto)
   conditions?: PartialHeatingConditionsDto;
 }

@@ -1,19 +1,25 @@
 import { ApiProperty } from '@nestjs/swagger';
-import { CONFIDENCE_MARKS } from '../../reference-data/load-reference-data';
-import { SURFACE_GROUPS, type SurfaceGroup } from '../../engine/house.types';
-import type { HeatLossComponentKey } from '../../engine/heating/heat-loss';
-import type { HeaterVerdict } from '../../engine/heating/heater-sizing';
-import { PROSE_TOKENS_NOTE } from '../../engine/prose';
+import { ASSUMPTION_CONFIDENCES } from '@thermbay/engine/vocabulary';
+import { SURFACE_GROUPS, type SurfaceGroup } from '@thermbay/engine/vocabulary';
+import type { HeatLossComponentKey } from '@thermbay/engine/heating/heat-loss';
+import type { HeaterVerdict } from '@thermbay/engine/heating/heater-sizing';
+import { PROSE_TOKENS_NOTE } from '@thermbay/engine/vocabulary';
 
 /*
  * The engine's HeatingEstimate, described class by class for the OpenAPI document so the
  * frontend's generated types match what the engine returns. Property names are the engine's.
  */
 
-export const HEAT_LOSS_COMPONENT_KEYS: readonly HeatLossComponentKey[] = ['roof', 'sidewalls', 'endwalls', 'perimeter', 'infiltration'];
+export const HEAT_LOSS_COMPONENT_KEYS: readonly HeatLossComponentKey[] = [
+  'roof',
+  'sidewalls',
+  'endwalls',
+  'perimeter',
+  'infiltration',
+];
 export const HEATER_VERDICTS: readonly HeaterVerdict[] = ['adequate', 'short', 'none-installed'];
 /** reference-data confidence marks, plus the values a user typed for this house */
-export const HEATING_ASSUMPTION_CONFIDENCES = [...CONFIDENCE_MARKS, 'user-entered'] as const;
+export const HEATING_ASSUMPTION_CONFIDENCES = ASSUMPTION_CONFIDENCES;
 
 export class HouseGeometrySummaryDto {
   @ApiProperty({ description: 'm²' }) floorAreaM2: number;
@@ -30,7 +36,10 @@ export class HeatLossComponentDto {
   @ApiProperty() label: string;
   @ApiProperty({ description: 'area (m²), perimeter (m) or volume (m³), see quantityUnit' }) quantity: number;
   @ApiProperty({ enum: ['m2', 'm', 'm3'] }) quantityUnit: 'm2' | 'm' | 'm3';
-  @ApiProperty({ description: 'U in W/(m²·K) for surfaces, F in W/(m·K) for the perimeter, air changes per hour for infiltration' }) coefficient: number;
+  @ApiProperty({
+    description: 'U in W/(m²·K) for surfaces, F in W/(m·K) for the perimeter, air changes per hour for infiltration',
+  })
+  coefficient: number;
   @ApiProperty({ description: 'W/K' }) conductanceWPerK: number;
   @ApiProperty({ description: 'loss at the design ΔT, W' }) watts: number;
   @ApiProperty({ minimum: 0, maximum: 1, description: 'share of the total, 0–1' }) share: number;
@@ -56,11 +65,19 @@ export class HeaterSizingDto {
   @ApiProperty({ description: 'W' }) installedOutputW: number;
   @ApiProperty({ enum: HEATER_VERDICTS }) verdict: HeaterVerdict;
   @ApiProperty({ description: 'W (0 when adequate)' }) shortfallW: number;
-  @ApiProperty({ type: Number, nullable: true, description: 'outdoor temperature at which the installed output just holds the inside temperature, °C' })
+  @ApiProperty({
+    type: Number,
+    nullable: true,
+    description: 'outdoor temperature at which the installed output just holds the inside temperature, °C',
+  })
   lowestHeldOutdoorC: number | null;
   @ApiProperty() unitCount: number;
   @ApiProperty({ description: 'W' }) largestUnitOutputW: number;
-  @ApiProperty({ type: Number, nullable: true, description: 'same with the largest unit out of service, °C; null without a second unit' })
+  @ApiProperty({
+    type: Number,
+    nullable: true,
+    description: 'same with the largest unit out of service, °C; null without a second unit',
+  })
   holdsWithLargestUnitOutC: number | null;
   @ApiProperty({ description: `how the output is split over units; ${PROSE_TOKENS_NOTE}` }) splitAdvice: string;
   @ApiProperty() fuelFired: boolean;
@@ -72,7 +89,8 @@ export class CondensationSurfaceDto {
   @ApiProperty({ description: 'W/(m²·K)' }) uWPerM2K: number;
   @ApiProperty({ description: '°C' }) insideSurfaceC: number;
   @ApiProperty() condenses: boolean;
-  @ApiProperty({ description: 'outdoor temperature below which water condenses on this surface, °C' }) condensationBelowOutdoorC: number;
+  @ApiProperty({ description: 'outdoor temperature below which water condenses on this surface, °C' })
+  condensationBelowOutdoorC: number;
 }
 
 export class CondensationDto {
@@ -90,7 +108,8 @@ export class HeatingAssumptionDto {
   @ApiProperty() unit: string;
   @ApiProperty() source: string;
   @ApiProperty({ enum: HEATING_ASSUMPTION_CONFIDENCES }) confidence: string;
-  @ApiProperty({ description: 'true when a value entered for the house replaced the reference value' }) overridden: boolean;
+  @ApiProperty({ description: 'true when a value entered for the house replaced the reference value' })
+  overridden: boolean;
 }
 
 export class HeatingEstimateDto {
@@ -99,7 +118,12 @@ export class HeatingEstimateDto {
   @ApiProperty({ type: HeaterSizingDto }) heater: HeaterSizingDto;
   @ApiProperty({ type: CondensationDto }) condensation: CondensationDto;
   @ApiProperty({ type: HeatingAssumptionDto, isArray: true }) assumptions: HeatingAssumptionDto[];
-  @ApiProperty({ type: String, isArray: true, description: `safety and planning cautions, to show with the result; ${PROSE_TOKENS_NOTE}` }) cautions: string[];
+  @ApiProperty({
+    type: String,
+    isArray: true,
+    description: `safety and planning cautions, to show with the result; ${PROSE_TOKENS_NOTE}`,
+  })
+  cautions: string[];
 }
 
 /** Conditions the per-house estimate ran with, every default filled in. */

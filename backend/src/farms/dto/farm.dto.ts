@@ -1,7 +1,18 @@
 import { ApiProperty, PartialType } from '@nestjs/swagger';
-import { IsEmail, IsIn, IsNumber, IsString, Length, Max, Min, Validate, ValidatorConstraint, type ValidatorConstraintInterface } from 'class-validator';
+import {
+  IsEmail,
+  IsIn,
+  IsNumber,
+  IsString,
+  Length,
+  Max,
+  Min,
+  Validate,
+  ValidatorConstraint,
+  type ValidatorConstraintInterface,
+} from 'class-validator';
 import { FARM_ROLES, PERMISSIONS, type FarmRole, type Permission } from '../../common/permissions';
-import { BOUNDS } from '../../engine/bounds';
+import { BOUNDS } from '@thermbay/engine/vocabulary';
 
 @ValidatorConstraint({ name: 'ianaTimeZone' })
 export class IsIanaTimeZone implements ValidatorConstraintInterface {
@@ -22,16 +33,30 @@ export class IsIanaTimeZone implements ValidatorConstraintInterface {
 export class CreateFarmDto {
   @ApiProperty({ example: 'North Ridge Produce' }) @IsString() @Length(1, 120) name: string;
 
-  @ApiProperty({ minimum: BOUNDS.latitudeDeg.min, maximum: BOUNDS.latitudeDeg.max, description: 'degrees, north positive' })
-  @IsNumber() @Min(BOUNDS.latitudeDeg.min) @Max(BOUNDS.latitudeDeg.max)
+  @ApiProperty({
+    minimum: BOUNDS.latitudeDeg.min,
+    maximum: BOUNDS.latitudeDeg.max,
+    description: 'degrees, north positive',
+  })
+  @IsNumber()
+  @Min(BOUNDS.latitudeDeg.min)
+  @Max(BOUNDS.latitudeDeg.max)
   latitudeDeg: number;
 
-  @ApiProperty({ minimum: BOUNDS.longitudeDeg.min, maximum: BOUNDS.longitudeDeg.max, description: 'degrees, east positive' })
-  @IsNumber() @Min(BOUNDS.longitudeDeg.min) @Max(BOUNDS.longitudeDeg.max)
+  @ApiProperty({
+    minimum: BOUNDS.longitudeDeg.min,
+    maximum: BOUNDS.longitudeDeg.max,
+    description: 'degrees, east positive',
+  })
+  @IsNumber()
+  @Min(BOUNDS.longitudeDeg.min)
+  @Max(BOUNDS.longitudeDeg.max)
   longitudeDeg: number;
 
   @ApiProperty({ minimum: BOUNDS.elevationM.min, maximum: BOUNDS.elevationM.max, description: 'm above sea level' })
-  @IsNumber() @Min(BOUNDS.elevationM.min) @Max(BOUNDS.elevationM.max)
+  @IsNumber()
+  @Min(BOUNDS.elevationM.min)
+  @Max(BOUNDS.elevationM.max)
   elevationM: number;
 
   @ApiProperty({ example: 'America/Chicago' }) @Validate(IsIanaTimeZone) timeZone: string;
@@ -79,4 +104,3 @@ export class RolePermissionsDto {
 export class PermissionsDto {
   @ApiProperty({ type: RolePermissionsDto }) roles: RolePermissionsDto;
 }
-

@@ -16,96 +16,164 @@ import {
   Min,
   ValidateNested,
 } from 'class-validator';
-import { BOUNDS } from '../../engine/bounds';
-import { HOUSE_SHAPES, type HouseShape } from '../../engine/house.types';
+import { BOUNDS } from '@thermbay/engine/vocabulary';
+import { HOUSE_SHAPES, type HouseShape } from '@thermbay/engine/vocabulary';
 
 const range = (name: keyof typeof BOUNDS) => ({ minimum: BOUNDS[name].min, maximum: BOUNDS[name].max });
 
 export class CoveringsDto {
-  @ApiProperty({ description: 'reference-data coverings id', example: 'poly-double-inflated' }) @IsString() @Length(1, 80) roof: string;
+  @ApiProperty({ description: 'reference-data coverings id', example: 'poly-double-inflated' })
+  @IsString()
+  @Length(1, 80)
+  roof: string;
   @ApiProperty({ description: 'reference-data coverings id' }) @IsString() @Length(1, 80) sidewalls: string;
   @ApiProperty({ description: 'reference-data coverings id' }) @IsString() @Length(1, 80) endwalls: string;
 }
 
 export class CoveringOverridesDto {
   @ApiPropertyOptional({ ...range('uValueWPerM2K'), description: 'W/(m²·K)' })
-  @IsOptional() @IsNumber() @Min(BOUNDS.uValueWPerM2K.min) @Max(BOUNDS.uValueWPerM2K.max)
+  @IsOptional()
+  @IsNumber()
+  @Min(BOUNDS.uValueWPerM2K.min)
+  @Max(BOUNDS.uValueWPerM2K.max)
   roof?: number;
 
   @ApiPropertyOptional({ ...range('uValueWPerM2K'), description: 'W/(m²·K)' })
-  @IsOptional() @IsNumber() @Min(BOUNDS.uValueWPerM2K.min) @Max(BOUNDS.uValueWPerM2K.max)
+  @IsOptional()
+  @IsNumber()
+  @Min(BOUNDS.uValueWPerM2K.min)
+  @Max(BOUNDS.uValueWPerM2K.max)
   sidewalls?: number;
 
   @ApiPropertyOptional({ ...range('uValueWPerM2K'), description: 'W/(m²·K)' })
-  @IsOptional() @IsNumber() @Min(BOUNDS.uValueWPerM2K.min) @Max(BOUNDS.uValueWPerM2K.max)
+  @IsOptional()
+  @IsNumber()
+  @Min(BOUNDS.uValueWPerM2K.min)
+  @Max(BOUNDS.uValueWPerM2K.max)
   endwalls?: number;
 }
 
 export class HeaterGroupDto {
-  @ApiProperty({ minimum: 1, maximum: BOUNDS.heaterCount.max }) @IsInt() @Min(1) @Max(BOUNDS.heaterCount.max) count: number;
+  @ApiProperty({ minimum: 1, maximum: BOUNDS.heaterCount.max })
+  @IsInt()
+  @Min(1)
+  @Max(BOUNDS.heaterCount.max)
+  count: number;
 
   @ApiProperty({ ...range('heaterInputW'), description: 'rated input of one unit, W' })
-  @IsNumber() @Min(BOUNDS.heaterInputW.min) @Max(BOUNDS.heaterInputW.max)
+  @IsNumber()
+  @Min(BOUNDS.heaterInputW.min)
+  @Max(BOUNDS.heaterInputW.max)
   ratedInputW: number;
 
   @ApiProperty({ ...range('heaterEfficiency'), description: 'output ÷ input, 0–1' })
-  @IsNumber() @Min(BOUNDS.heaterEfficiency.min) @Max(BOUNDS.heaterEfficiency.max)
+  @IsNumber()
+  @Min(BOUNDS.heaterEfficiency.min)
+  @Max(BOUNDS.heaterEfficiency.max)
   efficiency: number;
 
-  @ApiProperty({ description: 'reference-data fuels id', example: 'propane' }) @IsString() @Length(1, 80) fuelId: string;
+  @ApiProperty({ description: 'reference-data fuels id', example: 'propane' })
+  @IsString()
+  @Length(1, 80)
+  fuelId: string;
 }
 
 export class ExhaustFansDto {
   @ApiProperty({ ...range('fanCount') }) @IsInt() @Min(BOUNDS.fanCount.min) @Max(BOUNDS.fanCount.max) count: number;
 
   @ApiProperty({ ...range('fanCapacityM3PerS'), description: 'm³/s moved by one fan at working static pressure' })
-  @IsNumber() @Min(BOUNDS.fanCapacityM3PerS.min) @Max(BOUNDS.fanCapacityM3PerS.max)
+  @IsNumber()
+  @Min(BOUNDS.fanCapacityM3PerS.min)
+  @Max(BOUNDS.fanCapacityM3PerS.max)
   capacityEachM3PerS: number;
 }
 
 export class SetpointsDto {
-  @ApiProperty({ ...range('setpointC') }) @IsNumber() @Min(BOUNDS.setpointC.min) @Max(BOUNDS.setpointC.max) dayHeatingC: number;
-  @ApiProperty({ ...range('setpointC') }) @IsNumber() @Min(BOUNDS.setpointC.min) @Max(BOUNDS.setpointC.max) nightHeatingC: number;
-  @ApiProperty({ ...range('setpointC') }) @IsNumber() @Min(BOUNDS.setpointC.min) @Max(BOUNDS.setpointC.max) coolingC: number;
+  @ApiProperty({ ...range('setpointC') })
+  @IsNumber()
+  @Min(BOUNDS.setpointC.min)
+  @Max(BOUNDS.setpointC.max)
+  dayHeatingC: number;
+  @ApiProperty({ ...range('setpointC') })
+  @IsNumber()
+  @Min(BOUNDS.setpointC.min)
+  @Max(BOUNDS.setpointC.max)
+  nightHeatingC: number;
+  @ApiProperty({ ...range('setpointC') })
+  @IsNumber()
+  @Min(BOUNDS.setpointC.min)
+  @Max(BOUNDS.setpointC.max)
+  coolingC: number;
 }
 
 /** The physical description of a house, shared by stored houses and the stateless estimate. */
 export class HouseSpecDto {
   @ApiProperty({ enum: HOUSE_SHAPES }) @IsIn(HOUSE_SHAPES) shape: HouseShape;
   @ApiProperty({ ...range('spans') }) @IsInt() @Min(BOUNDS.spans.min) @Max(BOUNDS.spans.max) spans: number;
-  @ApiProperty({ ...range('widthM'), description: 'width of one span, m' }) @IsNumber() @Min(BOUNDS.widthM.min) @Max(BOUNDS.widthM.max) widthM: number;
+  @ApiProperty({ ...range('widthM'), description: 'width of one span, m' })
+  @IsNumber()
+  @Min(BOUNDS.widthM.min)
+  @Max(BOUNDS.widthM.max)
+  widthM: number;
   @ApiProperty({ ...range('lengthM') }) @IsNumber() @Min(BOUNDS.lengthM.min) @Max(BOUNDS.lengthM.max) lengthM: number;
   @ApiProperty({ ...range('eaveHeightM'), description: 'sidewall or gutter height, m' })
-  @IsNumber() @Min(BOUNDS.eaveHeightM.min) @Max(BOUNDS.eaveHeightM.max)
+  @IsNumber()
+  @Min(BOUNDS.eaveHeightM.min)
+  @Max(BOUNDS.eaveHeightM.max)
   eaveHeightM: number;
-  @ApiProperty({ ...range('ridgeHeightM') }) @IsNumber() @Min(BOUNDS.ridgeHeightM.min) @Max(BOUNDS.ridgeHeightM.max) ridgeHeightM: number;
+  @ApiProperty({ ...range('ridgeHeightM') })
+  @IsNumber()
+  @Min(BOUNDS.ridgeHeightM.min)
+  @Max(BOUNDS.ridgeHeightM.max)
+  ridgeHeightM: number;
 
   @ApiProperty({ type: CoveringsDto }) @IsObject() @ValidateNested() @Type(() => CoveringsDto) coverings: CoveringsDto;
 
   @ApiPropertyOptional({ type: CoveringOverridesDto, description: "a maker's U-value replacing the reference value" })
-  @IsOptional() @ValidateNested() @Type(() => CoveringOverridesDto)
+  @IsOptional()
+  @ValidateNested()
+  @Type(() => CoveringOverridesDto)
   coveringUOverridesWPerM2K?: CoveringOverridesDto;
 
   @ApiProperty({ description: 'reference-data air-leakage id' }) @IsString() @Length(1, 80) airLeakageClassId: string;
 
-  @ApiPropertyOptional({ ...range('airChangesPerHour'), nullable: true, type: Number, description: 'measured air changes per hour' })
-  @IsOptional() @IsNumber() @Min(BOUNDS.airChangesPerHour.min) @Max(BOUNDS.airChangesPerHour.max)
+  @ApiPropertyOptional({
+    ...range('airChangesPerHour'),
+    nullable: true,
+    type: Number,
+    description: 'measured air changes per hour',
+  })
+  @IsOptional()
+  @IsNumber()
+  @Min(BOUNDS.airChangesPerHour.min)
+  @Max(BOUNDS.airChangesPerHour.max)
   airChangesPerHourOverride?: number | null;
 
   @ApiProperty() @IsBoolean() perimeterInsulated: boolean;
 
   @ApiPropertyOptional({ nullable: true, type: String, description: 'reference-data curtains id, drawn at night' })
-  @IsOptional() @IsString() @Length(1, 80)
+  @IsOptional()
+  @IsString()
+  @Length(1, 80)
   curtainId?: string | null;
 
   @ApiProperty({ type: HeaterGroupDto, isArray: true, maxItems: BOUNDS.heaterGroups.max })
-  @IsArray() @ArrayMaxSize(BOUNDS.heaterGroups.max) @ValidateNested({ each: true }) @Type(() => HeaterGroupDto)
+  @IsArray()
+  @ArrayMaxSize(BOUNDS.heaterGroups.max)
+  @ValidateNested({ each: true })
+  @Type(() => HeaterGroupDto)
   heaters: HeaterGroupDto[];
 
-  @ApiProperty({ type: ExhaustFansDto }) @IsObject() @ValidateNested() @Type(() => ExhaustFansDto) exhaustFans: ExhaustFansDto;
+  @ApiProperty({ type: ExhaustFansDto })
+  @IsObject()
+  @ValidateNested()
+  @Type(() => ExhaustFansDto)
+  exhaustFans: ExhaustFansDto;
 
   @ApiProperty({ ...range('inletAreaM2'), description: 'free louvre or inlet area, m²' })
-  @IsNumber() @Min(BOUNDS.inletAreaM2.min) @Max(BOUNDS.inletAreaM2.max)
+  @IsNumber()
+  @Min(BOUNDS.inletAreaM2.min)
+  @Max(BOUNDS.inletAreaM2.max)
   inletAreaM2: number;
 
   @ApiProperty({ type: SetpointsDto }) @IsObject() @ValidateNested() @Type(() => SetpointsDto) setpoints: SetpointsDto;
@@ -113,10 +181,13 @@ export class HouseSpecDto {
 
 export class CreateHouseDto extends HouseSpecDto {
   @ApiProperty({ example: 'House 3', maxLength: BOUNDS.nameLength.max })
-  @IsString() @Length(BOUNDS.nameLength.min, BOUNDS.nameLength.max)
+  @IsString()
+  @Length(BOUNDS.nameLength.min, BOUNDS.nameLength.max)
   name: string;
   @ApiPropertyOptional({ nullable: true, type: String, maxLength: BOUNDS.notesLength.max })
-  @IsOptional() @IsString() @MaxLength(BOUNDS.notesLength.max)
+  @IsOptional()
+  @IsString()
+  @MaxLength(BOUNDS.notesLength.max)
   notes?: string | null;
 }
 

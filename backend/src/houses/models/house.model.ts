@@ -1,5 +1,6 @@
 import { BelongsTo, Column, DataType, ForeignKey, Model, Table } from 'sequelize-typescript';
-import type { ExhaustFans, HeaterGroup, HouseShape, Setpoints, SurfaceGroup } from '../../engine/house.types';
+import type { HouseShape, SurfaceGroup } from '@thermbay/engine/vocabulary';
+import type { ExhaustFans, HeaterGroup, Setpoints } from '@thermbay/engine/house.types';
 import { Farm } from '../../farms/models/farm.model';
 
 /** A stored house. Every number is SI; nested groups are JSON columns mapped 1:1 onto HouseSpec. */

@@ -1,7 +1,19 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
-import { ArrayMaxSize, IsArray, IsIn, IsNumber, IsOptional, IsString, Matches, Max, MaxLength, Min, ValidateNested } from 'class-validator';
-import { BOUNDS } from '../../engine/bounds';
+import {
+  ArrayMaxSize,
+  IsArray,
+  IsIn,
+  IsNumber,
+  IsOptional,
+  IsString,
+  Matches,
+  Max,
+  MaxLength,
+  Min,
+  ValidateNested,
+} from 'class-validator';
+import { BOUNDS } from '@thermbay/engine/vocabulary';
 
 const MONTH_DAY = /^\d{2}-\d{2}$/;
 
@@ -16,15 +28,33 @@ export class ProductionPeriodDto {
 
   @ApiProperty({ enum: ['heated', 'empty'] }) @IsIn(['heated', 'empty']) mode: 'heated' | 'empty';
 
-  @ApiPropertyOptional({ minimum: BOUNDS.setpointC.min, maximum: BOUNDS.setpointC.max, description: "replaces the house's day heating setpoint in this period, °C" })
-  @IsOptional() @IsNumber() @Min(BOUNDS.setpointC.min) @Max(BOUNDS.setpointC.max)
+  @ApiPropertyOptional({
+    minimum: BOUNDS.setpointC.min,
+    maximum: BOUNDS.setpointC.max,
+    description: "replaces the house's day heating setpoint in this period, °C",
+  })
+  @IsOptional()
+  @IsNumber()
+  @Min(BOUNDS.setpointC.min)
+  @Max(BOUNDS.setpointC.max)
   dayHeatingC?: number;
 
-  @ApiPropertyOptional({ minimum: BOUNDS.setpointC.min, maximum: BOUNDS.setpointC.max, description: "replaces the house's night heating setpoint in this period, °C" })
-  @IsOptional() @IsNumber() @Min(BOUNDS.setpointC.min) @Max(BOUNDS.setpointC.max)
+  @ApiPropertyOptional({
+    minimum: BOUNDS.setpointC.min,
+    maximum: BOUNDS.setpointC.max,
+    description: "replaces the house's night heating setpoint in this period, °C",
+  })
+  @IsOptional()
+  @IsNumber()
+  @Min(BOUNDS.setpointC.min)
+  @Max(BOUNDS.setpointC.max)
   nightHeatingC?: number;
 
-  @ApiPropertyOptional({ maxLength: 100, example: 'Spring bedding crop' }) @IsOptional() @IsString() @MaxLength(100) label?: string;
+  @ApiPropertyOptional({ maxLength: 100, example: 'Spring bedding crop' })
+  @IsOptional()
+  @IsString()
+  @MaxLength(100)
+  label?: string;
 }
 
 export class PutProductionCalendarDto {
@@ -32,9 +62,13 @@ export class PutProductionCalendarDto {
     type: ProductionPeriodDto,
     isArray: true,
     maxItems: 24,
-    description: 'empty list = heated all season at the house setpoints; otherwise days no period covers are unheated, and where periods overlap the later one wins',
+    description:
+      'empty list = heated all season at the house setpoints; otherwise days no period covers are unheated, and where periods overlap the later one wins',
   })
-  @IsArray() @ArrayMaxSize(24) @ValidateNested({ each: true }) @Type(() => ProductionPeriodDto)
+  @IsArray()
+  @ArrayMaxSize(24)
+  @ValidateNested({ each: true })
+  @Type(() => ProductionPeriodDto)
   periods: ProductionPeriodDto[];
 }
 

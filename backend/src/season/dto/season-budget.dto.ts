@@ -1,7 +1,7 @@
 import { ApiProperty } from '@nestjs/swagger';
-import type { PriceUnit } from '../../engine/season/fuel';
+import type { PriceUnit } from '@thermbay/engine/season/fuel';
 import { PRICE_UNITS } from './season-request.dto';
-import { PROSE_TOKENS_NOTE } from '../../engine/prose';
+import { PROSE_TOKENS_NOTE } from '@thermbay/engine/vocabulary';
 
 export class BudgetMonthOfHouseDto {
   @ApiProperty() year: number;
@@ -10,15 +10,22 @@ export class BudgetMonthOfHouseDto {
   @ApiProperty({ description: 'fuel burnt, kWh' }) fuelInputKWh: number;
   @ApiProperty() fuelQuantitySi: number;
   @ApiProperty() fuelQuantityUs: number;
-  @ApiProperty({ type: Number, nullable: true, description: 'null when the farm has no price for the fuel' }) cost: number | null;
+  @ApiProperty({ type: Number, nullable: true, description: 'null when the farm has no price for the fuel' }) cost:
+    number | null;
   @ApiProperty({ minimum: 0, description: 'heat the heaters could not deliver, kWh' }) unmetHeatKWh: number;
-  @ApiProperty({ minimum: 0, description: 'hours in which the heaters could not hold the setpoint' }) hoursBelowSetpoint: number;
+  @ApiProperty({ minimum: 0, description: 'hours in which the heaters could not hold the setpoint' })
+  hoursBelowSetpoint: number;
 }
 
 export class BudgetHouseDto {
   @ApiProperty() houseId: number;
   @ApiProperty() name: string;
-  @ApiProperty({ type: String, nullable: true, description: 'fuel of the first heater; null when the house has no heaters' }) fuelId: string | null;
+  @ApiProperty({
+    type: String,
+    nullable: true,
+    description: 'fuel of the first heater; null when the house has no heaters',
+  })
+  fuelId: string | null;
   @ApiProperty({ type: String, nullable: true }) fuelLabel: string | null;
   @ApiProperty({ type: String, nullable: true }) unitSi: string | null;
   @ApiProperty({ type: String, nullable: true }) unitUs: string | null;
@@ -29,15 +36,27 @@ export class BudgetHouseDto {
   @ApiProperty({ description: 'fuel burnt, kWh' }) fuelInputKWh: number;
   @ApiProperty({ description: "in the fuel's unitSi" }) fuelQuantitySi: number;
   @ApiProperty({ description: "in the fuel's unitUs" }) fuelQuantityUs: number;
-  @ApiProperty({ type: Number, nullable: true, description: 'null when the farm has no price for the fuel' }) cost: number | null;
+  @ApiProperty({ type: Number, nullable: true, description: 'null when the farm has no price for the fuel' }) cost:
+    number | null;
   @ApiProperty() heatedDays: number;
-  @ApiProperty({ description: "periods of the house's production calendar (0 = heated all season)" }) calendarPeriodCount: number;
+  @ApiProperty({ description: "periods of the house's production calendar (0 = heated all season)" })
+  calendarPeriodCount: number;
   @ApiProperty({ minimum: 0, description: "heat the house's heaters could not deliver, kWh" }) unmetHeatKWh: number;
-  @ApiProperty({ minimum: 0, description: 'hours in which the heaters could not hold the setpoint' }) hoursBelowSetpoint: number;
-  @ApiProperty({ type: String, nullable: true, description: `set when the heaters cannot hold the setpoint in some hour; ${PROSE_TOKENS_NOTE}` })
+  @ApiProperty({ minimum: 0, description: 'hours in which the heaters could not hold the setpoint' })
+  hoursBelowSetpoint: number;
+  @ApiProperty({
+    type: String,
+    nullable: true,
+    description: `set when the heaters cannot hold the setpoint in some hour; ${PROSE_TOKENS_NOTE}`,
+  })
   capacityCaution: string | null;
   @ApiProperty({ type: BudgetMonthOfHouseDto, isArray: true }) monthly: BudgetMonthOfHouseDto[];
-  @ApiProperty({ type: String, nullable: true, description: 'why the house is not (fully) budgeted, e.g. no heaters or no price' }) problem: string | null;
+  @ApiProperty({
+    type: String,
+    nullable: true,
+    description: 'why the house is not (fully) budgeted, e.g. no heaters or no price',
+  })
+  problem: string | null;
 }
 
 export class BudgetFuelTotalDto {
@@ -50,7 +69,8 @@ export class BudgetFuelTotalDto {
   @ApiProperty({ description: 'kWh' }) fuelInputKWh: number;
   @ApiProperty() fuelQuantitySi: number;
   @ApiProperty() fuelQuantityUs: number;
-  @ApiProperty({ type: Number, nullable: true, description: 'null when the farm has no price for the fuel' }) cost: number | null;
+  @ApiProperty({ type: Number, nullable: true, description: 'null when the farm has no price for the fuel' }) cost:
+    number | null;
 }
 
 export class BudgetMonthFuelDto {
@@ -72,14 +92,16 @@ export class SeasonBudgetDto {
   @ApiProperty() farmId: number;
   @ApiProperty() startDate: string;
   @ApiProperty() endDate: string;
-  @ApiProperty({ enum: ['request', 'default-heating-season', 'temperature-log'] }) seasonFrom: 'request' | 'default-heating-season' | 'temperature-log';
+  @ApiProperty({ enum: ['request', 'default-heating-season', 'temperature-log'] }) seasonFrom:
+    'request' | 'default-heating-season' | 'temperature-log';
   @ApiProperty({ enum: ['normals', 'temperature-log'] }) climateSource: 'normals' | 'temperature-log';
   @ApiProperty({ type: Number, nullable: true }) temperatureLogId: number | null;
   @ApiProperty({ type: BudgetHouseDto, isArray: true }) houses: BudgetHouseDto[];
   @ApiProperty({ type: BudgetFuelTotalDto, isArray: true }) byFuel: BudgetFuelTotalDto[];
   @ApiProperty({ description: 'heat delivered to all houses, kWh' }) totalEnergyKWh: number;
   @ApiProperty({ description: 'sum of the priced houses' }) totalCost: number;
-  @ApiProperty({ description: 'false when some house has no price (or no heaters) and is left out of totalCost' }) costComplete: boolean;
+  @ApiProperty({ description: 'false when some house has no price (or no heaters) and is left out of totalCost' })
+  costComplete: boolean;
   @ApiProperty({ type: BudgetMonthDto, isArray: true }) monthly: BudgetMonthDto[];
   @ApiProperty({ type: String, isArray: true, description: PROSE_TOKENS_NOTE }) notes: string[];
   @ApiProperty({ type: String, isArray: true, description: PROSE_TOKENS_NOTE }) cautions: string[];

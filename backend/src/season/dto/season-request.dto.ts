@@ -17,9 +17,9 @@ import {
   ValidateNested,
   type ValidationOptions,
 } from 'class-validator';
-import { BOUNDS } from '../../engine/bounds';
-import type { PriceUnit } from '../../engine/season/fuel';
-import { MEASURE_KINDS, type MeasureKind } from '../../engine/season/measures';
+import { BOUNDS } from '@thermbay/engine/vocabulary';
+import type { PriceUnit } from '@thermbay/engine/season/fuel';
+import { MEASURE_KINDS, type MeasureKind } from '@thermbay/engine/season/measures';
 
 export const PRICE_UNITS: readonly PriceUnit[] = ['si', 'us'];
 const ISO_DATE = /^\d{4}-\d{2}-\d{2}$/;
@@ -34,7 +34,8 @@ export type ClimateSource = 'normals' | TemperatureLogClimateSourceDto;
 
 export const CLIMATE_SOURCE_SCHEMA = {
   oneOf: [{ type: 'string', enum: ['normals'] }, { $ref: getSchemaPath(TemperatureLogClimateSourceDto) }],
-  description: "'normals' (default: the farm's monthly climate normals) or { temperatureLogId } to use a logged year instead",
+  description:
+    "'normals' (default: the farm's monthly climate normals) or { temperatureLogId } to use a logged year instead",
 };
 
 function IsClimateSource(options?: ValidationOptions): PropertyDecorator {
@@ -59,19 +60,33 @@ function IsClimateSource(options?: ValidationOptions): PropertyDecorator {
 /** Options every per-house season calculation shares; each defaults from the house and the farm. */
 export class SeasonOptionsDto {
   @ApiPropertyOptional(CLIMATE_SOURCE_SCHEMA)
-  @IsOptional() @IsClimateSource()
+  @IsOptional()
+  @IsClimateSource()
   climateSource?: ClimateSource;
 
   @ApiPropertyOptional({ description: "reference-data fuels id; default: the fuel of the house's first heater" })
-  @IsOptional() @IsString() @MaxLength(100)
+  @IsOptional()
+  @IsString()
+  @MaxLength(100)
   fuelId?: string;
 
-  @ApiPropertyOptional({ minimum: 0, maximum: 1e6, description: "money per purchase unit; default: the farm's price for the fuel" })
-  @IsOptional() @IsNumber() @Min(0) @Max(1e6)
+  @ApiPropertyOptional({
+    minimum: 0,
+    maximum: 1e6,
+    description: "money per purchase unit; default: the farm's price for the fuel",
+  })
+  @IsOptional()
+  @IsNumber()
+  @Min(0)
+  @Max(1e6)
   pricePerUnit?: number;
 
-  @ApiPropertyOptional({ enum: PRICE_UNITS, description: "unit the given pricePerUnit is per: 'si' (the fuel's unitSi, default) or 'us' (its unitUs)" })
-  @IsOptional() @IsIn(PRICE_UNITS)
+  @ApiPropertyOptional({
+    enum: PRICE_UNITS,
+    description: "unit the given pricePerUnit is per: 'si' (the fuel's unitSi, default) or 'us' (its unitUs)",
+  })
+  @IsOptional()
+  @IsIn(PRICE_UNITS)
   priceUnit?: PriceUnit;
 
   @ApiPropertyOptional({
@@ -79,7 +94,10 @@ export class SeasonOptionsDto {
     maximum: BOUNDS.heaterEfficiency.max,
     description: "output ÷ input; default: the efficiency of the house's first heater burning the fuel",
   })
-  @IsOptional() @IsNumber() @Min(BOUNDS.heaterEfficiency.min) @Max(BOUNDS.heaterEfficiency.max)
+  @IsOptional()
+  @IsNumber()
+  @Min(BOUNDS.heaterEfficiency.min)
+  @Max(BOUNDS.heaterEfficiency.max)
   heaterEfficiency?: number;
 }
 
@@ -89,11 +107,16 @@ export class SeasonRequestDto extends SeasonOptionsDto {
     description:
       'first day, YYYY-MM-DD; give both dates or neither. Default: the heating season in progress or, between seasons, the next one (1 Sep – 31 May north of the equator, 1 Mar – 30 Nov south); with a temperature log, the whole days the log covers (at most 366)',
   })
-  @IsOptional() @Matches(ISO_DATE, { message: 'startDate must be written YYYY-MM-DD' })
+  @IsOptional()
+  @Matches(ISO_DATE, { message: 'startDate must be written YYYY-MM-DD' })
   startDate?: string;
 
-  @ApiPropertyOptional({ example: '2027-05-31', description: 'last day (inclusive), YYYY-MM-DD; at most 366 days from startDate' })
-  @IsOptional() @Matches(ISO_DATE, { message: 'endDate must be written YYYY-MM-DD' })
+  @ApiPropertyOptional({
+    example: '2027-05-31',
+    description: 'last day (inclusive), YYYY-MM-DD; at most 366 days from startDate',
+  })
+  @IsOptional()
+  @Matches(ISO_DATE, { message: 'endDate must be written YYYY-MM-DD' })
   endDate?: string;
 }
 
@@ -102,17 +125,34 @@ export class NightDemandRequestDto extends SeasonOptionsDto {
   @Matches(ISO_DATE, { message: 'date must be written YYYY-MM-DD' })
   date: string;
 
-  @ApiPropertyOptional({ minimum: BOUNDS.setpointC.min, maximum: BOUNDS.setpointC.max, description: "°C; default: the house's night setpoint" })
-  @IsOptional() @IsNumber() @Min(BOUNDS.setpointC.min) @Max(BOUNDS.setpointC.max)
+  @ApiPropertyOptional({
+    minimum: BOUNDS.setpointC.min,
+    maximum: BOUNDS.setpointC.max,
+    description: "°C; default: the house's night setpoint",
+  })
+  @IsOptional()
+  @IsNumber()
+  @Min(BOUNDS.setpointC.min)
+  @Max(BOUNDS.setpointC.max)
   nightSetpointC?: number;
 }
 
 export class MeasureFuelPriceDto {
   @ApiProperty({ description: 'reference-data fuels id' }) @IsString() @MaxLength(100) fuelId: string;
-  @ApiPropertyOptional({ minimum: 0, maximum: 1e6, description: 'without a price the fuel switch is reported as not applicable' })
-  @IsOptional() @IsNumber() @Min(0) @Max(1e6)
+  @ApiPropertyOptional({
+    minimum: 0,
+    maximum: 1e6,
+    description: 'without a price the fuel switch is reported as not applicable',
+  })
+  @IsOptional()
+  @IsNumber()
+  @Min(0)
+  @Max(1e6)
   pricePerUnit?: number;
-  @ApiPropertyOptional({ enum: PRICE_UNITS, description: 'needed with a price' }) @IsOptional() @IsIn(PRICE_UNITS) priceUnit?: PriceUnit;
+  @ApiPropertyOptional({ enum: PRICE_UNITS, description: 'needed with a price' })
+  @IsOptional()
+  @IsIn(PRICE_UNITS)
+  priceUnit?: PriceUnit;
 }
 
 /** One energy measure; only the settings of its kind apply, the rest default from reference-data/measures.json. */
@@ -124,43 +164,94 @@ export class MeasureDto {
     nullable: true,
     minimum: 0,
     maximum: 1e9,
-    description: 'what the measure costs, same currency as the fuel price; omit (or null) when not known yet: the payback then asks for it',
+    description:
+      'what the measure costs, same currency as the fuel price; omit (or null) when not known yet: the payback then asks for it',
   })
-  @IsOptional() @IsNumber() @Min(0) @Max(1e9)
+  @IsOptional()
+  @IsNumber()
+  @Min(0)
+  @Max(1e9)
   costAmount?: number | null;
 
   @ApiPropertyOptional({ maxLength: 100 }) @IsOptional() @IsString() @MaxLength(100) label?: string;
 
-  @ApiPropertyOptional({ enum: ['roof', 'sidewalls'], isArray: true, description: 'second-poly-layer: surfaces to cover' })
-  @IsOptional() @IsArray() @ArrayMinSize(1) @ArrayMaxSize(2) @IsIn(['roof', 'sidewalls'], { each: true })
+  @ApiPropertyOptional({
+    enum: ['roof', 'sidewalls'],
+    isArray: true,
+    description: 'second-poly-layer: surfaces to cover',
+  })
+  @IsOptional()
+  @IsArray()
+  @ArrayMinSize(1)
+  @ArrayMaxSize(2)
+  @IsIn(['roof', 'sidewalls'], { each: true })
   surfaces?: Array<'roof' | 'sidewalls'>;
 
   @ApiPropertyOptional({ description: 'second-poly-layer: the coverings id the surfaces become' })
-  @IsOptional() @IsString() @MaxLength(100)
+  @IsOptional()
+  @IsString()
+  @MaxLength(100)
   coveringId?: string;
 
-  @ApiPropertyOptional({ description: 'thermal-curtain: curtains id' }) @IsOptional() @IsString() @MaxLength(100) curtainId?: string;
+  @ApiPropertyOptional({ description: 'thermal-curtain: curtains id' })
+  @IsOptional()
+  @IsString()
+  @MaxLength(100)
+  curtainId?: string;
 
-  @ApiPropertyOptional({ description: 'sealing: air-leakage class to reach' }) @IsOptional() @IsString() @MaxLength(100) airLeakageClassId?: string;
+  @ApiPropertyOptional({ description: 'sealing: air-leakage class to reach' })
+  @IsOptional()
+  @IsString()
+  @MaxLength(100)
+  airLeakageClassId?: string;
 
-  @ApiPropertyOptional({ minimum: BOUNDS.airChangesPerHour.min, maximum: BOUNDS.airChangesPerHour.max, description: 'sealing: measured air changes per hour after sealing' })
-  @IsOptional() @IsNumber() @Min(BOUNDS.airChangesPerHour.min) @Max(BOUNDS.airChangesPerHour.max)
+  @ApiPropertyOptional({
+    minimum: BOUNDS.airChangesPerHour.min,
+    maximum: BOUNDS.airChangesPerHour.max,
+    description: 'sealing: measured air changes per hour after sealing',
+  })
+  @IsOptional()
+  @IsNumber()
+  @Min(BOUNDS.airChangesPerHour.min)
+  @Max(BOUNDS.airChangesPerHour.max)
   airChangesPerHour?: number;
 
-  @ApiPropertyOptional({ minimum: 0, maximum: 15, description: 'night-setpoint-lower: K (0 is accepted and reported as not applicable)' })
-  @IsOptional() @IsNumber() @Min(0) @Max(15)
+  @ApiPropertyOptional({
+    minimum: 0,
+    maximum: 15,
+    description: 'night-setpoint-lower: K (0 is accepted and reported as not applicable)',
+  })
+  @IsOptional()
+  @IsNumber()
+  @Min(0)
+  @Max(15)
   lowerByK?: number;
 
   @ApiPropertyOptional({ minimum: 1, maximum: 180, description: 'later-start: days' })
-  @IsOptional() @IsInt() @Min(1) @Max(180)
+  @IsOptional()
+  @IsInt()
+  @Min(1)
+  @Max(180)
   delayDays?: number;
 
-  @ApiPropertyOptional({ minimum: BOUNDS.heaterEfficiency.min, maximum: BOUNDS.heaterEfficiency.max, description: 'heater-efficiency / fuel-switch: efficiency of the new heaters' })
-  @IsOptional() @IsNumber() @Min(BOUNDS.heaterEfficiency.min) @Max(BOUNDS.heaterEfficiency.max)
+  @ApiPropertyOptional({
+    minimum: BOUNDS.heaterEfficiency.min,
+    maximum: BOUNDS.heaterEfficiency.max,
+    description: 'heater-efficiency / fuel-switch: efficiency of the new heaters',
+  })
+  @IsOptional()
+  @IsNumber()
+  @Min(BOUNDS.heaterEfficiency.min)
+  @Max(BOUNDS.heaterEfficiency.max)
   efficiency?: number;
 
-  @ApiPropertyOptional({ type: MeasureFuelPriceDto, description: 'fuel-switch: the new fuel and its price (without it the measure is reported as not applicable)' })
-  @IsOptional() @ValidateNested() @Type(() => MeasureFuelPriceDto)
+  @ApiPropertyOptional({
+    type: MeasureFuelPriceDto,
+    description: 'fuel-switch: the new fuel and its price (without it the measure is reported as not applicable)',
+  })
+  @IsOptional()
+  @ValidateNested()
+  @Type(() => MeasureFuelPriceDto)
   fuel?: MeasureFuelPriceDto;
 }
 
@@ -172,39 +263,54 @@ export class MeasuresRequestDto extends SeasonRequestDto {
     description:
       'measures to compare; an empty list compares the default measures (reference-data/measures.json) that apply to the house, without costs, so a ranking shows at once',
   })
-  @IsArray() @ArrayMaxSize(30) @ValidateNested({ each: true }) @Type(() => MeasureDto)
+  @IsArray()
+  @ArrayMaxSize(30)
+  @ValidateNested({ each: true })
+  @Type(() => MeasureDto)
   measures: MeasureDto[];
 }
 
 export class SeasonBudgetRequestDto {
   @ApiPropertyOptional({ example: '2026-09-01', description: 'first day, YYYY-MM-DD (default as for a house season)' })
-  @IsOptional() @Matches(ISO_DATE, { message: 'startDate must be written YYYY-MM-DD' })
+  @IsOptional()
+  @Matches(ISO_DATE, { message: 'startDate must be written YYYY-MM-DD' })
   startDate?: string;
 
   @ApiPropertyOptional({ example: '2027-05-31', description: 'last day (inclusive), YYYY-MM-DD' })
-  @IsOptional() @Matches(ISO_DATE, { message: 'endDate must be written YYYY-MM-DD' })
+  @IsOptional()
+  @Matches(ISO_DATE, { message: 'endDate must be written YYYY-MM-DD' })
   endDate?: string;
 
   @ApiPropertyOptional(CLIMATE_SOURCE_SCHEMA)
-  @IsOptional() @IsClimateSource()
+  @IsOptional()
+  @IsClimateSource()
   climateSource?: ClimateSource;
 }
 
 /** Query of the CSV export (a GET, so the log is named by id rather than a climateSource object). */
 export class SeasonBudgetCsvQueryDto {
-  @ApiPropertyOptional({ enum: ['si', 'us'], description: 'si (default): kWh and each fuel’s SI unit; us: MMBtu and each fuel’s US unit' })
-  @IsOptional() @IsIn(['si', 'us'])
+  @ApiPropertyOptional({
+    enum: ['si', 'us'],
+    description: 'si (default): kWh and each fuel’s SI unit; us: MMBtu and each fuel’s US unit',
+  })
+  @IsOptional()
+  @IsIn(['si', 'us'])
   units?: 'si' | 'us';
 
   @ApiPropertyOptional({ example: '2026-09-01' })
-  @IsOptional() @Matches(ISO_DATE, { message: 'startDate must be written YYYY-MM-DD' })
+  @IsOptional()
+  @Matches(ISO_DATE, { message: 'startDate must be written YYYY-MM-DD' })
   startDate?: string;
 
   @ApiPropertyOptional({ example: '2027-05-31' })
-  @IsOptional() @Matches(ISO_DATE, { message: 'endDate must be written YYYY-MM-DD' })
+  @IsOptional()
+  @Matches(ISO_DATE, { message: 'endDate must be written YYYY-MM-DD' })
   endDate?: string;
 
   @ApiPropertyOptional({ description: 'use this temperature log instead of the climate normals' })
-  @IsOptional() @Type(() => Number) @IsInt() @Min(1)
+  @IsOptional()
+  @Type(() => Number)
+  @IsInt()
+  @Min(1)
   temperatureLogId?: number;
 }

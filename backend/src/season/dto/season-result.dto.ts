@@ -1,10 +1,15 @@
 import { ApiProperty } from '@nestjs/swagger';
-import type { DegreeDayStep } from '../../engine/estimate-season';
-import type { PriceUnit } from '../../engine/season/fuel';
-import { MEASURE_KINDS, PAYBACK_STATUSES, type MeasureKind, type PaybackStatus } from '../../engine/season/measures';
-import { CONFIDENCE_MARKS } from '../../reference-data/load-reference-data';
+import type { DegreeDayStep } from '@thermbay/engine/estimate-season';
+import type { PriceUnit } from '@thermbay/engine/season/fuel';
+import {
+  MEASURE_KINDS,
+  PAYBACK_STATUSES,
+  type MeasureKind,
+  type PaybackStatus,
+} from '@thermbay/engine/season/measures';
+import { ASSUMPTION_CONFIDENCES } from '@thermbay/engine/vocabulary';
 import { PRICE_UNITS } from './season-request.dto';
-import { PROSE_TOKENS_NOTE } from '../../engine/prose';
+import { PROSE_TOKENS_NOTE } from '@thermbay/engine/vocabulary';
 
 /*
  * The engine's SeasonEstimate, NightDemand and MeasureComparison described class by class for the
@@ -12,8 +17,15 @@ import { PROSE_TOKENS_NOTE } from '../../engine/prose';
  * names are the engine's (except costAmount, the API's name for a measure's cost).
  */
 
-export const SEASON_ASSUMPTION_CONFIDENCES = [...CONFIDENCE_MARKS, 'user-entered'] as const;
-export const DEGREE_DAY_STEP_KEYS: ReadonlyArray<DegreeDayStep['key']> = ['degree-day', 'hourly-curve', 'day-setpoint', 'curtain', 'sun', 'heater-capacity'];
+export const SEASON_ASSUMPTION_CONFIDENCES = ASSUMPTION_CONFIDENCES;
+export const DEGREE_DAY_STEP_KEYS: ReadonlyArray<DegreeDayStep['key']> = [
+  'degree-day',
+  'hourly-curve',
+  'day-setpoint',
+  'curtain',
+  'sun',
+  'heater-capacity',
+];
 
 export class SeasonFuelAmountDto {
   @ApiProperty({ description: 'heat delivered to the house, kWh' }) energyKWh: number;
@@ -54,20 +66,29 @@ export class SeasonMonthDto extends SeasonFuelAmountDto {
   @ApiProperty({ description: 'highest hourly-average heat demand of the month, W' }) peakW: number;
   @ApiProperty({ description: 'degree-days to the night setpoint, K·day' }) degreeDaysKDay: number;
   @ApiProperty({ minimum: 0, description: 'heat the installed heaters could not deliver, kWh' }) unmetHeatKWh: number;
-  @ApiProperty({ minimum: 0, description: 'hours in which the heaters could not hold the setpoint' }) hoursBelowSetpoint: number;
+  @ApiProperty({ minimum: 0, description: 'hours in which the heaters could not hold the setpoint' })
+  hoursBelowSetpoint: number;
 }
 
 export class SeasonTotalDto extends SeasonFuelAmountDto {
   @ApiProperty() heatingHours: number;
   @ApiProperty({ minimum: 0, description: 'heat the installed heaters could not deliver, kWh' }) unmetHeatKWh: number;
-  @ApiProperty({ minimum: 0, description: 'hours in which the heaters could not hold the setpoint' }) hoursBelowSetpoint: number;
+  @ApiProperty({ minimum: 0, description: 'hours in which the heaters could not hold the setpoint' })
+  hoursBelowSetpoint: number;
 }
 
 export class SeasonHeaterCapacityDto {
-  @ApiProperty({ description: 'Σ count × rated input × efficiency of the house’s heaters, W; heat delivered in an hour is capped at it' })
+  @ApiProperty({
+    description:
+      'Σ count × rated input × efficiency of the house’s heaters, W; heat delivered in an hour is capped at it',
+  })
   installedOutputW: number;
   @ApiProperty({ description: 'heater units installed' }) heaterCount: number;
-  @ApiProperty({ type: String, nullable: true, description: `set when the heaters cannot hold the setpoint in some hour; ${PROSE_TOKENS_NOTE}` })
+  @ApiProperty({
+    type: String,
+    nullable: true,
+    description: `set when the heaters cannot hold the setpoint in some hour; ${PROSE_TOKENS_NOTE}`,
+  })
   caution: string | null;
 }
 
@@ -86,13 +107,22 @@ export class DegreeDayStepDto {
 
 export class DegreeDayCrossCheckDto extends SeasonFuelAmountDto {
   @ApiProperty({ description: `the base each heated day is counted to; ${PROSE_TOKENS_NOTE}` }) baseDescription: string;
-  @ApiProperty({ type: Number, nullable: true, description: 'the base when it is the same all season, else null, °C' }) baseTemperatureC: number | null;
+  @ApiProperty({ type: Number, nullable: true, description: 'the base when it is the same all season, else null, °C' })
+  baseTemperatureC: number | null;
   @ApiProperty({ description: 'UA used (curtain open), W/K' }) uaWPerK: number;
   @ApiProperty({ description: 'K·day' }) degreeDaysKDay: number;
   @ApiProperty({ description: '°F·day' }) degreeDaysFDay: number;
-  @ApiProperty({ type: Number, nullable: true, description: 'hourly result ÷ degree-day result − 1 (null when the degree-day result is 0)' })
+  @ApiProperty({
+    type: Number,
+    nullable: true,
+    description: 'hourly result ÷ degree-day result − 1 (null when the degree-day result is 0)',
+  })
   hourlyDifferenceFraction: number | null;
-  @ApiProperty({ type: DegreeDayStepDto, isArray: true, description: 'from the degree-day figure to the hourly one, one effect at a time' })
+  @ApiProperty({
+    type: DegreeDayStepDto,
+    isArray: true,
+    description: 'from the degree-day figure to the hourly one, one effect at a time',
+  })
   steps: DegreeDayStepDto[];
   @ApiProperty({ type: String, isArray: true, description: PROSE_TOKENS_NOTE }) explanation: string[];
 }
@@ -111,15 +141,31 @@ export class SeasonEstimateDto {
   @ApiProperty({ type: SeasonPeriodDto }) period: SeasonPeriodDto;
   @ApiProperty({ type: SeasonFuelDto }) fuel: SeasonFuelDto;
   @ApiProperty({ type: SeasonHeatLossDto }) heatLoss: SeasonHeatLossDto;
-  @ApiProperty({ type: SeasonMonthDto, isArray: true, description: 'one row per calendar month the season touches' }) monthly: SeasonMonthDto[];
+  @ApiProperty({ type: SeasonMonthDto, isArray: true, description: 'one row per calendar month the season touches' })
+  monthly: SeasonMonthDto[];
   @ApiProperty({ type: SeasonTotalDto }) total: SeasonTotalDto;
   @ApiProperty({ type: SeasonHeaterCapacityDto }) heaterCapacity: SeasonHeaterCapacityDto;
-  @ApiProperty({ type: SeasonPeakDto, nullable: true, description: 'the hour of highest heat demand; null if no heat was needed' }) peak: SeasonPeakDto | null;
-  @ApiProperty({ minimum: 0, maximum: 1, description: "share of the season's heat delivered at night (sunset to sunrise)" }) nightShareOfHeat: number;
+  @ApiProperty({
+    type: SeasonPeakDto,
+    nullable: true,
+    description: 'the hour of highest heat demand; null if no heat was needed',
+  })
+  peak: SeasonPeakDto | null;
+  @ApiProperty({
+    minimum: 0,
+    maximum: 1,
+    description: "share of the season's heat delivered at night (sunset to sunrise)",
+  })
+  nightShareOfHeat: number;
   @ApiProperty({ description: 'heat the sun supplied in place of the heater, kWh' }) solarOffsetKWh: number;
   @ApiProperty({ type: DegreeDayCrossCheckDto }) degreeDays: DegreeDayCrossCheckDto;
   @ApiProperty({ type: SeasonAssumptionDto, isArray: true }) assumptions: SeasonAssumptionDto[];
-  @ApiProperty({ type: String, isArray: true, description: `combustion / electrical safety cautions; ${PROSE_TOKENS_NOTE}` }) cautions: string[];
+  @ApiProperty({
+    type: String,
+    isArray: true,
+    description: `combustion / electrical safety cautions; ${PROSE_TOKENS_NOTE}`,
+  })
+  cautions: string[];
 }
 
 // ---------------------------------------------------------------------------------------------
@@ -137,7 +183,8 @@ export class SeasonRunInputsDto {
   @ApiProperty() heaterEfficiency: number;
   @ApiProperty({ enum: ['request', 'house-heater'] }) heaterEfficiencyFrom: 'request' | 'house-heater';
   @ApiProperty({ description: "the farm's IANA zone" }) timeZone: string;
-  @ApiProperty({ description: "the zone's standard-time offset from UTC (daylight saving ignored), h" }) utcOffsetHours: number;
+  @ApiProperty({ description: "the zone's standard-time offset from UTC (daylight saving ignored), h" })
+  utcOffsetHours: number;
 }
 
 export class SeasonInputsUsedDto extends SeasonRunInputsDto {
@@ -145,7 +192,9 @@ export class SeasonInputsUsedDto extends SeasonRunInputsDto {
   @ApiProperty() endDate: string;
   @ApiProperty({ enum: ['request', 'default-heating-season', 'temperature-log'] })
   seasonFrom: 'request' | 'default-heating-season' | 'temperature-log';
-  @ApiProperty({ description: "periods of the house's production calendar (0 = heated all season at the house setpoints)" })
+  @ApiProperty({
+    description: "periods of the house's production calendar (0 = heated all season at the house setpoints)",
+  })
   calendarPeriodCount: number;
 }
 
@@ -160,17 +209,25 @@ export class HouseSeasonEstimateDto extends SeasonEstimateDto {
 export class NightHourDto {
   @ApiProperty({ description: 'start of the hour, local standard time' }) at: string;
   @ApiProperty({ description: '°C' }) outdoorC: number;
-  @ApiProperty({ minimum: 0, maximum: 1, description: 'share of the hour after sunset / before sunrise' }) nightShare: number;
+  @ApiProperty({ minimum: 0, maximum: 1, description: 'share of the hour after sunset / before sunrise' })
+  nightShare: number;
   @ApiProperty({ description: "average heat demand over the hour's night share, W" }) heatW: number;
   @ApiProperty({ description: 'heat the heaters deliver (at most their installed output), W' }) deliveredW: number;
-  @ApiProperty({ description: 'true when the heaters cannot hold the night setpoint this hour' }) belowSetpoint: boolean;
+  @ApiProperty({ description: 'true when the heaters cannot hold the night setpoint this hour' })
+  belowSetpoint: boolean;
 }
 
 export class HouseNightDemandDto extends SeasonFuelAmountDto {
   @ApiProperty() houseId: number;
   @ApiProperty({ description: 'the evening the night begins, YYYY-MM-DD' }) date: string;
-  @ApiProperty({ type: String, nullable: true, description: 'local standard time; null where the sun does not set' }) sunset: string | null;
-  @ApiProperty({ type: String, nullable: true, description: 'next morning, local standard time; null where the sun does not rise' }) sunrise: string | null;
+  @ApiProperty({ type: String, nullable: true, description: 'local standard time; null where the sun does not set' })
+  sunset: string | null;
+  @ApiProperty({
+    type: String,
+    nullable: true,
+    description: 'next morning, local standard time; null where the sun does not rise',
+  })
+  sunrise: string | null;
   @ApiProperty({ description: 'h' }) nightHours: number;
   @ApiProperty({ description: '°C' }) nightSetpointC: number;
   @ApiProperty({ description: 'UA with the curtain drawn (if any), W/K' }) uaWPerK: number;
@@ -178,8 +235,10 @@ export class HouseNightDemandDto extends SeasonFuelAmountDto {
   @ApiProperty({ type: Number, nullable: true, description: 'coldest night hour, °C' }) minOutdoorC: number | null;
   @ApiProperty({ description: 'installed heater output, W' }) installedOutputW: number;
   @ApiProperty({ minimum: 0, description: 'heat the heaters could not deliver, kWh' }) unmetHeatKWh: number;
-  @ApiProperty({ minimum: 0, description: 'night hours in which the heaters cannot hold the setpoint' }) hoursBelowSetpoint: number;
-  @ApiProperty({ type: String, nullable: true, description: `set when some hour cannot be held; ${PROSE_TOKENS_NOTE}` }) capacityCaution: string | null;
+  @ApiProperty({ minimum: 0, description: 'night hours in which the heaters cannot hold the setpoint' })
+  hoursBelowSetpoint: number;
+  @ApiProperty({ type: String, nullable: true, description: `set when some hour cannot be held; ${PROSE_TOKENS_NOTE}` })
+  capacityCaution: string | null;
   @ApiProperty({ type: NightHourDto, isArray: true }) hourly: NightHourDto[];
   @ApiProperty({ type: String, isArray: true, description: PROSE_TOKENS_NOTE }) cautions: string[];
   @ApiProperty({ type: SeasonRunInputsDto }) inputsUsed: SeasonRunInputsDto;
@@ -198,7 +257,8 @@ export class MeasureLightChangeDto {
   @ApiProperty({ enum: ['roof', 'sidewalls'] }) surface: 'roof' | 'sidewalls';
   @ApiProperty({ description: 'light transmittance before, 0–1' }) before: number;
   @ApiProperty({ description: 'light transmittance after, 0–1' }) after: number;
-  @ApiProperty({ description: 'relative change of light reaching the crop, e.g. −0.11 for 11 % less' }) relativeChange: number;
+  @ApiProperty({ description: 'relative change of light reaching the crop, e.g. −0.11 for 11 % less' })
+  relativeChange: number;
   @ApiProperty() source: string;
 }
 
@@ -207,27 +267,61 @@ export class MeasureResultDto {
   @ApiProperty({ enum: MEASURE_KINDS }) kind: MeasureKind;
   @ApiProperty() label: string;
   @ApiProperty({ description: `what changed, in words; ${PROSE_TOKENS_NOTE}` }) description: string;
-  @ApiProperty({ type: Number, nullable: true, description: 'null when no cost was entered' }) costAmount: number | null;
-  @ApiProperty({ description: 'false when the measure changes nothing for this house (already done, or no better than what it has)' })
+  @ApiProperty({ type: Number, nullable: true, description: 'null when no cost was entered' }) costAmount:
+    number | null;
+  @ApiProperty({
+    description: 'false when the measure changes nothing for this house (already done, or no better than what it has)',
+  })
   applicable: boolean;
-  @ApiProperty({ type: String, nullable: true, description: `why the measure does not apply, in plain words; null when it applies; ${PROSE_TOKENS_NOTE}` })
+  @ApiProperty({
+    type: String,
+    nullable: true,
+    description: `why the measure does not apply, in plain words; null when it applies; ${PROSE_TOKENS_NOTE}`,
+  })
   notApplicableReason: string | null;
-  @ApiProperty({ type: MeasureSeasonDto, description: 'the season with the measure (the house as it is when the measure does not apply)' }) season: MeasureSeasonDto;
-  @ApiProperty({ description: 'heat the house no longer needs, kWh per season (0 for heater or fuel changes)' }) heatSavedKWh: number;
+  @ApiProperty({
+    type: MeasureSeasonDto,
+    description: 'the season with the measure (the house as it is when the measure does not apply)',
+  })
+  season: MeasureSeasonDto;
+  @ApiProperty({ description: 'heat the house no longer needs, kWh per season (0 for heater or fuel changes)' })
+  heatSavedKWh: number;
   @ApiProperty({ description: 'fuel energy no longer bought, kWh per season' }) fuelInputSavedKWh: number;
-  @ApiProperty({ type: Number, nullable: true, description: "in the baseline fuel's unitSi; null when the measure burns another fuel" }) fuelSavedSi: number | null;
-  @ApiProperty({ type: Number, nullable: true, description: "in the baseline fuel's unitUs" }) fuelSavedUs: number | null;
-  @ApiProperty({ description: 'money saved per season (= per year with one season a year); negative when it costs more to run' }) yearlyMoneySaved: number;
+  @ApiProperty({
+    type: Number,
+    nullable: true,
+    description: "in the baseline fuel's unitSi; null when the measure burns another fuel",
+  })
+  fuelSavedSi: number | null;
+  @ApiProperty({ type: Number, nullable: true, description: "in the baseline fuel's unitUs" }) fuelSavedUs:
+    number | null;
+  @ApiProperty({
+    description: 'money saved per season (= per year with one season a year); negative when it costs more to run',
+  })
+  yearlyMoneySaved: number;
   @ApiProperty({
     enum: PAYBACK_STATUSES,
     description:
       "'years': cost ÷ saving; 'immediate': cost 0 and a saving; 'enter-cost': a saving but no cost entered; 'never': no money saved; 'not-applicable': changes nothing for this house",
   })
   paybackStatus: PaybackStatus;
-  @ApiProperty({ type: Number, nullable: true, description: "cost ÷ yearly money saved, years (0 when 'immediate'); null for the other statuses" })
+  @ApiProperty({
+    type: Number,
+    nullable: true,
+    description: "cost ÷ yearly money saved, years (0 when 'immediate'); null for the other statuses",
+  })
   paybackYears: number | null;
-  @ApiProperty({ example: '2.4 years', description: "'2.4 years', 'immediately', 'enter a cost', 'never' or 'not applicable'" }) paybackText: string;
-  @ApiProperty({ type: MeasureLightChangeDto, nullable: true, description: 'light change for measures that add a layer or a screen' }) lightChange: MeasureLightChangeDto | null;
+  @ApiProperty({
+    example: '2.4 years',
+    description: "'2.4 years', 'immediately', 'enter a cost', 'never' or 'not applicable'",
+  })
+  paybackText: string;
+  @ApiProperty({
+    type: MeasureLightChangeDto,
+    nullable: true,
+    description: 'light change for measures that add a layer or a screen',
+  })
+  lightChange: MeasureLightChangeDto | null;
   @ApiProperty({ type: String, isArray: true, description: PROSE_TOKENS_NOTE }) notes: string[];
 }
 
@@ -237,10 +331,14 @@ export class MeasureComparisonDto {
   @ApiProperty({
     type: MeasureResultDto,
     isArray: true,
-    description: 'shortest payback first (equal paybacks: larger saving first), then measures without a cost, then those that never pay back, then those that do not apply',
+    description:
+      'shortest payback first (equal paybacks: larger saving first), then measures without a cost, then those that never pay back, then those that do not apply',
   })
   measures: MeasureResultDto[];
-  @ApiProperty({ description: 'true when the request listed no measures and the default measures that apply to the house were compared without costs' })
+  @ApiProperty({
+    description:
+      'true when the request listed no measures and the default measures that apply to the house were compared without costs',
+  })
   defaultsUsed: boolean;
   @ApiProperty({ type: String, isArray: true, description: PROSE_TOKENS_NOTE }) notes: string[];
   @ApiProperty({ type: SeasonInputsUsedDto }) inputsUsed: SeasonInputsUsedDto;

@@ -1,5 +1,5 @@
 import { BelongsTo, Column, DataType, ForeignKey, Model, Table } from 'sequelize-typescript';
-import type { PriceUnit } from '../../engine/season/fuel';
+import type { PriceUnit } from '@thermbay/engine/season/fuel';
 import { Farm } from '../../farms/models/farm.model';
 
 /** What a farm pays for one fuel (one row per fuel). */

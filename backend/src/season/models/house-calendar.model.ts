@@ -1,5 +1,5 @@
 import { BelongsTo, Column, DataType, ForeignKey, Model, Table } from 'sequelize-typescript';
-import type { ProductionPeriod } from '../../engine/season/production-calendar';
+import type { ProductionPeriod } from '@thermbay/engine/season/production-calendar';
 import { House } from '../../houses/models/house.model';
 
 /** A period of a house's production calendar, with the user's own name for it. */

@@ -1,5 +1,5 @@
 import { BelongsTo, Column, DataType, ForeignKey, Model, Table } from 'sequelize-typescript';
-import type { LogResolution, TemperatureColumnMapping, TemperatureLogReading } from '../../engine/climate/temperature-log';
+import type { LogResolution, TemperatureColumnMapping, TemperatureLogReading } from '../csv/temperature-log-csv';
 import { Farm } from '../../farms/models/farm.model';
 
 /** A farm's logged outdoor temperatures, read from an uploaded CSV file (°C). */

@@ -103,23 +103,16 @@ export default function FarmPage() {
                 Houses
               </Typography>
               {farmAllows(farm.data, 'house:write') ? (
-                <Button
-                  variant="contained"
-                  startIcon={<AddIcon />}
-                  component={RouterLink}
-                  to={paths.newHouse(farmId)}
-                >
+                <Button variant="contained" startIcon={<AddIcon />} component={RouterLink} to={paths.newHouse(farmId)}>
                   New house
                 </Button>
-                ) : null}
-              </Stack>
-              <ErrorAlert error={houses.error} title="Houses could not be loaded" />
-              <HousesTable houses={houses.data ?? []} loading={houses.isPending} />
+              ) : null}
             </Stack>
+            <ErrorAlert error={houses.error} title="Houses could not be loaded" />
+            <HousesTable houses={houses.data ?? []} loading={houses.isPending} />
+          </Stack>
         ) : null}
-        {tab === 'climate' ? (
-          <ClimateSection farmId={farmId} canEdit={farmAllows(farm.data, 'house:write')} />
-        ) : null}
+        {tab === 'climate' ? <ClimateSection farmId={farmId} canEdit={farmAllows(farm.data, 'house:write')} /> : null}
         {tab === 'temperature-logs' ? (
           <TemperatureLogsSection farmId={farmId} canEdit={farmAllows(farm.data, 'house:write')} />
         ) : null}

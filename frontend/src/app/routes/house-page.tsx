@@ -45,13 +45,16 @@ export default function HousePage() {
   const houseInput = useMemo(() => (house.data ? houseInputOf(house.data) : undefined), [house.data]);
   // Panels follow the form as the user types (debounced); invalid values keep the last valid ones.
   const [formEdits, setFormEdits] = useState<FormEdits>(NO_EDITS);
-  const onFormValuesChange = useCallback((input: HouseInput | null, { dirty }: { dirty: boolean }) => {
-    setFormEdits((previous) => {
-      if (!dirty) return previous === NO_EDITS ? previous : NO_EDITS;
-      if (!input) return { houseId, editedHouse: previous.editedHouse, editsInvalid: true };
-      return { houseId, editedHouse: houseSpecOf(input), editsInvalid: false };
-    });
-  }, [houseId]);
+  const onFormValuesChange = useCallback(
+    (input: HouseInput | null, { dirty }: { dirty: boolean }) => {
+      setFormEdits((previous) => {
+        if (!dirty) return previous === NO_EDITS ? previous : NO_EDITS;
+        if (!input) return { houseId, editedHouse: previous.editedHouse, editsInvalid: true };
+        return { houseId, editedHouse: houseSpecOf(input), editsInvalid: false };
+      });
+    },
+    [houseId],
+  );
   const debouncedEdits = useDebouncedValue(formEdits, 400);
   // Never another house's edits (the page stays mounted when moving between houses).
   const settledEdits = debouncedEdits.houseId === houseId ? debouncedEdits : NO_EDITS;

@@ -21,7 +21,8 @@ export default function NewHousePage() {
 
   if (farm.isPending || referenceData.isPending) return <LoadingState />;
   if (farm.isError) return <ErrorAlert error={farm.error} title="Farm could not be loaded" />;
-  if (referenceData.isError) return <ErrorAlert error={referenceData.error} title="Reference tables could not be loaded" />;
+  if (referenceData.isError)
+    return <ErrorAlert error={referenceData.error} title="Reference tables could not be loaded" />;
   if (!farmAllows(farm.data, 'house:write')) {
     return <ErrorAlert error={new Error('Your role on this farm does not allow adding houses.')} />;
   }

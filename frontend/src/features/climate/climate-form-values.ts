@@ -2,8 +2,18 @@ import type { MonthlyClimate, SiteClimate } from '../../api/types';
 import type { Units } from '../../lib/units';
 
 export const MONTH_NAMES = [
-  'January', 'February', 'March', 'April', 'May', 'June',
-  'July', 'August', 'September', 'October', 'November', 'December',
+  'January',
+  'February',
+  'March',
+  'April',
+  'May',
+  'June',
+  'July',
+  'August',
+  'September',
+  'October',
+  'November',
+  'December',
 ] as const;
 
 export const MONTH_SHORT_NAMES = MONTH_NAMES.map((name) => name.slice(0, 3));
@@ -76,7 +86,8 @@ export function formValuesToClimate(
       const clearnessTyped = month.clearnessPct.trim();
       let clearness: number | null;
       if (clearnessTyped === '') clearness = null;
-      else if (storedRow?.clearness != null && clearnessTyped === initialRow.clearnessPct) clearness = storedRow.clearness;
+      else if (storedRow?.clearness != null && clearnessTyped === initialRow.clearnessPct)
+        clearness = storedRow.clearness;
       else clearness = units.fromDisplay('fraction', Number(clearnessTyped));
       return {
         month: index + 1,

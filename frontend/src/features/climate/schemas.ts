@@ -1,4 +1,4 @@
-import { BOUNDS } from '@bounds';
+import { BOUNDS } from '@thermbay/engine/vocabulary';
 import * as yup from 'yup';
 import type { Units } from '../../lib/units';
 

@@ -30,7 +30,12 @@ export function designDayChartData(
 ): DesignDayChartData {
   const shown = (celsius: number) => Math.round(units.toDisplay('temperature', celsius) * 10) / 10;
   const unit = units.label('temperature');
-  const line = (label: string, data: Array<number | null>, color: string, extra: Partial<DesignDayDataset> = {}): DesignDayDataset => ({
+  const line = (
+    label: string,
+    data: Array<number | null>,
+    color: string,
+    extra: Partial<DesignDayDataset> = {},
+  ): DesignDayDataset => ({
     label,
     data,
     borderColor: color,
@@ -40,8 +45,16 @@ export function designDayChartData(
     ...extra,
   });
   const datasets = [
-    line(`Outdoor (${unit})`, hours.map((hour) => shown(hour.outdoorC)), colors.outdoor),
-    line(`Indoor with fans (${unit})`, hours.map((hour) => shown(hour.indoorWithFansC)), colors.fans),
+    line(
+      `Outdoor (${unit})`,
+      hours.map((hour) => shown(hour.outdoorC)),
+      colors.outdoor,
+    ),
+    line(
+      `Indoor with fans (${unit})`,
+      hours.map((hour) => shown(hour.indoorWithFansC)),
+      colors.fans,
+    ),
   ];
   if (hours.some((hour) => hour.indoorWithPadsC !== null)) {
     datasets.push(
@@ -53,10 +66,15 @@ export function designDayChartData(
     );
   }
   datasets.push(
-    line(`Cooling setpoint (${unit})`, hours.map(() => shown(coolingSetpointC)), colors.setpoint, {
-      borderDash: [6, 4],
-      pointRadius: 0,
-    }),
+    line(
+      `Cooling setpoint (${unit})`,
+      hours.map(() => shown(coolingSetpointC)),
+      colors.setpoint,
+      {
+        borderDash: [6, 4],
+        pointRadius: 0,
+      },
+    ),
   );
   return { labels: hours.map((hour) => `${String(hour.hour).padStart(2, '0')}:00`), datasets };
 }
@@ -72,7 +90,8 @@ export function hourRanges(hours: number[]): string {
       previous = hour;
       continue;
     }
-    if (start !== undefined && previous !== undefined) ranges.push(start === previous ? `${start}` : `${start}–${previous}`);
+    if (start !== undefined && previous !== undefined)
+      ranges.push(start === previous ? `${start}` : `${start}–${previous}`);
     start = hour;
     previous = hour;
   }

@@ -7,13 +7,25 @@ const fuels = [
   { id: 'propane', label: 'Propane', unitSi: 'L', unitUs: 'US gal', source: 'test', confidence: 'derived' },
 ] as ReferenceRow[];
 const stored: FuelPrice[] = [
-  { fuelId: 'natural-gas', fuelLabel: 'Natural gas', pricePerUnit: 0.8, priceUnit: 'us', priceUnitLabel: 'therm', note: 'Contract 2026' },
+  {
+    fuelId: 'natural-gas',
+    fuelLabel: 'Natural gas',
+    pricePerUnit: 0.8,
+    priceUnit: 'us',
+    priceUnitLabel: 'therm',
+    note: 'Contract 2026',
+  },
 ];
 
 describe('fuel price values', () => {
   it('lists every fuel, the stored price in its own unit, and offers the user’s system for unpriced fuels', () => {
     const values = fuelPriceFormValues(fuels, stored, 'si');
-    expect(values.rows[0]).toMatchObject({ fuelId: 'natural-gas', price: '0.8', priceUnit: 'us', note: 'Contract 2026' });
+    expect(values.rows[0]).toMatchObject({
+      fuelId: 'natural-gas',
+      price: '0.8',
+      priceUnit: 'us',
+      note: 'Contract 2026',
+    });
     expect(priceUnitLabel(values.rows[0]!)).toBe('therm');
     expect(values.rows[1]).toMatchObject({ fuelId: 'propane', price: '', priceUnit: 'si' });
     expect(priceUnitLabel(values.rows[1]!)).toBe('L');

@@ -19,7 +19,11 @@ export interface FuelPriceFormValues {
 const text = (value: unknown) => (typeof value === 'string' ? value : '');
 
 /** Every fuel of the reference table, with the farm's stored price where it has one. */
-export function fuelPriceFormValues(fuels: ReferenceRow[], stored: FuelPrice[], system: UnitSystem): FuelPriceFormValues {
+export function fuelPriceFormValues(
+  fuels: ReferenceRow[],
+  stored: FuelPrice[],
+  system: UnitSystem,
+): FuelPriceFormValues {
   return {
     rows: fuels.map((fuel) => {
       const price = stored.find((row) => row.fuelId === fuel.id);
@@ -58,13 +62,11 @@ export function priceUnitLabel(row: Pick<FuelPriceRowValues, 'unitSi' | 'unitUs'
 export const fuelPriceFormSchema = yup.object({
   rows: yup.array(
     yup.object({
-      price: yup
-        .string()
-        .test('price', 'Enter a price of 0 or more, or leave it blank', (value) => {
-          if (!value || value.trim() === '') return true;
-          const number = Number(value);
-          return Number.isFinite(number) && number >= 0 && number <= 1e6;
-        }),
+      price: yup.string().test('price', 'Enter a price of 0 or more, or leave it blank', (value) => {
+        if (!value || value.trim() === '') return true;
+        const number = Number(value);
+        return Number.isFinite(number) && number >= 0 && number <= 1e6;
+      }),
       priceUnit: yup.mixed<PriceUnit>().oneOf(['si', 'us']).required(),
       note: yup.string().max(300, 'At most 300 characters'),
     }),

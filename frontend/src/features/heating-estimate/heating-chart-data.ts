@@ -72,7 +72,11 @@ export function heatLossChartData(
         label: `Heat loss (${units.label('power')})`,
         data: sorted.map((component) => Math.round(units.toDisplay('power', component.watts) * factor) / factor),
         backgroundColor: sorted.map((component) =>
-          component.key === 'infiltration' ? colors.air : component.key === 'perimeter' ? colors.ground : colors.covering,
+          component.key === 'infiltration'
+            ? colors.air
+            : component.key === 'perimeter'
+              ? colors.ground
+              : colors.covering,
         ),
         borderWidth: 0,
       },

@@ -215,7 +215,12 @@ export function formValuesToHouseInput(
         initialValues.setpoints.nightHeatingC,
         original.setpoints.nightHeatingC,
       ),
-      coolingC: si('temperature', values.setpoints.coolingC, initialValues.setpoints.coolingC, original.setpoints.coolingC),
+      coolingC: si(
+        'temperature',
+        values.setpoints.coolingC,
+        initialValues.setpoints.coolingC,
+        original.setpoints.coolingC,
+      ),
     },
   };
 }
@@ -260,7 +265,12 @@ export function convertFormValues(
   from: Units,
   to: Units,
 ): HouseFormValues {
-  const convert = (quantity: Quantity, typed: string, wasInitial: string | undefined, nowInitial: string | undefined) => {
+  const convert = (
+    quantity: Quantity,
+    typed: string,
+    wasInitial: string | undefined,
+    nowInitial: string | undefined,
+  ) => {
     if (wasInitial !== undefined && nowInitial !== undefined && typed === wasInitial) return nowInitial;
     const number = Number(typed);
     if (typed.trim() === '' || !Number.isFinite(number)) return typed;

@@ -1,4 +1,4 @@
-import { BOUNDS } from '@bounds';
+import { BOUNDS } from '@thermbay/engine/vocabulary';
 import * as yup from 'yup';
 import type { Quantity, Units } from '../../lib/units';
 import { HOUSE_SHAPES } from './house-form-values';
@@ -44,8 +44,13 @@ export function houseFormSchema(units: Units) {
       .trim()
       .max(BOUNDS.nameLength.max, `At most ${BOUNDS.nameLength.max} characters`)
       .required('Enter a name for the house'),
-    notes: yup.string().max(BOUNDS.notesLength.max, `At most ${BOUNDS.notesLength.max.toLocaleString('en-US')} characters`),
-    shape: yup.mixed().oneOf([...HOUSE_SHAPES], 'Choose a shape').required('Choose a shape'),
+    notes: yup
+      .string()
+      .max(BOUNDS.notesLength.max, `At most ${BOUNDS.notesLength.max.toLocaleString('en-US')} characters`),
+    shape: yup
+      .mixed()
+      .oneOf([...HOUSE_SHAPES], 'Choose a shape')
+      .required('Choose a shape'),
     spans: counted('Spans', BOUNDS.spans).required('Enter the number of spans'),
     widthM: measured('Width', 'length', BOUNDS.widthM).required('Enter the span width'),
     lengthM: measured('Length', 'length', BOUNDS.lengthM).required('Enter the length'),
@@ -95,9 +100,7 @@ export function houseFormSchema(units: Units) {
     inletAreaM2: measured('Inlet area', 'area', BOUNDS.inletAreaM2).required('Enter the inlet free area'),
     setpoints: yup.object({
       dayHeatingC: measured('Day heating setpoint', 'temperature', BOUNDS.setpointC).required('Enter a setpoint'),
-      nightHeatingC: measured('Night heating setpoint', 'temperature', BOUNDS.setpointC).required(
-        'Enter a setpoint',
-      ),
+      nightHeatingC: measured('Night heating setpoint', 'temperature', BOUNDS.setpointC).required('Enter a setpoint'),
       coolingC: measured('Cooling setpoint', 'temperature', BOUNDS.setpointC).required('Enter a setpoint'),
     }),
   });

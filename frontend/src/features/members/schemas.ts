@@ -25,5 +25,8 @@ export interface AddMemberFormValues {
 
 export const addMemberSchema = yup.object({
   email: yup.string().trim().email('Enter a valid e-mail address').required('Enter their e-mail address'),
-  role: yup.mixed<FarmRole>().oneOf([...FARM_ROLES], 'Choose a role').required('Choose a role'),
+  role: yup
+    .mixed<FarmRole>()
+    .oneOf([...FARM_ROLES], 'Choose a role')
+    .required('Choose a role'),
 });

@@ -1,4 +1,4 @@
-import { BOUNDS } from '@bounds';
+import { BOUNDS } from '@thermbay/engine/vocabulary';
 import * as yup from 'yup';
 import type { ProductionCalendarInput, ProductionPeriod } from '../../api/types';
 import type { Units } from '../../lib/units';
@@ -42,7 +42,14 @@ export function calendarFormValues(periods: ProductionPeriod[], units: Units): C
 }
 
 export function newPeriod(): PeriodFormValues {
-  return { startMonthDay: '11-01', endMonthDay: '03-31', mode: 'heated', dayHeatingC: '', nightHeatingC: '', label: '' };
+  return {
+    startMonthDay: '11-01',
+    endMonthDay: '03-31',
+    mode: 'heated',
+    dayHeatingC: '',
+    nightHeatingC: '',
+    label: '',
+  };
 }
 
 /** Typed periods → the API body (SI); an untouched setpoint goes back exactly as stored. */
@@ -65,7 +72,9 @@ export function toCalendarInput(
         endMonthDay: period.endMonthDay,
         mode: period.mode,
       };
-      const day = heated ? setpoint(period.dayHeatingC, initial.periods[index]?.dayHeatingC, stored[index]?.dayHeatingC) : undefined;
+      const day = heated
+        ? setpoint(period.dayHeatingC, initial.periods[index]?.dayHeatingC, stored[index]?.dayHeatingC)
+        : undefined;
       const night = heated
         ? setpoint(period.nightHeatingC, initial.periods[index]?.nightHeatingC, stored[index]?.nightHeatingC)
         : undefined;
@@ -87,7 +96,10 @@ export function calendarFormSchema(units: Units) {
     .min(range.min, `Between ${range.min} and ${range.max} ${unit}`)
     .max(range.max, `Between ${range.min} and ${range.max} ${unit}`)
     .optional();
-  const monthDay = yup.string().required('Write MM-DD').test('month-day', 'Write a real day as MM-DD, e.g. 11-15', isMonthDay);
+  const monthDay = yup
+    .string()
+    .required('Write MM-DD')
+    .test('month-day', 'Write a real day as MM-DD, e.g. 11-15', isMonthDay);
   return yup.object({
     periods: yup
       .array(

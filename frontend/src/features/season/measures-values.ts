@@ -31,7 +31,9 @@ export const ADDABLE_MEASURE_KINDS: MeasureKind[] = [
 
 /** The default comparison's measures, in request order, as rows to price. */
 export function rowsFromComparison(comparison: MeasureComparison): MeasureRow[] {
-  return [...comparison.measures].sort((a, b) => a.index - b.index).map((measure) => ({ kind: measure.kind, cost: '' }));
+  return [...comparison.measures]
+    .sort((a, b) => a.index - b.index)
+    .map((measure) => ({ kind: measure.kind, cost: '' }));
 }
 
 export function isValidCost(text: string): boolean {
@@ -42,7 +44,9 @@ export function isValidCost(text: string): boolean {
 
 /** Rows → the request's measures; an unpriced measure goes without a cost (its payback then asks for one). */
 export function measuresRequestBody(rows: MeasureRow[]): Measure[] {
-  return rows.map((row) => (row.cost.trim() === '' ? { kind: row.kind } : { kind: row.kind, costAmount: Number(row.cost) }));
+  return rows.map((row) =>
+    row.cost.trim() === '' ? { kind: row.kind } : { kind: row.kind, costAmount: Number(row.cost) },
+  );
 }
 
 /** "Roof: 78 % → 76 % (3 % less light)" for layer and screen measures. */

@@ -14,7 +14,10 @@ export interface SeasonChartSeries {
 }
 
 /** The hourly season's months, oldest first, for the monthly bar chart. */
-export function seasonChartSeries(season: Pick<HouseSeasonEstimate, 'monthly' | 'fuel'>, units: Units): SeasonChartSeries {
+export function seasonChartSeries(
+  season: Pick<HouseSeasonEstimate, 'monthly' | 'fuel'>,
+  units: Units,
+): SeasonChartSeries {
   const months = [...season.monthly].sort((a, b) => a.year - b.year || a.month - b.month);
   const energyDecimals = units.decimals('energyKWh');
   return {

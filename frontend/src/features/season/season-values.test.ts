@@ -5,7 +5,13 @@ import { calendarFormSchema, calendarFormValues, isMonthDay, toCalendarInput } f
 import { lightChangeText, measuresRequestBody, paybackText, rowsFromComparison } from './measures-values';
 import { hourlyVersusDegreeDayText, nightStartDate, seasonChartSeries } from './season-chart-data';
 
-const month = (year: number, monthNumber: number, energyKWh: number, fuelQuantitySi: number, fuelQuantityUs: number) => ({
+const month = (
+  year: number,
+  monthNumber: number,
+  energyKWh: number,
+  fuelQuantitySi: number,
+  fuelQuantityUs: number,
+) => ({
   year,
   month: monthNumber,
   energyKWh,
@@ -19,8 +25,21 @@ const month = (year: number, monthNumber: number, energyKWh: number, fuelQuantit
 });
 
 const season = {
-  fuel: { fuelId: 'propane', label: 'Propane', unitSi: 'L', unitUs: 'US gal', pricePerUnit: 1.6, priceUnit: 'us', priceUnitLabel: 'US gal', heaterEfficiency: 0.8 },
-  monthly: [month(2027, 1, 23_437.4, 4143.16, 1094.51), month(2026, 12, 0, 0, 0), month(2026, 11, 25_567.6, 4519.72, 1193.99)],
+  fuel: {
+    fuelId: 'propane',
+    label: 'Propane',
+    unitSi: 'L',
+    unitUs: 'US gal',
+    pricePerUnit: 1.6,
+    priceUnit: 'us',
+    priceUnitLabel: 'US gal',
+    heaterEfficiency: 0.8,
+  },
+  monthly: [
+    month(2027, 1, 23_437.4, 4143.16, 1094.51),
+    month(2026, 12, 0, 0, 0),
+    month(2026, 11, 25_567.6, 4519.72, 1193.99),
+  ],
 } as unknown as Pick<HouseSeasonEstimate, 'monthly' | 'fuel'>;
 
 describe('season chart data', () => {
@@ -76,14 +95,28 @@ describe('production calendar values', () => {
     edited.periods[0]!.dayHeatingC = '68'; // 20 °C
     edited.periods[1]!.nightHeatingC = '50'; // ignored: the house is empty then
     const body = toCalendarInput(edited, initial, stored, units);
-    expect(body.periods[0]).toEqual({ startMonthDay: '09-01', endMonthDay: '11-30', mode: 'heated', dayHeatingC: 20, nightHeatingC: 16, label: 'Fall crop' });
+    expect(body.periods[0]).toEqual({
+      startMonthDay: '09-01',
+      endMonthDay: '11-30',
+      mode: 'heated',
+      dayHeatingC: 20,
+      nightHeatingC: 16,
+      label: 'Fall crop',
+    });
     expect(body.periods[0]!.dayHeatingC).toBeCloseTo(20, 12);
     expect(body.periods[1]).toEqual({ startMonthDay: '12-01', endMonthDay: '01-14', mode: 'empty' });
   });
 
   it('refuses a setpoint outside the shared bounds, in the user’s unit', () => {
     const schema = calendarFormSchema(unitsFor('si'));
-    const period = { startMonthDay: '01-01', endMonthDay: '02-01', mode: 'heated', dayHeatingC: '55', nightHeatingC: '', label: '' };
+    const period = {
+      startMonthDay: '01-01',
+      endMonthDay: '02-01',
+      mode: 'heated',
+      dayHeatingC: '55',
+      nightHeatingC: '',
+      label: '',
+    };
     expect(schema.isValidSync({ periods: [period] })).toBe(false);
     expect(schema.isValidSync({ periods: [{ ...period, dayHeatingC: '20' }] })).toBe(true);
   });
@@ -119,22 +152,27 @@ describe('measures values', () => {
     const rows = rowsFromComparison(comparison);
     expect(rows.map((row) => row.kind)).toEqual(['thermal-curtain', 'sealing']);
     rows[0]!.cost = '9500';
-    expect(measuresRequestBody(rows)).toEqual([
-      { kind: 'thermal-curtain', costAmount: 9500 },
-      { kind: 'sealing' },
-    ]);
+    expect(measuresRequestBody(rows)).toEqual([{ kind: 'thermal-curtain', costAmount: 9500 }, { kind: 'sealing' }]);
     rows[1]!.cost = '0';
     expect(measuresRequestBody(rows)[1]).toEqual({ kind: 'sealing', costAmount: 0 });
   });
 
   it('shows the light change beside layer and screen measures, and payback in words', () => {
-    const curtain = result({ lightChange: { surface: 'roof', before: 0.78, after: 0.7566, relativeChange: -0.03, source: 'x' } });
+    const curtain = result({
+      lightChange: { surface: 'roof', before: 0.78, after: 0.7566, relativeChange: -0.03, source: 'x' },
+    });
     expect(lightChangeText(curtain, unitsFor('si'))).toBe('Roof: 78 % → 76 % (3 % less light)');
     expect(lightChangeText(result({}), unitsFor('si'))).toBe('—');
     expect(paybackText(result({}))).toBe('enter a cost');
     expect(paybackText(result({ costAmount: 100, paybackStatus: 'never', paybackText: 'never' }))).toBe('never');
-    expect(paybackText(result({ costAmount: 0, paybackStatus: 'immediate', paybackYears: 0, paybackText: 'immediately' }))).toBe('immediately');
-    expect(paybackText(result({ costAmount: 9500, paybackStatus: 'years', paybackYears: 4.5, paybackText: '4.5 years' }))).toBe('4.5 years');
-    expect(paybackText(result({ applicable: false, paybackStatus: 'not-applicable', paybackText: 'not applicable' }))).toBe('—');
+    expect(
+      paybackText(result({ costAmount: 0, paybackStatus: 'immediate', paybackYears: 0, paybackText: 'immediately' })),
+    ).toBe('immediately');
+    expect(
+      paybackText(result({ costAmount: 9500, paybackStatus: 'years', paybackYears: 4.5, paybackText: '4.5 years' })),
+    ).toBe('4.5 years');
+    expect(
+      paybackText(result({ applicable: false, paybackStatus: 'not-applicable', paybackText: 'not applicable' })),
+    ).toBe('—');
   });
 });

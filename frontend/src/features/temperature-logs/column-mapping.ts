@@ -48,7 +48,6 @@ export function mappingFormValues(inspection: TemperatureCsvInspection, fileName
   };
 }
 
-
 export const columnMappingSchema = yup.object({
   name: yup.string().trim().max(200, 'At most 200 characters').required('Name the log'),
   timeLayout: yup.mixed<TimeLayout>().oneOf(['timestamp', 'date-and-time']).required(),
@@ -69,10 +68,16 @@ export const columnMappingSchema = yup.object({
     is: 'single',
     then: (schema: yup.StringSchema) => schema.required('Choose the temperature column'),
   }),
-  minColumn: yup.string().when('valueLayout', { is: 'min-max', then: (schema: yup.StringSchema) => schema.required('Choose the minimum column') }),
+  minColumn: yup.string().when('valueLayout', {
+    is: 'min-max',
+    then: (schema: yup.StringSchema) => schema.required('Choose the minimum column'),
+  }),
   maxColumn: yup
     .string()
-    .when('valueLayout', { is: 'min-max', then: (schema: yup.StringSchema) => schema.required('Choose the maximum column') })
+    .when('valueLayout', {
+      is: 'min-max',
+      then: (schema: yup.StringSchema) => schema.required('Choose the maximum column'),
+    })
     .test('not-min', 'The maximum must be another column than the minimum', function check(value) {
       return this.parent.valueLayout !== 'min-max' || !value || value !== this.parent.minColumn;
     }),
@@ -85,7 +90,10 @@ export const columnMappingSchema = yup.object({
 const orNull = (value: string) => (value === '' ? null : value);
 
 /** The confirmed form → the mapping the upload sends (only the chosen layout's columns). */
-export function toColumnMapping(values: ColumnMappingFormValues, inspection: TemperatureCsvInspection): TemperatureColumnMapping {
+export function toColumnMapping(
+  values: ColumnMappingFormValues,
+  inspection: TemperatureCsvInspection,
+): TemperatureColumnMapping {
   const byTimestamp = values.timeLayout === 'timestamp';
   const single = values.valueLayout === 'single';
   return {
@@ -135,7 +143,10 @@ export interface FileProblem {
 export function fileProblems(error: unknown): FileProblem[] {
   if (!(error instanceof ApiError)) return [];
   return error.details.map((detail) => ({
-    where: detail.field.replace(/^line\b/, 'Line').replace(/^file$/, 'File').replace(/^mapping\./, 'Mapping: '),
+    where: detail.field
+      .replace(/^line\b/, 'Line')
+      .replace(/^file$/, 'File')
+      .replace(/^mapping\./, 'Mapping: '),
     message: detail.message,
   }));
 }

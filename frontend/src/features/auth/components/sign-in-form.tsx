@@ -75,18 +75,13 @@ export function SignInForm({ onSignedIn }: SignInFormProps) {
                       void setValues({ email: account.email, password: demoAccounts.data?.password ?? '' })
                     }
                   >
-                    <ListItemText
-                      primary={`${account.name} — ${account.email}`}
-                      secondary={account.description}
-                    />
+                    <ListItemText primary={`${account.name} — ${account.email}`} secondary={account.description} />
                   </ListItemButton>
                 ))}
               </List>
             </Paper>
           ) : null}
-          {demoAccounts.error ? (
-            <Alert severity="info">Demo accounts could not be listed.</Alert>
-          ) : null}
+          {demoAccounts.error ? <Alert severity="info">Demo accounts could not be listed.</Alert> : null}
         </Stack>
       )}
     </Formik>

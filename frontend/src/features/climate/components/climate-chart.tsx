@@ -33,7 +33,11 @@ export function ClimateChart({ series, unitLabel }: { series: ClimateChartSeries
     [series, unitLabel, theme],
   );
   return (
-    <Box sx={{ height: 260 }} role="img" aria-label={`Chart of the monthly mean daily minimum and maximum in ${unitLabel}`}>
+    <Box
+      sx={{ height: 260 }}
+      role="img"
+      aria-label={`Chart of the monthly mean daily minimum and maximum in ${unitLabel}`}
+    >
       <Line
         data={data}
         options={{

@@ -11,11 +11,19 @@ const climate: SiteClimate = {
   summerDesignC: 30,
   summerDesignWetBulbC: 22,
   summerDailyRangeK: 10,
-  monthly: Array.from({ length: 12 }, (_unused, index) => ({ month: index + 1, meanDailyMinC: index - 5, meanDailyMaxC: index + 5 })),
+  monthly: Array.from({ length: 12 }, (_unused, index) => ({
+    month: index + 1,
+    meanDailyMinC: index - 5,
+    meanDailyMaxC: index + 5,
+  })),
   sourceNote: null,
 };
 
-function renderEditor(onSave: (body: SiteClimate) => Promise<unknown>, system: 'si' | 'us' = 'si', stored: SiteClimate | null = climate) {
+function renderEditor(
+  onSave: (body: SiteClimate) => Promise<unknown>,
+  system: 'si' | 'us' = 'si',
+  stored: SiteClimate | null = climate,
+) {
   return render(
     <UnitSystemProvider system={system}>
       <ClimateEditor climate={stored} onSave={onSave} />
@@ -57,7 +65,11 @@ describe('ClimateEditor', () => {
   it("shows the server's 422 under the month it names", async () => {
     const user = userEvent.setup();
     const onSave = vi.fn(async () => {
-      throw new ApiError(422, 'the mean daily minimum cannot be above the mean daily maximum', 'climate.monthly[2].meanDailyMinC');
+      throw new ApiError(
+        422,
+        'the mean daily minimum cannot be above the mean daily maximum',
+        'climate.monthly[2].meanDailyMinC',
+      );
     });
     renderEditor(onSave);
     await user.click(screen.getByRole('button', { name: 'Save climate' }));

@@ -3,7 +3,11 @@ import { Box, Typography } from '@mui/material';
 /** Where a grower finds each number of the climate form. */
 export function ClimateGuidance() {
   return (
-    <Box component="aside" aria-labelledby="climate-guidance-heading" sx={{ bgcolor: 'background.default', p: 2, borderRadius: 1 }}>
+    <Box
+      component="aside"
+      aria-labelledby="climate-guidance-heading"
+      sx={{ bgcolor: 'background.default', p: 2, borderRadius: 1 }}
+    >
       <Typography id="climate-guidance-heading" variant="h4" component="h3" gutterBottom>
         Where to find these numbers
       </Typography>
@@ -20,8 +24,8 @@ export function ClimateGuidance() {
         </Typography>
         <Typography component="li" variant="body2">
           <strong>Monthly minimum and maximum</strong>: the 30-year climate normals (mean daily minimum and mean daily
-          maximum for each month) published by your national weather service. Prefer a station at a similar
-          elevation and distance from the coast.
+          maximum for each month) published by your national weather service. Prefer a station at a similar elevation
+          and distance from the coast.
         </Typography>
         <Typography component="li" variant="body2">
           <strong>Clearness</strong> (optional): the share of clear-sky sunshine that reaches the ground in the month.

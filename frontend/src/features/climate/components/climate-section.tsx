@@ -18,11 +18,7 @@ export function ClimateSection({ farmId, canEdit }: { farmId: number; canEdit: b
         {climate.isPending ? <LoadingState label="Loading climate…" /> : null}
         <ErrorAlert error={climate.error} title="Climate could not be loaded" />
         {climate.data ? (
-          <ClimateEditor
-            climate={climate.data.climate}
-            readOnly={!canEdit}
-            onSave={(body) => save.mutateAsync(body)}
-          />
+          <ClimateEditor climate={climate.data.climate} readOnly={!canEdit} onSave={(body) => save.mutateAsync(body)} />
         ) : null}
       </Stack>
     </Paper>

@@ -98,7 +98,12 @@ describe('CoolingPanel', () => {
       if (path === '/api/estimates/cooling') {
         return {
           ...demoHouseBCooling,
-          capacity: { ...demoHouseBCooling.capacity, installedFlowM3PerS: 7.552, verdict: 'adequate', additionalFansNeeded: 0 },
+          capacity: {
+            ...demoHouseBCooling.capacity,
+            installedFlowM3PerS: 7.552,
+            verdict: 'adequate',
+            additionalFansNeeded: 0,
+          },
         } as never;
       }
       throw new Error(`unexpected POST ${path}`);

@@ -145,7 +145,10 @@ function PadsResult({
           <Figure label="Saturation efficiency" value={formatPercent(pads.saturationEfficiency)} />
         </Grid>
         <Grid size={6}>
-          <Figure label="Air leaving the pads at the peak" value={units.format('temperature', pads.leavingAirAtPeakC)} />
+          <Figure
+            label="Air leaving the pads at the peak"
+            value={units.format('temperature', pads.leavingAirAtPeakC)}
+          />
         </Grid>
         <Grid size={6}>
           <Figure
@@ -216,7 +219,9 @@ export function CoolingPanel({ house, canRunEstimates, editedHouse = null, edits
       ) : null}
       {edited.error ? <ErrorAlert error={edited.error} title="Your unsaved edits could not be computed" /> : null}
       {editsInvalid ? (
-        <Alert severity="info">Some fields in the form are not valid: these results are for the last valid values.</Alert>
+        <Alert severity="info">
+          Some fields in the form are not valid: these results are for the last valid values.
+        </Alert>
       ) : null}
 
       {!estimate && !stored.error ? (
@@ -273,7 +278,10 @@ export function CoolingPanel({ house, canRunEstimates, editedHouse = null, edits
               />
             </Grid>
             <Grid size={6}>
-              <Figure label="Installed exhaust" value={units.format('airFlow', estimate.capacity.installedFlowM3PerS)} />
+              <Figure
+                label="Installed exhaust"
+                value={units.format('airFlow', estimate.capacity.installedFlowM3PerS)}
+              />
             </Grid>
             <Grid size={6}>
               <Figure
@@ -348,10 +356,15 @@ export function CoolingPanel({ house, canRunEstimates, editedHouse = null, edits
                   </Grid>
                 </Grid>
                 <Typography variant="body2" color="text.secondary">
-                  Cooling setpoint {units.format('temperature', spec.setpoints.coolingC)}. Ventilation alone cannot
-                  cool below the outdoor air; pads cool toward the wet bulb.
+                  Cooling setpoint {units.format('temperature', spec.setpoints.coolingC)}. Ventilation alone cannot cool
+                  below the outdoor air; pads cool toward the wet bulb.
                 </Typography>
-                <PadWhatIf values={padWhatIf} onChange={setPadWhatIf} units={units} referenceData={referenceData.data} />
+                <PadWhatIf
+                  values={padWhatIf}
+                  onChange={setPadWhatIf}
+                  units={units}
+                  referenceData={referenceData.data}
+                />
                 <PadsResult estimate={estimate} units={units} referenceData={referenceData.data} />
               </Stack>
             </AccordionDetails>
@@ -444,8 +457,8 @@ export function CoolingPanel({ house, canRunEstimates, editedHouse = null, edits
             </AccordionSummary>
             <AccordionDetails>
               <Typography variant="body2" color="text.secondary" sx={{ mb: 1 }}>
-                Hover or focus a line for its source. Values marked “from memory” or “rule of thumb” are not yet
-                checked against a primary table.
+                Hover or focus a line for its source. Values marked “from memory” or “rule of thumb” are not yet checked
+                against a primary table.
               </Typography>
               <AssumptionList assumptions={estimate.assumptions} units={units} />
             </AccordionDetails>

@@ -149,7 +149,9 @@ export function FuelPricesEditor({
                         </Button>
                       </Box>
                     ) : (
-                      <Alert severity="info">Your role on this farm lets you read its prices but not change them.</Alert>
+                      <Alert severity="info">
+                        Your role on this farm lets you read its prices but not change them.
+                      </Alert>
                     )}
                   </Stack>
                 </Form>

@@ -21,11 +21,7 @@ export function HeatLossChart({ components }: { components: HeatLossComponent[] 
     [components, units, theme],
   );
   return (
-    <Box
-      sx={{ height: 200 }}
-      role="img"
-      aria-label={`Bar chart of the heat loss by part, in ${units.label('power')}`}
-    >
+    <Box sx={{ height: 200 }} role="img" aria-label={`Bar chart of the heat loss by part, in ${units.label('power')}`}>
       <Bar
         data={data}
         options={{

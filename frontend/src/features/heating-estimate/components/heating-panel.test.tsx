@@ -125,7 +125,10 @@ describe('HeatingPanel', () => {
     post.mockImplementation(async (path: string) => {
       if (path === `/api/houses/${demoHouseB.id}/estimate`) return demoHouseBHeating as never;
       if (path === '/api/estimates') {
-        return { ...demoHouseBHeating, heatLoss: { ...demoHouseBHeating.heatLoss, insideC: 15, totalW: 109_000 } } as never;
+        return {
+          ...demoHouseBHeating,
+          heatLoss: { ...demoHouseBHeating.heatLoss, insideC: 15, totalW: 109_000 },
+        } as never;
       }
       throw new Error(`unexpected POST ${path}`);
     });

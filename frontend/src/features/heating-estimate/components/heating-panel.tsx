@@ -18,13 +18,7 @@ import {
 } from '@mui/material';
 import { useQuery } from '@tanstack/react-query';
 import { useMemo, useState } from 'react';
-import type {
-  HeatingConditionsSource,
-  HeatingEstimate,
-  House,
-  HouseSpec,
-  ReferenceData,
-} from '../../../api/types';
+import type { HeatingConditionsSource, HeatingEstimate, House, HouseSpec, ReferenceData } from '../../../api/types';
 import {
   AssumptionList,
   CautionsAlert,
@@ -74,7 +68,10 @@ function sourceWord(source: HeatingConditionsSource[keyof HeatingConditionsSourc
 
 const LAYER_WORDS: Record<number, string> = { 0: 'opaque', 1: 'single layer', 2: 'double layer', 3: 'triple layer' };
 
-function coveringOf(referenceData: ReferenceData | undefined, coveringId: string): { label: string; layers: string | null } {
+function coveringOf(
+  referenceData: ReferenceData | undefined,
+  coveringId: string,
+): { label: string; layers: string | null } {
   const row = referenceRows(referenceData, 'coverings').find((candidate) => candidate.id === coveringId);
   const layers = typeof row?.layers === 'number' ? (LAYER_WORDS[row.layers] ?? `${row.layers} layers`) : null;
   return { label: row?.label ?? coveringId, layers };
@@ -99,8 +96,8 @@ function HeaterVerdict({ estimate, units }: { estimate: HeatingEstimate; units: 
   if (heater.verdict === 'adequate') {
     verdict = (
       <Alert severity="success" data-testid="heater-verdict">
-        <strong>Heaters are adequate.</strong> {units.format('power', heater.installedOutputW)} installed output covers the{' '}
-        {units.format('power', heater.requiredOutputW)} required (design loss plus {margin} margin).
+        <strong>Heaters are adequate.</strong> {units.format('power', heater.installedOutputW)} installed output covers
+        the {units.format('power', heater.requiredOutputW)} required (design loss plus {margin} margin).
       </Alert>
     );
   } else if (heater.verdict === 'short') {
@@ -114,8 +111,8 @@ function HeaterVerdict({ estimate, units }: { estimate: HeatingEstimate; units: 
   } else {
     verdict = (
       <Alert severity="error" data-testid="heater-verdict">
-        <strong>No heaters entered.</strong> {units.format('power', heater.requiredOutputW)} output is required (design loss
-        plus {margin} margin).
+        <strong>No heaters entered.</strong> {units.format('power', heater.requiredOutputW)} output is required (design
+        loss plus {margin} margin).
       </Alert>
     );
   }
@@ -287,10 +284,7 @@ export function HeatingPanel({ house, canRunEstimates, editedHouse = null, edits
   const referenceData = useQuery(referenceDataQueryOptions());
   const [whatIf, setWhatIf] = useState<HeatingWhatIfValues>(EMPTY_HEATING_WHAT_IF);
   const settledWhatIf = useDebouncedValue(whatIf, 400);
-  const whatIfConditions = useMemo(
-    () => parseHeatingWhatIf(settledWhatIf, units).conditions,
-    [settledWhatIf, units],
-  );
+  const whatIfConditions = useMemo(() => parseHeatingWhatIf(settledWhatIf, units).conditions, [settledWhatIf, units]);
 
   const stored = useQuery({
     ...storedHeatingEstimateQueryOptions(house.id, house.updatedAt, whatIfConditions),
@@ -301,7 +295,9 @@ export function HeatingPanel({ house, canRunEstimates, editedHouse = null, edits
     ...editedHeatingEstimateQueryOptions(
       house.id,
       editedHouse ?? houseSpecOf(house),
-      storedResult ? statelessHeatingConditions(storedResult) : { designOutdoorC: 0, elevationM: 0, insideRelativeHumidityPct: 0 },
+      storedResult
+        ? statelessHeatingConditions(storedResult)
+        : { designOutdoorC: 0, elevationM: 0, insideRelativeHumidityPct: 0 },
     ),
     enabled: canRunEstimates && editedHouse !== null && storedResult !== undefined,
   });
@@ -339,7 +335,9 @@ export function HeatingPanel({ house, canRunEstimates, editedHouse = null, edits
       ) : null}
       {edited.error ? <ErrorAlert error={edited.error} title="Your unsaved edits could not be computed" /> : null}
       {editsInvalid ? (
-        <Alert severity="info">Some fields in the form are not valid: these results are for the last valid values.</Alert>
+        <Alert severity="info">
+          Some fields in the form are not valid: these results are for the last valid values.
+        </Alert>
       ) : null}
 
       <HeatingWhatIf
@@ -348,8 +346,12 @@ export function HeatingPanel({ house, canRunEstimates, editedHouse = null, edits
         units={units}
         hasCurtain={Boolean(spec.curtainId)}
         placeholders={{
-          designOutdoor: stored.data ? units.toInput('temperature', stored.data.conditionsUsed.designOutdoorC) : undefined,
-          insideRelativeHumidityPct: stored.data ? String(stored.data.conditionsUsed.insideRelativeHumidityPct) : undefined,
+          designOutdoor: stored.data
+            ? units.toInput('temperature', stored.data.conditionsUsed.designOutdoorC)
+            : undefined,
+          insideRelativeHumidityPct: stored.data
+            ? String(stored.data.conditionsUsed.insideRelativeHumidityPct)
+            : undefined,
         }}
       />
 
@@ -429,8 +431,8 @@ export function HeatingPanel({ house, canRunEstimates, editedHouse = null, edits
             </AccordionSummary>
             <AccordionDetails>
               <Typography variant="body2" color="text.secondary" sx={{ mb: 1 }}>
-                Hover or focus a line for its source. Values marked “from memory” or “rule of thumb” are not yet
-                checked against a primary table: treat the result as a planning range.
+                Hover or focus a line for its source. Values marked “from memory” or “rule of thumb” are not yet checked
+                against a primary table: treat the result as a planning range.
               </Typography>
               <AssumptionList assumptions={estimate.assumptions} units={units} />
             </AccordionDetails>

@@ -1,4 +1,4 @@
-import { BOUNDS } from '@bounds';
+import { BOUNDS } from '@thermbay/engine/vocabulary';
 import { Button, Checkbox, FormControlLabel, Stack, TextField, Tooltip } from '@mui/material';
 import { useEffect, useRef } from 'react';
 import type { PartialHeatingConditions } from '../../../api/types';
@@ -76,8 +76,7 @@ export function HeatingWhatIf({
     // Only a unit switch converts; values are read at that moment on purpose.
   }, [units]);
 
-  const changed =
-    values.designOutdoor !== '' || values.insideRelativeHumidityPct !== '' || values.curtainClosed;
+  const changed = values.designOutdoor !== '' || values.insideRelativeHumidityPct !== '' || values.curtainClosed;
   return (
     <Stack
       direction={{ xs: 'column', sm: 'row' }}

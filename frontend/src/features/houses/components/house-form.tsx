@@ -268,12 +268,7 @@ export function HouseForm({
               <Section id="house-section-air" title="Air leakage, curtain and perimeter">
                 <Grid container spacing={2}>
                   <Grid size={{ xs: 12, md: 8 }}>
-                    <FormSelectField
-                      name="airLeakageClassId"
-                      label="Air tightness"
-                      options={leakageOptions}
-                      required
-                    />
+                    <FormSelectField name="airLeakageClassId" label="Air tightness" options={leakageOptions} required />
                   </Grid>
                   <Grid size={{ xs: 12, md: 4 }}>
                     <FormNumberField
@@ -337,10 +332,7 @@ export function HouseForm({
                           </Grid>
                           {readOnly ? null : (
                             <Tooltip title="Remove this heater group">
-                              <IconButton
-                                aria-label={`Remove heater group ${index + 1}`}
-                                onClick={() => remove(index)}
-                              >
+                              <IconButton aria-label={`Remove heater group ${index + 1}`} onClick={() => remove(index)}>
                                 <DeleteOutlineIcon />
                               </IconButton>
                             </Tooltip>
@@ -355,9 +347,9 @@ export function HouseForm({
                         </div>
                       )}
                       <Typography variant="body2" color="text.secondary">
-                        Fuel-fired heaters need combustion air and venting to the outside; unvented or poorly
-                        vented heaters can injure crops (ethylene) and people (carbon monoxide). Follow local
-                        codes and have a licensed installer check the installation.
+                        Fuel-fired heaters need combustion air and venting to the outside; unvented or poorly vented
+                        heaters can injure crops (ethylene) and people (carbon monoxide). Follow local codes and have a
+                        licensed installer check the installation.
                       </Typography>
                     </Stack>
                   )}
@@ -379,12 +371,7 @@ export function HouseForm({
                     />
                   </Grid>
                   <Grid size={{ xs: 12, sm: 4 }}>
-                    <FormNumberField
-                      name="inletAreaM2"
-                      label="Inlet free area"
-                      unit={units.label('area')}
-                      required
-                    />
+                    <FormNumberField name="inletAreaM2" label="Inlet free area" unit={units.label('area')} required />
                   </Grid>
                 </Grid>
               </Section>

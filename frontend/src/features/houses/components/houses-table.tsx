@@ -56,11 +56,8 @@ export function HousesTable({ houses, loading }: { houses: House[]; loading?: bo
         (house) => house.lengthM,
         (v) => units.format('length', v, { withoutUnit: true }),
       ),
-      numberColumn(
-        'floorArea',
-        `Floor (${units.label('area')})`,
-        floorAreaM2,
-        (v) => units.format('area', v, { withoutUnit: true, decimals: 0 }),
+      numberColumn('floorArea', `Floor (${units.label('area')})`, floorAreaM2, (v) =>
+        units.format('area', v, { withoutUnit: true, decimals: 0 }),
       ),
       numberColumn(
         'heaterOutput',

@@ -49,11 +49,15 @@ describe('MembersTable', () => {
     const user = userEvent.setup();
     vi.stubGlobal(
       'fetch',
-      vi.fn(async () =>
-        new Response(JSON.stringify({ statusCode: 400, error: 'Bad Request', message: 'A farm needs at least one owner' }), {
-          status: 400,
-          headers: { 'content-type': 'application/json' },
-        }),
+      vi.fn(
+        async () =>
+          new Response(
+            JSON.stringify({ statusCode: 400, error: 'Bad Request', message: 'A farm needs at least one owner' }),
+            {
+              status: 400,
+              headers: { 'content-type': 'application/json' },
+            },
+          ),
       ),
     );
     renderTable(true);

@@ -46,7 +46,8 @@ const budget: SeasonBudget = {
       problem: 'no price for the fuel',
       unmetHeatKWh: 293.0711,
       hoursBelowSetpoint: 37,
-      capacityCaution: 'The heaters (installed output {{power:70337}}) cannot hold the setpoint for 37 hours of the season.',
+      capacityCaution:
+        'The heaters (installed output {{power:70337}}) cannot hold the setpoint for 37 hours of the season.',
     },
   ],
   byFuel: [
@@ -87,7 +88,10 @@ describe('SeasonBudgetSection', () => {
       url.endsWith('.csv?units=us')
         ? new Response('house,month\n', {
             status: 200,
-            headers: { 'content-type': 'text/csv', 'content-disposition': 'attachment; filename="season-budget-farm-3-us.csv"' },
+            headers: {
+              'content-type': 'text/csv',
+              'content-disposition': 'attachment; filename="season-budget-farm-3-us.csv"',
+            },
           })
         : jsonResponse(budget),
     );

@@ -108,8 +108,8 @@ function BudgetTable({ budget, units }: { budget: SeasonBudget; units: Units }) 
                     component="div"
                     title={house.capacityCaution ? units.prose(house.capacityCaution) : undefined}
                   >
-                    {house.hoursBelowSetpoint} h below setpoint: heaters too small ({units.format('energyKWh', house.unmetHeatKWh)}{' '}
-                    not delivered)
+                    {house.hoursBelowSetpoint} h below setpoint: heaters too small (
+                    {units.format('energyKWh', house.unmetHeatKWh)} not delivered)
                   </Typography>
                 ) : null}
               </TableCell>

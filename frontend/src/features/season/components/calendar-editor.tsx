@@ -137,7 +137,9 @@ export function CalendarEditor({ houseId, canEdit }: { houseId: number; canEdit:
                                             name={`periods[${index}].dayHeatingC`}
                                             disabled={!heated}
                                             placeholder="house"
-                                            slotProps={{ htmlInput: { 'aria-label': `Period ${n} day setpoint (${t})` } }}
+                                            slotProps={{
+                                              htmlInput: { 'aria-label': `Period ${n} day setpoint (${t})` },
+                                            }}
                                           />
                                         </TableCell>
                                         <TableCell>
@@ -145,7 +147,9 @@ export function CalendarEditor({ houseId, canEdit }: { houseId: number; canEdit:
                                             name={`periods[${index}].nightHeatingC`}
                                             disabled={!heated}
                                             placeholder="house"
-                                            slotProps={{ htmlInput: { 'aria-label': `Period ${n} night setpoint (${t})` } }}
+                                            slotProps={{
+                                              htmlInput: { 'aria-label': `Period ${n} night setpoint (${t})` },
+                                            }}
                                           />
                                         </TableCell>
                                         <TableCell>
@@ -157,7 +161,10 @@ export function CalendarEditor({ houseId, canEdit }: { houseId: number; canEdit:
                                         <TableCell>
                                           {canEdit ? (
                                             <Tooltip title={`Remove period ${n}`}>
-                                              <IconButton aria-label={`Remove period ${n}`} onClick={() => helpers.remove(index)}>
+                                              <IconButton
+                                                aria-label={`Remove period ${n}`}
+                                                onClick={() => helpers.remove(index)}
+                                              >
                                                 <DeleteOutlineIcon />
                                               </IconButton>
                                             </Tooltip>

@@ -16,7 +16,12 @@ const season = {
   unitUs: 'US gal',
 };
 
-function measure(index: number, kind: MeasureResult['kind'], costAmount: number | null, yearlyMoneySaved: number): MeasureResult {
+function measure(
+  index: number,
+  kind: MeasureResult['kind'],
+  costAmount: number | null,
+  yearlyMoneySaved: number,
+): MeasureResult {
   const paybackYears = costAmount === null ? null : costAmount / yearlyMoneySaved;
   return {
     index,
@@ -44,7 +49,14 @@ function measure(index: number, kind: MeasureResult['kind'], costAmount: number 
 }
 
 function comparison(measures: MeasureResult[], defaultsUsed: boolean): MeasureComparison {
-  return { houseId: 7, baseline: season, measures, defaultsUsed, notes: [], inputsUsed: {} as MeasureComparison['inputsUsed'] };
+  return {
+    houseId: 7,
+    baseline: season,
+    measures,
+    defaultsUsed,
+    notes: [],
+    inputsUsed: {} as MeasureComparison['inputsUsed'],
+  };
 }
 
 afterEach(() => vi.unstubAllGlobals());
@@ -60,8 +72,14 @@ describe('MeasuresPanel', () => {
         bodies.push(body);
         const result =
           body.measures.length === 0
-            ? comparison([measure(0, 'thermal-curtain', null, 2116), measure(1, 'night-setpoint-lower', null, 847)], true)
-            : comparison([measure(1, 'night-setpoint-lower', 100, 847), measure(0, 'thermal-curtain', 12_000, 2116)], false);
+            ? comparison(
+                [measure(0, 'thermal-curtain', null, 2116), measure(1, 'night-setpoint-lower', null, 847)],
+                true,
+              )
+            : comparison(
+                [measure(1, 'night-setpoint-lower', 100, 847), measure(0, 'thermal-curtain', 12_000, 2116)],
+                false,
+              );
         return new Response(JSON.stringify(result), { status: 200, headers: { 'content-type': 'application/json' } });
       }),
     );

@@ -33,7 +33,13 @@ import {
 import { measuresQueryOptions } from '../queries';
 
 /** Energy measures for this house, each priced by the user and ranked by simple payback. */
-export function MeasuresPanel({ houseId, climateSource }: { houseId: number; climateSource: SeasonRequest['climateSource'] }) {
+export function MeasuresPanel({
+  houseId,
+  climateSource,
+}: {
+  houseId: number;
+  climateSource: SeasonRequest['climateSource'];
+}) {
   const units = useUnits();
   // [] asks the API for its default measures at cost 0; after that, the user's list and costs.
   const [requested, setRequested] = useState<Measure[]>([]);
@@ -107,7 +113,10 @@ export function MeasuresPanel({ houseId, climateSource }: { houseId: number; cli
                     const fuelSaved =
                       measure.fuelSavedSi === null || measure.fuelSavedUs === null || !baselineFuel
                         ? '—'
-                        : units.fuel({ fuelQuantitySi: measure.fuelSavedSi, fuelQuantityUs: measure.fuelSavedUs }, baselineFuel);
+                        : units.fuel(
+                            { fuelQuantitySi: measure.fuelSavedSi, fuelQuantityUs: measure.fuelSavedUs },
+                            baselineFuel,
+                          );
                     return (
                       <TableRow key={`${measure.index}-${measure.kind}`} data-applicable={measure.applicable}>
                         <TableCell>{measure.applicable ? rank + 1 : '—'}</TableCell>
@@ -131,7 +140,9 @@ export function MeasuresPanel({ houseId, climateSource }: { houseId: number; cli
                               onChange={(event) => setCost(measure.index, event.target.value)}
                               placeholder="0"
                               error={!isValidCost(row.cost)}
-                              slotProps={{ htmlInput: { inputMode: 'decimal', 'aria-label': `Cost of: ${measure.label}` } }}
+                              slotProps={{
+                                htmlInput: { inputMode: 'decimal', 'aria-label': `Cost of: ${measure.label}` },
+                              }}
                             />
                           ) : measure.costAmount === null ? (
                             '—'

@@ -52,7 +52,11 @@ export function NightDemandPanel({
             <Stack direction="row" spacing={3} useFlexGap sx={{ flexWrap: 'wrap' }}>
               <Fact label="Sunset" value={readableTime(result.sunset)} />
               <Fact label="Sunrise" value={readableTime(result.sunrise)} />
-              <Fact label="Night length" value={units.format('durationHours', result.nightHours)} testId="night-length" />
+              <Fact
+                label="Night length"
+                value={units.format('durationHours', result.nightHours)}
+                testId="night-length"
+              />
               <Fact label="Heat" value={units.format('energyKWh', result.energyKWh)} />
               <Fact label="Fuel" value={units.fuel(result, fuelUnitsFor(result.inputsUsed.fuelId))} />
               <Fact label="Cost" value={units.money(result.cost)} />

@@ -1,4 +1,16 @@
-import { Alert, AlertTitle, Box, Paper, Stack, Table, TableBody, TableCell, TableHead, TableRow, Typography } from '@mui/material';
+import {
+  Alert,
+  AlertTitle,
+  Box,
+  Paper,
+  Stack,
+  Table,
+  TableBody,
+  TableCell,
+  TableHead,
+  TableRow,
+  Typography,
+} from '@mui/material';
 import { useTheme } from '@mui/material/styles';
 import { Bar } from 'react-chartjs-2';
 import type { HouseSeasonEstimate } from '../../../api/types';
@@ -23,8 +35,8 @@ export function SeasonResultPanel({ season }: { season: HouseSeasonEstimate }) {
         </Typography>
         <Typography variant="body2" color="text.secondary">
           {season.period.startDate} to {season.period.endDate}: {season.period.heatedDays} of {season.period.days} days
-          heated; {season.fuel.label} at {units.money(season.fuel.pricePerUnit)} per{' '}
-          {season.fuel.priceUnitLabel}, heater efficiency {units.format('fraction', season.fuel.heaterEfficiency)}.
+          heated; {season.fuel.label} at {units.money(season.fuel.pricePerUnit)} per {season.fuel.priceUnitLabel},
+          heater efficiency {units.format('fraction', season.fuel.heaterEfficiency)}.
         </Typography>
         {season.total.hoursBelowSetpoint > 0 ? (
           <Alert severity="warning" data-testid="season-below-setpoint">
@@ -77,7 +89,12 @@ export function SeasonResultPanel({ season }: { season: HouseSeasonEstimate }) {
               animation: false,
               plugins: { legend: { position: 'bottom' } },
               scales: {
-                fuel: { type: 'linear', position: 'left', beginAtZero: true, title: { display: true, text: series.fuelUnitLabel } },
+                fuel: {
+                  type: 'linear',
+                  position: 'left',
+                  beginAtZero: true,
+                  title: { display: true, text: series.fuelUnitLabel },
+                },
                 heat: {
                   type: 'linear',
                   position: 'right',
@@ -110,7 +127,10 @@ export function SeasonResultPanel({ season }: { season: HouseSeasonEstimate }) {
                 <TableCell align="right">{units.money(month.cost, 0)}</TableCell>
                 <TableCell align="right">{month.heatingHours}</TableCell>
                 <TableCell align="right">{units.format('power', month.peakW)}</TableCell>
-                <TableCell align="right" sx={month.hoursBelowSetpoint > 0 ? { color: 'warning.main', fontWeight: 500 } : undefined}>
+                <TableCell
+                  align="right"
+                  sx={month.hoursBelowSetpoint > 0 ? { color: 'warning.main', fontWeight: 500 } : undefined}
+                >
                   {month.hoursBelowSetpoint}
                 </TableCell>
               </TableRow>

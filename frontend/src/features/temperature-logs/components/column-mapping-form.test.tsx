@@ -34,7 +34,9 @@ describe('ColumnMappingForm', () => {
   it('shows the detected columns and sample, and confirms the mapping the user adjusted', async () => {
     const user = userEvent.setup();
     const onConfirm = vi.fn((_name: string, _mapping: TemperatureColumnMapping) => {});
-    render(<ColumnMappingForm inspection={inspection} fileName="station.csv" onConfirm={onConfirm} onCancel={() => {}} />);
+    render(
+      <ColumnMappingForm inspection={inspection} fileName="station.csv" onConfirm={onConfirm} onCancel={() => {}} />,
+    );
 
     const sample = screen.getByRole('table', { name: 'First rows of the file' });
     expect(within(sample).getByText('41.2')).toBeTruthy();
@@ -64,7 +66,9 @@ describe('ColumnMappingForm', () => {
   it('does not confirm without a name', async () => {
     const user = userEvent.setup();
     const onConfirm = vi.fn();
-    render(<ColumnMappingForm inspection={inspection} fileName="station.csv" onConfirm={onConfirm} onCancel={() => {}} />);
+    render(
+      <ColumnMappingForm inspection={inspection} fileName="station.csv" onConfirm={onConfirm} onCancel={() => {}} />,
+    );
     await user.clear(screen.getByRole('textbox', { name: /Name of the log/ }));
     await user.click(screen.getByRole('button', { name: 'Upload log' }));
     expect(await screen.findByText('Name the log')).toBeTruthy();

@@ -56,7 +56,12 @@ function RadioField({
         onChange={(event) => void setFieldValue(name, event.target.value)}
       >
         {options.map((option) => (
-          <FormControlLabel key={option.value} value={option.value} control={<Radio size="small" />} label={option.label} />
+          <FormControlLabel
+            key={option.value}
+            value={option.value}
+            control={<Radio size="small" />}
+            label={option.label}
+          />
         ))}
       </RadioGroup>
     </Box>
@@ -115,7 +120,14 @@ export interface ColumnMappingFormProps {
 }
 
 /** Shows what the server found in the file and lets the user confirm or change the columns. */
-export function ColumnMappingForm({ inspection, fileName, busy, onConfirm, onCancel, children }: ColumnMappingFormProps) {
+export function ColumnMappingForm({
+  inspection,
+  fileName,
+  busy,
+  onConfirm,
+  onCancel,
+  children,
+}: ColumnMappingFormProps) {
   const initialValues = useMemo(() => mappingFormValues(inspection, fileName), [inspection, fileName]);
   const columnOptions = inspection.headers.map((header) => ({ value: header, label: header }));
   const optionalColumnOptions = [{ value: '', label: 'None' }, ...columnOptions];
@@ -178,7 +190,11 @@ export function ColumnMappingForm({ inspection, fileName, busy, onConfirm, onCan
               <Stack direction={{ xs: 'column', sm: 'row' }} spacing={2}>
                 <FormSelectField name="minColumn" label="Minimum column" options={columnOptions} />
                 <FormSelectField name="maxColumn" label="Maximum column" options={columnOptions} />
-                <FormSelectField name="temperatureColumn" label="Mean column (optional)" options={optionalColumnOptions} />
+                <FormSelectField
+                  name="temperatureColumn"
+                  label="Mean column (optional)"
+                  options={optionalColumnOptions}
+                />
               </Stack>
             )}
             <Stack direction={{ xs: 'column', md: 'row' }} spacing={3} sx={{ alignItems: { md: 'center' } }}>

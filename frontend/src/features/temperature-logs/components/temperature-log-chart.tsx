@@ -28,7 +28,11 @@ export function TemperatureLogChart({ logId }: { logId: number }) {
       <Typography variant="h4" component="h3" gutterBottom>
         {log.data.name}: {log.data.startDate} to {log.data.endDate}
       </Typography>
-      <Box sx={{ height: 260 }} role="img" aria-label={`Chart of the daily temperatures of ${log.data.name} in ${series.unitLabel}`}>
+      <Box
+        sx={{ height: 260 }}
+        role="img"
+        aria-label={`Chart of the daily temperatures of ${log.data.name} in ${series.unitLabel}`}
+      >
         <Line
           data={{
             labels: series.labels,

@@ -36,7 +36,13 @@ function progressText(progress: UploadProgress): string {
 }
 
 /** Choose a CSV → the server proposes columns → the user confirms → upload with progress. */
-export function TemperatureLogUpload({ farmId, onStored }: { farmId: number; onStored?: (log: TemperatureLog) => void }) {
+export function TemperatureLogUpload({
+  farmId,
+  onStored,
+}: {
+  farmId: number;
+  onStored?: (log: TemperatureLog) => void;
+}) {
   const inspect = useInspectTemperatureCsv(farmId);
   const upload = useUploadTemperatureLog(farmId);
   const [file, setFile] = useState<File | null>(null);

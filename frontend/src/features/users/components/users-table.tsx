@@ -9,7 +9,15 @@ import { useDeleteUser, useUpdateUser } from '../mutations';
 import { siteRoleSchema } from '../schemas';
 
 /** Site administration: every account, its site role, and removal. Farm data is not shown here. */
-export function UsersTable({ users, currentUserId, loading }: { users: User[]; currentUserId: number; loading?: boolean }) {
+export function UsersTable({
+  users,
+  currentUserId,
+  loading,
+}: {
+  users: User[];
+  currentUserId: number;
+  loading?: boolean;
+}) {
   const updateUser = useUpdateUser();
   const deleteUser = useDeleteUser();
   const [userToDelete, setUserToDelete] = useState<User | null>(null);

@@ -1,0 +1,141 @@
+import type { ExhaustFans } from '../house.types';
+import { standardAtmosphericPressurePa } from '../psychrometrics';
+import type { ReferenceData } from '../reference-data.types';
+import { elevationFactorRow, ventilationValue } from './cooling-reference';
+
+export const METRES_PER_FOOT = 0.3048; // exact by definition
+
+export interface CapacityFactors {
+  elevation: number;
+  light: number;
+  temperatureRise: number;
+  velocity: number;
+  /** elevation × light × temperatureRise */
+  house: number;
+  /** the larger of house and velocity */
+  applied: number;
+}
+
+export interface CapacityResult {
+  baseRateM3PerSM2: number;
+  factors: CapacityFactors;
+  requiredFlowM3PerS: number;
+  installedFlowM3PerS: number;
+  verdict: 'adequate' | 'short' | 'no-fans';
+  fansNeeded: number | null;
+  additionalFansNeeded: number | null;
+  inletAreaNeededM2: number;
+  inletAreaM2: number;
+  inletVerdict: 'adequate' | 'short';
+}
+
+export interface ElevationFactor {
+  factor: number;
+  /** true above the table's last elevation, where the factor is extrapolated by air density */
+  beyondTable: boolean;
+}
+
+/**
+ * Elevation factor: linear between the table's points; above the last point the last factor is
+ * scaled by the standard-atmosphere pressure ratio (thinner air carries less heat per m³).
+ */
+export function elevationFactor(elevationM: number, ref: ReferenceData): ElevationFactor {
+  const row = elevationFactorRow(ref);
+  const elevationFt = Math.max(0, elevationM) / METRES_PER_FOOT;
+  const points = row.elevationsFt;
+  const factors = row.factors;
+  const last = points.length - 1;
+  if (elevationFt <= points[0]) return { factor: factors[0], beyondTable: false };
+  if (elevationFt > points[last]) {
+    const densityRatio =
+      standardAtmosphericPressurePa(points[last] * METRES_PER_FOOT) / standardAtmosphericPressurePa(elevationM);
+    return { factor: factors[last] * densityRatio, beyondTable: true };
+  }
+  for (let i = 1; i <= last; i += 1) {
+    if (elevationFt <= points[i]) {
+      const share = (elevationFt - points[i - 1]) / (points[i] - points[i - 1]);
+      return { factor: factors[i - 1] + share * (factors[i] - factors[i - 1]), beyondTable: false };
+    }
+  }
+  return { factor: factors[last], beyondTable: false };
+}
+
+/** F_vel = √(reference distance / pad-to-fan distance), never below 1. */
+export function velocityFactor(padToFanDistanceM: number, ref: ReferenceData): number {
+  const referenceDistanceM = ventilationValue(ref, 'velocity-factor', 'referenceDistanceM').value;
+  return Math.max(1, Math.sqrt(referenceDistanceM / padToFanDistanceM));
+}
+
+export function lightFactor(peakInteriorLightLux: number, ref: ReferenceData): number {
+  return peakInteriorLightLux / ventilationValue(ref, 'light-factor', 'referenceLux').value;
+}
+
+export function temperatureRiseFactor(allowedTemperatureRiseK: number, ref: ReferenceData): number {
+  return ventilationValue(ref, 'temperature-rise-factor', 'referenceRiseK').value / allowedTemperatureRiseK;
+}
+
+export interface CapacityInput {
+  floorAreaM2: number;
+  elevationM: number;
+  peakInteriorLightLux: number;
+  allowedTemperatureRiseK: number;
+  padToFanDistanceM: number;
+  fans: ExhaustFans;
+  inletAreaM2: number;
+}
+
+/** Flow the inlets (and pads) must pass: the larger of what is installed and what is required. */
+export function designFlowM3PerS(capacity: Pick<CapacityResult, 'requiredFlowM3PerS' | 'installedFlowM3PerS'>): number {
+  return Math.max(capacity.requiredFlowM3PerS, capacity.installedFlowM3PerS);
+}
+
+/**
+ * Summer exhaust capacity by the floor-area method: base rate × max(F_elev·F_light·F_temp, F_vel)
+ * × floor area, compared with the installed fans; inlet area for the design flow at the maximum
+ * inlet velocity.
+ */
+export function requiredCapacity(
+  input: CapacityInput,
+  ref: ReferenceData,
+): CapacityResult & { elevationBeyondTable: boolean } {
+  const baseRateM3PerSM2 = ventilationValue(ref, 'summer-base-rate', 'rateM3PerSM2').value;
+  const elevation = elevationFactor(input.elevationM, ref);
+  const light = lightFactor(input.peakInteriorLightLux, ref);
+  const temperatureRise = temperatureRiseFactor(input.allowedTemperatureRiseK, ref);
+  const velocity = velocityFactor(input.padToFanDistanceM, ref);
+  const house = elevation.factor * light * temperatureRise;
+  const applied = Math.max(house, velocity);
+
+  const requiredFlowM3PerS = baseRateM3PerSM2 * applied * input.floorAreaM2;
+  const installedFlowM3PerS = input.fans.count * input.fans.capacityEachM3PerS;
+  const verdict: CapacityResult['verdict'] =
+    input.fans.count === 0 || installedFlowM3PerS <= 0
+      ? 'no-fans'
+      : installedFlowM3PerS >= requiredFlowM3PerS * (1 - 1e-9)
+        ? 'adequate'
+        : 'short';
+
+  const fanSizeKnown = input.fans.capacityEachM3PerS > 0;
+  // the small tolerance keeps an exact multiple (e.g. 4.0000000001 fans) from rounding up
+  const fansNeeded = fanSizeKnown
+    ? Math.max(1, Math.ceil(requiredFlowM3PerS / input.fans.capacityEachM3PerS - 1e-9))
+    : null;
+  const additionalFansNeeded = fansNeeded === null ? null : Math.max(0, fansNeeded - input.fans.count);
+
+  const maxInletVelocityMPerS = ventilationValue(ref, 'inlet-velocity', 'maxVelocityMPerS').value;
+  const inletAreaNeededM2 = designFlowM3PerS({ requiredFlowM3PerS, installedFlowM3PerS }) / maxInletVelocityMPerS;
+
+  return {
+    baseRateM3PerSM2,
+    factors: { elevation: elevation.factor, light, temperatureRise, velocity, house, applied },
+    requiredFlowM3PerS,
+    installedFlowM3PerS,
+    verdict,
+    fansNeeded,
+    additionalFansNeeded,
+    inletAreaNeededM2,
+    inletAreaM2: input.inletAreaM2,
+    inletVerdict: input.inletAreaM2 >= inletAreaNeededM2 * (1 - 1e-9) ? 'adequate' : 'short',
+    elevationBeyondTable: elevation.beyondTable,
+  };
+}

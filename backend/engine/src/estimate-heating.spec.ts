@@ -1,0 +1,392 @@
+import fc from 'fast-check';
+import { BOUNDS } from './vocabulary';
+import { EngineInputError } from './errors';
+import { estimateHeating, type HeatingConditions } from './estimate-heating';
+import { exampleDoublePolyGableHouse } from './heating/example-houses';
+import type { HouseShape } from './vocabulary';
+import type { HouseSpec } from './house.types';
+import { insideAirDensityKgPerM3 } from './psychrometrics/psychrometrics';
+import { loadReferenceData } from './testing/reference-data';
+import { proseToPlainSi } from './vocabulary';
+import { referenceRow } from './reference-data.types';
+
+/** A number with an SI unit written into prose instead of a {{kind:value}} token. */
+const BARE_SI_QUANTITY = /\d\s*(kW|W\b|°C|K\b|m\b|m²|m³|cm²|kWh)/;
+
+const ref = loadReferenceData();
+const conditions: HeatingConditions = { designOutdoorC: -10, elevationM: 0, insideRelativeHumidityPct: 70 };
+
+function expectEngineError(run: () => unknown, field: string): void {
+  try {
+    run();
+  } catch (error) {
+    expect(error).toBeInstanceOf(EngineInputError);
+    expect((error as EngineInputError).field).toBe(field);
+    return;
+  }
+  throw new Error(`expected EngineInputError on ${field}`);
+}
+
+describe('estimateHeating', () => {
+  const house = exampleDoublePolyGableHouse();
+  const estimate = estimateHeating({ house, conditions }, ref);
+
+  it('returns exactly the agreed shape', () => {
+    expect(Object.keys(estimate).sort()).toEqual(
+      ['assumptions', 'cautions', 'condensation', 'geometry', 'heatLoss', 'heater'].sort(),
+    );
+    expect(Object.keys(estimate.geometry).sort()).toEqual(
+      ['coverAreaM2', 'endwallAreaM2', 'floorAreaM2', 'perimeterM', 'roofAreaM2', 'sidewallAreaM2', 'volumeM3'].sort(),
+    );
+    expect(Object.keys(estimate.heatLoss).sort()).toEqual(
+      [
+        'components',
+        'coveringW',
+        'curtainApplied',
+        'deltaTK',
+        'infiltrationW',
+        'insideC',
+        'outsideC',
+        'perimeterW',
+        'totalW',
+      ].sort(),
+    );
+    expect(Object.keys(estimate.heatLoss.components[0]).sort()).toEqual(
+      ['coefficient', 'conductanceWPerK', 'key', 'label', 'quantity', 'quantityUnit', 'share', 'watts'].sort(),
+    );
+    expect(Object.keys(estimate.heater).sort()).toEqual(
+      [
+        'safetyMargin',
+        'requiredOutputW',
+        'requiredInputW',
+        'installedInputW',
+        'installedOutputW',
+        'verdict',
+        'shortfallW',
+        'lowestHeldOutdoorC',
+        'unitCount',
+        'largestUnitOutputW',
+        'holdsWithLargestUnitOutC',
+        'splitAdvice',
+        'fuelFired',
+      ].sort(),
+    );
+    expect(Object.keys(estimate.condensation).sort()).toEqual(
+      ['anyCondenses', 'dewPointC', 'insideC', 'insideRelativeHumidityPct', 'surfaces'].sort(),
+    );
+    expect(Object.keys(estimate.condensation.surfaces[0]).sort()).toEqual(
+      ['condensationBelowOutdoorC', 'condenses', 'coveringId', 'group', 'insideSurfaceC', 'uWPerM2K'].sort(),
+    );
+    for (const assumption of estimate.assumptions) {
+      expect(Object.keys(assumption).sort()).toEqual(
+        ['confidence', 'key', 'label', 'overridden', 'source', 'unit', 'value'].sort(),
+      );
+    }
+  });
+
+  it('defaults the inside temperature to the night setpoint and matches the hand calculation but for air density', () => {
+    // hand calculation in heating/heat-loss.spec.ts: conduction + perimeter = 2065.907 W/K;
+    // infiltration = ρ · 1006 · 918 · 0.75 / 3600 with ρ from psychrolib at 15 °C, 70 % RH, sea level
+    const { airDensityKgPerM3 } = insideAirDensityKgPerM3(15, 70, 0);
+    const expectedUa = 2065.907 + (airDensityKgPerM3 * 1006 * 918 * 0.75) / 3600;
+    expect(estimate.heatLoss.insideC).toBe(15);
+    expect(estimate.heatLoss.deltaTK).toBe(25);
+    expect(estimate.heatLoss.totalW).toBeCloseTo(expectedUa * 25, 0);
+    expect(airDensityKgPerM3).toBeGreaterThan(1.2);
+    expect(airDensityKgPerM3).toBeLessThan(1.23);
+  });
+
+  it('lists every reference value used with source and confidence', () => {
+    const keys = estimate.assumptions.map((assumption) => assumption.key);
+    for (const key of [
+      'coverings.roof.uWPerM2K',
+      'coverings.sidewalls.uWPerM2K',
+      'coverings.endwalls.uWPerM2K',
+      'airLeakage.airChangesPerHour',
+      'perimeter.wPerMK',
+      'air.specificHeatJPerKgK',
+      'air.densityKgPerM3',
+      'surface.insideRoof.hWPerM2K',
+      'surface.insideWall.hWPerM2K',
+      'heater.safetyMargin',
+      'heater.efficiency',
+      'safety.ethylene-crop-injury',
+      'safety.combustion-air-inlet',
+    ]) {
+      expect(keys).toContain(key);
+    }
+    expect(new Set(keys).size).toBe(keys.length);
+    for (const assumption of estimate.assumptions) {
+      expect(assumption.source.length).toBeGreaterThan(8);
+      expect(assumption.confidence.length).toBeGreaterThan(0);
+    }
+    expect(estimate.assumptions.every((assumption) => !assumption.overridden)).toBe(true);
+  });
+
+  it('marks house overrides as overridden', () => {
+    const overridden = estimateHeating(
+      {
+        house: exampleDoublePolyGableHouse({
+          coveringUOverridesWPerM2K: { endwalls: 2.5 },
+          airChangesPerHourOverride: 0.5,
+        }),
+        conditions,
+      },
+      ref,
+    );
+    const byKey = new Map(overridden.assumptions.map((assumption) => [assumption.key, assumption]));
+    expect(byKey.get('coverings.endwalls.uWPerM2K')).toMatchObject({ value: 2.5, overridden: true });
+    expect(byKey.get('airLeakage.airChangesPerHour')).toMatchObject({ value: 0.5, overridden: true });
+    expect(byKey.get('coverings.roof.uWPerM2K')!.overridden).toBe(false);
+  });
+
+  it('carries combustion-air, venting, carbon-monoxide and crop-injury cautions for fuel-fired heaters only', () => {
+    const text = estimate.cautions.join('\n');
+    expect(estimate.heater.fuelFired).toBe(true);
+    expect(text).toMatch(/combustion/i);
+    expect(text).toMatch(/chimney|flue/i);
+    expect(text).toMatch(/carbon monoxide/i);
+    expect(text).toMatch(/ethylene/i);
+    expect(text).toMatch(/sulfur dioxide/i);
+    expect(text).toMatch(/licensed installers/i);
+
+    const electric = estimateHeating(
+      {
+        house: exampleDoublePolyGableHouse({
+          heaters: [{ count: 3, ratedInputW: 30_000, efficiency: 1, fuelId: 'electricity' }],
+        }),
+        conditions,
+      },
+      ref,
+    );
+    expect(electric.heater.fuelFired).toBe(false);
+    expect(electric.cautions.join('\n')).not.toMatch(/ethylene|carbon monoxide/i);
+    expect(electric.cautions.join('\n')).toMatch(/planning/i);
+  });
+
+  it('writes quantities in cautions, advice and labels as tokens, never as SI numbers', () => {
+    // one small propane heater, a curtain taken as open, humid night: short, single-unit,
+    // curtain, condensation and fuel-fired cautions all appear
+    const short = estimateHeating(
+      {
+        house: exampleDoublePolyGableHouse({
+          curtainId: 'energy-screen-aluminised',
+          heaters: [{ count: 1, ratedInputW: 20_000, efficiency: 0.8, fuelId: 'propane' }],
+        }),
+        conditions: { ...conditions, insideRelativeHumidityPct: 90 },
+      },
+      ref,
+    );
+    expect(short.heater.verdict).toBe('short');
+    const prose = [
+      ...short.cautions,
+      short.heater.splitAdvice,
+      ...short.assumptions.map((assumption) => assumption.label),
+    ];
+    for (const text of prose) expect(text).not.toMatch(BARE_SI_QUANTITY);
+
+    const plain = short.cautions.map(proseToPlainSi).join('\n');
+    const kW = (watts: number) => `${(watts / 1000).toFixed(1)} kW`;
+    expect(plain).toContain(
+      `Installed output ${kW(short.heater.installedOutputW)} is ${kW(short.heater.shortfallW)} short of the ${kW(short.heater.requiredOutputW)} required`,
+    );
+    const ridge = referenceRow(ref, 'safety', 'chimney-above-ridge')!.valueM as number;
+    expect(short.cautions.join('\n')).toContain(`{{length:${ridge}}} above the ridge`);
+    expect(plain).toContain(`at least ${ridge.toFixed(2)} m above the ridge`);
+    expect(plain).toMatch(/\d cm²\/kW of heater input/);
+    expect(plain).not.toMatch(/\{\{/);
+  });
+
+  it('sizes heaters without curtain credit unless asked, and says so', () => {
+    const withCurtain = exampleDoublePolyGableHouse({ curtainId: 'energy-screen-aluminised' });
+    const open = estimateHeating({ house: withCurtain, conditions }, ref);
+    const closed = estimateHeating({ house: withCurtain, conditions: { ...conditions, curtainClosed: true } }, ref);
+    expect(open.heatLoss.curtainApplied).toBe(false);
+    expect(closed.heatLoss.curtainApplied).toBe(true);
+    expect(closed.heatLoss.totalW).toBeLessThan(open.heatLoss.totalW);
+    expect(open.heatLoss.totalW).toBeCloseTo(estimate.heatLoss.totalW, 6);
+    expect(open.cautions.join('\n')).toMatch(/curtain is not credited/);
+  });
+
+  it('single poly condenses and loses more than inflated double poly on the same night', () => {
+    const cover = (id: string): HouseSpec =>
+      exampleDoublePolyGableHouse({ coverings: { roof: id, sidewalls: id, endwalls: id } });
+    const night = { designOutdoorC: 0, elevationM: 200, insideRelativeHumidityPct: 75, insideC: 16 };
+    const single = estimateHeating({ house: cover('poly-single'), conditions: night }, ref);
+    const double = estimateHeating({ house: cover('poly-double-inflated'), conditions: night }, ref);
+    expect(single.heatLoss.totalW).toBeGreaterThan(double.heatLoss.totalW);
+    expect(single.condensation.anyCondenses).toBe(true);
+    expect(
+      double.condensation.surfaces.every(
+        (surface) => surface.insideSurfaceC > single.condensation.surfaces[0].insideSurfaceC + 3,
+      ),
+    ).toBe(true);
+  });
+
+  it.each([
+    ['conditions.designOutdoorC', { designOutdoorC: -80 }],
+    ['conditions.elevationM', { elevationM: 9000 }],
+    ['conditions.insideRelativeHumidityPct', { insideRelativeHumidityPct: 120 }],
+    ['conditions.insideC', { insideC: Number.POSITIVE_INFINITY }],
+  ])('refuses a bad %s', (field, override) => {
+    expectEngineError(() => estimateHeating({ house, conditions: { ...conditions, ...override } }, ref), field);
+  });
+
+  it('refuses a night setpoint out of bounds when no inside temperature is given', () => {
+    expectEngineError(
+      () =>
+        estimateHeating(
+          {
+            house: exampleDoublePolyGableHouse({ setpoints: { dayHeatingC: 18, nightHeatingC: 60, coolingC: 25 } }),
+            conditions,
+          },
+          ref,
+        ),
+      'house.setpoints.nightHeatingC',
+    );
+  });
+
+  it('never returns NaN or Infinity for any in-bounds input', () => {
+    const coveringIds = ref['coverings'].rows.map((row) => row.id);
+    const curtainIds = [null, ...ref['curtains'].rows.map((row) => row.id)];
+    const leakageIds = ref['air-leakage'].rows.map((row) => row.id);
+    const fuelIds = ref['fuels'].rows.map((row) => row.id);
+    fc.assert(
+      fc.property(
+        fc.record({
+          shape: fc.constantFrom<HouseShape>('gable', 'gothic-arch', 'quonset'),
+          spans: fc.integer({ min: BOUNDS.spans.min, max: BOUNDS.spans.max }),
+          widthM: fc.double({ min: BOUNDS.widthM.min, max: BOUNDS.widthM.max, noNaN: true }),
+          lengthM: fc.double({ min: BOUNDS.lengthM.min, max: BOUNDS.lengthM.max, noNaN: true }),
+          eaveHeightM: fc.double({ min: BOUNDS.eaveHeightM.min, max: BOUNDS.eaveHeightM.max, noNaN: true }),
+          riseFraction: fc.double({ min: 0.02, max: 1, noNaN: true }),
+          roof: fc.constantFrom(...coveringIds),
+          walls: fc.constantFrom(...coveringIds),
+          curtainId: fc.constantFrom(...curtainIds),
+          leakage: fc.constantFrom(...leakageIds),
+          perimeterInsulated: fc.boolean(),
+          heaterCount: fc.integer({ min: BOUNDS.heaterCount.min, max: BOUNDS.heaterCount.max }),
+          ratedInputW: fc.double({ min: BOUNDS.heaterInputW.min, max: BOUNDS.heaterInputW.max, noNaN: true }),
+          efficiency: fc.double({ min: BOUNDS.heaterEfficiency.min, max: BOUNDS.heaterEfficiency.max, noNaN: true }),
+          fuelId: fc.constantFrom(...fuelIds),
+          insideC: fc.double({ min: BOUNDS.setpointC.min, max: BOUNDS.setpointC.max, noNaN: true }),
+          designOutdoorC: fc.double({ min: BOUNDS.designOutdoorC.min, max: BOUNDS.designOutdoorC.max, noNaN: true }),
+          elevationM: fc.double({ min: BOUNDS.elevationM.min, max: BOUNDS.elevationM.max, noNaN: true }),
+          rh: fc.double({ min: BOUNDS.relativeHumidityPct.min, max: BOUNDS.relativeHumidityPct.max, noNaN: true }),
+          curtainClosed: fc.boolean(),
+        }),
+        (draw) => {
+          const maxRiseM = Math.min(
+            BOUNDS.ridgeHeightM.max - draw.eaveHeightM,
+            draw.shape === 'quonset'
+              ? draw.widthM / 2
+              : draw.shape === 'gothic-arch'
+                ? (draw.widthM * Math.sqrt(3)) / 2
+                : Infinity,
+          );
+          const ridgeHeightM = Math.max(draw.eaveHeightM + draw.riseFraction * maxRiseM, BOUNDS.ridgeHeightM.min);
+          fc.pre(ridgeHeightM - draw.eaveHeightM <= maxRiseM && ridgeHeightM > draw.eaveHeightM);
+          const result = estimateHeating(
+            {
+              house: exampleDoublePolyGableHouse({
+                shape: draw.shape,
+                spans: draw.spans,
+                widthM: draw.widthM,
+                lengthM: draw.lengthM,
+                eaveHeightM: draw.eaveHeightM,
+                ridgeHeightM,
+                coverings: { roof: draw.roof, sidewalls: draw.walls, endwalls: draw.walls },
+                curtainId: draw.curtainId,
+                airLeakageClassId: draw.leakage,
+                perimeterInsulated: draw.perimeterInsulated,
+                heaters: [
+                  {
+                    count: draw.heaterCount,
+                    ratedInputW: draw.ratedInputW,
+                    efficiency: draw.efficiency,
+                    fuelId: draw.fuelId,
+                  },
+                ],
+              }),
+              conditions: {
+                designOutdoorC: draw.designOutdoorC,
+                elevationM: draw.elevationM,
+                insideRelativeHumidityPct: draw.rh,
+                insideC: draw.insideC,
+                curtainClosed: draw.curtainClosed,
+              },
+            },
+            ref,
+          );
+          const numbers: number[] = [];
+          const collect = (value: unknown): void => {
+            if (typeof value === 'number') numbers.push(value);
+            else if (Array.isArray(value)) value.forEach(collect);
+            else if (value && typeof value === 'object') Object.values(value).forEach(collect);
+          };
+          collect(result);
+          expect(numbers.every((value) => Number.isFinite(value))).toBe(true);
+        },
+      ),
+      { numRuns: 200 },
+    );
+  });
+
+  it('throws EngineInputError naming the field for any value beyond its bound', () => {
+    type Target = {
+      field: string;
+      bound: { min: number; max: number };
+      apply: (value: number) => { house: HouseSpec; conditions: HeatingConditions };
+    };
+    const withHouse = (patch: (value: number) => Partial<HouseSpec>) => (value: number) => ({
+      house: exampleDoublePolyGableHouse(patch(value)),
+      conditions,
+    });
+    const withConditions = (key: keyof HeatingConditions) => (value: number) => ({
+      house: exampleDoublePolyGableHouse(),
+      conditions: { ...conditions, [key]: value },
+    });
+    const targets: Target[] = [
+      { field: 'house.widthM', bound: BOUNDS.widthM, apply: withHouse((widthM) => ({ widthM })) },
+      { field: 'house.lengthM', bound: BOUNDS.lengthM, apply: withHouse((lengthM) => ({ lengthM })) },
+      { field: 'house.spans', bound: BOUNDS.spans, apply: withHouse((spans) => ({ spans: Math.round(spans) })) },
+      { field: 'house.eaveHeightM', bound: BOUNDS.eaveHeightM, apply: withHouse((eaveHeightM) => ({ eaveHeightM })) },
+      {
+        field: 'house.airChangesPerHourOverride',
+        bound: BOUNDS.airChangesPerHour,
+        apply: withHouse((ach) => ({ airChangesPerHourOverride: ach })),
+      },
+      {
+        field: 'house.coveringUOverridesWPerM2K.roof',
+        bound: BOUNDS.uValueWPerM2K,
+        apply: withHouse((roof) => ({ coveringUOverridesWPerM2K: { roof } })),
+      },
+      {
+        field: 'house.heaters.0.ratedInputW',
+        bound: BOUNDS.heaterInputW,
+        apply: withHouse((ratedInputW) => ({
+          heaters: [{ count: 1, ratedInputW, efficiency: 0.8, fuelId: 'natural-gas' }],
+        })),
+      },
+      { field: 'conditions.designOutdoorC', bound: BOUNDS.designOutdoorC, apply: withConditions('designOutdoorC') },
+      { field: 'conditions.elevationM', bound: BOUNDS.elevationM, apply: withConditions('elevationM') },
+      {
+        field: 'conditions.insideRelativeHumidityPct',
+        bound: BOUNDS.relativeHumidityPct,
+        apply: withConditions('insideRelativeHumidityPct'),
+      },
+      { field: 'conditions.insideC', bound: BOUNDS.setpointC, apply: withConditions('insideC') },
+    ];
+    fc.assert(
+      fc.property(
+        fc.constantFrom(...targets),
+        fc.boolean(),
+        fc.double({ min: 1, max: 1e6, noNaN: true }),
+        (target, below, beyond) => {
+          const value = below ? target.bound.min - beyond : target.bound.max + beyond;
+          expectEngineError(() => estimateHeating(target.apply(value), ref), target.field);
+        },
+      ),
+    );
+  });
+});

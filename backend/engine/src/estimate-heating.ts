@@ -1,0 +1,382 @@
+import { BOUNDS } from './vocabulary';
+import { EngineInputError, requireInRange } from './errors';
+import { computeHouseGeometry } from './geometry/house-geometry';
+import { condensationRisk, type CondensationResult } from './heating/condensation';
+import { designHeatLoss, heatLossCoefficients, CURTAIN_SURFACES, type HeatLossBreakdown } from './heating/heat-loss';
+import { requiredRow, type SafetyRow } from './heating/heating-reference';
+import { sizeHeaters, type HeaterSizingResult } from './heating/heater-sizing';
+import { SURFACE_GROUPS, type SurfaceGroup } from './vocabulary';
+import { type HouseSpec } from './house.types';
+import { insideAirDensityKgPerM3 } from './psychrometrics/psychrometrics';
+import { quantityToken } from './vocabulary';
+import type { ReferenceData, ReferenceRow } from './reference-data.types';
+
+export interface HeatingConditions {
+  /** winter design dry bulb (e.g. the 99 % or 99.6 % value), °C */
+  designOutdoorC: number;
+  /** site elevation, m (sets air density through the standard atmosphere) */
+  elevationM: number;
+  /** inside relative humidity on the design night, % */
+  insideRelativeHumidityPct: number;
+  /** inside temperature to hold, °C; defaults to house.setpoints.nightHeatingC */
+  insideC?: number;
+  /**
+   * Credit a drawn curtain in the design loss. Default false: heaters are sized for a night with
+   * the curtain open, since curtains are opened to shed snow and can fail to close.
+   */
+  curtainClosed?: boolean;
+}
+
+export interface HeatingEstimateInput {
+  house: HouseSpec;
+  conditions: HeatingConditions;
+}
+
+export interface HeatingAssumption {
+  key: string;
+  label: string;
+  value: number | string;
+  unit: string;
+  source: string;
+  confidence: string;
+  overridden: boolean;
+}
+
+export interface HeatingEstimate {
+  geometry: {
+    floorAreaM2: number;
+    roofAreaM2: number;
+    sidewallAreaM2: number;
+    endwallAreaM2: number;
+    coverAreaM2: number;
+    perimeterM: number;
+    volumeM3: number;
+  };
+  heatLoss: HeatLossBreakdown;
+  heater: HeaterSizingResult;
+  condensation: CondensationResult;
+  assumptions: HeatingAssumption[];
+  /** may hold {{kind:valueSI}} quantity tokens (see prose.ts), as may assumption labels */
+  cautions: string[];
+}
+
+const USER_SOURCE = 'entered for this house';
+const USER_CONFIDENCE = 'user-entered';
+const PSYCHROLIB_SOURCE =
+  'computed with psychrolib (ASHRAE 2017 Fundamentals ch. 1): standard-atmosphere pressure at the site elevation';
+
+function fromRow(row: ReferenceRow, key: string, label: string, value: number, unit: string): HeatingAssumption {
+  return { key, label, value, unit, source: row.source, confidence: row.confidence, overridden: false };
+}
+
+function validateConditions(conditions: HeatingConditions, house: HouseSpec): number {
+  if (!conditions || typeof conditions !== 'object') {
+    throw new EngineInputError('conditions', 'conditions are required');
+  }
+  requireInRange(
+    'conditions.designOutdoorC',
+    conditions.designOutdoorC,
+    BOUNDS.designOutdoorC.min,
+    BOUNDS.designOutdoorC.max,
+  );
+  requireInRange('conditions.elevationM', conditions.elevationM, BOUNDS.elevationM.min, BOUNDS.elevationM.max);
+  requireInRange(
+    'conditions.insideRelativeHumidityPct',
+    conditions.insideRelativeHumidityPct,
+    BOUNDS.relativeHumidityPct.min,
+    BOUNDS.relativeHumidityPct.max,
+  );
+  if (conditions.curtainClosed !== undefined && typeof conditions.curtainClosed !== 'boolean') {
+    throw new EngineInputError('conditions.curtainClosed', 'conditions.curtainClosed must be true or false');
+  }
+  if (conditions.insideC !== undefined && conditions.insideC !== null) {
+    return requireInRange('conditions.insideC', conditions.insideC, BOUNDS.setpointC.min, BOUNDS.setpointC.max);
+  }
+  if (!house.setpoints || typeof house.setpoints !== 'object') {
+    throw new EngineInputError('house.setpoints', 'house.setpoints are required');
+  }
+  return requireInRange(
+    'house.setpoints.nightHeatingC',
+    house.setpoints.nightHeatingC,
+    BOUNDS.setpointC.min,
+    BOUNDS.setpointC.max,
+  );
+}
+
+// Quantities in labels and cautions are tokens (see prose.ts): the reader's unit system shows them.
+const kW = (watts: number) => quantityToken('power', watts);
+const degC = (celsius: number) => quantityToken('temperature', celsius);
+const metres = (lengthM: number) => quantityToken('length', lengthM);
+
+/**
+ * Design-night heating estimate for one house: heat loss with its breakdown, heater sizing,
+ * condensation on the coverings, every assumption used and the cautions that go with it.
+ */
+export function estimateHeating(input: HeatingEstimateInput, ref: ReferenceData): HeatingEstimate {
+  if (!input || typeof input !== 'object') throw new EngineInputError('house', 'house is required');
+  const { house, conditions } = input;
+  const geometry = computeHouseGeometry(house);
+  const insideC = validateConditions(conditions, house);
+  const outsideC = conditions.designOutdoorC;
+  const curtainClosed = conditions.curtainClosed ?? false;
+
+  const air = insideAirDensityKgPerM3(insideC, conditions.insideRelativeHumidityPct, conditions.elevationM);
+  const coefficients = heatLossCoefficients(house, geometry, ref, {
+    curtainClosed,
+    airDensityKgPerM3: air.airDensityKgPerM3,
+  });
+  const heatLoss = designHeatLoss(coefficients, geometry, insideC, outsideC);
+  const sizing = sizeHeaters(
+    {
+      designHeatLossW: heatLoss.totalW,
+      totalConductanceWPerK: coefficients.totalWPerK,
+      insideC,
+      heaters: house.heaters,
+    },
+    ref,
+  );
+  const condensation = condensationRisk(
+    { insideC, outsideC, insideRelativeHumidityPct: conditions.insideRelativeHumidityPct },
+    SURFACE_GROUPS.map((group) => ({
+      group,
+      coveringId: coefficients.rows.coverings[group].id,
+      uWPerM2K: coefficients.coveringUWPerM2K[group],
+    })),
+    ref,
+  );
+
+  // ---- assumptions: every reference value used, and where the house replaced one
+  const assumptions: HeatingAssumption[] = [];
+  const groupLabel: Record<SurfaceGroup, string> = { roof: 'roof', sidewalls: 'sidewalls', endwalls: 'endwalls' };
+  for (const group of SURFACE_GROUPS) {
+    const row = coefficients.rows.coverings[group];
+    const overridden = coefficients.overridesUsed.coveringU.includes(group);
+    assumptions.push(
+      overridden
+        ? {
+            key: `coverings.${group}.uWPerM2K`,
+            label: `U-value, ${groupLabel[group]}: ${row.label} (replaces the reference ${quantityToken('uValue', row.uWPerM2K)})`,
+            value: coefficients.coveringUWPerM2K[group],
+            unit: 'W/(m²·K)',
+            source: USER_SOURCE,
+            confidence: USER_CONFIDENCE,
+            overridden: true,
+          }
+        : fromRow(
+            row,
+            `coverings.${group}.uWPerM2K`,
+            `U-value, ${groupLabel[group]}: ${row.label}`,
+            row.uWPerM2K,
+            'W/(m²·K)',
+          ),
+    );
+  }
+  const curtainRow = coefficients.rows.curtain;
+  if (curtainRow) {
+    assumptions.push(
+      fromRow(
+        curtainRow,
+        'curtain.uReduction',
+        `Curtain U reduction on ${CURTAIN_SURFACES.join(' and ')}: ${curtainRow.label}` +
+          (coefficients.curtainApplied ? '' : ' (not credited: curtain taken as open)'),
+        curtainRow.uReduction,
+        'fraction',
+      ),
+    );
+  }
+  const leakage = coefficients.rows.airLeakage;
+  assumptions.push(
+    coefficients.overridesUsed.airChangesPerHour
+      ? {
+          key: 'airLeakage.airChangesPerHour',
+          label: `Air changes per hour (replaces ${leakage.airChangesPerHour} for ${leakage.label.toLowerCase()})`,
+          value: coefficients.airChangesPerHour,
+          unit: '1/h',
+          source: USER_SOURCE,
+          confidence: USER_CONFIDENCE,
+          overridden: true,
+        }
+      : fromRow(
+          leakage,
+          'airLeakage.airChangesPerHour',
+          `Air changes per hour: ${leakage.label}`,
+          leakage.airChangesPerHour,
+          '1/h',
+        ),
+  );
+  const perimeterRow = coefficients.rows.perimeter;
+  assumptions.push(
+    fromRow(
+      perimeterRow,
+      'perimeter.wPerMK',
+      `Perimeter loss factor: ${perimeterRow.label}`,
+      perimeterRow.wPerMK,
+      'W/(m·K)',
+    ),
+  );
+  assumptions.push(
+    fromRow(
+      coefficients.rows.specificHeat,
+      'air.specificHeatJPerKgK',
+      'Specific heat of air',
+      coefficients.specificHeatJPerKgK,
+      'J/(kg·K)',
+    ),
+  );
+  assumptions.push({
+    key: 'air.pressurePa',
+    label: `Barometric pressure at ${metres(conditions.elevationM)} (standard atmosphere)`,
+    value: air.pressurePa,
+    unit: 'Pa',
+    source: PSYCHROLIB_SOURCE,
+    confidence: 'derived',
+    overridden: false,
+  });
+  assumptions.push({
+    key: 'air.densityKgPerM3',
+    label: `Density of inside air at ${degC(insideC)} and ${conditions.insideRelativeHumidityPct} % RH`,
+    value: air.airDensityKgPerM3,
+    unit: 'kg/m³',
+    source: `${PSYCHROLIB_SOURCE}, moist-air density at the inside temperature and humidity`,
+    confidence: 'derived',
+    overridden: false,
+  });
+  const filmRows = condensation.insideFilmRows;
+  assumptions.push(
+    fromRow(filmRows.roof, 'surface.insideRoof.hWPerM2K', filmRows.roof.label, filmRows.roof.hWPerM2K, 'W/(m²·K)'),
+  );
+  assumptions.push(
+    fromRow(
+      filmRows.sidewalls,
+      'surface.insideWall.hWPerM2K',
+      filmRows.sidewalls.label,
+      filmRows.sidewalls.hWPerM2K,
+      'W/(m²·K)',
+    ),
+  );
+  assumptions.push(
+    fromRow(
+      sizing.safetyMarginRow,
+      'heater.safetyMargin',
+      sizing.safetyMarginRow.label,
+      sizing.result.safetyMargin,
+      'fraction',
+    ),
+  );
+  assumptions.push(
+    fromRow(
+      sizing.minimumUnitCountRow,
+      'heater.minimumUnitCount',
+      sizing.minimumUnitCountRow.label,
+      sizing.minimumUnitCountRow.count as number,
+      'units',
+    ),
+  );
+  assumptions.push(
+    sizing.typicalHeaterType
+      ? fromRow(
+          sizing.typicalHeaterType,
+          'heater.efficiency',
+          `Heater efficiency for the required input: ${sizing.typicalHeaterType.label} (typical)`,
+          sizing.efficiencyForRequiredInput,
+          'fraction',
+        )
+      : {
+          key: 'heater.efficiency',
+          label: 'Heater efficiency for the required input (input-weighted mean of the installed heaters)',
+          value: sizing.efficiencyForRequiredInput,
+          unit: 'fraction',
+          source: USER_SOURCE,
+          confidence: USER_CONFIDENCE,
+          overridden: false,
+        },
+  );
+
+  // ---- cautions
+  const cautions: string[] = [];
+  if (heatLoss.deltaTK <= 0) {
+    cautions.push(
+      `The design outdoor temperature (${degC(outsideC)}) is not below the inside temperature (${degC(insideC)}): no heating is needed at these conditions.`,
+    );
+  }
+  if (sizing.result.verdict === 'short') {
+    cautions.push(
+      `Installed output ${kW(sizing.result.installedOutputW)} is ${kW(sizing.result.shortfallW)} short of the ${kW(sizing.result.requiredOutputW)} required; ` +
+        `it holds ${degC(insideC)} inside only down to ${degC(sizing.result.lowestHeldOutdoorC as number)} outside.`,
+    );
+  }
+  if (sizing.result.unitCount === 1) {
+    cautions.push('Only one heating unit: if it fails the crop has no heat. Split the output over at least two units.');
+  }
+  if (curtainRow && !coefficients.curtainApplied) {
+    const closed = heatLossCoefficients(house, geometry, ref, {
+      curtainClosed: true,
+      airDensityKgPerM3: air.airDensityKgPerM3,
+    });
+    const closedLossW = designHeatLoss(closed, geometry, insideC, outsideC).totalW;
+    cautions.push(
+      `The curtain is not credited: heaters are sized for a night with it open (it is opened to shed snow and can fail to close). Drawn, the loss would be about ${kW(closedLossW)}.`,
+    );
+  }
+  const condensing = condensation.result.surfaces.filter((surface) => surface.condenses);
+  if (condensing.length > 0) {
+    cautions.push(
+      `Water condenses on the inside of the ${condensing.map((surface) => surface.group).join(', ')} at these conditions ` +
+        `(dew point ${degC(condensation.result.dewPointC)}). Drip wets foliage and spreads disease: consider a second layer or anti-condensate film, air movement, or venting and heating to lower humidity.`,
+    );
+  }
+  if (
+    coefficients.overridesUsed.coveringU.length < SURFACE_GROUPS.length &&
+    SURFACE_GROUPS.some((group) => coefficients.rows.coverings[group].confidence === 'memory')
+  ) {
+    cautions.push(
+      "Covering U-values and air-change rates are handbook values not yet checked against the primary tables; treat the heat loss as a planning range and enter a maker's tested U-value where you have one.",
+    );
+  }
+  if (sizing.result.fuelFired) {
+    const safety = (id: string) => requiredRow<SafetyRow>(ref, 'safety', id);
+    const inlet = safety('combustion-air-inlet');
+    const aboveRidge = safety('chimney-above-ridge');
+    const aboveRoof = safety('chimney-above-roof-edge');
+    const clearance = safety('chimney-clearance-horizontal');
+    const coLimit = safety('co-niosh-rel');
+    const ethylene = safety('ethylene-crop-injury');
+    const sulfurDioxide = safety('so2-crop-injury');
+    const inletAreaM2 = sizing.fuelFiredInputW * (inlet.valueM2PerW as number);
+    cautions.push(
+      `Fuel-fired heaters need a fresh-air inlet for combustion: a free area of at least about ${quantityToken('areaPerPower', inlet.valueM2PerW as number)} of heater input ` +
+        `(about ${quantityToken('smallArea', inletAreaM2)} for the ${kW(sizing.fuelFiredInputW)} entered); local codes may require more.`,
+      `Vent every fuel-fired heater to the outside through a sound flue. Chimneys: at least ${metres(aboveRidge.valueM as number)} above the ridge, ${metres(aboveRoof.valueM as number)} above the roof where they pass through, ` +
+        `and ${metres(clearance.valueM as number)} horizontally from the nearest roof; exhaust fans can pull flue gas back into the house.`,
+      `Carbon monoxide from a faulty, unvented or back-drafting heater can kill people. Fit carbon monoxide alarms (NIOSH recommended limit ${coLimit.valuePpm} ppm over 8 h).`,
+      `Incomplete combustion releases ethylene, which injures sensitive crops from about ${ethylene.valuePpm} ppm, and sulfur-bearing fuels release sulfur dioxide, injurious from about ${sulfurDioxide.valuePpm} ppm. ` +
+        'A yellow or orange flame signals trouble; unvented heaters are not recommended even as back-up.',
+      'Have fuel-fired equipment sized, installed and serviced by licensed installers under local codes.',
+    );
+    for (const row of [inlet, aboveRidge, aboveRoof, clearance, coLimit, ethylene, sulfurDioxide]) {
+      const value = row.valueM2PerW ?? row.valueM ?? row.valuePpm;
+      const unit = row.valueM2PerW !== undefined ? 'm²/W' : row.valueM !== undefined ? 'm' : 'ppm';
+      assumptions.push(fromRow(row, `safety.${row.id}`, row.label, value as number, unit));
+    }
+  }
+  cautions.push(
+    'Estimates are for planning. Heater selection and installation rest with licensed installers and local codes.',
+  );
+
+  return {
+    geometry: {
+      floorAreaM2: geometry.floorAreaM2,
+      roofAreaM2: geometry.roofAreaM2,
+      sidewallAreaM2: geometry.sidewallAreaM2,
+      endwallAreaM2: geometry.endwallAreaM2,
+      coverAreaM2: geometry.coverAreaM2,
+      perimeterM: geometry.perimeterM,
+      volumeM3: geometry.volumeM3,
+    },
+    heatLoss,
+    heater: sizing.result,
+    condensation: condensation.result,
+    assumptions,
+    cautions,
+  };
+}

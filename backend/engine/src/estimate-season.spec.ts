@@ -1,0 +1,402 @@
+import fc from 'fast-check';
+import { loadReferenceData } from './testing/reference-data';
+import { EngineInputError } from './errors';
+import { estimateSeason, type EstimateSeasonInput } from './estimate-season';
+import { computeHouseGeometry } from './geometry/house-geometry';
+import { heatLossCoefficients } from './heating/heat-loss';
+import { dryAirDensityKgPerM3, standardAtmosphericPressurePa } from './psychrometrics';
+import type { SiteClimate } from './climate/site-climate';
+import { demoClimate, demoSeasonInput } from './season/demo-season';
+import { SunCache } from './season/sun-hours';
+import { proseToPlainSi } from './vocabulary';
+
+const ref = loadReferenceData();
+const sunCache = new SunCache();
+
+/** A climate with the same outdoor temperature every hour of the year and no sun. */
+function constantClimate(outdoorC: number): SiteClimate {
+  return {
+    ...demoClimate(),
+    monthly: Array.from({ length: 12 }, (_, index) => ({
+      month: index + 1,
+      meanDailyMinC: outdoorC,
+      meanDailyMaxC: outdoorC,
+      clearness: 0,
+    })),
+  };
+}
+
+function fieldOf(run: () => unknown): string {
+  try {
+    run();
+  } catch (error) {
+    expect(error).toBeInstanceOf(EngineInputError);
+    return (error as EngineInputError).field;
+  }
+  throw new Error('expected an EngineInputError');
+}
+
+describe('estimateSeason', () => {
+  it('agrees with the degree-day method at a constant outdoor temperature with no sun and one setpoint', () => {
+    const input = demoSeasonInput({
+      climate: constantClimate(2),
+      season: { startDate: '2026-01-01', endDate: '2026-03-31' },
+      house: { ...demoSeasonInput().house, setpoints: { dayHeatingC: 15, nightHeatingC: 15, coolingC: 24 } },
+    });
+    const estimate = estimateSeason(input, ref, sunCache);
+    expect(estimate.total.energyKWh).toBeGreaterThan(0);
+    expect(Math.abs(estimate.total.energyKWh / estimate.degreeDays.energyKWh - 1)).toBeLessThan(1e-9);
+    expect(estimate.degreeDays.degreeDaysKDay).toBeCloseTo(13 * 90, 6);
+    expect(estimate.solarOffsetKWh).toBe(0);
+
+    // and both equal UA × ΔT × hours with UA computed directly by the heating engine
+    const house = input.house;
+    const ua = heatLossCoefficients(house, computeHouseGeometry(house), ref, {
+      curtainClosed: false,
+      airDensityKgPerM3: dryAirDensityKgPerM3(15, standardAtmosphericPressurePa(input.site.elevationM)),
+    }).totalWPerK;
+    expect(estimate.total.energyKWh).toBeCloseTo((ua * 13 * 90 * 24) / 1000, 3);
+    expect(estimate.total.heatingHours).toBe(90 * 24);
+    expect(estimate.peak?.heatW).toBeCloseTo(ua * 13, 6);
+  });
+
+  it('returns monthly totals that add up to the season total, with fuel and cost in the fuel’s units', () => {
+    const estimate = estimateSeason(demoSeasonInput(), ref, sunCache);
+    expect(estimate.monthly).toHaveLength(12);
+    const sum = (key: 'energyKWh' | 'fuelQuantityUs' | 'fuelQuantitySi' | 'cost') =>
+      estimate.monthly.reduce((total, month) => total + month[key], 0);
+    expect(sum('energyKWh')).toBeCloseTo(estimate.total.energyKWh, 6);
+    expect(sum('fuelQuantityUs')).toBeCloseTo(estimate.total.fuelQuantityUs, 6);
+    expect(sum('cost')).toBeCloseTo(estimate.total.cost, 6);
+    expect(estimate.total.cost).toBeCloseTo(estimate.total.fuelQuantityUs * 2.2, 6);
+    expect(estimate.fuel).toMatchObject({ fuelId: 'propane', unitUs: 'US gal', priceUnitLabel: 'US gal' });
+    // January needs more than July
+    expect(estimate.monthly[0].energyKWh).toBeGreaterThan(10 * estimate.monthly[6].energyKWh);
+    expect(estimate.peak).not.toBeNull();
+    expect(Math.max(...estimate.monthly.map((month) => month.peakW))).toBeCloseTo(estimate.peak!.heatW, 9);
+    expect(estimate.peak!.at).toMatch(/^2026-\d{2}-\d{2}T\d{2}:00$/);
+    expect(estimate.cautions.join(' ')).toMatch(/carbon monoxide/);
+  });
+
+  it('counts sun by day: the hourly estimate is below the degree-day figure and each step is explained', () => {
+    const estimate = estimateSeason(demoSeasonInput(), ref, sunCache);
+    expect(estimate.solarOffsetKWh).toBeGreaterThan(0);
+    const { steps, explanation } = estimate.degreeDays;
+    expect(steps.map((step) => step.key)).toEqual(['degree-day', 'hourly-curve', 'day-setpoint', 'curtain', 'sun']);
+    expect(steps[0].energyKWh).toBeCloseTo(estimate.degreeDays.energyKWh, 9);
+    expect(steps[4].energyKWh).toBeCloseTo(estimate.total.energyKWh, 9);
+    expect(steps[2].changeKWh).toBeGreaterThan(0); // day setpoint 18 °C above night 15 °C
+    expect(steps[3].changeKWh).toBe(0); // the demo house has no curtain
+    expect(steps[4].changeKWh).toBeCloseTo(-estimate.solarOffsetKWh, 6);
+    expect(explanation.join(' ')).toMatch(/sun/i);
+    expect(estimate.degreeDays.baseTemperatureC).toBe(15);
+    // quantities are tokens (energy in joules, temperature in °C); the reader's units show them
+    expect(estimate.degreeDays.baseDescription).toBe('the night setpoint, {{temperature:15}}');
+    expect(proseToPlainSi(estimate.degreeDays.baseDescription)).toBe('the night setpoint, 15.0 °C');
+    expect(explanation[0]).toContain(`{{energy:${Number((estimate.degreeDays.energyKWh * 3.6e6).toPrecision(6))}}}`);
+    const kWh = (value: number) => `${Math.round(value).toLocaleString('en-US')} kWh`;
+    expect(proseToPlainSi(explanation[0])).toContain(
+      `It gives ${kWh(estimate.degreeDays.energyKWh)} of heat; the hour-by-hour estimate gives ${kWh(estimate.total.energyKWh)}.`,
+    );
+    for (const sentence of explanation) expect(sentence).not.toMatch(/\d\s*(kWh|°C|K)\b/);
+  });
+
+  it('draws the curtain at night only', () => {
+    const base = demoSeasonInput();
+    const withCurtain = estimateSeason(
+      { ...base, house: { ...base.house, curtainId: 'energy-screen-aluminised' } },
+      ref,
+      sunCache,
+    );
+    const without = estimateSeason(base, ref, sunCache);
+    expect(withCurtain.heatLoss.uaCurtainClosedWPerK).toBeLessThan(withCurtain.heatLoss.uaCurtainOpenWPerK);
+    expect(withCurtain.heatLoss.uaCurtainOpenWPerK).toBeCloseTo(without.heatLoss.uaCurtainOpenWPerK, 9);
+    expect(withCurtain.total.energyKWh).toBeLessThan(without.total.energyKWh);
+    expect(withCurtain.degreeDays.steps[3].changeKWh).toBeLessThan(0);
+    expect(withCurtain.assumptions.map((assumption) => assumption.key)).toContain('ua-curtain-closed');
+  });
+
+  it('leaves empty periods unheated, with periods that wrap the year end', () => {
+    const estimate = estimateSeason(
+      demoSeasonInput({
+        calendar: [
+          { startMonthDay: '11-01', endMonthDay: '03-31', mode: 'heated' },
+          { startMonthDay: '01-01', endMonthDay: '01-14', mode: 'empty' },
+        ],
+      }),
+      ref,
+      sunCache,
+    );
+    for (const month of estimate.monthly) {
+      if (month.month >= 4 && month.month <= 10) expect(month.energyKWh).toBe(0);
+      else expect(month.energyKWh).toBeGreaterThan(0);
+    }
+    expect(estimate.period.heatedDays).toBe(31 + 28 + 31 + 30 + 31 - 14);
+    expect(estimate.monthly[0].heatingHours).toBeLessThanOrEqual(17 * 24);
+  });
+
+  it('uses a period’s own setpoints', () => {
+    const warm = estimateSeason(
+      demoSeasonInput({
+        calendar: [
+          { startMonthDay: '01-01', endMonthDay: '12-31', mode: 'heated', nightHeatingC: 18, dayHeatingC: 21 },
+        ],
+      }),
+      ref,
+      sunCache,
+    );
+    const plain = estimateSeason(demoSeasonInput(), ref, sunCache);
+    expect(warm.total.energyKWh).toBeGreaterThan(plain.total.energyKWh);
+    expect(warm.degreeDays.baseTemperatureC).toBe(18);
+  });
+
+  it('runs a season across the year end with months in order', () => {
+    const estimate = estimateSeason(
+      demoSeasonInput({ season: { startDate: '2026-10-01', endDate: '2027-04-30' } }),
+      ref,
+      sunCache,
+    );
+    expect(estimate.monthly.map((month) => `${month.year}-${month.month}`)).toEqual([
+      '2026-10',
+      '2026-11',
+      '2026-12',
+      '2027-1',
+      '2027-2',
+      '2027-3',
+      '2027-4',
+    ]);
+    expect(estimate.period.days).toBe(212);
+  });
+
+  it('uses hourly logged temperatures instead of normals', () => {
+    const readings = [];
+    for (let hour = 0; hour <= 24 * 3; hour++) {
+      const day = 1 + Math.floor(hour / 24);
+      readings.push({
+        at: `2026-02-${String(day).padStart(2, '0')}T${String(hour % 24).padStart(2, '0')}:00`,
+        temperatureC: 0,
+      });
+    }
+    const input = demoSeasonInput({
+      climate: { readings, clearnessByMonth: new Array(12).fill(0) },
+      season: { startDate: '2026-02-01', endDate: '2026-02-03' },
+      house: { ...demoSeasonInput().house, setpoints: { dayHeatingC: 15, nightHeatingC: 15, coolingC: 24 } },
+    });
+    const logged = estimateSeason(input, ref, sunCache);
+    const normals = estimateSeason({ ...input, climate: constantClimate(0) }, ref, sunCache);
+    expect(logged.total.energyKWh).toBeCloseTo(normals.total.energyKWh, 6);
+    expect(logged.assumptions.find((assumption) => assumption.key === 'clearness-by-month')?.overridden).toBe(true);
+  });
+
+  it('uses daily logged minima and maxima through the daily curve', () => {
+    const readings = ['2026-02-01', '2026-02-02', '2026-02-03'].map((at) => ({
+      at,
+      temperatureC: 2,
+      minC: -3,
+      maxC: 7,
+    }));
+    const estimate = estimateSeason(
+      demoSeasonInput({ climate: { readings }, season: { startDate: '2026-02-01', endDate: '2026-02-03' } }),
+      ref,
+      sunCache,
+    );
+    expect(estimate.degreeDays.degreeDaysKDay).toBeCloseTo(3 * 13, 9);
+    expect(estimate.total.energyKWh).toBeGreaterThan(0);
+  });
+
+  it('refuses logged temperatures that do not cover the season', () => {
+    const readings = [
+      { at: '2026-02-01T00:00', temperatureC: 0 },
+      { at: '2026-02-01T05:00', temperatureC: 1 },
+    ];
+    expect(
+      fieldOf(() =>
+        estimateSeason(
+          demoSeasonInput({ climate: { readings }, season: { startDate: '2026-02-01', endDate: '2026-02-02' } }),
+          ref,
+          sunCache,
+        ),
+      ),
+    ).toBe('climate.readings');
+  });
+
+  it('names bad inputs', () => {
+    expect(
+      fieldOf(() =>
+        estimateSeason(demoSeasonInput({ season: { startDate: '2026-03-01', endDate: '2026-02-01' } }), ref, sunCache),
+      ),
+    ).toBe('season.endDate');
+    expect(
+      fieldOf(() =>
+        estimateSeason(demoSeasonInput({ season: { startDate: '2026-01-01', endDate: '2027-06-01' } }), ref, sunCache),
+      ),
+    ).toBe('season.endDate');
+    expect(
+      fieldOf(() =>
+        estimateSeason(demoSeasonInput({ season: { startDate: '2026-02-30', endDate: '2026-03-01' } }), ref, sunCache),
+      ),
+    ).toBe('season.startDate');
+    expect(fieldOf(() => estimateSeason(demoSeasonInput({ heaterEfficiency: 0 }), ref, sunCache))).toBe(
+      'heaterEfficiency',
+    );
+    expect(
+      fieldOf(() =>
+        estimateSeason(
+          demoSeasonInput({ site: { latitudeDeg: 42, longitudeDeg: -72, elevationM: 0, utcOffsetHours: 20 } }),
+          ref,
+          sunCache,
+        ),
+      ),
+    ).toBe('site.utcOffsetHours');
+    expect(
+      fieldOf(() =>
+        estimateSeason(
+          demoSeasonInput({ calendar: [{ startMonthDay: '13-01', endMonthDay: '03-01', mode: 'heated' }] }),
+          ref,
+          sunCache,
+        ),
+      ),
+    ).toBe('calendar[0].startMonthDay');
+  });
+
+  it('lists its assumptions with source and confidence, marking the user’s own values', () => {
+    const climate = demoClimate();
+    climate.monthly[0].clearness = 0.4;
+    const estimate = estimateSeason(demoSeasonInput({ climate, solarUsefulFraction: 0.4 }), ref, sunCache);
+    const byKey = new Map(estimate.assumptions.map((assumption) => [assumption.key, assumption]));
+    for (const key of [
+      'ua-curtain-open',
+      'roof-light-transmittance',
+      'solar-useful-fraction',
+      'clearness-by-month',
+      'daily-curve-peak',
+      'fuel-heat-content-us',
+      'heater-efficiency',
+      'degree-day-base',
+      'local-standard-time',
+    ]) {
+      expect(byKey.get(key)).toBeDefined();
+    }
+    expect(byKey.get('solar-useful-fraction')).toMatchObject({
+      value: 0.4,
+      overridden: true,
+      confidence: 'user-entered',
+    });
+    expect(byKey.get('clearness-by-month')?.overridden).toBe(true);
+    expect(byKey.get('fuel-heat-content-us')).toMatchObject({
+      value: 91_333,
+      unit: 'Btu/US gal',
+      confidence: 'verified',
+    });
+    for (const assumption of estimate.assumptions) expect(assumption.source.length).toBeGreaterThan(3);
+  });
+
+  it('never needs more fuel for a better-insulated, tighter house (property)', () => {
+    const base = demoSeasonInput({ season: { startDate: '2026-01-01', endDate: '2026-02-28' } });
+    const uValue = fc.double({ min: 1, max: 8, noNaN: true });
+    fc.assert(
+      fc.property(
+        fc.record({ roof: uValue, sidewalls: uValue, endwalls: uValue }),
+        fc.double({ min: 0.2, max: 4, noNaN: true }),
+        fc.boolean(),
+        fc.record({
+          roof: fc.double({ min: 0, max: 1, noNaN: true }),
+          sidewalls: fc.double({ min: 0, max: 1, noNaN: true }),
+          endwalls: fc.double({ min: 0, max: 1, noNaN: true }),
+          ach: fc.double({ min: 0, max: 1, noNaN: true }),
+        }),
+        fc.boolean(),
+        (uValues, ach, perimeterInsulated, improvement, insulatePerimeter) => {
+          const leaky: EstimateSeasonInput = {
+            ...base,
+            house: {
+              ...base.house,
+              coveringUOverridesWPerM2K: uValues,
+              airChangesPerHourOverride: ach,
+              perimeterInsulated,
+            },
+          };
+          const better: EstimateSeasonInput = {
+            ...base,
+            house: {
+              ...base.house,
+              coveringUOverridesWPerM2K: {
+                roof: Math.max(0.5, uValues.roof * (1 - 0.8 * improvement.roof)),
+                sidewalls: Math.max(0.5, uValues.sidewalls * (1 - 0.8 * improvement.sidewalls)),
+                endwalls: Math.max(0.5, uValues.endwalls * (1 - 0.8 * improvement.endwalls)),
+              },
+              airChangesPerHourOverride: Math.max(0.1, ach * (1 - 0.9 * improvement.ach)),
+              perimeterInsulated: perimeterInsulated || insulatePerimeter,
+            },
+          };
+          const before = estimateSeason(leaky, ref, sunCache).total.fuelQuantitySi;
+          const after = estimateSeason(better, ref, sunCache).total.fuelQuantitySi;
+          expect(after).toBeLessThanOrEqual(before * (1 + 1e-12));
+        },
+      ),
+      { numRuns: 25 },
+    );
+  });
+});
+
+describe('estimateSeason with the installed heaters as a limit', () => {
+  const winter = { startDate: '2026-12-01', endDate: '2027-02-28' };
+  const house = demoSeasonInput().house;
+  const withHeaters = (heaters: EstimateSeasonInput['house']['heaters']) =>
+    estimateSeason(demoSeasonInput({ house: { ...house, heaters }, season: winter }), ref, sunCache);
+
+  it('a tiny heater leaves hours below the setpoint; fuel is the capped heat ÷ efficiency', () => {
+    const ample = withHeaters([{ count: 4, ratedInputW: 100_000, efficiency: 0.8, fuelId: 'propane' }]);
+    const tiny = withHeaters([{ count: 1, ratedInputW: 10_000, efficiency: 0.8, fuelId: 'propane' }]);
+    expect(tiny.heaterCapacity.installedOutputW).toBeCloseTo(8000, 9);
+    expect(tiny.total.hoursBelowSetpoint).toBeGreaterThan(0);
+    expect(tiny.total.unmetHeatKWh).toBeGreaterThan(0);
+    // delivered ≤ output × heating hours, and delivered + unmet = what the house needs
+    expect(tiny.total.energyKWh).toBeLessThanOrEqual((8000 * tiny.total.heatingHours) / 1000 + 1e-9);
+    expect(tiny.total.energyKWh + tiny.total.unmetHeatKWh).toBeCloseTo(ample.total.energyKWh, 3);
+    expect(tiny.total.fuelInputKWh).toBeCloseTo(tiny.total.energyKWh / 0.8, 6);
+    const sum = (values: number[]) => values.reduce((a, b) => a + b, 0);
+    expect(sum(tiny.monthly.map((m) => m.hoursBelowSetpoint))).toBe(tiny.total.hoursBelowSetpoint);
+    expect(sum(tiny.monthly.map((m) => m.unmetHeatKWh))).toBeCloseTo(tiny.total.unmetHeatKWh, 6);
+    // the caution names the hours and carries its quantities as tokens
+    const caution = tiny.heaterCapacity.caution!;
+    expect(caution).toContain(`for ${tiny.total.hoursBelowSetpoint} hours of the season`);
+    expect(caution).toContain('{{power:8000}}');
+    expect(caution).toMatch(/crop sits below its setpoint/);
+    expect(caution).toMatch(/heater sizing/);
+    expect(proseToPlainSi(caution)).toMatch(/8\.0 kW/);
+    // the degree-day walk stays uncapped and ends with the heaters' limit as its own step
+    const steps = tiny.degreeDays.steps;
+    expect(steps.map((s) => s.key)).toEqual([
+      'degree-day',
+      'hourly-curve',
+      'day-setpoint',
+      'curtain',
+      'sun',
+      'heater-capacity',
+    ]);
+    expect(steps[4].energyKWh).toBeCloseTo(ample.total.energyKWh, 3);
+    expect(steps[5].changeKWh).toBeCloseTo(-tiny.total.unmetHeatKWh, 3);
+    expect(tiny.degreeDays.energyKWh).toBeCloseTo(ample.degreeDays.energyKWh, 9);
+    expect(tiny.degreeDays.explanation.join(' ')).toMatch(/assumes the heaters deliver whatever the house needs/);
+  });
+
+  it('with ample heaters the result is the uncapped one: nothing unmet, no caution, no extra step', () => {
+    const ample = withHeaters([{ count: 4, ratedInputW: 100_000, efficiency: 0.8, fuelId: 'propane' }]);
+    const huge = withHeaters([{ count: 40, ratedInputW: 1_000_000, efficiency: 0.8, fuelId: 'propane' }]);
+    expect(ample.total).toEqual(huge.total);
+    expect(ample.monthly).toEqual(huge.monthly);
+    expect(ample.total.hoursBelowSetpoint).toBe(0);
+    expect(ample.total.unmetHeatKWh).toBe(0);
+    expect(ample.heaterCapacity.caution).toBeNull();
+    expect(ample.degreeDays.steps).toHaveLength(5);
+  });
+
+  it('without heaters nothing is delivered, no fuel is burnt and every heating hour is below the setpoint', () => {
+    const none = withHeaters([]);
+    expect(none.total.energyKWh).toBe(0);
+    expect(none.total.fuelInputKWh).toBe(0);
+    expect(none.total.hoursBelowSetpoint).toBe(none.total.heatingHours);
+    expect(none.heaterCapacity.caution).toMatch(/^The house has no heaters/);
+  });
+});

@@ -1,0 +1,278 @@
+import { BOUNDS } from '../vocabulary';
+import { EngineInputError, requireInRange } from '../errors';
+import type { HouseGeometry } from '../geometry/house-geometry';
+import { SURFACE_GROUPS, type SurfaceGroup } from '../vocabulary';
+import { type HouseSpec } from '../house.types';
+import type { ReferenceData } from '../reference-data.types';
+import {
+  chosenRow,
+  requiredRow,
+  specificHeatOfAirRow,
+  type AirLeakageRow,
+  type AirPropertyRow,
+  type CoveringRow,
+  type CurtainRow,
+  type PerimeterRow,
+} from './heating-reference';
+
+/**
+ * Steady-state heat loss of a closed house:
+ *   UA = Σ U_group · A_group  +  F · perimeter  +  ρ · cp · V · ACH / 3600      (W/K)
+ *   Q  = UA · (T_inside − T_outside)                                            (W)
+ * A drawn curtain lowers the U of the surfaces it shields by its fractional reduction s:
+ * U_closed = U · (1 − s). It is credited on the roof (the curtain runs under it at gutter height)
+ * and the sidewalls (side curtains are drawn with it); endwalls keep their U because endwall
+ * curtains are often absent and the gable area above the curtain still loses heat to the
+ * curtain-to-roof space.
+ */
+export const CURTAIN_SURFACES: readonly SurfaceGroup[] = ['roof', 'sidewalls'];
+
+export interface HeatLossOptions {
+  /** whether the house's curtain (if it has one) is drawn */
+  curtainClosed: boolean;
+  /** density of the air that leaks out, kg/m³ (see psychrometrics/insideAirDensityKgPerM3) */
+  airDensityKgPerM3: number;
+}
+
+export interface HeatLossCoefficients {
+  /** U · A per surface group, W/K, after any curtain */
+  coveringWPerK: Record<SurfaceGroup, number>;
+  coveringTotalWPerK: number;
+  perimeterWPerK: number;
+  infiltrationWPerK: number;
+  totalWPerK: number;
+  /** U used per group, after override and curtain, W/(m²·K) */
+  effectiveUWPerM2K: Record<SurfaceGroup, number>;
+  /** U of the covering itself (reference value or the house's override), before any curtain */
+  coveringUWPerM2K: Record<SurfaceGroup, number>;
+  areasM2: Record<SurfaceGroup, number>;
+  /** air changes per hour used (leakage class or override) */
+  airChangesPerHour: number;
+  perimeterFactorWPerMK: number;
+  airDensityKgPerM3: number;
+  specificHeatJPerKgK: number;
+  /** fractional U reduction applied to CURTAIN_SURFACES; 0 when there is no curtain or it is open */
+  curtainReduction: number;
+  curtainApplied: boolean;
+  overridesUsed: { coveringU: SurfaceGroup[]; airChangesPerHour: boolean };
+  /** the reference rows behind the numbers, for the assumptions list */
+  rows: {
+    coverings: Record<SurfaceGroup, CoveringRow>;
+    airLeakage: AirLeakageRow;
+    perimeter: PerimeterRow;
+    curtain: CurtainRow | null;
+    specificHeat: AirPropertyRow;
+  };
+}
+
+function groupAreasM2(geometry: HouseGeometry): Record<SurfaceGroup, number> {
+  return { roof: geometry.roofAreaM2, sidewalls: geometry.sidewallAreaM2, endwalls: geometry.endwallAreaM2 };
+}
+
+/** U of each covering group: the house's override where given (validated), else the reference value. */
+function coveringUValues(
+  house: HouseSpec,
+  ref: ReferenceData,
+): { uWPerM2K: Record<SurfaceGroup, number>; rows: Record<SurfaceGroup, CoveringRow>; overridden: SurfaceGroup[] } {
+  if (!house.coverings || typeof house.coverings !== 'object') {
+    throw new EngineInputError(
+      'house.coverings',
+      'house.coverings must name a covering for roof, sidewalls and endwalls',
+    );
+  }
+  const rows = {} as Record<SurfaceGroup, CoveringRow>;
+  const uWPerM2K = {} as Record<SurfaceGroup, number>;
+  const overridden: SurfaceGroup[] = [];
+  for (const group of SURFACE_GROUPS) {
+    rows[group] = chosenRow<CoveringRow>(ref, 'coverings', house.coverings[group], `house.coverings.${group}`);
+    const override = house.coveringUOverridesWPerM2K?.[group];
+    if (override === undefined || override === null) {
+      uWPerM2K[group] = rows[group].uWPerM2K;
+    } else {
+      uWPerM2K[group] = requireInRange(
+        `house.coveringUOverridesWPerM2K.${group}`,
+        override,
+        BOUNDS.uValueWPerM2K.min,
+        BOUNDS.uValueWPerM2K.max,
+      );
+      overridden.push(group);
+    }
+  }
+  return { uWPerM2K, rows, overridden };
+}
+
+export function heatLossCoefficients(
+  house: HouseSpec,
+  geometry: HouseGeometry,
+  ref: ReferenceData,
+  options: HeatLossOptions,
+): HeatLossCoefficients {
+  if (!Number.isFinite(options.airDensityKgPerM3) || options.airDensityKgPerM3 <= 0) {
+    throw new Error(`airDensityKgPerM3 must be a positive number, got ${options.airDensityKgPerM3}`);
+  }
+  const coverings = coveringUValues(house, ref);
+
+  const curtain =
+    house.curtainId === undefined || house.curtainId === null || house.curtainId === ''
+      ? null
+      : chosenRow<CurtainRow>(ref, 'curtains', house.curtainId, 'house.curtainId');
+  const curtainApplied = options.curtainClosed && curtain !== null;
+  const curtainReduction = curtainApplied ? curtain.uReduction : 0;
+
+  const areasM2 = groupAreasM2(geometry);
+  const effectiveUWPerM2K = {} as Record<SurfaceGroup, number>;
+  const coveringWPerK = {} as Record<SurfaceGroup, number>;
+  for (const group of SURFACE_GROUPS) {
+    const shielded = CURTAIN_SURFACES.includes(group);
+    effectiveUWPerM2K[group] = coverings.uWPerM2K[group] * (shielded ? 1 - curtainReduction : 1);
+    coveringWPerK[group] = effectiveUWPerM2K[group] * areasM2[group];
+  }
+  const coveringTotalWPerK = SURFACE_GROUPS.reduce((sum, group) => sum + coveringWPerK[group], 0);
+
+  if (typeof house.perimeterInsulated !== 'boolean') {
+    throw new EngineInputError('house.perimeterInsulated', 'house.perimeterInsulated must be true or false');
+  }
+  const perimeter = requiredRow<PerimeterRow>(
+    ref,
+    'perimeter',
+    house.perimeterInsulated ? 'perimeter-insulated' : 'perimeter-uninsulated',
+  );
+  const perimeterWPerK = perimeter.wPerMK * geometry.perimeterM;
+
+  const airLeakage = chosenRow<AirLeakageRow>(ref, 'air-leakage', house.airLeakageClassId, 'house.airLeakageClassId');
+  const achOverride = house.airChangesPerHourOverride;
+  const airChangesPerHourOverridden = achOverride !== undefined && achOverride !== null;
+  const airChangesPerHour = airChangesPerHourOverridden
+    ? requireInRange(
+        'house.airChangesPerHourOverride',
+        achOverride,
+        BOUNDS.airChangesPerHour.min,
+        BOUNDS.airChangesPerHour.max,
+      )
+    : airLeakage.airChangesPerHour;
+  const specificHeat = specificHeatOfAirRow(ref);
+  const infiltrationWPerK =
+    (options.airDensityKgPerM3 * specificHeat.valueJPerKgK * geometry.volumeM3 * airChangesPerHour) / 3600;
+
+  return {
+    coveringWPerK,
+    coveringTotalWPerK,
+    perimeterWPerK,
+    infiltrationWPerK,
+    totalWPerK: coveringTotalWPerK + perimeterWPerK + infiltrationWPerK,
+    effectiveUWPerM2K,
+    coveringUWPerM2K: coverings.uWPerM2K,
+    areasM2,
+    airChangesPerHour,
+    perimeterFactorWPerMK: perimeter.wPerMK,
+    airDensityKgPerM3: options.airDensityKgPerM3,
+    specificHeatJPerKgK: specificHeat.valueJPerKgK,
+    curtainReduction,
+    curtainApplied,
+    overridesUsed: { coveringU: coverings.overridden, airChangesPerHour: airChangesPerHourOverridden },
+    rows: { coverings: coverings.rows, airLeakage, perimeter, curtain, specificHeat },
+  };
+}
+
+export type HeatLossComponentKey = 'roof' | 'sidewalls' | 'endwalls' | 'perimeter' | 'infiltration';
+
+export interface HeatLossComponent {
+  key: HeatLossComponentKey;
+  label: string;
+  quantity: number;
+  quantityUnit: 'm2' | 'm' | 'm3';
+  /** U in W/(m²·K), F in W/(m·K), or air changes per hour */
+  coefficient: number;
+  conductanceWPerK: number;
+  watts: number;
+  /** share of the total, 0–1 */
+  share: number;
+}
+
+export interface HeatLossBreakdown {
+  insideC: number;
+  outsideC: number;
+  deltaTK: number;
+  totalW: number;
+  coveringW: number;
+  perimeterW: number;
+  infiltrationW: number;
+  curtainApplied: boolean;
+  components: HeatLossComponent[];
+}
+
+const GROUP_LABELS: Record<SurfaceGroup, string> = { roof: 'Roof', sidewalls: 'Sidewalls', endwalls: 'Endwalls' };
+
+/**
+ * Heat the house loses at the given inside and outside temperatures. When it is as warm outside
+ * as inside, nothing is lost (the result is 0 W, not negative: this is a heating figure). Shares
+ * are shares of conductance, which equal shares of watts whenever any heat is lost.
+ */
+export function designHeatLoss(
+  coefficients: HeatLossCoefficients,
+  geometry: HouseGeometry,
+  insideC: number,
+  outsideC: number,
+): HeatLossBreakdown {
+  const deltaTK = insideC - outsideC;
+  const heatingDeltaTK = Math.max(deltaTK, 0);
+  const share = (conductanceWPerK: number) => conductanceWPerK / coefficients.totalWPerK;
+  const component = (
+    key: HeatLossComponentKey,
+    label: string,
+    quantity: number,
+    quantityUnit: HeatLossComponent['quantityUnit'],
+    coefficient: number,
+    conductanceWPerK: number,
+  ): HeatLossComponent => ({
+    key,
+    label,
+    quantity,
+    quantityUnit,
+    coefficient,
+    conductanceWPerK,
+    watts: conductanceWPerK * heatingDeltaTK,
+    share: share(conductanceWPerK),
+  });
+
+  const components: HeatLossComponent[] = [
+    ...SURFACE_GROUPS.map((group) =>
+      component(
+        group,
+        `${GROUP_LABELS[group]} (${coefficients.rows.coverings[group].label})`,
+        coefficients.areasM2[group],
+        'm2',
+        coefficients.effectiveUWPerM2K[group],
+        coefficients.coveringWPerK[group],
+      ),
+    ),
+    component(
+      'perimeter',
+      coefficients.rows.perimeter.label ?? 'Perimeter',
+      geometry.perimeterM,
+      'm',
+      coefficients.perimeterFactorWPerMK,
+      coefficients.perimeterWPerK,
+    ),
+    component(
+      'infiltration',
+      'Air leakage (infiltration)',
+      geometry.volumeM3,
+      'm3',
+      coefficients.airChangesPerHour,
+      coefficients.infiltrationWPerK,
+    ),
+  ];
+
+  return {
+    insideC,
+    outsideC,
+    deltaTK,
+    totalW: coefficients.totalWPerK * heatingDeltaTK,
+    coveringW: coefficients.coveringTotalWPerK * heatingDeltaTK,
+    perimeterW: coefficients.perimeterWPerK * heatingDeltaTK,
+    infiltrationW: coefficients.infiltrationWPerK * heatingDeltaTK,
+    curtainApplied: coefficients.curtainApplied,
+    components,
+  };
+}

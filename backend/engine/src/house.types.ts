@@ -1,0 +1,64 @@
+/**
+ * A greenhouse as the engine sees it. SI units throughout; names carry their unit.
+ * The API's house DTOs and the stored house map onto this shape one to one.
+ */
+import type { HouseShape, SurfaceGroup } from './vocabulary';
+
+export interface HeaterGroup {
+  /** number of identical units */
+  count: number;
+  /** rated input of one unit, W (unit heaters are rated on input) */
+  ratedInputW: number;
+  /** steady-state efficiency, 0–1 (output = input × efficiency) */
+  efficiency: number;
+  /** id of a row in reference-data/fuels.json */
+  fuelId: string;
+}
+
+export interface ExhaustFans {
+  count: number;
+  /** air moved by one fan at the working static pressure, m³/s */
+  capacityEachM3PerS: number;
+}
+
+export interface Setpoints {
+  dayHeatingC: number;
+  nightHeatingC: number;
+  coolingC: number;
+}
+
+export interface HouseSpec {
+  shape: HouseShape;
+  /** 1 for a freestanding house; more for a gutter-connected range */
+  spans: number;
+  /** width of one span, m */
+  widthM: number;
+  lengthM: number;
+  /** sidewall (gutter) height, m */
+  eaveHeightM: number;
+  ridgeHeightM: number;
+  /** reference-data/coverings.json ids per surface group */
+  coverings: Record<SurfaceGroup, string>;
+  /** a maker's U-value that replaces the reference value for a surface group, W/(m²·K) */
+  coveringUOverridesWPerM2K?: Partial<Record<SurfaceGroup, number>>;
+  /** reference-data/air-leakage.json id */
+  airLeakageClassId: string;
+  /** a measured air-change rate that replaces the leakage class's rate, 1/h */
+  airChangesPerHourOverride?: number | null;
+  perimeterInsulated: boolean;
+  /** reference-data/curtains.json id of a thermal curtain drawn at night, or null for none */
+  curtainId?: string | null;
+  heaters: HeaterGroup[];
+  exhaustFans: ExhaustFans;
+  /** free area of the intake louvres or inlets, m² */
+  inletAreaM2: number;
+  setpoints: Setpoints;
+}
+
+/** Where the house stands; used for air density and the sun's path. */
+export interface Site {
+  latitudeDeg: number;
+  longitudeDeg: number;
+  elevationM: number;
+  timeZone: string;
+}

@@ -1,0 +1,79 @@
+import { loadReferenceData } from '../testing/reference-data';
+import { sunTimes } from '../solar';
+import { demoClimate, demoSeasonInput } from './demo-season';
+import { nightHeatingDemand, type NightDemandInput } from './night-demand';
+import { SunCache } from './sun-hours';
+
+const ref = loadReferenceData();
+const sunCache = new SunCache();
+
+function nightInput(overrides: Partial<NightDemandInput> = {}): NightDemandInput {
+  const { season: _season, calendar: _calendar, ...rest } = demoSeasonInput();
+  return { ...rest, date: '2026-01-20', ...overrides };
+}
+
+function constantClimate(outdoorC: number) {
+  return {
+    ...demoClimate(),
+    monthly: demoClimate().monthly.map((month) => ({ ...month, meanDailyMinC: outdoorC, meanDailyMaxC: outdoorC })),
+  };
+}
+
+describe('night heating demand', () => {
+  it('is UA × (T_night − T_out) × night length at a constant outdoor temperature', () => {
+    const night = nightHeatingDemand(nightInput({ climate: constantClimate(-5) }), ref, sunCache);
+    const sunset = sunTimes(new Date(Date.UTC(2026, 0, 20, 17)), 42, -72.5).sunset!;
+    const sunrise = sunTimes(new Date(Date.UTC(2026, 0, 21, 17)), 42, -72.5).sunrise!;
+    const nightHours = (sunrise.getTime() - sunset.getTime()) / 3_600_000;
+    expect(night.nightHours).toBeCloseTo(nightHours, 6);
+    expect(night.energyKWh).toBeCloseTo((night.uaWPerK * 20 * nightHours) / 1000, 6);
+    expect(night.peakW).toBeCloseTo(night.uaWPerK * 20, 6);
+    expect(night.sunset).toMatch(/^2026-01-20T16:/);
+    expect(night.sunrise).toMatch(/^2026-01-21T07:/);
+    expect(night.fuelQuantityUs).toBeGreaterThan(0);
+  });
+
+  it('needs less with the curtain drawn, in proportion to UA', () => {
+    const open = nightHeatingDemand(nightInput({ climate: constantClimate(-5) }), ref, sunCache);
+    const house = { ...demoSeasonInput().house, curtainId: 'pe-film-curtain' };
+    const drawn = nightHeatingDemand(nightInput({ climate: constantClimate(-5), house }), ref, sunCache);
+    expect(drawn.uaWPerK).toBeLessThan(open.uaWPerK);
+    expect(drawn.energyKWh / open.energyKWh).toBeCloseTo(drawn.uaWPerK / open.uaWPerK, 9);
+  });
+
+  it('follows the daily curve: colder before sunrise than after sunset, and a lower setpoint needs less', () => {
+    const night = nightHeatingDemand(nightInput(), ref, sunCache);
+    expect(night.hourly[0].outdoorC).toBeGreaterThan(night.minOutdoorC);
+    const cooler = nightHeatingDemand(nightInput({ nightSetpointC: 10 }), ref, sunCache);
+    expect(cooler.energyKWh).toBeLessThan(night.energyKWh);
+    expect(cooler.nightSetpointC).toBe(10);
+  });
+});
+
+describe('night heating demand with the installed heaters as a limit', () => {
+  it('flags each hour the heaters cannot hold and counts fuel on the heat delivered', () => {
+    const { house } = nightInput();
+    const ample = nightHeatingDemand(nightInput({ climate: constantClimate(-5) }), ref, sunCache);
+    const outputW = ample.peakW / 2;
+    const small = nightHeatingDemand(
+      nightInput({
+        climate: constantClimate(-5),
+        house: { ...house, heaters: [{ count: 1, ratedInputW: outputW / 0.8, efficiency: 0.8, fuelId: 'propane' }] },
+      }),
+      ref,
+      sunCache,
+    );
+    expect(ample.hoursBelowSetpoint).toBe(0);
+    expect(ample.capacityCaution).toBeNull();
+    expect(small.installedOutputW).toBeCloseTo(outputW, 6);
+    expect(small.hoursBelowSetpoint).toBe(small.hourly.length);
+    for (const hour of small.hourly) {
+      expect(hour.belowSetpoint).toBe(true);
+      expect(hour.deliveredW).toBeCloseTo(outputW, 6);
+    }
+    expect(small.energyKWh).toBeCloseTo(ample.energyKWh / 2, 6);
+    expect(small.unmetHeatKWh).toBeCloseTo(ample.energyKWh / 2, 6);
+    expect(small.fuelInputKWh).toBeCloseTo(small.energyKWh / 0.8, 6);
+    expect(small.capacityCaution).toMatch(/of the night/);
+  });
+});

@@ -1,0 +1,120 @@
+import fc from 'fast-check';
+import { simulateSeason, type SeasonHours, type SimulationParameters } from './season-simulation';
+
+/** One day of hand-made hours: 0 °C all day, daylight 08:00–16:00 with a half-daylight hour at 07:00. */
+function oneDay(irradianceWPerM2: number): SeasonHours {
+  const dayFraction = new Float64Array(24);
+  const irradiance = new Float64Array(24);
+  for (let hour = 8; hour < 16; hour++) {
+    dayFraction[hour] = 1;
+    irradiance[hour] = irradianceWPerM2;
+  }
+  dayFraction[7] = 0.5;
+  return {
+    firstDayNumber: 0,
+    dayCount: 1,
+    hourCount: 24,
+    outdoorC: new Float64Array(24).fill(0),
+    dayFraction,
+    clearSkyGlobalHorizontalWPerM2: irradiance,
+    clearnessOfDay: new Float64Array([0.5]),
+    monthSlotOfDay: new Uint8Array([0]),
+    months: [{ year: 1970, month: 1 }],
+    dailyMinC: new Float64Array([0]),
+    dailyMaxC: new Float64Array([0]),
+  };
+}
+
+function parameters(overrides: Partial<SimulationParameters> = {}): SimulationParameters {
+  return {
+    uaDayWPerK: 100,
+    uaNightWPerK: 60,
+    solarGainAreaM2: 0,
+    daySetpointC: new Float64Array([20]),
+    nightSetpointC: new Float64Array([10]),
+    heaterOutputW: Infinity,
+    ...overrides,
+  };
+}
+
+describe('hourly season simulation', () => {
+  it('switches setpoint and curtain UA at sunrise and sunset, splitting the sunrise hour', () => {
+    const result = simulateSeason(oneDay(0), parameters());
+    // 8.5 day hours at 100 W/K × 20 K, 15.5 night hours at 60 W/K × 10 K
+    expect(result.totalHeatWh).toBeCloseTo(8.5 * 2000 + 15.5 * 600, 9);
+    expect(result.nightHeatWh).toBeCloseTo(15.5 * 600, 9);
+    expect(result.peakW).toBe(2000);
+    expect(result.peakHourIndex).toBe(8);
+    expect(result.heatingHours).toBe(24);
+  });
+
+  it('lets sunlight offset daytime loss but never turns it into negative heat', () => {
+    // gain = 1000 W/m² × clearness 0.5 × 5 m² = 2500 W > 2000 W loss
+    const result = simulateSeason(oneDay(1000), parameters({ solarGainAreaM2: 5 }));
+    expect(result.totalHeatWh).toBeCloseTo(0.5 * 2000 + 15.5 * 600, 9);
+    expect(result.solarOffsetWh).toBeCloseTo(8 * 2000, 9);
+    expect(result.heatingHours).toBe(16);
+  });
+
+  it('skips unheated days', () => {
+    const result = simulateSeason(
+      oneDay(0),
+      parameters({ daySetpointC: new Float64Array([NaN]), nightSetpointC: new Float64Array([NaN]) }),
+    );
+    expect(result.totalHeatWh).toBe(0);
+    expect(result.peakHourIndex).toBe(-1);
+  });
+});
+
+describe('hourly season simulation with the heaters’ output as a limit', () => {
+  it('delivers at most the installed output in each part of the hour; the rest is unmet', () => {
+    // demand: 8.5 h at 2000 W by day, 15.5 h at 600 W by night; heaters give 500 W
+    const capped = simulateSeason(oneDay(0), parameters({ heaterOutputW: 500 }));
+    expect(capped.totalHeatWh).toBeCloseTo(24 * 500, 9);
+    expect(capped.unmetHeatWh).toBeCloseTo(8.5 * 1500 + 15.5 * 100, 9);
+    expect(capped.hoursBelowSetpoint).toBe(24);
+    expect(capped.monthlyHoursBelowSetpoint[0]).toBe(24);
+    expect(capped.monthlyUnmetHeatWh[0]).toBeCloseTo(capped.unmetHeatWh, 9);
+    // the peak stays the demand the house had
+    expect(capped.peakW).toBe(2000);
+    // 1000 W hold the night (600 W) but not the day (2000 W): 8 day hours and the split sunrise hour
+    const dayShort = simulateSeason(oneDay(0), parameters({ heaterOutputW: 1000 }));
+    expect(dayShort.hoursBelowSetpoint).toBe(9);
+    expect(dayShort.nightHeatWh).toBeCloseTo(15.5 * 600, 9);
+  });
+
+  it('without heaters nothing is delivered and every heated hour is below the setpoint', () => {
+    const none = simulateSeason(oneDay(0), parameters({ heaterOutputW: 0 }));
+    const uncapped = simulateSeason(oneDay(0), parameters());
+    expect(none.totalHeatWh).toBe(0);
+    expect(none.unmetHeatWh).toBeCloseTo(uncapped.totalHeatWh, 9);
+    expect(none.hoursBelowSetpoint).toBe(uncapped.heatingHours);
+  });
+
+  it('properties: unmet ≥ 0, delivered ≤ output × heating hours, delivered + unmet = the uncapped demand; ample heaters change nothing', () => {
+    fc.assert(
+      fc.property(
+        fc.array(fc.double({ min: -30, max: 25, noNaN: true }), { minLength: 24, maxLength: 24 }),
+        fc.double({ min: 0, max: 5000, noNaN: true }),
+        fc.double({ min: 0, max: 2000, noNaN: true }),
+        (temperatures, heaterOutputW, irradiance) => {
+          const hours = oneDay(irradiance);
+          hours.outdoorC = Float64Array.from(temperatures);
+          const params = parameters({ solarGainAreaM2: 2 });
+          const uncapped = simulateSeason(hours, params);
+          const capped = simulateSeason(hours, { ...params, heaterOutputW });
+          expect(capped.unmetHeatWh).toBeGreaterThanOrEqual(0);
+          expect(capped.totalHeatWh).toBeLessThanOrEqual(heaterOutputW * capped.heatingHours + 1e-9);
+          expect(capped.totalHeatWh + capped.unmetHeatWh).toBeCloseTo(uncapped.totalHeatWh, 6);
+          expect(capped.hoursBelowSetpoint).toBeLessThanOrEqual(capped.heatingHours);
+          expect(capped.hoursBelowSetpoint > 0).toBe(capped.unmetHeatWh > 0);
+          const ample = simulateSeason(hours, {
+            ...params,
+            heaterOutputW: uncapped.peakW / Math.min(...hours.dayFraction.map((f) => Math.max(f, 1 - f))) + 1,
+          });
+          expect(ample).toEqual(uncapped);
+        },
+      ),
+    );
+  });
+});

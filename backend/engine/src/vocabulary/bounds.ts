@@ -1,0 +1,51 @@
+/**
+ * Bounds on what a user may type, shared by the API's DTOs and the UI's Yup schemas (the
+ * frontend imports this file), so both sides refuse the same values. Wide enough for any real
+ * commercial greenhouse; narrow enough that the physics stays meaningful.
+ */
+export const BOUNDS = {
+  spans: { min: 1, max: 40 },
+  widthM: { min: 2, max: 20 },
+  lengthM: { min: 3, max: 300 },
+  eaveHeightM: { min: 0.5, max: 10 },
+  ridgeHeightM: { min: 1.5, max: 15 },
+  uValueWPerM2K: { min: 0.2, max: 12 },
+  airChangesPerHour: { min: 0.05, max: 10 },
+  heaterCount: { min: 0, max: 50 },
+  heaterGroups: { min: 0, max: 10 },
+  nameLength: { min: 1, max: 120 },
+  notesLength: { min: 0, max: 4000 },
+  heaterInputW: { min: 500, max: 3_000_000 },
+  heaterEfficiency: { min: 0.3, max: 1.05 },
+  fanCount: { min: 0, max: 100 },
+  fanCapacityM3PerS: { min: 0.1, max: 25 },
+  inletAreaM2: { min: 0, max: 500 },
+  setpointC: { min: -5, max: 40 },
+  designOutdoorC: { min: -50, max: 25 },
+  summerDesignC: { min: 15, max: 55 },
+  elevationM: { min: -100, max: 4500 },
+  latitudeDeg: { min: -66, max: 66 },
+  longitudeDeg: { min: -180, max: 180 },
+  relativeHumidityPct: { min: 5, max: 100 },
+} as const;
+
+export type BoundName = keyof typeof BOUNDS;
+
+/**
+ * Bounds on the cooling inputs (design day, pads, light).
+ * Wide enough for any real design day; narrow enough that the physics holds.
+ */
+export const COOLING_BOUNDS = {
+  dailyRangeK: { min: 0, max: 25 },
+  /** wet bulb also may not exceed the design dry bulb */
+  summerDesignWetBulbC: { min: 0, max: 40 },
+  allowedTemperatureRiseK: { min: 1, max: 15 },
+  /** 500–12,000 fc */
+  peakInteriorLightLux: { min: 5_000, max: 130_000 },
+  padToFanDistanceM: { min: 3, max: 300 },
+  transpirationFraction: { min: 0, max: 0.9 },
+  padAreaM2: { min: 0.1, max: 2_000 },
+} as const;
+
+/** Outdoor temperatures the engine accepts anywhere, °C: colder or hotter air is a typing error. */
+export const OUTDOOR_TEMPERATURE_LIMITS_C = { min: -60, max: 60 } as const;
