@@ -18,6 +18,7 @@ import { ReferenceDataModule } from './reference-data/reference-data.module';
 import { SeasonModule } from './season/season.module';
 import { SeedModule } from './seed/seed.module';
 import { UsersModule } from './users/users.module';
+import { WeatherModule } from './weather/weather.module';
 
 /** The built frontend, served at / by the same process as the API. */
 function frontendDist(): string {
@@ -40,6 +41,7 @@ const staticFrontend = existsSync(frontendDist())
     ClimateModule,
     EstimatesModule,
     SeasonModule,
+    WeatherModule,
     SeedModule,
     ...staticFrontend,
   ],

@@ -229,6 +229,25 @@ describe('roles × routes (e2e)', () => {
           .set(bearer(token[who])),
     },
     {
+      route: 'GET /farms/:id/weather',
+      expected: { owner: 200, grower: 200, adviser: 200, viewer: 200, outsider: 404, admin: 404 },
+      call: (who) => t.http.get(`/api/farms/${farmId}/weather`).set(bearer(token[who])),
+    },
+    {
+      route: 'POST /farms/:id/weather/years/:year',
+      expected: { owner: 201, grower: 201, adviser: 201, viewer: 403, outsider: 404, admin: 404 },
+      call: (who) => t.http.post(`/api/farms/${farmId}/weather/years/2024`).set(bearer(token[who])),
+    },
+    {
+      route: 'GET /farms/:id/weather/climate-proposal',
+      expected: { owner: 200, grower: 200, adviser: 200, viewer: 403, outsider: 404, admin: 404 },
+      call: (who) =>
+        t.http
+          .get(`/api/farms/${farmId}/weather/climate-proposal`)
+          .query({ fromYear: 2024, toYear: 2024 })
+          .set(bearer(token[who])),
+    },
+    {
       route: 'GET /users (site admin only)',
       expected: { owner: 403, grower: 403, adviser: 403, viewer: 403, outsider: 403, admin: 200 },
       call: (who) => t.http.get('/api/users').set(bearer(token[who])),

@@ -13,6 +13,12 @@ export interface Environment {
   DEMO_SEED: boolean;
   LOGIN_RATE_LIMIT_PER_MINUTE: number;
   FRONTEND_DIST: string | null;
+  /** the hourly weather-history service; null = start the local stand-in with invented weather */
+  WEATHER_API_URL: string | null;
+  /** port of the local stand-in on 127.0.0.1 (0 = any free port) */
+  WEATHER_STANDIN_PORT: number;
+  WEATHER_TIMEOUT_MS: number;
+  WEATHER_ATTEMPTS: number;
 }
 
 const DEVELOPMENT_JWT_SECRET = 'thermbay-development-secret-not-for-production';
@@ -32,6 +38,19 @@ function parseInteger(name: string, raw: string | undefined, fallback: number, m
     throw new Error(`${name} must be a whole number from ${min} to ${max} (got "${raw}")`);
   }
   return value;
+}
+
+function parseHttpUrl(name: string, raw: string | undefined): string | null {
+  if (raw === undefined || raw.trim() === '') return null;
+  let url: URL;
+  try {
+    url = new URL(raw.trim());
+  } catch {
+    throw new Error(`${name} must be an http(s) URL (got "${raw}")`);
+  }
+  if (url.protocol !== 'http:' && url.protocol !== 'https:')
+    throw new Error(`${name} must be an http(s) URL (got "${raw}")`);
+  return url.toString().replace(/\/$/, '');
 }
 
 export function validateEnvironment(raw: Record<string, unknown>): Environment {
@@ -75,5 +94,9 @@ export function validateEnvironment(raw: Record<string, unknown>): Environment {
       10000,
     ),
     FRONTEND_DIST: env.FRONTEND_DIST === '' ? null : (env.FRONTEND_DIST ?? null),
+    WEATHER_API_URL: parseHttpUrl('WEATHER_API_URL', env.WEATHER_API_URL),
+    WEATHER_STANDIN_PORT: parseInteger('WEATHER_STANDIN_PORT', env.WEATHER_STANDIN_PORT, 0, 0, 65535),
+    WEATHER_TIMEOUT_MS: parseInteger('WEATHER_TIMEOUT_MS', env.WEATHER_TIMEOUT_MS, 30_000, 100, 600_000),
+    WEATHER_ATTEMPTS: parseInteger('WEATHER_ATTEMPTS', env.WEATHER_ATTEMPTS, 3, 1, 10),
   };
 }

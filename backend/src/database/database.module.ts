@@ -13,9 +13,10 @@ import { FarmFuelPrice } from '../season/models/farm-fuel-price.model';
 import { HouseCalendar } from '../season/models/house-calendar.model';
 import { TemperatureLog } from '../temperature-logs/models/temperature-log.model';
 import { User } from '../users/models/user.model';
+import { WeatherYear } from '../weather/models/weather-year.model';
 import { createMigrator, prepareSqlite } from './migrator';
 
-export const MODELS = [User, Farm, Membership, House, FarmClimate, TemperatureLog, HouseCalendar, FarmFuelPrice];
+export const MODELS = [User, Farm, Membership, House, FarmClimate, TemperatureLog, HouseCalendar, FarmFuelPrice, WeatherYear];
 
 /** Brings the schema up to date before anything else touches the database. */
 @Injectable()

@@ -534,6 +534,54 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/farms/{farmId}/weather": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["WeatherController_source"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/farms/{farmId}/weather/years/{year}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["WeatherController_fetchYear"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/farms/{farmId}/weather/climate-proposal": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["WeatherController_proposal"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
 }
 export type webhooks = Record<string, never>;
 export interface components {
@@ -2041,6 +2089,80 @@ export interface components {
             mapping: components["schemas"]["TemperatureColumnMappingDto"];
             days: components["schemas"]["TemperatureLogDayDto"][];
         };
+        WeatherSourceDto: {
+            /** @description true when the weather is invented by the local stand-in, not measured */
+            standIn: boolean;
+            /** @description the real service in use (WEATHER_API_URL), or null */
+            serviceUrl: string | null;
+            /** @description what a reader must know about where the hours come from */
+            note: string;
+            defaultFromYear: number;
+            defaultToYear: number;
+            /** @description the last complete calendar year the service can be asked for */
+            lastCompleteYear: number;
+        };
+        WeatherYearStatusDto: {
+            year: number;
+            /** @description true when the year was already cached and the service was not asked */
+            fromCache: boolean;
+            hourCount: number;
+            missingHourCount: number;
+        };
+        WeatherYearUsageDto: {
+            year: number;
+            hourCount: number;
+            missingHourCount: number;
+            /** @description missing hours ÷ hours, 0–1 */
+            missingShare: number;
+        };
+        WeatherYearLeftOutDto: {
+            year: number;
+            hourCount: number;
+            missingHourCount: number;
+            /** @description missing hours ÷ hours, 0–1 */
+            missingShare: number;
+            reason: string;
+        };
+        MonthlyFromWeatherDto: {
+            month: number;
+            /** @description °C */
+            meanDailyMinC: number;
+            /** @description °C */
+            meanDailyMaxC: number;
+            /** @description measured ÷ clear-sky global horizontal, 0–1 */
+            clearness: number | null;
+            dayCount: number;
+        };
+        ClimateProposalDto: {
+            farmId: number;
+            fromYear: number;
+            toYear: number;
+            source: components["schemas"]["WeatherSourceDto"];
+            /** @description the grid point the hours belong to (0.1°) */
+            gridLatitudeDeg: number;
+            gridLongitudeDeg: number;
+            yearsUsed: components["schemas"]["WeatherYearUsageDto"][];
+            yearsLeftOut: components["schemas"]["WeatherYearLeftOutDto"][];
+            hoursUsed: number;
+            /** @description dry bulb that 99.6 % of the hours are at or above, °C */
+            winterDesign996C: number;
+            /** @description dry bulb that 99 % of the hours are at or above, °C */
+            winterDesign99C: number;
+            /** @description dry bulb that 0.4 % of the hours are at or above, °C */
+            summerDesign04C: number;
+            /** @description dry bulb that 1 % of the hours are at or above, °C */
+            summerDesign1C: number;
+            /** @description mean coincident wet bulb at the 0.4 % dry bulb, °C */
+            summerCoincidentWetBulb04C: number | null;
+            /** @description mean coincident wet bulb at the 1 % dry bulb, °C */
+            summerCoincidentWetBulb1C: number | null;
+            /** @description mean daily range of the warmest month, K */
+            summerDailyRangeK: number;
+            monthly: components["schemas"]["MonthlyFromWeatherDto"][];
+            /** @description what would be saved: 99.6 % heating and 1 % cooling design values, monthly normals */
+            proposedClimate: components["schemas"]["SiteClimateDto"];
+            currentClimate: components["schemas"]["SiteClimateDto"] | null;
+        };
     };
     responses: never;
     parameters: never;
@@ -3480,6 +3602,97 @@ export interface operations {
             };
             /** @description no such log, or not a member of its farm */
             404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    WeatherController_source: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                farmId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description where weather history comes from (stand-in or service) */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["WeatherSourceDto"];
+                };
+            };
+        };
+    };
+    WeatherController_fetchYear: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                farmId: number;
+                year: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description one year of the farm's hourly weather, fetched and cached */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["WeatherYearStatusDto"];
+                };
+            };
+            /** @description the weather service could not be reached or answered garbage; nothing stored */
+            502: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description the weather service did not answer in time; nothing stored */
+            504: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    WeatherController_proposal: {
+        parameters: {
+            query: {
+                fromYear: number;
+                toYear: number;
+            };
+            header?: never;
+            path: {
+                farmId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description design temperatures and monthly normals from the years of hourly history (nothing is saved) */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ClimateProposalDto"];
+                };
+            };
+            /** @description the weather service could not be reached or answered garbage */
+            502: {
                 headers: {
                     [name: string]: unknown;
                 };

@@ -20,6 +20,8 @@ declare module 'psychrolib' {
     GetDryAirDensity(dryBulbC: number, pressurePa: number): number;
     /** Pa */
     GetSatVapPres(dryBulbC: number): number;
+    /** wet bulb °C from dry bulb °C, dew point °C and pressure Pa */
+    GetTWetBulbFromTDewPoint(dryBulbC: number, dewPointC: number, pressurePa: number): number;
   };
   export = psychrolib;
 }

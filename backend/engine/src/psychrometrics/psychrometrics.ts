@@ -20,6 +20,11 @@ export function dewPointC(dryBulbC: number, relativeHumidityPct: number): number
   return si().GetTDewPointFromRelHum(dryBulbC, relativeHumidityPct / 100);
 }
 
+/** Wet bulb of air at a dry bulb and dew point (°C) at a pressure (Pa). */
+export function wetBulbFromDewPointC(dryBulbC: number, dewPointC: number, pressurePa: number): number {
+  return si().GetTWetBulbFromTDewPoint(dryBulbC, dewPointC, pressurePa);
+}
+
 /** Density of moist air (dry air plus its water vapour), kg/m³. */
 export function moistAirDensityKgPerM3(dryBulbC: number, relativeHumidityPct: number, pressurePa: number): number {
   const lib = si();

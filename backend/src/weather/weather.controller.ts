@@ -1,0 +1,63 @@
+import { Controller, Get, Param, ParseIntPipe, Post, Query } from '@nestjs/common';
+import {
+  ApiBadGatewayResponse,
+  ApiBearerAuth,
+  ApiGatewayTimeoutResponse,
+  ApiOkResponse,
+  ApiTags,
+} from '@nestjs/swagger';
+import { CurrentUser, type AuthenticatedUser } from '../common/decorators/current-user.decorator';
+import {
+  ClimateProposalDto,
+  ClimateProposalQueryDto,
+  WeatherSourceDto,
+  WeatherYearParamsDto,
+  WeatherYearStatusDto,
+} from './dto/weather.dto';
+import { WeatherService } from './weather.service';
+
+@ApiTags('weather')
+@ApiBearerAuth()
+@Controller('farms/:farmId/weather')
+export class WeatherController {
+  constructor(private readonly weather: WeatherService) {}
+
+  @Get()
+  @ApiOkResponse({ type: WeatherSourceDto, description: 'where weather history comes from (stand-in or service)' })
+  source(
+    @CurrentUser() me: AuthenticatedUser,
+    @Param('farmId', ParseIntPipe) farmId: number,
+  ): Promise<WeatherSourceDto> {
+    return this.weather.sourceForFarm(me, farmId);
+  }
+
+  @Post('years/:year')
+  @ApiOkResponse({
+    type: WeatherYearStatusDto,
+    description: "one year of the farm's hourly weather, fetched and cached",
+  })
+  @ApiBadGatewayResponse({
+    description: 'the weather service could not be reached or answered garbage; nothing stored',
+  })
+  @ApiGatewayTimeoutResponse({ description: 'the weather service did not answer in time; nothing stored' })
+  fetchYear(
+    @CurrentUser() me: AuthenticatedUser,
+    @Param() params: WeatherYearParamsDto,
+  ): Promise<WeatherYearStatusDto> {
+    return this.weather.fetchYear(me, params.farmId, params.year);
+  }
+
+  @Get('climate-proposal')
+  @ApiOkResponse({
+    type: ClimateProposalDto,
+    description: 'design temperatures and monthly normals from the years of hourly history (nothing is saved)',
+  })
+  @ApiBadGatewayResponse({ description: 'the weather service could not be reached or answered garbage' })
+  proposal(
+    @CurrentUser() me: AuthenticatedUser,
+    @Param('farmId', ParseIntPipe) farmId: number,
+    @Query() query: ClimateProposalQueryDto,
+  ): Promise<ClimateProposalDto> {
+    return this.weather.proposeClimate(me, farmId, query.fromYear, query.toYear);
+  }
+}

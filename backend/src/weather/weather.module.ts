@@ -1,0 +1,17 @@
+import { Module } from '@nestjs/common';
+import { SequelizeModule } from '@nestjs/sequelize';
+import { ClimateModule } from '../climate/climate.module';
+import { FarmsModule } from '../farms/farms.module';
+import { Farm } from '../farms/models/farm.model';
+import { ReferenceDataModule } from '../reference-data/reference-data.module';
+import { WeatherYear } from './models/weather-year.model';
+import { WeatherController } from './weather.controller';
+import { WeatherService } from './weather.service';
+
+@Module({
+  imports: [SequelizeModule.forFeature([WeatherYear, Farm]), FarmsModule, ClimateModule, ReferenceDataModule],
+  controllers: [WeatherController],
+  providers: [WeatherService],
+  exports: [WeatherService],
+})
+export class WeatherModule {}
