@@ -106,3 +106,6 @@ export type Measure = Schemas['MeasureDto'];
 export type MeasureKind = Measure['kind'];
 export type MeasureComparison = Schemas['MeasureComparisonDto'];
 export type MeasureResult = Schemas['MeasureResultDto'];
+export type WeatherSource = Schemas['WeatherSourceDto'];
+export type WeatherYearStatus = Schemas['WeatherYearStatusDto'];
+export type ClimateProposal = Schemas['ClimateProposalDto'];

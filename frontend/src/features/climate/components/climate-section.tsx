@@ -1,24 +1,47 @@
-import { Paper, Stack, Typography } from '@mui/material';
+import { Button, Paper, Stack, Typography } from '@mui/material';
 import { useQuery } from '@tanstack/react-query';
+import { useState } from 'react';
 import { ErrorAlert, LoadingState } from '../../../components/feedback';
 import { usePutFarmClimate } from '../mutations';
 import { farmClimateQueryOptions } from '../queries';
 import { ClimateEditor } from './climate-editor';
+import { WeatherFillDialog } from './weather-fill-dialog';
 
 /** The farm's climate, loaded and saved; editable for roles with house:write. */
 export function ClimateSection({ farmId, canEdit }: { farmId: number; canEdit: boolean }) {
   const climate = useQuery(farmClimateQueryOptions(farmId));
   const save = usePutFarmClimate(farmId);
+  const [filling, setFilling] = useState(false);
   return (
     <Paper component="section" aria-labelledby="climate-heading" sx={{ p: 2 }}>
       <Stack spacing={2}>
-        <Typography id="climate-heading" variant="h2">
-          Climate
-        </Typography>
+        <Stack
+          direction="row"
+          spacing={2}
+          sx={{ alignItems: 'center', justifyContent: 'space-between', flexWrap: 'wrap' }}
+        >
+          <Typography id="climate-heading" variant="h2">
+            Climate
+          </Typography>
+          {canEdit && climate.data ? (
+            <Button variant="outlined" onClick={() => setFilling(true)}>
+              Fill from weather history
+            </Button>
+          ) : null}
+        </Stack>
         {climate.isPending ? <LoadingState label="Loading climate…" /> : null}
         <ErrorAlert error={climate.error} title="Climate could not be loaded" />
         {climate.data ? (
           <ClimateEditor climate={climate.data.climate} readOnly={!canEdit} onSave={(body) => save.mutateAsync(body)} />
+        ) : null}
+        {climate.data ? (
+          <WeatherFillDialog
+            farmId={farmId}
+            open={filling}
+            current={climate.data.climate}
+            onClose={() => setFilling(false)}
+            onSave={(body) => save.mutateAsync(body)}
+          />
         ) : null}
       </Stack>
     </Paper>

@@ -1,0 +1,22 @@
+import { queryOptions } from '@tanstack/react-query';
+import { api } from '../../api/client';
+import type { ClimateProposal, WeatherSource, WeatherYearStatus } from '../../api/types';
+
+export const weatherKeys = {
+  all: ['weather'] as const,
+  source: (farmId: number) => [...weatherKeys.all, 'source', farmId] as const,
+};
+
+export const weatherSourceQueryOptions = (farmId: number) =>
+  queryOptions({
+    queryKey: weatherKeys.source(farmId),
+    queryFn: ({ signal }) => api.get<WeatherSource>(`/api/farms/${farmId}/weather`, { signal }),
+    staleTime: Infinity,
+  });
+
+/** One year of hourly history, fetched by the server (or already in its cache). */
+export const fetchWeatherYear = (farmId: number, year: number) =>
+  api.post<WeatherYearStatus>(`/api/farms/${farmId}/weather/years/${year}`);
+
+export const fetchClimateProposal = (farmId: number, fromYear: number, toYear: number) =>
+  api.get<ClimateProposal>(`/api/farms/${farmId}/weather/climate-proposal?fromYear=${fromYear}&toYear=${toYear}`);
