@@ -239,6 +239,11 @@ describe('roles × routes (e2e)', () => {
       call: (who) => t.http.post(`/api/farms/${farmId}/weather/years/2024`).set(bearer(token[who])),
     },
     {
+      route: 'POST /farms/:id/weather/years/:year/temperature-log',
+      expected: { owner: 201, grower: 201, adviser: 403, viewer: 403, outsider: 404, admin: 404 },
+      call: (who) => t.http.post(`/api/farms/${farmId}/weather/years/2024/temperature-log`).set(bearer(token[who])),
+    },
+    {
       route: 'GET /farms/:id/weather/climate-proposal',
       expected: { owner: 200, grower: 200, adviser: 200, viewer: 403, outsider: 404, admin: 404 },
       call: (who) =>

@@ -146,6 +146,27 @@ describe('weather history and the climate proposal (e2e)', () => {
     expect(res.body.message).toMatch(/not hourly weather/);
   });
 
+  it('keeps a year as a temperature log in local standard time, and a season runs on its hours', async () => {
+    const grower = await signIn(t, 'grower@example.com');
+    const res = await t.http
+      .post(`/api/farms/${farmId}/weather/years/${lastYear}/temperature-log`)
+      .set(bearer(grower))
+      .expect(201);
+    expect(res.body.name).toMatch(/INVENTED/);
+    expect(res.body.resolution).toBe('hourly');
+    // The demo farm keeps Central Standard Time (UTC−6): the year's first UTC hour is 18:00 on 31 December.
+    expect(res.body.startDate).toBe(`${lastYear - 1}-12-31`);
+    expect(res.body.endDate).toBe(`${lastYear}-12-31`);
+    const houseId = (await t.http.get(`/api/farms/${farmId}/houses`).set(bearer(grower)).expect(200)).body[0].id;
+    const season = await t.http
+      .post(`/api/houses/${houseId}/season`)
+      .set(bearer(grower))
+      .send({ climateSource: { temperatureLogId: res.body.id } })
+      .expect(200);
+    expect(season.body.inputsUsed.climateSource).toBe('temperature-log');
+    expect(season.body.total.energyKWh).toBeGreaterThan(0);
+  });
+
   it('refuses years the service cannot have, naming the field', async () => {
     const future = await proposal(lastYear, lastYear + 1).expect(400);
     expect(future.body.field).toBe('toYear');

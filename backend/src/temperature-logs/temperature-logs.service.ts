@@ -145,6 +145,31 @@ export class TemperatureLogsService {
     return temperatureLogToDto(row);
   }
 
+  /**
+   * Stores readings that did not come from an uploaded file (a year of weather history). The
+   * caller has checked the farm permission; the mapping says which columns of the source they are.
+   */
+  async storeReadings(
+    farmId: number,
+    name: string,
+    readings: TemperatureLogReading[],
+    mapping: TemperatureColumnMapping,
+  ): Promise<TemperatureLogDto> {
+    if (readings.length === 0) throw new EngineInputError('readings', 'there are no readings to store');
+    const row = await this.logs.create({
+      farmId,
+      name,
+      resolution: 'hourly',
+      startDate: readings[0]!.at.slice(0, 10),
+      endDate: readings[readings.length - 1]!.at.slice(0, 10),
+      rowCount: readings.length,
+      readingCount: readings.length,
+      mapping,
+      readings,
+    });
+    return temperatureLogToDto(row);
+  }
+
   async list(user: AuthenticatedUser, farmId: number): Promise<TemperatureLogDto[]> {
     await this.access.require(user, farmId, 'farm:read');
     const rows = await this.logs.findAll({

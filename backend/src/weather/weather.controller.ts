@@ -2,11 +2,13 @@ import { Controller, Get, Param, ParseIntPipe, Post, Query } from '@nestjs/commo
 import {
   ApiBadGatewayResponse,
   ApiBearerAuth,
+  ApiCreatedResponse,
   ApiGatewayTimeoutResponse,
   ApiOkResponse,
   ApiTags,
 } from '@nestjs/swagger';
 import { CurrentUser, type AuthenticatedUser } from '../common/decorators/current-user.decorator';
+import { TemperatureLogDto } from '../temperature-logs/dto/temperature-log.dto';
 import {
   ClimateProposalDto,
   ClimateProposalQueryDto,
@@ -45,6 +47,18 @@ export class WeatherController {
     @Param() params: WeatherYearParamsDto,
   ): Promise<WeatherYearStatusDto> {
     return this.weather.fetchYear(me, params.farmId, params.year);
+  }
+
+  @Post('years/:year/temperature-log')
+  @ApiCreatedResponse({
+    type: TemperatureLogDto,
+    description: "keeps one year of the history as a temperature log of the farm, for a season on that year's hours",
+  })
+  @ApiBadGatewayResponse({
+    description: 'the weather service could not be reached or answered garbage; nothing stored',
+  })
+  keepAsLog(@CurrentUser() me: AuthenticatedUser, @Param() params: WeatherYearParamsDto): Promise<TemperatureLogDto> {
+    return this.weather.keepYearAsTemperatureLog(me, params.farmId, params.year);
   }
 
   @Get('climate-proposal')

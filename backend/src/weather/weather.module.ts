@@ -4,12 +4,19 @@ import { ClimateModule } from '../climate/climate.module';
 import { FarmsModule } from '../farms/farms.module';
 import { Farm } from '../farms/models/farm.model';
 import { ReferenceDataModule } from '../reference-data/reference-data.module';
+import { TemperatureLogsModule } from '../temperature-logs/temperature-logs.module';
 import { WeatherYear } from './models/weather-year.model';
 import { WeatherController } from './weather.controller';
 import { WeatherService } from './weather.service';
 
 @Module({
-  imports: [SequelizeModule.forFeature([WeatherYear, Farm]), FarmsModule, ClimateModule, ReferenceDataModule],
+  imports: [
+    SequelizeModule.forFeature([WeatherYear, Farm]),
+    FarmsModule,
+    ClimateModule,
+    ReferenceDataModule,
+    TemperatureLogsModule,
+  ],
   controllers: [WeatherController],
   providers: [WeatherService],
   exports: [WeatherService],

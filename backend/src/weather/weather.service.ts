@@ -11,6 +11,8 @@ import { FarmAccessService } from '../farms/farm-access.service';
 import { Farm } from '../farms/models/farm.model';
 import { ReferenceDataService } from '../reference-data/reference-data.service';
 import { standardUtcOffsetHours } from '../season/site-time';
+import type { TemperatureLogDto } from '../temperature-logs/dto/temperature-log.dto';
+import { TemperatureLogsService } from '../temperature-logs/temperature-logs.service';
 import {
   FIRST_WEATHER_YEAR,
   MAX_WEATHER_SPAN_YEARS,
@@ -46,6 +48,7 @@ export class WeatherService implements OnModuleInit, OnModuleDestroy {
     private readonly access: FarmAccessService,
     private readonly climate: ClimateService,
     private readonly reference: ReferenceDataService,
+    private readonly temperatureLogs: TemperatureLogsService,
   ) {}
 
   async onModuleInit(): Promise<void> {
@@ -190,6 +193,34 @@ export class WeatherService implements OnModuleInit, OnModuleDestroy {
       },
       currentClimate: await this.climate.findForFarm(farmId),
     };
+  }
+
+  /**
+   * Keeps one year of the history as a temperature log of the farm (hours in local standard
+   * time), so a season can run on that year's actual hours like on an uploaded log.
+   */
+  async keepYearAsTemperatureLog(user: AuthenticatedUser, farmId: number, year: number): Promise<TemperatureLogDto> {
+    await this.access.require(user, farmId, 'house:write');
+    this.checkYears(year, year);
+    const farm = await this.farms.findByPk(farmId, { rejectOnEmpty: true });
+    const { row } = await this.yearFor(farm, year);
+    const offsetMs = standardUtcOffsetHours(farm.timeZone, year) * 3_600_000;
+    const startMs = new Date(row.startAt).getTime();
+    const readings = row.hours.temperatureC.flatMap((temperatureC, i) =>
+      temperatureC === null
+        ? []
+        : [{ at: new Date(startMs + i * 3_600_000 + offsetMs).toISOString().slice(0, 16), temperatureC }],
+    );
+    const name = this.standIn
+      ? `Weather history ${year} (INVENTED by the local stand-in)`
+      : `Weather history ${year} (${gridOf(farm.latitudeDeg)}°, ${gridOf(farm.longitudeDeg)}°)`;
+    return this.temperatureLogs.storeReadings(farmId, name, readings, {
+      timestampColumn: 'time',
+      temperatureColumn: 'temperature_2m',
+      unit: 'C',
+      resolution: 'hourly',
+      hasHeader: true,
+    });
   }
 
   private checkYears(fromYear: number, toYear: number): void {

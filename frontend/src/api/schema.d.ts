@@ -566,6 +566,22 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/farms/{farmId}/weather/years/{year}/temperature-log": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["WeatherController_keepAsLog"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/farms/{farmId}/weather/climate-proposal": {
         parameters: {
             query?: never;
@@ -3661,6 +3677,36 @@ export interface operations {
             };
             /** @description the weather service did not answer in time; nothing stored */
             504: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    WeatherController_keepAsLog: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                farmId: number;
+                year: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description keeps one year of the history as a temperature log of the farm, for a season on that year's hours */
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["TemperatureLogDto"];
+                };
+            };
+            /** @description the weather service could not be reached or answered garbage; nothing stored */
+            502: {
                 headers: {
                     [name: string]: unknown;
                 };

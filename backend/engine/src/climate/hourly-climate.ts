@@ -206,6 +206,11 @@ function monthlyFromHours(spans: HourlyWeatherSpan[], site: HourlyClimateSite, r
   const measuredGhi = new Float64Array(13);
   const clearSkyGhi = new Float64Array(13);
   const offsetMs = site.utcOffsetHours * MS_PER_HOUR;
+  // The sun's altitude at a UTC day-of-year and hour differs between years by well under a
+  // degree: computed once (for the first year it is needed) and reused for every year.
+  const altitudeByHourOfYear = new Float64Array(367 * 24).fill(Number.NaN);
+  let utcDay = Number.NaN;
+  let utcDayOfYear = 0;
 
   for (const span of spans) {
     let dayKey = Number.NaN;
@@ -222,13 +227,12 @@ function monthlyFromHours(spans: HourlyWeatherSpan[], site: HourlyClimateSite, r
     };
     for (let i = 0; i < span.dryBulbC.length; i++) {
       const startMs = span.startUtcMs + i * MS_PER_HOUR;
-      const local = new Date(startMs + offsetMs);
       const key = Math.floor((startMs + offsetMs) / 86_400_000);
-      const month = local.getUTCMonth() + 1;
       if (key !== dayKey) {
         if (!Number.isNaN(dayKey)) closeDay();
         dayKey = key;
-        dayMonth = month;
+        // The month changes only with the day: one Date a day, not one an hour.
+        dayMonth = new Date(key * 86_400_000).getUTCMonth() + 1;
         dayMin = Infinity;
         dayMax = -Infinity;
         dayValid = 0;
@@ -240,16 +244,24 @@ function monthlyFromHours(spans: HourlyWeatherSpan[], site: HourlyClimateSite, r
         dayValid++;
       }
       const ghi = span.globalHorizontalWPerM2?.[i];
-      if (finite(ghi)) {
-        // Irradiance is the mean over the hour: compare with the clear sky at mid-hour.
-        const altitudeDeg = sunPosition(
-          new Date(startMs + MS_PER_HOUR / 2),
-          site.latitudeDeg,
-          site.longitudeDeg,
-        ).altitudeDeg;
+      // Hours without measured sunshine are night (the sun's position is the costly part here).
+      if (finite(ghi) && ghi > 0) {
+        const day = Math.floor(startMs / 86_400_000);
+        if (day !== utcDay) {
+          utcDay = day;
+          const yearStartMs = Date.UTC(new Date(day * 86_400_000).getUTCFullYear(), 0, 1);
+          utcDayOfYear = (day * 86_400_000 - yearStartMs) / 86_400_000;
+        }
+        const slot = utcDayOfYear * 24 + Math.floor((startMs - day * 86_400_000) / MS_PER_HOUR);
+        if (Number.isNaN(altitudeByHourOfYear[slot]!)) {
+          // Irradiance is the mean over the hour: compare with the clear sky at mid-hour.
+          const midHour = new Date(startMs + MS_PER_HOUR / 2);
+          altitudeByHourOfYear[slot] = sunPosition(midHour, site.latitudeDeg, site.longitudeDeg).altitudeDeg;
+        }
+        const altitudeDeg = altitudeByHourOfYear[slot]!;
         if (altitudeDeg > 0) {
-          measuredGhi[month] += Math.max(0, ghi);
-          clearSkyGhi[month] += clearSkyIrradiance(altitudeDeg, month, ref).globalHorizontalWPerM2;
+          measuredGhi[dayMonth] += ghi;
+          clearSkyGhi[dayMonth] += clearSkyIrradiance(altitudeDeg, dayMonth, ref).globalHorizontalWPerM2;
         }
       }
     }

@@ -9,13 +9,13 @@ import type { ReferenceData } from '@thermbay/engine/reference-data.types';
  *   (the standard-atmosphere lapse rate);
  * - a seasonal swing of ±(1 + 0.38·|latitude|) K, coldest around 20 January in the north and
  *   20 July in the south;
- * - a daily swing of ±5 K in clear weather (±2 K under cloud), coldest near 06:00 and warmest near
+ * - a daily swing of ±7 K in clear weather (±3 K under cloud), coldest near 06:00 and warmest near
  *   15:00 local solar time;
  * - weather noise: a first-order autoregressive anomaly (persistence 0.995 per hour, standard
  *   deviation 4 K) from a generator seeded by the rounded coordinates and the year, so the same
  *   request always gets the same answer;
  * - a cloud factor per day (0.25–1) that scales the engine's clear-sky irradiance;
- * - a dew point 2–10 K below the air, smaller under cloud and at night.
+ * - a dew point 3–12 K below the air, smaller under cloud and at night.
  */
 export interface InventedHours {
   /** UTC instant of hour 0 */
@@ -91,11 +91,11 @@ export function inventHourlyWeather(
     }
     anomalyK = persistence * anomalyK + innovationK * gaussian(random);
     const clear = (cloudFactor - 0.25) / 0.75;
-    const dailySwingK = 2 + 3 * clear;
+    const dailySwingK = 3 + 4 * clear;
     const seasonalC = annualMeanC - seasonalSwingK * Math.cos((2 * Math.PI * (dayOfYear - coldestDay)) / 365.25);
     const dailyC = dailySwingK * Math.cos((2 * Math.PI * (solarHour - 15)) / 24);
     const t = seasonalC + dailyC + anomalyK;
-    const depressionK = 2 + 8 * clear * (0.5 + 0.5 * Math.cos((2 * Math.PI * (solarHour - 15)) / 24));
+    const depressionK = 3 + 9 * clear * (0.5 + 0.5 * Math.cos((2 * Math.PI * (solarHour - 15)) / 24));
     temperatureC[i] = round1(t);
     dewPointC[i] = round1(t - depressionK);
     const month = at.getUTCMonth() + 1;

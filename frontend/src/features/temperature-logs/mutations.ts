@@ -50,3 +50,13 @@ export function useDeleteTemperatureLog(farmId: number) {
     },
   });
 }
+
+/** Keeps one year of the farm's weather history as a temperature log (fetched by the server). */
+export function useKeepWeatherYearAsLog(farmId: number) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (year: number) =>
+      api.post<TemperatureLog>(`/api/farms/${farmId}/weather/years/${year}/temperature-log`),
+    onSuccess: () => void queryClient.invalidateQueries({ queryKey: temperatureLogKeys.farm(farmId) }),
+  });
+}

@@ -181,6 +181,7 @@ export function WeatherFillDialog({ farmId, open, current, onClose, onSave }: We
             <Button
               variant="outlined"
               onClick={() => void fetchHistory()}
+              sx={{ whiteSpace: 'nowrap', flexShrink: 0 }}
               disabled={busy || spanInvalid || !source.data}
             >
               Read the history

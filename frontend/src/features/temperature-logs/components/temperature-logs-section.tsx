@@ -8,6 +8,7 @@ import { useDeleteTemperatureLog } from '../mutations';
 import { farmTemperatureLogsQueryOptions } from '../queries';
 import { TemperatureLogChart } from './temperature-log-chart';
 import { TemperatureLogUpload } from './temperature-log-upload';
+import { WeatherYearLog } from './weather-year-log';
 import { TemperatureLogsTable } from './temperature-logs-table';
 
 /** The farm's logged outdoor temperatures: upload, list, preview, delete. */
@@ -29,6 +30,7 @@ export function TemperatureLogsSection({ farmId, canEdit }: { farmId: number; ca
           snaps and mild spells that averages hide.
         </Typography>
         {canEdit ? <TemperatureLogUpload farmId={farmId} onStored={(log) => setPreviewLogId(log.id)} /> : null}
+        {canEdit ? <WeatherYearLog farmId={farmId} onStored={(log) => setPreviewLogId(log.id)} /> : null}
         <Typography variant="h3">Stored logs</Typography>
         {logs.isPending ? <LoadingState label="Loading logs…" /> : null}
         <ErrorAlert error={logs.error} title="Logs could not be loaded" />
