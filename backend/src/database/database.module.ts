@@ -16,7 +16,17 @@ import { User } from '../users/models/user.model';
 import { WeatherYear } from '../weather/models/weather-year.model';
 import { createMigrator, prepareSqlite } from './migrator';
 
-export const MODELS = [User, Farm, Membership, House, FarmClimate, TemperatureLog, HouseCalendar, FarmFuelPrice, WeatherYear];
+export const MODELS = [
+  User,
+  Farm,
+  Membership,
+  House,
+  FarmClimate,
+  TemperatureLog,
+  HouseCalendar,
+  FarmFuelPrice,
+  WeatherYear,
+];
 
 /** Brings the schema up to date before anything else touches the database. */
 @Injectable()
