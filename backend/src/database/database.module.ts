@@ -13,7 +13,7 @@ import { FarmFuelPrice } from '../season/models/farm-fuel-price.model';
 import { HouseCalendar } from '../season/models/house-calendar.model';
 import { TemperatureLog } from '../temperature-logs/models/temperature-log.model';
 import { User } from '../users/models/user.model';
-import { createMigrator, prepareSqlite } from './migrator';
+import { migrateToLatest } from './migrator';
 
 export const MODELS = [User, Farm, Membership, House, FarmClimate, TemperatureLog, HouseCalendar, FarmFuelPrice];
 
@@ -25,9 +25,8 @@ class MigrationRunner implements OnModuleInit {
   constructor(@InjectConnection() private readonly sequelize: Sequelize) {}
 
   async onModuleInit(): Promise<void> {
-    await prepareSqlite(this.sequelize);
-    const applied = await createMigrator(this.sequelize).up();
-    if (applied.length > 0) this.logger.log(`applied migrations: ${applied.map((m) => m.name).join(', ')}`);
+    const applied = await migrateToLatest(this.sequelize);
+    if (applied.length > 0) this.logger.log(`applied migrations: ${applied.join(', ')}`);
   }
 }
 
@@ -36,6 +35,20 @@ class MigrationRunner implements OnModuleInit {
     SequelizeModule.forRootAsync({
       inject: [ConfigService],
       useFactory: (config: ConfigService<Environment, true>) => {
+        const databaseUrl = config.get('DATABASE_URL', { infer: true });
+        if (databaseUrl) {
+          return {
+            dialect: 'postgres' as const,
+            uri: databaseUrl,
+            models: MODELS,
+            logging: false,
+            synchronize: false,
+            autoLoadModels: false,
+            // An unreachable server fails a request (and /api/health) within seconds, not never.
+            dialectOptions: { connectionTimeoutMillis: 5000 },
+            pool: { max: 10, acquire: 10_000 },
+          };
+        }
         const storage = resolve(config.get('DATABASE_FILE', { infer: true }));
         mkdirSync(dirname(storage), { recursive: true });
         return {
