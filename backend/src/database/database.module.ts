@@ -4,6 +4,7 @@ import { InjectConnection, SequelizeModule } from '@nestjs/sequelize';
 import { mkdirSync } from 'node:fs';
 import { dirname, resolve } from 'node:path';
 import { Sequelize } from 'sequelize-typescript';
+import { LoginAttempt } from '../auth/login-limiter/login-attempt.model';
 import type { Environment } from '../config/environment';
 import { FarmClimate } from '../climate/models/farm-climate.model';
 import { Farm } from '../farms/models/farm.model';
@@ -15,7 +16,17 @@ import { TemperatureLog } from '../temperature-logs/models/temperature-log.model
 import { User } from '../users/models/user.model';
 import { migrateToLatest } from './migrator';
 
-export const MODELS = [User, Farm, Membership, House, FarmClimate, TemperatureLog, HouseCalendar, FarmFuelPrice];
+export const MODELS = [
+  User,
+  Farm,
+  Membership,
+  House,
+  FarmClimate,
+  TemperatureLog,
+  HouseCalendar,
+  FarmFuelPrice,
+  LoginAttempt,
+];
 
 /** Brings the schema up to date before anything else touches the database. */
 @Injectable()

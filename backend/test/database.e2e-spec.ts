@@ -1,0 +1,125 @@
+import { ConnectionRefusedError } from 'sequelize';
+import { Sequelize } from 'sequelize-typescript';
+import { existsSync } from 'node:fs';
+import { Client } from 'pg';
+import { createTestApp, type TestApp } from './test-app';
+
+/** Whether a PostgreSQL database of that name exists on the test server. */
+async function postgresDatabaseExists(name: string): Promise<boolean> {
+  const client = new Client({ connectionString: process.env.DATABASE_URL });
+  await client.connect();
+  try {
+    const result = await client.query('SELECT 1 FROM pg_database WHERE datname = $1', [name]);
+    return result.rowCount === 1;
+  } finally {
+    await client.end();
+  }
+}
+
+/** Which database the suite runs on: `bash .ci/test-postgres.sh` sets DATABASE_URL. */
+const expectedDialect = process.env.DATABASE_URL ? 'postgres' : 'sqlite';
+
+describe('database (e2e)', () => {
+  describe('health', () => {
+    let t: TestApp;
+    beforeAll(async () => {
+      t = await createTestApp();
+    });
+    afterAll(() => t.close());
+
+    it('reports the database reachable and which dialect, without its address or credentials', async () => {
+      const res = await t.http.get('/api/health').expect(200);
+      expect(res.body).toEqual({
+        status: 'ok',
+        version: expect.any(String),
+        database: { dialect: expectedDialect, reachable: true },
+      });
+      const text = JSON.stringify(res.body);
+      if (t.database.dialect === 'postgres') {
+        const url = new URL(t.database.url);
+        expect(text).not.toContain(url.hostname);
+        expect(text).not.toContain(t.database.name);
+        expect(text).not.toContain(url.port);
+      } else {
+        expect(text).not.toContain(t.database.file);
+        expect(text).not.toContain('.sqlite');
+      }
+    });
+
+    it('answers 503 while the database cannot be reached, and 200 again once it can', async () => {
+      // Every query asks the connection manager for a connection; an unreachable server makes
+      // that fail with the driver's connection error (here with a host and password in it).
+      const sequelize = t.app.get(Sequelize);
+      const refused = new ConnectionRefusedError(
+        Object.assign(new Error('connect ECONNREFUSED 10.9.8.7:5432 (user thermbay, password hunter2)'), {
+          code: 'ECONNREFUSED',
+        }),
+      );
+      const spy = jest.spyOn(sequelize.connectionManager, 'getConnection').mockRejectedValue(refused);
+      try {
+        const res = await t.http.get('/api/health').expect(503);
+        expect(res.body).toEqual({
+          status: 'unavailable',
+          version: expect.any(String),
+          database: { dialect: expectedDialect, reachable: false },
+        });
+        expect(JSON.stringify(res.body)).not.toMatch(/10\.9\.8\.7|hunter2|ECONNREFUSED/);
+        expect(spy).toHaveBeenCalled();
+      } finally {
+        spy.mockRestore();
+      }
+      await t.http.get('/api/health').expect(200);
+    });
+  });
+
+  describe('each test app gets a database of its own', () => {
+    it('a second app in the same spec file starts on a new, empty database and the first one is removed', async () => {
+      const first = await createTestApp({ DEMO_SEED: 'false' });
+      await first.http
+        .post('/api/auth/register')
+        .send({ email: 'only-in-first@example.com', name: 'First', password: 'first-app-password' })
+        .expect(201);
+      const firstDatabase = first.database;
+      await first.close();
+
+      const second = await createTestApp({ DEMO_SEED: 'false' });
+      try {
+        expect(second.database).not.toEqual(firstDatabase);
+        // The account registered on the first app does not exist here...
+        await second.http
+          .post('/api/auth/login')
+          .send({ email: 'only-in-first@example.com', password: 'first-app-password' })
+          .expect(401);
+        // ...so registering it again succeeds instead of answering 409.
+        await second.http
+          .post('/api/auth/register')
+          .send({ email: 'only-in-first@example.com', name: 'Second', password: 'second-app-password' })
+          .expect(201);
+        // The first app's database was removed when it closed, the second one's was not.
+        if (firstDatabase.dialect === 'sqlite' && second.database.dialect === 'sqlite') {
+          expect(existsSync(firstDatabase.file)).toBe(false);
+          expect(existsSync(second.database.file)).toBe(true);
+        }
+        if (firstDatabase.dialect === 'postgres' && second.database.dialect === 'postgres') {
+          expect(await postgresDatabaseExists(firstDatabase.name)).toBe(false);
+          expect(await postgresDatabaseExists(second.database.name)).toBe(true);
+        }
+      } finally {
+        await second.close();
+      }
+      if (second.database.dialect === 'sqlite') expect(existsSync(second.database.file)).toBe(false);
+      else expect(await postgresDatabaseExists(second.database.name)).toBe(false);
+    });
+
+    it('refuses to open a second app while the first is still open', async () => {
+      const first = await createTestApp({ DEMO_SEED: 'false' });
+      try {
+        await expect(createTestApp({ DEMO_SEED: 'false' })).rejects.toThrow(
+          /close the app on .* before creating another/,
+        );
+      } finally {
+        await first.close();
+      }
+    });
+  });
+});
