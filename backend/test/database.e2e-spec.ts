@@ -2,6 +2,9 @@ import { ConnectionRefusedError } from 'sequelize';
 import { Sequelize } from 'sequelize-typescript';
 import { existsSync } from 'node:fs';
 import { Client } from 'pg';
+import { randomBytes } from 'node:crypto';
+import { migrateToLatest } from '../src/database/migrator';
+import { MIGRATIONS } from '../src/database/migrations';
 import { createTestApp, type TestApp } from './test-app';
 
 /** Whether a PostgreSQL database of that name exists on the test server. */
@@ -119,6 +122,28 @@ describe('database (e2e)', () => {
         );
       } finally {
         await first.close();
+      }
+    });
+  });
+
+  (expectedDialect === 'postgres' ? describe : describe.skip)('several instances starting at once (PostgreSQL)', () => {
+    it('migrate one database exactly once between them', async () => {
+      const name = `thermbay_e2e_migrate_${randomBytes(6).toString('hex')}`;
+      const server = new Client({ connectionString: process.env.DATABASE_URL });
+      await server.connect();
+      await server.query(`CREATE DATABASE "${name}"`);
+      const url = new URL(process.env.DATABASE_URL!);
+      url.pathname = `/${name}`;
+      const instances = [1, 2, 3].map(() => new Sequelize(url.toString(), { dialect: 'postgres', logging: false }));
+      try {
+        const applied = await Promise.all(instances.map((sequelize) => migrateToLatest(sequelize)));
+        // One instance applied every migration; the others waited for it and found none left.
+        expect(applied.map((names) => names.length).sort()).toEqual([0, 0, MIGRATIONS.length]);
+        expect(applied.flat()).toEqual(MIGRATIONS.map((m) => m.name));
+      } finally {
+        await Promise.all(instances.map((sequelize) => sequelize.close()));
+        await server.query(`DROP DATABASE IF EXISTS "${name}" WITH (FORCE)`);
+        await server.end();
       }
     });
   });
