@@ -3,7 +3,7 @@ import { Sequelize } from 'sequelize-typescript';
 import { existsSync } from 'node:fs';
 import { Client } from 'pg';
 import { randomBytes } from 'node:crypto';
-import { migrateToLatest } from '../src/database/migrator';
+import { migrateToLatest, withStartupLock } from '../src/database/migrator';
 import { MIGRATIONS } from '../src/database/migrations';
 import { createTestApp, type TestApp } from './test-app';
 
@@ -144,6 +144,43 @@ describe('database (e2e)', () => {
         await Promise.all(instances.map((sequelize) => sequelize.close()));
         await server.query(`DROP DATABASE IF EXISTS "${name}" WITH (FORCE)`);
         await server.end();
+      }
+    });
+
+    it('run start-up work (the demo seed) one instance at a time', async () => {
+      const a = new Sequelize(process.env.DATABASE_URL!, { dialect: 'postgres', logging: false });
+      const b = new Sequelize(process.env.DATABASE_URL!, { dialect: 'postgres', logging: false });
+      const watcher = new Client({ connectionString: process.env.DATABASE_URL });
+      await watcher.connect();
+      const events: string[] = [];
+      let releaseA!: () => void;
+      const aMayFinish = new Promise<void>((resolve) => (releaseA = resolve));
+      let aStarted!: () => void;
+      const aIsIn = new Promise<void>((resolve) => (aStarted = resolve));
+      try {
+        const first = withStartupLock(a, async () => {
+          events.push('a starts');
+          aStarted();
+          await aMayFinish;
+          events.push('a ends');
+        });
+        await aIsIn;
+        const second = withStartupLock(b, async () => {
+          events.push('b starts');
+        });
+        // Wait until b is queued on the lock (PostgreSQL shows it as an ungranted advisory lock).
+        for (;;) {
+          const waiting = await watcher.query("SELECT 1 FROM pg_locks WHERE locktype = 'advisory' AND NOT granted");
+          if ((waiting.rowCount ?? 0) > 0) break;
+          await new Promise((resolve) => setImmediate(resolve));
+        }
+        expect(events).toEqual(['a starts']);
+        releaseA();
+        await Promise.all([first, second]);
+        expect(events).toEqual(['a starts', 'a ends', 'b starts']);
+      } finally {
+        await watcher.end();
+        await Promise.all([a.close(), b.close()]);
       }
     });
   });
