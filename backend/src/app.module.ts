@@ -1,4 +1,4 @@
-import { Module } from '@nestjs/common';
+import { type DynamicModule, Module } from '@nestjs/common';
 import { ConfigModule } from '@nestjs/config';
 import { APP_GUARD } from '@nestjs/core';
 import { ServeStaticModule } from '@nestjs/serve-static';
@@ -31,7 +31,6 @@ const staticFrontend = existsSync(frontendDist())
 
 @Module({
   imports: [
-    ConfigModule.forRoot({ isGlobal: true, ignoreEnvFile: true, validate: validateEnvironment }),
     DatabaseModule,
     ReferenceDataModule,
     UsersModule,
@@ -51,4 +50,25 @@ const staticFrontend = existsSync(frontendDist())
     { provide: APP_GUARD, useClass: SiteRolesGuard },
   ],
 })
-export class AppModule {}
+export class AppModule {
+  /**
+   * The application configured from `env` (the process environment by default), validated now.
+   * Each call builds its own configuration, so two apps in one process (the e2e tests) never
+   * share one by accident, and nothing is written back into `process.env`.
+   */
+  static forRoot(env: Record<string, string | undefined> = process.env): DynamicModule {
+    const environment = validateEnvironment(env);
+    return {
+      module: AppModule,
+      imports: [
+        ConfigModule.forRoot({
+          isGlobal: true,
+          ignoreEnvFile: true,
+          validatePredefined: false,
+          skipProcessEnv: true,
+          load: [() => ({ ...environment })],
+        }),
+      ],
+    };
+  }
+}

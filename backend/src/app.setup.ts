@@ -1,12 +1,19 @@
 import type { INestApplication } from '@nestjs/common';
+import { ConfigService } from '@nestjs/config';
+import type { NestExpressApplication } from '@nestjs/platform-express';
 import { DocumentBuilder, SwaggerModule, type OpenAPIObject } from '@nestjs/swagger';
 import helmet from 'helmet';
 import { AllExceptionsFilter } from './common/filters/all-exceptions.filter';
+import type { Environment } from './config/environment';
 import { createValidationPipe } from './common/validation';
 
 /** Everything main.ts and the e2e tests both need, so tests run the app exactly as served. */
 export function configureApp(app: INestApplication): void {
   app.setGlobalPrefix('api');
+  // Behind a reverse proxy the client's address comes from X-Forwarded-For, trusted only as far
+  // as TRUST_PROXY says (the sign-in limiter counts per address).
+  const trustProxy = app.get(ConfigService<Environment, true>).get('TRUST_PROXY', { infer: true });
+  (app as NestExpressApplication).set('trust proxy', trustProxy);
   app.use(
     helmet({
       contentSecurityPolicy: {

@@ -7,7 +7,7 @@ import { configureApp, mountOpenApi } from './app.setup';
 import type { Environment } from './config/environment';
 
 async function bootstrap(): Promise<void> {
-  const app = await NestFactory.create(AppModule, { bufferLogs: false });
+  const app = await NestFactory.create(AppModule.forRoot(), { bufferLogs: false });
   configureApp(app);
   mountOpenApi(app);
   const port = app.get(ConfigService<Environment, true>).get('PORT', { infer: true });

@@ -2,12 +2,19 @@ import { Module } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { JwtModule } from '@nestjs/jwt';
 import { PassportModule } from '@nestjs/passport';
-import { ThrottlerModule } from '@nestjs/throttler';
+import { getModelToken, SequelizeModule } from '@nestjs/sequelize';
 import type { Environment } from '../config/environment';
 import { UsersModule } from '../users/users.module';
 import { AuthController } from './auth.controller';
 import { AuthService } from './auth.service';
 import { JwtStrategy } from './jwt.strategy';
+import {
+  DatabaseLoginAttemptStore,
+  MemoryLoginAttemptStore,
+  type LoginAttemptStore,
+} from './login-limiter/login-attempt-store';
+import { LoginAttempt } from './login-limiter/login-attempt.model';
+import { LOGIN_ATTEMPT_STORE, LOGIN_WINDOW_MS, LoginLimiterService } from './login-limiter/login-limiter.service';
 
 @Module({
   imports: [
@@ -20,15 +27,22 @@ import { JwtStrategy } from './jwt.strategy';
         signOptions: { expiresIn: config.get('JWT_EXPIRES_IN_SECONDS', { infer: true }) },
       }),
     }),
-    // Only the sign-in and register routes use the throttler guard.
-    ThrottlerModule.forRootAsync({
-      inject: [ConfigService],
-      useFactory: (config: ConfigService<Environment, true>) => [
-        { ttl: 60_000, limit: config.get('LOGIN_RATE_LIMIT_PER_MINUTE', { infer: true }) },
-      ],
-    }),
+    SequelizeModule.forFeature([LoginAttempt]),
   ],
   controllers: [AuthController],
-  providers: [AuthService, JwtStrategy],
+  providers: [
+    AuthService,
+    JwtStrategy,
+    LoginLimiterService,
+    {
+      // LOGIN_LIMITER_STORE: memory for one instance, database when several share a database.
+      provide: LOGIN_ATTEMPT_STORE,
+      inject: [ConfigService, getModelToken(LoginAttempt)],
+      useFactory: (config: ConfigService<Environment, true>, model: typeof LoginAttempt): LoginAttemptStore =>
+        config.get('LOGIN_LIMITER_STORE', { infer: true }) === 'database'
+          ? new DatabaseLoginAttemptStore(model, LOGIN_WINDOW_MS)
+          : new MemoryLoginAttemptStore(LOGIN_WINDOW_MS),
+    },
+  ],
 })
 export class AuthModule {}

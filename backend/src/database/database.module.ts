@@ -4,6 +4,7 @@ import { InjectConnection, SequelizeModule } from '@nestjs/sequelize';
 import { mkdirSync } from 'node:fs';
 import { dirname, resolve } from 'node:path';
 import { Sequelize } from 'sequelize-typescript';
+import { LoginAttempt } from '../auth/login-limiter/login-attempt.model';
 import type { Environment } from '../config/environment';
 import { FarmClimate } from '../climate/models/farm-climate.model';
 import { Farm } from '../farms/models/farm.model';
@@ -14,7 +15,7 @@ import { HouseCalendar } from '../season/models/house-calendar.model';
 import { TemperatureLog } from '../temperature-logs/models/temperature-log.model';
 import { User } from '../users/models/user.model';
 import { WeatherYear } from '../weather/models/weather-year.model';
-import { createMigrator, prepareSqlite } from './migrator';
+import { migrateToLatest } from './migrator';
 
 export const MODELS = [
   User,
@@ -26,6 +27,7 @@ export const MODELS = [
   HouseCalendar,
   FarmFuelPrice,
   WeatherYear,
+  LoginAttempt,
 ];
 
 /** Brings the schema up to date before anything else touches the database. */
@@ -36,9 +38,8 @@ class MigrationRunner implements OnModuleInit {
   constructor(@InjectConnection() private readonly sequelize: Sequelize) {}
 
   async onModuleInit(): Promise<void> {
-    await prepareSqlite(this.sequelize);
-    const applied = await createMigrator(this.sequelize).up();
-    if (applied.length > 0) this.logger.log(`applied migrations: ${applied.map((m) => m.name).join(', ')}`);
+    const applied = await migrateToLatest(this.sequelize);
+    if (applied.length > 0) this.logger.log(`applied migrations: ${applied.join(', ')}`);
   }
 }
 
@@ -47,6 +48,20 @@ class MigrationRunner implements OnModuleInit {
     SequelizeModule.forRootAsync({
       inject: [ConfigService],
       useFactory: (config: ConfigService<Environment, true>) => {
+        const databaseUrl = config.get('DATABASE_URL', { infer: true });
+        if (databaseUrl) {
+          return {
+            dialect: 'postgres' as const,
+            uri: databaseUrl,
+            models: MODELS,
+            logging: false,
+            synchronize: false,
+            autoLoadModels: false,
+            // An unreachable server fails a request (and /api/health) within seconds, not never.
+            dialectOptions: { connectionTimeoutMillis: 5000 },
+            pool: { max: 10, acquire: 10_000 },
+          };
+        }
         const storage = resolve(config.get('DATABASE_FILE', { infer: true }));
         mkdirSync(dirname(storage), { recursive: true });
         return {

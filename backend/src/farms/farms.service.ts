@@ -26,7 +26,10 @@ export class FarmsService {
     const memberships = await this.memberships.findAll({
       where: { userId: user.id },
       include: [Farm],
-      order: [[{ model: Farm, as: 'farm' }, 'name', 'ASC']],
+      order: [
+        [{ model: Farm, as: 'farm' }, 'name', 'ASC'],
+        [{ model: Farm, as: 'farm' }, 'id', 'ASC'],
+      ],
     });
     return Promise.all(memberships.map((m) => this.toDto(m.farm, m)));
   }

@@ -20,7 +20,13 @@ export class HousesService {
 
   async list(user: AuthenticatedUser, farmId: number): Promise<HouseDto[]> {
     await this.access.require(user, farmId, 'house:read');
-    const rows = await this.houses.findAll({ where: { farmId }, order: [['name', 'ASC']] });
+    const rows = await this.houses.findAll({
+      where: { farmId },
+      order: [
+        ['name', 'ASC'],
+        ['id', 'ASC'],
+      ],
+    });
     return rows.map(houseToDto);
   }
 

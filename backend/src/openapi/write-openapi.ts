@@ -3,23 +3,22 @@ import { NestFactory } from '@nestjs/core';
 import { tmpdir } from 'node:os';
 import { rmSync, writeFileSync } from 'node:fs';
 import { join, resolve } from 'node:path';
+import { AppModule } from '../app.module';
 import { buildOpenApiDocument, configureApp } from '../app.setup';
 
 /** Writes backend/openapi.json, the contract the frontend's types are generated from. */
 async function main(): Promise<void> {
-  process.env.DATABASE_FILE = join(tmpdir(), `thermbay-openapi-${process.pid}.sqlite`);
-  process.env.DEMO_SEED = 'false';
-  process.env.NODE_ENV = 'test';
-  // Loaded only now: the app module reads the environment when it is first imported.
-  const { AppModule } = await import('../app.module');
-  const app = await NestFactory.create(AppModule, { logger: false });
+  // Always a throwaway SQLite file, whatever database this shell points at.
+  const databaseFile = join(tmpdir(), `thermbay-openapi-${process.pid}.sqlite`);
+  const env = { ...process.env, DATABASE_FILE: databaseFile, DATABASE_URL: '', DEMO_SEED: 'false', NODE_ENV: 'test' };
+  const app = await NestFactory.create(AppModule.forRoot(env), { logger: false });
   configureApp(app);
   await app.init();
   const document = buildOpenApiDocument(app);
   const target = resolve(__dirname, '..', '..', 'openapi.json');
   writeFileSync(target, `${JSON.stringify(document, null, 2)}\n`);
   await app.close();
-  rmSync(process.env.DATABASE_FILE, { force: true });
+  for (const suffix of ['', '-wal', '-shm']) rmSync(databaseFile + suffix, { force: true });
   console.log(`wrote ${target}`);
 }
 

@@ -5,6 +5,7 @@ import * as bcrypt from 'bcryptjs';
 import { Sequelize } from 'sequelize-typescript';
 import { BCRYPT_ROUNDS } from '../auth/auth.service';
 import type { Environment } from '../config/environment';
+import { withStartupLock } from '../database/migrator';
 import { Farm } from '../farms/models/farm.model';
 import { Membership } from '../farms/models/membership.model';
 import { House } from '../houses/models/house.model';
@@ -34,9 +35,12 @@ export class DemoSeedService implements OnApplicationBootstrap {
 
   async onApplicationBootstrap(): Promise<void> {
     if (!this.config.get('DEMO_SEED', { infer: true })) return;
-    if (await User.count({ where: { email: DEMO_ACCOUNTS[0].email } })) return;
-    await this.seed();
-    this.logger.log(`seeded the demo scenario (sign in as grower@example.com / ${DEMO_PASSWORD})`);
+    // Several instances may start at once on one PostgreSQL database: one of them seeds.
+    await withStartupLock(this.sequelize, async () => {
+      if (await User.count({ where: { email: DEMO_ACCOUNTS[0].email } })) return;
+      await this.seed();
+      this.logger.log(`seeded the demo scenario (sign in as grower@example.com / ${DEMO_PASSWORD})`);
+    });
   }
 
   async seed(): Promise<void> {

@@ -602,10 +602,23 @@ export interface paths {
 export type webhooks = Record<string, never>;
 export interface components {
     schemas: {
+        DatabaseHealthDto: {
+            /**
+             * @description which database this instance runs on
+             * @enum {string}
+             */
+            dialect: "sqlite" | "postgres";
+            /** @description whether a trivial query answered just now */
+            reachable: boolean;
+        };
         HealthDto: {
-            /** @example ok */
-            status: string;
+            /**
+             * @example ok
+             * @enum {string}
+             */
+            status: "ok" | "unavailable";
             version: string;
+            database: components["schemas"]["DatabaseHealthDto"];
         };
         UpdateMeDto: {
             name?: string;
@@ -2205,6 +2218,15 @@ export interface operations {
                     "application/json": components["schemas"]["HealthDto"];
                 };
             };
+            /** @description The database is not reachable */
+            503: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["HealthDto"];
+                };
+            };
         };
     };
     ReferenceDataController_all: {
@@ -2349,6 +2371,13 @@ export interface operations {
                     "application/json": components["schemas"]["SessionDto"];
                 };
             };
+            /** @description Too many attempts from this address */
+            429: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
         };
     };
     AuthController_login: {
@@ -2372,7 +2401,7 @@ export interface operations {
                     "application/json": components["schemas"]["SessionDto"];
                 };
             };
-            /** @description Too many sign-in attempts from this address */
+            /** @description Too many sign-in attempts from this address or on this account */
             429: {
                 headers: {
                     [name: string]: unknown;

@@ -61,12 +61,14 @@ export async function up({ context: qi }: { context: QueryInterface }): Promise<
     eaveHeightM: { type: DataTypes.DOUBLE, allowNull: false },
     ridgeHeightM: { type: DataTypes.DOUBLE, allowNull: false },
     coverings: { type: DataTypes.JSON, allowNull: false },
-    coveringUOverridesWPerM2K: { type: DataTypes.JSON, allowNull: false, defaultValue: '{}' },
+    // JSON defaults are values, not JSON text: the string '{}' would be stored as the JSON
+    // string "{}" (on SQLite and PostgreSQL alike), not as an empty object.
+    coveringUOverridesWPerM2K: { type: DataTypes.JSON, allowNull: false, defaultValue: {} },
     airLeakageClassId: { type: DataTypes.STRING, allowNull: false },
     airChangesPerHourOverride: { type: DataTypes.DOUBLE, allowNull: true },
     perimeterInsulated: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
     curtainId: { type: DataTypes.STRING, allowNull: true },
-    heaters: { type: DataTypes.JSON, allowNull: false, defaultValue: '[]' },
+    heaters: { type: DataTypes.JSON, allowNull: false, defaultValue: [] },
     exhaustFans: { type: DataTypes.JSON, allowNull: false },
     inletAreaM2: { type: DataTypes.DOUBLE, allowNull: false, defaultValue: 0 },
     setpoints: { type: DataTypes.JSON, allowNull: false },
