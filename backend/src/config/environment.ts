@@ -60,6 +60,8 @@ function parseHttpUrl(name: string, raw: string | undefined): string | null {
   if (url.protocol !== 'http:' && url.protocol !== 'https:')
     throw new Error(`${name} must be an http(s) URL (got "${raw}")`);
   return url.toString().replace(/\/$/, '');
+}
+
 /**
  * A PostgreSQL connection URL, checked without ever echoing it back (it may hold a password).
  * Returns null when it is not set.
