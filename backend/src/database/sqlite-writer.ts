@@ -106,6 +106,7 @@ const INSTALLED = Symbol('thermbay.sqliteWriter');
  * - every transaction, and every write outside a transaction, takes its turn at one
  *   `WriterQueue`, and transactions begin IMMEDIATE (they hold the write lock from the start,
  *   so a read-then-write inside one can never fail half-way on a lock).
+ * Sequelize's own retry of SQLITE_BUSY is turned off: the busy timeout already waited.
  * WAL is a property of the file (`PRAGMA journal_mode = WAL`, set once in prepareSqlite).
  * Other dialects are left untouched.
  */
@@ -115,6 +116,10 @@ export function installSqliteWriter(sequelize: Sequelize, queue = new WriterQueu
   const existing = target[INSTALLED];
   if (existing) return existing;
   target[INSTALLED] = queue;
+
+  // Sequelize retries SQLITE_BUSY five times by default, each after a full busy timeout: a locked
+  // file then held a request for 25 s or more. The busy timeout is the wait; then answer (503).
+  (sequelize.options as { retry?: object }).retry = { max: 1 };
 
   type Connection = { configure(option: 'busyTimeout', value: number): void };
   type Manager = { getConnection(options?: unknown): Promise<Connection> };
