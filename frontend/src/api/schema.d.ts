@@ -46,7 +46,7 @@ export interface paths {
         get?: never;
         put?: never;
         post?: never;
-        delete?: never;
+        delete: operations["UsersController_removeMe"];
         options?: never;
         head?: never;
         patch: operations["UsersController_updateMe"];
@@ -560,6 +560,10 @@ export interface components {
              */
             unitSystem: "si" | "us";
         };
+        DeleteMeDto: {
+            /** @description your current password, to confirm */
+            password: string;
+        };
         AdminUpdateUserDto: {
             name?: string;
             /** @enum {string} */
@@ -610,6 +614,8 @@ export interface components {
             myRole: "owner" | "grower" | "adviser" | "viewer";
             permissions: ("farm:read" | "farm:update" | "farm:delete" | "members:manage" | "house:read" | "house:write" | "estimate:run" | "report:write")[];
             houseCount: number;
+            /** @description raised by one on every save; send it back in If-Match to update */
+            version: number;
             createdAt: string;
             updatedAt: string;
         };
@@ -724,6 +730,8 @@ export interface components {
             notes?: string | null;
             id: number;
             farmId: number;
+            /** @description raised by one on every save; send it back in If-Match to update */
+            version: number;
             createdAt: string;
             updatedAt: string;
         };
@@ -812,6 +820,8 @@ export interface components {
             farmId: number;
             /** @description null until someone enters the climate */
             climate: components["schemas"]["SiteClimateDto"] | null;
+            /** @description 0 until the first save, then raised by one on every save; send it in If-Match */
+            version: number;
         };
         HouseSpecDto: {
             /** @enum {string} */
@@ -1759,6 +1769,8 @@ export interface components {
             /** @description empty list = heated all season at the house setpoints; otherwise days no period covers are unheated, and where periods overlap the later one wins */
             periods: components["schemas"]["ProductionPeriodDto"][];
             houseId: number;
+            /** @description 0 until the first save, then raised by one on every save; send it in If-Match */
+            version: number;
         };
         PutProductionCalendarDto: {
             /** @description empty list = heated all season at the house setpoints; otherwise days no period covers are unheated, and where periods overlap the later one wins */
@@ -1787,6 +1799,8 @@ export interface components {
         FarmFuelPricesDto: {
             farmId: number;
             prices: components["schemas"]["FuelPriceDto"][];
+            /** @description version of the set, raised by one on every save; send it in If-Match */
+            version: number;
         };
         FuelPriceInputDto: {
             /** @description reference-data fuels id (one price per fuel) */
@@ -2104,6 +2118,42 @@ export interface operations {
             };
         };
     };
+    UsersController_removeMe: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["DeleteMeDto"];
+            };
+        };
+        responses: {
+            /** @description the account and its memberships are gone */
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description the password is not right */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description the account is the only owner of a farm; the farms are named in details */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
     UsersController_updateMe: {
         parameters: {
             query?: never;
@@ -2158,6 +2208,13 @@ export interface operations {
         requestBody?: never;
         responses: {
             204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description the account is the only owner of a farm; the farms are named in details */
+            409: {
                 headers: {
                     [name: string]: unknown;
                 };
@@ -2402,7 +2459,11 @@ export interface operations {
     FarmsController_update: {
         parameters: {
             query?: never;
-            header?: never;
+            header: {
+                "if-match": string;
+                /** @description the `version` of the farm you loaded (0 if it has never been saved); every save raises it by one */
+                "If-Match": string;
+            };
             path: {
                 farmId: number;
             };
@@ -2421,6 +2482,20 @@ export interface operations {
                 content: {
                     "application/json": components["schemas"]["FarmDto"];
                 };
+            };
+            /** @description someone else saved the farm first; `current` holds what is stored now (the same shape as the answer to GET) */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description If-Match missing */
+            428: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
             };
         };
     };
@@ -2488,6 +2563,13 @@ export interface operations {
                 };
                 content?: never;
             };
+            /** @description the member is the farm’s last owner */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
         };
     };
     FarmsController_updateMember: {
@@ -2513,6 +2595,13 @@ export interface operations {
                 content: {
                     "application/json": components["schemas"]["MemberDto"];
                 };
+            };
+            /** @description the member is the farm’s last owner */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
             };
         };
     };
@@ -2612,7 +2701,11 @@ export interface operations {
     HousesController_update: {
         parameters: {
             query?: never;
-            header?: never;
+            header: {
+                "if-match": string;
+                /** @description the `version` of the house you loaded (0 if it has never been saved); every save raises it by one */
+                "If-Match": string;
+            };
             path: {
                 houseId: number;
             };
@@ -2631,6 +2724,27 @@ export interface operations {
                 content: {
                     "application/json": components["schemas"]["HouseDto"];
                 };
+            };
+            /** @description someone else saved the house first; `current` holds what is stored now (the same shape as the answer to GET) */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description the house as it would be after the change is one the engine cannot compute with */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description If-Match missing */
+            428: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
             };
         };
     };
@@ -2658,7 +2772,11 @@ export interface operations {
     ClimateController_put: {
         parameters: {
             query?: never;
-            header?: never;
+            header: {
+                "if-match": string;
+                /** @description the `version` of the climate you loaded (0 if it has never been saved); every save raises it by one */
+                "If-Match": string;
+            };
             path: {
                 farmId: number;
             };
@@ -2678,8 +2796,22 @@ export interface operations {
                     "application/json": components["schemas"]["FarmClimateDto"];
                 };
             };
+            /** @description someone else saved the climate first; `current` holds what is stored now (the same shape as the answer to GET) */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
             /** @description physically impossible climate (e.g. minimum above maximum), field named */
             422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description If-Match missing */
+            428: {
                 headers: {
                     [name: string]: unknown;
                 };
@@ -3043,7 +3175,11 @@ export interface operations {
     SeasonController_putCalendar: {
         parameters: {
             query?: never;
-            header?: never;
+            header: {
+                "if-match": string;
+                /** @description the `version` of the calendar you loaded (0 if it has never been saved); every save raises it by one */
+                "If-Match": string;
+            };
             path: {
                 houseId: number;
             };
@@ -3084,8 +3220,22 @@ export interface operations {
                 };
                 content?: never;
             };
+            /** @description someone else saved the calendar first; `current` holds what is stored now (the same shape as the answer to GET) */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
             /** @description an impossible date such as 02-30, field named (periods[i].startMonthDay) */
             422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description If-Match missing */
+            428: {
                 headers: {
                     [name: string]: unknown;
                 };
@@ -3124,7 +3274,11 @@ export interface operations {
     SeasonController_putFuelPrices: {
         parameters: {
             query?: never;
-            header?: never;
+            header: {
+                "if-match": string;
+                /** @description the `version` of the fuel prices you loaded (0 if it has never been saved); every save raises it by one */
+                "If-Match": string;
+            };
             path: {
                 farmId: number;
             };
@@ -3165,8 +3319,22 @@ export interface operations {
                 };
                 content?: never;
             };
+            /** @description someone else saved the fuel prices first; `current` holds what is stored now (the same shape as the answer to GET) */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
             /** @description unknown fuel or a fuel listed twice (prices.i.fuelId) */
             422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description If-Match missing */
+            428: {
                 headers: {
                     [name: string]: unknown;
                 };
