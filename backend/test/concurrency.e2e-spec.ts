@@ -35,7 +35,13 @@ describe('concurrent writes (e2e)', () => {
   afterAll(() => t.close());
 
   const newFarm = async (token: string, name: string) =>
-    (await t.http.post('/api/farms').set(bearer(token)).send({ name, ...FARM }).expect(201)).body as {
+    (
+      await t.http
+        .post('/api/farms')
+        .set(bearer(token))
+        .send({ name, ...FARM })
+        .expect(201)
+    ).body as {
       id: number;
       version: number;
     };
@@ -62,7 +68,11 @@ describe('concurrent writes (e2e)', () => {
       const writes: Array<() => Promise<Reply>> = [
         ...Array.from(
           { length: 15 },
-          (_, i) => () => t.http.post('/api/farms').set(bearer(grower)).send({ name: `Parallel ${i}`, ...FARM }),
+          (_, i) => () =>
+            t.http
+              .post('/api/farms')
+              .set(bearer(grower))
+              .send({ name: `Parallel ${i}`, ...FARM }),
         ),
         ...priceFarms.map(
           (farm, i) => () =>
@@ -290,8 +300,9 @@ describe('concurrent writes (e2e)', () => {
       return { a, b, farm };
     };
     const ownersOf = async (token: string, id: number) =>
-      ((await t.http.get(`/api/farms/${id}/members`).set(bearer(token)).expect(200)).body as Array<{ role: string }>)
-        .filter((m) => m.role === 'owner');
+      (
+        (await t.http.get(`/api/farms/${id}/members`).set(bearer(token)).expect(200)).body as Array<{ role: string }>
+      ).filter((m) => m.role === 'owner');
 
     it('lets only one of two owners demoting each other at once succeed', async () => {
       for (let round = 0; round < 5; round += 1) {
@@ -343,7 +354,10 @@ describe('concurrent writes (e2e)', () => {
       const byAdmin = await t.http.delete(`/api/users/${a.id}`).set(bearer(admin));
       expect(byAdmin.status).toBe(409);
       expect(byAdmin.body.message).toMatch(/only owner of “Sole farm one”, “Sole farm two”/);
-      expect(byAdmin.body.details.map((d: { message: string }) => d.message)).toEqual(['Sole farm one', 'Sole farm two']);
+      expect(byAdmin.body.details.map((d: { message: string }) => d.message)).toEqual([
+        'Sole farm one',
+        'Sole farm two',
+      ]);
       const bySelf = await t.http.delete('/api/users/me').set(bearer(a.token)).send({ password: 'password-123' });
       expect(bySelf.status).toBe(409);
       expect(bySelf.body.message).toMatch(/You are the only owner of “Sole farm one”, “Sole farm two”/);

@@ -183,4 +183,3 @@ export function installSqliteWriter(sequelize: Sequelize, queue = new WriterQueu
 
   return queue;
 }
-

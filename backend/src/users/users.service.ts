@@ -1,4 +1,10 @@
-import { BadRequestException, ConflictException, ForbiddenException, Injectable, NotFoundException } from '@nestjs/common';
+import {
+  BadRequestException,
+  ConflictException,
+  ForbiddenException,
+  Injectable,
+  NotFoundException,
+} from '@nestjs/common';
 import { InjectConnection, InjectModel } from '@nestjs/sequelize';
 import * as bcrypt from 'bcryptjs';
 import type { Transaction } from 'sequelize';
@@ -60,7 +66,8 @@ export class UsersService {
   /** A user closing their own account, confirmed with their password. */
   async removeMe(id: number, password: string): Promise<void> {
     const user = await this.findById(id);
-    if (!(await bcrypt.compare(password, user.passwordHash))) throw new ForbiddenException('That password is not right');
+    if (!(await bcrypt.compare(password, user.passwordHash)))
+      throw new ForbiddenException('That password is not right');
     await this.deleteAccount(id, 'You');
   }
 
@@ -90,7 +97,11 @@ export class UsersService {
   }
 
   private async farmsOnlyOwnedBy(userId: number, transaction: Transaction): Promise<Farm[]> {
-    const owned = await Membership.findAll({ where: { userId, role: 'owner' }, order: [['farmId', 'ASC']], transaction });
+    const owned = await Membership.findAll({
+      where: { userId, role: 'owner' },
+      order: [['farmId', 'ASC']],
+      transaction,
+    });
     const sole: Farm[] = [];
     for (const { farmId } of owned) {
       const farm = await Farm.findByPk(farmId, { transaction, lock: transaction.LOCK.UPDATE });
