@@ -1,4 +1,4 @@
-import { bearer, createTestApp, signIn, type TestApp } from './test-app';
+import { bearer, createTestApp, ifMatch, signIn, type TestApp } from './test-app';
 
 describe('houses (e2e)', () => {
   let t: TestApp;
@@ -25,7 +25,12 @@ describe('houses (e2e)', () => {
 
   it('keeps an edit: PATCH then GET returns the new width', async () => {
     const house = (await t.http.get(`/api/farms/${farmId}/houses`).set(bearer(token)).expect(200)).body[0];
-    await t.http.patch(`/api/houses/${house.id}`).set(bearer(token)).send({ widthM: 10.5 }).expect(200);
+    await t.http
+      .patch(`/api/houses/${house.id}`)
+      .set(bearer(token))
+      .set(ifMatch(house.version))
+      .send({ widthM: 10.5 })
+      .expect(200);
     const again = (await t.http.get(`/api/houses/${house.id}`).set(bearer(token)).expect(200)).body;
     expect(again.widthM).toBe(10.5);
     expect(again.coverings).toEqual(house.coverings);
@@ -69,12 +74,14 @@ describe('houses (e2e)', () => {
     const ridge = await t.http
       .patch(`/api/houses/${house.id}`)
       .set(bearer(token))
+      .set(ifMatch(house.version))
       .send({ eaveHeightM: 3, ridgeHeightM: 2.5 })
       .expect(422);
     expect(ridge.body.field).toBe('ridgeHeightM');
     const covering = await t.http
       .patch(`/api/houses/${house.id}`)
       .set(bearer(token))
+      .set(ifMatch(house.version))
       .send({ coverings: { roof: 'cling-film', sidewalls: 'poly-single', endwalls: 'poly-single' } })
       .expect(422);
     expect(covering.body.field).toBe('coverings.roof');
@@ -124,9 +131,15 @@ describe('farm climate (e2e)', () => {
   });
 
   it('saves a new climate and refuses one whose minimum is above its maximum, naming the month', async () => {
-    const current = (await t.http.get(`/api/farms/${farmId}/climate`).set(bearer(grower)).expect(200)).body.climate;
+    const loaded = (await t.http.get(`/api/farms/${farmId}/climate`).set(bearer(grower)).expect(200)).body;
+    const current = loaded.climate;
     const warmer = { ...current, winterDesignC: -25 };
-    await t.http.put(`/api/farms/${farmId}/climate`).set(bearer(grower)).send(warmer).expect(200);
+    await t.http
+      .put(`/api/farms/${farmId}/climate`)
+      .set(bearer(grower))
+      .set(ifMatch(loaded.version))
+      .send(warmer)
+      .expect(200);
     expect(
       (await t.http.get(`/api/farms/${farmId}/climate`).set(bearer(grower)).expect(200)).body.climate.winterDesignC,
     ).toBe(-25);

@@ -1,6 +1,6 @@
 import { hourlyCsv, HOURLY_MAPPING } from './temperature-csv';
 import { houseBody as houseBodyNamed } from './fixtures';
-import { bearer, createTestApp, signIn, type TestApp } from './test-app';
+import { bearer, createTestApp, ifMatch, signIn, type TestApp } from './test-app';
 
 /**
  * The role × route matrix: every farm role, a member of another farm and the site admin
@@ -46,6 +46,10 @@ describe('roles × routes (e2e)', () => {
   });
   afterAll(() => t.close());
 
+  /** The version a member would have loaded before saving (read as the owner, who reads everything). */
+  const versionOf = async (path: string) =>
+    (await t.http.get(path).set(bearer(token.owner)).expect(200)).body.version as number;
+
   const newHouse = async () =>
     (await t.http.post(`/api/farms/${farmId}/houses`).set(bearer(token.owner)).send(houseBody).expect(201)).body
       .id as number;
@@ -83,7 +87,12 @@ describe('roles × routes (e2e)', () => {
     {
       route: 'PATCH /farms/:id',
       expected: { owner: 200, grower: 403, adviser: 403, viewer: 403, outsider: 404, admin: 404 },
-      call: (who) => t.http.patch(`/api/farms/${farmId}`).set(bearer(token[who])).send({ elevationM: 314 }),
+      call: async (who) =>
+        t.http
+          .patch(`/api/farms/${farmId}`)
+          .set(bearer(token[who]))
+          .set(ifMatch(await versionOf(`/api/farms/${farmId}`)))
+          .send({ elevationM: 314 + WHO.indexOf(who) }),
     },
     {
       route: 'GET /farms/:id/members',
@@ -108,10 +117,11 @@ describe('roles × routes (e2e)', () => {
     {
       route: 'PATCH /houses/:id',
       expected: { owner: 200, grower: 200, adviser: 403, viewer: 403, outsider: 404, admin: 404 },
-      call: (who) =>
+      call: async (who) =>
         t.http
           .patch(`/api/houses/${houseId}`)
           .set(bearer(token[who]))
+          .set(ifMatch(await versionOf(`/api/houses/${houseId}`)))
           .send({ notes: `edited by ${who}` }),
     },
     {
@@ -175,13 +185,31 @@ describe('roles × routes (e2e)', () => {
     {
       route: 'PUT /houses/:id/calendar',
       expected: { owner: 200, grower: 200, adviser: 403, viewer: 403, outsider: 404, admin: 404 },
-      call: (who) =>
+      call: async (who) =>
         t.http
           .put(`/api/houses/${houseId}/calendar`)
           .set(bearer(token[who]))
+          .set(ifMatch(await versionOf(`/api/houses/${houseId}/calendar`)))
           .send({
             periods: [{ startMonthDay: '10-01', endMonthDay: '04-30', mode: 'heated', label: `set by ${who}` }],
           }),
+    },
+    {
+      route: 'GET /farms/:id/climate',
+      expected: { owner: 200, grower: 200, adviser: 200, viewer: 200, outsider: 404, admin: 404 },
+      call: (who) => t.http.get(`/api/farms/${farmId}/climate`).set(bearer(token[who])),
+    },
+    {
+      route: 'PUT /farms/:id/climate',
+      expected: { owner: 200, grower: 200, adviser: 403, viewer: 403, outsider: 404, admin: 404 },
+      call: async (who) => {
+        const loaded = (await t.http.get(`/api/farms/${farmId}/climate`).set(bearer(token.owner)).expect(200)).body;
+        return t.http
+          .put(`/api/farms/${farmId}/climate`)
+          .set(bearer(token[who]))
+          .set(ifMatch(loaded.version))
+          .send({ ...loaded.climate, sourceNote: `invented demo climate, saved by ${who}` });
+      },
     },
     {
       route: 'GET /farms/:id/fuel-prices',
@@ -191,8 +219,12 @@ describe('roles × routes (e2e)', () => {
     {
       route: 'PUT /farms/:id/fuel-prices',
       expected: { owner: 200, grower: 200, adviser: 403, viewer: 403, outsider: 404, admin: 404 },
-      call: (who) =>
-        t.http.put(`/api/farms/${farmId}/fuel-prices`).set(bearer(token[who])).send({ prices: demoPrices }),
+      call: async (who) =>
+        t.http
+          .put(`/api/farms/${farmId}/fuel-prices`)
+          .set(bearer(token[who]))
+          .set(ifMatch(await versionOf(`/api/farms/${farmId}/fuel-prices`)))
+          .send({ prices: demoPrices.map((p) => ({ ...p, note: `${p.note} (set by ${who})` })) }),
     },
     {
       route: 'POST /houses/:id/season',
@@ -307,7 +339,7 @@ describe('roles × routes (e2e)', () => {
       .patch(`/api/farms/${farmId}/members/${owner.userId}`)
       .set(bearer(token.owner))
       .send({ role: 'viewer' })
-      .expect(400);
+      .expect(409);
     expect(res.body.message).toMatch(/at least one owner/);
   });
 });

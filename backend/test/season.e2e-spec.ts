@@ -1,6 +1,6 @@
 import { hourlyCsv, HOURLY_MAPPING } from './temperature-csv';
 import { houseBody } from './fixtures';
-import { bearer, createTestApp, signIn, type TestApp } from './test-app';
+import { bearer, createTestApp, ifMatch, signIn, type TestApp } from './test-app';
 
 interface House {
   id: number;
@@ -93,6 +93,7 @@ describe('season, calendars, fuel prices and the farm budget (e2e)', () => {
       expect(demo).toEqual({
         houseId: houses.B.id,
         periods: [{ startMonthDay: '02-15', endMonthDay: '05-31', mode: 'heated', label: 'Spring bedding plants' }],
+        version: 1,
       });
       expect(
         (await t.http.get(`/api/houses/${houses.C.id}/calendar`).set(bearer(grower)).expect(200)).body.periods,
@@ -101,14 +102,26 @@ describe('season, calendars, fuel prices and the farm budget (e2e)', () => {
       const periods = [
         { startMonthDay: '11-15', endMonthDay: '03-31', mode: 'heated', nightHeatingC: 12, label: 'Winter crop' },
       ];
+      const loaded = (await t.http.get(`/api/houses/${houses.C.id}/calendar`).set(bearer(grower)).expect(200)).body;
       const put = (
-        await t.http.put(`/api/houses/${houses.C.id}/calendar`).set(bearer(grower)).send({ periods }).expect(200)
+        await t.http
+          .put(`/api/houses/${houses.C.id}/calendar`)
+          .set(bearer(grower))
+          .set(ifMatch(loaded.version))
+          .send({ periods })
+          .expect(200)
       ).body;
       expect(put.periods).toEqual(periods);
+      expect(put.version).toBe(loaded.version + 1);
       expect(
         (await t.http.get(`/api/houses/${houses.C.id}/calendar`).set(bearer(grower)).expect(200)).body.periods,
       ).toEqual(periods);
-      await t.http.put(`/api/houses/${houses.C.id}/calendar`).set(bearer(grower)).send({ periods: [] }).expect(200);
+      await t.http
+        .put(`/api/houses/${houses.C.id}/calendar`)
+        .set(bearer(grower))
+        .set(ifMatch(put.version))
+        .send({ periods: [] })
+        .expect(200);
     });
 
     it('refuses an impossible date with 422 naming the period', async () => {
@@ -298,7 +311,12 @@ describe('season, calendars, fuel prices and the farm budget (e2e)', () => {
 
       const demoClimate = (await t.http.get(`/api/farms/${farmId}/climate`).set(bearer(owner)).expect(200)).body
         .climate;
-      await t.http.put(`/api/farms/${farm.id}/climate`).set(bearer(owner)).send(demoClimate).expect(200);
+      await t.http
+        .put(`/api/farms/${farm.id}/climate`)
+        .set(bearer(owner))
+        .set(ifMatch(0))
+        .send(demoClimate)
+        .expect(200);
       const noPrice = await post(SEASON).expect(422);
       expect(noPrice.body.field).toBe('pricePerUnit');
       expect(noPrice.body.message).toMatch(/fuel prices/);

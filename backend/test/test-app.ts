@@ -132,3 +132,6 @@ export async function signIn(t: TestApp, email: string, password = 'thermbay-dem
 }
 
 export const bearer = (token: string) => ({ Authorization: `Bearer ${token}` });
+
+/** The If-Match header naming the version a write is based on. */
+export const ifMatch = (version: number) => ({ 'If-Match': String(version) });

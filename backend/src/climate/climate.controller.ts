@@ -1,6 +1,7 @@
-import { Body, Controller, Get, Param, ParseIntPipe, Put } from '@nestjs/common';
+import { Body, Controller, Get, Headers, Param, ParseIntPipe, Put } from '@nestjs/common';
 import { ApiBearerAuth, ApiOkResponse, ApiTags, ApiUnprocessableEntityResponse } from '@nestjs/swagger';
 import { CurrentUser, type AuthenticatedUser } from '../common/decorators/current-user.decorator';
+import { ApiVersionedWrite, IF_MATCH_HEADER } from '../common/versioning';
 import { ClimateService } from './climate.service';
 import { FarmClimateDto, SiteClimateDto } from './dto/climate.dto';
 
@@ -18,6 +19,7 @@ export class ClimateController {
 
   @Put()
   @ApiOkResponse({ type: FarmClimateDto })
+  @ApiVersionedWrite('climate')
   @ApiUnprocessableEntityResponse({
     description: 'physically impossible climate (e.g. minimum above maximum), field named',
   })
@@ -25,7 +27,8 @@ export class ClimateController {
     @CurrentUser() me: AuthenticatedUser,
     @Param('farmId', ParseIntPipe) farmId: number,
     @Body() body: SiteClimateDto,
+    @Headers(IF_MATCH_HEADER) ifMatch?: string,
   ): Promise<FarmClimateDto> {
-    return this.climate.put(me, farmId, body);
+    return this.climate.put(me, farmId, body, ifMatch);
   }
 }

@@ -1,7 +1,15 @@
-import { Body, Controller, Delete, Get, HttpCode, Param, ParseIntPipe, Patch, Post } from '@nestjs/common';
-import { ApiBearerAuth, ApiCreatedResponse, ApiNoContentResponse, ApiOkResponse, ApiTags } from '@nestjs/swagger';
+import { Body, Controller, Delete, Get, Headers, HttpCode, Param, ParseIntPipe, Patch, Post } from '@nestjs/common';
+import {
+  ApiBearerAuth,
+  ApiConflictResponse,
+  ApiCreatedResponse,
+  ApiNoContentResponse,
+  ApiOkResponse,
+  ApiTags,
+} from '@nestjs/swagger';
 import { CurrentUser, type AuthenticatedUser } from '../common/decorators/current-user.decorator';
 import { ROLE_PERMISSIONS } from '../common/permissions';
+import { ApiVersionedWrite, IF_MATCH_HEADER } from '../common/versioning';
 import {
   AddMemberDto,
   CreateFarmDto,
@@ -52,12 +60,14 @@ export class FarmsController {
 
   @Patch('farms/:farmId')
   @ApiOkResponse({ type: FarmDto })
+  @ApiVersionedWrite('farm')
   update(
     @CurrentUser() me: AuthenticatedUser,
     @Param('farmId', ParseIntPipe) farmId: number,
     @Body() body: UpdateFarmDto,
+    @Headers(IF_MATCH_HEADER) ifMatch?: string,
   ): Promise<FarmDto> {
-    return this.farms.update(me, farmId, body);
+    return this.farms.update(me, farmId, body, ifMatch);
   }
 
   @Delete('farms/:farmId')
@@ -85,6 +95,7 @@ export class FarmsController {
 
   @Patch('farms/:farmId/members/:userId')
   @ApiOkResponse({ type: MemberDto })
+  @ApiConflictResponse({ description: 'the member is the farm’s last owner' })
   updateMember(
     @CurrentUser() me: AuthenticatedUser,
     @Param('farmId', ParseIntPipe) farmId: number,
@@ -97,6 +108,7 @@ export class FarmsController {
   @Delete('farms/:farmId/members/:userId')
   @HttpCode(204)
   @ApiNoContentResponse()
+  @ApiConflictResponse({ description: 'the member is the farm’s last owner' })
   async removeMember(
     @CurrentUser() me: AuthenticatedUser,
     @Param('farmId', ParseIntPipe) farmId: number,

@@ -1,8 +1,10 @@
-import { BadRequestException, Injectable, NotFoundException } from '@nestjs/common';
+import { BadRequestException, ConflictException, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectConnection, InjectModel } from '@nestjs/sequelize';
+import type { Transaction } from 'sequelize';
 import { Sequelize } from 'sequelize-typescript';
 import type { AuthenticatedUser } from '../common/decorators/current-user.decorator';
 import { ROLE_PERMISSIONS } from '../common/permissions';
+import { assertVersion, changesNothing, expectedVersion } from '../common/versioning';
 import { House } from '../houses/models/house.model';
 import { User } from '../users/models/user.model';
 import { UsersService } from '../users/users.service';
@@ -50,11 +52,17 @@ export class FarmsService {
     });
   }
 
-  async update(user: AuthenticatedUser, farmId: number, body: UpdateFarmDto): Promise<FarmDto> {
+  async update(user: AuthenticatedUser, farmId: number, body: UpdateFarmDto, ifMatch?: string): Promise<FarmDto> {
     const membership = await this.access.require(user, farmId, 'farm:update');
-    const farm = await this.load(farmId);
-    await farm.update(body);
-    return this.toDto(farm, membership);
+    const expected = expectedVersion(ifMatch);
+    return this.sequelize.transaction(async (transaction) => {
+      const farm = await this.load(farmId, transaction);
+      const current = await this.toDto(farm, membership, undefined, transaction);
+      if (changesNothing(current as unknown as Record<string, unknown>, { ...body })) return current;
+      assertVersion(farm.version, expected, () => current);
+      await farm.update({ ...body, version: farm.version + 1 }, { transaction });
+      return this.toDto(farm, membership, current.houseCount);
+    });
   }
 
   async remove(user: AuthenticatedUser, farmId: number): Promise<void> {
@@ -89,34 +97,55 @@ export class FarmsService {
     body: UpdateMemberDto,
   ): Promise<MemberDto> {
     await this.access.require(user, farmId, 'members:manage');
-    const membership = await this.memberships.findOne({ where: { farmId, userId }, include: [User] });
-    if (!membership) throw new NotFoundException('No such member');
-    if (membership.role === 'owner' && body.role !== 'owner') await this.keepAnOwner(farmId);
-    await membership.update({ role: body.role });
-    return { userId, email: membership.user.email, name: membership.user.name, role: membership.role };
+    return this.sequelize.transaction(async (transaction) => {
+      await this.load(farmId, transaction);
+      const membership = await this.memberships.findOne({ where: { farmId, userId }, include: [User], transaction });
+      if (!membership) throw new NotFoundException('No such member');
+      if (membership.role === 'owner' && body.role !== 'owner') await this.keepAnOwner(farmId, transaction);
+      await membership.update({ role: body.role }, { transaction });
+      return { userId, email: membership.user.email, name: membership.user.name, role: membership.role };
+    });
   }
 
   async removeMember(user: AuthenticatedUser, farmId: number, userId: number): Promise<void> {
     await this.access.require(user, farmId, 'members:manage');
-    const membership = await this.memberships.findOne({ where: { farmId, userId } });
-    if (!membership) throw new NotFoundException('No such member');
-    if (membership.role === 'owner') await this.keepAnOwner(farmId);
-    await membership.destroy();
+    await this.sequelize.transaction(async (transaction) => {
+      await this.load(farmId, transaction);
+      const membership = await this.memberships.findOne({ where: { farmId, userId }, transaction });
+      if (!membership) throw new NotFoundException('No such member');
+      if (membership.role === 'owner') await this.keepAnOwner(farmId, transaction);
+      await membership.destroy({ transaction });
+    });
   }
 
-  /** A farm must always keep at least one owner, or nobody could manage it. */
-  private async keepAnOwner(farmId: number): Promise<void> {
-    const owners = await this.memberships.count({ where: { farmId, role: 'owner' } });
-    if (owners <= 1) throw new BadRequestException('A farm needs at least one owner');
+  /**
+   * A farm must always keep at least one owner, or nobody could manage it. Called inside the
+   * transaction that changes the membership, after the farm row is locked (PostgreSQL) or with the
+   * one writer held (SQLite), so two owners demoting each other at once cannot both succeed.
+   */
+  private async keepAnOwner(farmId: number, transaction: Transaction): Promise<void> {
+    const owners = await this.memberships.count({ where: { farmId, role: 'owner' }, transaction });
+    if (owners <= 1) {
+      throw new ConflictException('A farm needs at least one owner; make someone else an owner first');
+    }
   }
 
-  private async load(farmId: number): Promise<Farm> {
-    const farm = await this.farms.findByPk(farmId);
+  /** The farm row; inside a transaction it is locked for the rest of it (PostgreSQL). */
+  private async load(farmId: number, transaction?: Transaction): Promise<Farm> {
+    const farm = await this.farms.findByPk(
+      farmId,
+      transaction ? { transaction, lock: transaction.LOCK.UPDATE } : undefined,
+    );
     if (!farm) throw new NotFoundException('No such farm');
     return farm;
   }
 
-  private async toDto(farm: Farm, membership: Membership, houseCount?: number): Promise<FarmDto> {
+  private async toDto(
+    farm: Farm,
+    membership: Membership,
+    houseCount?: number,
+    transaction?: Transaction,
+  ): Promise<FarmDto> {
     return {
       id: farm.id,
       name: farm.name,
@@ -126,7 +155,8 @@ export class FarmsService {
       timeZone: farm.timeZone,
       myRole: membership.role,
       permissions: [...ROLE_PERMISSIONS[membership.role]],
-      houseCount: houseCount ?? (await this.houses.count({ where: { farmId: farm.id } })),
+      houseCount: houseCount ?? (await this.houses.count({ where: { farmId: farm.id }, transaction })),
+      version: farm.version,
       createdAt: farm.createdAt.toISOString(),
       updatedAt: farm.updatedAt.toISOString(),
     };

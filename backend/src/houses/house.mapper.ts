@@ -34,6 +34,7 @@ export function houseToDto(house: House): HouseDto {
     coveringUOverridesWPerM2K: house.coveringUOverridesWPerM2K ?? {},
     airChangesPerHourOverride: house.airChangesPerHourOverride ?? null,
     curtainId: house.curtainId ?? null,
+    version: house.version,
     createdAt: house.createdAt.toISOString(),
     updatedAt: house.updatedAt.toISOString(),
   };

@@ -1,4 +1,4 @@
-import { Body, Controller, Delete, Get, HttpCode, Param, ParseIntPipe, Patch, Post } from '@nestjs/common';
+import { Body, Controller, Delete, Get, Headers, HttpCode, Param, ParseIntPipe, Patch, Post } from '@nestjs/common';
 import {
   ApiBearerAuth,
   ApiCreatedResponse,
@@ -8,6 +8,7 @@ import {
   ApiUnprocessableEntityResponse,
 } from '@nestjs/swagger';
 import { CurrentUser, type AuthenticatedUser } from '../common/decorators/current-user.decorator';
+import { ApiVersionedWrite, IF_MATCH_HEADER } from '../common/versioning';
 import { CreateHouseDto, HouseDto, UpdateHouseDto } from './dto/house.dto';
 import { HousesService } from './houses.service';
 
@@ -44,12 +45,17 @@ export class HousesController {
 
   @Patch('houses/:houseId')
   @ApiOkResponse({ type: HouseDto })
+  @ApiVersionedWrite('house')
+  @ApiUnprocessableEntityResponse({
+    description: 'the house as it would be after the change is one the engine cannot compute with',
+  })
   update(
     @CurrentUser() me: AuthenticatedUser,
     @Param('houseId', ParseIntPipe) houseId: number,
     @Body() body: UpdateHouseDto,
+    @Headers(IF_MATCH_HEADER) ifMatch?: string,
   ): Promise<HouseDto> {
-    return this.houses.update(me, houseId, body);
+    return this.houses.update(me, houseId, body, ifMatch);
   }
 
   @Delete('houses/:houseId')

@@ -1,7 +1,9 @@
 import { Injectable, NotFoundException } from '@nestjs/common';
-import { InjectModel } from '@nestjs/sequelize';
+import { InjectConnection, InjectModel } from '@nestjs/sequelize';
+import { Sequelize } from 'sequelize-typescript';
 import type { AuthenticatedUser } from '../common/decorators/current-user.decorator';
 import type { Permission } from '../common/permissions';
+import { assertVersion, changesNothing, expectedVersion } from '../common/versioning';
 import { EngineInputError } from '@thermbay/engine/errors';
 import { validateHouseDimensions } from '@thermbay/engine/geometry/house-geometry';
 import { FarmAccessService } from '../farms/farm-access.service';
@@ -14,6 +16,7 @@ import { House } from './models/house.model';
 export class HousesService {
   constructor(
     @InjectModel(House) private readonly houses: typeof House,
+    @InjectConnection() private readonly sequelize: Sequelize,
     private readonly access: FarmAccessService,
     private readonly reference: ReferenceDataService,
   ) {}
@@ -42,12 +45,24 @@ export class HousesService {
     return houseToDto(await this.loadFor(user, houseId, 'house:read'));
   }
 
-  async update(user: AuthenticatedUser, houseId: number, body: UpdateHouseDto): Promise<HouseDto> {
-    const house = await this.loadFor(user, houseId, 'house:write');
-    const merged = { ...houseToDto(house), ...body };
-    this.assertComputable(merged);
-    await house.update(body);
-    return houseToDto(house);
+  /**
+   * Applies the changes to the stored row as it is inside the transaction (locked on PostgreSQL,
+   * the one writer on SQLite), so two PATCHes can never combine into a house validation forbids.
+   */
+  async update(user: AuthenticatedUser, houseId: number, body: UpdateHouseDto, ifMatch?: string): Promise<HouseDto> {
+    await this.loadFor(user, houseId, 'house:write');
+    const expected = expectedVersion(ifMatch);
+    return this.sequelize.transaction(async (transaction) => {
+      const house = await this.houses.findByPk(houseId, { transaction, lock: transaction.LOCK.UPDATE });
+      if (!house) throw new NotFoundException('No such house');
+      const current = houseToDto(house);
+      if (changesNothing(current as unknown as Record<string, unknown>, { ...body })) return current;
+      assertVersion(house.version, expected, () => current);
+      const merged = { ...current, ...body };
+      this.assertComputable(merged);
+      await house.update({ ...body, version: house.version + 1 }, { transaction });
+      return houseToDto(house);
+    });
   }
 
   async remove(user: AuthenticatedUser, houseId: number): Promise<void> {

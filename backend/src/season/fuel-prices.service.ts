@@ -1,10 +1,13 @@
-import { Injectable } from '@nestjs/common';
+import { Injectable, NotFoundException } from '@nestjs/common';
 import { InjectConnection, InjectModel } from '@nestjs/sequelize';
+import type { Transaction } from 'sequelize';
 import { Sequelize } from 'sequelize-typescript';
 import type { AuthenticatedUser } from '../common/decorators/current-user.decorator';
 import { EngineInputError } from '@thermbay/engine/errors';
 import { fuelRow, priceUnitLabel } from '@thermbay/engine/season/fuel';
+import { assertVersion, changesNothing, expectedVersion } from '../common/versioning';
 import { FarmAccessService } from '../farms/farm-access.service';
+import { Farm } from '../farms/models/farm.model';
 import { ReferenceDataService } from '../reference-data/reference-data.service';
 import type { FarmFuelPricesDto, FuelPriceDto, PutFuelPricesDto } from './dto/fuel-price.dto';
 import { FarmFuelPrice } from './models/farm-fuel-price.model';
@@ -27,7 +30,13 @@ export class FuelPricesService {
     return this.list(farmId);
   }
 
-  async put(user: AuthenticatedUser, farmId: number, body: PutFuelPricesDto): Promise<FarmFuelPricesDto> {
+  /** Replaces the set; If-Match names the set's version as loaded (the farm's fuelPricesVersion). */
+  async put(
+    user: AuthenticatedUser,
+    farmId: number,
+    body: PutFuelPricesDto,
+    ifMatch?: string,
+  ): Promise<FarmFuelPricesDto> {
     await this.access.require(user, farmId, 'house:write');
     const seen = new Set<string>();
     body.prices.forEach((price, index) => {
@@ -39,7 +48,22 @@ export class FuelPricesService {
         );
       seen.add(price.fuelId);
     });
-    await this.sequelize.transaction(async (transaction) => {
+    // Body errors first (they do not depend on what is stored), then the version.
+    const expected = expectedVersion(ifMatch);
+    return this.sequelize.transaction(async (transaction) => {
+      const farm = await Farm.findByPk(farmId, { transaction, lock: transaction.LOCK.UPDATE });
+      if (!farm) throw new NotFoundException('No such farm');
+      const current = await this.list(farmId, transaction, farm.fuelPricesVersion);
+      const wanted = body.prices.map((p) => ({ ...p, note: p.note ?? null }));
+      const stored = current.prices.map(({ fuelId, pricePerUnit, priceUnit, note }) => ({
+        fuelId,
+        pricePerUnit,
+        priceUnit,
+        note,
+      }));
+      const byFuel = (a: { fuelId: string }, b: { fuelId: string }) => a.fuelId.localeCompare(b.fuelId);
+      if (changesNothing({ prices: stored }, { prices: [...wanted].sort(byFuel) })) return current;
+      assertVersion(farm.fuelPricesVersion, expected, () => current);
       await this.prices.destroy({ where: { farmId }, transaction });
       for (const price of body.prices) {
         await this.prices.create(
@@ -53,12 +77,16 @@ export class FuelPricesService {
           { transaction },
         );
       }
+      // silent: the farm's own updatedAt and version stay as they are.
+      await farm.update({ fuelPricesVersion: farm.fuelPricesVersion + 1 }, { transaction, silent: true });
+      return this.list(farmId, transaction, farm.fuelPricesVersion);
     });
-    return this.list(farmId);
   }
 
-  private async list(farmId: number): Promise<FarmFuelPricesDto> {
-    const rows = await this.prices.findAll({ where: { farmId }, order: [['fuelId', 'ASC']] });
+  private async list(farmId: number, transaction?: Transaction, version?: number): Promise<FarmFuelPricesDto> {
+    const rows = await this.prices.findAll({ where: { farmId }, order: [['fuelId', 'ASC']], transaction });
+    const fuelPricesVersion =
+      version ?? (await Farm.findByPk(farmId, { attributes: ['fuelPricesVersion'] }))?.fuelPricesVersion ?? 0;
     const prices: FuelPriceDto[] = rows.map((row) => {
       const fuel = fuelRow(this.reference.data, row.fuelId);
       return {
@@ -70,6 +98,6 @@ export class FuelPricesService {
         note: row.note ?? null,
       };
     });
-    return { farmId, prices };
+    return { farmId, prices, version: fuelPricesVersion };
   }
 }

@@ -1,4 +1,17 @@
-import { Body, Controller, Get, Header, HttpCode, Param, ParseIntPipe, Post, Put, Query, Res } from '@nestjs/common';
+import {
+  Body,
+  Controller,
+  Get,
+  Header,
+  Headers,
+  HttpCode,
+  Param,
+  ParseIntPipe,
+  Post,
+  Put,
+  Query,
+  Res,
+} from '@nestjs/common';
 import {
   ApiBadRequestResponse,
   ApiBearerAuth,
@@ -13,6 +26,7 @@ import {
 } from '@nestjs/swagger';
 import type { Response } from 'express';
 import { CurrentUser, type AuthenticatedUser } from '../common/decorators/current-user.decorator';
+import { ApiVersionedWrite, IF_MATCH_HEADER } from '../common/versioning';
 import { budgetCsv } from './budget-csv';
 import { CalendarService } from './calendar.service';
 import { ProductionCalendarDto, PutProductionCalendarDto } from './dto/calendar.dto';
@@ -117,6 +131,7 @@ export class SeasonController {
   @Put('houses/:houseId/calendar')
   @ApiOperation({ summary: "Replace the house's production calendar (house:write)" })
   @ApiOkResponse({ type: ProductionCalendarDto })
+  @ApiVersionedWrite('calendar')
   @ApiBadRequestResponse({ description: 'body fails validation; details per field' })
   @ApiForbiddenResponse({ description: 'role lacks house:write' })
   @ApiNotFoundResponse({ description: 'no such house, or not a member of its farm' })
@@ -127,8 +142,9 @@ export class SeasonController {
     @CurrentUser() me: AuthenticatedUser,
     @Param('houseId', ParseIntPipe) houseId: number,
     @Body() body: PutProductionCalendarDto,
+    @Headers(IF_MATCH_HEADER) ifMatch?: string,
   ): Promise<ProductionCalendarDto> {
-    return this.calendars.put(me, houseId, body);
+    return this.calendars.put(me, houseId, body, ifMatch);
   }
 
   @Get('farms/:farmId/fuel-prices')
@@ -147,6 +163,7 @@ export class SeasonController {
     summary: "Replace the farm's fuel prices (house:write: owners and growers, who hold the fuel bills)",
   })
   @ApiOkResponse({ type: FarmFuelPricesDto })
+  @ApiVersionedWrite('fuel prices')
   @ApiBadRequestResponse({ description: 'body fails validation; details per field' })
   @ApiForbiddenResponse({ description: 'role lacks house:write' })
   @ApiNotFoundResponse({ description: 'no such farm, or not a member' })
@@ -155,8 +172,9 @@ export class SeasonController {
     @CurrentUser() me: AuthenticatedUser,
     @Param('farmId', ParseIntPipe) farmId: number,
     @Body() body: PutFuelPricesDto,
+    @Headers(IF_MATCH_HEADER) ifMatch?: string,
   ): Promise<FarmFuelPricesDto> {
-    return this.fuelPrices.put(me, farmId, body);
+    return this.fuelPrices.put(me, farmId, body, ifMatch);
   }
 
   @Post('farms/:farmId/season-budget')

@@ -1,8 +1,15 @@
 import { Body, Controller, Delete, Get, HttpCode, Param, ParseIntPipe, Patch } from '@nestjs/common';
-import { ApiBearerAuth, ApiOkResponse, ApiTags } from '@nestjs/swagger';
+import {
+  ApiBearerAuth,
+  ApiConflictResponse,
+  ApiForbiddenResponse,
+  ApiNoContentResponse,
+  ApiOkResponse,
+  ApiTags,
+} from '@nestjs/swagger';
 import { CurrentUser, type AuthenticatedUser } from '../common/decorators/current-user.decorator';
 import { SiteRoles } from '../common/decorators/site-roles.decorator';
-import { AdminUpdateUserDto, UpdateMeDto, UserDto } from './dto/user.dto';
+import { AdminUpdateUserDto, DeleteMeDto, UpdateMeDto, UserDto } from './dto/user.dto';
 import { UsersService } from './users.service';
 
 @ApiTags('users')
@@ -15,6 +22,15 @@ export class UsersController {
   @ApiOkResponse({ type: UserDto })
   updateMe(@CurrentUser() me: AuthenticatedUser, @Body() body: UpdateMeDto): Promise<UserDto> {
     return this.users.updateMe(me.id, body);
+  }
+
+  @Delete('me')
+  @HttpCode(204)
+  @ApiNoContentResponse({ description: 'the account and its memberships are gone' })
+  @ApiForbiddenResponse({ description: 'the password is not right' })
+  @ApiConflictResponse({ description: 'the account is the only owner of a farm; the farms are named in details' })
+  async removeMe(@CurrentUser() me: AuthenticatedUser, @Body() body: DeleteMeDto): Promise<void> {
+    await this.users.removeMe(me.id, body.password);
   }
 
   @Get()
@@ -38,6 +54,8 @@ export class UsersController {
   @Delete(':id')
   @HttpCode(204)
   @SiteRoles('admin')
+  @ApiNoContentResponse()
+  @ApiConflictResponse({ description: 'the account is the only owner of a farm; the farms are named in details' })
   async remove(@CurrentUser() me: AuthenticatedUser, @Param('id', ParseIntPipe) id: number): Promise<void> {
     await this.users.remove(me.id, id);
   }

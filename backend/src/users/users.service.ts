@@ -1,5 +1,16 @@
-import { BadRequestException, Injectable, NotFoundException } from '@nestjs/common';
-import { InjectModel } from '@nestjs/sequelize';
+import {
+  BadRequestException,
+  ConflictException,
+  ForbiddenException,
+  Injectable,
+  NotFoundException,
+} from '@nestjs/common';
+import { InjectConnection, InjectModel } from '@nestjs/sequelize';
+import * as bcrypt from 'bcryptjs';
+import type { Transaction } from 'sequelize';
+import { Sequelize } from 'sequelize-typescript';
+import { Farm } from '../farms/models/farm.model';
+import { Membership } from '../farms/models/membership.model';
 import type { AdminUpdateUserDto, UpdateMeDto, UserDto } from './dto/user.dto';
 import { User } from './models/user.model';
 
@@ -13,7 +24,10 @@ export function normaliseEmail(email: string): string {
 
 @Injectable()
 export class UsersService {
-  constructor(@InjectModel(User) private readonly users: typeof User) {}
+  constructor(
+    @InjectModel(User) private readonly users: typeof User,
+    @InjectConnection() private readonly sequelize: Sequelize,
+  ) {}
 
   findByEmail(email: string): Promise<User | null> {
     return this.users.findOne({ where: { email: normaliseEmail(email) } });
@@ -46,7 +60,54 @@ export class UsersService {
 
   async remove(actorId: number, id: number): Promise<void> {
     if (actorId === id) throw new BadRequestException('You cannot delete your own account here');
+    await this.deleteAccount(id, 'That user');
+  }
+
+  /** A user closing their own account, confirmed with their password. */
+  async removeMe(id: number, password: string): Promise<void> {
     const user = await this.findById(id);
-    await user.destroy();
+    if (!(await bcrypt.compare(password, user.passwordHash)))
+      throw new ForbiddenException('That password is not right');
+    await this.deleteAccount(id, 'You');
+  }
+
+  /**
+   * Deletes an account and its memberships, unless that would leave a farm without an owner:
+   * then 409 naming every such farm. Checked inside the transaction, with the farm rows locked
+   * (PostgreSQL) or the one writer held (SQLite), so a parallel demotion cannot slip between.
+   */
+  private async deleteAccount(id: number, who: 'That user' | 'You'): Promise<void> {
+    await this.sequelize.transaction(async (transaction) => {
+      const user = await this.users.findByPk(id, { transaction, lock: transaction.LOCK.UPDATE });
+      if (!user) throw new NotFoundException('No such user');
+      const soleOwned = await this.farmsOnlyOwnedBy(id, transaction);
+      if (soleOwned.length > 0) {
+        const names = soleOwned.map((farm) => `“${farm.name}”`).join(', ');
+        const verb = who === 'You' ? 'are' : 'is';
+        throw new ConflictException({
+          message:
+            `${who} ${verb} the only owner of ${names}; make someone else an owner ` +
+            `(or delete ${soleOwned.length === 1 ? 'that farm' : 'those farms'}) first`,
+          details: soleOwned.map((farm) => ({ field: `farms.${farm.id}`, message: farm.name })),
+        });
+      }
+      await Membership.destroy({ where: { userId: id }, transaction });
+      await user.destroy({ transaction });
+    });
+  }
+
+  private async farmsOnlyOwnedBy(userId: number, transaction: Transaction): Promise<Farm[]> {
+    const owned = await Membership.findAll({
+      where: { userId, role: 'owner' },
+      order: [['farmId', 'ASC']],
+      transaction,
+    });
+    const sole: Farm[] = [];
+    for (const { farmId } of owned) {
+      const farm = await Farm.findByPk(farmId, { transaction, lock: transaction.LOCK.UPDATE });
+      const owners = await Membership.count({ where: { farmId, role: 'owner' }, transaction });
+      if (farm && owners <= 1) sole.push(farm);
+    }
+    return sole;
   }
 }

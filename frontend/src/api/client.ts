@@ -17,10 +17,28 @@ export class ApiError extends Error {
     public readonly field?: string,
     /** per-field validation messages (400) */
     public readonly details: ApiErrorDetail[] = [],
+    /** 409 on a stale write: what is stored now, in the shape its GET answers */
+    public readonly current?: unknown,
   ) {
     super(message);
     this.name = 'ApiError';
   }
+}
+
+/** Something stored now, as a versioned resource's GET answers it. */
+export interface Versioned {
+  version: number;
+}
+
+/** A 409 answered to a save based on an old version: someone else saved first. */
+export function isStaleWrite(error: unknown): error is ApiError & { current: Versioned } {
+  return (
+    error instanceof ApiError &&
+    error.status === 409 &&
+    typeof error.current === 'object' &&
+    error.current !== null &&
+    typeof (error.current as Partial<Versioned>).version === 'number'
+  );
 }
 
 const TOKEN_STORAGE_KEY = 'thermbay.accessToken';
@@ -86,11 +104,13 @@ export function parseApiError(status: number, statusText: string, body: unknown)
     message = statusText || `Request failed (${status})`;
   }
   const field = typeof body.field === 'string' ? body.field : undefined;
-  return new ApiError(status, message, field, details);
+  return new ApiError(status, message, field, details, body.current);
 }
 
 export interface RequestOptions {
   signal?: AbortSignal;
+  /** the version the write is based on, sent as If-Match (houses, farms, climates, calendars, fuel prices) */
+  ifMatch?: number;
 }
 
 async function readBody(response: Response): Promise<unknown> {
@@ -117,6 +137,7 @@ export async function apiRequest<T>(
   const token = tokenStorage.get();
   if (token) headers.Authorization = `Bearer ${token}`;
   if (body !== undefined) headers['Content-Type'] = 'application/json';
+  if (options.ifMatch !== undefined) headers['If-Match'] = String(options.ifMatch);
 
   let response: Response;
   try {

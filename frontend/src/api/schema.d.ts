@@ -46,7 +46,7 @@ export interface paths {
         get?: never;
         put?: never;
         post?: never;
-        delete?: never;
+        delete: operations["UsersController_removeMe"];
         options?: never;
         head?: never;
         patch: operations["UsersController_updateMe"];
@@ -637,6 +637,10 @@ export interface components {
              */
             unitSystem: "si" | "us";
         };
+        DeleteMeDto: {
+            /** @description your current password, to confirm */
+            password: string;
+        };
         AdminUpdateUserDto: {
             name?: string;
             /** @enum {string} */
@@ -687,6 +691,8 @@ export interface components {
             myRole: "owner" | "grower" | "adviser" | "viewer";
             permissions: ("farm:read" | "farm:update" | "farm:delete" | "members:manage" | "house:read" | "house:write" | "estimate:run" | "report:write")[];
             houseCount: number;
+            /** @description raised by one on every save; send it back in If-Match to update */
+            version: number;
             createdAt: string;
             updatedAt: string;
         };
@@ -801,6 +807,8 @@ export interface components {
             notes?: string | null;
             id: number;
             farmId: number;
+            /** @description raised by one on every save; send it back in If-Match to update */
+            version: number;
             createdAt: string;
             updatedAt: string;
         };
@@ -889,6 +897,8 @@ export interface components {
             farmId: number;
             /** @description null until someone enters the climate */
             climate: components["schemas"]["SiteClimateDto"] | null;
+            /** @description 0 until the first save, then raised by one on every save; send it in If-Match */
+            version: number;
         };
         HouseSpecDto: {
             /** @enum {string} */
@@ -1836,6 +1846,8 @@ export interface components {
             /** @description empty list = heated all season at the house setpoints; otherwise days no period covers are unheated, and where periods overlap the later one wins */
             periods: components["schemas"]["ProductionPeriodDto"][];
             houseId: number;
+            /** @description 0 until the first save, then raised by one on every save; send it in If-Match */
+            version: number;
         };
         PutProductionCalendarDto: {
             /** @description empty list = heated all season at the house setpoints; otherwise days no period covers are unheated, and where periods overlap the later one wins */
@@ -1864,6 +1876,8 @@ export interface components {
         FarmFuelPricesDto: {
             farmId: number;
             prices: components["schemas"]["FuelPriceDto"][];
+            /** @description version of the set, raised by one on every save; send it in If-Match */
+            version: number;
         };
         FuelPriceInputDto: {
             /** @description reference-data fuels id (one price per fuel) */
@@ -2264,6 +2278,42 @@ export interface operations {
             };
         };
     };
+    UsersController_removeMe: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["DeleteMeDto"];
+            };
+        };
+        responses: {
+            /** @description the account and its memberships are gone */
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description the password is not right */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description the account is the only owner of a farm; the farms are named in details */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
     UsersController_updateMe: {
         parameters: {
             query?: never;
@@ -2318,6 +2368,13 @@ export interface operations {
         requestBody?: never;
         responses: {
             204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description the account is the only owner of a farm; the farms are named in details */
+            409: {
                 headers: {
                     [name: string]: unknown;
                 };
@@ -2569,7 +2626,11 @@ export interface operations {
     FarmsController_update: {
         parameters: {
             query?: never;
-            header?: never;
+            header: {
+                "if-match": string;
+                /** @description the `version` of the farm you loaded (0 if it has never been saved); every save raises it by one */
+                "If-Match": string;
+            };
             path: {
                 farmId: number;
             };
@@ -2588,6 +2649,20 @@ export interface operations {
                 content: {
                     "application/json": components["schemas"]["FarmDto"];
                 };
+            };
+            /** @description someone else saved the farm first; `current` holds what is stored now (the same shape as the answer to GET) */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description If-Match missing */
+            428: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
             };
         };
     };
@@ -2655,6 +2730,13 @@ export interface operations {
                 };
                 content?: never;
             };
+            /** @description the member is the farm’s last owner */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
         };
     };
     FarmsController_updateMember: {
@@ -2680,6 +2762,13 @@ export interface operations {
                 content: {
                     "application/json": components["schemas"]["MemberDto"];
                 };
+            };
+            /** @description the member is the farm’s last owner */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
             };
         };
     };
@@ -2779,7 +2868,11 @@ export interface operations {
     HousesController_update: {
         parameters: {
             query?: never;
-            header?: never;
+            header: {
+                "if-match": string;
+                /** @description the `version` of the house you loaded (0 if it has never been saved); every save raises it by one */
+                "If-Match": string;
+            };
             path: {
                 houseId: number;
             };
@@ -2798,6 +2891,27 @@ export interface operations {
                 content: {
                     "application/json": components["schemas"]["HouseDto"];
                 };
+            };
+            /** @description someone else saved the house first; `current` holds what is stored now (the same shape as the answer to GET) */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description the house as it would be after the change is one the engine cannot compute with */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description If-Match missing */
+            428: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
             };
         };
     };
@@ -2825,7 +2939,11 @@ export interface operations {
     ClimateController_put: {
         parameters: {
             query?: never;
-            header?: never;
+            header: {
+                "if-match": string;
+                /** @description the `version` of the climate you loaded (0 if it has never been saved); every save raises it by one */
+                "If-Match": string;
+            };
             path: {
                 farmId: number;
             };
@@ -2845,8 +2963,22 @@ export interface operations {
                     "application/json": components["schemas"]["FarmClimateDto"];
                 };
             };
+            /** @description someone else saved the climate first; `current` holds what is stored now (the same shape as the answer to GET) */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
             /** @description physically impossible climate (e.g. minimum above maximum), field named */
             422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description If-Match missing */
+            428: {
                 headers: {
                     [name: string]: unknown;
                 };
@@ -3210,7 +3342,11 @@ export interface operations {
     SeasonController_putCalendar: {
         parameters: {
             query?: never;
-            header?: never;
+            header: {
+                "if-match": string;
+                /** @description the `version` of the calendar you loaded (0 if it has never been saved); every save raises it by one */
+                "If-Match": string;
+            };
             path: {
                 houseId: number;
             };
@@ -3251,8 +3387,22 @@ export interface operations {
                 };
                 content?: never;
             };
+            /** @description someone else saved the calendar first; `current` holds what is stored now (the same shape as the answer to GET) */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
             /** @description an impossible date such as 02-30, field named (periods[i].startMonthDay) */
             422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description If-Match missing */
+            428: {
                 headers: {
                     [name: string]: unknown;
                 };
@@ -3291,7 +3441,11 @@ export interface operations {
     SeasonController_putFuelPrices: {
         parameters: {
             query?: never;
-            header?: never;
+            header: {
+                "if-match": string;
+                /** @description the `version` of the fuel prices you loaded (0 if it has never been saved); every save raises it by one */
+                "If-Match": string;
+            };
             path: {
                 farmId: number;
             };
@@ -3332,8 +3486,22 @@ export interface operations {
                 };
                 content?: never;
             };
+            /** @description someone else saved the fuel prices first; `current` holds what is stored now (the same shape as the answer to GET) */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
             /** @description unknown fuel or a fuel listed twice (prices.i.fuelId) */
             422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description If-Match missing */
+            428: {
                 headers: {
                     [name: string]: unknown;
                 };

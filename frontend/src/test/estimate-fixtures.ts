@@ -45,6 +45,7 @@ export const demoHouseB: House = {
     coolingC: 24,
   },
   createdAt: '2026-12-01T22:22:03.217Z',
+  version: 1,
   updatedAt: '2026-12-01T22:22:03.217Z',
 };
 

@@ -63,5 +63,6 @@ export const houseFixture: House = {
   inletAreaM2: 2.4,
   setpoints: { dayHeatingC: 18, nightHeatingC: 15.5, coolingC: 26 },
   createdAt: '2026-11-01T00:00:00.000Z',
+  version: 1,
   updatedAt: '2026-11-01T00:00:00.000Z',
 };

@@ -97,4 +97,6 @@ export class FarmClimateDto {
   @ApiProperty() farmId: number;
   @ApiProperty({ type: SiteClimateDto, nullable: true, description: 'null until someone enters the climate' })
   climate: SiteClimateDto | null;
+  @ApiProperty({ description: '0 until the first save, then raised by one on every save; send it in If-Match' })
+  version: number;
 }

@@ -17,4 +17,8 @@ export class FarmClimate extends Model {
   @Column({ type: DataType.DOUBLE, allowNull: false }) declare summerDailyRangeK: number;
   @Column({ type: DataType.JSON, allowNull: false }) declare monthly: MonthlyClimate[];
   @Column({ type: DataType.TEXT, allowNull: true }) declare sourceNote: string | null;
+
+  /** raised by one on every save; a write names the version it was based on (If-Match) */
+  @Column({ type: DataType.INTEGER, allowNull: false, defaultValue: 1 })
+  declare version: number;
 }

@@ -1,7 +1,9 @@
 import { ArgumentsHost, Catch, ExceptionFilter, HttpException, HttpStatus, Logger } from '@nestjs/common';
 import { ThrottlerException } from '@nestjs/throttler';
 import type { Response } from 'express';
-import { UniqueConstraintError } from 'sequelize';
+import { BaseError as SequelizeError, UniqueConstraintError } from 'sequelize';
+import { DatabaseBusyError } from '../../database/sqlite-writer';
+import { StaleWriteException } from '../versioning';
 import { TemperatureLogError } from '../../temperature-logs/csv/temperature-log-csv';
 import { EngineInputError } from '@thermbay/engine/errors';
 
@@ -17,6 +19,8 @@ export interface ErrorBody {
   message: string;
   field?: string;
   details?: FieldProblem[];
+  /** 409 on a stale write: what is stored now, in the shape the resource's GET answers */
+  current?: unknown;
 }
 
 /** Thrown by the validation pipe with one entry per offending field. */
@@ -36,11 +40,26 @@ const REASONS: Record<number, string> = {
   415: 'Unsupported Media Type',
   422: 'Unprocessable Entity',
   429: 'Too Many Requests',
+  428: 'Precondition Required',
   500: 'Internal Server Error',
   502: 'Bad Gateway',
   503: 'Service Unavailable',
   504: 'Gateway Timeout',
 };
+
+/**
+ * Database errors that mean "busy, try again" rather than "broken": SQLite's lock errors and
+ * PostgreSQL's serialisation failure, deadlock and lock time-out. They answer 503, never 500.
+ */
+const BUSY_CODES = new Set(['SQLITE_BUSY', 'SQLITE_LOCKED', '40001', '40P01', '55P03']);
+
+/** The driver's error code (SQLITE_BUSY, SQLITE_CONSTRAINT, a PostgreSQL SQLSTATE …), if any. */
+export function databaseErrorCode(exception: unknown): string | undefined {
+  if (exception instanceof DatabaseBusyError) return exception.code;
+  if (!(exception instanceof SequelizeError)) return undefined;
+  const parent = (exception as { parent?: { code?: unknown } }).parent;
+  return typeof parent?.code === 'string' ? parent.code : undefined;
+}
 
 @Catch()
 export class AllExceptionsFilter implements ExceptionFilter {
@@ -50,8 +69,11 @@ export class AllExceptionsFilter implements ExceptionFilter {
     const response = host.switchToHttp().getResponse<Response>();
     const body = this.toBody(exception);
     if (body.statusCode >= 500) {
-      this.logger.error(exception instanceof Error ? (exception.stack ?? exception.message) : String(exception));
+      const code = databaseErrorCode(exception);
+      const text = exception instanceof Error ? (exception.stack ?? exception.message) : String(exception);
+      this.logger.error(code ? `[${code}] ${text}` : text);
     }
+    if (body.statusCode === 503) response.setHeader('Retry-After', '1');
     response.status(body.statusCode).json(body);
   }
 
@@ -81,6 +103,12 @@ export class AllExceptionsFilter implements ExceptionFilter {
     if (exception instanceof ThrottlerException) {
       return { statusCode: 429, error: REASONS[429], message: 'Too many attempts; wait a minute and try again' };
     }
+    if (exception instanceof DatabaseBusyError || BUSY_CODES.has(databaseErrorCode(exception) ?? '')) {
+      return { statusCode: 503, error: REASONS[503], message: 'The database is busy; try again in a moment' };
+    }
+    if (exception instanceof StaleWriteException) {
+      return { statusCode: 409, error: REASONS[409], message: exception.message, current: exception.current };
+    }
     if (exception instanceof UniqueConstraintError) {
       return { statusCode: 409, error: REASONS[409], message: 'That already exists' };
     }
@@ -89,13 +117,21 @@ export class AllExceptionsFilter implements ExceptionFilter {
       const raw = exception.getResponse();
       let message = exception.message;
       let field: string | undefined;
+      let details: FieldProblem[] | undefined;
       if (typeof raw === 'object' && raw !== null) {
-        const r = raw as { message?: unknown; field?: unknown };
+        const r = raw as { message?: unknown; field?: unknown; details?: unknown };
         if (Array.isArray(r.message)) message = r.message.join('; ');
         else if (typeof r.message === 'string') message = r.message;
         if (typeof r.field === 'string') field = r.field;
+        if (Array.isArray(r.details)) details = r.details as FieldProblem[];
       }
-      return { statusCode, error: REASONS[statusCode] ?? 'Error', message, ...(field ? { field } : {}) };
+      return {
+        statusCode,
+        error: REASONS[statusCode] ?? 'Error',
+        message,
+        ...(field ? { field } : {}),
+        ...(details ? { details } : {}),
+      };
     }
     return { statusCode: 500, error: REASONS[500], message: 'Something went wrong on the server' };
   }

@@ -1,6 +1,7 @@
 import * as initialSchema from './0001-initial-schema';
 import * as farmClimates from './0002-farm-climates';
 import * as seasonData from './0003-season-data';
+import * as rowVersions from './0004-row-versions';
 import * as loginAttempts from './0005-login-attempts';
 import * as weatherYears from './0010-weather-years';
 
@@ -12,6 +13,7 @@ export const MIGRATIONS = [
   { name: '0001-initial-schema', ...initialSchema },
   { name: '0002-farm-climates', ...farmClimates },
   { name: '0003-season-data', ...seasonData },
+  { name: '0004-row-versions', ...rowVersions },
   { name: '0005-login-attempts', ...loginAttempts },
   { name: '0010-weather-years', ...weatherYears },
 ];

@@ -74,6 +74,7 @@ export class FarmDto {
   @ApiProperty({ enum: FARM_ROLES }) myRole: FarmRole;
   @ApiProperty({ enum: PERMISSIONS, isArray: true }) permissions: Permission[];
   @ApiProperty() houseCount: number;
+  @ApiProperty({ description: 'raised by one on every save; send it back in If-Match to update' }) version: number;
   @ApiProperty() createdAt: string;
   @ApiProperty() updatedAt: string;
 }

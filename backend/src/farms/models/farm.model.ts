@@ -19,6 +19,14 @@ export class Farm extends Model {
   @Column({ type: DataType.STRING, allowNull: false })
   declare timeZone: string;
 
+  /** raised by one on every save; a write names the version it was based on (If-Match) */
+  @Column({ type: DataType.INTEGER, allowNull: false, defaultValue: 1 })
+  declare version: number;
+
+  /** the version of the farm's fuel prices, a set replaced as a whole (If-Match on PUT fuel-prices) */
+  @Column({ type: DataType.INTEGER, allowNull: false, defaultValue: 1 })
+  declare fuelPricesVersion: number;
+
   @HasMany(() => Membership)
   declare memberships: Membership[];
 }

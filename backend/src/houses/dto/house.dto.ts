@@ -200,6 +200,7 @@ export class HouseDto extends CreateHouseDto {
   @ApiProperty({ type: CoveringOverridesDto }) declare coveringUOverridesWPerM2K: CoveringOverridesDto;
   @ApiProperty({ nullable: true, type: Number }) declare airChangesPerHourOverride: number | null;
   @ApiProperty({ nullable: true, type: String }) declare curtainId: string | null;
+  @ApiProperty({ description: 'raised by one on every save; send it back in If-Match to update' }) version: number;
   @ApiProperty() createdAt: string;
   @ApiProperty() updatedAt: string;
 }

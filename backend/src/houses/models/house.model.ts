@@ -66,4 +66,8 @@ export class House extends Model {
 
   @Column({ type: DataType.JSON, allowNull: false })
   declare setpoints: Setpoints;
+
+  /** raised by one on every save; a write names the version it was based on (If-Match) */
+  @Column({ type: DataType.INTEGER, allowNull: false, defaultValue: 1 })
+  declare version: number;
 }

@@ -74,4 +74,6 @@ export class PutProductionCalendarDto {
 
 export class ProductionCalendarDto extends PutProductionCalendarDto {
   @ApiProperty() houseId: number;
+  @ApiProperty({ description: '0 until the first save, then raised by one on every save; send it in If-Match' })
+  version: number;
 }

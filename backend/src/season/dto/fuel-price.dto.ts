@@ -60,4 +60,6 @@ export class FuelPriceDto extends FuelPriceInputDto {
 export class FarmFuelPricesDto {
   @ApiProperty() farmId: number;
   @ApiProperty({ type: FuelPriceDto, isArray: true }) prices: FuelPriceDto[];
+  @ApiProperty({ description: 'version of the set, raised by one on every save; send it in If-Match' })
+  version: number;
 }

@@ -18,4 +18,8 @@ export class HouseCalendar extends Model {
   declare house: House;
 
   @Column({ type: DataType.JSON, allowNull: false }) declare periods: StoredProductionPeriod[];
+
+  /** raised by one on every save; a write names the version it was based on (If-Match) */
+  @Column({ type: DataType.INTEGER, allowNull: false, defaultValue: 1 })
+  declare version: number;
 }

@@ -20,3 +20,7 @@ export class AdminUpdateUserDto {
   @ApiPropertyOptional() @IsOptional() @IsString() @Length(1, 120) name?: string;
   @ApiPropertyOptional({ enum: SITE_ROLES }) @IsOptional() @IsIn(SITE_ROLES) siteRole?: SiteRole;
 }
+
+export class DeleteMeDto {
+  @ApiProperty({ description: 'your current password, to confirm' }) @IsString() @Length(1, 200) password: string;
+}

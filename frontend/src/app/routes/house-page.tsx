@@ -4,6 +4,7 @@ import { useCallback, useMemo, useState } from 'react';
 import { Link as RouterLink, useNavigate, useParams } from 'react-router-dom';
 import { ConfirmDialog } from '../../components/confirm-dialog';
 import { ErrorAlert, LoadingState } from '../../components/feedback';
+import { useSaveConflict } from '../../components/save-conflict';
 import { paths } from '../../config/paths';
 import type { HouseInput, HouseSpec } from '../../api/types';
 import { CoolingPanel } from '../../features/cooling-estimate';
@@ -13,6 +14,7 @@ import {
   HouseForm,
   houseDetailQueryOptions,
   houseInputOf,
+  houseKeys,
   useDeleteHouse,
   useUpdateHouse,
 } from '../../features/houses';
@@ -39,6 +41,7 @@ export default function HousePage() {
   const farm = useQuery({ ...farmDetailQueryOptions(house.data?.farmId ?? 0), enabled: house.isSuccess });
   const referenceData = useQuery(referenceDataQueryOptions());
   const updateHouse = useUpdateHouse(houseId);
+  const saveConflict = useSaveConflict({ what: 'house', mutation: updateHouse, queryKey: houseKeys.detail(houseId) });
   const deleteHouse = useDeleteHouse();
   const navigate = useNavigate();
   const [confirmingDelete, setConfirmingDelete] = useState(false);
@@ -92,7 +95,7 @@ export default function HousePage() {
             referenceData={referenceData.data}
             readOnly={!canWrite}
             onSubmit={async (input) => {
-              await updateHouse.mutateAsync(input);
+              await updateHouse.mutateAsync({ body: input, version: house.data.version });
             }}
             onValuesChange={onFormValuesChange}
             actions={
@@ -136,6 +139,7 @@ export default function HousePage() {
         </Grid>
       </Grid>
 
+      {saveConflict}
       <ConfirmDialog
         open={confirmingDelete}
         title={`Delete ${house.data.name}?`}

@@ -1,6 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../api/client';
 import type { Farm, FarmInput } from '../../api/types';
+import type { VersionedSave } from '../../components/save-conflict';
 import { farmKeys } from './queries';
 
 export function useCreateFarm() {
@@ -17,7 +18,8 @@ export function useCreateFarm() {
 export function useUpdateFarm(farmId: number) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (body: Partial<FarmInput>) => api.patch<Farm>(`/api/farms/${farmId}`, body),
+    mutationFn: ({ body, version }: VersionedSave<Partial<FarmInput>>) =>
+      api.patch<Farm>(`/api/farms/${farmId}`, body, { ifMatch: version }),
     onSuccess: (farm) => {
       queryClient.setQueryData(farmKeys.detail(farm.id), farm);
       void queryClient.invalidateQueries({ queryKey: farmKeys.lists() });

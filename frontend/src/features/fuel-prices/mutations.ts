@@ -1,6 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../api/client';
 import type { FarmFuelPrices, FuelPricesInput } from '../../api/types';
+import type { VersionedSave } from '../../components/save-conflict';
 import { fuelPriceKeys } from './queries';
 
 /** Season results (keys under 'season') are priced with these: they recompute after a change. */
@@ -9,7 +10,8 @@ const SEASON_RESULTS_KEY = ['season'] as const;
 export function usePutFuelPrices(farmId: number) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (body: FuelPricesInput) => api.put<FarmFuelPrices>(`/api/farms/${farmId}/fuel-prices`, body),
+    mutationFn: ({ body, version }: VersionedSave<FuelPricesInput>) =>
+      api.put<FarmFuelPrices>(`/api/farms/${farmId}/fuel-prices`, body, { ifMatch: version }),
     onSuccess: (saved) => {
       queryClient.setQueryData(fuelPriceKeys.farm(farmId), saved);
       void queryClient.invalidateQueries({ queryKey: SEASON_RESULTS_KEY });

@@ -227,7 +227,7 @@ export function formValuesToHouseInput(
 
 /** The editable part of a stored house. */
 export function houseInputOf(house: House): HouseInput {
-  const { id: _id, farmId: _farmId, createdAt: _createdAt, updatedAt: _updatedAt, ...input } = house;
+  const { id: _id, farmId: _farmId, version: _version, createdAt: _createdAt, updatedAt: _updatedAt, ...input } = house;
   return input;
 }
 

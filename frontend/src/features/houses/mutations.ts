@@ -1,6 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../api/client';
 import type { House, HouseInput } from '../../api/types';
+import type { VersionedSave } from '../../components/save-conflict';
 import { houseKeys } from './queries';
 
 export function useCreateHouse(farmId: number) {
@@ -17,7 +18,8 @@ export function useCreateHouse(farmId: number) {
 export function useUpdateHouse(houseId: number) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (body: Partial<HouseInput>) => api.patch<House>(`/api/houses/${houseId}`, body),
+    mutationFn: ({ body, version }: VersionedSave<Partial<HouseInput>>) =>
+      api.patch<House>(`/api/houses/${houseId}`, body, { ifMatch: version }),
     onSuccess: (house) => {
       queryClient.setQueryData(houseKeys.detail(house.id), house);
       void queryClient.invalidateQueries({ queryKey: houseKeys.list(house.farmId) });

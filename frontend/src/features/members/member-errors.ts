@@ -7,7 +7,7 @@ export function memberErrorMessage(error: unknown): string | null {
     if (error.status === 404 && /register/i.test(error.message)) {
       return 'No Thermbay account uses that e-mail address. Ask them to register first, then add them here.';
     }
-    if (error.status === 400 && /owner/i.test(error.message)) {
+    if (error.status === 409 && /owner/i.test(error.message)) {
       return 'A farm needs at least one owner: make someone else an owner before demoting or removing the last one.';
     }
     if (error.status === 400 && /already a member/i.test(error.message)) {

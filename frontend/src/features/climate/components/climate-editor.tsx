@@ -14,7 +14,7 @@ import {
 } from '@mui/material';
 import { Form, Formik, setIn, type FormikErrors } from 'formik';
 import { useMemo, useState } from 'react';
-import { ApiError } from '../../../api/client';
+import { ApiError, isStaleWrite } from '../../../api/client';
 import type { SiteClimate } from '../../../api/types';
 import { ErrorAlert } from '../../../components/feedback';
 import { FormNumberField, FormReadOnlyContext, FormTextField } from '../../../components/form-fields';
@@ -64,6 +64,8 @@ export function ClimateEditor({ climate, readOnly = false, onSave }: ClimateEdit
           helpers.resetForm({ values });
           setSaved(true);
         } catch (error) {
+          // A stale save is answered by the conflict dialog beside the editor, not here.
+          if (isStaleWrite(error)) return;
           setSubmitError(error);
           if (error instanceof ApiError) {
             let fieldErrors: FormikErrors<ClimateFormValues> = {};

@@ -2,8 +2,9 @@ import { Button, Paper, Stack, Typography } from '@mui/material';
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { ErrorAlert, LoadingState } from '../../../components/feedback';
+import { useSaveConflict } from '../../../components/save-conflict';
 import { usePutFarmClimate } from '../mutations';
-import { farmClimateQueryOptions } from '../queries';
+import { climateKeys, farmClimateQueryOptions } from '../queries';
 import { ClimateEditor } from './climate-editor';
 import { WeatherFillDialog } from './weather-fill-dialog';
 
@@ -12,6 +13,7 @@ export function ClimateSection({ farmId, canEdit }: { farmId: number; canEdit: b
   const climate = useQuery(farmClimateQueryOptions(farmId));
   const save = usePutFarmClimate(farmId);
   const [filling, setFilling] = useState(false);
+  const saveConflict = useSaveConflict({ what: 'climate', mutation: save, queryKey: climateKeys.farm(farmId) });
   return (
     <Paper component="section" aria-labelledby="climate-heading" sx={{ p: 2 }}>
       <Stack spacing={2}>
@@ -32,7 +34,11 @@ export function ClimateSection({ farmId, canEdit }: { farmId: number; canEdit: b
         {climate.isPending ? <LoadingState label="Loading climate…" /> : null}
         <ErrorAlert error={climate.error} title="Climate could not be loaded" />
         {climate.data ? (
-          <ClimateEditor climate={climate.data.climate} readOnly={!canEdit} onSave={(body) => save.mutateAsync(body)} />
+          <ClimateEditor
+            climate={climate.data.climate}
+            readOnly={!canEdit}
+            onSave={(body) => save.mutateAsync({ body, version: climate.data.version })}
+          />
         ) : null}
         {climate.data ? (
           <WeatherFillDialog
@@ -40,9 +46,10 @@ export function ClimateSection({ farmId, canEdit }: { farmId: number; canEdit: b
             open={filling}
             current={climate.data.climate}
             onClose={() => setFilling(false)}
-            onSave={(body) => save.mutateAsync(body)}
+            onSave={(body) => save.mutateAsync({ body, version: climate.data.version })}
           />
         ) : null}
+        {saveConflict}
       </Stack>
     </Paper>
   );

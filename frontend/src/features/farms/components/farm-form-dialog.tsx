@@ -10,11 +10,14 @@ import {
 } from '@mui/material';
 import { Form, Formik, getIn } from 'formik';
 import { useMemo } from 'react';
+import { isStaleWrite } from '../../../api/client';
 import type { Farm, FarmInput } from '../../../api/types';
 import { ErrorAlert } from '../../../components/feedback';
+import { useSaveConflict } from '../../../components/save-conflict';
 import { FormNumberField, FormTextField } from '../../../components/form-fields';
 import { useUnits, type Units } from '../../../lib/units';
 import { useCreateFarm, useUpdateFarm } from '../mutations';
+import { farmKeys } from '../queries';
 import { farmFormSchema, type FarmFormValues } from '../schemas';
 
 function allTimeZones(): string[] {
@@ -70,85 +73,100 @@ export function FarmFormDialog({ open, onClose, farm, onSaved }: FarmFormDialogP
   const create = useCreateFarm();
   const update = useUpdateFarm(farm?.id ?? 0);
   const mutation = farm ? update : create;
+  const saveConflict = useSaveConflict({
+    what: 'farm',
+    mutation: update,
+    queryKey: farmKeys.detail(farm?.id ?? 0),
+    onOverwritten: (saved) => {
+      onSaved?.(saved);
+      onClose();
+    },
+  });
   const schema = useMemo(() => farmFormSchema(units), [units]);
   const initialValues = useMemo(() => toFormValues(farm, units), [farm, units]);
   const timeZones = useMemo(allTimeZones, []);
   const title = farm ? `Edit ${farm.name}` : 'New farm';
 
   return (
-    <Dialog open={open} onClose={onClose} fullWidth maxWidth="sm" aria-labelledby="farm-dialog-title">
-      <Formik
-        initialValues={initialValues}
-        validationSchema={schema}
-        enableReinitialize
-        onSubmit={async (values) => {
-          try {
-            const saved = await mutation.mutateAsync(toFarmInput(values, initialValues, farm, units));
-            onSaved?.(saved);
-            onClose();
-          } catch {
-            // shown through the mutation's error
-          }
-        }}
-      >
-        {({ values, errors, touched, submitCount, setFieldValue, setFieldTouched, isSubmitting }) => {
-          const timeZoneError =
-            (getIn(touched, 'timeZone') || submitCount > 0) && typeof errors.timeZone === 'string'
-              ? errors.timeZone
-              : undefined;
-          return (
-            <Form noValidate>
-              <DialogTitle id="farm-dialog-title">{title}</DialogTitle>
-              <DialogContent>
-                <Stack spacing={2} sx={{ pt: 1 }}>
-                  {mutation.error ? <ErrorAlert error={mutation.error} /> : null}
-                  <FormTextField name="name" label="Farm name" required autoFocus />
-                  <Stack direction={{ xs: 'column', sm: 'row' }} spacing={2}>
-                    <FormNumberField
-                      name="latitudeDeg"
-                      label="Latitude"
-                      unit="°"
-                      helperText="North positive"
-                      required
-                    />
-                    <FormNumberField
-                      name="longitudeDeg"
-                      label="Longitude"
-                      unit="°"
-                      helperText="East positive"
-                      required
+    <>
+      <Dialog open={open} onClose={onClose} fullWidth maxWidth="sm" aria-labelledby="farm-dialog-title">
+        <Formik
+          initialValues={initialValues}
+          validationSchema={schema}
+          enableReinitialize
+          onSubmit={async (values) => {
+            try {
+              const body = toFarmInput(values, initialValues, farm, units);
+              const saved = farm
+                ? await update.mutateAsync({ body, version: farm.version })
+                : await create.mutateAsync(body);
+              onSaved?.(saved);
+              onClose();
+            } catch {
+              // shown through the mutation's error
+            }
+          }}
+        >
+          {({ values, errors, touched, submitCount, setFieldValue, setFieldTouched, isSubmitting }) => {
+            const timeZoneError =
+              (getIn(touched, 'timeZone') || submitCount > 0) && typeof errors.timeZone === 'string'
+                ? errors.timeZone
+                : undefined;
+            return (
+              <Form noValidate>
+                <DialogTitle id="farm-dialog-title">{title}</DialogTitle>
+                <DialogContent>
+                  <Stack spacing={2} sx={{ pt: 1 }}>
+                    {mutation.error && !isStaleWrite(mutation.error) ? <ErrorAlert error={mutation.error} /> : null}
+                    <FormTextField name="name" label="Farm name" required autoFocus />
+                    <Stack direction={{ xs: 'column', sm: 'row' }} spacing={2}>
+                      <FormNumberField
+                        name="latitudeDeg"
+                        label="Latitude"
+                        unit="°"
+                        helperText="North positive"
+                        required
+                      />
+                      <FormNumberField
+                        name="longitudeDeg"
+                        label="Longitude"
+                        unit="°"
+                        helperText="East positive"
+                        required
+                      />
+                    </Stack>
+                    <FormNumberField name="elevationM" label="Elevation" unit={units.label('length')} required />
+                    <Autocomplete
+                      options={timeZones}
+                      value={values.timeZone || null}
+                      onChange={(_event, value) => void setFieldValue('timeZone', value ?? '')}
+                      onBlur={() => void setFieldTouched('timeZone', true)}
+                      autoHighlight
+                      renderInput={(params) => (
+                        <TextField
+                          {...params}
+                          id="field-timeZone"
+                          label="Time zone"
+                          required
+                          error={Boolean(timeZoneError)}
+                          helperText={timeZoneError}
+                        />
+                      )}
                     />
                   </Stack>
-                  <FormNumberField name="elevationM" label="Elevation" unit={units.label('length')} required />
-                  <Autocomplete
-                    options={timeZones}
-                    value={values.timeZone || null}
-                    onChange={(_event, value) => void setFieldValue('timeZone', value ?? '')}
-                    onBlur={() => void setFieldTouched('timeZone', true)}
-                    autoHighlight
-                    renderInput={(params) => (
-                      <TextField
-                        {...params}
-                        id="field-timeZone"
-                        label="Time zone"
-                        required
-                        error={Boolean(timeZoneError)}
-                        helperText={timeZoneError}
-                      />
-                    )}
-                  />
-                </Stack>
-              </DialogContent>
-              <DialogActions>
-                <Button onClick={onClose}>Cancel</Button>
-                <Button type="submit" variant="contained" disabled={isSubmitting}>
-                  {farm ? 'Save farm' : 'Create farm'}
-                </Button>
-              </DialogActions>
-            </Form>
-          );
-        }}
-      </Formik>
-    </Dialog>
+                </DialogContent>
+                <DialogActions>
+                  <Button onClick={onClose}>Cancel</Button>
+                  <Button type="submit" variant="contained" disabled={isSubmitting}>
+                    {farm ? 'Save farm' : 'Create farm'}
+                  </Button>
+                </DialogActions>
+              </Form>
+            );
+          }}
+        </Formik>
+      </Dialog>
+      {saveConflict}
+    </>
   );
 }

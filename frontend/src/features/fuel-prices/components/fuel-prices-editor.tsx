@@ -15,8 +15,10 @@ import {
 import { useQuery } from '@tanstack/react-query';
 import { Form, Formik } from 'formik';
 import { useMemo, useState } from 'react';
+import { isStaleWrite } from '../../../api/client';
 import type { ReferenceData } from '../../../api/types';
 import { ErrorAlert, LoadingState } from '../../../components/feedback';
+import { useSaveConflict } from '../../../components/save-conflict';
 import { FormReadOnlyContext, FormSelectField, FormTextField } from '../../../components/form-fields';
 import { referenceRows } from '../../../lib/reference-data';
 import { useUnits } from '../../../lib/units';
@@ -28,7 +30,7 @@ import {
   type FuelPriceFormValues,
 } from '../fuel-price-values';
 import { usePutFuelPrices } from '../mutations';
-import { farmFuelPricesQueryOptions } from '../queries';
+import { farmFuelPricesQueryOptions, fuelPriceKeys } from '../queries';
 
 /** The farm's price for each fuel, per the fuel's SI or US purchase unit, as on the bill. */
 export function FuelPricesEditor({
@@ -43,6 +45,7 @@ export function FuelPricesEditor({
   const units = useUnits();
   const prices = useQuery(farmFuelPricesQueryOptions(farmId));
   const save = usePutFuelPrices(farmId);
+  const saveConflict = useSaveConflict({ what: 'fuel prices', mutation: save, queryKey: fuelPriceKeys.farm(farmId) });
   const [saved, setSaved] = useState(false);
   const fuels = referenceRows(referenceData, 'fuels');
   const initialValues = useMemo(
@@ -62,6 +65,7 @@ export function FuelPricesEditor({
         </Typography>
         {prices.isPending ? <LoadingState label="Loading prices…" /> : null}
         <ErrorAlert error={prices.error} title="Prices could not be loaded" />
+        {saveConflict}
         {initialValues ? (
           <Formik<FuelPriceFormValues>
             key={JSON.stringify(prices.data)}
@@ -70,7 +74,7 @@ export function FuelPricesEditor({
             onSubmit={async (values, helpers) => {
               setSaved(false);
               try {
-                await save.mutateAsync(toFuelPricesInput(values));
+                await save.mutateAsync({ body: toFuelPricesInput(values), version: prices.data?.version ?? 0 });
                 helpers.resetForm({ values });
                 setSaved(true);
               } catch {
@@ -82,7 +86,7 @@ export function FuelPricesEditor({
               <FormReadOnlyContext.Provider value={!canEdit}>
                 <Form noValidate aria-label="Fuel prices">
                   <Stack spacing={2}>
-                    <ErrorAlert error={save.error} title="Prices not saved" />
+                    {isStaleWrite(save.error) ? null : <ErrorAlert error={save.error} title="Prices not saved" />}
                     {saved && !dirty ? (
                       <Alert severity="success" role="status">
                         Prices saved.

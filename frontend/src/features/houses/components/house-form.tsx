@@ -3,7 +3,7 @@ import DeleteOutlineIcon from '@mui/icons-material/DeleteOutlined';
 import { Alert, Box, Button, Grid, IconButton, Paper, Stack, Tooltip, Typography } from '@mui/material';
 import { FieldArray, Form, Formik, setIn, useFormikContext, type FormikErrors } from 'formik';
 import { Fragment, useEffect, useMemo, useRef, useState, type ReactNode } from 'react';
-import { ApiError } from '../../../api/client';
+import { ApiError, isStaleWrite } from '../../../api/client';
 import type { HouseInput, ReferenceData } from '../../../api/types';
 import { ErrorAlert } from '../../../components/feedback';
 import {
@@ -171,6 +171,8 @@ export function HouseForm({
           await onSubmit(formValuesToHouseInput(values, initialValues, house, units));
           setSavedAt(Date.now());
         } catch (error) {
+          // A stale save is answered by the conflict dialog beside the form, not here.
+          if (isStaleWrite(error)) return;
           setSubmitError(error);
           if (error instanceof ApiError) {
             let fieldErrors: FormikErrors<HouseFormValues> = {};

@@ -30,7 +30,7 @@ describe('member errors', () => {
   });
 
   it('explains that the last owner cannot be demoted', () => {
-    expect(memberErrorMessage(new ApiError(400, 'A farm needs at least one owner'))).toMatch(/at least one owner/);
+    expect(memberErrorMessage(new ApiError(409, 'A farm needs at least one owner'))).toMatch(/at least one owner/);
   });
 });
 
@@ -52,9 +52,9 @@ describe('MembersTable', () => {
       vi.fn(
         async () =>
           new Response(
-            JSON.stringify({ statusCode: 400, error: 'Bad Request', message: 'A farm needs at least one owner' }),
+            JSON.stringify({ statusCode: 409, error: 'Conflict', message: 'A farm needs at least one owner' }),
             {
-              status: 400,
+              status: 409,
               headers: { 'content-type': 'application/json' },
             },
           ),

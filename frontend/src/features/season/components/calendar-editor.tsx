@@ -17,9 +17,11 @@ import {
   Typography,
 } from '@mui/material';
 import { useQuery } from '@tanstack/react-query';
+import { isStaleWrite } from '../../../api/client';
 import { FieldArray, Form, Formik } from 'formik';
 import { useMemo, useState } from 'react';
 import { ErrorAlert, LoadingState } from '../../../components/feedback';
+import { useSaveConflict } from '../../../components/save-conflict';
 import { FormNumberField, FormReadOnlyContext, FormSelectField, FormTextField } from '../../../components/form-fields';
 import { useUnits } from '../../../lib/units';
 import {
@@ -30,7 +32,7 @@ import {
   type CalendarFormValues,
 } from '../calendar-values';
 import { usePutProductionCalendar } from '../mutations';
-import { productionCalendarQueryOptions } from '../queries';
+import { productionCalendarQueryOptions, seasonKeys } from '../queries';
 
 const MODE_OPTIONS = [
   { value: 'heated', label: 'Heated' },
@@ -42,6 +44,7 @@ export function CalendarEditor({ houseId, canEdit }: { houseId: number; canEdit:
   const units = useUnits();
   const calendar = useQuery(productionCalendarQueryOptions(houseId));
   const save = usePutProductionCalendar(houseId);
+  const saveConflict = useSaveConflict({ what: 'calendar', mutation: save, queryKey: seasonKeys.calendar(houseId) });
   const [saved, setSaved] = useState(false);
   const schema = useMemo(() => calendarFormSchema(units), [units]);
   const stored = calendar.data?.periods;
@@ -60,6 +63,7 @@ export function CalendarEditor({ houseId, canEdit }: { houseId: number; canEdit:
         </Typography>
         {calendar.isPending ? <LoadingState label="Loading the calendar…" /> : null}
         <ErrorAlert error={calendar.error} title="The calendar could not be loaded" />
+        {saveConflict}
         {initialValues && stored ? (
           <Formik<CalendarFormValues>
             key={`${units.system}:${JSON.stringify(stored)}`}
@@ -68,7 +72,10 @@ export function CalendarEditor({ houseId, canEdit }: { houseId: number; canEdit:
             onSubmit={async (values, helpers) => {
               setSaved(false);
               try {
-                await save.mutateAsync(toCalendarInput(values, initialValues, stored, units));
+                await save.mutateAsync({
+                  body: toCalendarInput(values, initialValues, stored, units),
+                  version: calendar.data?.version ?? 0,
+                });
                 helpers.resetForm({ values });
                 setSaved(true);
               } catch {
@@ -80,7 +87,7 @@ export function CalendarEditor({ houseId, canEdit }: { houseId: number; canEdit:
               <FormReadOnlyContext.Provider value={!canEdit}>
                 <Form noValidate aria-label="Production calendar">
                   <Stack spacing={2}>
-                    <ErrorAlert error={save.error} title="Calendar not saved" />
+                    {isStaleWrite(save.error) ? null : <ErrorAlert error={save.error} title="Calendar not saved" />}
                     {saved && !dirty ? (
                       <Alert severity="success" role="status">
                         Calendar saved; the season has been recomputed.
