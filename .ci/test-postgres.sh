@@ -38,14 +38,14 @@ port="$(node -e "const s=require('net').createServer();s.listen(0,'127.0.0.1',()
 
 stop_cluster() {
   if [ -f "$dir/data/postmaster.pid" ]; then
-    "${run_as[@]}" "$bin/pg_ctl" -D "$dir/data" -m immediate -w stop >/dev/null 2>&1 || true
+    ${run_as[@]+"${run_as[@]}"} "$bin/pg_ctl" -D "$dir/data" -m immediate -w stop >/dev/null 2>&1 || true
   fi
   rm -rf "$dir"
 }
 trap stop_cluster EXIT
 trap "exit 130" INT TERM
 
-"${run_as[@]}" "$bin/initdb" -D "$dir/data" -U thermbay --auth=trust -E UTF8 --locale=C.UTF-8 >/dev/null
+${run_as[@]+"${run_as[@]}"} "$bin/initdb" -D "$dir/data" -U thermbay --auth=trust -E UTF8 --locale=C.UTF-8 >/dev/null
 # Trust only local connections on the loopback address (and the socket inside the temp folder).
 cat >"$dir/data/pg_hba.conf" <<HBA
 local all all trust
@@ -53,10 +53,10 @@ host  all all 127.0.0.1/32 trust
 HBA
 if [ "$(id -u)" = "0" ]; then chown postgres "$dir/data/pg_hba.conf"; fi
 # A throwaway cluster: durability settings off for speed.
-"${run_as[@]}" "$bin/pg_ctl" -D "$dir/data" -l "$dir/server.log" -w -t 60 \
+${run_as[@]+"${run_as[@]}"} "$bin/pg_ctl" -D "$dir/data" -l "$dir/server.log" -w -t 60 \
   -o "-p $port -c listen_addresses=127.0.0.1 -k $dir -c fsync=off -c synchronous_commit=off -c full_page_writes=off -c max_connections=200" \
   start >/dev/null
-"${run_as[@]}" "$bin/createdb" -h 127.0.0.1 -p "$port" -U thermbay thermbay
+${run_as[@]+"${run_as[@]}"} "$bin/createdb" -h 127.0.0.1 -p "$port" -U thermbay thermbay
 
 export DATABASE_URL="postgres://thermbay@127.0.0.1:$port/thermbay"
 echo "== PostgreSQL $("$bin/postgres" --version | awk '{print $3}') on 127.0.0.1:$port (throwaway cluster in $dir)"
