@@ -6,9 +6,11 @@ export default defineConfig({
     environment: 'node',
     include: ['e2e/**/*.e2e.test.ts'],
     globalSetup: ['e2e/global-setup.ts'],
+    // each file starts its own backend on a fresh demo database
+    setupFiles: ['e2e/backend-per-file.ts'],
     testTimeout: 120_000,
     hookTimeout: 120_000,
-    // One browser at a time against one backend: tests share the demo database.
+    // One file at a time on E2E_PORT; within a file, tests run in order on that file's database.
     fileParallelism: false,
   },
 });

@@ -6,6 +6,8 @@ module.exports = {
   testMatch: ['**/*.spec.ts'],
   transform: { '^.+\\.ts$': ['ts-jest', { tsconfig: '<rootDir>/tsconfig.json' }] },
   moduleFileExtensions: ['ts', 'js', 'json'],
+  // fast-check runs from a fixed seed (FC_SEED overrides it); a failure prints seed and path
+  setupFilesAfterEnv: ['<rootDir>/src/testing/fast-check-seed.ts'],
   // A cold run compiles the TypeScript on first import; property tests run many cases.
   testTimeout: 60_000,
 };

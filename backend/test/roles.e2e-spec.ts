@@ -64,6 +64,45 @@ describe('roles × routes (e2e)', () => {
       .field('mapping', JSON.stringify(HOURLY_MAPPING))
       .attach('file', smallCsv, { filename: 'log.csv', contentType: 'text/csv' });
   const newLog = async () => (await uploadLog('owner').expect(201)).body.id as number;
+  let registered = 0;
+  /** A fresh account, registered through the API; returns its id. */
+  const newUser = async (label: string) => {
+    registered += 1;
+    const email = `${label}-${registered}@example.org`;
+    const res = await t.http
+      .post('/api/auth/register')
+      .send({ email, password: 'password-123', name: email })
+      .expect(201);
+    return { id: res.body.user.id as number, email };
+  };
+  /** A fresh account added to the demo farm by its owner with the given role. */
+  const newMember = async (role: 'viewer' | 'grower' = 'viewer') => {
+    const user = await newUser('member');
+    await t.http
+      .post(`/api/farms/${farmId}/members`)
+      .set(bearer(token.owner))
+      .send({ email: user.email, role })
+      .expect(201);
+    return user.id;
+  };
+  /** A fresh farm owned by the owner, with the grower, adviser and viewer as members in those roles. */
+  const newSharedFarm = async () => {
+    const farm = (
+      await t.http
+        .post('/api/farms')
+        .set(bearer(token.owner))
+        .send({ name: 'Shared', latitudeDeg: 44, longitudeDeg: -93, elevationM: 280, timeZone: 'America/Chicago' })
+        .expect(201)
+    ).body;
+    for (const [email, role] of [
+      ['grower@example.com', 'grower'],
+      ['adviser@example.com', 'adviser'],
+      ['viewer@example.org', 'viewer'],
+    ] as const) {
+      await t.http.post(`/api/farms/${farm.id}/members`).set(bearer(token.owner)).send({ email, role }).expect(201);
+    }
+    return farm.id as number;
+  };
   const demoPrices = [
     { fuelId: 'propane', pricePerUnit: 1.6, priceUnit: 'us', note: 'Invented demo price per US gal, not market data' },
     {
@@ -285,6 +324,56 @@ describe('roles × routes (e2e)', () => {
           .set(bearer(token[who])),
     },
     {
+      route: 'DELETE /farms/:id (a farm the caller is a member of)',
+      expected: { owner: 204, grower: 403, adviser: 403, viewer: 403, outsider: 404, admin: 404 },
+      call: async (who) => t.http.delete(`/api/farms/${await newSharedFarm()}`).set(bearer(token[who])),
+    },
+    {
+      route: 'PATCH /farms/:id/members/:userId (role change)',
+      expected: { owner: 200, grower: 403, adviser: 403, viewer: 403, outsider: 404, admin: 404 },
+      call: async (who) =>
+        t.http
+          .patch(`/api/farms/${farmId}/members/${await newMember()}`)
+          .set(bearer(token[who]))
+          .send({ role: 'adviser' }),
+    },
+    {
+      route: 'DELETE /farms/:id/members/:userId',
+      expected: { owner: 204, grower: 403, adviser: 403, viewer: 403, outsider: 404, admin: 404 },
+      call: async (who) => t.http.delete(`/api/farms/${farmId}/members/${await newMember()}`).set(bearer(token[who])),
+    },
+    {
+      route: 'GET /farms/:id/climate',
+      expected: { owner: 200, grower: 200, adviser: 200, viewer: 200, outsider: 404, admin: 404 },
+      call: (who) => t.http.get(`/api/farms/${farmId}/climate`).set(bearer(token[who])),
+    },
+    {
+      route: 'PUT /farms/:id/climate',
+      expected: { owner: 200, grower: 200, adviser: 403, viewer: 403, outsider: 404, admin: 404 },
+      call: async (who) => {
+        const loaded = (await t.http.get(`/api/farms/${farmId}/climate`).set(bearer(token.owner)).expect(200)).body;
+        return t.http
+          .put(`/api/farms/${farmId}/climate`)
+          .set(bearer(token[who]))
+          .set(ifMatch(loaded.version))
+          .send({ ...loaded.climate, sourceNote: `entered by ${who}` });
+      },
+    },
+    {
+      route: 'PATCH /users/:id (site admin only)',
+      expected: { owner: 403, grower: 403, adviser: 403, viewer: 403, outsider: 403, admin: 200 },
+      call: async (who) =>
+        t.http
+          .patch(`/api/users/${(await newUser('renamed')).id}`)
+          .set(bearer(token[who]))
+          .send({ name: `renamed by ${who}` }),
+    },
+    {
+      route: 'DELETE /users/:id (site admin only)',
+      expected: { owner: 403, grower: 403, adviser: 403, viewer: 403, outsider: 403, admin: 204 },
+      call: async (who) => t.http.delete(`/api/users/${(await newUser('deleted')).id}`).set(bearer(token[who])),
+    },
+    {
       route: 'GET /users (site admin only)',
       expected: { owner: 403, grower: 403, adviser: 403, viewer: 403, outsider: 403, admin: 200 },
       call: (who) => t.http.get('/api/users').set(bearer(token[who])),
@@ -341,5 +430,115 @@ describe('roles × routes (e2e)', () => {
       .send({ role: 'viewer' })
       .expect(409);
     expect(res.body.message).toMatch(/at least one owner/);
+  });
+
+  it('refuses to remove the only owner of a farm, and the owner stays', async () => {
+    const members = (await t.http.get(`/api/farms/${farmId}/members`).set(bearer(token.owner)).expect(200)).body;
+    const owners = members.filter((m: { role: string }) => m.role === 'owner');
+    expect(owners).toHaveLength(1);
+    const res = await t.http
+      .delete(`/api/farms/${farmId}/members/${owners[0].userId}`)
+      .set(bearer(token.owner))
+      .expect(400);
+    expect(res.body.message).toMatch(/at least one owner/);
+    const after = (await t.http.get(`/api/farms/${farmId}`).set(bearer(token.owner)).expect(200)).body;
+    expect(after.myRole).toBe('owner');
+  });
+
+  it('a role change takes effect at once, and a removed member no longer sees the farm', async () => {
+    const user = await newUser('promoted');
+    await t.http
+      .post(`/api/farms/${farmId}/members`)
+      .set(bearer(token.owner))
+      .send({ email: user.email, role: 'viewer' })
+      .expect(201);
+    const memberToken = await signIn(t, user.email, 'password-123');
+    await t.http.post(`/api/farms/${farmId}/houses`).set(bearer(memberToken)).send(houseBody).expect(403);
+    const changed = await t.http
+      .patch(`/api/farms/${farmId}/members/${user.id}`)
+      .set(bearer(token.owner))
+      .send({ role: 'grower' })
+      .expect(200);
+    expect(changed.body).toMatchObject({ userId: user.id, email: user.email, role: 'grower' });
+    await t.http.post(`/api/farms/${farmId}/houses`).set(bearer(memberToken)).send(houseBody).expect(201);
+    await t.http.delete(`/api/farms/${farmId}/members/${user.id}`).set(bearer(token.owner)).expect(204);
+    await t.http.get(`/api/farms/${farmId}`).set(bearer(memberToken)).expect(404);
+    const members = (await t.http.get(`/api/farms/${farmId}/members`).set(bearer(token.owner)).expect(200)).body;
+    expect(members.map((m: { userId: number }) => m.userId)).not.toContain(user.id);
+  });
+
+  it('a second owner can be demoted once there is another, and an unknown member is 404', async () => {
+    const user = await newUser('co-owner');
+    await t.http
+      .post(`/api/farms/${farmId}/members`)
+      .set(bearer(token.owner))
+      .send({ email: user.email, role: 'owner' })
+      .expect(201);
+    await t.http
+      .patch(`/api/farms/${farmId}/members/${user.id}`)
+      .set(bearer(token.owner))
+      .send({ role: 'viewer' })
+      .expect(200);
+    await t.http
+      .patch(`/api/farms/${farmId}/members/999999`)
+      .set(bearer(token.owner))
+      .send({ role: 'viewer' })
+      .expect(404);
+    await t.http.delete(`/api/farms/${farmId}/members/999999`).set(bearer(token.owner)).expect(404);
+  });
+
+  describe('site administration', () => {
+    const adminId = async () =>
+      (await t.http.get('/api/auth/me').set(bearer(token.admin)).expect(200)).body.id as number;
+
+    it('an admin cannot remove their own administrator role, and stays an admin', async () => {
+      const id = await adminId();
+      const res = await t.http
+        .patch(`/api/users/${id}`)
+        .set(bearer(token.admin))
+        .send({ siteRole: 'user' })
+        .expect(400);
+      expect(res.body.message).toMatch(/own administrator role/);
+      await t.http.get('/api/users').set(bearer(token.admin)).expect(200);
+      // renaming oneself is allowed
+      await t.http.patch(`/api/users/${id}`).set(bearer(token.admin)).send({ name: 'Site admin' }).expect(200);
+    });
+
+    it('an admin cannot delete their own account through user administration', async () => {
+      const id = await adminId();
+      const res = await t.http.delete(`/api/users/${id}`).set(bearer(token.admin)).expect(400);
+      expect(res.body.message).toMatch(/own account/);
+      await t.http.get('/api/auth/me').set(bearer(token.admin)).expect(200);
+    });
+
+    it('an admin promotes and demotes someone else; the promoted user can then administer', async () => {
+      const user = await newUser('promoted-admin');
+      const promoted = await t.http
+        .patch(`/api/users/${user.id}`)
+        .set(bearer(token.admin))
+        .send({ siteRole: 'admin' })
+        .expect(200);
+      expect(promoted.body).toMatchObject({ id: user.id, siteRole: 'admin' });
+      const userToken = await signIn(t, user.email, 'password-123');
+      await t.http.get('/api/users').set(bearer(userToken)).expect(200);
+      await t.http.patch(`/api/users/${user.id}`).set(bearer(token.admin)).send({ siteRole: 'user' }).expect(200);
+      await t.http
+        .get('/api/users')
+        .set(bearer(await signIn(t, user.email, 'password-123')))
+        .expect(403);
+    });
+
+    it('a deleted account can no longer sign in, and an unknown id is 404', async () => {
+      const user = await newUser('gone');
+      await t.http.delete(`/api/users/${user.id}`).set(bearer(token.admin)).expect(204);
+      await t.http.post('/api/auth/login').send({ email: user.email, password: 'password-123' }).expect(401);
+      await t.http.delete('/api/users/999999').set(bearer(token.admin)).expect(404);
+      await t.http.patch('/api/users/999999').set(bearer(token.admin)).send({ name: 'x' }).expect(404);
+    });
+
+    it('refuses a site role outside admin and user', async () => {
+      const user = await newUser('bad-role');
+      await t.http.patch(`/api/users/${user.id}`).set(bearer(token.admin)).send({ siteRole: 'owner' }).expect(400);
+    });
   });
 });

@@ -25,6 +25,7 @@ interface MeasureResult {
   yearlyMoneySaved: number;
   costAmount: number | null;
   lightChange: { relativeChange: number } | null;
+  season: { cost: number };
 }
 
 const sum = (values: number[]) => values.reduce((total, value) => total + value, 0);
@@ -455,8 +456,19 @@ describe('season, calendars, fuel prices and the farm budget (e2e)', () => {
       for (let i = 1; i < paying.length; i++)
         expect(paying[i].paybackYears!).toBeGreaterThanOrEqual(paying[i - 1].paybackYears!);
       expect(results[0].kind).toBe('night-setpoint-lower');
-      for (const measure of paying)
-        expect(measure.paybackYears).toBeCloseTo(measure.costAmount! / measure.yearlyMoneySaved, 6);
+      // payback = cost ÷ (the baseline season's cost − the season's cost with the measure): two
+      // separate season runs in the response, not the saving the API computed
+      for (const [kind, cost] of [
+        ['second-poly-layer', 3000],
+        ['sealing', 800],
+        ['perimeter-insulation', 1500],
+      ] as const) {
+        const measure = results.find((m) => m.kind === kind)!;
+        const moneySaved = body.baseline.cost - measure.season.cost;
+        expect(moneySaved).toBeGreaterThan(0);
+        expect(measure.paybackStatus).toBe('years');
+        expect(Math.abs(measure.paybackYears! / (cost / moneySaved) - 1)).toBeLessThan(1e-9);
+      }
       const layer = results.find((m) => m.kind === 'second-poly-layer')!;
       expect(layer.yearlyMoneySaved).toBeGreaterThan(0);
       expect(layer.lightChange!.relativeChange).toBeLessThan(0);

@@ -1,6 +1,4 @@
-import { spawn, type ChildProcess } from 'node:child_process';
-import { existsSync, mkdtempSync, rmSync } from 'node:fs';
-import { tmpdir } from 'node:os';
+import { existsSync } from 'node:fs';
 import { join } from 'node:path';
 import {
   BACKEND_DIR,
@@ -11,25 +9,12 @@ import {
   FRONTEND_DIR,
 } from './e2e-config';
 
-async function waitForHealth(backend: ChildProcess, log: () => string, timeoutMs: number): Promise<void> {
-  const deadline = Date.now() + timeoutMs;
-  while (Date.now() < deadline) {
-    if (backend.exitCode !== null) {
-      throw new Error(`the backend exited with code ${backend.exitCode} before answering:\n${log()}`);
-    }
-    try {
-      const response = await fetch(`${E2E_BASE_URL}/api/health`);
-      if (response.ok) return;
-    } catch {
-      // not listening yet
-    }
-    await new Promise((resolve) => setTimeout(resolve, 250));
-  }
-  throw new Error(`GET /api/health did not answer within ${timeoutMs / 1000} s:\n${log()}`);
-}
-
-/** Starts the built backend on a fresh demo database; returns the teardown. */
-export default async function setup(): Promise<() => Promise<void>> {
+/**
+ * Checks once that the browser and both builds are there and the port is free. Each test file
+ * then starts its own backend on a fresh demo database (backend-per-file.ts), so that no file sees
+ * what another one saved.
+ */
+export default async function setup(): Promise<void> {
   if (!existsSync(CHROMIUM_PATH)) {
     throw new Error(`${CHROMIUM_PATH} is missing. Install Debian's chromium once:\n  ${CHROMIUM_INSTALL_COMMAND}`);
   }
@@ -49,45 +34,4 @@ export default async function setup(): Promise<() => Promise<void>> {
   ) {
     throw new Error(`port ${E2E_PORT} is already answering; stop that server or set E2E_PORT to a free port`);
   }
-
-  const databaseDir = mkdtempSync(join(tmpdir(), 'thermbay-e2e-'));
-  let output = '';
-  const backend = spawn(process.execPath, [backendMain], {
-    cwd: BACKEND_DIR,
-    env: {
-      ...process.env,
-      PORT: String(E2E_PORT),
-      DATABASE_FILE: join(databaseDir, 'thermbay-e2e.sqlite'),
-      DEMO_SEED: 'true',
-      NODE_ENV: 'test',
-      // Every browser test signs in from the same address; the default 10 a minute would refuse
-      // the later ones with 429 once the suite grows.
-      LOGIN_RATE_LIMIT_PER_MINUTE: '1000',
-    },
-    stdio: ['ignore', 'pipe', 'pipe'],
-  });
-  const collect = (chunk: Buffer) => {
-    output = (output + chunk.toString()).slice(-20_000);
-  };
-  backend.stdout?.on('data', collect);
-  backend.stderr?.on('data', collect);
-
-  const teardown = async () => {
-    if (backend.exitCode === null) {
-      const exited = new Promise<void>((resolve) => backend.once('exit', () => resolve()));
-      backend.kill('SIGTERM');
-      const forceKill = setTimeout(() => backend.kill('SIGKILL'), 5_000);
-      await exited;
-      clearTimeout(forceKill);
-    }
-    rmSync(databaseDir, { recursive: true, force: true });
-  };
-
-  try {
-    await waitForHealth(backend, () => output, 60_000);
-  } catch (error) {
-    await teardown();
-    throw error;
-  }
-  return teardown;
 }

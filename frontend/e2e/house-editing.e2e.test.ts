@@ -22,10 +22,10 @@ describe('a grower editing a house', () => {
     const houseUrl = await openFirstHouse(page);
 
     const width = widthInput(page);
-    const before = Number(await width.inputValue());
-    expect(Number.isFinite(before)).toBe(true);
-    // Stay inside the bounds in either unit system (2–20 m, 6.6–65.6 ft).
-    const changed = before >= 15 ? before - 1.5 : before + 1.5;
+    // a fresh demo database (one per file): House A as seeded, 30 ft = 9.144 m wide, shown in SI
+    // (the account's default) to 2 decimals
+    expect(await width.inputValue()).toBe('9.14');
+    const changed = 10.64;
     await width.fill(String(changed));
     await page.getByRole('button', { name: 'Save house' }).click();
     await page.getByRole('status').filter({ hasText: 'Saved.' }).waitFor();
@@ -51,16 +51,19 @@ describe('a grower editing a house', () => {
     // The unit is part of the input's accessible name: "Width of one span (m)".
     const widthIn = (unit: string) => page.getByRole('textbox', { name: `Width of one span (${unit})` });
 
-    // Start from SI whatever the account was left on.
-    if ((await siButton.getAttribute('aria-pressed')) !== 'true') await siButton.click();
-    await expect.poll(() => siButton.getAttribute('aria-pressed')).toBe('true');
+    // The account starts in SI on this file's fresh database, and House A has the width saved by
+    // the test above.
+    expect(await siButton.getAttribute('aria-pressed')).toBe('true');
     await widthIn('m').waitFor();
     const metres = Number(await width.inputValue());
+    expect(metres).toBe(10.64);
 
     await usButton.click();
     await expect.poll(() => usButton.getAttribute('aria-pressed')).toBe('true');
     await widthIn('ft').waitFor();
     const feet = Number(await width.inputValue());
+    // 10.64 m ÷ 0.3048 m/ft = 34.908 ft, shown to 1 decimal
+    expect(feet).toBe(34.9);
     // SI shows 2 decimals and US 1, so the two readings agree to within their rounding.
     expect(Math.abs(feet * METRES_PER_FOOT - metres)).toBeLessThan(0.02);
     expect(feet).not.toBeCloseTo(metres, 1);

@@ -159,7 +159,9 @@ describe('farm climate, temperature logs and the season', () => {
     await cost.waitFor({ timeout: 60_000 });
     expect(Number((await cost.textContent())?.replace(/,/g, ''))).toBeGreaterThan(0);
     const perHouse = page.getByRole('table', { name: 'Season fuel budget per house' });
-    expect(await perHouse.textContent()).toMatch(/US gal|therm/);
+    // demo House A burns propane, House B and Range C natural gas
+    expect(await perHouse.textContent()).toContain('US gal');
+    expect(await perHouse.textContent()).toContain('therm');
     expect(await perHouse.textContent()).toContain('MMBtu');
     await page
       .getByRole('img', { name: /fuel cost and heat per month/ })
@@ -190,6 +192,27 @@ describe('farm climate, temperature logs and the season', () => {
     const grid = page.getByRole('grid', { name: 'Farm members' });
     await grid.getByText('grower@example.com').waitFor();
     expect(await page.getByRole('button', { name: 'Remove owner@example.com' }).isDisabled()).toBe(true);
+    // and the API refuses it too, whatever the page offers: removing or demoting the only owner is 400
+    const farmId = Number(/\/farms\/(\d+)/.exec(page.url())?.[1]);
+    const login = await page.request.post('/api/auth/login', {
+      data: { email: DEMO_OWNER.email, password: DEMO_OWNER.password },
+    });
+    const headers = { Authorization: `Bearer ${(await login.json()).accessToken}` };
+    const members = (await (await page.request.get(`/api/farms/${farmId}/members`, { headers })).json()) as Array<{
+      userId: number;
+      email: string;
+      role: string;
+    }>;
+    const owners = members.filter((member) => member.role === 'owner');
+    expect(owners.map((member) => member.email)).toEqual([DEMO_OWNER.email]);
+    const removal = await page.request.delete(`/api/farms/${farmId}/members/${owners[0]!.userId}`, { headers });
+    expect(removal.status()).toBe(400);
+    expect((await removal.json()).message).toMatch(/at least one owner/);
+    const demotion = await page.request.patch(`/api/farms/${farmId}/members/${owners[0]!.userId}`, {
+      headers,
+      data: { role: 'viewer' },
+    });
+    expect(demotion.status()).toBe(400);
 
     await page.getByRole('textbox', { name: /E-mail of a registered user/ }).fill('nobody-yet@example.com');
     await page.getByRole('button', { name: 'Add member' }).click();

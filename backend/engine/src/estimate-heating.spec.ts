@@ -5,7 +5,8 @@ import { estimateHeating, type HeatingConditions } from './estimate-heating';
 import { exampleDoublePolyGableHouse } from './heating/example-houses';
 import type { HouseShape } from './vocabulary';
 import type { HouseSpec } from './house.types';
-import { insideAirDensityKgPerM3 } from './psychrometrics/psychrometrics';
+import { moistAirDensityByHand } from './testing/air-by-hand';
+import { expectRelativelyClose } from './testing/relative-tolerance';
 import { loadReferenceData } from './testing/reference-data';
 import { proseToPlainSi } from './vocabulary';
 import { referenceRow } from './reference-data.types';
@@ -84,16 +85,17 @@ describe('estimateHeating', () => {
     }
   });
 
-  it('defaults the inside temperature to the night setpoint and matches the hand calculation but for air density', () => {
+  it('defaults the inside temperature to the night setpoint and matches the hand calculation, air density included', () => {
     // hand calculation in heating/heat-loss.spec.ts: conduction + perimeter = 2065.907 W/K;
-    // infiltration = ρ · 1006 · 918 · 0.75 / 3600 with ρ from psychrolib at 15 °C, 70 % RH, sea level
-    const { airDensityKgPerM3 } = insideAirDensityKgPerM3(15, 70, 0);
-    const expectedUa = 2065.907 + (airDensityKgPerM3 * 1006 * 918 * 0.75) / 3600;
+    // infiltration = ρ · 1006 · 918 · 0.75 / 3600 with ρ of moist air at 15 °C, 70 % RH, sea level by
+    // the ideal-gas law (testing/air-by-hand.ts): p_w = 0.70 × 1702.0 = 1191.4 Pa,
+    // ρ = (101325 − 1191.4)/(287.042 × 288.15) + 1191.4/(461.524 × 288.15) = 1.21060 + 0.00896 = 1.21960 kg/m³
+    const density = moistAirDensityByHand(15, 70, 0);
+    expect(density).toBeCloseTo(1.2196, 4);
+    const expectedUa = 2065.907 + (density * 1006 * 918 * 0.75) / 3600;
     expect(estimate.heatLoss.insideC).toBe(15);
     expect(estimate.heatLoss.deltaTK).toBe(25);
-    expect(estimate.heatLoss.totalW).toBeCloseTo(expectedUa * 25, 0);
-    expect(airDensityKgPerM3).toBeGreaterThan(1.2);
-    expect(airDensityKgPerM3).toBeLessThan(1.23);
+    expectRelativelyClose(estimate.heatLoss.totalW, expectedUa * 25, 1e-5);
   });
 
   it('lists every reference value used with source and confidence', () => {

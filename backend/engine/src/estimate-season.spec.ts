@@ -4,7 +4,8 @@ import { EngineInputError } from './errors';
 import { estimateSeason, type EstimateSeasonInput } from './estimate-season';
 import { computeHouseGeometry } from './geometry/house-geometry';
 import { heatLossCoefficients } from './heating/heat-loss';
-import { dryAirDensityKgPerM3, standardAtmosphericPressurePa } from './psychrometrics';
+import { dryAirDensityByHand } from './testing/air-by-hand';
+import { expectRelativelyClose } from './testing/relative-tolerance';
 import type { SiteClimate } from './climate/site-climate';
 import { demoClimate, demoSeasonInput } from './season/demo-season';
 import { SunCache } from './season/sun-hours';
@@ -53,11 +54,15 @@ describe('estimateSeason', () => {
     const house = input.house;
     const ua = heatLossCoefficients(house, computeHouseGeometry(house), ref, {
       curtainClosed: false,
-      airDensityKgPerM3: dryAirDensityKgPerM3(15, standardAtmosphericPressurePa(input.site.elevationM)),
+      // dry air at the 15 °C setpoint and the demo site's 60 m by hand (testing/air-by-hand.ts):
+      // p = 101325 × (1 − 2.25577e−5 × 60)^5.2559 = 100,606 Pa; ρ = 100606 / (287.042 × 288.15) = 1.21636 kg/m³
+      airDensityKgPerM3: dryAirDensityByHand(15, input.site.elevationM),
     }).totalWPerK;
-    expect(estimate.total.energyKWh).toBeCloseTo((ua * 13 * 90 * 24) / 1000, 3);
+    expect(input.site.elevationM).toBe(60);
+    expect(dryAirDensityByHand(15, 60)).toBeCloseTo(1.21636, 5);
+    expectRelativelyClose(estimate.total.energyKWh, (ua * 13 * 90 * 24) / 1000, 1e-6);
     expect(estimate.total.heatingHours).toBe(90 * 24);
-    expect(estimate.peak?.heatW).toBeCloseTo(ua * 13, 6);
+    expectRelativelyClose(estimate.peak!.heatW, ua * 13, 1e-6);
   });
 
   it('returns monthly totals that add up to the season total, with fuel and cost in the fuel’s units', () => {

@@ -17,7 +17,13 @@ function fieldOf(run: () => unknown): string {
 
 describe('site climate', () => {
   it('accepts twelve months of sensible normals', () => {
-    expect(validateSiteClimate(demoClimate())).toBeDefined();
+    const climate = demoClimate();
+    const untouched = structuredClone(climate);
+    expect(() => validateSiteClimate(climate)).not.toThrow();
+    // months given out of order are accepted too, and nothing is changed in place
+    const shuffled = { ...climate, monthly: [...climate.monthly].reverse() };
+    expect(() => validateSiteClimate(shuffled)).not.toThrow();
+    expect(climate).toEqual(untouched);
   });
 
   it('names the offending field', () => {

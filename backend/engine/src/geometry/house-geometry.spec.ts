@@ -1,4 +1,5 @@
 import fc from 'fast-check';
+import { expectRelativelyClose } from '../testing/relative-tolerance';
 import { BOUNDS } from '../vocabulary';
 import { EngineInputError } from '../errors';
 import type { HouseShape } from '../vocabulary';
@@ -169,9 +170,10 @@ describe('computeHouseGeometry', () => {
             expect(Number.isFinite(value)).toBe(true);
             expect(value).toBeGreaterThan(0);
           }
-          expect(geometry.coverAreaM2).toBeCloseTo(
+          expectRelativelyClose(
+            geometry.coverAreaM2,
             geometry.roofAreaM2 + geometry.sidewallAreaM2 + geometry.endwallAreaM2,
-            6,
+            1e-12,
           );
           expect(geometry.volumeM3).toBeGreaterThanOrEqual(geometry.floorAreaM2 * eaveHeightM);
           expect(geometry.volumeM3).toBeLessThanOrEqual(geometry.floorAreaM2 * ridgeHeightM * (1 + 1e-12));

@@ -36,12 +36,25 @@ describe('condensation on the covering', () => {
     expect(result.anyCondenses).toBe(true);
   });
 
-  it('70 °F / 70 % air condenses on a surface at 60 °F but not at 60.5 °F (UF/IFAS, Buffington et al., condensation control bulletin)', () => {
-    const insideC = ((70 - 32) * 5) / 9;
-    const { result } = condensationRisk({ insideC, outsideC: 0, insideRelativeHumidityPct: 70 }, [], ref);
-    expect(((60 - 32) * 5) / 9).toBeGreaterThanOrEqual(result.dewPointC);
-    expect(((60.5 - 32) * 5) / 9).toBeGreaterThan(result.dewPointC);
-    expect(((59.5 - 32) * 5) / 9).toBeLessThan(result.dewPointC);
+  it('70 °F / 70 % air: the bulletin prints its dew point as 60 °F; a surface at or below the computed dew point condenses (rule ≤), so 59.5 °F drips and 60.5 °F stays dry (UF/IFAS, Buffington et al., condensation control bulletin)', () => {
+    const fToC = (f: number) => ((f - 32) * 5) / 9;
+    const insideC = fToC(70);
+    // a film ratio of 1 (U equal to the inside film coefficient) puts the surface at the outdoor temperature
+    const hVertical = referenceRow(ref, 'surface-coefficients', 'inside-vertical')!.hWPerM2K as number;
+    const surfaceAt = (surfaceF: number) =>
+      condensationRisk(
+        { insideC, outsideC: fToC(surfaceF), insideRelativeHumidityPct: 70 },
+        [{ group: 'sidewalls', coveringId: 'probe', uWPerM2K: hVertical }],
+        ref,
+      ).result;
+    const cold = surfaceAt(59.5);
+    const warm = surfaceAt(60.5);
+    expect(cold.surfaces[0].insideSurfaceC).toBeCloseTo(fToC(59.5), 10);
+    expect(cold.surfaces[0].condenses).toBe(true);
+    expect(warm.surfaces[0].condenses).toBe(false);
+    // the bulletin's figure as printed: 60 °F, a whole degree, so agreement within ±0.5 °F
+    const dewF = (cold.dewPointC * 9) / 5 + 32;
+    expect(Math.abs(dewF - 60)).toBeLessThanOrEqual(0.5);
   });
 
   it('at the reported threshold outdoor temperature the surface sits exactly at the dew point, and colder outside it condenses', () => {
@@ -65,7 +78,8 @@ describe('condensation on the covering', () => {
             [surface],
             ref,
           ).result;
-          expect(atThreshold.surfaces[0].insideSurfaceC).toBeCloseTo(probe.dewPointC, 6);
+          // temperatures near 0 °C: an absolute tolerance in kelvin, not a relative one
+          expect(Math.abs(atThreshold.surfaces[0].insideSurfaceC - probe.dewPointC)).toBeLessThan(1e-9);
           const colder = condensationRisk(
             { insideC, outsideC: thresholdC - 1, insideRelativeHumidityPct: rh },
             [surface],

@@ -128,12 +128,18 @@ describe('covering U-values', () => {
     }
   });
 
-  it('a second poly layer saves 30–40 % of covering loss (Rafferty, Geo-Heat Center guidebook ch. 14; eXtension ~35 %); recalled table U-values, so 2 points of slack', () => {
-    const single = referenceRow(ref, 'coverings', 'poly-single')!.uWPerM2K as number;
-    const double = referenceRow(ref, 'coverings', 'poly-double-inflated')!.uWPerM2K as number;
-    const saving = 1 - double / single;
-    expect(saving).toBeGreaterThanOrEqual(0.28);
-    expect(saving).toBeLessThanOrEqual(0.42);
+  // Source: K. Rafferty, "Chapter 14 Greenhouses", Geothermal Direct-Use Engineering and Design
+  // Guidebook (OIT Geo-Heat Center): a second poly layer "reduces transmission losses 30–40 %".
+  const SOURCE_SAVING_RANGE = [0.3, 0.4] as const;
+
+  it('the table U-values give a 40.4 % second-layer saving (hand arithmetic: 1 − 0.70/1.175 Btu/(h·ft²·°F)), 0.4 point above the 30–40 % the source states; the double-poly row records that', () => {
+    const single = referenceRow(ref, 'coverings', 'poly-single')!;
+    const double = referenceRow(ref, 'coverings', 'poly-double-inflated')!;
+    const saving = 1 - (double.uBtuPerHFt2F as number) / (single.uBtuPerHFt2F as number);
+    expect(saving).toBeCloseTo(0.404255, 6);
+    // the data sit outside the source's range, and the row says so rather than the test widening it
+    expect(saving).toBeGreaterThan(SOURCE_SAVING_RANGE[1]);
+    expect(String(double.notes)).toMatch(/40\.4 %.*30–40 %.*Rafferty/);
   });
 });
 

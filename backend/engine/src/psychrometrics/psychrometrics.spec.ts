@@ -14,10 +14,15 @@ describe('psychrometrics', () => {
     expect(dewPointC(25, 80)).toBeCloseTo(21.3094, 3);
   });
 
-  it('dew point of 70 °F / 70 % RH air is about 59.8 °F (UF/IFAS condensation bulletin: condenses on surfaces at 60 °F or colder; 59.8 °F by the Alduchov–Eskridge inversion)', () => {
+  it('dew point of 70 °F / 70 % RH air is 60 °F as the UF/IFAS condensation bulletin prints it (Buffington et al.: "condenses on any surface at 60 °F or colder"), within its whole-degree rounding ±0.5 °F', () => {
     const dewF = cToFahrenheit(dewPointC(fahrenheitToC(70), 70));
-    expect(dewF).toBeGreaterThan(59.5);
-    expect(dewF).toBeLessThanOrEqual(60);
+    expect(Math.abs(dewF - 60)).toBeLessThanOrEqual(0.5);
+  });
+
+  it('dew point of 70 °F / 70 % RH by hand with the Magnus form (Alduchov & Eskridge 1996: a = 17.625, b = 243.04 °C) is 15.43 °C = 59.8 °F; the engine (psychrolib) agrees within 0.05 K', () => {
+    // T = 21.1111 °C; γ = ln(0.70) + 17.625 × 21.1111 / (243.04 + 21.1111) = −0.356675 + 1.408600 = 1.051925
+    // T_d = 243.04 × 1.051925 / (17.625 − 1.051925) = 255.6598 / 16.573075 = 15.4262 °C
+    expect(Math.abs(dewPointC(fahrenheitToC(70), 70) - 15.4262)).toBeLessThan(0.05);
   });
 
   it('dew point at 20 °C / 50 % is about 9.26 °C (Alduchov & Eskridge 1996 Magnus form, derived)', () => {

@@ -109,7 +109,10 @@ describe('CoolingPanel', () => {
       throw new Error(`unexpected POST ${path}`);
     });
     renderPanel({ editedHouse: edited });
-    await waitFor(() => expect(screen.getByTestId('fan-verdict').textContent).toContain('Fans are adequate'));
+    // two requests in turn (the stored result, then the edits): wait for the condition, not a clock
+    await waitFor(() => expect(screen.getByTestId('fan-verdict').textContent).toContain('Fans are adequate'), {
+      timeout: 10_000,
+    });
     expect(post).toHaveBeenCalledWith(
       '/api/estimates/cooling',
       { house: edited, site: demoHouseBCooling.siteUsed, conditions: demoHouseBCooling.conditionsUsed },

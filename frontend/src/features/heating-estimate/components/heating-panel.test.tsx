@@ -1,4 +1,4 @@
-import { screen, waitFor, within } from '@testing-library/react';
+import { act, screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { api, ApiError } from '../../../api/client';
@@ -161,12 +161,32 @@ describe('HeatingPanel', () => {
   });
 
   it('refuses a what-if temperature outside the shared bounds and does not send it', async () => {
-    const user = userEvent.setup();
-    renderPanel();
-    await screen.findByTestId('heating-total');
-    await user.type(screen.getByRole('textbox', { name: /Design outdoor/ }), '-80');
-    expect(await screen.findByText('Between -50 and 25 °C')).toBeTruthy();
-    await new Promise((resolve) => setTimeout(resolve, 500));
-    expect(post.mock.calls.every(([, body]) => JSON.stringify(body) === '{"conditions":{}}')).toBe(true);
+    // fake timers that also follow real time (so Testing Library's waiting still works); the
+    // debounce is then run out on purpose rather than slept through
+    vi.useFakeTimers({ shouldAdvanceTime: true });
+    try {
+      const user = userEvent.setup({ advanceTimers: vi.advanceTimersByTime });
+      renderPanel();
+      await screen.findByTestId('heating-total');
+      const field = screen.getByRole('textbox', { name: /Design outdoor/ });
+      await user.type(field, '-80');
+      expect(await screen.findByText('Between -50 and 25 °C')).toBeTruthy();
+      await act(() => vi.advanceTimersByTimeAsync(2000)); // well past the 400 ms debounce
+      expect(post.mock.calls.map(([, body]) => body)).toEqual(post.mock.calls.map(() => ({ conditions: {} })));
+      // the same field does send a value within the bounds once the debounce runs out
+      await user.clear(field);
+      await user.type(field, '-20');
+      await act(() => vi.advanceTimersByTimeAsync(2000));
+      await waitFor(() =>
+        expect(post).toHaveBeenCalledWith(
+          `/api/houses/${demoHouseB.id}/estimate`,
+          { conditions: { designOutdoorC: -20 } },
+          expect.anything(),
+        ),
+      );
+      expect(post.mock.calls.some(([, body]) => JSON.stringify(body).includes('-80'))).toBe(false);
+    } finally {
+      vi.useRealTimers();
+    }
   });
 });

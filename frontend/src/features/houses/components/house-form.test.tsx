@@ -34,7 +34,14 @@ describe('HouseForm', () => {
     expect(width.getAttribute('aria-describedby')).toContain(message.id);
 
     await user.click(screen.getByRole('button', { name: 'Save house' }));
-    expect(onSubmit).not.toHaveBeenCalled();
+    // Formik validates asynchronously; a valid width submitted next is the only call, so the
+    // refused attempt sent nothing (had it, its call would have come first)
+    await user.clear(width);
+    await user.type(width, '40');
+    await user.click(screen.getByRole('button', { name: 'Save house' }));
+    await waitFor(() => expect(onSubmit).toHaveBeenCalled());
+    expect(onSubmit).toHaveBeenCalledTimes(1);
+    expect((onSubmit.mock.calls[0] as unknown as [HouseInput])[0].widthM).toBeCloseTo(12.192, 10);
   });
 
   it('converts a width typed in feet to metres on submit and keeps untouched values exact', async () => {
