@@ -1,12 +1,15 @@
 import type { INestApplication } from '@nestjs/common';
 import { DocumentBuilder, SwaggerModule, type OpenAPIObject } from '@nestjs/swagger';
 import helmet from 'helmet';
+import { bodyParsers } from './common/body-parsing';
 import { AllExceptionsFilter } from './common/filters/all-exceptions.filter';
 import { createValidationPipe } from './common/validation';
 
 /** Everything main.ts and the e2e tests both need, so tests run the app exactly as served. */
 export function configureApp(app: INestApplication): void {
   app.setGlobalPrefix('api');
+  // Registered before Nest's own parsers would be, and under their names, so they replace them.
+  for (const parser of bodyParsers()) app.use(parser);
   app.use(
     helmet({
       contentSecurityPolicy: {

@@ -1,4 +1,5 @@
-import { Body, Controller, Delete, Get, HttpCode, Param, ParseIntPipe, Patch, Post } from '@nestjs/common';
+import { ParseIdPipe } from '../common/pipes/parse-id.pipe';
+import { Body, Controller, Delete, Get, HttpCode, Param, Patch, Post } from '@nestjs/common';
 import { ApiBearerAuth, ApiCreatedResponse, ApiNoContentResponse, ApiOkResponse, ApiTags } from '@nestjs/swagger';
 import { CurrentUser, type AuthenticatedUser } from '../common/decorators/current-user.decorator';
 import { ROLE_PERMISSIONS } from '../common/permissions';
@@ -46,7 +47,7 @@ export class FarmsController {
 
   @Get('farms/:farmId')
   @ApiOkResponse({ type: FarmDto })
-  get(@CurrentUser() me: AuthenticatedUser, @Param('farmId', ParseIntPipe) farmId: number): Promise<FarmDto> {
+  get(@CurrentUser() me: AuthenticatedUser, @Param('farmId', ParseIdPipe) farmId: number): Promise<FarmDto> {
     return this.farms.get(me, farmId);
   }
 
@@ -54,7 +55,7 @@ export class FarmsController {
   @ApiOkResponse({ type: FarmDto })
   update(
     @CurrentUser() me: AuthenticatedUser,
-    @Param('farmId', ParseIntPipe) farmId: number,
+    @Param('farmId', ParseIdPipe) farmId: number,
     @Body() body: UpdateFarmDto,
   ): Promise<FarmDto> {
     return this.farms.update(me, farmId, body);
@@ -63,13 +64,13 @@ export class FarmsController {
   @Delete('farms/:farmId')
   @HttpCode(204)
   @ApiNoContentResponse()
-  async remove(@CurrentUser() me: AuthenticatedUser, @Param('farmId', ParseIntPipe) farmId: number): Promise<void> {
+  async remove(@CurrentUser() me: AuthenticatedUser, @Param('farmId', ParseIdPipe) farmId: number): Promise<void> {
     await this.farms.remove(me, farmId);
   }
 
   @Get('farms/:farmId/members')
   @ApiOkResponse({ type: MemberDto, isArray: true })
-  members(@CurrentUser() me: AuthenticatedUser, @Param('farmId', ParseIntPipe) farmId: number): Promise<MemberDto[]> {
+  members(@CurrentUser() me: AuthenticatedUser, @Param('farmId', ParseIdPipe) farmId: number): Promise<MemberDto[]> {
     return this.farms.members(me, farmId);
   }
 
@@ -77,7 +78,7 @@ export class FarmsController {
   @ApiCreatedResponse({ type: MemberDto })
   addMember(
     @CurrentUser() me: AuthenticatedUser,
-    @Param('farmId', ParseIntPipe) farmId: number,
+    @Param('farmId', ParseIdPipe) farmId: number,
     @Body() body: AddMemberDto,
   ): Promise<MemberDto> {
     return this.farms.addMember(me, farmId, body);
@@ -87,8 +88,8 @@ export class FarmsController {
   @ApiOkResponse({ type: MemberDto })
   updateMember(
     @CurrentUser() me: AuthenticatedUser,
-    @Param('farmId', ParseIntPipe) farmId: number,
-    @Param('userId', ParseIntPipe) userId: number,
+    @Param('farmId', ParseIdPipe) farmId: number,
+    @Param('userId', ParseIdPipe) userId: number,
     @Body() body: UpdateMemberDto,
   ): Promise<MemberDto> {
     return this.farms.updateMember(me, farmId, userId, body);
@@ -99,8 +100,8 @@ export class FarmsController {
   @ApiNoContentResponse()
   async removeMember(
     @CurrentUser() me: AuthenticatedUser,
-    @Param('farmId', ParseIntPipe) farmId: number,
-    @Param('userId', ParseIntPipe) userId: number,
+    @Param('farmId', ParseIdPipe) farmId: number,
+    @Param('userId', ParseIdPipe) userId: number,
   ): Promise<void> {
     await this.farms.removeMember(me, farmId, userId);
   }

@@ -1,4 +1,5 @@
-import { Body, Controller, Delete, Get, HttpCode, Param, ParseIntPipe, Patch, Post } from '@nestjs/common';
+import { ParseIdPipe } from '../common/pipes/parse-id.pipe';
+import { Body, Controller, Delete, Get, HttpCode, Param, Patch, Post } from '@nestjs/common';
 import {
   ApiBearerAuth,
   ApiCreatedResponse,
@@ -19,7 +20,7 @@ export class HousesController {
 
   @Get('farms/:farmId/houses')
   @ApiOkResponse({ type: HouseDto, isArray: true })
-  list(@CurrentUser() me: AuthenticatedUser, @Param('farmId', ParseIntPipe) farmId: number): Promise<HouseDto[]> {
+  list(@CurrentUser() me: AuthenticatedUser, @Param('farmId', ParseIdPipe) farmId: number): Promise<HouseDto[]> {
     return this.houses.list(me, farmId);
   }
 
@@ -30,7 +31,7 @@ export class HousesController {
   })
   create(
     @CurrentUser() me: AuthenticatedUser,
-    @Param('farmId', ParseIntPipe) farmId: number,
+    @Param('farmId', ParseIdPipe) farmId: number,
     @Body() body: CreateHouseDto,
   ): Promise<HouseDto> {
     return this.houses.create(me, farmId, body);
@@ -38,7 +39,7 @@ export class HousesController {
 
   @Get('houses/:houseId')
   @ApiOkResponse({ type: HouseDto })
-  get(@CurrentUser() me: AuthenticatedUser, @Param('houseId', ParseIntPipe) houseId: number): Promise<HouseDto> {
+  get(@CurrentUser() me: AuthenticatedUser, @Param('houseId', ParseIdPipe) houseId: number): Promise<HouseDto> {
     return this.houses.get(me, houseId);
   }
 
@@ -46,7 +47,7 @@ export class HousesController {
   @ApiOkResponse({ type: HouseDto })
   update(
     @CurrentUser() me: AuthenticatedUser,
-    @Param('houseId', ParseIntPipe) houseId: number,
+    @Param('houseId', ParseIdPipe) houseId: number,
     @Body() body: UpdateHouseDto,
   ): Promise<HouseDto> {
     return this.houses.update(me, houseId, body);
@@ -55,7 +56,7 @@ export class HousesController {
   @Delete('houses/:houseId')
   @HttpCode(204)
   @ApiNoContentResponse()
-  async remove(@CurrentUser() me: AuthenticatedUser, @Param('houseId', ParseIntPipe) houseId: number): Promise<void> {
+  async remove(@CurrentUser() me: AuthenticatedUser, @Param('houseId', ParseIdPipe) houseId: number): Promise<void> {
     await this.houses.remove(me, houseId);
   }
 }

@@ -1,4 +1,5 @@
-import { Body, Controller, Get, Header, HttpCode, Param, ParseIntPipe, Post, Put, Query, Res } from '@nestjs/common';
+import { ParseIdPipe } from '../common/pipes/parse-id.pipe';
+import { Body, Controller, Get, Header, HttpCode, Param, Post, Put, Query, Res } from '@nestjs/common';
 import {
   ApiBadRequestResponse,
   ApiBearerAuth,
@@ -60,7 +61,7 @@ export class SeasonController {
   @ApiUnprocessableEntityResponse({ description: SEASON_422 })
   seasonOfHouse(
     @CurrentUser() me: AuthenticatedUser,
-    @Param('houseId', ParseIntPipe) houseId: number,
+    @Param('houseId', ParseIdPipe) houseId: number,
     @Body() body: SeasonRequestDto,
   ): Promise<HouseSeasonEstimateDto> {
     return this.season.season(me, houseId, body);
@@ -76,7 +77,7 @@ export class SeasonController {
   @ApiUnprocessableEntityResponse({ description: SEASON_422 })
   nightDemand(
     @CurrentUser() me: AuthenticatedUser,
-    @Param('houseId', ParseIntPipe) houseId: number,
+    @Param('houseId', ParseIdPipe) houseId: number,
     @Body() body: NightDemandRequestDto,
   ): Promise<HouseNightDemandDto> {
     return this.season.nightDemand(me, houseId, body);
@@ -95,7 +96,7 @@ export class SeasonController {
   @ApiUnprocessableEntityResponse({ description: `${SEASON_422}; measures[i].field for a measure's settings` })
   measures(
     @CurrentUser() me: AuthenticatedUser,
-    @Param('houseId', ParseIntPipe) houseId: number,
+    @Param('houseId', ParseIdPipe) houseId: number,
     @Body() body: MeasuresRequestDto,
   ): Promise<MeasureComparisonDto> {
     return this.season.measures(me, houseId, body);
@@ -109,7 +110,7 @@ export class SeasonController {
   @ApiNotFoundResponse({ description: 'no such house, or not a member of its farm' })
   getCalendar(
     @CurrentUser() me: AuthenticatedUser,
-    @Param('houseId', ParseIntPipe) houseId: number,
+    @Param('houseId', ParseIdPipe) houseId: number,
   ): Promise<ProductionCalendarDto> {
     return this.calendars.get(me, houseId);
   }
@@ -125,7 +126,7 @@ export class SeasonController {
   })
   putCalendar(
     @CurrentUser() me: AuthenticatedUser,
-    @Param('houseId', ParseIntPipe) houseId: number,
+    @Param('houseId', ParseIdPipe) houseId: number,
     @Body() body: PutProductionCalendarDto,
   ): Promise<ProductionCalendarDto> {
     return this.calendars.put(me, houseId, body);
@@ -137,7 +138,7 @@ export class SeasonController {
   @ApiNotFoundResponse({ description: 'no such farm, or not a member' })
   getFuelPrices(
     @CurrentUser() me: AuthenticatedUser,
-    @Param('farmId', ParseIntPipe) farmId: number,
+    @Param('farmId', ParseIdPipe) farmId: number,
   ): Promise<FarmFuelPricesDto> {
     return this.fuelPrices.get(me, farmId);
   }
@@ -153,7 +154,7 @@ export class SeasonController {
   @ApiUnprocessableEntityResponse({ description: 'unknown fuel or a fuel listed twice (prices.i.fuelId)' })
   putFuelPrices(
     @CurrentUser() me: AuthenticatedUser,
-    @Param('farmId', ParseIntPipe) farmId: number,
+    @Param('farmId', ParseIdPipe) farmId: number,
     @Body() body: PutFuelPricesDto,
   ): Promise<FarmFuelPricesDto> {
     return this.fuelPrices.put(me, farmId, body);
@@ -168,7 +169,7 @@ export class SeasonController {
   @ApiUnprocessableEntityResponse({ description: SEASON_422 })
   budget(
     @CurrentUser() me: AuthenticatedUser,
-    @Param('farmId', ParseIntPipe) farmId: number,
+    @Param('farmId', ParseIdPipe) farmId: number,
     @Body() body: SeasonBudgetRequestDto,
   ): Promise<SeasonBudgetDto> {
     return this.budgets.budget(me, farmId, body);
@@ -185,7 +186,7 @@ export class SeasonController {
   @ApiUnprocessableEntityResponse({ description: SEASON_422 })
   async budgetCsv(
     @CurrentUser() me: AuthenticatedUser,
-    @Param('farmId', ParseIntPipe) farmId: number,
+    @Param('farmId', ParseIdPipe) farmId: number,
     @Query() query: SeasonBudgetCsvQueryDto,
     @Res({ passthrough: true }) response: Response,
   ): Promise<string> {

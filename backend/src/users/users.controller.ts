@@ -1,4 +1,5 @@
-import { Body, Controller, Delete, Get, HttpCode, Param, ParseIntPipe, Patch } from '@nestjs/common';
+import { ParseIdPipe } from '../common/pipes/parse-id.pipe';
+import { Body, Controller, Delete, Get, HttpCode, Param, Patch } from '@nestjs/common';
 import { ApiBearerAuth, ApiOkResponse, ApiTags } from '@nestjs/swagger';
 import { CurrentUser, type AuthenticatedUser } from '../common/decorators/current-user.decorator';
 import { SiteRoles } from '../common/decorators/site-roles.decorator';
@@ -29,7 +30,7 @@ export class UsersController {
   @ApiOkResponse({ type: UserDto })
   update(
     @CurrentUser() me: AuthenticatedUser,
-    @Param('id', ParseIntPipe) id: number,
+    @Param('id', ParseIdPipe) id: number,
     @Body() body: AdminUpdateUserDto,
   ): Promise<UserDto> {
     return this.users.adminUpdate(me.id, id, body);
@@ -38,7 +39,7 @@ export class UsersController {
   @Delete(':id')
   @HttpCode(204)
   @SiteRoles('admin')
-  async remove(@CurrentUser() me: AuthenticatedUser, @Param('id', ParseIntPipe) id: number): Promise<void> {
+  async remove(@CurrentUser() me: AuthenticatedUser, @Param('id', ParseIdPipe) id: number): Promise<void> {
     await this.users.remove(me.id, id);
   }
 }
