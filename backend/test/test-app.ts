@@ -43,7 +43,7 @@ export async function createTestApp(env: Record<string, string> = {}): Promise<T
     databaseFile,
     async close() {
       await app.close();
-      for (const suffix of ['', '-wal', '-shm']) rmSync(databaseFile + suffix, { force: true });
+      for (const suffix of ['', '-wal', '-shm', '.jwt-secret']) rmSync(databaseFile + suffix, { force: true });
     },
   };
 }
