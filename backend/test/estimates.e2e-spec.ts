@@ -434,7 +434,7 @@ describe('estimates (e2e)', () => {
       expectSchema(res.body, 'CoolingEstimateDto');
     });
 
-    it('POST /api/estimates/cooling refuses a malformed date (400) and an unknown pad type (422)', async () => {
+    it('POST /api/estimates/cooling refuses a malformed or impossible date (400) and an unknown pad type (422)', async () => {
       const badDate = await t.http
         .post('/api/estimates/cooling')
         .set(bearer(grower))
@@ -445,7 +445,7 @@ describe('estimates (e2e)', () => {
         .post('/api/estimates/cooling')
         .set(bearer(grower))
         .send({ house: gableHouse, site, conditions: { ...summerDay, designDate: '2026-02-30' } })
-        .expect(422);
+        .expect(400); // not on the calendar: refused with the request's other field errors
       expect(notADay.body.field).toBe('conditions.designDate');
       const pad = await t.http
         .post('/api/estimates/cooling')

@@ -1,3 +1,4 @@
+import { parse } from 'csv-parse/sync';
 import { hourlyCsv, HOURLY_MAPPING } from './temperature-csv';
 import { houseBody } from './fixtures';
 import { bearer, createTestApp, ifMatch, signIn, type TestApp } from './test-app';
@@ -626,14 +627,17 @@ describe('season, calendars, fuel prices and the farm budget (e2e)', () => {
         .expect(200);
       expect(res.headers['content-type']).toMatch(/^text\/csv/);
       expect(res.headers['content-disposition']).toMatch(/^attachment; filename=".*-us\.csv"$/);
-      const lines = (res.body as string).trim().split('\r\n');
+      // A byte-order mark first, so that spreadsheets read the file as UTF-8; every field quoted.
+      expect((res.body as string).charCodeAt(0)).toBe(0xfeff);
+      expect((res.body as string).slice(1, 8)).toBe('"House"');
+      const lines = parse(res.body as string, { bom: true }) as string[][];
       const header = lines[0];
       expect(header).toContain('Heat delivered (MMBtu)');
-      expect(header).toContain('(US gal)');
-      expect(header).toContain('(therm)');
+      expect(header.some((cell) => cell.endsWith('(US gal)'))).toBe(true);
+      expect(header.some((cell) => cell.endsWith('(therm)'))).toBe(true);
       // one row per house per month, a total per house, the farm's months and its total
       expect(lines).toHaveLength(1 + 3 * 9 + 3 + 9 + 1);
-      const last = lines[lines.length - 1].split(',');
+      const last = lines[lines.length - 1];
       expect(last[0]).toBe('All houses');
       expect(last[last.length - 1]).toBe(budget.totalCost.toFixed(2));
       // heat in MMBtu: kWh ÷ 293.07
@@ -646,10 +650,34 @@ describe('season, calendars, fuel prices and the farm budget (e2e)', () => {
         .query(SEASON)
         .set(bearer(grower))
         .expect(200);
-      const header = res.text.split('\r\n')[0];
+      const header = (parse(res.text, { bom: true }) as string[][])[0];
       expect(header).toContain('Heat delivered (kWh)');
-      expect(header).toContain('(L)');
-      expect(header).toContain('(m³)');
+      expect(header.some((cell) => cell.endsWith('(L)'))).toBe(true);
+      expect(header.some((cell) => cell.endsWith('(m³)'))).toBe(true);
+    });
+
+    it('neutralises a house name a spreadsheet would run as a formula', async () => {
+      const budget = (
+        await t.http.post(`/api/farms/${farmId}/season-budget`).set(bearer(grower)).send(SEASON).expect(200)
+      ).body;
+      const houseId = budget.houses[0].houseId as number;
+      const original = budget.houses[0].name as string;
+      const risky = ' =HYPERLINK("http://example.com","x")';
+      const stored = (
+        await t.http.patch(`/api/houses/${houseId}`).set(bearer(grower)).send({ name: risky }).expect(200)
+      ).body.name as string;
+      try {
+        const res = await t.http
+          .get(`/api/farms/${farmId}/season-budget.csv`)
+          .query(SEASON)
+          .set(bearer(grower))
+          .expect(200);
+        const names = (parse(res.text, { bom: true }) as string[][]).map((row) => row[0]);
+        expect(names).toContain(`'${stored}`);
+        expect(names.some((name) => /^\s*=/.test(name))).toBe(false);
+      } finally {
+        await t.http.patch(`/api/houses/${houseId}`).set(bearer(grower)).send({ name: original }).expect(200);
+      }
     });
   });
 });

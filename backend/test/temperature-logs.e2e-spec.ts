@@ -161,6 +161,23 @@ describe('temperature logs (e2e)', () => {
     expect(await listCount()).toBe(before);
   });
 
+  it('accepts a valid file of 124,000 hourly rows (read in a worker thread) and lists 20 bad lines once each', async () => {
+    const csv = hourlyCsv('2000-01-01', 124_000 / 24, 5);
+    expect(Buffer.byteLength(csv)).toBeLessThan(TEMPERATURE_LOG_MAX_BYTES);
+    const inspected = await inspect(csv).expect(200);
+    expect(inspected.body.dataRowCount).toBe(124_000);
+    const stored = await upload(csv, HOURLY_MAPPING, 'Fourteen years').expect(201);
+    expect(stored.body).toMatchObject({ rowCount: 124_000, readingCount: 124_000, startDate: '2000-01-01' });
+
+    // 30 bad lines, each with a bad temperature: the first 20 are listed, once each, the rest counted.
+    const lines = hourlyCsv('2001-01-01', 2).split('\n');
+    for (let index = 1; index <= 30; index++) lines[index] = lines[index].replace(/,-?[\d.]+,/, ',warm,');
+    const refused = await upload(lines.join('\n'), HOURLY_MAPPING).expect(422);
+    const listed = (refused.body.details as Problem[]).filter((d) => d.field.startsWith('line '));
+    expect(listed.map((d) => d.field)).toEqual(Array.from({ length: 20 }, (_, index) => `line ${index + 2}`));
+    expect(refused.body.details.at(-1)).toEqual({ field: 'file', message: '10 more bad lines not listed' });
+  });
+
   it('asks for the file part and a JSON mapping (400 naming the field)', async () => {
     const noFile = await t.http.post(`/api/farms/${farmId}/temperature-logs/inspect`).set(bearer(grower)).expect(400);
     expect(noFile.body.field).toBe('file');

@@ -83,7 +83,7 @@ export async function createTestApp(env: Record<string, string> = {}): Promise<T
   };
   const removeDatabase = async () => {
     if (database.dialect === 'postgres') await dropPostgresDatabase(database.name);
-    else for (const suffix of ['', '-wal', '-shm']) rmSync(database.file + suffix, { force: true });
+    else for (const suffix of ['', '-wal', '-shm', '.jwt-secret']) rmSync(database.file + suffix, { force: true });
   };
   let app: INestApplication;
   try {

@@ -2,6 +2,7 @@ import { ConflictException, Injectable, UnauthorizedException } from '@nestjs/co
 import { JwtService } from '@nestjs/jwt';
 import { InjectModel } from '@nestjs/sequelize';
 import * as bcrypt from 'bcryptjs';
+import { randomBytes } from 'node:crypto';
 import { User } from '../users/models/user.model';
 import { normaliseEmail, toUserDto, UsersService } from '../users/users.service';
 import type { LoginDto, RegisterDto, SessionDto } from './dto/auth.dto';
@@ -12,6 +13,12 @@ export const BCRYPT_ROUNDS = 10;
 
 @Injectable()
 export class AuthService {
+  /**
+   * A hash of a random password at the same cost as real ones: an unknown e-mail is checked
+   * against it, so that sign-in takes as long for an unknown account as for a wrong password.
+   */
+  private readonly dummyHash = bcrypt.hash(randomBytes(24).toString('base64'), BCRYPT_ROUNDS);
+
   constructor(
     @InjectModel(User) private readonly userModel: typeof User,
     private readonly users: UsersService,
@@ -31,8 +38,10 @@ export class AuthService {
 
   async login(body: LoginDto): Promise<SessionDto> {
     const user = await this.users.findByEmail(body.email);
-    // Same message for unknown e-mail and wrong password: do not reveal which accounts exist.
-    if (!user || !(await bcrypt.compare(body.password, user.passwordHash))) {
+    // Same message, and the same bcrypt work, for an unknown e-mail and a wrong password: neither
+    // the answer nor its timing tells which accounts exist.
+    const passwordMatches = await bcrypt.compare(body.password, user ? user.passwordHash : await this.dummyHash);
+    if (!user || !passwordMatches) {
       throw new UnauthorizedException('E-mail or password is not right');
     }
     return this.sessionFor(user);

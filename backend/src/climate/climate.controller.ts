@@ -1,4 +1,5 @@
-import { Body, Controller, Get, Headers, Param, ParseIntPipe, Put } from '@nestjs/common';
+import { ParseIdPipe } from '../common/pipes/parse-id.pipe';
+import { Body, Controller, Get, Headers, Param, Put } from '@nestjs/common';
 import { ApiBearerAuth, ApiOkResponse, ApiTags, ApiUnprocessableEntityResponse } from '@nestjs/swagger';
 import { CurrentUser, type AuthenticatedUser } from '../common/decorators/current-user.decorator';
 import { ApiVersionedWrite, IF_MATCH_HEADER } from '../common/versioning';
@@ -13,7 +14,7 @@ export class ClimateController {
 
   @Get()
   @ApiOkResponse({ type: FarmClimateDto })
-  get(@CurrentUser() me: AuthenticatedUser, @Param('farmId', ParseIntPipe) farmId: number): Promise<FarmClimateDto> {
+  get(@CurrentUser() me: AuthenticatedUser, @Param('farmId', ParseIdPipe) farmId: number): Promise<FarmClimateDto> {
     return this.climate.get(me, farmId);
   }
 
@@ -25,7 +26,7 @@ export class ClimateController {
   })
   put(
     @CurrentUser() me: AuthenticatedUser,
-    @Param('farmId', ParseIntPipe) farmId: number,
+    @Param('farmId', ParseIdPipe) farmId: number,
     @Body() body: SiteClimateDto,
     @Headers(IF_MATCH_HEADER) ifMatch?: string,
   ): Promise<FarmClimateDto> {

@@ -1,4 +1,5 @@
 import { type ArgumentMetadata, ValidationError, ValidationPipe } from '@nestjs/common';
+import { ValidateBy, ValidateIf, type ValidationOptions } from 'class-validator';
 import { FieldProblem, RequestValidationException } from './filters/all-exceptions.filter';
 import { nulCharacterProblems } from './nul-characters';
 
@@ -13,8 +14,12 @@ function flatten(errors: ValidationError[], parent = ''): FieldProblem[] {
   });
 }
 
-/** The global ValidationPipe, refusing NUL characters in bodies and query strings first. */
-class AppValidationPipe extends ValidationPipe {
+/**
+ * The global ValidationPipe. It refuses NUL characters in bodies and query strings first, and
+ * leaves path parameters the strings they arrived as: the stock pipe would turn '0x1', '1e0' and
+ * '1.0' into 1 before ParseIdPipe could refuse them.
+ */
+class ThermbayValidationPipe extends ValidationPipe {
   override async transform(value: unknown, metadata: ArgumentMetadata): Promise<unknown> {
     if (metadata.type === 'body' || metadata.type === 'query') {
       const problems = nulCharacterProblems(value);
@@ -22,14 +27,52 @@ class AppValidationPipe extends ValidationPipe {
     }
     return super.transform(value, metadata);
   }
+
+  protected transformPrimitive(value: unknown, metadata: ArgumentMetadata): unknown {
+    if (metadata.type === 'param') return value;
+    return super.transformPrimitive(value, metadata);
+  }
 }
 
 /** The one validation pipe: strips nothing silently (unknown fields are an error) and converts types. */
 export function createValidationPipe(): ValidationPipe {
-  return new AppValidationPipe({
+  return new ThermbayValidationPipe({
     whitelist: true,
     forbidNonWhitelisted: true,
     transform: true,
     exceptionFactory: (errors) => new RequestValidationException(flatten(errors)),
   });
+}
+
+/**
+ * The field may be left out, but not sent as null. class-validator's IsOptional lets null
+ * through as well, which then reaches the service as if it were a value (a NOT NULL column,
+ * `conditions.x` of null). Fields where null means something (no curtain, no note) keep
+ * IsOptional; every other optional field uses this.
+ */
+export function Omittable(options?: ValidationOptions): PropertyDecorator {
+  return ValidateIf((_object, value) => value !== undefined, options);
+}
+
+/** A day of the calendar written YYYY-MM-DD (so 2027-02-29 and 2027-13-45 are refused, not rolled over). */
+export function isCalendarDate(value: unknown): boolean {
+  if (typeof value !== 'string') return false;
+  const match = /^(\d{4})-(\d{2})-(\d{2})$/.exec(value);
+  if (!match) return false;
+  const [year, month, day] = [Number(match[1]), Number(match[2]), Number(match[3])];
+  const date = new Date(Date.UTC(year, month - 1, day));
+  return date.getUTCFullYear() === year && date.getUTCMonth() === month - 1 && date.getUTCDate() === day;
+}
+
+export function IsCalendarDate(options?: ValidationOptions): PropertyDecorator {
+  return ValidateBy(
+    {
+      name: 'isCalendarDate',
+      validator: {
+        validate: (value) => isCalendarDate(value),
+        defaultMessage: (args) => `${args?.property} must be a day of the calendar written YYYY-MM-DD`,
+      },
+    },
+    options,
+  );
 }

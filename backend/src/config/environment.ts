@@ -1,4 +1,7 @@
 import { Logger } from '@nestjs/common';
+import { randomBytes } from 'node:crypto';
+import { chmodSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
+import { dirname, resolve } from 'node:path';
 
 /**
  * The environment, checked once at boot. A bad value stops the app with a message that names
@@ -30,7 +33,34 @@ export interface Environment {
   WEATHER_ATTEMPTS: number;
 }
 
-const DEVELOPMENT_JWT_SECRET = 'thermbay-development-secret-not-for-production';
+/** Where the generated signing secret is kept: beside the database file, readable by its owner only. */
+export function jwtSecretFileFor(databaseFile: string): string {
+  return `${resolve(databaseFile)}.jwt-secret`;
+}
+
+/**
+ * The signing secret when JWT_SECRET is not set (outside production): generated at random on
+ * the first start and kept beside the database file (mode 600), so that tokens outlive a restart
+ * but nobody can sign one from a value written in the source. An in-memory database gets a
+ * secret for the life of the process.
+ */
+function generatedJwtSecret(databaseFile: string): string {
+  if (databaseFile === ':memory:') return randomBytes(48).toString('base64url');
+  const file = jwtSecretFileFor(databaseFile);
+  mkdirSync(dirname(file), { recursive: true });
+  try {
+    writeFileSync(file, randomBytes(48).toString('base64url') + '\n', { mode: 0o600, flag: 'wx' });
+    new Logger('Config').warn(
+      `JWT_SECRET is not set: generated a signing secret in ${file}. Set JWT_SECRET before real use.`,
+    );
+  } catch (error) {
+    if ((error as NodeJS.ErrnoException).code !== 'EEXIST') throw error;
+  }
+  chmodSync(file, 0o600);
+  const secret = readFileSync(file, 'utf8').trim();
+  if (secret.length < 32) throw new Error(`${file} holds no usable secret; delete it to have a new one generated`);
+  return secret;
+}
 
 function parseBoolean(name: string, raw: string | undefined, fallback: boolean): boolean {
   if (raw === undefined || raw === '') return fallback;
@@ -107,56 +137,63 @@ export function validateEnvironment(raw: Record<string, unknown>): Environment {
   if (!['development', 'production', 'test'].includes(nodeEnv)) {
     throw new Error(`NODE_ENV must be development, production or test (got "${env.NODE_ENV}")`);
   }
+  const databaseFile = (env.DATABASE_FILE ?? 'data/thermbay.sqlite').trim();
+  if (databaseFile === '') throw new Error('DATABASE_FILE must not be empty');
+  const databaseUrl = parseDatabaseUrl(env.DATABASE_URL);
+  const port = parseInteger('PORT', env.PORT, 3000, 1, 65535);
+  const jwtExpiresInSeconds = parseInteger(
+    'JWT_EXPIRES_IN_SECONDS',
+    env.JWT_EXPIRES_IN_SECONDS,
+    12 * 3600,
+    60,
+    30 * 24 * 3600,
+  );
+  const demoSeed = parseBoolean('DEMO_SEED', env.DEMO_SEED, nodeEnv !== 'production');
+  const perAddress = parseInteger('LOGIN_RATE_LIMIT_PER_MINUTE', env.LOGIN_RATE_LIMIT_PER_MINUTE, 10, 1, 10000);
+  // Larger than the per-address limit by default, so that one address using up its own
+  // allowance on an account does not lock the account's owner out from elsewhere.
+  const perAccount = parseInteger(
+    'LOGIN_RATE_LIMIT_PER_ACCOUNT_PER_MINUTE',
+    env.LOGIN_RATE_LIMIT_PER_ACCOUNT_PER_MINUTE,
+    Math.min(3 * perAddress, 10000),
+    1,
+    10000,
+  );
+  const limiterStore = (env.LOGIN_LIMITER_STORE ?? '').trim() || (databaseUrl ? 'database' : 'memory');
+  if (limiterStore !== 'memory' && limiterStore !== 'database') {
+    throw new Error(`LOGIN_LIMITER_STORE must be memory or database (got "${env.LOGIN_LIMITER_STORE}")`);
+  }
+  const trustProxy = parseTrustProxy(env.TRUST_PROXY);
+  const weatherApiUrl = parseHttpUrl('WEATHER_API_URL', env.WEATHER_API_URL);
+  const weatherStandInPort = parseInteger('WEATHER_STANDIN_PORT', env.WEATHER_STANDIN_PORT, 0, 0, 65535);
+  const weatherTimeoutMs = parseInteger('WEATHER_TIMEOUT_MS', env.WEATHER_TIMEOUT_MS, 30_000, 100, 600_000);
+  const weatherAttempts = parseInteger('WEATHER_ATTEMPTS', env.WEATHER_ATTEMPTS, 3, 1, 10);
+  // Last, once everything else is valid: a bad setting must not leave a secret file behind.
   let jwtSecret = env.JWT_SECRET ?? '';
   if (jwtSecret === '') {
     if (nodeEnv === 'production') {
       throw new Error('JWT_SECRET is required when NODE_ENV=production (use a long random string)');
     }
-    jwtSecret = DEVELOPMENT_JWT_SECRET;
-    if (nodeEnv === 'development') {
-      new Logger('Config').warn('JWT_SECRET is not set: using a development secret. Set it before real use.');
-    }
+    jwtSecret = generatedJwtSecret(databaseFile);
   } else if (jwtSecret.length < 16) {
     throw new Error('JWT_SECRET must be at least 16 characters long');
   }
-  const databaseFile = (env.DATABASE_FILE ?? 'data/thermbay.sqlite').trim();
-  if (databaseFile === '') throw new Error('DATABASE_FILE must not be empty');
-  const databaseUrl = parseDatabaseUrl(env.DATABASE_URL);
-  const perAddress = parseInteger('LOGIN_RATE_LIMIT_PER_MINUTE', env.LOGIN_RATE_LIMIT_PER_MINUTE, 10, 1, 10000);
-  const limiterStore = (env.LOGIN_LIMITER_STORE ?? '').trim() || (databaseUrl ? 'database' : 'memory');
-  if (limiterStore !== 'memory' && limiterStore !== 'database') {
-    throw new Error(`LOGIN_LIMITER_STORE must be memory or database (got "${env.LOGIN_LIMITER_STORE}")`);
-  }
   return {
     NODE_ENV: nodeEnv,
-    PORT: parseInteger('PORT', env.PORT, 3000, 1, 65535),
+    PORT: port,
     DATABASE_FILE: databaseFile,
     DATABASE_URL: databaseUrl,
     JWT_SECRET: jwtSecret,
-    JWT_EXPIRES_IN_SECONDS: parseInteger(
-      'JWT_EXPIRES_IN_SECONDS',
-      env.JWT_EXPIRES_IN_SECONDS,
-      12 * 3600,
-      60,
-      30 * 24 * 3600,
-    ),
-    DEMO_SEED: parseBoolean('DEMO_SEED', env.DEMO_SEED, nodeEnv !== 'production'),
+    JWT_EXPIRES_IN_SECONDS: jwtExpiresInSeconds,
+    DEMO_SEED: demoSeed,
     LOGIN_RATE_LIMIT_PER_MINUTE: perAddress,
-    // Larger than the per-address limit by default, so that one address using up its own
-    // allowance on an account does not lock the account's owner out from elsewhere.
-    LOGIN_RATE_LIMIT_PER_ACCOUNT_PER_MINUTE: parseInteger(
-      'LOGIN_RATE_LIMIT_PER_ACCOUNT_PER_MINUTE',
-      env.LOGIN_RATE_LIMIT_PER_ACCOUNT_PER_MINUTE,
-      Math.min(3 * perAddress, 10000),
-      1,
-      10000,
-    ),
+    LOGIN_RATE_LIMIT_PER_ACCOUNT_PER_MINUTE: perAccount,
     LOGIN_LIMITER_STORE: limiterStore,
-    TRUST_PROXY: parseTrustProxy(env.TRUST_PROXY),
+    TRUST_PROXY: trustProxy,
     FRONTEND_DIST: env.FRONTEND_DIST === '' ? null : (env.FRONTEND_DIST ?? null),
-    WEATHER_API_URL: parseHttpUrl('WEATHER_API_URL', env.WEATHER_API_URL),
-    WEATHER_STANDIN_PORT: parseInteger('WEATHER_STANDIN_PORT', env.WEATHER_STANDIN_PORT, 0, 0, 65535),
-    WEATHER_TIMEOUT_MS: parseInteger('WEATHER_TIMEOUT_MS', env.WEATHER_TIMEOUT_MS, 30_000, 100, 600_000),
-    WEATHER_ATTEMPTS: parseInteger('WEATHER_ATTEMPTS', env.WEATHER_ATTEMPTS, 3, 1, 10),
+    WEATHER_API_URL: weatherApiUrl,
+    WEATHER_STANDIN_PORT: weatherStandInPort,
+    WEATHER_TIMEOUT_MS: weatherTimeoutMs,
+    WEATHER_ATTEMPTS: weatherAttempts,
   };
 }

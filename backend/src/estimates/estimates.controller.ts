@@ -1,4 +1,5 @@
-import { Body, Controller, HttpCode, Param, ParseIntPipe, Post } from '@nestjs/common';
+import { ParseIdPipe } from '../common/pipes/parse-id.pipe';
+import { Body, Controller, HttpCode, Param, Post } from '@nestjs/common';
 import {
   ApiBadRequestResponse,
   ApiBearerAuth,
@@ -60,7 +61,7 @@ export class EstimatesController {
   })
   heatingForHouse(
     @CurrentUser() me: AuthenticatedUser,
-    @Param('houseId', ParseIntPipe) houseId: number,
+    @Param('houseId', ParseIdPipe) houseId: number,
     @Body() body: HouseHeatingEstimateRequestDto,
   ): Promise<HouseHeatingEstimateDto> {
     return this.estimates.heatingForHouse(me, houseId, body.conditions);
@@ -80,7 +81,7 @@ export class EstimatesController {
   })
   coolingForHouse(
     @CurrentUser() me: AuthenticatedUser,
-    @Param('houseId', ParseIntPipe) houseId: number,
+    @Param('houseId', ParseIdPipe) houseId: number,
     @Body() body: HouseCoolingEstimateRequestDto,
   ): Promise<HouseCoolingEstimateDto> {
     return this.estimates.coolingForHouse(me, houseId, body.conditions);

@@ -1,4 +1,5 @@
-import { Body, Controller, Delete, Get, Headers, HttpCode, Param, ParseIntPipe, Patch, Post } from '@nestjs/common';
+import { ParseIdPipe } from '../common/pipes/parse-id.pipe';
+import { Body, Controller, Delete, Get, Headers, HttpCode, Param, Patch, Post } from '@nestjs/common';
 import {
   ApiBearerAuth,
   ApiConflictResponse,
@@ -54,7 +55,7 @@ export class FarmsController {
 
   @Get('farms/:farmId')
   @ApiOkResponse({ type: FarmDto })
-  get(@CurrentUser() me: AuthenticatedUser, @Param('farmId', ParseIntPipe) farmId: number): Promise<FarmDto> {
+  get(@CurrentUser() me: AuthenticatedUser, @Param('farmId', ParseIdPipe) farmId: number): Promise<FarmDto> {
     return this.farms.get(me, farmId);
   }
 
@@ -63,7 +64,7 @@ export class FarmsController {
   @ApiVersionedWrite('farm')
   update(
     @CurrentUser() me: AuthenticatedUser,
-    @Param('farmId', ParseIntPipe) farmId: number,
+    @Param('farmId', ParseIdPipe) farmId: number,
     @Body() body: UpdateFarmDto,
     @Headers(IF_MATCH_HEADER) ifMatch?: string,
   ): Promise<FarmDto> {
@@ -73,13 +74,13 @@ export class FarmsController {
   @Delete('farms/:farmId')
   @HttpCode(204)
   @ApiNoContentResponse()
-  async remove(@CurrentUser() me: AuthenticatedUser, @Param('farmId', ParseIntPipe) farmId: number): Promise<void> {
+  async remove(@CurrentUser() me: AuthenticatedUser, @Param('farmId', ParseIdPipe) farmId: number): Promise<void> {
     await this.farms.remove(me, farmId);
   }
 
   @Get('farms/:farmId/members')
   @ApiOkResponse({ type: MemberDto, isArray: true })
-  members(@CurrentUser() me: AuthenticatedUser, @Param('farmId', ParseIntPipe) farmId: number): Promise<MemberDto[]> {
+  members(@CurrentUser() me: AuthenticatedUser, @Param('farmId', ParseIdPipe) farmId: number): Promise<MemberDto[]> {
     return this.farms.members(me, farmId);
   }
 
@@ -87,7 +88,7 @@ export class FarmsController {
   @ApiCreatedResponse({ type: MemberDto })
   addMember(
     @CurrentUser() me: AuthenticatedUser,
-    @Param('farmId', ParseIntPipe) farmId: number,
+    @Param('farmId', ParseIdPipe) farmId: number,
     @Body() body: AddMemberDto,
   ): Promise<MemberDto> {
     return this.farms.addMember(me, farmId, body);
@@ -98,8 +99,8 @@ export class FarmsController {
   @ApiConflictResponse({ description: 'the member is the farm’s last owner' })
   updateMember(
     @CurrentUser() me: AuthenticatedUser,
-    @Param('farmId', ParseIntPipe) farmId: number,
-    @Param('userId', ParseIntPipe) userId: number,
+    @Param('farmId', ParseIdPipe) farmId: number,
+    @Param('userId', ParseIdPipe) userId: number,
     @Body() body: UpdateMemberDto,
   ): Promise<MemberDto> {
     return this.farms.updateMember(me, farmId, userId, body);
@@ -111,8 +112,8 @@ export class FarmsController {
   @ApiConflictResponse({ description: 'the member is the farm’s last owner' })
   async removeMember(
     @CurrentUser() me: AuthenticatedUser,
-    @Param('farmId', ParseIntPipe) farmId: number,
-    @Param('userId', ParseIntPipe) userId: number,
+    @Param('farmId', ParseIdPipe) farmId: number,
+    @Param('userId', ParseIdPipe) userId: number,
   ): Promise<void> {
     await this.farms.removeMember(me, farmId, userId);
   }

@@ -1,4 +1,5 @@
-import { Body, Controller, Delete, Get, Headers, HttpCode, Param, ParseIntPipe, Patch, Post } from '@nestjs/common';
+import { ParseIdPipe } from '../common/pipes/parse-id.pipe';
+import { Body, Controller, Delete, Get, Headers, HttpCode, Param, Patch, Post } from '@nestjs/common';
 import {
   ApiBearerAuth,
   ApiCreatedResponse,
@@ -20,7 +21,7 @@ export class HousesController {
 
   @Get('farms/:farmId/houses')
   @ApiOkResponse({ type: HouseDto, isArray: true })
-  list(@CurrentUser() me: AuthenticatedUser, @Param('farmId', ParseIntPipe) farmId: number): Promise<HouseDto[]> {
+  list(@CurrentUser() me: AuthenticatedUser, @Param('farmId', ParseIdPipe) farmId: number): Promise<HouseDto[]> {
     return this.houses.list(me, farmId);
   }
 
@@ -31,7 +32,7 @@ export class HousesController {
   })
   create(
     @CurrentUser() me: AuthenticatedUser,
-    @Param('farmId', ParseIntPipe) farmId: number,
+    @Param('farmId', ParseIdPipe) farmId: number,
     @Body() body: CreateHouseDto,
   ): Promise<HouseDto> {
     return this.houses.create(me, farmId, body);
@@ -39,7 +40,7 @@ export class HousesController {
 
   @Get('houses/:houseId')
   @ApiOkResponse({ type: HouseDto })
-  get(@CurrentUser() me: AuthenticatedUser, @Param('houseId', ParseIntPipe) houseId: number): Promise<HouseDto> {
+  get(@CurrentUser() me: AuthenticatedUser, @Param('houseId', ParseIdPipe) houseId: number): Promise<HouseDto> {
     return this.houses.get(me, houseId);
   }
 
@@ -51,7 +52,7 @@ export class HousesController {
   })
   update(
     @CurrentUser() me: AuthenticatedUser,
-    @Param('houseId', ParseIntPipe) houseId: number,
+    @Param('houseId', ParseIdPipe) houseId: number,
     @Body() body: UpdateHouseDto,
     @Headers(IF_MATCH_HEADER) ifMatch?: string,
   ): Promise<HouseDto> {
@@ -61,7 +62,7 @@ export class HousesController {
   @Delete('houses/:houseId')
   @HttpCode(204)
   @ApiNoContentResponse()
-  async remove(@CurrentUser() me: AuthenticatedUser, @Param('houseId', ParseIntPipe) houseId: number): Promise<void> {
+  async remove(@CurrentUser() me: AuthenticatedUser, @Param('houseId', ParseIdPipe) houseId: number): Promise<void> {
     await this.houses.remove(me, houseId);
   }
 }

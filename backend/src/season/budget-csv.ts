@@ -6,13 +6,24 @@ export type CsvUnits = 'si' | 'us';
 /** kWh in one million Btu (from the Btu's definition in joules). */
 export const KWH_PER_MMBTU = (1e6 * JOULES_PER_BTU) / JOULES_PER_KWH;
 
-/** A field as CSV writes it: quoted when needed, and never read as a formula by a spreadsheet. */
+/** A cell that a spreadsheet would run as a formula: =, +, -, @, or their full-width forms, after any whitespace. */
+const FORMULA_START = /^[\s\u3000]*[=+\-@\t\r\uFF1D\uFF0B\uFF0D\uFF20]/;
+/** A plain number (negative ones included): written as it is, since no spreadsheet runs it. */
+const PLAIN_NUMBER = /^-?\d+(\.\d+)?$/;
+
+/**
+ * A field as the exports write it: always quoted, and never read as a formula by a spreadsheet
+ * (text that begins like one gets a leading apostrophe, which spreadsheets show as text).
+ */
 export function csvField(value: string | number | null): string {
-  if (value === null) return '';
+  if (value === null) return '""';
   let text = String(value);
-  if (typeof value === 'string' && /^[=+\-@\t\r]/.test(text)) text = `'${text}`;
-  return /[",\r\n]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
+  if (!PLAIN_NUMBER.test(text) && FORMULA_START.test(text)) text = `'${text}`;
+  return `"${text.replace(/"/g, '""')}"`;
 }
+
+/** UTF-8 byte-order mark: spreadsheets then read "m³" and "–" as written rather than as a legacy code page. */
+export const UTF8_BOM = '\uFEFF';
 
 function fixed(value: number | null, digits: number): string | null {
   return value === null ? null : value.toFixed(digits);
@@ -93,10 +104,5 @@ export function budgetCsv(budget: SeasonBudgetDto, units: CsvUnits): string {
     ...fuels.map((fuel) => quantity(fuel.fuelQuantitySi, fuel.fuelQuantityUs)),
     budget.totalCost.toFixed(2),
   ]);
-  return lines.map((cells) => cells.map(csvCell).join(',')).join('\r\n') + '\r\n';
-}
-
-/** Numbers (negative ones included) are written as they are; text is quoted and guarded. */
-function csvCell(cell: string): string {
-  return /^-?\d+(\.\d+)?$/.test(cell) ? cell : csvField(cell);
+  return UTF8_BOM + lines.map((cells) => cells.map(csvField).join(',')).join('\r\n') + '\r\n';
 }

@@ -1,3 +1,4 @@
+import { ParseIdPipe } from '../common/pipes/parse-id.pipe';
 import {
   Body,
   Controller,
@@ -6,7 +7,7 @@ import {
   Headers,
   HttpCode,
   Param,
-  ParseIntPipe,
+ 
   Post,
   Put,
   Query,
@@ -74,7 +75,7 @@ export class SeasonController {
   @ApiUnprocessableEntityResponse({ description: SEASON_422 })
   seasonOfHouse(
     @CurrentUser() me: AuthenticatedUser,
-    @Param('houseId', ParseIntPipe) houseId: number,
+    @Param('houseId', ParseIdPipe) houseId: number,
     @Body() body: SeasonRequestDto,
   ): Promise<HouseSeasonEstimateDto> {
     return this.season.season(me, houseId, body);
@@ -90,7 +91,7 @@ export class SeasonController {
   @ApiUnprocessableEntityResponse({ description: SEASON_422 })
   nightDemand(
     @CurrentUser() me: AuthenticatedUser,
-    @Param('houseId', ParseIntPipe) houseId: number,
+    @Param('houseId', ParseIdPipe) houseId: number,
     @Body() body: NightDemandRequestDto,
   ): Promise<HouseNightDemandDto> {
     return this.season.nightDemand(me, houseId, body);
@@ -109,7 +110,7 @@ export class SeasonController {
   @ApiUnprocessableEntityResponse({ description: `${SEASON_422}; measures[i].field for a measure's settings` })
   measures(
     @CurrentUser() me: AuthenticatedUser,
-    @Param('houseId', ParseIntPipe) houseId: number,
+    @Param('houseId', ParseIdPipe) houseId: number,
     @Body() body: MeasuresRequestDto,
   ): Promise<MeasureComparisonDto> {
     return this.season.measures(me, houseId, body);
@@ -123,7 +124,7 @@ export class SeasonController {
   @ApiNotFoundResponse({ description: 'no such house, or not a member of its farm' })
   getCalendar(
     @CurrentUser() me: AuthenticatedUser,
-    @Param('houseId', ParseIntPipe) houseId: number,
+    @Param('houseId', ParseIdPipe) houseId: number,
   ): Promise<ProductionCalendarDto> {
     return this.calendars.get(me, houseId);
   }
@@ -140,7 +141,7 @@ export class SeasonController {
   })
   putCalendar(
     @CurrentUser() me: AuthenticatedUser,
-    @Param('houseId', ParseIntPipe) houseId: number,
+    @Param('houseId', ParseIdPipe) houseId: number,
     @Body() body: PutProductionCalendarDto,
     @Headers(IF_MATCH_HEADER) ifMatch?: string,
   ): Promise<ProductionCalendarDto> {
@@ -153,7 +154,7 @@ export class SeasonController {
   @ApiNotFoundResponse({ description: 'no such farm, or not a member' })
   getFuelPrices(
     @CurrentUser() me: AuthenticatedUser,
-    @Param('farmId', ParseIntPipe) farmId: number,
+    @Param('farmId', ParseIdPipe) farmId: number,
   ): Promise<FarmFuelPricesDto> {
     return this.fuelPrices.get(me, farmId);
   }
@@ -170,7 +171,7 @@ export class SeasonController {
   @ApiUnprocessableEntityResponse({ description: 'unknown fuel or a fuel listed twice (prices.i.fuelId)' })
   putFuelPrices(
     @CurrentUser() me: AuthenticatedUser,
-    @Param('farmId', ParseIntPipe) farmId: number,
+    @Param('farmId', ParseIdPipe) farmId: number,
     @Body() body: PutFuelPricesDto,
     @Headers(IF_MATCH_HEADER) ifMatch?: string,
   ): Promise<FarmFuelPricesDto> {
@@ -186,7 +187,7 @@ export class SeasonController {
   @ApiUnprocessableEntityResponse({ description: SEASON_422 })
   budget(
     @CurrentUser() me: AuthenticatedUser,
-    @Param('farmId', ParseIntPipe) farmId: number,
+    @Param('farmId', ParseIdPipe) farmId: number,
     @Body() body: SeasonBudgetRequestDto,
   ): Promise<SeasonBudgetDto> {
     return this.budgets.budget(me, farmId, body);
@@ -203,7 +204,7 @@ export class SeasonController {
   @ApiUnprocessableEntityResponse({ description: SEASON_422 })
   async budgetCsv(
     @CurrentUser() me: AuthenticatedUser,
-    @Param('farmId', ParseIntPipe) farmId: number,
+    @Param('farmId', ParseIdPipe) farmId: number,
     @Query() query: SeasonBudgetCsvQueryDto,
     @Res({ passthrough: true }) response: Response,
   ): Promise<string> {

@@ -1,3 +1,4 @@
+import { ParseIdPipe } from '../common/pipes/parse-id.pipe';
 import {
   Body,
   CallHandler,
@@ -9,7 +10,6 @@ import {
   Injectable,
   NestInterceptor,
   Param,
-  ParseIntPipe,
   PayloadTooLargeException,
   Post,
   UploadedFile,
@@ -92,7 +92,7 @@ export class TemperatureLogsController {
   @ApiUnprocessableEntityResponse({ description: LINE_ERRORS })
   inspect(
     @CurrentUser() me: AuthenticatedUser,
-    @Param('farmId', ParseIntPipe) farmId: number,
+    @Param('farmId', ParseIdPipe) farmId: number,
     @UploadedFile() file: UploadedCsvFile | undefined,
   ): Promise<TemperatureCsvInspectionDto> {
     return this.logs.inspect(me, farmId, file);
@@ -130,7 +130,7 @@ export class TemperatureLogsController {
   @ApiUnprocessableEntityResponse({ description: LINE_ERRORS })
   upload(
     @CurrentUser() me: AuthenticatedUser,
-    @Param('farmId', ParseIntPipe) farmId: number,
+    @Param('farmId', ParseIdPipe) farmId: number,
     @UploadedFile() file: UploadedCsvFile | undefined,
     @Body() body: UploadTemperatureLogDto,
   ): Promise<TemperatureLogDto> {
@@ -143,7 +143,7 @@ export class TemperatureLogsController {
   @ApiNotFoundResponse({ description: 'no such farm, or not a member' })
   list(
     @CurrentUser() me: AuthenticatedUser,
-    @Param('farmId', ParseIntPipe) farmId: number,
+    @Param('farmId', ParseIdPipe) farmId: number,
   ): Promise<TemperatureLogDto[]> {
     return this.logs.list(me, farmId);
   }
@@ -156,7 +156,7 @@ export class TemperatureLogsController {
   @ApiNotFoundResponse({ description: 'no such log, or not a member of its farm' })
   get(
     @CurrentUser() me: AuthenticatedUser,
-    @Param('logId', ParseIntPipe) logId: number,
+    @Param('logId', ParseIdPipe) logId: number,
   ): Promise<TemperatureLogDetailDto> {
     return this.logs.get(me, logId);
   }
@@ -167,7 +167,7 @@ export class TemperatureLogsController {
   @ApiNoContentResponse()
   @ApiForbiddenResponse({ description: 'role lacks house:write' })
   @ApiNotFoundResponse({ description: 'no such log, or not a member of its farm' })
-  async remove(@CurrentUser() me: AuthenticatedUser, @Param('logId', ParseIntPipe) logId: number): Promise<void> {
+  async remove(@CurrentUser() me: AuthenticatedUser, @Param('logId', ParseIdPipe) logId: number): Promise<void> {
     await this.logs.remove(me, logId);
   }
 }

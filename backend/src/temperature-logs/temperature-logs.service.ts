@@ -5,12 +5,8 @@ import { validateSync, type ValidationError } from 'class-validator';
 import type { AuthenticatedUser } from '../common/decorators/current-user.decorator';
 import { RequestValidationException, type FieldProblem } from '../common/filters/all-exceptions.filter';
 import type { Permission } from '../common/permissions';
-import {
-  inspectTemperatureCsv,
-  parseTemperatureCsv,
-  type TemperatureColumnMapping,
-  type TemperatureLogReading,
-} from './csv/temperature-log-csv';
+import { type TemperatureColumnMapping, type TemperatureLogReading } from './csv/temperature-log-csv';
+import { TemperatureCsvWorkers } from './csv/temperature-csv-workers';
 import { EngineInputError } from '@thermbay/engine/errors';
 import { FarmAccessService } from '../farms/farm-access.service';
 import {
@@ -109,6 +105,7 @@ export class TemperatureLogsService {
   constructor(
     @InjectModel(TemperatureLog) private readonly logs: typeof TemperatureLog,
     private readonly access: FarmAccessService,
+    private readonly workers: TemperatureCsvWorkers,
   ) {}
 
   async inspect(
@@ -118,7 +115,7 @@ export class TemperatureLogsService {
   ): Promise<TemperatureCsvInspectionDto> {
     // Inspecting is the first step of an upload, so it needs the upload's permission.
     await this.access.require(user, farmId, 'house:write');
-    return inspectTemperatureCsv(new Uint8Array(requireFile(file).buffer));
+    return this.workers.inspect(new Uint8Array(requireFile(file).buffer));
   }
 
   async upload(
@@ -130,17 +127,30 @@ export class TemperatureLogsService {
     await this.access.require(user, farmId, 'house:write');
     const bytes = new Uint8Array(requireFile(file).buffer);
     const mapping = parseMapping(body.mapping);
-    const parsed = parseTemperatureCsv(bytes, mapping);
-    const row = await this.logs.create({
-      farmId,
-      name: body.name.trim(),
-      resolution: parsed.resolution,
-      startDate: parsed.startDate,
-      endDate: parsed.endDate,
-      rowCount: parsed.rowCount,
-      readingCount: parsed.readings.length,
-      mapping,
-      readings: parsed.readings,
+    const parsed = await this.workers.parse(bytes, mapping);
+    const sequelize = this.logs.sequelize!;
+    const row = await sequelize.transaction(async (transaction) => {
+      const created = await this.logs.create(
+        {
+          farmId,
+          name: body.name.trim(),
+          resolution: parsed.resolution,
+          startDate: parsed.startDate,
+          endDate: parsed.endDate,
+          rowCount: parsed.rowCount,
+          readingCount: parsed.readingCount,
+          mapping,
+          readings: [],
+        },
+        { transaction },
+      );
+      // The worker wrote the readings as JSON text: store that text as it is rather than have
+      // the ORM rebuild and re-serialise a year of readings on the main thread.
+      await sequelize.query('UPDATE temperature_logs SET readings = $readings WHERE id = $id', {
+        bind: { readings: parsed.readingsJson, id: created.id },
+        transaction,
+      });
+      return created;
     });
     return temperatureLogToDto(row);
   }

@@ -1,4 +1,5 @@
-import { Body, Controller, Delete, Get, HttpCode, Param, ParseIntPipe, Patch } from '@nestjs/common';
+import { ParseIdPipe } from '../common/pipes/parse-id.pipe';
+import { Body, Controller, Delete, Get, HttpCode, Param, Patch } from '@nestjs/common';
 import {
   ApiBearerAuth,
   ApiConflictResponse,
@@ -45,7 +46,7 @@ export class UsersController {
   @ApiOkResponse({ type: UserDto })
   update(
     @CurrentUser() me: AuthenticatedUser,
-    @Param('id', ParseIntPipe) id: number,
+    @Param('id', ParseIdPipe) id: number,
     @Body() body: AdminUpdateUserDto,
   ): Promise<UserDto> {
     return this.users.adminUpdate(me.id, id, body);
@@ -56,7 +57,7 @@ export class UsersController {
   @SiteRoles('admin')
   @ApiNoContentResponse()
   @ApiConflictResponse({ description: 'the account is the only owner of a farm; the farms are named in details' })
-  async remove(@CurrentUser() me: AuthenticatedUser, @Param('id', ParseIntPipe) id: number): Promise<void> {
+  async remove(@CurrentUser() me: AuthenticatedUser, @Param('id', ParseIdPipe) id: number): Promise<void> {
     await this.users.remove(me.id, id);
   }
 }

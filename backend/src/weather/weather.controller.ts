@@ -1,4 +1,5 @@
-import { Controller, Get, Param, ParseIntPipe, Post, Query } from '@nestjs/common';
+import { Controller, Get, Param, Post, Query } from '@nestjs/common';
+import { ParseIdPipe } from '../common/pipes/parse-id.pipe';
 import {
   ApiBadGatewayResponse,
   ApiBearerAuth,
@@ -9,13 +10,7 @@ import {
 } from '@nestjs/swagger';
 import { CurrentUser, type AuthenticatedUser } from '../common/decorators/current-user.decorator';
 import { TemperatureLogDto } from '../temperature-logs/dto/temperature-log.dto';
-import {
-  ClimateProposalDto,
-  ClimateProposalQueryDto,
-  WeatherSourceDto,
-  WeatherYearParamsDto,
-  WeatherYearStatusDto,
-} from './dto/weather.dto';
+import { ClimateProposalDto, ClimateProposalQueryDto, WeatherSourceDto, WeatherYearStatusDto } from './dto/weather.dto';
 import { WeatherService } from './weather.service';
 
 @ApiTags('weather')
@@ -28,7 +23,7 @@ export class WeatherController {
   @ApiOkResponse({ type: WeatherSourceDto, description: 'where weather history comes from (stand-in or service)' })
   source(
     @CurrentUser() me: AuthenticatedUser,
-    @Param('farmId', ParseIntPipe) farmId: number,
+    @Param('farmId', ParseIdPipe) farmId: number,
   ): Promise<WeatherSourceDto> {
     return this.weather.sourceForFarm(me, farmId);
   }
@@ -44,9 +39,10 @@ export class WeatherController {
   @ApiGatewayTimeoutResponse({ description: 'the weather service did not answer in time; nothing stored' })
   fetchYear(
     @CurrentUser() me: AuthenticatedUser,
-    @Param() params: WeatherYearParamsDto,
+    @Param('farmId', ParseIdPipe) farmId: number,
+    @Param('year', ParseIdPipe) year: number,
   ): Promise<WeatherYearStatusDto> {
-    return this.weather.fetchYear(me, params.farmId, params.year);
+    return this.weather.fetchYear(me, farmId, year);
   }
 
   @Post('years/:year/temperature-log')
@@ -57,8 +53,12 @@ export class WeatherController {
   @ApiBadGatewayResponse({
     description: 'the weather service could not be reached or answered garbage; nothing stored',
   })
-  keepAsLog(@CurrentUser() me: AuthenticatedUser, @Param() params: WeatherYearParamsDto): Promise<TemperatureLogDto> {
-    return this.weather.keepYearAsTemperatureLog(me, params.farmId, params.year);
+  keepAsLog(
+    @CurrentUser() me: AuthenticatedUser,
+    @Param('farmId', ParseIdPipe) farmId: number,
+    @Param('year', ParseIdPipe) year: number,
+  ): Promise<TemperatureLogDto> {
+    return this.weather.keepYearAsTemperatureLog(me, farmId, year);
   }
 
   @Get('climate-proposal')
@@ -69,7 +69,7 @@ export class WeatherController {
   @ApiBadGatewayResponse({ description: 'the weather service could not be reached or answered garbage' })
   proposal(
     @CurrentUser() me: AuthenticatedUser,
-    @Param('farmId', ParseIntPipe) farmId: number,
+    @Param('farmId', ParseIdPipe) farmId: number,
     @Query() query: ClimateProposalQueryDto,
   ): Promise<ClimateProposalDto> {
     return this.weather.proposeClimate(me, farmId, query.fromYear, query.toYear);

@@ -1,3 +1,4 @@
+import { maxOf } from '../numbers';
 import { standardAtmosphericPressurePa } from '../psychrometrics';
 import type { ReferenceData } from '../reference-data.types';
 import { clearSkyIrradiance } from '../solar/clear-sky';
@@ -131,7 +132,7 @@ export function designDayBalance(input: DesignDayInput, ref: ReferenceData): Des
   const humidityRatio = humidityRatioFromWetBulb(input.summerDesignC, input.summerDesignWetBulbC, pressurePa);
   const cpJPerKgK = airSpecificHeat(ref).value;
   const outdoor = outdoorTemperatureProfileC(input.summerDesignC, input.dailyRangeK, ref);
-  const hourOfOutdoorPeak = outdoor.indexOf(Math.max(...outdoor));
+  const hourOfOutdoorPeak = outdoor.indexOf(maxOf(outdoor));
   const absorbedShare = input.roofLightTransmittance * (1 - input.transpirationFraction);
 
   let padLeavingAirAtPeakC: number | null = null;
@@ -188,9 +189,9 @@ export function designDayBalance(input: DesignDayInput, ref: ReferenceData): Des
   return {
     date: input.date,
     hours,
-    peakIndoorWithFansC: Math.max(...hours.map((h) => h.indoorWithFansC)),
+    peakIndoorWithFansC: maxOf(hours.map((h) => h.indoorWithFansC)),
     peakIndoorWithPadsC:
-      input.padSaturationEfficiency === null ? null : Math.max(...hours.map((h) => h.indoorWithPadsC as number)),
+      input.padSaturationEfficiency === null ? null : maxOf(hours.map((h) => h.indoorWithPadsC as number)),
     hoursNotHeld: hours.filter((h) => !h.setpointHeld).map((h) => h.hour),
     padLeavingAirAtPeakC,
     humidityRatioKgPerKg: humidityRatio,

@@ -49,3 +49,9 @@ export const COOLING_BOUNDS = {
 
 /** Outdoor temperatures the engine accepts anywhere, °C: colder or hotter air is a typing error. */
 export const OUTDOOR_TEMPERATURE_LIMITS_C = { min: -60, max: 60 } as const;
+
+/**
+ * Largest temperature log file the API reads: its size in bytes and its data rows. 200,000
+ * rows hold more than twenty years of hourly readings; the UI states both before a file is chosen.
+ */
+export const TEMPERATURE_LOG_LIMITS = { maxBytes: 5 * 1024 * 1024, maxRows: 200_000 } as const;

@@ -12,6 +12,7 @@ import {
   MaxLength,
   Min,
   ValidateNested,
+  IsObject,
 } from 'class-validator';
 import { BOUNDS } from '@thermbay/engine/vocabulary';
 
@@ -78,6 +79,7 @@ export class SiteClimateDto {
   @IsArray()
   @ArrayMinSize(12)
   @ArrayMaxSize(12)
+  @IsObject({ each: true })
   @ValidateNested({ each: true })
   @Type(() => MonthlyClimateDto)
   monthly: MonthlyClimateDto[];

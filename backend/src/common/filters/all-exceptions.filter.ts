@@ -85,7 +85,7 @@ export class AllExceptionsFilter implements ExceptionFilter {
         message: problem.message,
       }));
       if (exception.moreErrorCount > 0)
-        details.push({ field: 'file', message: `${exception.moreErrorCount} more problems not listed` });
+        details.push({ field: 'file', message: `${exception.moreErrorCount} more bad lines not listed` });
       return { statusCode: 422, error: REASONS[422], message: exception.message, field: exception.field, details };
     }
     if (exception instanceof EngineInputError) {

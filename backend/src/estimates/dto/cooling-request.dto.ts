@@ -1,6 +1,7 @@
+import { IsCalendarDate, Omittable } from '../../common/validation';
 import { ApiProperty, ApiPropertyOptional, PartialType } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
-import { IsNumber, IsObject, IsOptional, IsString, Length, Matches, Max, Min, ValidateNested } from 'class-validator';
+import { IsNumber, IsObject, IsOptional, IsString, Length, Max, Min, ValidateNested } from 'class-validator';
 import { BOUNDS } from '@thermbay/engine/vocabulary';
 import { COOLING_BOUNDS } from '@thermbay/engine/vocabulary';
 import { HouseSpecDto } from '../../houses/dto/house.dto';
@@ -45,7 +46,7 @@ export class EvaporativePadDto {
 export class CoolingConditionsDto {
   @ApiProperty({ description: 'YYYY-MM-DD; hours of the result are local apparent solar time', example: '2026-07-21' })
   @IsString()
-  @Matches(/^\d{4}-\d{2}-\d{2}$/, { message: 'designDate must be a date written YYYY-MM-DD' })
+  @IsCalendarDate()
   designDate: string;
 
   @ApiProperty({ ...range(BOUNDS.summerDesignC), description: 'summer design dry bulb (the day’s maximum), °C' })
@@ -73,7 +74,7 @@ export class CoolingConditionsDto {
     ...range(COOLING_BOUNDS.allowedTemperatureRiseK),
     description: 'allowed inlet-to-fan rise, K; default from reference data',
   })
-  @IsOptional()
+  @Omittable()
   @IsNumber()
   @Min(COOLING_BOUNDS.allowedTemperatureRiseK.min)
   @Max(COOLING_BOUNDS.allowedTemperatureRiseK.max)
@@ -83,7 +84,7 @@ export class CoolingConditionsDto {
     ...range(COOLING_BOUNDS.peakInteriorLightLux),
     description: 'peak light at plant height, lux; default from reference data',
   })
-  @IsOptional()
+  @Omittable()
   @IsNumber()
   @Min(COOLING_BOUNDS.peakInteriorLightLux.min)
   @Max(COOLING_BOUNDS.peakInteriorLightLux.max)
@@ -93,7 +94,7 @@ export class CoolingConditionsDto {
     ...range(COOLING_BOUNDS.padToFanDistanceM),
     description: 'inlet (pad) wall to fans, m; default the house length',
   })
-  @IsOptional()
+  @Omittable()
   @IsNumber()
   @Min(COOLING_BOUNDS.padToFanDistanceM.min)
   @Max(COOLING_BOUNDS.padToFanDistanceM.max)
@@ -103,7 +104,7 @@ export class CoolingConditionsDto {
     ...range(COOLING_BOUNDS.transpirationFraction),
     description: 'share of transmitted solar heat taken up by transpiration; default from reference data',
   })
-  @IsOptional()
+  @Omittable()
   @IsNumber()
   @Min(COOLING_BOUNDS.transpirationFraction.min)
   @Max(COOLING_BOUNDS.transpirationFraction.max)
@@ -115,6 +116,7 @@ export class CoolingConditionsDto {
     description: 'evaporative pads on the inlet wall, or null for none',
   })
   @IsOptional()
+  @IsObject()
   @ValidateNested()
   @Type(() => EvaporativePadDto)
   evaporativePad?: EvaporativePadDto | null;
@@ -123,14 +125,14 @@ export class CoolingConditionsDto {
     ...range(BOUNDS.designOutdoorC),
     description: 'winter design temperature for the humidity-ventilation heat cost, °C',
   })
-  @IsOptional()
+  @Omittable()
   @IsNumber()
   @Min(BOUNDS.designOutdoorC.min)
   @Max(BOUNDS.designOutdoorC.max)
   winterDesignC?: number;
 }
 
-export class PartialCoolingConditionsDto extends PartialType(CoolingConditionsDto) {}
+export class PartialCoolingConditionsDto extends PartialType(CoolingConditionsDto, { skipNullProperties: false }) {}
 
 /** POST /api/estimates/cooling: house and site described in the request, nothing stored. */
 export class CoolingEstimateRequestDto {
@@ -146,7 +148,8 @@ export class CoolingEstimateRequestDto {
 /** POST /api/houses/:houseId/cooling: anything left out comes from the farm, its climate or reference data. */
 export class HouseCoolingEstimateRequestDto {
   @ApiPropertyOptional({ type: PartialCoolingConditionsDto })
-  @IsOptional()
+  @Omittable()
+  @IsObject()
   @ValidateNested()
   @Type(() => PartialCoolingConditionsDto)
   conditions?: PartialCoolingConditionsDto;

@@ -1,6 +1,7 @@
+import { Omittable } from '../../common/validation';
 import { ApiProperty, ApiPropertyOptional, PartialType } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
-import { IsBoolean, IsNumber, IsObject, IsOptional, Max, Min, ValidateNested } from 'class-validator';
+import { IsBoolean, IsNumber, IsObject, Max, Min, ValidateNested } from 'class-validator';
 import { BOUNDS } from '@thermbay/engine/vocabulary';
 import { HouseSpecDto } from '../../houses/dto/house.dto';
 
@@ -41,7 +42,7 @@ export class HeatingConditionsDto {
     maximum: BOUNDS.setpointC.max,
     description: 'inside temperature to hold, °C; default the house night heating setpoint',
   })
-  @IsOptional()
+  @Omittable()
   @IsNumber()
   @Min(BOUNDS.setpointC.min)
   @Max(BOUNDS.setpointC.max)
@@ -50,12 +51,12 @@ export class HeatingConditionsDto {
   @ApiPropertyOptional({
     description: 'credit a drawn curtain in the design loss; default false (heaters sized with the curtain open)',
   })
-  @IsOptional()
+  @Omittable()
   @IsBoolean()
   curtainClosed?: boolean;
 }
 
-export class PartialHeatingConditionsDto extends PartialType(HeatingConditionsDto) {}
+export class PartialHeatingConditionsDto extends PartialType(HeatingConditionsDto, { skipNullProperties: false }) {}
 
 /** POST /api/estimates: a house described in the request, nothing stored. */
 export class HeatingEstimateRequestDto {
@@ -70,7 +71,8 @@ export class HeatingEstimateRequestDto {
 /** POST /api/houses/:houseId/estimate: anything left out comes from the farm, its climate, the house or reference data. */
 export class HouseHeatingEstimateRequestDto {
   @ApiPropertyOptional({ type: PartialHeatingConditionsDto })
-  @IsOptional()
+  @Omittable()
+  @IsObject()
   @ValidateNested()
   @Type(() => PartialHeatingConditionsDto)
   conditions?: PartialHeatingConditionsDto;

@@ -62,7 +62,7 @@ export class CreateFarmDto {
   @ApiProperty({ example: 'America/Chicago' }) @Validate(IsIanaTimeZone) timeZone: string;
 }
 
-export class UpdateFarmDto extends PartialType(CreateFarmDto) {}
+export class UpdateFarmDto extends PartialType(CreateFarmDto, { skipNullProperties: false }) {}
 
 export class FarmDto {
   @ApiProperty() id: number;

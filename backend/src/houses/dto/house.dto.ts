@@ -1,3 +1,4 @@
+import { Omittable } from '../../common/validation';
 import { ApiProperty, ApiPropertyOptional, PartialType } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
 import {
@@ -32,21 +33,21 @@ export class CoveringsDto {
 
 export class CoveringOverridesDto {
   @ApiPropertyOptional({ ...range('uValueWPerM2K'), description: 'W/(m²·K)' })
-  @IsOptional()
+  @Omittable()
   @IsNumber()
   @Min(BOUNDS.uValueWPerM2K.min)
   @Max(BOUNDS.uValueWPerM2K.max)
   roof?: number;
 
   @ApiPropertyOptional({ ...range('uValueWPerM2K'), description: 'W/(m²·K)' })
-  @IsOptional()
+  @Omittable()
   @IsNumber()
   @Min(BOUNDS.uValueWPerM2K.min)
   @Max(BOUNDS.uValueWPerM2K.max)
   sidewalls?: number;
 
   @ApiPropertyOptional({ ...range('uValueWPerM2K'), description: 'W/(m²·K)' })
-  @IsOptional()
+  @Omittable()
   @IsNumber()
   @Min(BOUNDS.uValueWPerM2K.min)
   @Max(BOUNDS.uValueWPerM2K.max)
@@ -130,7 +131,8 @@ export class HouseSpecDto {
   @ApiProperty({ type: CoveringsDto }) @IsObject() @ValidateNested() @Type(() => CoveringsDto) coverings: CoveringsDto;
 
   @ApiPropertyOptional({ type: CoveringOverridesDto, description: "a maker's U-value replacing the reference value" })
-  @IsOptional()
+  @Omittable()
+  @IsObject()
   @ValidateNested()
   @Type(() => CoveringOverridesDto)
   coveringUOverridesWPerM2K?: CoveringOverridesDto;
@@ -160,6 +162,7 @@ export class HouseSpecDto {
   @ApiProperty({ type: HeaterGroupDto, isArray: true, maxItems: BOUNDS.heaterGroups.max })
   @IsArray()
   @ArrayMaxSize(BOUNDS.heaterGroups.max)
+  @IsObject({ each: true })
   @ValidateNested({ each: true })
   @Type(() => HeaterGroupDto)
   heaters: HeaterGroupDto[];
@@ -191,7 +194,7 @@ export class CreateHouseDto extends HouseSpecDto {
   notes?: string | null;
 }
 
-export class UpdateHouseDto extends PartialType(CreateHouseDto) {}
+export class UpdateHouseDto extends PartialType(CreateHouseDto, { skipNullProperties: false }) {}
 
 export class HouseDto extends CreateHouseDto {
   @ApiProperty() id: number;

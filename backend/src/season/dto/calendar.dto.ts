@@ -1,3 +1,4 @@
+import { Omittable } from '../../common/validation';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
 import {
@@ -5,13 +6,13 @@ import {
   IsArray,
   IsIn,
   IsNumber,
-  IsOptional,
   IsString,
   Matches,
   Max,
   MaxLength,
   Min,
   ValidateNested,
+  IsObject,
 } from 'class-validator';
 import { BOUNDS } from '@thermbay/engine/vocabulary';
 
@@ -33,7 +34,7 @@ export class ProductionPeriodDto {
     maximum: BOUNDS.setpointC.max,
     description: "replaces the house's day heating setpoint in this period, °C",
   })
-  @IsOptional()
+  @Omittable()
   @IsNumber()
   @Min(BOUNDS.setpointC.min)
   @Max(BOUNDS.setpointC.max)
@@ -44,14 +45,14 @@ export class ProductionPeriodDto {
     maximum: BOUNDS.setpointC.max,
     description: "replaces the house's night heating setpoint in this period, °C",
   })
-  @IsOptional()
+  @Omittable()
   @IsNumber()
   @Min(BOUNDS.setpointC.min)
   @Max(BOUNDS.setpointC.max)
   nightHeatingC?: number;
 
   @ApiPropertyOptional({ maxLength: 100, example: 'Spring bedding crop' })
-  @IsOptional()
+  @Omittable()
   @IsString()
   @MaxLength(100)
   label?: string;
@@ -67,6 +68,7 @@ export class PutProductionCalendarDto {
   })
   @IsArray()
   @ArrayMaxSize(24)
+  @IsObject({ each: true })
   @ValidateNested({ each: true })
   @Type(() => ProductionPeriodDto)
   periods: ProductionPeriodDto[];

@@ -11,6 +11,7 @@ import {
   MaxLength,
   Min,
   ValidateNested,
+  IsObject,
 } from 'class-validator';
 import type { PriceUnit } from '@thermbay/engine/season/fuel';
 import { PRICE_UNITS } from './season-request.dto';
@@ -47,6 +48,7 @@ export class PutFuelPricesDto {
   @ApiProperty({ type: FuelPriceInputDto, isArray: true, description: 'replaces every price of the farm' })
   @IsArray()
   @ArrayMaxSize(50)
+  @IsObject({ each: true })
   @ValidateNested({ each: true })
   @Type(() => FuelPriceInputDto)
   prices: FuelPriceInputDto[];

@@ -1,3 +1,4 @@
+import { IsCalendarDate, Omittable } from '../../common/validation';
 import { ApiProperty, ApiPropertyOptional, getSchemaPath } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
 import {
@@ -9,20 +10,19 @@ import {
   IsNumber,
   IsOptional,
   IsString,
-  Matches,
   Max,
   MaxLength,
   Min,
   ValidateBy,
   ValidateNested,
   type ValidationOptions,
+  IsObject,
 } from 'class-validator';
 import { BOUNDS } from '@thermbay/engine/vocabulary';
 import type { PriceUnit } from '@thermbay/engine/season/fuel';
 import { MEASURE_KINDS, type MeasureKind } from '@thermbay/engine/season/measures';
 
 export const PRICE_UNITS: readonly PriceUnit[] = ['si', 'us'];
-const ISO_DATE = /^\d{4}-\d{2}-\d{2}$/;
 
 /** Logged temperatures of the farm in place of its climate normals. */
 export class TemperatureLogClimateSourceDto {
@@ -60,12 +60,12 @@ function IsClimateSource(options?: ValidationOptions): PropertyDecorator {
 /** Options every per-house season calculation shares; each defaults from the house and the farm. */
 export class SeasonOptionsDto {
   @ApiPropertyOptional(CLIMATE_SOURCE_SCHEMA)
-  @IsOptional()
+  @Omittable()
   @IsClimateSource()
   climateSource?: ClimateSource;
 
   @ApiPropertyOptional({ description: "reference-data fuels id; default: the fuel of the house's first heater" })
-  @IsOptional()
+  @Omittable()
   @IsString()
   @MaxLength(100)
   fuelId?: string;
@@ -75,7 +75,7 @@ export class SeasonOptionsDto {
     maximum: 1e6,
     description: "money per purchase unit; default: the farm's price for the fuel",
   })
-  @IsOptional()
+  @Omittable()
   @IsNumber()
   @Min(0)
   @Max(1e6)
@@ -85,7 +85,7 @@ export class SeasonOptionsDto {
     enum: PRICE_UNITS,
     description: "unit the given pricePerUnit is per: 'si' (the fuel's unitSi, default) or 'us' (its unitUs)",
   })
-  @IsOptional()
+  @Omittable()
   @IsIn(PRICE_UNITS)
   priceUnit?: PriceUnit;
 
@@ -94,7 +94,7 @@ export class SeasonOptionsDto {
     maximum: BOUNDS.heaterEfficiency.max,
     description: "output ÷ input; default: the efficiency of the house's first heater burning the fuel",
   })
-  @IsOptional()
+  @Omittable()
   @IsNumber()
   @Min(BOUNDS.heaterEfficiency.min)
   @Max(BOUNDS.heaterEfficiency.max)
@@ -107,22 +107,22 @@ export class SeasonRequestDto extends SeasonOptionsDto {
     description:
       'first day, YYYY-MM-DD; give both dates or neither. Default: the heating season in progress or, between seasons, the next one (1 Sep – 31 May north of the equator, 1 Mar – 30 Nov south); with a temperature log, the whole days the log covers (at most 366)',
   })
-  @IsOptional()
-  @Matches(ISO_DATE, { message: 'startDate must be written YYYY-MM-DD' })
+  @Omittable()
+  @IsCalendarDate()
   startDate?: string;
 
   @ApiPropertyOptional({
     example: '2027-05-31',
     description: 'last day (inclusive), YYYY-MM-DD; at most 366 days from startDate',
   })
-  @IsOptional()
-  @Matches(ISO_DATE, { message: 'endDate must be written YYYY-MM-DD' })
+  @Omittable()
+  @IsCalendarDate()
   endDate?: string;
 }
 
 export class NightDemandRequestDto extends SeasonOptionsDto {
   @ApiProperty({ example: '2027-01-15', description: 'the evening the night begins, YYYY-MM-DD' })
-  @Matches(ISO_DATE, { message: 'date must be written YYYY-MM-DD' })
+  @IsCalendarDate()
   date: string;
 
   @ApiPropertyOptional({
@@ -130,7 +130,7 @@ export class NightDemandRequestDto extends SeasonOptionsDto {
     maximum: BOUNDS.setpointC.max,
     description: "°C; default: the house's night setpoint",
   })
-  @IsOptional()
+  @Omittable()
   @IsNumber()
   @Min(BOUNDS.setpointC.min)
   @Max(BOUNDS.setpointC.max)
@@ -144,13 +144,13 @@ export class MeasureFuelPriceDto {
     maximum: 1e6,
     description: 'without a price the fuel switch is reported as not applicable',
   })
-  @IsOptional()
+  @Omittable()
   @IsNumber()
   @Min(0)
   @Max(1e6)
   pricePerUnit?: number;
   @ApiPropertyOptional({ enum: PRICE_UNITS, description: 'needed with a price' })
-  @IsOptional()
+  @Omittable()
   @IsIn(PRICE_UNITS)
   priceUnit?: PriceUnit;
 }
@@ -173,14 +173,14 @@ export class MeasureDto {
   @Max(1e9)
   costAmount?: number | null;
 
-  @ApiPropertyOptional({ maxLength: 100 }) @IsOptional() @IsString() @MaxLength(100) label?: string;
+  @ApiPropertyOptional({ maxLength: 100 }) @Omittable() @IsString() @MaxLength(100) label?: string;
 
   @ApiPropertyOptional({
     enum: ['roof', 'sidewalls'],
     isArray: true,
     description: 'second-poly-layer: surfaces to cover',
   })
-  @IsOptional()
+  @Omittable()
   @IsArray()
   @ArrayMinSize(1)
   @ArrayMaxSize(2)
@@ -188,19 +188,19 @@ export class MeasureDto {
   surfaces?: Array<'roof' | 'sidewalls'>;
 
   @ApiPropertyOptional({ description: 'second-poly-layer: the coverings id the surfaces become' })
-  @IsOptional()
+  @Omittable()
   @IsString()
   @MaxLength(100)
   coveringId?: string;
 
   @ApiPropertyOptional({ description: 'thermal-curtain: curtains id' })
-  @IsOptional()
+  @Omittable()
   @IsString()
   @MaxLength(100)
   curtainId?: string;
 
   @ApiPropertyOptional({ description: 'sealing: air-leakage class to reach' })
-  @IsOptional()
+  @Omittable()
   @IsString()
   @MaxLength(100)
   airLeakageClassId?: string;
@@ -210,7 +210,7 @@ export class MeasureDto {
     maximum: BOUNDS.airChangesPerHour.max,
     description: 'sealing: measured air changes per hour after sealing',
   })
-  @IsOptional()
+  @Omittable()
   @IsNumber()
   @Min(BOUNDS.airChangesPerHour.min)
   @Max(BOUNDS.airChangesPerHour.max)
@@ -221,14 +221,14 @@ export class MeasureDto {
     maximum: 15,
     description: 'night-setpoint-lower: K (0 is accepted and reported as not applicable)',
   })
-  @IsOptional()
+  @Omittable()
   @IsNumber()
   @Min(0)
   @Max(15)
   lowerByK?: number;
 
   @ApiPropertyOptional({ minimum: 1, maximum: 180, description: 'later-start: days' })
-  @IsOptional()
+  @Omittable()
   @IsInt()
   @Min(1)
   @Max(180)
@@ -239,7 +239,7 @@ export class MeasureDto {
     maximum: BOUNDS.heaterEfficiency.max,
     description: 'heater-efficiency / fuel-switch: efficiency of the new heaters',
   })
-  @IsOptional()
+  @Omittable()
   @IsNumber()
   @Min(BOUNDS.heaterEfficiency.min)
   @Max(BOUNDS.heaterEfficiency.max)
@@ -249,7 +249,8 @@ export class MeasureDto {
     type: MeasureFuelPriceDto,
     description: 'fuel-switch: the new fuel and its price (without it the measure is reported as not applicable)',
   })
-  @IsOptional()
+  @Omittable()
+  @IsObject()
   @ValidateNested()
   @Type(() => MeasureFuelPriceDto)
   fuel?: MeasureFuelPriceDto;
@@ -265,6 +266,7 @@ export class MeasuresRequestDto extends SeasonRequestDto {
   })
   @IsArray()
   @ArrayMaxSize(30)
+  @IsObject({ each: true })
   @ValidateNested({ each: true })
   @Type(() => MeasureDto)
   measures: MeasureDto[];
@@ -272,17 +274,17 @@ export class MeasuresRequestDto extends SeasonRequestDto {
 
 export class SeasonBudgetRequestDto {
   @ApiPropertyOptional({ example: '2026-09-01', description: 'first day, YYYY-MM-DD (default as for a house season)' })
-  @IsOptional()
-  @Matches(ISO_DATE, { message: 'startDate must be written YYYY-MM-DD' })
+  @Omittable()
+  @IsCalendarDate()
   startDate?: string;
 
   @ApiPropertyOptional({ example: '2027-05-31', description: 'last day (inclusive), YYYY-MM-DD' })
-  @IsOptional()
-  @Matches(ISO_DATE, { message: 'endDate must be written YYYY-MM-DD' })
+  @Omittable()
+  @IsCalendarDate()
   endDate?: string;
 
   @ApiPropertyOptional(CLIMATE_SOURCE_SCHEMA)
-  @IsOptional()
+  @Omittable()
   @IsClimateSource()
   climateSource?: ClimateSource;
 }
@@ -293,22 +295,22 @@ export class SeasonBudgetCsvQueryDto {
     enum: ['si', 'us'],
     description: 'si (default): kWh and each fuel’s SI unit; us: MMBtu and each fuel’s US unit',
   })
-  @IsOptional()
+  @Omittable()
   @IsIn(['si', 'us'])
   units?: 'si' | 'us';
 
   @ApiPropertyOptional({ example: '2026-09-01' })
-  @IsOptional()
-  @Matches(ISO_DATE, { message: 'startDate must be written YYYY-MM-DD' })
+  @Omittable()
+  @IsCalendarDate()
   startDate?: string;
 
   @ApiPropertyOptional({ example: '2027-05-31' })
-  @IsOptional()
-  @Matches(ISO_DATE, { message: 'endDate must be written YYYY-MM-DD' })
+  @Omittable()
+  @IsCalendarDate()
   endDate?: string;
 
   @ApiPropertyOptional({ description: 'use this temperature log instead of the climate normals' })
-  @IsOptional()
+  @Omittable()
   @Type(() => Number)
   @IsInt()
   @Min(1)

@@ -3,6 +3,7 @@ import {
   detectDelimiter,
   inspectTemperatureCsv,
   MAX_LISTED_ERRORS,
+  TEMPERATURE_LOG_MAX_ROWS,
   parseTemperatureCsv,
   TEMPERATURE_LOG_MAX_BYTES,
   TemperatureLogError,
@@ -230,6 +231,25 @@ describe('temperature log: errors by line', () => {
     expect(error.errors).toHaveLength(MAX_LISTED_ERRORS);
     expect(error.moreErrorCount).toBe(10);
     expect(error.message).toMatch(/^30 problems/);
+  });
+
+  it('lists each bad line once, joining the problems found on it, and counts further bad lines', () => {
+    const rows = ['date,tmin,tmax'];
+    for (let day = 1; day <= 25; day++) rows.push(`2026-01-${String(day).padStart(2, '0')},low,high`);
+    const error = logError(() =>
+      parseTemperatureCsv(rows.join('\n'), { dateColumn: 'date', minColumn: 'tmin', maxColumn: 'tmax', unit: 'C' }),
+    );
+    const lines = error.errors.map((problem) => problem.line);
+    expect(lines).toEqual(Array.from({ length: MAX_LISTED_ERRORS }, (_, index) => index + 2));
+    expect(error.errors[0].message).toBe("the minimum 'low' is not a number; the maximum 'high' is not a number");
+    expect(error.moreErrorCount).toBe(5);
+  });
+
+  it(`refuses a file of more than ${TEMPERATURE_LOG_MAX_ROWS} data rows, naming the limit`, () => {
+    const text = 'time,temp\n' + '2026-01-01 00:00,1\n'.repeat(TEMPERATURE_LOG_MAX_ROWS + 1);
+    const error = logError(() => parseTemperatureCsv(text, mapping));
+    expect(error.errors).toEqual([{ line: null, message: expect.stringContaining('at most 200,000') }]);
+    expect(logError(() => inspectTemperatureCsv(text)).errors[0].message).toMatch(/200,001 data rows/);
   });
 
   it('refuses °F values outside the plausible range after conversion', () => {

@@ -1,7 +1,8 @@
 import { parse } from 'csv-parse/sync';
 import { EngineInputError } from '@thermbay/engine/errors';
 import { daysInMonth, isoDate, pad2 } from '@thermbay/engine/climate/calendar-days';
-import { OUTDOOR_TEMPERATURE_LIMITS_C } from '@thermbay/engine/vocabulary';
+import { OUTDOOR_TEMPERATURE_LIMITS_C, TEMPERATURE_LOG_LIMITS } from '@thermbay/engine/vocabulary';
+import { maxOf } from '@thermbay/engine/numbers';
 
 /**
  * Logged outdoor temperatures from a CSV file (a controller's or weather station's export).
@@ -11,7 +12,9 @@ import { OUTDOOR_TEMPERATURE_LIMITS_C } from '@thermbay/engine/vocabulary';
  */
 
 /** Largest file the API accepts, bytes. */
-export const TEMPERATURE_LOG_MAX_BYTES = 5 * 1024 * 1024;
+export const TEMPERATURE_LOG_MAX_BYTES = TEMPERATURE_LOG_LIMITS.maxBytes;
+/** Most data rows the API reads from one file. */
+export const TEMPERATURE_LOG_MAX_ROWS = TEMPERATURE_LOG_LIMITS.maxRows;
 /** Errors listed one by one; the rest are only counted. */
 export const MAX_LISTED_ERRORS = 20;
 /** Data rows shown back to the user when proposing columns. */
@@ -50,14 +53,30 @@ function describeProblem(problem: LogProblem): string {
   return problem.line === null ? problem.message : `line ${problem.line}: ${problem.message}`;
 }
 
-/** Collects problems, listing the first MAX_LISTED_ERRORS and counting the rest. */
+/**
+ * Collects problems line by line: the first MAX_LISTED_ERRORS bad lines are listed, each once
+ * (a second problem on a listed line joins its message); further bad lines are only counted.
+ */
 class ProblemList {
   readonly listed: LogProblem[] = [];
   more = 0;
+  private readonly listedByLine = new Map<number | null, LogProblem>();
+  private readonly unlistedLines = new Set<number | null>();
 
   add(line: number | null, message: string): void {
-    if (this.listed.length < MAX_LISTED_ERRORS) this.listed.push({ line, message });
-    else this.more++;
+    const already = this.listedByLine.get(line);
+    if (already) {
+      if (!already.message.split('; ').includes(message)) already.message += `; ${message}`;
+      return;
+    }
+    if (this.listed.length < MAX_LISTED_ERRORS) {
+      const problem = { line, message };
+      this.listed.push(problem);
+      this.listedByLine.set(line, problem);
+    } else if (!this.unlistedLines.has(line)) {
+      this.unlistedLines.add(line);
+      this.more++;
+    }
   }
 
   get count(): number {
@@ -66,6 +85,15 @@ class ProblemList {
 
   throwIfAny(): void {
     if (this.count > 0) throw new TemperatureLogError(this.listed, this.more);
+  }
+}
+
+function refuseTooManyRows(dataRowCount: number): void {
+  if (dataRowCount > TEMPERATURE_LOG_MAX_ROWS) {
+    fail(
+      null,
+      `the file has ${dataRowCount.toLocaleString('en-US')} data rows; at most ${TEMPERATURE_LOG_MAX_ROWS.toLocaleString('en-US')} are read at once, so split the log into shorter periods`,
+    );
   }
 }
 
@@ -440,8 +468,9 @@ export function inspectTemperatureCsv(input: string | Uint8Array): TemperatureCs
   );
   const hasHeader = firstRowLooksLikeHeader;
   const dataRows = hasHeader ? rows.slice(1) : rows;
+  refuseTooManyRows(dataRows.length);
   if (dataRows.length === 0) fail(rows[0].line, 'the file has a header but no data rows');
-  const columnCount = Math.max(...rows.slice(0, 50).map((row) => row.cells.length));
+  const columnCount = maxOf(rows.slice(0, 50).map((row) => row.cells.length));
   if (columnCount < 2) {
     fail(
       rows[0].line,
@@ -563,7 +592,7 @@ export function inspectTemperatureCsv(input: string | Uint8Array): TemperatureCs
         .map((value) => parseNumber(value, decimalComma))
         .filter((value): value is number => value !== null),
     );
-    const highest = values.length > 0 ? Math.max(...values) : NaN;
+    const highest = values.length > 0 ? maxOf(values) : NaN;
     const middle = median(values);
     if (highest > 50 || middle > 40) {
       unit = 'F';
@@ -695,10 +724,11 @@ export function parseTemperatureCsv(
   const inspection =
     mapping.hasHeader === undefined || mapping.dateOrder === undefined ? inspectLayout(rows, delimiter) : null;
   const hasHeader = mapping.hasHeader ?? inspection!.hasHeader;
-  const columnCount = Math.max(...rows.map((row) => row.cells.length));
+  const columnCount = maxOf(rows.map((row) => row.cells.length));
   const headerCells = hasHeader ? rows[0].cells : [];
   const headers = uniqueHeaders(Array.from({ length: columnCount }, (_, index) => headerCells[index] ?? ''));
   const dataRows = hasHeader ? rows.slice(1) : rows;
+  refuseTooManyRows(dataRows.length);
   if (dataRows.length === 0) fail(rows[0].line, 'the file has a header but no data rows');
 
   // Columns must exist.
@@ -738,7 +768,7 @@ export function parseTemperatureCsv(
   const usedIndexes = [stampIndex, dateIndex, timeIndex, temperatureIndex, minIndex, maxIndex].filter(
     (index): index is number => index !== null,
   );
-  const neededFields = Math.max(...usedIndexes) + 1;
+  const neededFields = maxOf(usedIndexes) + 1;
 
   interface Pending {
     line: number;

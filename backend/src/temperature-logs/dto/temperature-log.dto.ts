@@ -1,3 +1,4 @@
+import { Omittable } from '../../common/validation';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { IsBoolean, IsIn, IsOptional, IsString, MaxLength, MinLength } from 'class-validator';
 import type { DateOrder, Delimiter, LogResolution, TemperatureUnit } from '../csv/temperature-log-csv';
@@ -82,16 +83,16 @@ export class TemperatureColumnMappingDto {
     string | null;
   @ApiProperty({ enum: TEMPERATURE_UNITS }) @IsIn(TEMPERATURE_UNITS) unit: TemperatureUnit;
   @ApiPropertyOptional({ enum: LOG_RESOLUTIONS, description: 'inferred from the times when absent' })
-  @IsOptional()
+  @Omittable()
   @IsIn(LOG_RESOLUTIONS)
   resolution?: LogResolution;
-  @ApiPropertyOptional({ enum: DATE_ORDERS }) @IsOptional() @IsIn(DATE_ORDERS) dateOrder?: DateOrder;
-  @ApiPropertyOptional() @IsOptional() @IsBoolean() decimalComma?: boolean;
+  @ApiPropertyOptional({ enum: DATE_ORDERS }) @Omittable() @IsIn(DATE_ORDERS) dateOrder?: DateOrder;
+  @ApiPropertyOptional() @Omittable() @IsBoolean() decimalComma?: boolean;
   @ApiPropertyOptional({ enum: DELIMITERS, description: 'detected when absent' })
-  @IsOptional()
+  @Omittable()
   @IsIn(DELIMITERS)
   delimiter?: Delimiter;
-  @ApiPropertyOptional({ description: 'detected when absent' }) @IsOptional() @IsBoolean() hasHeader?: boolean;
+  @ApiPropertyOptional({ description: 'detected when absent' }) @Omittable() @IsBoolean() hasHeader?: boolean;
 }
 
 /** The text fields of the multipart upload (the file itself is the `file` part). */

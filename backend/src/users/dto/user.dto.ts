@@ -1,5 +1,6 @@
+import { Omittable } from '../../common/validation';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
-import { IsIn, IsOptional, IsString, Length } from 'class-validator';
+import { IsIn, IsString, Length } from 'class-validator';
 import { SITE_ROLES, type SiteRole } from '../../common/permissions';
 import type { UnitSystem } from '../models/user.model';
 
@@ -12,13 +13,13 @@ export class UserDto {
 }
 
 export class UpdateMeDto {
-  @ApiPropertyOptional() @IsOptional() @IsString() @Length(1, 120) name?: string;
-  @ApiPropertyOptional({ enum: ['si', 'us'] }) @IsOptional() @IsIn(['si', 'us']) unitSystem?: UnitSystem;
+  @ApiPropertyOptional() @Omittable() @IsString() @Length(1, 120) name?: string;
+  @ApiPropertyOptional({ enum: ['si', 'us'] }) @Omittable() @IsIn(['si', 'us']) unitSystem?: UnitSystem;
 }
 
 export class AdminUpdateUserDto {
-  @ApiPropertyOptional() @IsOptional() @IsString() @Length(1, 120) name?: string;
-  @ApiPropertyOptional({ enum: SITE_ROLES }) @IsOptional() @IsIn(SITE_ROLES) siteRole?: SiteRole;
+  @ApiPropertyOptional() @Omittable() @IsString() @Length(1, 120) name?: string;
+  @ApiPropertyOptional({ enum: SITE_ROLES }) @Omittable() @IsIn(SITE_ROLES) siteRole?: SiteRole;
 }
 
 export class DeleteMeDto {

@@ -19,16 +19,6 @@ export class WeatherSourceDto {
   lastCompleteYear: number;
 }
 
-export class WeatherYearParamsDto {
-  @ApiProperty() @Type(() => Number) @IsInt() @Min(1) farmId: number;
-  @ApiProperty({ minimum: FIRST_WEATHER_YEAR })
-  @Type(() => Number)
-  @IsInt()
-  @Min(FIRST_WEATHER_YEAR)
-  @Max(9999)
-  year: number;
-}
-
 export class WeatherYearStatusDto {
   @ApiProperty() year: number;
   @ApiProperty({ description: 'true when the year was already cached and the service was not asked' })

@@ -1,5 +1,6 @@
 import UploadFileIcon from '@mui/icons-material/UploadFile';
 import { Alert, AlertTitle, Box, Button, LinearProgress, Stack, Typography } from '@mui/material';
+import { TEMPERATURE_LOG_LIMITS } from '@thermbay/engine/vocabulary';
 import { useRef, useState, type ChangeEvent } from 'react';
 import type { UploadProgress } from '../../../api/client';
 import type { TemperatureLog } from '../../../api/types';
@@ -79,11 +80,14 @@ export function TemperatureLogUpload({
             accept=".csv,.txt,text/csv,text/plain"
             hidden
             aria-label="CSV file of temperatures"
+            aria-describedby="temperature-file-limits"
             onChange={onFileChosen}
           />
         </Button>
-        <Typography variant="body2" color="text.secondary">
-          Hourly or daily outdoor temperatures, one reading per row, with a date (and time) column.
+        <Typography variant="body2" color="text.secondary" id="temperature-file-limits">
+          Hourly or daily outdoor temperatures, one reading per row, with a date (and time) column. A UTF-8 CSV file of
+          at most {TEMPERATURE_LOG_LIMITS.maxBytes / 1024 / 1024} MB and{' '}
+          {TEMPERATURE_LOG_LIMITS.maxRows.toLocaleString('en-US')} rows.
         </Typography>
       </Stack>
       {stored ? (
