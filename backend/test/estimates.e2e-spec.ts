@@ -376,7 +376,7 @@ describe('estimates (e2e)', () => {
           })
           .expect(201)
       ).body;
-      const { id: _id, farmId: _farmId, createdAt: _c, updatedAt: _u, ...spec } = houseNamed('House B');
+      const { id: _id, farmId: _farmId, version: _v, createdAt: _c, updatedAt: _u, ...spec } = houseNamed('House B');
       const house = (await t.http.post(`/api/farms/${farm.id}/houses`).set(bearer(grower)).send(spec).expect(201)).body;
       const res = await t.http.post(`/api/houses/${house.id}/estimate`).set(bearer(grower)).send({}).expect(422);
       expect(res.body.field).toBe('conditions.designOutdoorC');

@@ -9,9 +9,11 @@ export function houseSpecOf(house: HouseInput): HouseSpec {
   const {
     id: _id,
     farmId: _farmId,
+    version: _version,
     createdAt: _createdAt,
     updatedAt: _updatedAt,
     ...spec
-  } = rest as typeof rest & Partial<{ id: number; farmId: number; createdAt: string; updatedAt: string }>;
+  } = rest as typeof rest &
+    Partial<{ id: number; farmId: number; version: number; createdAt: string; updatedAt: string }>;
   return spec;
 }
