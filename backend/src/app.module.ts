@@ -14,6 +14,7 @@ import { EstimatesModule } from './estimates/estimates.module';
 import { FarmsModule } from './farms/farms.module';
 import { HealthController } from './health/health.controller';
 import { HousesModule } from './houses/houses.module';
+import { MailModule } from './mail/mail.module';
 import { ReferenceDataModule } from './reference-data/reference-data.module';
 import { SeasonModule } from './season/season.module';
 import { SeedModule } from './seed/seed.module';
@@ -33,6 +34,7 @@ const staticFrontend = existsSync(frontendDist())
     ConfigModule.forRoot({ isGlobal: true, ignoreEnvFile: true, validate: validateEnvironment }),
     DatabaseModule,
     ReferenceDataModule,
+    MailModule,
     UsersModule,
     AuthModule,
     FarmsModule,

@@ -229,6 +229,16 @@ describe('roles × routes (e2e)', () => {
           .set(bearer(token[who])),
     },
     {
+      route: 'GET /mail/outbox (site admin only)',
+      expected: { owner: 403, grower: 403, adviser: 403, viewer: 403, outsider: 403, admin: 200 },
+      call: (who) => t.http.get('/api/mail/outbox').set(bearer(token[who])),
+    },
+    {
+      route: 'GET /mail/inbox (own messages)',
+      expected: { owner: 200, grower: 200, adviser: 200, viewer: 200, outsider: 200, admin: 200 },
+      call: (who) => t.http.get('/api/mail/inbox').set(bearer(token[who])),
+    },
+    {
       route: 'GET /users (site admin only)',
       expected: { owner: 403, grower: 403, adviser: 403, viewer: 403, outsider: 403, admin: 200 },
       call: (who) => t.http.get('/api/users').set(bearer(token[who])),

@@ -27,6 +27,10 @@ export async function createTestApp(env: Record<string, string> = {}): Promise<T
     DEMO_SEED: 'true',
     LOGIN_RATE_LIMIT_PER_MINUTE: '1000',
     JWT_SECRET: 'e2e-secret-that-is-long-enough',
+    // the in-process SMTP server on any free port; SMTP_URL unset unless a spec sets it
+    SMTP_LOCAL_PORT: '0',
+    SMTP_URL: '',
+    PUBLIC_URL: 'http://thermbay.test',
     ...env,
   });
   // Imported after the environment is set: the config module validates it on import.

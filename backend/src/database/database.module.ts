@@ -9,13 +9,27 @@ import { FarmClimate } from '../climate/models/farm-climate.model';
 import { Farm } from '../farms/models/farm.model';
 import { Membership } from '../farms/models/membership.model';
 import { House } from '../houses/models/house.model';
+import { MailSend } from '../mail/models/mail-send.model';
+import { ReceivedMail, ReceivedMailAttachment } from '../mail/models/received-mail.model';
 import { FarmFuelPrice } from '../season/models/farm-fuel-price.model';
 import { HouseCalendar } from '../season/models/house-calendar.model';
 import { TemperatureLog } from '../temperature-logs/models/temperature-log.model';
 import { User } from '../users/models/user.model';
 import { createMigrator, prepareSqlite } from './migrator';
 
-export const MODELS = [User, Farm, Membership, House, FarmClimate, TemperatureLog, HouseCalendar, FarmFuelPrice];
+export const MODELS = [
+  User,
+  Farm,
+  Membership,
+  House,
+  FarmClimate,
+  TemperatureLog,
+  HouseCalendar,
+  FarmFuelPrice,
+  MailSend,
+  ReceivedMail,
+  ReceivedMailAttachment,
+];
 
 /** Brings the schema up to date before anything else touches the database. */
 @Injectable()

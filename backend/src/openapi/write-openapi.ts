@@ -10,6 +10,9 @@ async function main(): Promise<void> {
   process.env.DATABASE_FILE = join(tmpdir(), `thermbay-openapi-${process.pid}.sqlite`);
   process.env.DEMO_SEED = 'false';
   process.env.NODE_ENV = 'test';
+  // the local SMTP server starts with the app: any free port, never a fixed one
+  process.env.SMTP_LOCAL_PORT = '0';
+  process.env.SMTP_URL = '';
   // Loaded only now: the app module reads the environment when it is first imported.
   const { AppModule } = await import('../app.module');
   const app = await NestFactory.create(AppModule, { logger: false });

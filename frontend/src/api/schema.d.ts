@@ -36,6 +36,57 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/mail/outbox": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** Every message the local SMTP server kept, and every send that failed (site admin) */
+        get: operations["MailController_all"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/mail/inbox": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** Messages the local SMTP server kept for the signed-in user */
+        get: operations["MailController_mine"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/mail/messages/{mailId}/attachments/{attachmentId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** Download an attachment (site admin, or a recipient of the message) */
+        get: operations["MailController_download"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/users/me": {
         parameters: {
             query?: never;
@@ -542,6 +593,46 @@ export interface components {
             /** @example ok */
             status: string;
             version: string;
+        };
+        ReceivedAttachmentDto: {
+            id: number;
+            fileName: string;
+            contentType: string;
+            sizeBytes: number;
+        };
+        ReceivedMailDto: {
+            id: number;
+            /** @description when the local server received it (ISO 8601) */
+            receivedAt: string;
+            from: string | null;
+            /** @description the To header */
+            to: string | null;
+            /** @description envelope recipients: who it was delivered to */
+            recipients: string[];
+            subject: string | null;
+            /** @description plain-text body */
+            text: string | null;
+            attachments: components["schemas"]["ReceivedAttachmentDto"][];
+        };
+        MailSendDto: {
+            id: number;
+            kind: string;
+            sentAt: string;
+            recipients: string[];
+            subject: string;
+            text: string;
+            attachmentNames: string[];
+            /** @enum {string} */
+            status: "sent" | "failed";
+            /** @description why it failed */
+            error: string | null;
+        };
+        OutboxDto: {
+            /** @description false when SMTP_URL sends through a real server (then nothing is kept here) */
+            localServer: boolean;
+            messages: components["schemas"]["ReceivedMailDto"][];
+            /** @description sends the SMTP server did not take, newest first */
+            failedSends: components["schemas"]["MailSendDto"][];
         };
         UpdateMeDto: {
             name?: string;
@@ -2101,6 +2192,72 @@ export interface operations {
                         };
                     };
                 };
+            };
+        };
+    };
+    MailController_all: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["OutboxDto"];
+                };
+            };
+        };
+    };
+    MailController_mine: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ReceivedMailDto"][];
+                };
+            };
+        };
+    };
+    MailController_download: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                mailId: number;
+                attachmentId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description the attachment as received */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no such message or attachment, or not yours */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
             };
         };
     };

@@ -106,3 +106,8 @@ export type Measure = Schemas['MeasureDto'];
 export type MeasureKind = Measure['kind'];
 export type MeasureComparison = Schemas['MeasureComparisonDto'];
 export type MeasureResult = Schemas['MeasureResultDto'];
+
+export type ReceivedMail = Schemas['ReceivedMailDto'];
+export type ReceivedAttachment = Schemas['ReceivedAttachmentDto'];
+export type MailSend = Schemas['MailSendDto'];
+export type Outbox = Schemas['OutboxDto'];

@@ -16,6 +16,8 @@ const HousePage = lazy(() => import('./routes/house-page'));
 const HouseSeasonPage = lazy(() => import('./routes/house-season-page'));
 const SettingsPage = lazy(() => import('./routes/settings-page'));
 const AdminUsersPage = lazy(() => import('./routes/admin-users-page'));
+const AdminOutboxPage = lazy(() => import('./routes/admin-outbox-page'));
+const MessagesPage = lazy(() => import('./routes/messages-page'));
 const NotFoundPage = lazy(() => import('./routes/not-found-page'));
 
 const publicPage = (page: ReactNode) => <Suspense fallback={<LoadingState />}>{page}</Suspense>;
@@ -40,6 +42,8 @@ export function createAppRouter() {
             { path: 'houses/:houseId/season', element: <HouseSeasonPage /> },
             { path: 'settings', element: <SettingsPage /> },
             { path: 'admin/users', element: <AdminUsersPage /> },
+            { path: 'admin/outbox', element: <AdminOutboxPage /> },
+            { path: 'messages', element: <MessagesPage /> },
           ],
         },
       ],

@@ -10,4 +10,6 @@ export const paths = {
   houseSeason: (houseId: number | string) => `/houses/${houseId}/season`,
   settings: '/settings',
   adminUsers: '/admin/users',
+  adminOutbox: '/admin/outbox',
+  messages: '/messages',
 } as const;
