@@ -5,6 +5,7 @@ import { mkdirSync } from 'node:fs';
 import { dirname, resolve } from 'node:path';
 import { Sequelize } from 'sequelize-typescript';
 import type { Environment } from '../config/environment';
+import { PasswordResetToken } from '../auth/models/password-reset-token.model';
 import { FarmClimate } from '../climate/models/farm-climate.model';
 import { Farm } from '../farms/models/farm.model';
 import { Membership } from '../farms/models/membership.model';
@@ -29,6 +30,7 @@ export const MODELS = [
   MailSend,
   ReceivedMail,
   ReceivedMailAttachment,
+  PasswordResetToken,
 ];
 
 /** Brings the schema up to date before anything else touches the database. */

@@ -3,6 +3,8 @@ export const paths = {
   home: '/',
   login: '/login',
   register: '/register',
+  forgotPassword: '/forgot-password',
+  resetPassword: (token: string) => `/reset-password/${token}`,
   farms: '/farms',
   farm: (farmId: number | string) => `/farms/${farmId}`,
   newHouse: (farmId: number | string) => `/farms/${farmId}/houses/new`,
