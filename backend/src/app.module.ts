@@ -14,6 +14,7 @@ import { EstimatesModule } from './estimates/estimates.module';
 import { FarmsModule } from './farms/farms.module';
 import { HealthController } from './health/health.controller';
 import { HousesModule } from './houses/houses.module';
+import { InvitationsModule } from './invitations/invitations.module';
 import { MailModule } from './mail/mail.module';
 import { ReferenceDataModule } from './reference-data/reference-data.module';
 import { SeasonModule } from './season/season.module';
@@ -38,6 +39,7 @@ const staticFrontend = existsSync(frontendDist())
     UsersModule,
     AuthModule,
     FarmsModule,
+    InvitationsModule,
     HousesModule,
     ClimateModule,
     EstimatesModule,

@@ -1,6 +1,6 @@
 import { hourlyCsv, HOURLY_MAPPING } from './temperature-csv';
 import { houseBody as houseBodyNamed } from './fixtures';
-import { bearer, createTestApp, signIn, type TestApp } from './test-app';
+import { bearer, createTestApp, joinByInvitation, signIn, type TestApp } from './test-app';
 
 /**
  * The role × route matrix: every farm role, a member of another farm and the site admin
@@ -30,11 +30,7 @@ describe('roles × routes (e2e)', () => {
     }
     const farms = await t.http.get('/api/farms').set(bearer(token.owner)).expect(200);
     farmId = farms.body[0].id;
-    await t.http
-      .post(`/api/farms/${farmId}/members`)
-      .set(bearer(token.owner))
-      .send({ email: 'viewer@example.org', role: 'viewer' })
-      .expect(201);
+    await joinByInvitation(t, token.owner, farmId, 'viewer@example.org', 'viewer', token.viewer);
     // the outsider is a member (owner) of a farm of their own
     await t.http
       .post('/api/farms')
@@ -49,6 +45,16 @@ describe('roles × routes (e2e)', () => {
   const newHouse = async () =>
     (await t.http.post(`/api/farms/${farmId}/houses`).set(bearer(token.owner)).send(houseBody).expect(201)).body
       .id as number;
+
+  let invitationCount = 0;
+  const newInvitation = async () =>
+    (
+      await t.http
+        .post(`/api/farms/${farmId}/invitations`)
+        .set(bearer(token.owner))
+        .send({ email: `pending-${++invitationCount}@example.org`, role: 'grower' })
+        .expect(201)
+    ).body.id as number;
 
   const SEASON = { startDate: '2026-12-01', endDate: '2027-02-28' };
   const smallCsv = Buffer.from(hourlyCsv('2027-01-01', 2));
@@ -130,13 +136,30 @@ describe('roles × routes (e2e)', () => {
       call: (who) => t.http.post(`/api/houses/${houseId}/cooling`).set(bearer(token[who])).send({}),
     },
     {
-      route: 'POST /farms/:id/members',
+      route: 'POST /farms/:id/invitations',
       expected: { owner: 201, grower: 403, adviser: 403, viewer: 403, outsider: 404, admin: 404 },
-      call: async (who) => {
-        const email = `invitee-${who}@example.org`;
-        await t.http.post('/api/auth/register').send({ email, password: 'password-123', name: email });
-        return t.http.post(`/api/farms/${farmId}/members`).set(bearer(token[who])).send({ email, role: 'viewer' });
-      },
+      call: (who) =>
+        t.http
+          .post(`/api/farms/${farmId}/invitations`)
+          .set(bearer(token[who]))
+          .send({ email: `invitee-${who}@example.org`, role: 'viewer' }),
+    },
+    {
+      route: 'GET /farms/:id/invitations',
+      expected: { owner: 200, grower: 403, adviser: 403, viewer: 403, outsider: 404, admin: 404 },
+      call: (who) => t.http.get(`/api/farms/${farmId}/invitations`).set(bearer(token[who])),
+    },
+    {
+      route: 'POST /farms/:id/invitations/:id/resend',
+      expected: { owner: 200, grower: 403, adviser: 403, viewer: 403, outsider: 404, admin: 404 },
+      call: async (who) =>
+        t.http.post(`/api/farms/${farmId}/invitations/${await newInvitation()}/resend`).set(bearer(token[who])),
+    },
+    {
+      route: 'DELETE /farms/:id/invitations/:id',
+      expected: { owner: 204, grower: 403, adviser: 403, viewer: 403, outsider: 404, admin: 404 },
+      call: async (who) =>
+        t.http.delete(`/api/farms/${farmId}/invitations/${await newInvitation()}`).set(bearer(token[who])),
     },
     {
       route: 'GET /farms/:id/temperature-logs',

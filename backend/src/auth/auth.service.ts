@@ -2,7 +2,7 @@ import { BadRequestException, ConflictException, Injectable, UnauthorizedExcepti
 import { JwtService } from '@nestjs/jwt';
 import { InjectModel } from '@nestjs/sequelize';
 import * as bcrypt from 'bcryptjs';
-import { Op } from 'sequelize';
+import { Op, type Transaction } from 'sequelize';
 import { RequestValidationException } from '../common/filters/all-exceptions.filter';
 import { hashLinkToken, newLinkToken } from '../common/tokens';
 import { MailService } from '../mail/mail.service';
@@ -53,12 +53,11 @@ export class AuthService {
   }
 
   /** A new account with an acceptable password (checked by the caller). */
-  async createUser(email: string, name: string, password: string): Promise<User> {
-    return this.userModel.create({
-      email: normaliseEmail(email),
-      name: name.trim(),
-      passwordHash: await bcrypt.hash(password, BCRYPT_ROUNDS),
-    });
+  async createUser(email: string, name: string, password: string, transaction?: Transaction): Promise<User> {
+    return this.userModel.create(
+      { email: normaliseEmail(email), name: name.trim(), passwordHash: await bcrypt.hash(password, BCRYPT_ROUNDS) },
+      { transaction },
+    );
   }
 
   async login(body: LoginDto): Promise<SessionDto> {
@@ -151,7 +150,7 @@ export class AuthService {
     });
   }
 
-  private async sessionFor(user: User): Promise<SessionDto> {
+  async sessionFor(user: User): Promise<SessionDto> {
     const payload: TokenPayload = { sub: user.id, tv: user.tokenVersion };
     return { accessToken: await this.jwt.signAsync(payload), user: toUserDto(user) };
   }

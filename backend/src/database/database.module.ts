@@ -10,6 +10,7 @@ import { FarmClimate } from '../climate/models/farm-climate.model';
 import { Farm } from '../farms/models/farm.model';
 import { Membership } from '../farms/models/membership.model';
 import { House } from '../houses/models/house.model';
+import { Invitation } from '../invitations/models/invitation.model';
 import { MailSend } from '../mail/models/mail-send.model';
 import { ReceivedMail, ReceivedMailAttachment } from '../mail/models/received-mail.model';
 import { FarmFuelPrice } from '../season/models/farm-fuel-price.model';
@@ -31,6 +32,7 @@ export const MODELS = [
   ReceivedMail,
   ReceivedMailAttachment,
   PasswordResetToken,
+  Invitation,
 ];
 
 /** Brings the schema up to date before anything else touches the database. */

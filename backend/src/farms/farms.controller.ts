@@ -2,15 +2,7 @@ import { Body, Controller, Delete, Get, HttpCode, Param, ParseIntPipe, Patch, Po
 import { ApiBearerAuth, ApiCreatedResponse, ApiNoContentResponse, ApiOkResponse, ApiTags } from '@nestjs/swagger';
 import { CurrentUser, type AuthenticatedUser } from '../common/decorators/current-user.decorator';
 import { ROLE_PERMISSIONS } from '../common/permissions';
-import {
-  AddMemberDto,
-  CreateFarmDto,
-  FarmDto,
-  MemberDto,
-  PermissionsDto,
-  UpdateFarmDto,
-  UpdateMemberDto,
-} from './dto/farm.dto';
+import { CreateFarmDto, FarmDto, MemberDto, PermissionsDto, UpdateFarmDto, UpdateMemberDto } from './dto/farm.dto';
 import { FarmsService } from './farms.service';
 
 @ApiTags('farms')
@@ -71,16 +63,6 @@ export class FarmsController {
   @ApiOkResponse({ type: MemberDto, isArray: true })
   members(@CurrentUser() me: AuthenticatedUser, @Param('farmId', ParseIntPipe) farmId: number): Promise<MemberDto[]> {
     return this.farms.members(me, farmId);
-  }
-
-  @Post('farms/:farmId/members')
-  @ApiCreatedResponse({ type: MemberDto })
-  addMember(
-    @CurrentUser() me: AuthenticatedUser,
-    @Param('farmId', ParseIntPipe) farmId: number,
-    @Body() body: AddMemberDto,
-  ): Promise<MemberDto> {
-    return this.farms.addMember(me, farmId, body);
   }
 
   @Patch('farms/:farmId/members/:userId')

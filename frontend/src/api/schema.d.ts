@@ -323,7 +323,7 @@ export interface paths {
     };
     get: operations['FarmsController_members'];
     put?: never;
-    post: operations['FarmsController_addMember'];
+    post?: never;
     delete?: never;
     options?: never;
     head?: never;
@@ -344,6 +344,108 @@ export interface paths {
     options?: never;
     head?: never;
     patch: operations['FarmsController_updateMember'];
+    trace?: never;
+  };
+  '/api/farms/{farmId}/invitations': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    /** Pending invitations of the farm (owners) */
+    get: operations['InvitationsController_pending'];
+    put?: never;
+    /** Invite an e-mail address to the farm; the answer says whether the e-mail went */
+    post: operations['InvitationsController_invite'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/farms/{farmId}/invitations/{invitationId}': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    get?: never;
+    put?: never;
+    post?: never;
+    delete: operations['InvitationsController_revoke'];
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/farms/{farmId}/invitations/{invitationId}/resend': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    get?: never;
+    put?: never;
+    /** Send a new link (the old one stops working), valid 7 more days */
+    post: operations['InvitationsController_resend'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/invitations/{token}': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    /** What an invitation link offers */
+    get: operations['InvitationsController_preview'];
+    put?: never;
+    post?: never;
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/invitations/{token}/sign-up': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    get?: never;
+    put?: never;
+    /** Create an account with the invited address and join the farm */
+    post: operations['InvitationsController_signUp'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/invitations/{token}/accept': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    get?: never;
+    put?: never;
+    /** Join the farm with the signed-in account (its address must be the invited one) */
+    post: operations['InvitationsController_accept'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
     trace?: never;
   };
   '/api/farms/{farmId}/houses': {
@@ -849,12 +951,62 @@ export interface components {
       /** @enum {string} */
       role: 'owner' | 'grower' | 'adviser' | 'viewer';
     };
-    AddMemberDto: {
-      email: string;
+    UpdateMemberDto: {
       /** @enum {string} */
       role: 'owner' | 'grower' | 'adviser' | 'viewer';
     };
-    UpdateMemberDto: {
+    CreateInvitationDto: {
+      email: string;
+      /** @enum {string} */
+      role: 'grower' | 'adviser' | 'viewer';
+    };
+    MailOutcomeDto: {
+      /** @enum {string} */
+      status: 'sent' | 'failed';
+      /** @description why the message did not go; kept in the send log */
+      error: string | null;
+    };
+    InvitationSentDto: {
+      id: number;
+      farmId: number;
+      email: string;
+      /** @enum {string} */
+      role: 'owner' | 'grower' | 'adviser' | 'viewer';
+      invitedByName: string | null;
+      createdAt: string;
+      expiresAt: string;
+      /** @description the link no longer works (7 days passed); resend to renew it */
+      expired: boolean;
+      mail: components['schemas']['MailOutcomeDto'];
+    };
+    InvitationDto: {
+      id: number;
+      farmId: number;
+      email: string;
+      /** @enum {string} */
+      role: 'owner' | 'grower' | 'adviser' | 'viewer';
+      invitedByName: string | null;
+      createdAt: string;
+      expiresAt: string;
+      /** @description the link no longer works (7 days passed); resend to renew it */
+      expired: boolean;
+    };
+    InvitationPreviewDto: {
+      farmName: string;
+      /** @enum {string} */
+      role: 'owner' | 'grower' | 'adviser' | 'viewer';
+      email: string;
+      invitedByName: string | null;
+      expiresAt: string;
+      /** @description an account already uses the address: sign in to accept */
+      accountExists: boolean;
+    };
+    InvitedSignUpDto: {
+      name: string;
+      password: string;
+    };
+    AcceptedInvitationDto: {
+      farmId: number;
       /** @enum {string} */
       role: 'owner' | 'grower' | 'adviser' | 'viewer';
     };
@@ -2817,31 +2969,6 @@ export interface operations {
       };
     };
   };
-  FarmsController_addMember: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        farmId: number;
-      };
-      cookie?: never;
-    };
-    requestBody: {
-      content: {
-        'application/json': components['schemas']['AddMemberDto'];
-      };
-    };
-    responses: {
-      201: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['MemberDto'];
-        };
-      };
-    };
-  };
   FarmsController_removeMember: {
     parameters: {
       query?: never;
@@ -2885,6 +3012,182 @@ export interface operations {
         content: {
           'application/json': components['schemas']['MemberDto'];
         };
+      };
+    };
+  };
+  InvitationsController_pending: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        farmId: number;
+      };
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['InvitationDto'][];
+        };
+      };
+    };
+  };
+  InvitationsController_invite: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        farmId: number;
+      };
+      cookie?: never;
+    };
+    requestBody: {
+      content: {
+        'application/json': components['schemas']['CreateInvitationDto'];
+      };
+    };
+    responses: {
+      201: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['InvitationSentDto'];
+        };
+      };
+    };
+  };
+  InvitationsController_revoke: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        farmId: number;
+        invitationId: number;
+      };
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      204: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+    };
+  };
+  InvitationsController_resend: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        farmId: number;
+        invitationId: number;
+      };
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['InvitationSentDto'];
+        };
+      };
+    };
+  };
+  InvitationsController_preview: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        token: string;
+      };
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['InvitationPreviewDto'];
+        };
+      };
+      /** @description unknown, used, revoked or expired link */
+      404: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+    };
+  };
+  InvitationsController_signUp: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        token: string;
+      };
+      cookie?: never;
+    };
+    requestBody: {
+      content: {
+        'application/json': components['schemas']['InvitedSignUpDto'];
+      };
+    };
+    responses: {
+      201: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['SessionDto'];
+        };
+      };
+      /** @description unknown, used, revoked or expired link */
+      404: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+    };
+  };
+  InvitationsController_accept: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        token: string;
+      };
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['AcceptedInvitationDto'];
+        };
+      };
+      /** @description unknown, used, revoked or expired link */
+      404: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
       };
     };
   };

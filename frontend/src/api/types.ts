@@ -45,7 +45,6 @@ export type ReferenceRow = ReferenceTable['rows'][number];
 export type FarmClimate = Schemas['FarmClimateDto'];
 export type SiteClimate = Schemas['SiteClimateDto'];
 export type MonthlyClimate = Schemas['MonthlyClimateDto'];
-export type AddMemberRequest = Schemas['AddMemberDto'];
 export type UpdateMemberRequest = Schemas['UpdateMemberDto'];
 
 export type HouseSpec = Schemas['HouseSpecDto'];
@@ -114,3 +113,9 @@ export type ReceivedMail = Schemas['ReceivedMailDto'];
 export type ReceivedAttachment = Schemas['ReceivedAttachmentDto'];
 export type MailSend = Schemas['MailSendDto'];
 export type Outbox = Schemas['OutboxDto'];
+export type Invitation = Schemas['InvitationDto'];
+export type InvitationSent = Schemas['InvitationSentDto'];
+export type InvitationPreview = Schemas['InvitationPreviewDto'];
+export type CreateInvitationRequest = Schemas['CreateInvitationDto'];
+export type InvitedSignUpRequest = Schemas['InvitedSignUpDto'];
+export type AcceptedInvitation = Schemas['AcceptedInvitationDto'];

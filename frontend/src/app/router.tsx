@@ -9,6 +9,7 @@ import { RouteError } from './routes/route-error';
 // Each page is its own chunk: MUI's DataGrid and the form code load only where used.
 const LoginPage = lazy(() => import('./routes/login-page'));
 const RegisterPage = lazy(() => import('./routes/register-page'));
+const InvitationPage = lazy(() => import('./routes/invitation-page'));
 const ForgotPasswordPage = lazy(() => import('./routes/forgot-password-page'));
 const ResetPasswordPage = lazy(() => import('./routes/reset-password-page'));
 const FarmsPage = lazy(() => import('./routes/farms-page'));
@@ -29,6 +30,7 @@ export function createAppRouter() {
     { path: paths.login, element: publicPage(<LoginPage />), errorElement: <RouteError /> },
     { path: paths.register, element: publicPage(<RegisterPage />), errorElement: <RouteError /> },
     { path: paths.forgotPassword, element: publicPage(<ForgotPasswordPage />), errorElement: <RouteError /> },
+    { path: 'invitations/:token', element: publicPage(<InvitationPage />), errorElement: <RouteError /> },
     { path: 'reset-password/:token', element: publicPage(<ResetPasswordPage />), errorElement: <RouteError /> },
     {
       element: <RequireAuth />,

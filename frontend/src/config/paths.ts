@@ -4,6 +4,7 @@ export const paths = {
   login: '/login',
   register: '/register',
   forgotPassword: '/forgot-password',
+  invitation: (token: string) => `/invitations/${token}`,
   resetPassword: (token: string) => `/reset-password/${token}`,
   farms: '/farms',
   farm: (farmId: number | string) => `/farms/${farmId}`,

@@ -85,11 +85,6 @@ export class MemberDto {
   @ApiProperty({ enum: FARM_ROLES }) role: FarmRole;
 }
 
-export class AddMemberDto {
-  @ApiProperty() @IsEmail() email: string;
-  @ApiProperty({ enum: FARM_ROLES }) @IsIn(FARM_ROLES) role: FarmRole;
-}
-
 export class UpdateMemberDto {
   @ApiProperty({ enum: FARM_ROLES }) @IsIn(FARM_ROLES) role: FarmRole;
 }

@@ -5,4 +5,4 @@ export { ForgotPasswordForm } from './components/forgot-password-form';
 export { ResetPasswordForm } from './components/reset-password-form';
 export { currentUserQueryOptions, authKeys } from './queries';
 export { useLogout, useSignedIn } from './mutations';
-export { invitedSignUpSchema, PASSWORD_HELP, type InvitedSignUpValues } from './schemas';
+export { PASSWORD_HELP } from './schemas';

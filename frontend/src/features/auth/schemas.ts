@@ -43,16 +43,8 @@ export const resetPasswordSchema = yup.object({
     .oneOf([yup.ref('newPassword')], 'The two passwords differ'),
 });
 
-/** Signing up through an invitation: the address is the invitation's. */
-export const invitedSignUpSchema = yup.object({
-  name: yup.string().trim().max(120, 'At most 120 characters').required('Enter your name'),
-  email: yup.string(),
-  password: newPassword('email'),
-});
-
 export type LoginValues = yup.InferType<typeof loginSchema>;
 export type RegisterValues = yup.InferType<typeof registerSchema>;
 export type ChangePasswordValues = yup.InferType<typeof changePasswordSchema>;
 export type ForgotPasswordValues = yup.InferType<typeof forgotPasswordSchema>;
 export type ResetPasswordValues = yup.InferType<typeof resetPasswordSchema>;
-export type InvitedSignUpValues = yup.InferType<typeof invitedSignUpSchema>;
