@@ -16,6 +16,7 @@ import { HealthController } from './health/health.controller';
 import { HousesModule } from './houses/houses.module';
 import { InvitationsModule } from './invitations/invitations.module';
 import { MailModule } from './mail/mail.module';
+import { ReportsModule } from './reports/reports.module';
 import { ReferenceDataModule } from './reference-data/reference-data.module';
 import { SeasonModule } from './season/season.module';
 import { SeedModule } from './seed/seed.module';
@@ -44,6 +45,7 @@ const staticFrontend = existsSync(frontendDist())
     ClimateModule,
     EstimatesModule,
     SeasonModule,
+    ReportsModule,
     SeedModule,
     ...staticFrontend,
   ],

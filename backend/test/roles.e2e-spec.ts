@@ -46,6 +46,16 @@ describe('roles × routes (e2e)', () => {
     (await t.http.post(`/api/farms/${farmId}/houses`).set(bearer(token.owner)).send(houseBody).expect(201)).body
       .id as number;
 
+  /** A fresh draft report for each call (its snapshot runs the season once). */
+  const newReport = async () =>
+    (
+      await t.http
+        .post(`/api/houses/${houseId}/reports`)
+        .set(bearer(token.adviser))
+        .send({ title: 'matrix report' })
+        .expect(201)
+    ).body.id as number;
+
   let invitationCount = 0;
   const newInvitation = async () =>
     (
@@ -250,6 +260,68 @@ describe('roles × routes (e2e)', () => {
           .get(`/api/farms/${farmId}/season-budget.csv`)
           .query({ units: 'us', ...SEASON })
           .set(bearer(token[who])),
+    },
+    {
+      route: 'POST /houses/:id/reports',
+      expected: { owner: 201, grower: 403, adviser: 201, viewer: 403, outsider: 404, admin: 404 },
+      call: (who) =>
+        t.http
+          .post(`/api/houses/${houseId}/reports`)
+          .set(bearer(token[who]))
+          .send({ title: `by ${who}` }),
+    },
+    {
+      route: 'GET /houses/:id/reports',
+      expected: { owner: 200, grower: 200, adviser: 200, viewer: 200, outsider: 404, admin: 404 },
+      call: (who) => t.http.get(`/api/houses/${houseId}/reports`).set(bearer(token[who])),
+    },
+    {
+      route: 'GET /farms/:id/reports',
+      expected: { owner: 200, grower: 200, adviser: 200, viewer: 200, outsider: 404, admin: 404 },
+      call: (who) => t.http.get(`/api/farms/${farmId}/reports`).set(bearer(token[who])),
+    },
+    {
+      route: 'GET /reports/:id',
+      expected: { owner: 200, grower: 200, adviser: 200, viewer: 200, outsider: 404, admin: 404 },
+      call: async (who) => t.http.get(`/api/reports/${await newReport()}`).set(bearer(token[who])),
+    },
+    {
+      route: 'GET /reports/:id.pdf',
+      expected: { owner: 200, grower: 200, adviser: 200, viewer: 200, outsider: 404, admin: 404 },
+      call: async (who) => t.http.get(`/api/reports/${await newReport()}.pdf`).set(bearer(token[who])),
+    },
+    {
+      route: 'PATCH /reports/:id',
+      expected: { owner: 200, grower: 403, adviser: 200, viewer: 403, outsider: 404, admin: 404 },
+      call: async (who) =>
+        t.http
+          .patch(`/api/reports/${await newReport()}`)
+          .set(bearer(token[who]))
+          .send({ notes: `by ${who}` }),
+    },
+    {
+      route: 'POST /reports/:id/issue',
+      expected: { owner: 200, grower: 403, adviser: 200, viewer: 403, outsider: 404, admin: 404 },
+      call: async (who) => t.http.post(`/api/reports/${await newReport()}/issue`).set(bearer(token[who])),
+    },
+    {
+      route: 'POST /reports/:id/revisions',
+      expected: { owner: 201, grower: 403, adviser: 201, viewer: 403, outsider: 404, admin: 404 },
+      call: async (who) => t.http.post(`/api/reports/${await newReport()}/revisions`).set(bearer(token[who])),
+    },
+    {
+      route: 'POST /reports/:id/send',
+      expected: { owner: 200, grower: 403, adviser: 200, viewer: 403, outsider: 404, admin: 404 },
+      call: async (who) =>
+        t.http
+          .post(`/api/reports/${await newReport()}/send`)
+          .set(bearer(token[who]))
+          .send({ emails: ['client@example.org'] }),
+    },
+    {
+      route: 'GET /advising',
+      expected: { owner: 200, grower: 200, adviser: 200, viewer: 200, outsider: 200, admin: 200 },
+      call: (who) => t.http.get('/api/advising').set(bearer(token[who])),
     },
     {
       route: 'GET /mail/outbox (site admin only)',

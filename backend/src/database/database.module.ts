@@ -11,6 +11,7 @@ import { Farm } from '../farms/models/farm.model';
 import { Membership } from '../farms/models/membership.model';
 import { House } from '../houses/models/house.model';
 import { Invitation } from '../invitations/models/invitation.model';
+import { Report } from '../reports/models/report.model';
 import { MailSend } from '../mail/models/mail-send.model';
 import { ReceivedMail, ReceivedMailAttachment } from '../mail/models/received-mail.model';
 import { FarmFuelPrice } from '../season/models/farm-fuel-price.model';
@@ -33,6 +34,7 @@ export const MODELS = [
   ReceivedMailAttachment,
   PasswordResetToken,
   Invitation,
+  Report,
 ];
 
 /** Brings the schema up to date before anything else touches the database. */

@@ -738,6 +738,140 @@ export interface paths {
     patch?: never;
     trace?: never;
   };
+  '/api/houses/{houseId}/reports': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    get: operations['ReportsController_listForHouse'];
+    put?: never;
+    /** Create a heater-sizing report: saves a snapshot of the inputs and results (report:write) */
+    post: operations['ReportsController_create'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/farms/{farmId}/reports': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    get: operations['ReportsController_listForFarm'];
+    put?: never;
+    post?: never;
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/advising': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    /** The signed-in adviser's client farms, each with its newest report */
+    get: operations['ReportsController_clientFarms'];
+    put?: never;
+    post?: never;
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/reports/{reportId}.pdf': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    /** The report as PDF, in the reader's units (A4 for SI, US Letter for US) */
+    get: operations['ReportsController_pdf'];
+    put?: never;
+    post?: never;
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/reports/{reportId}': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    get: operations['ReportsController_get'];
+    put?: never;
+    post?: never;
+    delete?: never;
+    options?: never;
+    head?: never;
+    /** Edit a draft report (an issued one is read-only) */
+    patch: operations['ReportsController_update'];
+    trace?: never;
+  };
+  '/api/reports/{reportId}/issue': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    get?: never;
+    put?: never;
+    post: operations['ReportsController_issue'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/reports/{reportId}/revisions': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    get?: never;
+    put?: never;
+    /** Start a new revision: a draft copy of the report */
+    post: operations['ReportsController_revise'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/reports/{reportId}/send': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    get?: never;
+    put?: never;
+    /** E-mail the PDF to chosen farm members or addresses; says whether the send failed */
+    post: operations['ReportsController_send'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
 }
 export type webhooks = Record<string, never>;
 export interface components {
@@ -2413,6 +2547,118 @@ export interface components {
       /** @description how the file was read */
       mapping: components['schemas']['TemperatureColumnMappingDto'];
       days: components['schemas']['TemperatureLogDayDto'][];
+    };
+    CreateReportDto: {
+      /** @example Heater sizing, north house */
+      title: string;
+      /** @description plain text */
+      notes?: string;
+      /** @description plain text */
+      recommendations?: string;
+    };
+    ReportFactDto: {
+      label: string;
+      value: string;
+    };
+    ReportBarDto: {
+      label: string;
+      value: number;
+    };
+    ReportBlockDto: {
+      /** @enum {string} */
+      kind: 'paragraph' | 'facts' | 'table' | 'list' | 'bars';
+      text?: string;
+      facts?: components['schemas']['ReportFactDto'][];
+      columns?: string[];
+      rows?: string[][];
+      items?: string[];
+      caption?: string;
+      bars?: components['schemas']['ReportBarDto'][];
+      /** @description unit of the bar values */
+      unit?: string;
+    };
+    ReportSectionDto: {
+      heading: string;
+      blocks: components['schemas']['ReportBlockDto'][];
+    };
+    ReportDocumentDto: {
+      /** @enum {string} */
+      unitSystem: 'si' | 'us';
+      /** @enum {string} */
+      pageSize: 'A4' | 'LETTER';
+      farmName: string;
+      houseName: string;
+      title: string;
+      subtitle: string;
+      sections: components['schemas']['ReportSectionDto'][];
+      footer: string;
+    };
+    ReportDto: {
+      id: number;
+      farmId: number;
+      /** @description null once the house was deleted */
+      houseId: number | null;
+      houseName: string;
+      title: string;
+      /** @enum {string} */
+      status: 'draft' | 'issued';
+      revision: number;
+      previousReportId: number | null;
+      authorName: string;
+      createdAt: string;
+      updatedAt: string;
+      issuedAt: string | null;
+      notes: string;
+      recommendations: string;
+      /** @description the viewer may edit, issue and revise it (report:write) */
+      canWrite: boolean;
+      document: components['schemas']['ReportDocumentDto'];
+      /** @description the saved inputs and results (SI), exactly as taken when the report was created */
+      snapshot: {
+        [key: string]: unknown;
+      };
+    };
+    ReportSummaryDto: {
+      id: number;
+      farmId: number;
+      /** @description null once the house was deleted */
+      houseId: number | null;
+      houseName: string;
+      title: string;
+      /** @enum {string} */
+      status: 'draft' | 'issued';
+      revision: number;
+      previousReportId: number | null;
+      authorName: string;
+      createdAt: string;
+      updatedAt: string;
+      issuedAt: string | null;
+    };
+    ClientFarmDto: {
+      farmId: number;
+      farmName: string;
+      houseCount: number;
+      latestReport: components['schemas']['ReportSummaryDto'] | null;
+    };
+    UpdateReportDto: {
+      title?: string;
+      notes?: string;
+      recommendations?: string;
+    };
+    SendReportDto: {
+      /** @description farm members, by user id */
+      memberUserIds?: number[];
+      /** @description any other addresses */
+      emails?: string[];
+      /** @description a short message above the report */
+      message?: string;
+    };
+    ReportSentDto: {
+      /** @enum {string} */
+      status: 'sent' | 'failed';
+      /** @description why the message did not go; kept in the send log */
+      error: string | null;
+      recipients: string[];
     };
   };
   responses: never;
@@ -4159,6 +4405,232 @@ export interface operations {
           [name: string]: unknown;
         };
         content?: never;
+      };
+    };
+  };
+  ReportsController_listForHouse: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        houseId: number;
+      };
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ReportSummaryDto'][];
+        };
+      };
+    };
+  };
+  ReportsController_create: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        houseId: number;
+      };
+      cookie?: never;
+    };
+    requestBody: {
+      content: {
+        'application/json': components['schemas']['CreateReportDto'];
+      };
+    };
+    responses: {
+      201: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ReportDto'];
+        };
+      };
+    };
+  };
+  ReportsController_listForFarm: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        farmId: number;
+      };
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ReportSummaryDto'][];
+        };
+      };
+    };
+  };
+  ReportsController_clientFarms: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ClientFarmDto'][];
+        };
+      };
+    };
+  };
+  ReportsController_pdf: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        reportId: number;
+      };
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      /** @description the PDF */
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+    };
+  };
+  ReportsController_get: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        reportId: number;
+      };
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ReportDto'];
+        };
+      };
+    };
+  };
+  ReportsController_update: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        reportId: number;
+      };
+      cookie?: never;
+    };
+    requestBody: {
+      content: {
+        'application/json': components['schemas']['UpdateReportDto'];
+      };
+    };
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ReportDto'];
+        };
+      };
+      /** @description the report is issued */
+      409: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+    };
+  };
+  ReportsController_issue: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        reportId: number;
+      };
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ReportDto'];
+        };
+      };
+    };
+  };
+  ReportsController_revise: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        reportId: number;
+      };
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      201: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ReportDto'];
+        };
+      };
+    };
+  };
+  ReportsController_send: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        reportId: number;
+      };
+      cookie?: never;
+    };
+    requestBody: {
+      content: {
+        'application/json': components['schemas']['SendReportDto'];
+      };
+    };
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ReportSentDto'];
+        };
       };
     };
   };

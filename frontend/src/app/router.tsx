@@ -17,6 +17,7 @@ const FarmPage = lazy(() => import('./routes/farm-page'));
 const NewHousePage = lazy(() => import('./routes/new-house-page'));
 const HousePage = lazy(() => import('./routes/house-page'));
 const HouseSeasonPage = lazy(() => import('./routes/house-season-page'));
+const ReportPage = lazy(() => import('./routes/report-page'));
 const SettingsPage = lazy(() => import('./routes/settings-page'));
 const AdminUsersPage = lazy(() => import('./routes/admin-users-page'));
 const AdminOutboxPage = lazy(() => import('./routes/admin-outbox-page'));
@@ -46,6 +47,7 @@ export function createAppRouter() {
             { path: 'farms/:farmId/houses/new', element: <NewHousePage /> },
             { path: 'houses/:houseId', element: <HousePage /> },
             { path: 'houses/:houseId/season', element: <HouseSeasonPage /> },
+            { path: 'reports/:reportId', element: <ReportPage /> },
             { path: 'settings', element: <SettingsPage /> },
             { path: 'admin/users', element: <AdminUsersPage /> },
             { path: 'admin/outbox', element: <AdminOutboxPage /> },

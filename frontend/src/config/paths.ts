@@ -11,6 +11,7 @@ export const paths = {
   newHouse: (farmId: number | string) => `/farms/${farmId}/houses/new`,
   house: (houseId: number | string) => `/houses/${houseId}`,
   houseSeason: (houseId: number | string) => `/houses/${houseId}/season`,
+  report: (reportId: number | string) => `/reports/${reportId}`,
   settings: '/settings',
   adminUsers: '/admin/users',
   adminOutbox: '/admin/outbox',

@@ -2,6 +2,7 @@ import * as initialSchema from './0001-initial-schema';
 import * as farmClimates from './0002-farm-climates';
 import * as seasonData from './0003-season-data';
 import * as mailInvitationsPasswordTokens from './0006-mail-invitations-password-tokens';
+import * as reports from './0007-reports';
 
 /**
  * Every schema change, in order. Add a file `NNNN-what-it-does.ts` exporting up/down and list it
@@ -12,4 +13,5 @@ export const MIGRATIONS = [
   { name: '0002-farm-climates', ...farmClimates },
   { name: '0003-season-data', ...seasonData },
   { name: '0006-mail-invitations-password-tokens', ...mailInvitationsPasswordTokens },
+  { name: '0007-reports', ...reports },
 ];
