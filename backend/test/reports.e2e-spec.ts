@@ -1,12 +1,14 @@
 import { ReceivedMail } from '../src/mail/models/received-mail.model';
+import type { Response } from 'superagent';
 import { pdfText } from './pdf-text';
 import { bearer, createTestApp, signIn, type TestApp } from './test-app';
 
 /** Binary bodies (PDF) as a Buffer. */
-const binary = (res: NodeJS.ReadableStream, callback: (error: Error | null, body: Buffer) => void) => {
+const binary = (res: Response, callback: (error: Error | null, body: Buffer) => void) => {
+  const stream = res as unknown as NodeJS.ReadableStream;
   const chunks: Buffer[] = [];
-  res.on('data', (chunk: Buffer) => chunks.push(chunk));
-  res.on('end', () => callback(null, Buffer.concat(chunks)));
+  stream.on('data', (chunk: Buffer) => chunks.push(chunk));
+  stream.on('end', () => callback(null, Buffer.concat(chunks)));
 };
 
 const squash = (text: string) => text.replace(/\s/g, '');
