@@ -98,7 +98,7 @@ describe('reports, e-mail, invitations and password reset', () => {
     const farmName = (await page.getByRole('heading', { level: 1 }).textContent()) ?? '';
     await page.getByRole('tab', { name: 'Members' }).click();
     await page.getByRole('textbox', { name: /E-mail address to invite/ }).fill('new.adviser@example.org');
-    await page.getByRole('combobox', { name: /Role/ }).click();
+    await page.getByRole('form', { name: 'Invite someone' }).locator('#field-role').click();
     await page.getByRole('option', { name: 'Adviser' }).click();
     await page.getByRole('button', { name: 'Invite' }).click();
     await page.getByRole('status').filter({ hasText: 'Invitation sent to new.adviser@example.org' }).waitFor();

@@ -5,7 +5,6 @@ import type { AuthenticatedUser } from '../common/decorators/current-user.decora
 import { ROLE_PERMISSIONS } from '../common/permissions';
 import { House } from '../houses/models/house.model';
 import { User } from '../users/models/user.model';
-import { UsersService } from '../users/users.service';
 import type { CreateFarmDto, FarmDto, MemberDto, UpdateFarmDto, UpdateMemberDto } from './dto/farm.dto';
 import { FarmAccessService } from './farm-access.service';
 import { Farm } from './models/farm.model';
@@ -19,7 +18,6 @@ export class FarmsService {
     @InjectModel(House) private readonly houses: typeof House,
     @InjectConnection() private readonly sequelize: Sequelize,
     private readonly access: FarmAccessService,
-    private readonly users: UsersService,
   ) {}
 
   async list(user: AuthenticatedUser): Promise<FarmDto[]> {

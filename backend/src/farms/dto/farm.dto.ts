@@ -1,6 +1,5 @@
 import { ApiProperty, PartialType } from '@nestjs/swagger';
 import {
-  IsEmail,
   IsIn,
   IsNumber,
   IsString,
