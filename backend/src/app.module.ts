@@ -14,6 +14,9 @@ import { EstimatesModule } from './estimates/estimates.module';
 import { FarmsModule } from './farms/farms.module';
 import { HealthController } from './health/health.controller';
 import { HousesModule } from './houses/houses.module';
+import { InvitationsModule } from './invitations/invitations.module';
+import { MailModule } from './mail/mail.module';
+import { ReportsModule } from './reports/reports.module';
 import { ReferenceDataModule } from './reference-data/reference-data.module';
 import { SeasonModule } from './season/season.module';
 import { SeedModule } from './seed/seed.module';
@@ -33,14 +36,17 @@ const staticFrontend = existsSync(frontendDist())
   imports: [
     DatabaseModule,
     ReferenceDataModule,
+    MailModule,
     UsersModule,
     AuthModule,
     FarmsModule,
+    InvitationsModule,
     HousesModule,
     ClimateModule,
     EstimatesModule,
     SeasonModule,
     WeatherModule,
+    ReportsModule,
     SeedModule,
     ...staticFrontend,
   ],

@@ -41,7 +41,7 @@ describe('season budget CSV (e2e)', () => {
     token = (
       await t.http
         .post('/api/auth/register')
-        .send({ email: 'csv@example.org', password: 'password-123', name: 'CSV grower' })
+        .send({ email: 'csv@example.org', password: 'member-pass-8472', name: 'CSV grower' })
         .expect(201)
     ).body.accessToken;
     farmId = (

@@ -1,7 +1,7 @@
 import { Logger } from '@nestjs/common';
 import { Database } from 'sqlite3';
 import { houseBody } from './fixtures';
-import { bearer, createTestApp, ifMatch, signIn, type TestApp } from './test-app';
+import { bearer, createTestApp, ifMatch, signIn, type TestApp, joinByInvitation } from './test-app';
 
 /**
  * Parallel writers, stale writes and races: nothing answers 5xx, nothing stores what validation
@@ -55,7 +55,7 @@ describe('concurrent writes (e2e)', () => {
     ).body as { id: number; version: number };
   const register = async (name: string) => {
     const email = `${name}-${Math.random().toString(36).slice(2)}@example.org`;
-    const res = await t.http.post('/api/auth/register').send({ email, password: 'password-123', name }).expect(201);
+    const res = await t.http.post('/api/auth/register').send({ email, password: 'member-pass-8472', name }).expect(201);
     return { id: res.body.user.id as number, email, token: res.body.accessToken as string };
   };
 
@@ -292,11 +292,13 @@ describe('concurrent writes (e2e)', () => {
       const a = await register('owner-a');
       const b = await register('owner-b');
       const farm = await newFarm(a.token, 'Two owners');
+      // Invitations name grower, adviser or viewer; a second owner is then promoted.
+      await joinByInvitation(t, a.token, farm.id, b.email, 'grower', b.token);
       await t.http
-        .post(`/api/farms/${farm.id}/members`)
+        .patch(`/api/farms/${farm.id}/members/${b.id}`)
         .set(bearer(a.token))
-        .send({ email: b.email, role: 'owner' })
-        .expect(201);
+        .send({ role: 'owner' })
+        .expect(200);
       return { a, b, farm };
     };
     const ownersOf = async (token: string, id: number) =>
@@ -358,7 +360,7 @@ describe('concurrent writes (e2e)', () => {
         'Sole farm one',
         'Sole farm two',
       ]);
-      const bySelf = await t.http.delete('/api/users/me').set(bearer(a.token)).send({ password: 'password-123' });
+      const bySelf = await t.http.delete('/api/users/me').set(bearer(a.token)).send({ password: 'member-pass-8472' });
       expect(bySelf.status).toBe(409);
       expect(bySelf.body.message).toMatch(/You are the only owner of “Sole farm one”, “Sole farm two”/);
       // the account is still there
@@ -371,7 +373,7 @@ describe('concurrent writes (e2e)', () => {
       expect(await ownersOf(a.token, farm.id)).toHaveLength(1);
       const c = await register('leaving');
       await t.http.delete('/api/users/me').set(bearer(c.token)).send({ password: 'wrong-password' }).expect(403);
-      await t.http.delete('/api/users/me').set(bearer(c.token)).send({ password: 'password-123' }).expect(204);
+      await t.http.delete('/api/users/me').set(bearer(c.token)).send({ password: 'member-pass-8472' }).expect(204);
       await t.http.get('/api/farms').set(bearer(c.token)).expect(401);
     });
 

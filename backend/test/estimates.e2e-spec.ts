@@ -1,6 +1,6 @@
 import { DEMO_CLIMATE, DEMO_FARM } from '../src/seed/demo-scenario';
 import { GABLE_HOUSE_SPEC } from './fixtures';
-import { bearer, createTestApp, signIn, type TestApp } from './test-app';
+import { bearer, createTestApp, joinByInvitation, signIn, type TestApp } from './test-app';
 
 /** A 9 × 30 m freestanding gable house, described in the request (nothing stored). */
 const gableHouse = GABLE_HOUSE_SPEC;
@@ -530,18 +530,14 @@ describe('estimates (e2e)', () => {
       viewer = (
         await t.http
           .post('/api/auth/register')
-          .send({ email: 'estimate-viewer@example.org', password: 'password-123', name: 'Viewer' })
+          .send({ email: 'estimate-viewer@example.org', password: 'member-pass-8472', name: 'Viewer' })
           .expect(201)
       ).body.accessToken;
-      await t.http
-        .post(`/api/farms/${farmId}/members`)
-        .set(bearer(owner))
-        .send({ email: 'estimate-viewer@example.org', role: 'viewer' })
-        .expect(201);
+      await joinByInvitation(t, owner, farmId, 'estimate-viewer@example.org', 'viewer', viewer);
       outsider = (
         await t.http
           .post('/api/auth/register')
-          .send({ email: 'estimate-outsider@example.org', password: 'password-123', name: 'Outsider' })
+          .send({ email: 'estimate-outsider@example.org', password: 'member-pass-8472', name: 'Outsider' })
           .expect(201)
       ).body.accessToken;
     });

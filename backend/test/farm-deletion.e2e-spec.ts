@@ -3,7 +3,7 @@ import { QueryTypes } from 'sequelize';
 import { DEMO_CLIMATE } from '../src/seed/demo-scenario';
 import { houseBody } from './fixtures';
 import { hourlyCsv, HOURLY_MAPPING } from './temperature-csv';
-import { bearer, createTestApp, signIn, type TestApp } from './test-app';
+import { bearer, createTestApp, joinByInvitation, signIn, type TestApp } from './test-app';
 
 /**
  * Deleting a farm deletes everything that belongs to it: houses and their production calendars,
@@ -38,11 +38,7 @@ describe('deleting a farm (e2e)', () => {
         .send({ name, latitudeDeg: 45, longitudeDeg: -94, elevationM: 300, timeZone: 'America/Chicago' })
         .expect(201)
     ).body.id as number;
-    await t.http
-      .post(`/api/farms/${farmId}/members`)
-      .set(bearer(owner))
-      .send({ email: 'grower@example.com', role: 'grower' })
-      .expect(201);
+    await joinByInvitation(t, owner, farmId, 'grower@example.com', 'grower', await signIn(t, 'grower@example.com'));
     const houseId = (
       await t.http.post(`/api/farms/${farmId}/houses`).set(bearer(owner)).send(houseBody('Doomed house')).expect(201)
     ).body.id as number;

@@ -1,6 +1,6 @@
 import { hourlyCsv, HOURLY_MAPPING } from './temperature-csv';
 import { houseBody as houseBodyNamed } from './fixtures';
-import { bearer, createTestApp, ifMatch, signIn, type TestApp } from './test-app';
+import { bearer, createTestApp, ifMatch, joinByInvitation, signIn, type TestApp } from './test-app';
 
 /**
  * The role × route matrix: every farm role, a member of another farm and the site admin
@@ -24,17 +24,13 @@ describe('roles × routes (e2e)', () => {
     for (const who of ['viewer', 'outsider'] as const) {
       const res = await t.http
         .post('/api/auth/register')
-        .send({ email: `${who}@example.org`, password: 'password-123', name: who })
+        .send({ email: `${who}@example.org`, password: 'member-pass-8472', name: who })
         .expect(201);
       token[who] = res.body.accessToken;
     }
     const farms = await t.http.get('/api/farms').set(bearer(token.owner)).expect(200);
     farmId = farms.body[0].id;
-    await t.http
-      .post(`/api/farms/${farmId}/members`)
-      .set(bearer(token.owner))
-      .send({ email: 'viewer@example.org', role: 'viewer' })
-      .expect(201);
+    await joinByInvitation(t, token.owner, farmId, 'viewer@example.org', 'viewer', token.viewer);
     // the outsider is a member (owner) of a farm of their own
     await t.http
       .post('/api/farms')
@@ -54,6 +50,26 @@ describe('roles × routes (e2e)', () => {
     (await t.http.post(`/api/farms/${farmId}/houses`).set(bearer(token.owner)).send(houseBody).expect(201)).body
       .id as number;
 
+  /** A fresh draft report for each call (its snapshot runs the season once). */
+  const newReport = async () =>
+    (
+      await t.http
+        .post(`/api/houses/${houseId}/reports`)
+        .set(bearer(token.adviser))
+        .send({ title: 'matrix report' })
+        .expect(201)
+    ).body.id as number;
+
+  let invitationCount = 0;
+  const newInvitation = async () =>
+    (
+      await t.http
+        .post(`/api/farms/${farmId}/invitations`)
+        .set(bearer(token.owner))
+        .send({ email: `pending-${++invitationCount}@example.org`, role: 'grower' })
+        .expect(201)
+    ).body.id as number;
+
   const SEASON = { startDate: '2026-12-01', endDate: '2027-02-28' };
   const smallCsv = Buffer.from(hourlyCsv('2027-01-01', 2));
   const uploadLog = (who: Who) =>
@@ -71,18 +87,14 @@ describe('roles × routes (e2e)', () => {
     const email = `${label}-${registered}@example.org`;
     const res = await t.http
       .post('/api/auth/register')
-      .send({ email, password: 'password-123', name: email })
+      .send({ email, password: 'roles-matrix-pass-8472', name: email })
       .expect(201);
-    return { id: res.body.user.id as number, email };
+    return { id: res.body.user.id as number, email, token: res.body.accessToken as string };
   };
   /** A fresh account added to the demo farm by its owner with the given role. */
   const newMember = async (role: 'viewer' | 'grower' = 'viewer') => {
     const user = await newUser('member');
-    await t.http
-      .post(`/api/farms/${farmId}/members`)
-      .set(bearer(token.owner))
-      .send({ email: user.email, role })
-      .expect(201);
+    await joinByInvitation(t, token.owner, farmId, user.email, role, user.token);
     return user.id;
   };
   /** A fresh farm owned by the owner, with the grower, adviser and viewer as members in those roles. */
@@ -94,12 +106,12 @@ describe('roles × routes (e2e)', () => {
         .send({ name: 'Shared', latitudeDeg: 44, longitudeDeg: -93, elevationM: 280, timeZone: 'America/Chicago' })
         .expect(201)
     ).body;
-    for (const [email, role] of [
-      ['grower@example.com', 'grower'],
-      ['adviser@example.com', 'adviser'],
-      ['viewer@example.org', 'viewer'],
+    for (const [who, email, role] of [
+      ['grower', 'grower@example.com', 'grower'],
+      ['adviser', 'adviser@example.com', 'adviser'],
+      ['viewer', 'viewer@example.org', 'viewer'],
     ] as const) {
-      await t.http.post(`/api/farms/${farm.id}/members`).set(bearer(token.owner)).send({ email, role }).expect(201);
+      await joinByInvitation(t, token.owner, farm.id, email, role, token[who]);
     }
     return farm.id as number;
   };
@@ -179,13 +191,30 @@ describe('roles × routes (e2e)', () => {
       call: (who) => t.http.post(`/api/houses/${houseId}/cooling`).set(bearer(token[who])).send({}),
     },
     {
-      route: 'POST /farms/:id/members',
+      route: 'POST /farms/:id/invitations',
       expected: { owner: 201, grower: 403, adviser: 403, viewer: 403, outsider: 404, admin: 404 },
-      call: async (who) => {
-        const email = `invitee-${who}@example.org`;
-        await t.http.post('/api/auth/register').send({ email, password: 'password-123', name: email });
-        return t.http.post(`/api/farms/${farmId}/members`).set(bearer(token[who])).send({ email, role: 'viewer' });
-      },
+      call: (who) =>
+        t.http
+          .post(`/api/farms/${farmId}/invitations`)
+          .set(bearer(token[who]))
+          .send({ email: `invitee-${who}@example.org`, role: 'viewer' }),
+    },
+    {
+      route: 'GET /farms/:id/invitations',
+      expected: { owner: 200, grower: 403, adviser: 403, viewer: 403, outsider: 404, admin: 404 },
+      call: (who) => t.http.get(`/api/farms/${farmId}/invitations`).set(bearer(token[who])),
+    },
+    {
+      route: 'POST /farms/:id/invitations/:id/resend',
+      expected: { owner: 200, grower: 403, adviser: 403, viewer: 403, outsider: 404, admin: 404 },
+      call: async (who) =>
+        t.http.post(`/api/farms/${farmId}/invitations/${await newInvitation()}/resend`).set(bearer(token[who])),
+    },
+    {
+      route: 'DELETE /farms/:id/invitations/:id',
+      expected: { owner: 204, grower: 403, adviser: 403, viewer: 403, outsider: 404, admin: 404 },
+      call: async (who) =>
+        t.http.delete(`/api/farms/${farmId}/invitations/${await newInvitation()}`).set(bearer(token[who])),
     },
     {
       route: 'GET /farms/:id/temperature-logs',
@@ -374,6 +403,78 @@ describe('roles × routes (e2e)', () => {
       call: async (who) => t.http.delete(`/api/users/${(await newUser('deleted')).id}`).set(bearer(token[who])),
     },
     {
+      route: 'POST /houses/:id/reports',
+      expected: { owner: 201, grower: 403, adviser: 201, viewer: 403, outsider: 404, admin: 404 },
+      call: (who) =>
+        t.http
+          .post(`/api/houses/${houseId}/reports`)
+          .set(bearer(token[who]))
+          .send({ title: `by ${who}` }),
+    },
+    {
+      route: 'GET /houses/:id/reports',
+      expected: { owner: 200, grower: 200, adviser: 200, viewer: 200, outsider: 404, admin: 404 },
+      call: (who) => t.http.get(`/api/houses/${houseId}/reports`).set(bearer(token[who])),
+    },
+    {
+      route: 'GET /farms/:id/reports',
+      expected: { owner: 200, grower: 200, adviser: 200, viewer: 200, outsider: 404, admin: 404 },
+      call: (who) => t.http.get(`/api/farms/${farmId}/reports`).set(bearer(token[who])),
+    },
+    {
+      route: 'GET /reports/:id',
+      expected: { owner: 200, grower: 200, adviser: 200, viewer: 200, outsider: 404, admin: 404 },
+      call: async (who) => t.http.get(`/api/reports/${await newReport()}`).set(bearer(token[who])),
+    },
+    {
+      route: 'GET /reports/:id.pdf',
+      expected: { owner: 200, grower: 200, adviser: 200, viewer: 200, outsider: 404, admin: 404 },
+      call: async (who) => t.http.get(`/api/reports/${await newReport()}.pdf`).set(bearer(token[who])),
+    },
+    {
+      route: 'PATCH /reports/:id',
+      expected: { owner: 200, grower: 403, adviser: 200, viewer: 403, outsider: 404, admin: 404 },
+      call: async (who) =>
+        t.http
+          .patch(`/api/reports/${await newReport()}`)
+          .set(bearer(token[who]))
+          .send({ notes: `by ${who}` }),
+    },
+    {
+      route: 'POST /reports/:id/issue',
+      expected: { owner: 200, grower: 403, adviser: 200, viewer: 403, outsider: 404, admin: 404 },
+      call: async (who) => t.http.post(`/api/reports/${await newReport()}/issue`).set(bearer(token[who])),
+    },
+    {
+      route: 'POST /reports/:id/revisions',
+      expected: { owner: 201, grower: 403, adviser: 201, viewer: 403, outsider: 404, admin: 404 },
+      call: async (who) => t.http.post(`/api/reports/${await newReport()}/revisions`).set(bearer(token[who])),
+    },
+    {
+      route: 'POST /reports/:id/send',
+      expected: { owner: 200, grower: 403, adviser: 200, viewer: 403, outsider: 404, admin: 404 },
+      call: async (who) =>
+        t.http
+          .post(`/api/reports/${await newReport()}/send`)
+          .set(bearer(token[who]))
+          .send({ emails: ['client@example.org'] }),
+    },
+    {
+      route: 'GET /advising',
+      expected: { owner: 200, grower: 200, adviser: 200, viewer: 200, outsider: 200, admin: 200 },
+      call: (who) => t.http.get('/api/advising').set(bearer(token[who])),
+    },
+    {
+      route: 'GET /mail/outbox (site admin only)',
+      expected: { owner: 403, grower: 403, adviser: 403, viewer: 403, outsider: 403, admin: 200 },
+      call: (who) => t.http.get('/api/mail/outbox').set(bearer(token[who])),
+    },
+    {
+      route: 'GET /mail/inbox (own messages)',
+      expected: { owner: 200, grower: 200, adviser: 200, viewer: 200, outsider: 200, admin: 200 },
+      call: (who) => t.http.get('/api/mail/inbox').set(bearer(token[who])),
+    },
+    {
       route: 'GET /users (site admin only)',
       expected: { owner: 403, grower: 403, adviser: 403, viewer: 403, outsider: 403, admin: 200 },
       call: (who) => t.http.get('/api/users').set(bearer(token[who])),
@@ -439,7 +540,7 @@ describe('roles × routes (e2e)', () => {
     const res = await t.http
       .delete(`/api/farms/${farmId}/members/${owners[0].userId}`)
       .set(bearer(token.owner))
-      .expect(400);
+      .expect(409);
     expect(res.body.message).toMatch(/at least one owner/);
     const after = (await t.http.get(`/api/farms/${farmId}`).set(bearer(token.owner)).expect(200)).body;
     expect(after.myRole).toBe('owner');
@@ -447,12 +548,8 @@ describe('roles × routes (e2e)', () => {
 
   it('a role change takes effect at once, and a removed member no longer sees the farm', async () => {
     const user = await newUser('promoted');
-    await t.http
-      .post(`/api/farms/${farmId}/members`)
-      .set(bearer(token.owner))
-      .send({ email: user.email, role: 'viewer' })
-      .expect(201);
-    const memberToken = await signIn(t, user.email, 'password-123');
+    await joinByInvitation(t, token.owner, farmId, user.email, 'viewer', user.token);
+    const memberToken = user.token;
     await t.http.post(`/api/farms/${farmId}/houses`).set(bearer(memberToken)).send(houseBody).expect(403);
     const changed = await t.http
       .patch(`/api/farms/${farmId}/members/${user.id}`)
@@ -469,11 +566,12 @@ describe('roles × routes (e2e)', () => {
 
   it('a second owner can be demoted once there is another, and an unknown member is 404', async () => {
     const user = await newUser('co-owner');
+    await joinByInvitation(t, token.owner, farmId, user.email, 'grower', user.token);
     await t.http
-      .post(`/api/farms/${farmId}/members`)
+      .patch(`/api/farms/${farmId}/members/${user.id}`)
       .set(bearer(token.owner))
-      .send({ email: user.email, role: 'owner' })
-      .expect(201);
+      .send({ role: 'owner' })
+      .expect(200);
     await t.http
       .patch(`/api/farms/${farmId}/members/${user.id}`)
       .set(bearer(token.owner))
@@ -519,19 +617,19 @@ describe('roles × routes (e2e)', () => {
         .send({ siteRole: 'admin' })
         .expect(200);
       expect(promoted.body).toMatchObject({ id: user.id, siteRole: 'admin' });
-      const userToken = await signIn(t, user.email, 'password-123');
+      const userToken = await signIn(t, user.email, 'member-pass-8472');
       await t.http.get('/api/users').set(bearer(userToken)).expect(200);
       await t.http.patch(`/api/users/${user.id}`).set(bearer(token.admin)).send({ siteRole: 'user' }).expect(200);
       await t.http
         .get('/api/users')
-        .set(bearer(await signIn(t, user.email, 'password-123')))
+        .set(bearer(await signIn(t, user.email, 'member-pass-8472')))
         .expect(403);
     });
 
     it('a deleted account can no longer sign in, and an unknown id is 404', async () => {
       const user = await newUser('gone');
       await t.http.delete(`/api/users/${user.id}`).set(bearer(token.admin)).expect(204);
-      await t.http.post('/api/auth/login').send({ email: user.email, password: 'password-123' }).expect(401);
+      await t.http.post('/api/auth/login').send({ email: user.email, password: 'member-pass-8472' }).expect(401);
       await t.http.delete('/api/users/999999').set(bearer(token.admin)).expect(404);
       await t.http.patch('/api/users/999999').set(bearer(token.admin)).send({ name: 'x' }).expect(404);
     });

@@ -79,6 +79,10 @@ export async function createTestApp(env: Record<string, string> = {}): Promise<T
     DEMO_SEED: 'true',
     LOGIN_RATE_LIMIT_PER_MINUTE: '1000',
     JWT_SECRET: 'e2e-secret-that-is-long-enough',
+    // the in-process SMTP server on any free port; SMTP_URL unset unless a spec sets it
+    SMTP_LOCAL_PORT: '0',
+    SMTP_URL: '',
+    PUBLIC_URL: 'http://thermbay.test',
     ...env,
   };
   const removeDatabase = async () => {
@@ -135,3 +139,27 @@ export const bearer = (token: string) => ({ Authorization: `Bearer ${token}` });
 
 /** The If-Match header naming the version a write is based on. */
 export const ifMatch = (version: number) => ({ 'If-Match': String(version) });
+/** The link token in the newest message the local SMTP server kept for `email`, after `path`. */
+export async function linkTokenFromMail(t: TestApp, email: string, path: '/invitations/' | '/reset-password/') {
+  const { ReceivedMail } = await import('../src/mail/models/received-mail.model');
+  const rows = await ReceivedMail.findAll({ order: [['id', 'DESC']] });
+  const mail = rows.find((row) => row.recipients.includes(email.toLowerCase()));
+  const match = new RegExp(`${path}([A-Za-z0-9_-]+)`).exec(mail?.text ?? '');
+  if (!match?.[1]) throw new Error(`no ${path} link in a message to ${email}`);
+  void t;
+  return match[1];
+}
+
+/** Adds an existing account to a farm the way the app does: the owner invites, the person accepts. */
+export async function joinByInvitation(
+  t: TestApp,
+  ownerToken: string,
+  farmId: number,
+  email: string,
+  role: 'grower' | 'adviser' | 'viewer',
+  memberToken: string,
+): Promise<void> {
+  await t.http.post(`/api/farms/${farmId}/invitations`).set(bearer(ownerToken)).send({ email, role }).expect(201);
+  const token = await linkTokenFromMail(t, email, '/invitations/');
+  await t.http.post(`/api/invitations/${token}/accept`).set(bearer(memberToken)).expect(200);
+}

@@ -37,6 +37,12 @@ export async function startBackend(): Promise<() => Promise<void>> {
       // Every browser test signs in from the same address; the default 10 a minute would refuse
       // the later ones with 429 once the suite grows.
       LOGIN_RATE_LIMIT_PER_MINUTE: '1000',
+      // the in-process SMTP server on any free port; links in e-mails point at this test server
+      SMTP_LOCAL_PORT: '0',
+      SMTP_URL: '',
+      PUBLIC_URL: E2E_BASE_URL,
+      // always SQLite here, whatever database the developer's shell points at
+      DATABASE_URL: '',
     },
     stdio: ['ignore', 'pipe', 'pipe'],
   });

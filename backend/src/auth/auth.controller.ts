@@ -1,7 +1,16 @@
-import { Body, Controller, Get, HttpCode, Post, Req, Res } from '@nestjs/common';
+import { Body, Controller, Get, HttpCode, Post, Req, Res, UseGuards } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
-import { ApiBearerAuth, ApiCreatedResponse, ApiOkResponse, ApiTags, ApiTooManyRequestsResponse } from '@nestjs/swagger';
 import type { Request, Response } from 'express';
+import {
+  ApiBadRequestResponse,
+  ApiBearerAuth,
+  ApiCreatedResponse,
+  ApiOkResponse,
+  ApiOperation,
+  ApiTags,
+  ApiTooManyRequestsResponse,
+} from '@nestjs/swagger';
+import { ThrottlerGuard } from '@nestjs/throttler';
 import { CurrentUser, type AuthenticatedUser } from '../common/decorators/current-user.decorator';
 import { Public } from '../common/decorators/public.decorator';
 import type { Environment } from '../config/environment';
@@ -9,7 +18,16 @@ import { DEMO_ACCOUNTS, DEMO_PASSWORD } from '../seed/demo-scenario';
 import { UserDto } from '../users/dto/user.dto';
 import { toUserDto, UsersService } from '../users/users.service';
 import { AuthService } from './auth.service';
-import { DemoAccountsDto, LoginDto, RegisterDto, SessionDto } from './dto/auth.dto';
+import {
+  ChangePasswordDto,
+  DemoAccountsDto,
+  LoginDto,
+  MessageDto,
+  PasswordResetDto,
+  PasswordResetRequestDto,
+  RegisterDto,
+  SessionDto,
+} from './dto/auth.dto';
 import { LOGIN_WINDOW_MS, LoginLimiterService, TooManyAttemptsException } from './login-limiter/login-limiter.service';
 
 /** Runs `work`; a limiter refusal also tells the client when to try again. */
@@ -75,6 +93,40 @@ export class AuthController {
   @ApiBearerAuth()
   async logout(@CurrentUser() me: AuthenticatedUser): Promise<void> {
     await this.auth.logout(me.id);
+  }
+
+  @Post('password')
+  @UseGuards(ThrottlerGuard)
+  @HttpCode(200)
+  @ApiBearerAuth()
+  @ApiOperation({ summary: 'Change the password, knowing the current one; every other session is signed out' })
+  @ApiOkResponse({ type: SessionDto, description: 'a new session for this browser' })
+  @ApiBadRequestResponse({ description: 'current password wrong, or the new one refused (the reason is given)' })
+  changePassword(@CurrentUser() me: AuthenticatedUser, @Body() body: ChangePasswordDto): Promise<SessionDto> {
+    return this.auth.changePassword(me.id, body);
+  }
+
+  @Public()
+  @UseGuards(ThrottlerGuard)
+  @Post('password-reset/request')
+  @HttpCode(202)
+  @ApiOperation({
+    summary: 'E-mail a one-hour, single-use reset link; the same answer whether or not the account exists',
+  })
+  @ApiOkResponse({ type: MessageDto })
+  requestPasswordReset(@Body() body: PasswordResetRequestDto): Promise<MessageDto> {
+    return this.auth.requestPasswordReset(body);
+  }
+
+  @Public()
+  @UseGuards(ThrottlerGuard)
+  @Post('password-reset')
+  @HttpCode(200)
+  @ApiOperation({ summary: 'Set a new password with a reset token; every session of the account is signed out' })
+  @ApiOkResponse({ type: SessionDto, description: 'signed in with the new password' })
+  @ApiBadRequestResponse({ description: 'link used, expired or unknown; or the new password refused' })
+  resetPassword(@Body() body: PasswordResetDto): Promise<SessionDto> {
+    return this.auth.resetPassword(body);
   }
 
   @Get('me')

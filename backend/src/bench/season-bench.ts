@@ -4,9 +4,11 @@
  *  2. a bare loop doing the same per-hour arithmetic over 8,760 precomputed hours, and the ratio 1 ÷ 2,
  *  3. computing a site's sun positions and clear-sky irradiance for a year (done once per site-year),
  *  4. a whole estimateSeason call with the sun already cached (heat loss, climate curve, the
- *     simulation and the four extra runs of the degree-day comparison).
+ *     simulation and the four extra runs of the degree-day comparison),
+ *  5. rendering a heater-sizing report of the demo house as PDF (document building included).
  */
 import { loadReferenceData } from '../reference-data/load-reference-data';
+import { benchReportPdf } from './report-pdf-bench';
 import { baseVariant, estimateSeason, prepareSeason, variantParameters } from '@thermbay/engine/estimate-season';
 import { demoSeasonInput } from '@thermbay/engine/season/demo-season';
 import { simulateSeason } from '@thermbay/engine/season/season-simulation';
@@ -91,3 +93,13 @@ function main(): void {
 }
 
 main();
+benchReportPdf()
+  .then(({ medianMs, bytes, pages }) =>
+    console.log(
+      `  report PDF render (demo house):     ${medianMs.toFixed(1)} ms (${pages} pages, ${Math.round(bytes / 1024)} kB)`,
+    ),
+  )
+  .catch((error: Error) => {
+    console.error(`report PDF benchmark failed: ${error.message}`);
+    process.exitCode = 1;
+  });

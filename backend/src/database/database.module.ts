@@ -6,10 +6,15 @@ import { dirname, resolve } from 'node:path';
 import { Sequelize } from 'sequelize-typescript';
 import { LoginAttempt } from '../auth/login-limiter/login-attempt.model';
 import type { Environment } from '../config/environment';
+import { PasswordResetToken } from '../auth/models/password-reset-token.model';
 import { FarmClimate } from '../climate/models/farm-climate.model';
 import { Farm } from '../farms/models/farm.model';
 import { Membership } from '../farms/models/membership.model';
 import { House } from '../houses/models/house.model';
+import { Invitation } from '../invitations/models/invitation.model';
+import { Report } from '../reports/models/report.model';
+import { MailSend } from '../mail/models/mail-send.model';
+import { ReceivedMail, ReceivedMailAttachment } from '../mail/models/received-mail.model';
 import { FarmFuelPrice } from '../season/models/farm-fuel-price.model';
 import { HouseCalendar } from '../season/models/house-calendar.model';
 import { TemperatureLog } from '../temperature-logs/models/temperature-log.model';
@@ -28,6 +33,12 @@ export const MODELS = [
   FarmFuelPrice,
   WeatherYear,
   LoginAttempt,
+  MailSend,
+  ReceivedMail,
+  ReceivedMailAttachment,
+  PasswordResetToken,
+  Invitation,
+  Report,
 ];
 
 /** Brings the schema up to date before anything else touches the database. */

@@ -12,7 +12,6 @@ import { CurrentUser, type AuthenticatedUser } from '../common/decorators/curren
 import { ROLE_PERMISSIONS } from '../common/permissions';
 import { ApiVersionedWrite, IF_MATCH_HEADER } from '../common/versioning';
 import {
-  AddMemberDto,
   CreateFarmDto,
   FarmDto,
   MemberDto,
@@ -82,16 +81,6 @@ export class FarmsController {
   @ApiOkResponse({ type: MemberDto, isArray: true })
   members(@CurrentUser() me: AuthenticatedUser, @Param('farmId', ParseIdPipe) farmId: number): Promise<MemberDto[]> {
     return this.farms.members(me, farmId);
-  }
-
-  @Post('farms/:farmId/members')
-  @ApiCreatedResponse({ type: MemberDto })
-  addMember(
-    @CurrentUser() me: AuthenticatedUser,
-    @Param('farmId', ParseIdPipe) farmId: number,
-    @Body() body: AddMemberDto,
-  ): Promise<MemberDto> {
-    return this.farms.addMember(me, farmId, body);
   }
 
   @Patch('farms/:farmId/members/:userId')

@@ -7,8 +7,7 @@ import { ROLE_PERMISSIONS } from '../common/permissions';
 import { assertVersion, changesNothing, expectedVersion } from '../common/versioning';
 import { House } from '../houses/models/house.model';
 import { User } from '../users/models/user.model';
-import { UsersService } from '../users/users.service';
-import type { AddMemberDto, CreateFarmDto, FarmDto, MemberDto, UpdateFarmDto, UpdateMemberDto } from './dto/farm.dto';
+import type { CreateFarmDto, FarmDto, MemberDto, UpdateFarmDto, UpdateMemberDto } from './dto/farm.dto';
 import { FarmAccessService } from './farm-access.service';
 import { Farm } from './models/farm.model';
 import { Membership } from './models/membership.model';
@@ -21,7 +20,6 @@ export class FarmsService {
     @InjectModel(House) private readonly houses: typeof House,
     @InjectConnection() private readonly sequelize: Sequelize,
     private readonly access: FarmAccessService,
-    private readonly users: UsersService,
   ) {}
 
   async list(user: AuthenticatedUser): Promise<FarmDto[]> {
@@ -78,16 +76,6 @@ export class FarmsService {
     await this.access.require(user, farmId, 'farm:read');
     const rows = await this.memberships.findAll({ where: { farmId }, include: [User], order: [['id', 'ASC']] });
     return rows.map((m) => ({ userId: m.userId, email: m.user.email, name: m.user.name, role: m.role }));
-  }
-
-  async addMember(user: AuthenticatedUser, farmId: number, body: AddMemberDto): Promise<MemberDto> {
-    await this.access.require(user, farmId, 'members:manage');
-    const invitee = await this.users.findByEmail(body.email);
-    if (!invitee) throw new NotFoundException('No account has that e-mail; ask them to register first');
-    const existing = await this.memberships.findOne({ where: { farmId, userId: invitee.id } });
-    if (existing) throw new BadRequestException('That person is already a member of this farm');
-    const membership = await this.memberships.create({ farmId, userId: invitee.id, role: body.role });
-    return { userId: invitee.id, email: invitee.email, name: invitee.name, role: membership.role };
   }
 
   async updateMember(

@@ -11,6 +11,8 @@ async function main(): Promise<void> {
   // Always a throwaway SQLite file, whatever database this shell points at.
   const databaseFile = join(tmpdir(), `thermbay-openapi-${process.pid}.sqlite`);
   const env = { ...process.env, DATABASE_FILE: databaseFile, DATABASE_URL: '', DEMO_SEED: 'false', NODE_ENV: 'test' };
+  // the local SMTP server starts with the app: any free port, never a fixed one
+  Object.assign(env, { SMTP_LOCAL_PORT: '0', SMTP_URL: '' });
   const app = await NestFactory.create(AppModule.forRoot(env), { logger: false });
   configureApp(app);
   await app.init();
@@ -18,7 +20,7 @@ async function main(): Promise<void> {
   const target = resolve(__dirname, '..', '..', 'openapi.json');
   writeFileSync(target, `${JSON.stringify(document, null, 2)}\n`);
   await app.close();
-  for (const suffix of ['', '-wal', '-shm']) rmSync(databaseFile + suffix, { force: true });
+  for (const suffix of ['', '-wal', '-shm', '.jwt-secret']) rmSync(databaseFile + suffix, { force: true });
   console.log(`wrote ${target}`);
 }
 

@@ -32,5 +32,6 @@ import { SunCacheService } from './sun-cache.service';
     CalendarService,
     FuelPricesService,
   ],
+  exports: [SeasonService],
 })
 export class SeasonModule {}

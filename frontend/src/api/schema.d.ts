@@ -36,6 +36,57 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/mail/outbox": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** Every message the local SMTP server kept, and every send that failed (site admin) */
+        get: operations["MailController_all"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/mail/inbox": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** Messages the local SMTP server kept for the signed-in user */
+        get: operations["MailController_mine"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/mail/messages/{mailId}/attachments/{attachmentId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** Download an attachment (site admin, or a recipient of the message) */
+        get: operations["MailController_download"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/users/me": {
         parameters: {
             query?: never;
@@ -132,6 +183,57 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/auth/password": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Change the password, knowing the current one; every other session is signed out */
+        post: operations["AuthController_changePassword"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/auth/password-reset/request": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** E-mail a one-hour, single-use reset link; the same answer whether or not the account exists */
+        post: operations["AuthController_requestPasswordReset"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/auth/password-reset": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Set a new password with a reset token; every session of the account is signed out */
+        post: operations["AuthController_resetPassword"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/auth/me": {
         parameters: {
             query?: never;
@@ -221,7 +323,7 @@ export interface paths {
         };
         get: operations["FarmsController_members"];
         put?: never;
-        post: operations["FarmsController_addMember"];
+        post?: never;
         delete?: never;
         options?: never;
         head?: never;
@@ -242,6 +344,108 @@ export interface paths {
         options?: never;
         head?: never;
         patch: operations["FarmsController_updateMember"];
+        trace?: never;
+    };
+    "/api/farms/{farmId}/invitations": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** Pending invitations of the farm (owners) */
+        get: operations["InvitationsController_pending"];
+        put?: never;
+        /** Invite an e-mail address to the farm; the answer says whether the e-mail went */
+        post: operations["InvitationsController_invite"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/farms/{farmId}/invitations/{invitationId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post?: never;
+        delete: operations["InvitationsController_revoke"];
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/farms/{farmId}/invitations/{invitationId}/resend": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Send a new link (the old one stops working), valid 7 more days */
+        post: operations["InvitationsController_resend"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/invitations/{token}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** What an invitation link offers */
+        get: operations["InvitationsController_preview"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/invitations/{token}/sign-up": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Create an account with the invited address and join the farm */
+        post: operations["InvitationsController_signUp"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/invitations/{token}/accept": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Join the farm with the signed-in account (its address must be the invited one) */
+        post: operations["InvitationsController_accept"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
         trace?: never;
     };
     "/api/farms/{farmId}/houses": {
@@ -598,6 +802,140 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/houses/{houseId}/reports": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["ReportsController_listForHouse"];
+        put?: never;
+        /** Create a heater-sizing report: saves a snapshot of the inputs and results (report:write) */
+        post: operations["ReportsController_create"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/farms/{farmId}/reports": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["ReportsController_listForFarm"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/advising": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** The signed-in adviser's client farms, each with its newest report */
+        get: operations["ReportsController_clientFarms"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/reports/{reportId}.pdf": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** The report as PDF, in the reader's units (A4 for SI, US Letter for US) */
+        get: operations["ReportsController_pdf"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/reports/{reportId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["ReportsController_get"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        /** Edit a draft report (an issued one is read-only) */
+        patch: operations["ReportsController_update"];
+        trace?: never;
+    };
+    "/api/reports/{reportId}/issue": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["ReportsController_issue"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/reports/{reportId}/revisions": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Start a new revision: a draft copy of the report */
+        post: operations["ReportsController_revise"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/reports/{reportId}/send": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** E-mail the PDF to chosen farm members or addresses; says whether the send failed */
+        post: operations["ReportsController_send"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
 }
 export type webhooks = Record<string, never>;
 export interface components {
@@ -619,6 +957,46 @@ export interface components {
             status: "ok" | "unavailable";
             version: string;
             database: components["schemas"]["DatabaseHealthDto"];
+        };
+        ReceivedAttachmentDto: {
+            id: number;
+            fileName: string;
+            contentType: string;
+            sizeBytes: number;
+        };
+        ReceivedMailDto: {
+            id: number;
+            /** @description when the local server received it (ISO 8601) */
+            receivedAt: string;
+            from: string | null;
+            /** @description the To header */
+            to: string | null;
+            /** @description envelope recipients: who it was delivered to */
+            recipients: string[];
+            subject: string | null;
+            /** @description plain-text body */
+            text: string | null;
+            attachments: components["schemas"]["ReceivedAttachmentDto"][];
+        };
+        MailSendDto: {
+            id: number;
+            kind: string;
+            sentAt: string;
+            recipients: string[];
+            subject: string;
+            text: string;
+            attachmentNames: string[];
+            /** @enum {string} */
+            status: "sent" | "failed";
+            /** @description why it failed */
+            error: string | null;
+        };
+        OutboxDto: {
+            /** @description false when SMTP_URL sends through a real server (then nothing is kept here) */
+            localServer: boolean;
+            messages: components["schemas"]["ReceivedMailDto"][];
+            /** @description sends the SMTP server did not take, newest first */
+            failedSends: components["schemas"]["MailSendDto"][];
         };
         UpdateMeDto: {
             name?: string;
@@ -648,6 +1026,7 @@ export interface components {
         };
         RegisterDto: {
             email: string;
+            /** @description at least 10 characters, at most 72 bytes, not the e-mail address, not a commonly used password */
             password: string;
             name: string;
         };
@@ -660,6 +1039,23 @@ export interface components {
             email: string;
             /** @example thermbay-demo */
             password: string;
+        };
+        ChangePasswordDto: {
+            currentPassword: string;
+            /** @description at least 10 characters, at most 72 bytes, not the e-mail address, not a commonly used password */
+            newPassword: string;
+        };
+        PasswordResetRequestDto: {
+            email: string;
+        };
+        MessageDto: {
+            message: string;
+        };
+        PasswordResetDto: {
+            /** @description the token from the reset link */
+            token: string;
+            /** @description at least 10 characters, at most 72 bytes, not the e-mail address, not a commonly used password */
+            newPassword: string;
         };
         DemoAccountDto: {
             email: string;
@@ -727,12 +1123,62 @@ export interface components {
             /** @enum {string} */
             role: "owner" | "grower" | "adviser" | "viewer";
         };
-        AddMemberDto: {
-            email: string;
+        UpdateMemberDto: {
             /** @enum {string} */
             role: "owner" | "grower" | "adviser" | "viewer";
         };
-        UpdateMemberDto: {
+        CreateInvitationDto: {
+            email: string;
+            /** @enum {string} */
+            role: "grower" | "adviser" | "viewer";
+        };
+        MailOutcomeDto: {
+            /** @enum {string} */
+            status: "sent" | "failed";
+            /** @description why the message did not go; kept in the send log */
+            error: string | null;
+        };
+        InvitationSentDto: {
+            id: number;
+            farmId: number;
+            email: string;
+            /** @enum {string} */
+            role: "owner" | "grower" | "adviser" | "viewer";
+            invitedByName: string | null;
+            createdAt: string;
+            expiresAt: string;
+            /** @description the link no longer works (7 days passed); resend to renew it */
+            expired: boolean;
+            mail: components["schemas"]["MailOutcomeDto"];
+        };
+        InvitationDto: {
+            id: number;
+            farmId: number;
+            email: string;
+            /** @enum {string} */
+            role: "owner" | "grower" | "adviser" | "viewer";
+            invitedByName: string | null;
+            createdAt: string;
+            expiresAt: string;
+            /** @description the link no longer works (7 days passed); resend to renew it */
+            expired: boolean;
+        };
+        InvitationPreviewDto: {
+            farmName: string;
+            /** @enum {string} */
+            role: "owner" | "grower" | "adviser" | "viewer";
+            email: string;
+            invitedByName: string | null;
+            expiresAt: string;
+            /** @description an account already uses the address: sign in to accept */
+            accountExists: boolean;
+        };
+        InvitedSignUpDto: {
+            name: string;
+            password: string;
+        };
+        AcceptedInvitationDto: {
+            farmId: number;
             /** @enum {string} */
             role: "owner" | "grower" | "adviser" | "viewer";
         };
@@ -2206,6 +2652,118 @@ export interface components {
             proposedClimate: components["schemas"]["SiteClimateDto"];
             currentClimate: components["schemas"]["SiteClimateDto"] | null;
         };
+        CreateReportDto: {
+            /** @example Heater sizing, north house */
+            title: string;
+            /** @description plain text */
+            notes?: string;
+            /** @description plain text */
+            recommendations?: string;
+        };
+        ReportFactDto: {
+            label: string;
+            value: string;
+        };
+        ReportBarDto: {
+            label: string;
+            value: number;
+        };
+        ReportBlockDto: {
+            /** @enum {string} */
+            kind: "paragraph" | "facts" | "table" | "list" | "bars";
+            text?: string;
+            facts?: components["schemas"]["ReportFactDto"][];
+            columns?: string[];
+            rows?: string[][];
+            items?: string[];
+            caption?: string;
+            bars?: components["schemas"]["ReportBarDto"][];
+            /** @description unit of the bar values */
+            unit?: string;
+        };
+        ReportSectionDto: {
+            heading: string;
+            blocks: components["schemas"]["ReportBlockDto"][];
+        };
+        ReportDocumentDto: {
+            /** @enum {string} */
+            unitSystem: "si" | "us";
+            /** @enum {string} */
+            pageSize: "A4" | "LETTER";
+            farmName: string;
+            houseName: string;
+            title: string;
+            subtitle: string;
+            sections: components["schemas"]["ReportSectionDto"][];
+            footer: string;
+        };
+        ReportDto: {
+            id: number;
+            farmId: number;
+            /** @description null once the house was deleted */
+            houseId: number | null;
+            houseName: string;
+            title: string;
+            /** @enum {string} */
+            status: "draft" | "issued";
+            revision: number;
+            previousReportId: number | null;
+            authorName: string;
+            createdAt: string;
+            updatedAt: string;
+            issuedAt: string | null;
+            notes: string;
+            recommendations: string;
+            /** @description the viewer may edit, issue and revise it (report:write) */
+            canWrite: boolean;
+            document: components["schemas"]["ReportDocumentDto"];
+            /** @description the saved inputs and results (SI), exactly as taken when the report was created */
+            snapshot: {
+                [key: string]: unknown;
+            };
+        };
+        ReportSummaryDto: {
+            id: number;
+            farmId: number;
+            /** @description null once the house was deleted */
+            houseId: number | null;
+            houseName: string;
+            title: string;
+            /** @enum {string} */
+            status: "draft" | "issued";
+            revision: number;
+            previousReportId: number | null;
+            authorName: string;
+            createdAt: string;
+            updatedAt: string;
+            issuedAt: string | null;
+        };
+        ClientFarmDto: {
+            farmId: number;
+            farmName: string;
+            houseCount: number;
+            latestReport: components["schemas"]["ReportSummaryDto"] | null;
+        };
+        UpdateReportDto: {
+            title?: string;
+            notes?: string;
+            recommendations?: string;
+        };
+        SendReportDto: {
+            /** @description farm members, by user id */
+            memberUserIds?: number[];
+            /** @description any other addresses */
+            emails?: string[];
+            /** @description a short message above the report */
+            message?: string;
+        };
+        ReportSentDto: {
+            /** @enum {string} */
+            status: "sent" | "failed";
+            /** @description why the message did not go; kept in the send log */
+            error: string | null;
+            recipients: string[];
+        };
     };
     responses: never;
     parameters: never;
@@ -2275,6 +2833,72 @@ export interface operations {
                         };
                     };
                 };
+            };
+        };
+    };
+    MailController_all: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["OutboxDto"];
+                };
+            };
+        };
+    };
+    MailController_mine: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ReceivedMailDto"][];
+                };
+            };
+        };
+    };
+    MailController_download: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                mailId: number;
+                attachmentId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description the attachment as received */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no such message or attachment, or not yours */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
             };
         };
     };
@@ -2477,6 +3101,91 @@ export interface operations {
         requestBody?: never;
         responses: {
             204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    AuthController_changePassword: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["ChangePasswordDto"];
+            };
+        };
+        responses: {
+            /** @description a new session for this browser */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["SessionDto"];
+                };
+            };
+            /** @description current password wrong, or the new one refused (the reason is given) */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    AuthController_requestPasswordReset: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["PasswordResetRequestDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["MessageDto"];
+                };
+            };
+        };
+    };
+    AuthController_resetPassword: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["PasswordResetDto"];
+            };
+        };
+        responses: {
+            /** @description signed in with the new password */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["SessionDto"];
+                };
+            };
+            /** @description link used, expired or unknown; or the new password refused */
+            400: {
                 headers: {
                     [name: string]: unknown;
                 };
@@ -2687,31 +3396,6 @@ export interface operations {
             };
         };
     };
-    FarmsController_addMember: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                farmId: number;
-            };
-            cookie?: never;
-        };
-        requestBody: {
-            content: {
-                "application/json": components["schemas"]["AddMemberDto"];
-            };
-        };
-        responses: {
-            201: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["MemberDto"];
-                };
-            };
-        };
-    };
     FarmsController_removeMember: {
         parameters: {
             query?: never;
@@ -2765,6 +3449,182 @@ export interface operations {
             };
             /** @description the member is the farm’s last owner */
             409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    InvitationsController_pending: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                farmId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["InvitationDto"][];
+                };
+            };
+        };
+    };
+    InvitationsController_invite: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                farmId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["CreateInvitationDto"];
+            };
+        };
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["InvitationSentDto"];
+                };
+            };
+        };
+    };
+    InvitationsController_revoke: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                farmId: number;
+                invitationId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    InvitationsController_resend: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                farmId: number;
+                invitationId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["InvitationSentDto"];
+                };
+            };
+        };
+    };
+    InvitationsController_preview: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                token: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["InvitationPreviewDto"];
+                };
+            };
+            /** @description unknown, used, revoked or expired link */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    InvitationsController_signUp: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                token: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["InvitedSignUpDto"];
+            };
+        };
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["SessionDto"];
+                };
+            };
+            /** @description unknown, used, revoked or expired link */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    InvitationsController_accept: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                token: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["AcceptedInvitationDto"];
+                };
+            };
+            /** @description unknown, used, revoked or expired link */
+            404: {
                 headers: {
                     [name: string]: unknown;
                 };
@@ -3940,6 +4800,232 @@ export interface operations {
                     [name: string]: unknown;
                 };
                 content?: never;
+            };
+        };
+    };
+    ReportsController_listForHouse: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                houseId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ReportSummaryDto"][];
+                };
+            };
+        };
+    };
+    ReportsController_create: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                houseId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["CreateReportDto"];
+            };
+        };
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ReportDto"];
+                };
+            };
+        };
+    };
+    ReportsController_listForFarm: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                farmId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ReportSummaryDto"][];
+                };
+            };
+        };
+    };
+    ReportsController_clientFarms: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ClientFarmDto"][];
+                };
+            };
+        };
+    };
+    ReportsController_pdf: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                reportId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description the PDF */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    ReportsController_get: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                reportId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ReportDto"];
+                };
+            };
+        };
+    };
+    ReportsController_update: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                reportId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["UpdateReportDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ReportDto"];
+                };
+            };
+            /** @description the report is issued */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    ReportsController_issue: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                reportId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ReportDto"];
+                };
+            };
+        };
+    };
+    ReportsController_revise: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                reportId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ReportDto"];
+                };
+            };
+        };
+    };
+    ReportsController_send: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                reportId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["SendReportDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ReportSentDto"];
+                };
             };
         };
     };

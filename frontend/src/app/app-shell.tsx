@@ -62,12 +62,20 @@ export function AppShell() {
             <Button color="inherit" component={RouterLink} to={paths.farms}>
               Farms
             </Button>
+            <Button color="inherit" component={RouterLink} to={paths.messages}>
+              Messages
+            </Button>
             <Button color="inherit" component={RouterLink} to={paths.settings}>
               Settings
             </Button>
             {user?.siteRole === 'admin' ? (
               <Button color="inherit" component={RouterLink} to={paths.adminUsers}>
                 Users
+              </Button>
+            ) : null}
+            {user?.siteRole === 'admin' ? (
+              <Button color="inherit" component={RouterLink} to={paths.adminOutbox}>
+                Outbox
               </Button>
             ) : null}
           </Box>

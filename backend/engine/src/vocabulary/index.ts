@@ -7,3 +7,4 @@ export * from './bounds';
 export * from './house-words';
 export * from './quantities';
 export * from './assumption';
+export * from './passwords';

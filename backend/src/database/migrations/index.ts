@@ -3,6 +3,8 @@ import * as farmClimates from './0002-farm-climates';
 import * as seasonData from './0003-season-data';
 import * as rowVersions from './0004-row-versions';
 import * as loginAttempts from './0005-login-attempts';
+import * as mailInvitationsPasswordTokens from './0006-mail-invitations-password-tokens';
+import * as reports from './0007-reports';
 import * as weatherYears from './0010-weather-years';
 
 /**
@@ -15,5 +17,7 @@ export const MIGRATIONS = [
   { name: '0003-season-data', ...seasonData },
   { name: '0004-row-versions', ...rowVersions },
   { name: '0005-login-attempts', ...loginAttempts },
+  { name: '0006-mail-invitations-password-tokens', ...mailInvitationsPasswordTokens },
+  { name: '0007-reports', ...reports },
   { name: '0010-weather-years', ...weatherYears },
 ];

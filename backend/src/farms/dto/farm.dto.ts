@@ -1,6 +1,5 @@
 import { ApiProperty, PartialType } from '@nestjs/swagger';
 import {
-  IsEmail,
   IsIn,
   IsNumber,
   IsString,
@@ -84,11 +83,6 @@ export class MemberDto {
   @ApiProperty() email: string;
   @ApiProperty() name: string;
   @ApiProperty({ enum: FARM_ROLES }) role: FarmRole;
-}
-
-export class AddMemberDto {
-  @ApiProperty() @IsEmail() email: string;
-  @ApiProperty({ enum: FARM_ROLES }) @IsIn(FARM_ROLES) role: FarmRole;
 }
 
 export class UpdateMemberDto {

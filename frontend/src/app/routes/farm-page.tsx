@@ -15,6 +15,7 @@ import { SeasonBudgetSection } from '../../features/season-budget';
 import { TemperatureLogsSection } from '../../features/temperature-logs';
 import { referenceDataQueryOptions } from '../../lib/reference-data';
 import { useCurrentUser } from '../session';
+import { farmReportsQueryOptions, ReportLinks } from '../../features/reports';
 
 /** The farm page's tabs; the open one is kept in the URL (?tab=climate) so a reload keeps it. */
 const FARM_TABS = [
@@ -22,6 +23,7 @@ const FARM_TABS = [
   { id: 'climate', label: 'Climate' },
   { id: 'temperature-logs', label: 'Temperature logs' },
   { id: 'season', label: 'Fuel & season budget' },
+  { id: 'reports', label: 'Reports' },
   { id: 'members', label: 'Members' },
 ] as const;
 type FarmTab = (typeof FARM_TABS)[number]['id'];
@@ -130,6 +132,7 @@ export default function FarmPage() {
             )}
           </Stack>
         ) : null}
+        {tab === 'reports' ? <FarmReports farmId={farmId} /> : null}
         {tab === 'members' ? (
           <MembersSection
             farmId={farmId}
@@ -155,6 +158,22 @@ export default function FarmPage() {
           })
         }
       />
+    </Stack>
+  );
+}
+
+function FarmReports({ farmId }: { farmId: number }) {
+  const reports = useQuery(farmReportsQueryOptions(farmId));
+  return (
+    <Stack component="section" aria-labelledby="farm-reports-heading" spacing={2}>
+      <Typography id="farm-reports-heading" variant="h2">
+        Reports
+      </Typography>
+      <Typography variant="body2" color="text.secondary">
+        Heater-sizing reports of every house, newest first. Start one from a house page.
+      </Typography>
+      <ErrorAlert error={reports.error} title="Reports could not be loaded" />
+      <ReportLinks reports={reports.data ?? []} reportPath={paths.report} />
     </Stack>
   );
 }

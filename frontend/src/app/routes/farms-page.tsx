@@ -6,6 +6,7 @@ import { useNavigate } from 'react-router-dom';
 import { ErrorAlert } from '../../components/feedback';
 import { paths } from '../../config/paths';
 import { FarmFormDialog, FarmsTable, farmsListQueryOptions } from '../../features/farms';
+import { ClientFarms } from '../../features/reports';
 
 export default function FarmsPage() {
   const farms = useQuery(farmsListQueryOptions());
@@ -20,6 +21,7 @@ export default function FarmsPage() {
         </Button>
       </Stack>
       <ErrorAlert error={farms.error} title="Farms could not be loaded" />
+      <ClientFarms farmPath={paths.farm} reportPath={paths.report} />
       <FarmsTable farms={farms.data ?? []} loading={farms.isPending} />
       <FarmFormDialog
         open={creating}

@@ -10,6 +10,7 @@ import type { HouseInput, HouseSpec } from '../../api/types';
 import { CoolingPanel } from '../../features/cooling-estimate';
 import { farmAllows, farmDetailQueryOptions } from '../../features/farms';
 import { HeatingPanel } from '../../features/heating-estimate';
+import { HouseReports } from '../../features/reports';
 import {
   HouseForm,
   houseDetailQueryOptions,
@@ -133,6 +134,13 @@ export default function HousePage() {
                 canRunEstimates={canRunEstimates}
                 editedHouse={settledEdits.editedHouse}
                 editsInvalid={settledEdits.editsInvalid}
+              />
+              <HouseReports
+                houseId={house.data.id}
+                houseName={house.data.name}
+                canWrite={farmAllows(farm.data, 'report:write')}
+                reportPath={paths.report}
+                onCreated={(report) => navigate(paths.report(report.id))}
               />
             </Stack>
           </Box>

@@ -19,7 +19,12 @@ export default function LoginPage() {
   return (
     <AuthLayout>
       <SignInForm onSignedIn={() => navigate(target, { replace: true })} />
-      <Typography sx={{ mt: 3 }}>
+      <Typography sx={{ mt: 2 }}>
+        <Link component={RouterLink} to={paths.forgotPassword}>
+          Forgot your password?
+        </Link>
+      </Typography>
+      <Typography sx={{ mt: 1 }}>
         New here?{' '}
         <Link component={RouterLink} to={paths.register}>
           Create an account

@@ -1,5 +1,6 @@
 import { Stack, Typography } from '@mui/material';
 import { ErrorAlert, LoadingState } from '../../components/feedback';
+import { ChangePasswordForm } from '../../features/auth';
 import { SettingsForm } from '../../features/settings';
 import { useCurrentUser, useSetCurrentUser } from '../session';
 
@@ -12,6 +13,7 @@ export default function SettingsPage() {
     <Stack spacing={2}>
       <Typography variant="h1">Settings</Typography>
       <SettingsForm user={currentUser.data} onUpdated={setCurrentUser} />
+      <ChangePasswordForm />
     </Stack>
   );
 }

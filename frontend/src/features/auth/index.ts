@@ -1,4 +1,8 @@
 export { SignInForm } from './components/sign-in-form';
 export { RegisterForm } from './components/register-form';
+export { ChangePasswordForm } from './components/change-password-form';
+export { ForgotPasswordForm } from './components/forgot-password-form';
+export { ResetPasswordForm } from './components/reset-password-form';
 export { currentUserQueryOptions, authKeys } from './queries';
-export { useLogout } from './mutations';
+export { useLogout, useSignedIn } from './mutations';
+export { PASSWORD_HELP } from './schemas';

@@ -1,9 +1,16 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api, tokenStorage } from '../../api/client';
-import type { AuthResponse, LoginRequest, RegisterRequest } from '../../api/types';
+import type {
+  AuthResponse,
+  ChangePasswordRequest,
+  LoginRequest,
+  PasswordResetRequest,
+  RegisterRequest,
+  ServerMessage,
+} from '../../api/types';
 import { authKeys } from './queries';
 
-function useSignedIn() {
+export function useSignedIn() {
   const queryClient = useQueryClient();
   return (response: AuthResponse) => {
     // Drop anything cached for a previous user before the new token takes effect.
@@ -43,5 +50,31 @@ export function useLogout() {
       tokenStorage.clear();
       queryClient.clear();
     },
+  });
+}
+
+/** Other sessions end; this browser keeps going with the token the answer carries. */
+export function useChangePassword() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (body: ChangePasswordRequest) => api.post<AuthResponse>('/api/auth/password', body),
+    onSuccess: (response) => {
+      tokenStorage.set(response.accessToken);
+      queryClient.setQueryData(authKeys.me(), response.user);
+    },
+  });
+}
+
+export function useRequestPasswordReset() {
+  return useMutation({
+    mutationFn: (email: string) => api.post<ServerMessage>('/api/auth/password-reset/request', { email }),
+  });
+}
+
+export function useResetPassword() {
+  const onSignedIn = useSignedIn();
+  return useMutation({
+    mutationFn: (body: PasswordResetRequest) => api.post<AuthResponse>('/api/auth/password-reset', body),
+    onSuccess: onSignedIn,
   });
 }

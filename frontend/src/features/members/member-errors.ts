@@ -4,9 +4,6 @@ import { ApiError } from '../../api/client';
 export function memberErrorMessage(error: unknown): string | null {
   if (!error) return null;
   if (error instanceof ApiError) {
-    if (error.status === 404 && /register/i.test(error.message)) {
-      return 'No Thermbay account uses that e-mail address. Ask them to register first, then add them here.';
-    }
     if (error.status === 409 && /owner/i.test(error.message)) {
       return 'A farm needs at least one owner: make someone else an owner before demoting or removing the last one.';
     }

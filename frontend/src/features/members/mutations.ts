@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../api/client';
-import type { AddMemberRequest, FarmMember, FarmRole } from '../../api/types';
+import type { CreateInvitationRequest, FarmMember, FarmRole, InvitationSent } from '../../api/types';
 import { memberKeys } from './queries';
 
 function useRefreshMembers(farmId: number) {
@@ -12,11 +12,28 @@ function useRefreshMembers(farmId: number) {
   };
 }
 
-export function useAddMember(farmId: number) {
-  const refresh = useRefreshMembers(farmId);
+export function useInvite(farmId: number) {
+  const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (body: AddMemberRequest) => api.post<FarmMember>(`/api/farms/${farmId}/members`, body),
-    onSuccess: refresh,
+    mutationFn: (body: CreateInvitationRequest) => api.post<InvitationSent>(`/api/farms/${farmId}/invitations`, body),
+    onSuccess: () => void queryClient.invalidateQueries({ queryKey: memberKeys.invitations(farmId) }),
+  });
+}
+
+export function useResendInvitation(farmId: number) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (invitationId: number) =>
+      api.post<InvitationSent>(`/api/farms/${farmId}/invitations/${invitationId}/resend`),
+    onSuccess: () => void queryClient.invalidateQueries({ queryKey: memberKeys.invitations(farmId) }),
+  });
+}
+
+export function useRevokeInvitation(farmId: number) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (invitationId: number) => api.delete(`/api/farms/${farmId}/invitations/${invitationId}`),
+    onSuccess: () => void queryClient.invalidateQueries({ queryKey: memberKeys.invitations(farmId) }),
   });
 }
 

@@ -18,15 +18,19 @@ export const ROLE_DESCRIPTIONS: Record<FarmRole, string> = {
   viewer: 'reads the farm',
 };
 
-export interface AddMemberFormValues {
+/** Roles an invitation can carry; ownership is given on the members table once they have joined. */
+export const INVITABLE_ROLES = ['grower', 'adviser', 'viewer'] as const;
+export type InvitableRole = (typeof INVITABLE_ROLES)[number];
+
+export interface InviteFormValues {
   email: string;
-  role: FarmRole;
+  role: InvitableRole;
 }
 
-export const addMemberSchema = yup.object({
+export const inviteSchema = yup.object({
   email: yup.string().trim().email('Enter a valid e-mail address').required('Enter their e-mail address'),
   role: yup
-    .mixed<FarmRole>()
-    .oneOf([...FARM_ROLES], 'Choose a role')
+    .mixed<InvitableRole>()
+    .oneOf([...INVITABLE_ROLES], 'Choose a role')
     .required('Choose a role'),
 });

@@ -4,7 +4,7 @@ import type { User } from '../../../api/types';
 import { ErrorAlert } from '../../../components/feedback';
 import { FormTextField } from '../../../components/form-fields';
 import { useRegister } from '../mutations';
-import { PASSWORD_MIN_LENGTH, registerSchema, type RegisterValues } from '../schemas';
+import { PASSWORD_HELP, registerSchema, type RegisterValues } from '../schemas';
 
 export function RegisterForm({ onRegistered }: { onRegistered: (user: User) => void }) {
   const register = useRegister();
@@ -40,7 +40,7 @@ export function RegisterForm({ onRegistered }: { onRegistered: (user: User) => v
               label="Password"
               type="password"
               autoComplete="new-password"
-              helperText={`At least ${PASSWORD_MIN_LENGTH} characters`}
+              helperText={PASSWORD_HELP}
               required
             />
             <Button type="submit" variant="contained" disabled={isSubmitting}>

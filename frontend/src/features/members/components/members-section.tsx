@@ -2,8 +2,9 @@ import { Paper, Stack, Typography } from '@mui/material';
 import { useQuery } from '@tanstack/react-query';
 import { ErrorAlert } from '../../../components/feedback';
 import { farmMembersQueryOptions } from '../queries';
-import { AddMemberForm } from './add-member-form';
+import { InviteForm } from './invite-form';
 import { MembersTable } from './members-table';
+import { PendingInvitations } from './pending-invitations';
 
 export function MembersSection({
   farmId,
@@ -25,10 +26,11 @@ export function MembersSection({
         </Typography>
         <Typography variant="body2" color="text.secondary">
           {canManage
-            ? 'Add people who already have a Thermbay account, choose what each may do, or remove them.'
+            ? 'Invite people by e-mail (with or without a Thermbay account), choose what each may do, or remove them.'
             : 'The people who share this farm. Only its owners can change who is a member.'}
         </Typography>
-        {canManage ? <AddMemberForm farmId={farmId} /> : null}
+        {canManage ? <InviteForm farmId={farmId} /> : null}
+        {canManage ? <PendingInvitations farmId={farmId} /> : null}
         <ErrorAlert error={members.error} title="Members could not be loaded" />
         <MembersTable
           farmId={farmId}

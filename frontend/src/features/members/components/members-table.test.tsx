@@ -24,9 +24,9 @@ function renderTable(canManage: boolean) {
 afterEach(() => vi.unstubAllGlobals());
 
 describe('member errors', () => {
-  it('tells the owner to ask an unknown e-mail to register first', () => {
-    const message = memberErrorMessage(new ApiError(404, 'No account has that e-mail; ask them to register first'));
-    expect(message).toMatch(/Ask them to register first/);
+  it('says when the invited address is already a member', () => {
+    const message = memberErrorMessage(new ApiError(400, 'That person is already a member of this farm'));
+    expect(message).toMatch(/already a member of this farm/);
   });
 
   it('explains that the last owner cannot be demoted', () => {

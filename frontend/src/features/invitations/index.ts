@@ -1,0 +1,1 @@
+export { InvitationPanel } from './components/invitation-panel';

@@ -1,0 +1,24 @@
+import { queryOptions } from '@tanstack/react-query';
+import { api } from '../../api/client';
+import type { Outbox, ReceivedMail } from '../../api/types';
+
+export const mailKeys = {
+  all: ['mail'] as const,
+  outbox: () => [...mailKeys.all, 'outbox'] as const,
+  inbox: () => [...mailKeys.all, 'inbox'] as const,
+};
+
+export const outboxQueryOptions = () =>
+  queryOptions({
+    queryKey: mailKeys.outbox(),
+    queryFn: ({ signal }) => api.get<Outbox>('/api/mail/outbox', { signal }),
+  });
+
+export const inboxQueryOptions = () =>
+  queryOptions({
+    queryKey: mailKeys.inbox(),
+    queryFn: ({ signal }) => api.get<ReceivedMail[]>('/api/mail/inbox', { signal }),
+  });
+
+export const attachmentPath = (mailId: number, attachmentId: number) =>
+  `/api/mail/messages/${mailId}/attachments/${attachmentId}`;

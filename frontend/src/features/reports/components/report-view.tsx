@@ -1,0 +1,120 @@
+import { Box, Stack, Table, TableBody, TableCell, TableHead, TableRow, Typography } from '@mui/material';
+import type { ReportBlock, ReportDocument } from '../../../api/types';
+
+/** Bars as plain boxes: vector on screen and in print, no canvas. */
+function Bars({ block }: { block: ReportBlock }) {
+  const bars = block.bars ?? [];
+  const max = Math.max(...bars.map((bar) => bar.value), 1e-9);
+  return (
+    <Box role="img" aria-label={block.caption ?? 'Bar chart'} sx={{ my: 1 }}>
+      <Typography variant="subtitle2" color="text.secondary">
+        {block.caption}
+      </Typography>
+      {bars.map((bar) => (
+        <Stack key={bar.label} direction="row" spacing={1} sx={{ alignItems: 'center', my: 0.5 }}>
+          <Typography variant="body2" sx={{ width: 140, flexShrink: 0 }}>
+            {bar.label}
+          </Typography>
+          <Box sx={{ flexGrow: 1, display: 'flex', alignItems: 'center', gap: 1 }}>
+            <Box
+              sx={{
+                width: `${(bar.value / max) * 80}%`,
+                height: 14,
+                bgcolor: 'primary.main',
+                printColorAdjust: 'exact',
+                WebkitPrintColorAdjust: 'exact',
+              }}
+            />
+            <Typography variant="body2" sx={{ whiteSpace: 'nowrap' }}>
+              {bar.value.toLocaleString('en-US')} {block.unit}
+            </Typography>
+          </Box>
+        </Stack>
+      ))}
+    </Box>
+  );
+}
+
+function Block({ block }: { block: ReportBlock }) {
+  switch (block.kind) {
+    case 'paragraph':
+      return <Typography sx={{ whiteSpace: 'pre-wrap', my: 1 }}>{block.text}</Typography>;
+    case 'facts':
+      return (
+        <Box component="dl" sx={{ display: 'grid', gridTemplateColumns: 'minmax(140px, 220px) 1fr', gap: 0.5, my: 1 }}>
+          {(block.facts ?? []).map((fact) => (
+            <Box key={fact.label} sx={{ display: 'contents' }}>
+              <Typography component="dt" variant="body2" sx={{ fontWeight: 600, color: 'text.secondary' }}>
+                {fact.label}
+              </Typography>
+              <Typography component="dd" variant="body2" sx={{ m: 0 }}>
+                {fact.value}
+              </Typography>
+            </Box>
+          ))}
+        </Box>
+      );
+    case 'table':
+      return (
+        <Box sx={{ overflowX: 'auto', my: 1 }}>
+          <Table size="small">
+            <TableHead>
+              <TableRow>
+                {(block.columns ?? []).map((column) => (
+                  <TableCell key={column} sx={{ fontWeight: 600 }}>
+                    {column}
+                  </TableCell>
+                ))}
+              </TableRow>
+            </TableHead>
+            <TableBody>
+              {(block.rows ?? []).map((row, index) => (
+                <TableRow key={index}>
+                  {row.map((cell, cellIndex) => (
+                    <TableCell key={cellIndex}>{cell}</TableCell>
+                  ))}
+                </TableRow>
+              ))}
+            </TableBody>
+          </Table>
+        </Box>
+      );
+    case 'list':
+      return (
+        <Box component="ul" sx={{ my: 1, pl: 3 }}>
+          {(block.items ?? []).map((item) => (
+            <Typography component="li" key={item} sx={{ mb: 0.5 }}>
+              {item}
+            </Typography>
+          ))}
+        </Box>
+      );
+    case 'bars':
+      return <Bars block={block} />;
+  }
+}
+
+/** The report as the server wrote it in the reader's units: the same content as the PDF. */
+export function ReportView({ document }: { document: ReportDocument }) {
+  return (
+    <Box component="article" aria-label="Report" className="report-print">
+      <Typography variant="h1">{document.title}</Typography>
+      <Typography color="text.secondary" sx={{ mb: 2 }}>
+        {document.farmName} · {document.subtitle}
+      </Typography>
+      {document.sections.map((section) => (
+        <Box component="section" key={section.heading} sx={{ mb: 3, breakInside: 'avoid-page' }}>
+          <Typography variant="h2" sx={{ fontSize: '1.3rem', mb: 1 }}>
+            {section.heading}
+          </Typography>
+          {section.blocks.map((block, index) => (
+            <Block key={index} block={block} />
+          ))}
+        </Box>
+      ))}
+      <Typography variant="body2" color="text.secondary" sx={{ borderTop: 1, borderColor: 'divider', pt: 1 }}>
+        {document.footer}
+      </Typography>
+    </Box>
+  );
+}

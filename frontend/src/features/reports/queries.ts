@@ -1,0 +1,39 @@
+import { queryOptions } from '@tanstack/react-query';
+import { api } from '../../api/client';
+import type { ClientFarm, Report, ReportSummary, UnitSystem } from '../../api/types';
+
+export const reportKeys = {
+  all: ['reports'] as const,
+  house: (houseId: number) => [...reportKeys.all, 'house', houseId] as const,
+  farm: (farmId: number) => [...reportKeys.all, 'farm', farmId] as const,
+  /** the server writes the document in the reader's units, so the unit system is part of the key */
+  detail: (reportId: number, unitSystem: UnitSystem | undefined) =>
+    [...reportKeys.all, 'detail', reportId, unitSystem] as const,
+  advising: () => [...reportKeys.all, 'advising'] as const,
+};
+
+export const houseReportsQueryOptions = (houseId: number) =>
+  queryOptions({
+    queryKey: reportKeys.house(houseId),
+    queryFn: ({ signal }) => api.get<ReportSummary[]>(`/api/houses/${houseId}/reports`, { signal }),
+  });
+
+export const farmReportsQueryOptions = (farmId: number) =>
+  queryOptions({
+    queryKey: reportKeys.farm(farmId),
+    queryFn: ({ signal }) => api.get<ReportSummary[]>(`/api/farms/${farmId}/reports`, { signal }),
+  });
+
+export const reportQueryOptions = (reportId: number, unitSystem: UnitSystem | undefined) =>
+  queryOptions({
+    queryKey: reportKeys.detail(reportId, unitSystem),
+    queryFn: ({ signal }) => api.get<Report>(`/api/reports/${reportId}`, { signal }),
+  });
+
+export const clientFarmsQueryOptions = () =>
+  queryOptions({
+    queryKey: reportKeys.advising(),
+    queryFn: ({ signal }) => api.get<ClientFarm[]>('/api/advising', { signal }),
+  });
+
+export const reportPdfPath = (reportId: number) => `/api/reports/${reportId}.pdf`;
