@@ -4,3487 +4,3548 @@
  */
 
 export interface paths {
-    "/api/health": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        get: operations["HealthController_health"];
-        put?: never;
-        post?: never;
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+  '/api/health': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/reference-data": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        get: operations["ReferenceDataController_all"];
-        put?: never;
-        post?: never;
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    get: operations['HealthController_health'];
+    put?: never;
+    post?: never;
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/reference-data': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/users/me": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        get?: never;
-        put?: never;
-        post?: never;
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch: operations["UsersController_updateMe"];
-        trace?: never;
+    get: operations['ReferenceDataController_all'];
+    put?: never;
+    post?: never;
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/users/me': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/users": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        get: operations["UsersController_list"];
-        put?: never;
-        post?: never;
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    get?: never;
+    put?: never;
+    post?: never;
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch: operations['UsersController_updateMe'];
+    trace?: never;
+  };
+  '/api/users': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/users/{id}": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        get?: never;
-        put?: never;
-        post?: never;
-        delete: operations["UsersController_remove"];
-        options?: never;
-        head?: never;
-        patch: operations["UsersController_update"];
-        trace?: never;
+    get: operations['UsersController_list'];
+    put?: never;
+    post?: never;
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/users/{id}': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/auth/register": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        get?: never;
-        put?: never;
-        post: operations["AuthController_register"];
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    get?: never;
+    put?: never;
+    post?: never;
+    delete: operations['UsersController_remove'];
+    options?: never;
+    head?: never;
+    patch: operations['UsersController_update'];
+    trace?: never;
+  };
+  '/api/auth/register': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/auth/login": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        get?: never;
-        put?: never;
-        post: operations["AuthController_login"];
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    get?: never;
+    put?: never;
+    post: operations['AuthController_register'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/auth/login': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/auth/logout": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        get?: never;
-        put?: never;
-        post: operations["AuthController_logout"];
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    get?: never;
+    put?: never;
+    post: operations['AuthController_login'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/auth/logout': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/auth/me": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        get: operations["AuthController_me"];
-        put?: never;
-        post?: never;
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    get?: never;
+    put?: never;
+    post: operations['AuthController_logout'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/auth/me': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/auth/demo-accounts": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        get: operations["AuthController_demoAccounts"];
-        put?: never;
-        post?: never;
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    get: operations['AuthController_me'];
+    put?: never;
+    post?: never;
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/auth/demo-accounts': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/permissions": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        get: operations["FarmsController_permissions"];
-        put?: never;
-        post?: never;
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    get: operations['AuthController_demoAccounts'];
+    put?: never;
+    post?: never;
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/permissions': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/farms": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        get: operations["FarmsController_list"];
-        put?: never;
-        post: operations["FarmsController_create"];
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    get: operations['FarmsController_permissions'];
+    put?: never;
+    post?: never;
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/farms': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/farms/{farmId}": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        get: operations["FarmsController_get"];
-        put?: never;
-        post?: never;
-        delete: operations["FarmsController_remove"];
-        options?: never;
-        head?: never;
-        patch: operations["FarmsController_update"];
-        trace?: never;
+    get: operations['FarmsController_list'];
+    put?: never;
+    post: operations['FarmsController_create'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/farms/{farmId}': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/farms/{farmId}/members": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        get: operations["FarmsController_members"];
-        put?: never;
-        post: operations["FarmsController_addMember"];
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    get: operations['FarmsController_get'];
+    put?: never;
+    post?: never;
+    delete: operations['FarmsController_remove'];
+    options?: never;
+    head?: never;
+    patch: operations['FarmsController_update'];
+    trace?: never;
+  };
+  '/api/farms/{farmId}/members': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/farms/{farmId}/members/{userId}": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        get?: never;
-        put?: never;
-        post?: never;
-        delete: operations["FarmsController_removeMember"];
-        options?: never;
-        head?: never;
-        patch: operations["FarmsController_updateMember"];
-        trace?: never;
+    get: operations['FarmsController_members'];
+    put?: never;
+    post: operations['FarmsController_addMember'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/farms/{farmId}/members/{userId}': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/farms/{farmId}/houses": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        get: operations["HousesController_list"];
-        put?: never;
-        post: operations["HousesController_create"];
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    get?: never;
+    put?: never;
+    post?: never;
+    delete: operations['FarmsController_removeMember'];
+    options?: never;
+    head?: never;
+    patch: operations['FarmsController_updateMember'];
+    trace?: never;
+  };
+  '/api/farms/{farmId}/houses': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/houses/{houseId}": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        get: operations["HousesController_get"];
-        put?: never;
-        post?: never;
-        delete: operations["HousesController_remove"];
-        options?: never;
-        head?: never;
-        patch: operations["HousesController_update"];
-        trace?: never;
+    get: operations['HousesController_list'];
+    put?: never;
+    post: operations['HousesController_create'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/houses/{houseId}': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/farms/{farmId}/climate": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        get: operations["ClimateController_get"];
-        put: operations["ClimateController_put"];
-        post?: never;
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    get: operations['HousesController_get'];
+    put?: never;
+    post?: never;
+    delete: operations['HousesController_remove'];
+    options?: never;
+    head?: never;
+    patch: operations['HousesController_update'];
+    trace?: never;
+  };
+  '/api/farms/{farmId}/climate': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/estimates": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        get?: never;
-        put?: never;
-        /** Design-night heating estimate for a house described in the body */
-        post: operations["EstimatesController_heating"];
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    get: operations['ClimateController_get'];
+    put: operations['ClimateController_put'];
+    post?: never;
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/estimates': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/estimates/cooling": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        get?: never;
-        put?: never;
-        /** Summer ventilation and cooling estimate for a house and site described in the body */
-        post: operations["EstimatesController_cooling"];
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    get?: never;
+    put?: never;
+    /** Design-night heating estimate for a house described in the body */
+    post: operations['EstimatesController_heating'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/estimates/cooling': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/houses/{houseId}/estimate": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        get?: never;
-        put?: never;
-        /** Heating estimate for a stored house; unstated conditions come from the farm's climate, the farm, the house and reference data */
-        post: operations["EstimatesController_heatingForHouse"];
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    get?: never;
+    put?: never;
+    /** Summer ventilation and cooling estimate for a house and site described in the body */
+    post: operations['EstimatesController_cooling'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/houses/{houseId}/estimate': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/houses/{houseId}/cooling": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        get?: never;
-        put?: never;
-        /** Cooling estimate for a stored house; unstated conditions come from the farm, its climate and reference data */
-        post: operations["EstimatesController_coolingForHouse"];
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    get?: never;
+    put?: never;
+    /** Heating estimate for a stored house; unstated conditions come from the farm's climate, the farm, the house and reference data */
+    post: operations['EstimatesController_heatingForHouse'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/houses/{houseId}/cooling': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/houses/{houseId}/season": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        get?: never;
-        put?: never;
-        /** A house's heating season hour by hour: energy, fuel and cost by month, with a degree-day cross-check (estimate:run) */
-        post: operations["SeasonController_seasonOfHouse"];
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    get?: never;
+    put?: never;
+    /** Cooling estimate for a stored house; unstated conditions come from the farm, its climate and reference data */
+    post: operations['EstimatesController_coolingForHouse'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/houses/{houseId}/season': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/houses/{houseId}/night-demand": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        get?: never;
-        put?: never;
-        /** Heat, fuel and cost of one night, sunset to sunrise, hour by hour (estimate:run) */
-        post: operations["SeasonController_nightDemand"];
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    get?: never;
+    put?: never;
+    /** A house's heating season hour by hour: energy, fuel and cost by month, with a degree-day cross-check (estimate:run) */
+    post: operations['SeasonController_seasonOfHouse'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/houses/{houseId}/night-demand': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/houses/{houseId}/measures": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        get?: never;
-        put?: never;
-        /** Energy measures ranked by simple payback, each re-running the season (estimate:run); an empty list compares the defaults */
-        post: operations["SeasonController_measures"];
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    get?: never;
+    put?: never;
+    /** Heat, fuel and cost of one night, sunset to sunrise, hour by hour (estimate:run) */
+    post: operations['SeasonController_nightDemand'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/houses/{houseId}/measures': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/houses/{houseId}/calendar": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        /** The house's production calendar (house:read); no periods = heated all season at the house setpoints */
-        get: operations["SeasonController_getCalendar"];
-        /** Replace the house's production calendar (house:write) */
-        put: operations["SeasonController_putCalendar"];
-        post?: never;
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    get?: never;
+    put?: never;
+    /** Energy measures ranked by simple payback, each re-running the season (estimate:run); an empty list compares the defaults */
+    post: operations['SeasonController_measures'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/houses/{houseId}/calendar': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/farms/{farmId}/fuel-prices": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        /** The farm's fuel prices, one per fuel (farm:read) */
-        get: operations["SeasonController_getFuelPrices"];
-        /** Replace the farm's fuel prices (house:write: owners and growers, who hold the fuel bills) */
-        put: operations["SeasonController_putFuelPrices"];
-        post?: never;
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    /** The house's production calendar (house:read); no periods = heated all season at the house setpoints */
+    get: operations['SeasonController_getCalendar'];
+    /** Replace the house's production calendar (house:write) */
+    put: operations['SeasonController_putCalendar'];
+    post?: never;
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/farms/{farmId}/fuel-prices': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/farms/{farmId}/season-budget": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        get?: never;
-        put?: never;
-        /** The farm's season fuel budget: every house, totals per fuel and per month (farm:read) */
-        post: operations["SeasonController_budget"];
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    /** The farm's fuel prices, one per fuel (farm:read) */
+    get: operations['SeasonController_getFuelPrices'];
+    /** Replace the farm's fuel prices (house:write: owners and growers, who hold the fuel bills) */
+    put: operations['SeasonController_putFuelPrices'];
+    post?: never;
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/farms/{farmId}/season-budget': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/farms/{farmId}/season-budget.csv": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        /** The season budget as CSV: one row per house per month, totals, units named in the header (farm:read) */
-        get: operations["SeasonController_budgetCsv"];
-        put?: never;
-        post?: never;
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    get?: never;
+    put?: never;
+    /** The farm's season fuel budget: every house, totals per fuel and per month (farm:read) */
+    post: operations['SeasonController_budget'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/farms/{farmId}/season-budget.csv': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/farms/{farmId}/temperature-logs/inspect": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        get?: never;
-        put?: never;
-        /** Read the start of a temperature CSV and propose which columns hold what; stores nothing (house:write) */
-        post: operations["TemperatureLogsController_inspect"];
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    /** The season budget as CSV: one row per house per month, totals, units named in the header (farm:read) */
+    get: operations['SeasonController_budgetCsv'];
+    put?: never;
+    post?: never;
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/farms/{farmId}/temperature-logs/inspect': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/farms/{farmId}/temperature-logs": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        /** The farm's temperature logs, newest first, without readings (farm:read) */
-        get: operations["TemperatureLogsController_list"];
-        put?: never;
-        /** Store a temperature log read with the confirmed column mapping; nothing is stored when any row is bad (house:write) */
-        post: operations["TemperatureLogsController_upload"];
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    get?: never;
+    put?: never;
+    /** Read the start of a temperature CSV and propose which columns hold what; stores nothing (house:write) */
+    post: operations['TemperatureLogsController_inspect'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/farms/{farmId}/temperature-logs': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/temperature-logs/{logId}": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        /** A temperature log with one row per day (hourly readings reduced to min/mean/max) (farm:read) */
-        get: operations["TemperatureLogsController_get"];
-        put?: never;
-        post?: never;
-        /** Delete a temperature log (house:write) */
-        delete: operations["TemperatureLogsController_remove"];
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    /** The farm's temperature logs, newest first, without readings (farm:read) */
+    get: operations['TemperatureLogsController_list'];
+    put?: never;
+    /** Store a temperature log read with the confirmed column mapping; nothing is stored when any row is bad (house:write) */
+    post: operations['TemperatureLogsController_upload'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/temperature-logs/{logId}': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
+    /** A temperature log with one row per day (hourly readings reduced to min/mean/max) (farm:read) */
+    get: operations['TemperatureLogsController_get'];
+    put?: never;
+    post?: never;
+    /** Delete a temperature log (house:write) */
+    delete: operations['TemperatureLogsController_remove'];
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
 }
 export type webhooks = Record<string, never>;
 export interface components {
-    schemas: {
-        HealthDto: {
-            /** @example ok */
-            status: string;
-            version: string;
-        };
-        UpdateMeDto: {
-            name?: string;
-            /** @enum {string} */
-            unitSystem?: "si" | "us";
-        };
-        UserDto: {
-            id: number;
-            email: string;
-            name: string;
-            /** @enum {string} */
-            siteRole: "admin" | "user";
-            /**
-             * @description How numbers are shown: SI or US customary
-             * @enum {string}
-             */
-            unitSystem: "si" | "us";
-        };
-        AdminUpdateUserDto: {
-            name?: string;
-            /** @enum {string} */
-            siteRole?: "admin" | "user";
-        };
-        RegisterDto: {
-            email: string;
-            password: string;
-            name: string;
-        };
-        SessionDto: {
-            accessToken: string;
-            user: components["schemas"]["UserDto"];
-        };
-        LoginDto: {
-            /** @example grower@example.com */
-            email: string;
-            /** @example thermbay-demo */
-            password: string;
-        };
-        DemoAccountDto: {
-            email: string;
-            name: string;
-            description: string;
-        };
-        DemoAccountsDto: {
-            enabled: boolean;
-            password: string | null;
-            accounts: components["schemas"]["DemoAccountDto"][];
-        };
-        RolePermissionsDto: {
-            owner: ("farm:read" | "farm:update" | "farm:delete" | "members:manage" | "house:read" | "house:write" | "estimate:run" | "report:write")[];
-            grower: ("farm:read" | "farm:update" | "farm:delete" | "members:manage" | "house:read" | "house:write" | "estimate:run" | "report:write")[];
-            adviser: ("farm:read" | "farm:update" | "farm:delete" | "members:manage" | "house:read" | "house:write" | "estimate:run" | "report:write")[];
-            viewer: ("farm:read" | "farm:update" | "farm:delete" | "members:manage" | "house:read" | "house:write" | "estimate:run" | "report:write")[];
-        };
-        PermissionsDto: {
-            roles: components["schemas"]["RolePermissionsDto"];
-        };
-        FarmDto: {
-            id: number;
-            name: string;
-            latitudeDeg: number;
-            longitudeDeg: number;
-            elevationM: number;
-            timeZone: string;
-            /** @enum {string} */
-            myRole: "owner" | "grower" | "adviser" | "viewer";
-            permissions: ("farm:read" | "farm:update" | "farm:delete" | "members:manage" | "house:read" | "house:write" | "estimate:run" | "report:write")[];
-            houseCount: number;
-            createdAt: string;
-            updatedAt: string;
-        };
-        CreateFarmDto: {
-            /** @example North Ridge Produce */
-            name: string;
-            /** @description degrees, north positive */
-            latitudeDeg: number;
-            /** @description degrees, east positive */
-            longitudeDeg: number;
-            /** @description m above sea level */
-            elevationM: number;
-            /** @example America/Chicago */
-            timeZone: string;
-        };
-        UpdateFarmDto: {
-            /** @example North Ridge Produce */
-            name?: string;
-            /** @description degrees, north positive */
-            latitudeDeg?: number;
-            /** @description degrees, east positive */
-            longitudeDeg?: number;
-            /** @description m above sea level */
-            elevationM?: number;
-            /** @example America/Chicago */
-            timeZone?: string;
-        };
-        MemberDto: {
-            userId: number;
-            email: string;
-            name: string;
-            /** @enum {string} */
-            role: "owner" | "grower" | "adviser" | "viewer";
-        };
-        AddMemberDto: {
-            email: string;
-            /** @enum {string} */
-            role: "owner" | "grower" | "adviser" | "viewer";
-        };
-        UpdateMemberDto: {
-            /** @enum {string} */
-            role: "owner" | "grower" | "adviser" | "viewer";
-        };
-        CoveringsDto: {
-            /**
-             * @description reference-data coverings id
-             * @example poly-double-inflated
-             */
-            roof: string;
-            /** @description reference-data coverings id */
-            sidewalls: string;
-            /** @description reference-data coverings id */
-            endwalls: string;
-        };
-        CoveringOverridesDto: {
-            /** @description W/(m²·K) */
-            roof?: number;
-            /** @description W/(m²·K) */
-            sidewalls?: number;
-            /** @description W/(m²·K) */
-            endwalls?: number;
-        };
-        HeaterGroupDto: {
-            count: number;
-            /** @description rated input of one unit, W */
-            ratedInputW: number;
-            /** @description output ÷ input, 0–1 */
-            efficiency: number;
-            /**
-             * @description reference-data fuels id
-             * @example propane
-             */
-            fuelId: string;
-        };
-        ExhaustFansDto: {
-            count: number;
-            /** @description m³/s moved by one fan at working static pressure */
-            capacityEachM3PerS: number;
-        };
-        SetpointsDto: {
-            dayHeatingC: number;
-            nightHeatingC: number;
-            coolingC: number;
-        };
-        HouseDto: {
-            /** @enum {string} */
-            shape: "gable" | "gothic-arch" | "quonset";
-            spans: number;
-            /** @description width of one span, m */
-            widthM: number;
-            lengthM: number;
-            /** @description sidewall or gutter height, m */
-            eaveHeightM: number;
-            ridgeHeightM: number;
-            coverings: components["schemas"]["CoveringsDto"];
-            /** @description a maker's U-value replacing the reference value */
-            coveringUOverridesWPerM2K?: components["schemas"]["CoveringOverridesDto"];
-            /** @description reference-data air-leakage id */
-            airLeakageClassId: string;
-            /** @description measured air changes per hour */
-            airChangesPerHourOverride?: number | null;
-            perimeterInsulated: boolean;
-            /** @description reference-data curtains id, drawn at night */
-            curtainId?: string | null;
-            heaters: components["schemas"]["HeaterGroupDto"][];
-            exhaustFans: components["schemas"]["ExhaustFansDto"];
-            /** @description free louvre or inlet area, m² */
-            inletAreaM2: number;
-            setpoints: components["schemas"]["SetpointsDto"];
-            /** @example House 3 */
-            name: string;
-            notes?: string | null;
-            id: number;
-            farmId: number;
-            createdAt: string;
-            updatedAt: string;
-        };
-        CreateHouseDto: {
-            /** @enum {string} */
-            shape: "gable" | "gothic-arch" | "quonset";
-            spans: number;
-            /** @description width of one span, m */
-            widthM: number;
-            lengthM: number;
-            /** @description sidewall or gutter height, m */
-            eaveHeightM: number;
-            ridgeHeightM: number;
-            coverings: components["schemas"]["CoveringsDto"];
-            /** @description a maker's U-value replacing the reference value */
-            coveringUOverridesWPerM2K?: components["schemas"]["CoveringOverridesDto"];
-            /** @description reference-data air-leakage id */
-            airLeakageClassId: string;
-            /** @description measured air changes per hour */
-            airChangesPerHourOverride?: number | null;
-            perimeterInsulated: boolean;
-            /** @description reference-data curtains id, drawn at night */
-            curtainId?: string | null;
-            heaters: components["schemas"]["HeaterGroupDto"][];
-            exhaustFans: components["schemas"]["ExhaustFansDto"];
-            /** @description free louvre or inlet area, m² */
-            inletAreaM2: number;
-            setpoints: components["schemas"]["SetpointsDto"];
-            /** @example House 3 */
-            name: string;
-            notes?: string | null;
-        };
-        UpdateHouseDto: {
-            /** @enum {string} */
-            shape?: "gable" | "gothic-arch" | "quonset";
-            spans?: number;
-            /** @description width of one span, m */
-            widthM?: number;
-            lengthM?: number;
-            /** @description sidewall or gutter height, m */
-            eaveHeightM?: number;
-            ridgeHeightM?: number;
-            coverings?: components["schemas"]["CoveringsDto"];
-            /** @description a maker's U-value replacing the reference value */
-            coveringUOverridesWPerM2K?: components["schemas"]["CoveringOverridesDto"];
-            /** @description reference-data air-leakage id */
-            airLeakageClassId?: string;
-            /** @description measured air changes per hour */
-            airChangesPerHourOverride?: number | null;
-            perimeterInsulated?: boolean;
-            /** @description reference-data curtains id, drawn at night */
-            curtainId?: string | null;
-            heaters?: components["schemas"]["HeaterGroupDto"][];
-            exhaustFans?: components["schemas"]["ExhaustFansDto"];
-            /** @description free louvre or inlet area, m² */
-            inletAreaM2?: number;
-            setpoints?: components["schemas"]["SetpointsDto"];
-            /** @example House 3 */
-            name?: string;
-            notes?: string | null;
-        };
-        MonthlyClimateDto: {
-            month: number;
-            /** @description mean of the daily minimum temperatures, °C */
-            meanDailyMinC: number;
-            /** @description mean of the daily maximum temperatures, °C */
-            meanDailyMaxC: number;
-            /** @description actual ÷ clear-sky solar over the month; default from reference data */
-            clearness?: number | null;
-        };
-        SiteClimateDto: {
-            /** @description heating design dry bulb (99 % or 99.6 %), °C */
-            winterDesignC: number;
-            /** @description cooling design dry bulb (1 %), °C */
-            summerDesignC: number;
-            /** @description wet bulb coincident with the summer design dry bulb, °C */
-            summerDesignWetBulbC: number;
-            /** @description mean daily range on the summer design day, K */
-            summerDailyRangeK: number;
-            /** @description exactly 12 rows, one per month */
-            monthly: components["schemas"]["MonthlyClimateDto"][];
-            /** @description where the numbers came from (e.g. national climate normals, station name) */
-            sourceNote?: string | null;
-        };
-        FarmClimateDto: {
-            farmId: number;
-            /** @description null until someone enters the climate */
-            climate: components["schemas"]["SiteClimateDto"] | null;
-        };
-        HouseSpecDto: {
-            /** @enum {string} */
-            shape: "gable" | "gothic-arch" | "quonset";
-            spans: number;
-            /** @description width of one span, m */
-            widthM: number;
-            lengthM: number;
-            /** @description sidewall or gutter height, m */
-            eaveHeightM: number;
-            ridgeHeightM: number;
-            coverings: components["schemas"]["CoveringsDto"];
-            /** @description a maker's U-value replacing the reference value */
-            coveringUOverridesWPerM2K?: components["schemas"]["CoveringOverridesDto"];
-            /** @description reference-data air-leakage id */
-            airLeakageClassId: string;
-            /** @description measured air changes per hour */
-            airChangesPerHourOverride?: number | null;
-            perimeterInsulated: boolean;
-            /** @description reference-data curtains id, drawn at night */
-            curtainId?: string | null;
-            heaters: components["schemas"]["HeaterGroupDto"][];
-            exhaustFans: components["schemas"]["ExhaustFansDto"];
-            /** @description free louvre or inlet area, m² */
-            inletAreaM2: number;
-            setpoints: components["schemas"]["SetpointsDto"];
-        };
-        HeatingConditionsDto: {
-            /** @description winter design dry bulb (99 % or 99.6 %), °C */
-            designOutdoorC: number;
-            /** @description site elevation, m (sets air density) */
-            elevationM: number;
-            /** @description inside relative humidity on the design night, % */
-            insideRelativeHumidityPct: number;
-            /** @description inside temperature to hold, °C; default the house night heating setpoint */
-            insideC?: number;
-            /** @description credit a drawn curtain in the design loss; default false (heaters sized with the curtain open) */
-            curtainClosed?: boolean;
-        };
-        HeatingEstimateRequestDto: {
-            house: components["schemas"]["HouseSpecDto"];
-            conditions: components["schemas"]["HeatingConditionsDto"];
-        };
-        HouseGeometrySummaryDto: {
-            /** @description m² */
-            floorAreaM2: number;
-            /** @description m² */
-            roofAreaM2: number;
-            /** @description m² */
-            sidewallAreaM2: number;
-            /** @description m² */
-            endwallAreaM2: number;
-            /** @description roof + sidewalls + endwalls, m² */
-            coverAreaM2: number;
-            /** @description outside perimeter of the house at the ground, m */
-            perimeterM: number;
-            /** @description m³ */
-            volumeM3: number;
-        };
-        HeatLossComponentDto: {
-            /** @enum {string} */
-            key: "roof" | "sidewalls" | "endwalls" | "perimeter" | "infiltration";
-            label: string;
-            /** @description area (m²), perimeter (m) or volume (m³), see quantityUnit */
-            quantity: number;
-            /** @enum {string} */
-            quantityUnit: "m2" | "m" | "m3";
-            /** @description U in W/(m²·K) for surfaces, F in W/(m·K) for the perimeter, air changes per hour for infiltration */
-            coefficient: number;
-            /** @description W/K */
-            conductanceWPerK: number;
-            /** @description loss at the design ΔT, W */
-            watts: number;
-            /** @description share of the total, 0–1 */
-            share: number;
-        };
-        HeatLossBreakdownDto: {
-            /** @description °C */
-            insideC: number;
-            /** @description °C */
-            outsideC: number;
-            /** @description inside − outside, K (may be ≤ 0: then no heat is needed) */
-            deltaTK: number;
-            /** @description W */
-            totalW: number;
-            /** @description through the coverings, W */
-            coveringW: number;
-            /** @description through the perimeter, W */
-            perimeterW: number;
-            /** @description air leakage, W */
-            infiltrationW: number;
-            curtainApplied: boolean;
-            components: components["schemas"]["HeatLossComponentDto"][];
-        };
-        HeaterSizingDto: {
-            /** @description fraction added to the design loss */
-            safetyMargin: number;
-            /** @description W */
-            requiredOutputW: number;
-            /** @description W */
-            requiredInputW: number;
-            /** @description W */
-            installedInputW: number;
-            /** @description W */
-            installedOutputW: number;
-            /** @enum {string} */
-            verdict: "adequate" | "short" | "none-installed";
-            /** @description W (0 when adequate) */
-            shortfallW: number;
-            /** @description outdoor temperature at which the installed output just holds the inside temperature, °C */
-            lowestHeldOutdoorC: number | null;
-            unitCount: number;
-            /** @description W */
-            largestUnitOutputW: number;
-            /** @description same with the largest unit out of service, °C; null without a second unit */
-            holdsWithLargestUnitOutC: number | null;
-            /** @description how the output is split over units; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
-            splitAdvice: string;
-            fuelFired: boolean;
-        };
-        CondensationSurfaceDto: {
-            /** @enum {string} */
-            group: "roof" | "sidewalls" | "endwalls";
-            coveringId: string;
-            /** @description W/(m²·K) */
-            uWPerM2K: number;
-            /** @description °C */
-            insideSurfaceC: number;
-            condenses: boolean;
-            /** @description outdoor temperature below which water condenses on this surface, °C */
-            condensationBelowOutdoorC: number;
-        };
-        CondensationDto: {
-            /** @description °C */
-            insideC: number;
-            /** @description % */
-            insideRelativeHumidityPct: number;
-            /** @description °C */
-            dewPointC: number;
-            anyCondenses: boolean;
-            surfaces: components["schemas"]["CondensationSurfaceDto"][];
-        };
-        HeatingAssumptionDto: {
-            key: string;
-            /** @description may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
-            label: string;
-            value: number | string;
-            unit: string;
-            source: string;
-            /** @enum {string} */
-            confidence: "verified" | "verified-secondary" | "derived" | "memory" | "common-practice" | "user-entered";
-            /** @description true when a value entered for the house replaced the reference value */
-            overridden: boolean;
-        };
-        HeatingEstimateDto: {
-            geometry: components["schemas"]["HouseGeometrySummaryDto"];
-            heatLoss: components["schemas"]["HeatLossBreakdownDto"];
-            heater: components["schemas"]["HeaterSizingDto"];
-            condensation: components["schemas"]["CondensationDto"];
-            assumptions: components["schemas"]["HeatingAssumptionDto"][];
-            /** @description safety and planning cautions, to show with the result; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
-            cautions: string[];
-        };
-        CoolingSiteDto: {
-            /** @description degrees, north positive */
-            latitudeDeg: number;
-            /** @description degrees, east positive */
-            longitudeDeg: number;
-            /** @description m */
-            elevationM: number;
-        };
-        EvaporativePadDto: {
-            /**
-             * @description reference-data evaporative-pads id
-             * @example cellulose-150mm
-             */
-            padTypeId: string;
-            /** @description face area of the pads, m² */
-            areaM2: number;
-        };
-        CoolingConditionsDto: {
-            /**
-             * @description YYYY-MM-DD; hours of the result are local apparent solar time
-             * @example 2026-07-21
-             */
-            designDate: string;
-            /** @description summer design dry bulb (the day’s maximum), °C */
-            summerDesignC: number;
-            /** @description day’s maximum − minimum, K */
-            dailyRangeK: number;
-            /** @description wet bulb coincident with the design dry bulb (not above it), °C */
-            summerDesignWetBulbC: number;
-            /** @description allowed inlet-to-fan rise, K; default from reference data */
-            allowedTemperatureRiseK?: number;
-            /** @description peak light at plant height, lux; default from reference data */
-            peakInteriorLightLux?: number;
-            /** @description inlet (pad) wall to fans, m; default the house length */
-            padToFanDistanceM?: number;
-            /** @description share of transmitted solar heat taken up by transpiration; default from reference data */
-            transpirationFraction?: number;
-            /** @description evaporative pads on the inlet wall, or null for none */
-            evaporativePad?: components["schemas"]["EvaporativePadDto"] | null;
-            /** @description winter design temperature for the humidity-ventilation heat cost, °C */
-            winterDesignC?: number;
-        };
-        CoolingEstimateRequestDto: {
-            house: components["schemas"]["HouseSpecDto"];
-            site: components["schemas"]["CoolingSiteDto"];
-            conditions: components["schemas"]["CoolingConditionsDto"];
-        };
-        AirExchangeDto: {
-            /** @description all installed fans together, m³/s */
-            installedFlowM3PerS: number;
-            /** @description 1/h */
-            airChangesPerHour: number;
-            /** @description 1/min */
-            airChangesPerMinute: number;
-            /** @description m³/s per m² of floor */
-            flowPerFloorAreaM3PerSM2: number;
-        };
-        CapacityFactorsDto: {
-            elevation: number;
-            light: number;
-            temperatureRise: number;
-            velocity: number;
-            /** @description elevation × light × temperatureRise */
-            house: number;
-            /** @description the larger of house and velocity */
-            applied: number;
-        };
-        CoolingCapacityDto: {
-            /** @description m³/s per m² of floor */
-            baseRateM3PerSM2: number;
-            factors: components["schemas"]["CapacityFactorsDto"];
-            /** @description m³/s */
-            requiredFlowM3PerS: number;
-            /** @description m³/s */
-            installedFlowM3PerS: number;
-            /** @enum {string} */
-            verdict: "adequate" | "short" | "no-fans";
-            /** @description fans of the installed size needed in all; null without fans */
-            fansNeeded: number | null;
-            /** @description fans to add; null without fans */
-            additionalFansNeeded: number | null;
-            /** @description m² */
-            inletAreaNeededM2: number;
-            /** @description m² */
-            inletAreaM2: number;
-            /** @enum {string} */
-            inletVerdict: "adequate" | "short";
-        };
-        DesignDayHourDto: {
-            /** @description local apparent solar hour */
-            hour: number;
-            /** @description °C */
-            outdoorC: number;
-            /** @description degrees above the horizon (negative at night) */
-            sunAltitudeDeg: number;
-            /** @description W/m² */
-            globalHorizontalWPerM2: number;
-            /** @description W */
-            solarGainW: number;
-            /** @description °C */
-            indoorWithFansC: number;
-            fanFraction: number;
-            /** @description °C; null without pads */
-            indoorWithPadsC: number | null;
-            setpointHeld: boolean;
-        };
-        DesignDayDto: {
-            /** @description YYYY-MM-DD */
-            date: string;
-            hours: components["schemas"]["DesignDayHourDto"][];
-            /** @description °C */
-            peakIndoorWithFansC: number;
-            /** @description °C; null without pads */
-            peakIndoorWithPadsC: number | null;
-            /** @description solar hours at which the cooling setpoint is not held */
-            hoursNotHeld: number[];
-        };
-        PadSizingDto: {
-            padTypeId: string;
-            /** @description m/s */
-            faceVelocityMPerS: number;
-            saturationEfficiency: number;
-            /** @description m² */
-            areaNeededM2: number;
-            /** @description m² */
-            areaM2: number;
-            /** @enum {string} */
-            verdict: "adequate" | "short";
-            /** @description °C */
-            leavingAirAtPeakC: number;
-        };
-        FanStageDto: {
-            stage: number;
-            /** @description indoor temperature at which this stage switches on, °C */
-            onAtC: number;
-            /** @description fans switched on at this stage (not cumulative) */
-            fans: number;
-        };
-        StagingDto: {
-            /** @description K */
-            deadbandK: number;
-            /** @description K */
-            requiredDeadbandK: number;
-            ok: boolean;
-            /** @description may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
-            warnings: string[];
-            stages: components["schemas"]["FanStageDto"][];
-        };
-        WinterVentilationDto: {
-            fractionOfSummerRate: number;
-            /** @description m³/s */
-            flowM3PerS: number;
-            /** @description 1/h */
-            airChangesPerHour: number;
-            /** @description W to warm the ventilation air to the night setpoint */
-            heatCostW: number;
-            /** @description °C */
-            atOutdoorC: number;
-            /** @description W lost by the house itself (cover, perimeter, leaks) at the same temperatures, for comparison */
-            houseHeatLossW: number;
-        };
-        CoolingAssumptionDto: {
-            key: string;
-            /** @description may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
-            label: string;
-            value: number | string;
-            unit: string;
-            source: string;
-            /** @enum {string} */
-            confidence: "verified" | "verified-secondary" | "derived" | "memory" | "common-practice";
-            /** @description true when the request replaced the default */
-            overridden: boolean;
-        };
-        CoolingEstimateDto: {
-            airExchange: components["schemas"]["AirExchangeDto"];
-            capacity: components["schemas"]["CoolingCapacityDto"];
-            designDay: components["schemas"]["DesignDayDto"];
-            /** @description null without evaporative pads */
-            pads: components["schemas"]["PadSizingDto"] | null;
-            staging: components["schemas"]["StagingDto"];
-            winterVentilation: components["schemas"]["WinterVentilationDto"];
-            assumptions: components["schemas"]["CoolingAssumptionDto"][];
-            /** @description safety and planning cautions, to show with the result; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
-            cautions: string[];
-        };
-        PartialHeatingConditionsDto: {
-            /** @description winter design dry bulb (99 % or 99.6 %), °C */
-            designOutdoorC?: number;
-            /** @description site elevation, m (sets air density) */
-            elevationM?: number;
-            /** @description inside relative humidity on the design night, % */
-            insideRelativeHumidityPct?: number;
-            /** @description inside temperature to hold, °C; default the house night heating setpoint */
-            insideC?: number;
-            /** @description credit a drawn curtain in the design loss; default false (heaters sized with the curtain open) */
-            curtainClosed?: boolean;
-        };
-        HouseHeatingEstimateRequestDto: {
-            conditions?: components["schemas"]["PartialHeatingConditionsDto"];
-        };
-        HeatingConditionsUsedDto: {
-            /** @description °C */
-            designOutdoorC: number;
-            /** @description m */
-            elevationM: number;
-            /** @description % */
-            insideRelativeHumidityPct: number;
-            /** @description °C */
-            insideC: number;
-            curtainClosed: boolean;
-        };
-        HeatingConditionsSourceDto: {
-            /** @enum {string} */
-            designOutdoorC: "farm climate" | "request";
-            /** @enum {string} */
-            elevationM: "farm" | "request";
-            /** @enum {string} */
-            insideRelativeHumidityPct: "reference data" | "request";
-            /** @enum {string} */
-            insideC: "house night setpoint" | "request";
-            /** @enum {string} */
-            curtainClosed: "default" | "request";
-        };
-        HouseHeatingEstimateDto: {
-            geometry: components["schemas"]["HouseGeometrySummaryDto"];
-            heatLoss: components["schemas"]["HeatLossBreakdownDto"];
-            heater: components["schemas"]["HeaterSizingDto"];
-            condensation: components["schemas"]["CondensationDto"];
-            assumptions: components["schemas"]["HeatingAssumptionDto"][];
-            /** @description safety and planning cautions, to show with the result; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
-            cautions: string[];
-            houseId: number;
-            conditionsUsed: components["schemas"]["HeatingConditionsUsedDto"];
-            conditionsSource: components["schemas"]["HeatingConditionsSourceDto"];
-        };
-        PartialCoolingConditionsDto: {
-            /**
-             * @description YYYY-MM-DD; hours of the result are local apparent solar time
-             * @example 2026-07-21
-             */
-            designDate?: string;
-            /** @description summer design dry bulb (the day’s maximum), °C */
-            summerDesignC?: number;
-            /** @description day’s maximum − minimum, K */
-            dailyRangeK?: number;
-            /** @description wet bulb coincident with the design dry bulb (not above it), °C */
-            summerDesignWetBulbC?: number;
-            /** @description allowed inlet-to-fan rise, K; default from reference data */
-            allowedTemperatureRiseK?: number;
-            /** @description peak light at plant height, lux; default from reference data */
-            peakInteriorLightLux?: number;
-            /** @description inlet (pad) wall to fans, m; default the house length */
-            padToFanDistanceM?: number;
-            /** @description share of transmitted solar heat taken up by transpiration; default from reference data */
-            transpirationFraction?: number;
-            /** @description evaporative pads on the inlet wall, or null for none */
-            evaporativePad?: components["schemas"]["EvaporativePadDto"] | null;
-            /** @description winter design temperature for the humidity-ventilation heat cost, °C */
-            winterDesignC?: number;
-        };
-        HouseCoolingEstimateRequestDto: {
-            conditions?: components["schemas"]["PartialCoolingConditionsDto"];
-        };
-        CoolingConditionsSourceDto: {
-            /** @enum {string} */
-            designDate: "calendar default" | "request";
-            /** @enum {string} */
-            summerDesignC: "farm climate" | "request";
-            /** @enum {string} */
-            dailyRangeK: "farm climate" | "request";
-            /** @enum {string} */
-            summerDesignWetBulbC: "farm climate" | "request";
-            /** @enum {string} */
-            allowedTemperatureRiseK: "reference data" | "request";
-            /** @enum {string} */
-            peakInteriorLightLux: "reference data" | "request";
-            /** @enum {string} */
-            padToFanDistanceM: "house length" | "request";
-            /** @enum {string} */
-            transpirationFraction: "reference data" | "request";
-            /** @enum {string} */
-            evaporativePad: "none" | "request";
-            /** @enum {string} */
-            winterDesignC: "farm climate" | "reference data" | "request";
-        };
-        HouseCoolingEstimateDto: {
-            airExchange: components["schemas"]["AirExchangeDto"];
-            capacity: components["schemas"]["CoolingCapacityDto"];
-            designDay: components["schemas"]["DesignDayDto"];
-            /** @description null without evaporative pads */
-            pads: components["schemas"]["PadSizingDto"] | null;
-            staging: components["schemas"]["StagingDto"];
-            winterVentilation: components["schemas"]["WinterVentilationDto"];
-            assumptions: components["schemas"]["CoolingAssumptionDto"][];
-            /** @description safety and planning cautions, to show with the result; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
-            cautions: string[];
-            houseId: number;
-            /** @description the farm’s position and elevation */
-            siteUsed: components["schemas"]["CoolingSiteDto"];
-            /** @description what the engine ran with; optional values left out took the defaults listed in assumptions */
-            conditionsUsed: components["schemas"]["CoolingConditionsDto"];
-            conditionsSource: components["schemas"]["CoolingConditionsSourceDto"];
-        };
-        TemperatureLogClimateSourceDto: {
-            /** @description id of one of the farm’s temperature logs */
-            temperatureLogId: number;
-        };
-        SeasonRequestDto: {
-            /** @description 'normals' (default: the farm's monthly climate normals) or { temperatureLogId } to use a logged year instead */
-            climateSource?: "normals" | components["schemas"]["TemperatureLogClimateSourceDto"];
-            /** @description reference-data fuels id; default: the fuel of the house's first heater */
-            fuelId?: string;
-            /** @description money per purchase unit; default: the farm's price for the fuel */
-            pricePerUnit?: number;
-            /**
-             * @description unit the given pricePerUnit is per: 'si' (the fuel's unitSi, default) or 'us' (its unitUs)
-             * @enum {string}
-             */
-            priceUnit?: "si" | "us";
-            /** @description output ÷ input; default: the efficiency of the house's first heater burning the fuel */
-            heaterEfficiency?: number;
-            /**
-             * @description first day, YYYY-MM-DD; give both dates or neither. Default: the heating season in progress or, between seasons, the next one (1 Sep – 31 May north of the equator, 1 Mar – 30 Nov south); with a temperature log, the whole days the log covers (at most 366)
-             * @example 2026-09-01
-             */
-            startDate?: string;
-            /**
-             * @description last day (inclusive), YYYY-MM-DD; at most 366 days from startDate
-             * @example 2027-05-31
-             */
-            endDate?: string;
-        };
-        SeasonPeriodDto: {
-            /** @description YYYY-MM-DD */
-            startDate: string;
-            /** @description YYYY-MM-DD, inclusive */
-            endDate: string;
-            days: number;
-            /** @description days the production calendar heats */
-            heatedDays: number;
-        };
-        SeasonFuelDto: {
-            fuelId: string;
-            label: string;
-            /** @example L */
-            unitSi: string;
-            /** @example US gal */
-            unitUs: string;
-            pricePerUnit: number;
-            /** @enum {string} */
-            priceUnit: "si" | "us";
-            /** @description the unit the price is per, e.g. 'US gal' */
-            priceUnitLabel: string;
-            /** @description output ÷ input */
-            heaterEfficiency: number;
-        };
-        SeasonHeatLossDto: {
-            /** @description W/K */
-            uaCurtainOpenWPerK: number;
-            /** @description W/K (equals the open value without a curtain) */
-            uaCurtainClosedWPerK: number;
-            /** @description m² */
-            floorAreaM2: number;
-        };
-        SeasonMonthDto: {
-            /** @description heat delivered to the house, kWh */
-            energyKWh: number;
-            /** @description heat content of the fuel burnt (energy ÷ efficiency), kWh */
-            fuelInputKWh: number;
-            /** @description fuel in its SI purchase unit (the fuel's unitSi) */
-            fuelQuantitySi: number;
-            /** @description fuel in its US purchase unit (the fuel's unitUs) */
-            fuelQuantityUs: number;
-            /** @description money, in the currency of the price */
-            cost: number;
-            year: number;
-            month: number;
-            /** @description heated hours with any heat demand */
-            heatingHours: number;
-            /** @description highest hourly-average heat demand of the month, W */
-            peakW: number;
-            /** @description degree-days to the night setpoint, K·day */
-            degreeDaysKDay: number;
-            /** @description heat the installed heaters could not deliver, kWh */
-            unmetHeatKWh: number;
-            /** @description hours in which the heaters could not hold the setpoint */
-            hoursBelowSetpoint: number;
-        };
-        SeasonTotalDto: {
-            /** @description heat delivered to the house, kWh */
-            energyKWh: number;
-            /** @description heat content of the fuel burnt (energy ÷ efficiency), kWh */
-            fuelInputKWh: number;
-            /** @description fuel in its SI purchase unit (the fuel's unitSi) */
-            fuelQuantitySi: number;
-            /** @description fuel in its US purchase unit (the fuel's unitUs) */
-            fuelQuantityUs: number;
-            /** @description money, in the currency of the price */
-            cost: number;
-            heatingHours: number;
-            /** @description heat the installed heaters could not deliver, kWh */
-            unmetHeatKWh: number;
-            /** @description hours in which the heaters could not hold the setpoint */
-            hoursBelowSetpoint: number;
-        };
-        SeasonHeaterCapacityDto: {
-            /** @description Σ count × rated input × efficiency of the house’s heaters, W; heat delivered in an hour is capped at it */
-            installedOutputW: number;
-            /** @description heater units installed */
-            heaterCount: number;
-            /** @description set when the heaters cannot hold the setpoint in some hour; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
-            caution: string | null;
-        };
-        SeasonPeakDto: {
-            /** @description W */
-            heatW: number;
-            /** @description local standard time, YYYY-MM-DDTHH:MM */
-            at: string;
-            /** @description °C */
-            outdoorC: number;
-        };
-        DegreeDayStepDto: {
-            /** @enum {string} */
-            key: "degree-day" | "hourly-curve" | "day-setpoint" | "curtain" | "sun" | "heater-capacity";
-            label: string;
-            /** @description kWh */
-            energyKWh: number;
-            /** @description change from the previous step, kWh */
-            changeKWh: number;
-        };
-        DegreeDayCrossCheckDto: {
-            /** @description heat delivered to the house, kWh */
-            energyKWh: number;
-            /** @description heat content of the fuel burnt (energy ÷ efficiency), kWh */
-            fuelInputKWh: number;
-            /** @description fuel in its SI purchase unit (the fuel's unitSi) */
-            fuelQuantitySi: number;
-            /** @description fuel in its US purchase unit (the fuel's unitUs) */
-            fuelQuantityUs: number;
-            /** @description money, in the currency of the price */
-            cost: number;
-            /** @description the base each heated day is counted to; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
-            baseDescription: string;
-            /** @description the base when it is the same all season, else null, °C */
-            baseTemperatureC: number | null;
-            /** @description UA used (curtain open), W/K */
-            uaWPerK: number;
-            /** @description K·day */
-            degreeDaysKDay: number;
-            /** @description °F·day */
-            degreeDaysFDay: number;
-            /** @description hourly result ÷ degree-day result − 1 (null when the degree-day result is 0) */
-            hourlyDifferenceFraction: number | null;
-            /** @description from the degree-day figure to the hourly one, one effect at a time */
-            steps: components["schemas"]["DegreeDayStepDto"][];
-            /** @description may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
-            explanation: string[];
-        };
-        SeasonAssumptionDto: {
-            key: string;
-            /** @description may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
-            label: string;
-            value: number | string;
-            unit: string;
-            source: string;
-            /** @enum {string} */
-            confidence: "verified" | "verified-secondary" | "derived" | "memory" | "common-practice" | "user-entered";
-            /** @description true where the user's own value replaced the reference value */
-            overridden: boolean;
-        };
-        SeasonInputsUsedDto: {
-            /** @enum {string} */
-            climateSource: "normals" | "temperature-log";
-            temperatureLogId: number | null;
-            temperatureLogName: string | null;
-            fuelId: string;
-            /** @enum {string} */
-            fuelFrom: "request" | "house-heater";
-            pricePerUnit: number;
-            /** @enum {string} */
-            priceUnit: "si" | "us";
-            /** @enum {string} */
-            priceFrom: "request" | "farm-fuel-prices";
-            heaterEfficiency: number;
-            /** @enum {string} */
-            heaterEfficiencyFrom: "request" | "house-heater";
-            /** @description the farm's IANA zone */
-            timeZone: string;
-            /** @description the zone's standard-time offset from UTC (daylight saving ignored), h */
-            utcOffsetHours: number;
-            startDate: string;
-            endDate: string;
-            /** @enum {string} */
-            seasonFrom: "request" | "default-heating-season" | "temperature-log";
-            /** @description periods of the house's production calendar (0 = heated all season at the house setpoints) */
-            calendarPeriodCount: number;
-        };
-        HouseSeasonEstimateDto: {
-            period: components["schemas"]["SeasonPeriodDto"];
-            fuel: components["schemas"]["SeasonFuelDto"];
-            heatLoss: components["schemas"]["SeasonHeatLossDto"];
-            /** @description one row per calendar month the season touches */
-            monthly: components["schemas"]["SeasonMonthDto"][];
-            total: components["schemas"]["SeasonTotalDto"];
-            heaterCapacity: components["schemas"]["SeasonHeaterCapacityDto"];
-            /** @description the hour of highest heat demand; null if no heat was needed */
-            peak: components["schemas"]["SeasonPeakDto"] | null;
-            /** @description share of the season's heat delivered at night (sunset to sunrise) */
-            nightShareOfHeat: number;
-            /** @description heat the sun supplied in place of the heater, kWh */
-            solarOffsetKWh: number;
-            degreeDays: components["schemas"]["DegreeDayCrossCheckDto"];
-            assumptions: components["schemas"]["SeasonAssumptionDto"][];
-            /** @description combustion / electrical safety cautions; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
-            cautions: string[];
-            houseId: number;
-            inputsUsed: components["schemas"]["SeasonInputsUsedDto"];
-        };
-        NightDemandRequestDto: {
-            /** @description 'normals' (default: the farm's monthly climate normals) or { temperatureLogId } to use a logged year instead */
-            climateSource?: "normals" | components["schemas"]["TemperatureLogClimateSourceDto"];
-            /** @description reference-data fuels id; default: the fuel of the house's first heater */
-            fuelId?: string;
-            /** @description money per purchase unit; default: the farm's price for the fuel */
-            pricePerUnit?: number;
-            /**
-             * @description unit the given pricePerUnit is per: 'si' (the fuel's unitSi, default) or 'us' (its unitUs)
-             * @enum {string}
-             */
-            priceUnit?: "si" | "us";
-            /** @description output ÷ input; default: the efficiency of the house's first heater burning the fuel */
-            heaterEfficiency?: number;
-            /**
-             * @description the evening the night begins, YYYY-MM-DD
-             * @example 2027-01-15
-             */
-            date: string;
-            /** @description °C; default: the house's night setpoint */
-            nightSetpointC?: number;
-        };
-        NightHourDto: {
-            /** @description start of the hour, local standard time */
-            at: string;
-            /** @description °C */
-            outdoorC: number;
-            /** @description share of the hour after sunset / before sunrise */
-            nightShare: number;
-            /** @description average heat demand over the hour's night share, W */
-            heatW: number;
-            /** @description heat the heaters deliver (at most their installed output), W */
-            deliveredW: number;
-            /** @description true when the heaters cannot hold the night setpoint this hour */
-            belowSetpoint: boolean;
-        };
-        SeasonRunInputsDto: {
-            /** @enum {string} */
-            climateSource: "normals" | "temperature-log";
-            temperatureLogId: number | null;
-            temperatureLogName: string | null;
-            fuelId: string;
-            /** @enum {string} */
-            fuelFrom: "request" | "house-heater";
-            pricePerUnit: number;
-            /** @enum {string} */
-            priceUnit: "si" | "us";
-            /** @enum {string} */
-            priceFrom: "request" | "farm-fuel-prices";
-            heaterEfficiency: number;
-            /** @enum {string} */
-            heaterEfficiencyFrom: "request" | "house-heater";
-            /** @description the farm's IANA zone */
-            timeZone: string;
-            /** @description the zone's standard-time offset from UTC (daylight saving ignored), h */
-            utcOffsetHours: number;
-        };
-        HouseNightDemandDto: {
-            /** @description heat delivered to the house, kWh */
-            energyKWh: number;
-            /** @description heat content of the fuel burnt (energy ÷ efficiency), kWh */
-            fuelInputKWh: number;
-            /** @description fuel in its SI purchase unit (the fuel's unitSi) */
-            fuelQuantitySi: number;
-            /** @description fuel in its US purchase unit (the fuel's unitUs) */
-            fuelQuantityUs: number;
-            /** @description money, in the currency of the price */
-            cost: number;
-            houseId: number;
-            /** @description the evening the night begins, YYYY-MM-DD */
-            date: string;
-            /** @description local standard time; null where the sun does not set */
-            sunset: string | null;
-            /** @description next morning, local standard time; null where the sun does not rise */
-            sunrise: string | null;
-            /** @description h */
-            nightHours: number;
-            /** @description °C */
-            nightSetpointC: number;
-            /** @description UA with the curtain drawn (if any), W/K */
-            uaWPerK: number;
-            /** @description highest hourly heat demand, W */
-            peakW: number;
-            /** @description coldest night hour, °C */
-            minOutdoorC: number | null;
-            /** @description installed heater output, W */
-            installedOutputW: number;
-            /** @description heat the heaters could not deliver, kWh */
-            unmetHeatKWh: number;
-            /** @description night hours in which the heaters cannot hold the setpoint */
-            hoursBelowSetpoint: number;
-            /** @description set when some hour cannot be held; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
-            capacityCaution: string | null;
-            hourly: components["schemas"]["NightHourDto"][];
-            /** @description may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
-            cautions: string[];
-            inputsUsed: components["schemas"]["SeasonRunInputsDto"];
-        };
-        MeasureFuelPriceDto: {
-            /** @description reference-data fuels id */
-            fuelId: string;
-            /** @description without a price the fuel switch is reported as not applicable */
-            pricePerUnit?: number;
-            /**
-             * @description needed with a price
-             * @enum {string}
-             */
-            priceUnit?: "si" | "us";
-        };
-        MeasureDto: {
-            /** @enum {string} */
-            kind: "second-poly-layer" | "thermal-curtain" | "perimeter-insulation" | "sealing" | "night-setpoint-lower" | "later-start" | "heater-efficiency" | "fuel-switch";
-            /** @description what the measure costs, same currency as the fuel price; omit (or null) when not known yet: the payback then asks for it */
-            costAmount?: number | null;
-            label?: string;
-            /** @description second-poly-layer: surfaces to cover */
-            surfaces?: ("roof" | "sidewalls")[];
-            /** @description second-poly-layer: the coverings id the surfaces become */
-            coveringId?: string;
-            /** @description thermal-curtain: curtains id */
-            curtainId?: string;
-            /** @description sealing: air-leakage class to reach */
-            airLeakageClassId?: string;
-            /** @description sealing: measured air changes per hour after sealing */
-            airChangesPerHour?: number;
-            /** @description night-setpoint-lower: K (0 is accepted and reported as not applicable) */
-            lowerByK?: number;
-            /** @description later-start: days */
-            delayDays?: number;
-            /** @description heater-efficiency / fuel-switch: efficiency of the new heaters */
-            efficiency?: number;
-            /** @description fuel-switch: the new fuel and its price (without it the measure is reported as not applicable) */
-            fuel?: components["schemas"]["MeasureFuelPriceDto"];
-        };
-        MeasuresRequestDto: {
-            /** @description 'normals' (default: the farm's monthly climate normals) or { temperatureLogId } to use a logged year instead */
-            climateSource?: "normals" | components["schemas"]["TemperatureLogClimateSourceDto"];
-            /** @description reference-data fuels id; default: the fuel of the house's first heater */
-            fuelId?: string;
-            /** @description money per purchase unit; default: the farm's price for the fuel */
-            pricePerUnit?: number;
-            /**
-             * @description unit the given pricePerUnit is per: 'si' (the fuel's unitSi, default) or 'us' (its unitUs)
-             * @enum {string}
-             */
-            priceUnit?: "si" | "us";
-            /** @description output ÷ input; default: the efficiency of the house's first heater burning the fuel */
-            heaterEfficiency?: number;
-            /**
-             * @description first day, YYYY-MM-DD; give both dates or neither. Default: the heating season in progress or, between seasons, the next one (1 Sep – 31 May north of the equator, 1 Mar – 30 Nov south); with a temperature log, the whole days the log covers (at most 366)
-             * @example 2026-09-01
-             */
-            startDate?: string;
-            /**
-             * @description last day (inclusive), YYYY-MM-DD; at most 366 days from startDate
-             * @example 2027-05-31
-             */
-            endDate?: string;
-            /** @description measures to compare; an empty list compares the default measures (reference-data/measures.json) that apply to the house, without costs, so a ranking shows at once */
-            measures: components["schemas"]["MeasureDto"][];
-        };
-        MeasureSeasonDto: {
-            /** @description heat delivered to the house, kWh */
-            energyKWh: number;
-            /** @description heat content of the fuel burnt (energy ÷ efficiency), kWh */
-            fuelInputKWh: number;
-            /** @description fuel in its SI purchase unit (the fuel's unitSi) */
-            fuelQuantitySi: number;
-            /** @description fuel in its US purchase unit (the fuel's unitUs) */
-            fuelQuantityUs: number;
-            /** @description money, in the currency of the price */
-            cost: number;
-            fuelId: string;
-            unitSi: string;
-            unitUs: string;
-        };
-        MeasureLightChangeDto: {
-            /** @enum {string} */
-            surface: "roof" | "sidewalls";
-            /** @description light transmittance before, 0–1 */
-            before: number;
-            /** @description light transmittance after, 0–1 */
-            after: number;
-            /** @description relative change of light reaching the crop, e.g. −0.11 for 11 % less */
-            relativeChange: number;
-            source: string;
-        };
-        MeasureResultDto: {
-            /** @description position in the request list (or in the default list) */
-            index: number;
-            /** @enum {string} */
-            kind: "second-poly-layer" | "thermal-curtain" | "perimeter-insulation" | "sealing" | "night-setpoint-lower" | "later-start" | "heater-efficiency" | "fuel-switch";
-            label: string;
-            /** @description what changed, in words; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
-            description: string;
-            /** @description null when no cost was entered */
-            costAmount: number | null;
-            /** @description false when the measure changes nothing for this house (already done, or no better than what it has) */
-            applicable: boolean;
-            /** @description why the measure does not apply, in plain words; null when it applies; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
-            notApplicableReason: string | null;
-            /** @description the season with the measure (the house as it is when the measure does not apply) */
-            season: components["schemas"]["MeasureSeasonDto"];
-            /** @description heat the house no longer needs, kWh per season (0 for heater or fuel changes) */
-            heatSavedKWh: number;
-            /** @description fuel energy no longer bought, kWh per season */
-            fuelInputSavedKWh: number;
-            /** @description in the baseline fuel's unitSi; null when the measure burns another fuel */
-            fuelSavedSi: number | null;
-            /** @description in the baseline fuel's unitUs */
-            fuelSavedUs: number | null;
-            /** @description money saved per season (= per year with one season a year); negative when it costs more to run */
-            yearlyMoneySaved: number;
-            /**
-             * @description 'years': cost ÷ saving; 'immediate': cost 0 and a saving; 'enter-cost': a saving but no cost entered; 'never': no money saved; 'not-applicable': changes nothing for this house
-             * @enum {string}
-             */
-            paybackStatus: "years" | "immediate" | "enter-cost" | "never" | "not-applicable";
-            /** @description cost ÷ yearly money saved, years (0 when 'immediate'); null for the other statuses */
-            paybackYears: number | null;
-            /**
-             * @description '2.4 years', 'immediately', 'enter a cost', 'never' or 'not applicable'
-             * @example 2.4 years
-             */
-            paybackText: string;
-            /** @description light change for measures that add a layer or a screen */
-            lightChange: components["schemas"]["MeasureLightChangeDto"] | null;
-            /** @description may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
-            notes: string[];
-        };
-        MeasureComparisonDto: {
-            houseId: number;
-            /** @description the season of the house as it is */
-            baseline: components["schemas"]["MeasureSeasonDto"];
-            /** @description shortest payback first (equal paybacks: larger saving first), then measures without a cost, then those that never pay back, then those that do not apply */
-            measures: components["schemas"]["MeasureResultDto"][];
-            /** @description true when the request listed no measures and the default measures that apply to the house were compared without costs */
-            defaultsUsed: boolean;
-            /** @description may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
-            notes: string[];
-            inputsUsed: components["schemas"]["SeasonInputsUsedDto"];
-        };
-        ProductionPeriodDto: {
-            /**
-             * @description first day, 'MM-DD'
-             * @example 11-15
-             */
-            startMonthDay: string;
-            /**
-             * @description last day (inclusive), 'MM-DD'; may wrap the year end
-             * @example 03-31
-             */
-            endMonthDay: string;
-            /** @enum {string} */
-            mode: "heated" | "empty";
-            /** @description replaces the house's day heating setpoint in this period, °C */
-            dayHeatingC?: number;
-            /** @description replaces the house's night heating setpoint in this period, °C */
-            nightHeatingC?: number;
-            /** @example Spring bedding crop */
-            label?: string;
-        };
-        ProductionCalendarDto: {
-            /** @description empty list = heated all season at the house setpoints; otherwise days no period covers are unheated, and where periods overlap the later one wins */
-            periods: components["schemas"]["ProductionPeriodDto"][];
-            houseId: number;
-        };
-        PutProductionCalendarDto: {
-            /** @description empty list = heated all season at the house setpoints; otherwise days no period covers are unheated, and where periods overlap the later one wins */
-            periods: components["schemas"]["ProductionPeriodDto"][];
-        };
-        FuelPriceDto: {
-            /** @description reference-data fuels id (one price per fuel) */
-            fuelId: string;
-            /** @description money per purchase unit */
-            pricePerUnit: number;
-            /**
-             * @description 'si': per the fuel's unitSi (m³, L, kg, kWh); 'us': per its unitUs (therm, US gal, short ton, kWh)
-             * @enum {string}
-             */
-            priceUnit: "si" | "us";
-            /** @description where the price came from (supplier, contract, date) */
-            note?: string | null;
-            /** @example Propane */
-            fuelLabel: string;
-            /**
-             * @description the unit the price is per
-             * @example US gal
-             */
-            priceUnitLabel: string;
-        };
-        FarmFuelPricesDto: {
-            farmId: number;
-            prices: components["schemas"]["FuelPriceDto"][];
-        };
-        FuelPriceInputDto: {
-            /** @description reference-data fuels id (one price per fuel) */
-            fuelId: string;
-            /** @description money per purchase unit */
-            pricePerUnit: number;
-            /**
-             * @description 'si': per the fuel's unitSi (m³, L, kg, kWh); 'us': per its unitUs (therm, US gal, short ton, kWh)
-             * @enum {string}
-             */
-            priceUnit: "si" | "us";
-            /** @description where the price came from (supplier, contract, date) */
-            note?: string | null;
-        };
-        PutFuelPricesDto: {
-            /** @description replaces every price of the farm */
-            prices: components["schemas"]["FuelPriceInputDto"][];
-        };
-        SeasonBudgetRequestDto: {
-            /**
-             * @description first day, YYYY-MM-DD (default as for a house season)
-             * @example 2026-09-01
-             */
-            startDate?: string;
-            /**
-             * @description last day (inclusive), YYYY-MM-DD
-             * @example 2027-05-31
-             */
-            endDate?: string;
-            /** @description 'normals' (default: the farm's monthly climate normals) or { temperatureLogId } to use a logged year instead */
-            climateSource?: "normals" | components["schemas"]["TemperatureLogClimateSourceDto"];
-        };
-        BudgetMonthOfHouseDto: {
-            year: number;
-            month: number;
-            /** @description heat delivered, kWh */
-            energyKWh: number;
-            /** @description fuel burnt, kWh */
-            fuelInputKWh: number;
-            fuelQuantitySi: number;
-            fuelQuantityUs: number;
-            /** @description null when the farm has no price for the fuel */
-            cost: number | null;
-            /** @description heat the heaters could not deliver, kWh */
-            unmetHeatKWh: number;
-            /** @description hours in which the heaters could not hold the setpoint */
-            hoursBelowSetpoint: number;
-        };
-        BudgetHouseDto: {
-            houseId: number;
-            name: string;
-            /** @description fuel of the first heater; null when the house has no heaters */
-            fuelId: string | null;
-            fuelLabel: string | null;
-            unitSi: string | null;
-            unitUs: string | null;
-            heaterEfficiency: number | null;
-            pricePerUnit: number | null;
-            /** @enum {string|null} */
-            priceUnit: "si" | "us" | null;
-            /** @description heat delivered, kWh */
-            energyKWh: number;
-            /** @description fuel burnt, kWh */
-            fuelInputKWh: number;
-            /** @description in the fuel's unitSi */
-            fuelQuantitySi: number;
-            /** @description in the fuel's unitUs */
-            fuelQuantityUs: number;
-            /** @description null when the farm has no price for the fuel */
-            cost: number | null;
-            heatedDays: number;
-            /** @description periods of the house's production calendar (0 = heated all season) */
-            calendarPeriodCount: number;
-            /** @description heat the house's heaters could not deliver, kWh */
-            unmetHeatKWh: number;
-            /** @description hours in which the heaters could not hold the setpoint */
-            hoursBelowSetpoint: number;
-            /** @description set when the heaters cannot hold the setpoint in some hour; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
-            capacityCaution: string | null;
-            monthly: components["schemas"]["BudgetMonthOfHouseDto"][];
-            /** @description why the house is not (fully) budgeted, e.g. no heaters or no price */
-            problem: string | null;
-        };
-        BudgetFuelTotalDto: {
-            fuelId: string;
-            label: string;
-            unitSi: string;
-            unitUs: string;
-            houseCount: number;
-            /** @description kWh */
-            energyKWh: number;
-            /** @description kWh */
-            fuelInputKWh: number;
-            fuelQuantitySi: number;
-            fuelQuantityUs: number;
-            /** @description null when the farm has no price for the fuel */
-            cost: number | null;
-        };
-        BudgetMonthFuelDto: {
-            fuelId: string;
-            fuelQuantitySi: number;
-            fuelQuantityUs: number;
-        };
-        BudgetMonthDto: {
-            year: number;
-            month: number;
-            /** @description heat delivered to all houses, kWh */
-            energyKWh: number;
-            /** @description kWh */
-            fuelInputKWh: number;
-            /** @description cost of the priced fuels */
-            cost: number;
-            byFuel: components["schemas"]["BudgetMonthFuelDto"][];
-        };
-        SeasonBudgetDto: {
-            farmId: number;
-            startDate: string;
-            endDate: string;
-            /** @enum {string} */
-            seasonFrom: "request" | "default-heating-season" | "temperature-log";
-            /** @enum {string} */
-            climateSource: "normals" | "temperature-log";
-            temperatureLogId: number | null;
-            houses: components["schemas"]["BudgetHouseDto"][];
-            byFuel: components["schemas"]["BudgetFuelTotalDto"][];
-            /** @description heat delivered to all houses, kWh */
-            totalEnergyKWh: number;
-            /** @description sum of the priced houses */
-            totalCost: number;
-            /** @description false when some house has no price (or no heaters) and is left out of totalCost */
-            costComplete: boolean;
-            monthly: components["schemas"]["BudgetMonthDto"][];
-            /** @description may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
-            notes: string[];
-            /** @description may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
-            cautions: string[];
-        };
-        ColumnProposalDto: {
-            /** @description one column holding date and time (or the date alone in a daily file) */
-            timestampColumn: string | null;
-            /** @description separate date column, when the file splits date and time */
-            dateColumn: string | null;
-            /** @description separate time-of-day column */
-            timeColumn: string | null;
-            /** @description the (mean) temperature; null when a daily file has only minimum and maximum */
-            temperatureColumn: string | null;
-            minColumn: string | null;
-            maxColumn: string | null;
-            /** @enum {string} */
-            unit: "C" | "F";
-            /** @description why the unit was guessed, in words */
-            unitReason: string;
-            /** @enum {string} */
-            resolution: "hourly" | "daily";
-            /**
-             * @description order of day, month and year in dates with the year last
-             * @enum {string}
-             */
-            dateOrder: "YMD" | "MDY" | "DMY";
-            /** @description true when day-first and month-first both fit the dates seen; the user should confirm */
-            dateOrderAmbiguous: boolean;
-            /** @description numbers are written with a decimal comma */
-            decimalComma: boolean;
-        };
-        TemperatureCsvInspectionDto: {
-            /**
-             * @description ',' ';' or a tab
-             * @enum {string}
-             */
-            delimiter: "," | ";" | "\t";
-            hasHeader: boolean;
-            /** @description column names (from the header, or 'Column 1', 'Column 2' … without one) */
-            headers: string[];
-            /** @description the first data rows as they appear */
-            sampleRows: string[][];
-            /** @description data rows in the file */
-            dataRowCount: number;
-            proposal: components["schemas"]["ColumnProposalDto"];
-            notes: string[];
-        };
-        TemperatureLogDto: {
-            id: number;
-            farmId: number;
-            name: string;
-            /** @enum {string} */
-            resolution: "hourly" | "daily";
-            /** @description first reading's date, YYYY-MM-DD */
-            startDate: string;
-            /** @description last reading's date, YYYY-MM-DD */
-            endDate: string;
-            /** @description data rows in the file */
-            rowCount: number;
-            /** @description readings kept (rows without any temperature are skipped) */
-            readingCount: number;
-            /** Format: date-time */
-            createdAt: string;
-        };
-        TemperatureColumnMappingDto: {
-            timestampColumn?: string | null;
-            dateColumn?: string | null;
-            timeColumn?: string | null;
-            temperatureColumn?: string | null;
-            minColumn?: string | null;
-            maxColumn?: string | null;
-            /** @enum {string} */
-            unit: "C" | "F";
-            /**
-             * @description inferred from the times when absent
-             * @enum {string}
-             */
-            resolution?: "hourly" | "daily";
-            /** @enum {string} */
-            dateOrder?: "YMD" | "MDY" | "DMY";
-            decimalComma?: boolean;
-            /**
-             * @description detected when absent
-             * @enum {string}
-             */
-            delimiter?: "," | ";" | "\t";
-            /** @description detected when absent */
-            hasHeader?: boolean;
-        };
-        TemperatureLogDayDto: {
-            /** @description YYYY-MM-DD (as logged) */
-            date: string;
-            /** @description lowest reading (hourly) or the logged minimum (daily), °C; null for a daily log with means only */
-            minC: number | null;
-            /** @description mean of the readings (hourly) or the logged temperature (daily), °C */
-            meanC: number;
-            /** @description °C */
-            maxC: number | null;
-            /** @description readings that day */
-            readingCount: number;
-        };
-        TemperatureLogDetailDto: {
-            id: number;
-            farmId: number;
-            name: string;
-            /** @enum {string} */
-            resolution: "hourly" | "daily";
-            /** @description first reading's date, YYYY-MM-DD */
-            startDate: string;
-            /** @description last reading's date, YYYY-MM-DD */
-            endDate: string;
-            /** @description data rows in the file */
-            rowCount: number;
-            /** @description readings kept (rows without any temperature are skipped) */
-            readingCount: number;
-            /** Format: date-time */
-            createdAt: string;
-            /** @description how the file was read */
-            mapping: components["schemas"]["TemperatureColumnMappingDto"];
-            days: components["schemas"]["TemperatureLogDayDto"][];
-        };
+  schemas: {
+    HealthDto: {
+      /** @example ok */
+      status: string;
+      version: string;
     };
-    responses: never;
-    parameters: never;
-    requestBodies: never;
-    headers: never;
-    pathItems: never;
+    UpdateMeDto: {
+      name?: string;
+      /** @enum {string} */
+      unitSystem?: 'si' | 'us';
+    };
+    UserDto: {
+      id: number;
+      email: string;
+      name: string;
+      /** @enum {string} */
+      siteRole: 'admin' | 'user';
+      /**
+       * @description How numbers are shown: SI or US customary
+       * @enum {string}
+       */
+      unitSystem: 'si' | 'us';
+    };
+    AdminUpdateUserDto: {
+      name?: string;
+      /** @enum {string} */
+      siteRole?: 'admin' | 'user';
+    };
+    RegisterDto: {
+      email: string;
+      password: string;
+      name: string;
+    };
+    SessionDto: {
+      accessToken: string;
+      user: components['schemas']['UserDto'];
+    };
+    LoginDto: {
+      /** @example grower@example.com */
+      email: string;
+      /** @example thermbay-demo */
+      password: string;
+    };
+    DemoAccountDto: {
+      email: string;
+      name: string;
+      description: string;
+    };
+    DemoAccountsDto: {
+      enabled: boolean;
+      password: string | null;
+      accounts: components['schemas']['DemoAccountDto'][];
+    };
+    RolePermissionsDto: {
+      owner: (
+        | 'farm:read'
+        | 'farm:update'
+        | 'farm:delete'
+        | 'members:manage'
+        | 'house:read'
+        | 'house:write'
+        | 'estimate:run'
+        | 'report:write'
+      )[];
+      grower: (
+        | 'farm:read'
+        | 'farm:update'
+        | 'farm:delete'
+        | 'members:manage'
+        | 'house:read'
+        | 'house:write'
+        | 'estimate:run'
+        | 'report:write'
+      )[];
+      adviser: (
+        | 'farm:read'
+        | 'farm:update'
+        | 'farm:delete'
+        | 'members:manage'
+        | 'house:read'
+        | 'house:write'
+        | 'estimate:run'
+        | 'report:write'
+      )[];
+      viewer: (
+        | 'farm:read'
+        | 'farm:update'
+        | 'farm:delete'
+        | 'members:manage'
+        | 'house:read'
+        | 'house:write'
+        | 'estimate:run'
+        | 'report:write'
+      )[];
+    };
+    PermissionsDto: {
+      roles: components['schemas']['RolePermissionsDto'];
+    };
+    FarmDto: {
+      id: number;
+      name: string;
+      latitudeDeg: number;
+      longitudeDeg: number;
+      elevationM: number;
+      timeZone: string;
+      /** @enum {string} */
+      myRole: 'owner' | 'grower' | 'adviser' | 'viewer';
+      permissions: (
+        | 'farm:read'
+        | 'farm:update'
+        | 'farm:delete'
+        | 'members:manage'
+        | 'house:read'
+        | 'house:write'
+        | 'estimate:run'
+        | 'report:write'
+      )[];
+      houseCount: number;
+      createdAt: string;
+      updatedAt: string;
+    };
+    CreateFarmDto: {
+      /** @example North Ridge Produce */
+      name: string;
+      /** @description degrees, north positive */
+      latitudeDeg: number;
+      /** @description degrees, east positive */
+      longitudeDeg: number;
+      /** @description m above sea level */
+      elevationM: number;
+      /** @example America/Chicago */
+      timeZone: string;
+    };
+    UpdateFarmDto: {
+      /** @example North Ridge Produce */
+      name?: string;
+      /** @description degrees, north positive */
+      latitudeDeg?: number;
+      /** @description degrees, east positive */
+      longitudeDeg?: number;
+      /** @description m above sea level */
+      elevationM?: number;
+      /** @example America/Chicago */
+      timeZone?: string;
+    };
+    MemberDto: {
+      userId: number;
+      email: string;
+      name: string;
+      /** @enum {string} */
+      role: 'owner' | 'grower' | 'adviser' | 'viewer';
+    };
+    AddMemberDto: {
+      email: string;
+      /** @enum {string} */
+      role: 'owner' | 'grower' | 'adviser' | 'viewer';
+    };
+    UpdateMemberDto: {
+      /** @enum {string} */
+      role: 'owner' | 'grower' | 'adviser' | 'viewer';
+    };
+    CoveringsDto: {
+      /**
+       * @description reference-data coverings id
+       * @example poly-double-inflated
+       */
+      roof: string;
+      /** @description reference-data coverings id */
+      sidewalls: string;
+      /** @description reference-data coverings id */
+      endwalls: string;
+    };
+    CoveringOverridesDto: {
+      /** @description W/(m²·K) */
+      roof?: number;
+      /** @description W/(m²·K) */
+      sidewalls?: number;
+      /** @description W/(m²·K) */
+      endwalls?: number;
+    };
+    HeaterGroupDto: {
+      count: number;
+      /** @description rated input of one unit, W */
+      ratedInputW: number;
+      /** @description output ÷ input, 0–1 */
+      efficiency: number;
+      /**
+       * @description reference-data fuels id
+       * @example propane
+       */
+      fuelId: string;
+    };
+    ExhaustFansDto: {
+      count: number;
+      /** @description m³/s moved by one fan at working static pressure */
+      capacityEachM3PerS: number;
+    };
+    SetpointsDto: {
+      dayHeatingC: number;
+      nightHeatingC: number;
+      coolingC: number;
+    };
+    HouseDto: {
+      /** @enum {string} */
+      shape: 'gable' | 'gothic-arch' | 'quonset';
+      spans: number;
+      /** @description width of one span, m */
+      widthM: number;
+      lengthM: number;
+      /** @description sidewall or gutter height, m */
+      eaveHeightM: number;
+      ridgeHeightM: number;
+      coverings: components['schemas']['CoveringsDto'];
+      /** @description a maker's U-value replacing the reference value */
+      coveringUOverridesWPerM2K?: components['schemas']['CoveringOverridesDto'];
+      /** @description reference-data air-leakage id */
+      airLeakageClassId: string;
+      /** @description measured air changes per hour */
+      airChangesPerHourOverride?: number | null;
+      perimeterInsulated: boolean;
+      /** @description reference-data curtains id, drawn at night */
+      curtainId?: string | null;
+      heaters: components['schemas']['HeaterGroupDto'][];
+      exhaustFans: components['schemas']['ExhaustFansDto'];
+      /** @description free louvre or inlet area, m² */
+      inletAreaM2: number;
+      setpoints: components['schemas']['SetpointsDto'];
+      /** @example House 3 */
+      name: string;
+      notes?: string | null;
+      id: number;
+      farmId: number;
+      createdAt: string;
+      updatedAt: string;
+    };
+    CreateHouseDto: {
+      /** @enum {string} */
+      shape: 'gable' | 'gothic-arch' | 'quonset';
+      spans: number;
+      /** @description width of one span, m */
+      widthM: number;
+      lengthM: number;
+      /** @description sidewall or gutter height, m */
+      eaveHeightM: number;
+      ridgeHeightM: number;
+      coverings: components['schemas']['CoveringsDto'];
+      /** @description a maker's U-value replacing the reference value */
+      coveringUOverridesWPerM2K?: components['schemas']['CoveringOverridesDto'];
+      /** @description reference-data air-leakage id */
+      airLeakageClassId: string;
+      /** @description measured air changes per hour */
+      airChangesPerHourOverride?: number | null;
+      perimeterInsulated: boolean;
+      /** @description reference-data curtains id, drawn at night */
+      curtainId?: string | null;
+      heaters: components['schemas']['HeaterGroupDto'][];
+      exhaustFans: components['schemas']['ExhaustFansDto'];
+      /** @description free louvre or inlet area, m² */
+      inletAreaM2: number;
+      setpoints: components['schemas']['SetpointsDto'];
+      /** @example House 3 */
+      name: string;
+      notes?: string | null;
+    };
+    UpdateHouseDto: {
+      /** @enum {string} */
+      shape?: 'gable' | 'gothic-arch' | 'quonset';
+      spans?: number;
+      /** @description width of one span, m */
+      widthM?: number;
+      lengthM?: number;
+      /** @description sidewall or gutter height, m */
+      eaveHeightM?: number;
+      ridgeHeightM?: number;
+      coverings?: components['schemas']['CoveringsDto'];
+      /** @description a maker's U-value replacing the reference value */
+      coveringUOverridesWPerM2K?: components['schemas']['CoveringOverridesDto'];
+      /** @description reference-data air-leakage id */
+      airLeakageClassId?: string;
+      /** @description measured air changes per hour */
+      airChangesPerHourOverride?: number | null;
+      perimeterInsulated?: boolean;
+      /** @description reference-data curtains id, drawn at night */
+      curtainId?: string | null;
+      heaters?: components['schemas']['HeaterGroupDto'][];
+      exhaustFans?: components['schemas']['ExhaustFansDto'];
+      /** @description free louvre or inlet area, m² */
+      inletAreaM2?: number;
+      setpoints?: components['schemas']['SetpointsDto'];
+      /** @example House 3 */
+      name?: string;
+      notes?: string | null;
+    };
+    MonthlyClimateDto: {
+      month: number;
+      /** @description mean of the daily minimum temperatures, °C */
+      meanDailyMinC: number;
+      /** @description mean of the daily maximum temperatures, °C */
+      meanDailyMaxC: number;
+      /** @description actual ÷ clear-sky solar over the month; default from reference data */
+      clearness?: number | null;
+    };
+    SiteClimateDto: {
+      /** @description heating design dry bulb (99 % or 99.6 %), °C */
+      winterDesignC: number;
+      /** @description cooling design dry bulb (1 %), °C */
+      summerDesignC: number;
+      /** @description wet bulb coincident with the summer design dry bulb, °C */
+      summerDesignWetBulbC: number;
+      /** @description mean daily range on the summer design day, K */
+      summerDailyRangeK: number;
+      /** @description exactly 12 rows, one per month */
+      monthly: components['schemas']['MonthlyClimateDto'][];
+      /** @description where the numbers came from (e.g. national climate normals, station name) */
+      sourceNote?: string | null;
+    };
+    FarmClimateDto: {
+      farmId: number;
+      /** @description null until someone enters the climate */
+      climate: components['schemas']['SiteClimateDto'] | null;
+    };
+    HouseSpecDto: {
+      /** @enum {string} */
+      shape: 'gable' | 'gothic-arch' | 'quonset';
+      spans: number;
+      /** @description width of one span, m */
+      widthM: number;
+      lengthM: number;
+      /** @description sidewall or gutter height, m */
+      eaveHeightM: number;
+      ridgeHeightM: number;
+      coverings: components['schemas']['CoveringsDto'];
+      /** @description a maker's U-value replacing the reference value */
+      coveringUOverridesWPerM2K?: components['schemas']['CoveringOverridesDto'];
+      /** @description reference-data air-leakage id */
+      airLeakageClassId: string;
+      /** @description measured air changes per hour */
+      airChangesPerHourOverride?: number | null;
+      perimeterInsulated: boolean;
+      /** @description reference-data curtains id, drawn at night */
+      curtainId?: string | null;
+      heaters: components['schemas']['HeaterGroupDto'][];
+      exhaustFans: components['schemas']['ExhaustFansDto'];
+      /** @description free louvre or inlet area, m² */
+      inletAreaM2: number;
+      setpoints: components['schemas']['SetpointsDto'];
+    };
+    HeatingConditionsDto: {
+      /** @description winter design dry bulb (99 % or 99.6 %), °C */
+      designOutdoorC: number;
+      /** @description site elevation, m (sets air density) */
+      elevationM: number;
+      /** @description inside relative humidity on the design night, % */
+      insideRelativeHumidityPct: number;
+      /** @description inside temperature to hold, °C; default the house night heating setpoint */
+      insideC?: number;
+      /** @description credit a drawn curtain in the design loss; default false (heaters sized with the curtain open) */
+      curtainClosed?: boolean;
+    };
+    HeatingEstimateRequestDto: {
+      house: components['schemas']['HouseSpecDto'];
+      conditions: components['schemas']['HeatingConditionsDto'];
+    };
+    HouseGeometrySummaryDto: {
+      /** @description m² */
+      floorAreaM2: number;
+      /** @description m² */
+      roofAreaM2: number;
+      /** @description m² */
+      sidewallAreaM2: number;
+      /** @description m² */
+      endwallAreaM2: number;
+      /** @description roof + sidewalls + endwalls, m² */
+      coverAreaM2: number;
+      /** @description outside perimeter of the house at the ground, m */
+      perimeterM: number;
+      /** @description m³ */
+      volumeM3: number;
+    };
+    HeatLossComponentDto: {
+      /** @enum {string} */
+      key: 'roof' | 'sidewalls' | 'endwalls' | 'perimeter' | 'infiltration';
+      label: string;
+      /** @description area (m²), perimeter (m) or volume (m³), see quantityUnit */
+      quantity: number;
+      /** @enum {string} */
+      quantityUnit: 'm2' | 'm' | 'm3';
+      /** @description U in W/(m²·K) for surfaces, F in W/(m·K) for the perimeter, air changes per hour for infiltration */
+      coefficient: number;
+      /** @description W/K */
+      conductanceWPerK: number;
+      /** @description loss at the design ΔT, W */
+      watts: number;
+      /** @description share of the total, 0–1 */
+      share: number;
+    };
+    HeatLossBreakdownDto: {
+      /** @description °C */
+      insideC: number;
+      /** @description °C */
+      outsideC: number;
+      /** @description inside − outside, K (may be ≤ 0: then no heat is needed) */
+      deltaTK: number;
+      /** @description W */
+      totalW: number;
+      /** @description through the coverings, W */
+      coveringW: number;
+      /** @description through the perimeter, W */
+      perimeterW: number;
+      /** @description air leakage, W */
+      infiltrationW: number;
+      curtainApplied: boolean;
+      components: components['schemas']['HeatLossComponentDto'][];
+    };
+    HeaterSizingDto: {
+      /** @description fraction added to the design loss */
+      safetyMargin: number;
+      /** @description W */
+      requiredOutputW: number;
+      /** @description W */
+      requiredInputW: number;
+      /** @description W */
+      installedInputW: number;
+      /** @description W */
+      installedOutputW: number;
+      /** @enum {string} */
+      verdict: 'adequate' | 'short' | 'none-installed';
+      /** @description W (0 when adequate) */
+      shortfallW: number;
+      /** @description outdoor temperature at which the installed output just holds the inside temperature, °C */
+      lowestHeldOutdoorC: number | null;
+      unitCount: number;
+      /** @description W */
+      largestUnitOutputW: number;
+      /** @description same with the largest unit out of service, °C; null without a second unit */
+      holdsWithLargestUnitOutC: number | null;
+      /** @description how the output is split over units; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
+      splitAdvice: string;
+      fuelFired: boolean;
+    };
+    CondensationSurfaceDto: {
+      /** @enum {string} */
+      group: 'roof' | 'sidewalls' | 'endwalls';
+      coveringId: string;
+      /** @description W/(m²·K) */
+      uWPerM2K: number;
+      /** @description °C */
+      insideSurfaceC: number;
+      condenses: boolean;
+      /** @description outdoor temperature below which water condenses on this surface, °C */
+      condensationBelowOutdoorC: number;
+    };
+    CondensationDto: {
+      /** @description °C */
+      insideC: number;
+      /** @description % */
+      insideRelativeHumidityPct: number;
+      /** @description °C */
+      dewPointC: number;
+      anyCondenses: boolean;
+      surfaces: components['schemas']['CondensationSurfaceDto'][];
+    };
+    HeatingAssumptionDto: {
+      key: string;
+      /** @description may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
+      label: string;
+      value: number | string;
+      unit: string;
+      source: string;
+      /** @enum {string} */
+      confidence: 'verified' | 'verified-secondary' | 'derived' | 'memory' | 'common-practice' | 'user-entered';
+      /** @description true when a value entered for the house replaced the reference value */
+      overridden: boolean;
+    };
+    HeatingEstimateDto: {
+      geometry: components['schemas']['HouseGeometrySummaryDto'];
+      heatLoss: components['schemas']['HeatLossBreakdownDto'];
+      heater: components['schemas']['HeaterSizingDto'];
+      condensation: components['schemas']['CondensationDto'];
+      assumptions: components['schemas']['HeatingAssumptionDto'][];
+      /** @description safety and planning cautions, to show with the result; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
+      cautions: string[];
+    };
+    CoolingSiteDto: {
+      /** @description degrees, north positive */
+      latitudeDeg: number;
+      /** @description degrees, east positive */
+      longitudeDeg: number;
+      /** @description m */
+      elevationM: number;
+    };
+    EvaporativePadDto: {
+      /**
+       * @description reference-data evaporative-pads id
+       * @example cellulose-150mm
+       */
+      padTypeId: string;
+      /** @description face area of the pads, m² */
+      areaM2: number;
+    };
+    CoolingConditionsDto: {
+      /**
+       * @description YYYY-MM-DD; hours of the result are local apparent solar time
+       * @example 2026-07-21
+       */
+      designDate: string;
+      /** @description summer design dry bulb (the day’s maximum), °C */
+      summerDesignC: number;
+      /** @description day’s maximum − minimum, K */
+      dailyRangeK: number;
+      /** @description wet bulb coincident with the design dry bulb (not above it), °C */
+      summerDesignWetBulbC: number;
+      /** @description allowed inlet-to-fan rise, K; default from reference data */
+      allowedTemperatureRiseK?: number;
+      /** @description peak light at plant height, lux; default from reference data */
+      peakInteriorLightLux?: number;
+      /** @description inlet (pad) wall to fans, m; default the house length */
+      padToFanDistanceM?: number;
+      /** @description share of transmitted solar heat taken up by transpiration; default from reference data */
+      transpirationFraction?: number;
+      /** @description evaporative pads on the inlet wall, or null for none */
+      evaporativePad?: components['schemas']['EvaporativePadDto'] | null;
+      /** @description winter design temperature for the humidity-ventilation heat cost, °C */
+      winterDesignC?: number;
+    };
+    CoolingEstimateRequestDto: {
+      house: components['schemas']['HouseSpecDto'];
+      site: components['schemas']['CoolingSiteDto'];
+      conditions: components['schemas']['CoolingConditionsDto'];
+    };
+    AirExchangeDto: {
+      /** @description all installed fans together, m³/s */
+      installedFlowM3PerS: number;
+      /** @description 1/h */
+      airChangesPerHour: number;
+      /** @description 1/min */
+      airChangesPerMinute: number;
+      /** @description m³/s per m² of floor */
+      flowPerFloorAreaM3PerSM2: number;
+    };
+    CapacityFactorsDto: {
+      elevation: number;
+      light: number;
+      temperatureRise: number;
+      velocity: number;
+      /** @description elevation × light × temperatureRise */
+      house: number;
+      /** @description the larger of house and velocity */
+      applied: number;
+    };
+    CoolingCapacityDto: {
+      /** @description m³/s per m² of floor */
+      baseRateM3PerSM2: number;
+      factors: components['schemas']['CapacityFactorsDto'];
+      /** @description m³/s */
+      requiredFlowM3PerS: number;
+      /** @description m³/s */
+      installedFlowM3PerS: number;
+      /** @enum {string} */
+      verdict: 'adequate' | 'short' | 'no-fans';
+      /** @description fans of the installed size needed in all; null without fans */
+      fansNeeded: number | null;
+      /** @description fans to add; null without fans */
+      additionalFansNeeded: number | null;
+      /** @description m² */
+      inletAreaNeededM2: number;
+      /** @description m² */
+      inletAreaM2: number;
+      /** @enum {string} */
+      inletVerdict: 'adequate' | 'short';
+    };
+    DesignDayHourDto: {
+      /** @description local apparent solar hour */
+      hour: number;
+      /** @description °C */
+      outdoorC: number;
+      /** @description degrees above the horizon (negative at night) */
+      sunAltitudeDeg: number;
+      /** @description W/m² */
+      globalHorizontalWPerM2: number;
+      /** @description W */
+      solarGainW: number;
+      /** @description °C */
+      indoorWithFansC: number;
+      fanFraction: number;
+      /** @description °C; null without pads */
+      indoorWithPadsC: number | null;
+      setpointHeld: boolean;
+    };
+    DesignDayDto: {
+      /** @description YYYY-MM-DD */
+      date: string;
+      hours: components['schemas']['DesignDayHourDto'][];
+      /** @description °C */
+      peakIndoorWithFansC: number;
+      /** @description °C; null without pads */
+      peakIndoorWithPadsC: number | null;
+      /** @description solar hours at which the cooling setpoint is not held */
+      hoursNotHeld: number[];
+    };
+    PadSizingDto: {
+      padTypeId: string;
+      /** @description m/s */
+      faceVelocityMPerS: number;
+      saturationEfficiency: number;
+      /** @description m² */
+      areaNeededM2: number;
+      /** @description m² */
+      areaM2: number;
+      /** @enum {string} */
+      verdict: 'adequate' | 'short';
+      /** @description °C */
+      leavingAirAtPeakC: number;
+    };
+    FanStageDto: {
+      stage: number;
+      /** @description indoor temperature at which this stage switches on, °C */
+      onAtC: number;
+      /** @description fans switched on at this stage (not cumulative) */
+      fans: number;
+    };
+    StagingDto: {
+      /** @description K */
+      deadbandK: number;
+      /** @description K */
+      requiredDeadbandK: number;
+      ok: boolean;
+      /** @description may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
+      warnings: string[];
+      stages: components['schemas']['FanStageDto'][];
+    };
+    WinterVentilationDto: {
+      fractionOfSummerRate: number;
+      /** @description m³/s */
+      flowM3PerS: number;
+      /** @description 1/h */
+      airChangesPerHour: number;
+      /** @description W to warm the ventilation air to the night setpoint */
+      heatCostW: number;
+      /** @description °C */
+      atOutdoorC: number;
+      /** @description W lost by the house itself (cover, perimeter, leaks) at the same temperatures, for comparison */
+      houseHeatLossW: number;
+    };
+    CoolingAssumptionDto: {
+      key: string;
+      /** @description may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
+      label: string;
+      value: number | string;
+      unit: string;
+      source: string;
+      /** @enum {string} */
+      confidence: 'verified' | 'verified-secondary' | 'derived' | 'memory' | 'common-practice';
+      /** @description true when the request replaced the default */
+      overridden: boolean;
+    };
+    CoolingEstimateDto: {
+      airExchange: components['schemas']['AirExchangeDto'];
+      capacity: components['schemas']['CoolingCapacityDto'];
+      designDay: components['schemas']['DesignDayDto'];
+      /** @description null without evaporative pads */
+      pads: components['schemas']['PadSizingDto'] | null;
+      staging: components['schemas']['StagingDto'];
+      winterVentilation: components['schemas']['WinterVentilationDto'];
+      assumptions: components['schemas']['CoolingAssumptionDto'][];
+      /** @description safety and planning cautions, to show with the result; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
+      cautions: string[];
+    };
+    PartialHeatingConditionsDto: {
+      /** @description winter design dry bulb (99 % or 99.6 %), °C */
+      designOutdoorC?: number;
+      /** @description site elevation, m (sets air density) */
+      elevationM?: number;
+      /** @description inside relative humidity on the design night, % */
+      insideRelativeHumidityPct?: number;
+      /** @description inside temperature to hold, °C; default the house night heating setpoint */
+      insideC?: number;
+      /** @description credit a drawn curtain in the design loss; default false (heaters sized with the curtain open) */
+      curtainClosed?: boolean;
+    };
+    HouseHeatingEstimateRequestDto: {
+      conditions?: components['schemas']['PartialHeatingConditionsDto'];
+    };
+    HeatingConditionsUsedDto: {
+      /** @description °C */
+      designOutdoorC: number;
+      /** @description m */
+      elevationM: number;
+      /** @description % */
+      insideRelativeHumidityPct: number;
+      /** @description °C */
+      insideC: number;
+      curtainClosed: boolean;
+    };
+    HeatingConditionsSourceDto: {
+      /** @enum {string} */
+      designOutdoorC: 'farm climate' | 'request';
+      /** @enum {string} */
+      elevationM: 'farm' | 'request';
+      /** @enum {string} */
+      insideRelativeHumidityPct: 'reference data' | 'request';
+      /** @enum {string} */
+      insideC: 'house night setpoint' | 'request';
+      /** @enum {string} */
+      curtainClosed: 'default' | 'request';
+    };
+    HouseHeatingEstimateDto: {
+      geometry: components['schemas']['HouseGeometrySummaryDto'];
+      heatLoss: components['schemas']['HeatLossBreakdownDto'];
+      heater: components['schemas']['HeaterSizingDto'];
+      condensation: components['schemas']['CondensationDto'];
+      assumptions: components['schemas']['HeatingAssumptionDto'][];
+      /** @description safety and planning cautions, to show with the result; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
+      cautions: string[];
+      houseId: number;
+      conditionsUsed: components['schemas']['HeatingConditionsUsedDto'];
+      conditionsSource: components['schemas']['HeatingConditionsSourceDto'];
+    };
+    PartialCoolingConditionsDto: {
+      /**
+       * @description YYYY-MM-DD; hours of the result are local apparent solar time
+       * @example 2026-07-21
+       */
+      designDate?: string;
+      /** @description summer design dry bulb (the day’s maximum), °C */
+      summerDesignC?: number;
+      /** @description day’s maximum − minimum, K */
+      dailyRangeK?: number;
+      /** @description wet bulb coincident with the design dry bulb (not above it), °C */
+      summerDesignWetBulbC?: number;
+      /** @description allowed inlet-to-fan rise, K; default from reference data */
+      allowedTemperatureRiseK?: number;
+      /** @description peak light at plant height, lux; default from reference data */
+      peakInteriorLightLux?: number;
+      /** @description inlet (pad) wall to fans, m; default the house length */
+      padToFanDistanceM?: number;
+      /** @description share of transmitted solar heat taken up by transpiration; default from reference data */
+      transpirationFraction?: number;
+      /** @description evaporative pads on the inlet wall, or null for none */
+      evaporativePad?: components['schemas']['EvaporativePadDto'] | null;
+      /** @description winter design temperature for the humidity-ventilation heat cost, °C */
+      winterDesignC?: number;
+    };
+    HouseCoolingEstimateRequestDto: {
+      conditions?: components['schemas']['PartialCoolingConditionsDto'];
+    };
+    CoolingConditionsSourceDto: {
+      /** @enum {string} */
+      designDate: 'calendar default' | 'request';
+      /** @enum {string} */
+      summerDesignC: 'farm climate' | 'request';
+      /** @enum {string} */
+      dailyRangeK: 'farm climate' | 'request';
+      /** @enum {string} */
+      summerDesignWetBulbC: 'farm climate' | 'request';
+      /** @enum {string} */
+      allowedTemperatureRiseK: 'reference data' | 'request';
+      /** @enum {string} */
+      peakInteriorLightLux: 'reference data' | 'request';
+      /** @enum {string} */
+      padToFanDistanceM: 'house length' | 'request';
+      /** @enum {string} */
+      transpirationFraction: 'reference data' | 'request';
+      /** @enum {string} */
+      evaporativePad: 'none' | 'request';
+      /** @enum {string} */
+      winterDesignC: 'farm climate' | 'reference data' | 'request';
+    };
+    HouseCoolingEstimateDto: {
+      airExchange: components['schemas']['AirExchangeDto'];
+      capacity: components['schemas']['CoolingCapacityDto'];
+      designDay: components['schemas']['DesignDayDto'];
+      /** @description null without evaporative pads */
+      pads: components['schemas']['PadSizingDto'] | null;
+      staging: components['schemas']['StagingDto'];
+      winterVentilation: components['schemas']['WinterVentilationDto'];
+      assumptions: components['schemas']['CoolingAssumptionDto'][];
+      /** @description safety and planning cautions, to show with the result; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
+      cautions: string[];
+      houseId: number;
+      /** @description the farm’s position and elevation */
+      siteUsed: components['schemas']['CoolingSiteDto'];
+      /** @description what the engine ran with; optional values left out took the defaults listed in assumptions */
+      conditionsUsed: components['schemas']['CoolingConditionsDto'];
+      conditionsSource: components['schemas']['CoolingConditionsSourceDto'];
+    };
+    TemperatureLogClimateSourceDto: {
+      /** @description id of one of the farm’s temperature logs */
+      temperatureLogId: number;
+    };
+    SeasonRequestDto: {
+      /** @description 'normals' (default: the farm's monthly climate normals) or { temperatureLogId } to use a logged year instead */
+      climateSource?: 'normals' | components['schemas']['TemperatureLogClimateSourceDto'];
+      /** @description reference-data fuels id; default: the fuel of the house's first heater */
+      fuelId?: string;
+      /** @description money per purchase unit; default: the farm's price for the fuel */
+      pricePerUnit?: number;
+      /**
+       * @description unit the given pricePerUnit is per: 'si' (the fuel's unitSi, default) or 'us' (its unitUs)
+       * @enum {string}
+       */
+      priceUnit?: 'si' | 'us';
+      /** @description output ÷ input; default: the efficiency of the house's first heater burning the fuel */
+      heaterEfficiency?: number;
+      /**
+       * @description first day, YYYY-MM-DD; give both dates or neither. Default: the heating season in progress or, between seasons, the next one (1 Sep – 31 May north of the equator, 1 Mar – 30 Nov south); with a temperature log, the whole days the log covers (at most 366)
+       * @example 2026-09-01
+       */
+      startDate?: string;
+      /**
+       * @description last day (inclusive), YYYY-MM-DD; at most 366 days from startDate
+       * @example 2027-05-31
+       */
+      endDate?: string;
+    };
+    SeasonPeriodDto: {
+      /** @description YYYY-MM-DD */
+      startDate: string;
+      /** @description YYYY-MM-DD, inclusive */
+      endDate: string;
+      days: number;
+      /** @description days the production calendar heats */
+      heatedDays: number;
+    };
+    SeasonFuelDto: {
+      fuelId: string;
+      label: string;
+      /** @example L */
+      unitSi: string;
+      /** @example US gal */
+      unitUs: string;
+      pricePerUnit: number;
+      /** @enum {string} */
+      priceUnit: 'si' | 'us';
+      /** @description the unit the price is per, e.g. 'US gal' */
+      priceUnitLabel: string;
+      /** @description output ÷ input */
+      heaterEfficiency: number;
+    };
+    SeasonHeatLossDto: {
+      /** @description W/K */
+      uaCurtainOpenWPerK: number;
+      /** @description W/K (equals the open value without a curtain) */
+      uaCurtainClosedWPerK: number;
+      /** @description m² */
+      floorAreaM2: number;
+    };
+    SeasonMonthDto: {
+      /** @description heat delivered to the house, kWh */
+      energyKWh: number;
+      /** @description heat content of the fuel burnt (energy ÷ efficiency), kWh */
+      fuelInputKWh: number;
+      /** @description fuel in its SI purchase unit (the fuel's unitSi) */
+      fuelQuantitySi: number;
+      /** @description fuel in its US purchase unit (the fuel's unitUs) */
+      fuelQuantityUs: number;
+      /** @description money, in the currency of the price */
+      cost: number;
+      year: number;
+      month: number;
+      /** @description heated hours with any heat demand */
+      heatingHours: number;
+      /** @description highest hourly-average heat demand of the month, W */
+      peakW: number;
+      /** @description degree-days to the night setpoint, K·day */
+      degreeDaysKDay: number;
+      /** @description heat the installed heaters could not deliver, kWh */
+      unmetHeatKWh: number;
+      /** @description hours in which the heaters could not hold the setpoint */
+      hoursBelowSetpoint: number;
+    };
+    SeasonTotalDto: {
+      /** @description heat delivered to the house, kWh */
+      energyKWh: number;
+      /** @description heat content of the fuel burnt (energy ÷ efficiency), kWh */
+      fuelInputKWh: number;
+      /** @description fuel in its SI purchase unit (the fuel's unitSi) */
+      fuelQuantitySi: number;
+      /** @description fuel in its US purchase unit (the fuel's unitUs) */
+      fuelQuantityUs: number;
+      /** @description money, in the currency of the price */
+      cost: number;
+      heatingHours: number;
+      /** @description heat the installed heaters could not deliver, kWh */
+      unmetHeatKWh: number;
+      /** @description hours in which the heaters could not hold the setpoint */
+      hoursBelowSetpoint: number;
+    };
+    SeasonHeaterCapacityDto: {
+      /** @description Σ count × rated input × efficiency of the house’s heaters, W; heat delivered in an hour is capped at it */
+      installedOutputW: number;
+      /** @description heater units installed */
+      heaterCount: number;
+      /** @description set when the heaters cannot hold the setpoint in some hour; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
+      caution: string | null;
+    };
+    SeasonPeakDto: {
+      /** @description W */
+      heatW: number;
+      /** @description local standard time, YYYY-MM-DDTHH:MM */
+      at: string;
+      /** @description °C */
+      outdoorC: number;
+    };
+    DegreeDayStepDto: {
+      /** @enum {string} */
+      key: 'degree-day' | 'hourly-curve' | 'day-setpoint' | 'curtain' | 'sun' | 'heater-capacity';
+      label: string;
+      /** @description kWh */
+      energyKWh: number;
+      /** @description change from the previous step, kWh */
+      changeKWh: number;
+    };
+    DegreeDayCrossCheckDto: {
+      /** @description heat delivered to the house, kWh */
+      energyKWh: number;
+      /** @description heat content of the fuel burnt (energy ÷ efficiency), kWh */
+      fuelInputKWh: number;
+      /** @description fuel in its SI purchase unit (the fuel's unitSi) */
+      fuelQuantitySi: number;
+      /** @description fuel in its US purchase unit (the fuel's unitUs) */
+      fuelQuantityUs: number;
+      /** @description money, in the currency of the price */
+      cost: number;
+      /** @description the base each heated day is counted to; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
+      baseDescription: string;
+      /** @description the base when it is the same all season, else null, °C */
+      baseTemperatureC: number | null;
+      /** @description UA used (curtain open), W/K */
+      uaWPerK: number;
+      /** @description K·day */
+      degreeDaysKDay: number;
+      /** @description °F·day */
+      degreeDaysFDay: number;
+      /** @description hourly result ÷ degree-day result − 1 (null when the degree-day result is 0) */
+      hourlyDifferenceFraction: number | null;
+      /** @description from the degree-day figure to the hourly one, one effect at a time */
+      steps: components['schemas']['DegreeDayStepDto'][];
+      /** @description may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
+      explanation: string[];
+    };
+    SeasonAssumptionDto: {
+      key: string;
+      /** @description may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
+      label: string;
+      value: number | string;
+      unit: string;
+      source: string;
+      /** @enum {string} */
+      confidence: 'verified' | 'verified-secondary' | 'derived' | 'memory' | 'common-practice' | 'user-entered';
+      /** @description true where the user's own value replaced the reference value */
+      overridden: boolean;
+    };
+    SeasonInputsUsedDto: {
+      /** @enum {string} */
+      climateSource: 'normals' | 'temperature-log';
+      temperatureLogId: number | null;
+      temperatureLogName: string | null;
+      fuelId: string;
+      /** @enum {string} */
+      fuelFrom: 'request' | 'house-heater';
+      pricePerUnit: number;
+      /** @enum {string} */
+      priceUnit: 'si' | 'us';
+      /** @enum {string} */
+      priceFrom: 'request' | 'farm-fuel-prices';
+      heaterEfficiency: number;
+      /** @enum {string} */
+      heaterEfficiencyFrom: 'request' | 'house-heater';
+      /** @description the farm's IANA zone */
+      timeZone: string;
+      /** @description the zone's standard-time offset from UTC (daylight saving ignored), h */
+      utcOffsetHours: number;
+      startDate: string;
+      endDate: string;
+      /** @enum {string} */
+      seasonFrom: 'request' | 'default-heating-season' | 'temperature-log';
+      /** @description periods of the house's production calendar (0 = heated all season at the house setpoints) */
+      calendarPeriodCount: number;
+    };
+    HouseSeasonEstimateDto: {
+      period: components['schemas']['SeasonPeriodDto'];
+      fuel: components['schemas']['SeasonFuelDto'];
+      heatLoss: components['schemas']['SeasonHeatLossDto'];
+      /** @description one row per calendar month the season touches */
+      monthly: components['schemas']['SeasonMonthDto'][];
+      total: components['schemas']['SeasonTotalDto'];
+      heaterCapacity: components['schemas']['SeasonHeaterCapacityDto'];
+      /** @description the hour of highest heat demand; null if no heat was needed */
+      peak: components['schemas']['SeasonPeakDto'] | null;
+      /** @description share of the season's heat delivered at night (sunset to sunrise) */
+      nightShareOfHeat: number;
+      /** @description heat the sun supplied in place of the heater, kWh */
+      solarOffsetKWh: number;
+      degreeDays: components['schemas']['DegreeDayCrossCheckDto'];
+      assumptions: components['schemas']['SeasonAssumptionDto'][];
+      /** @description combustion / electrical safety cautions; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
+      cautions: string[];
+      houseId: number;
+      inputsUsed: components['schemas']['SeasonInputsUsedDto'];
+    };
+    NightDemandRequestDto: {
+      /** @description 'normals' (default: the farm's monthly climate normals) or { temperatureLogId } to use a logged year instead */
+      climateSource?: 'normals' | components['schemas']['TemperatureLogClimateSourceDto'];
+      /** @description reference-data fuels id; default: the fuel of the house's first heater */
+      fuelId?: string;
+      /** @description money per purchase unit; default: the farm's price for the fuel */
+      pricePerUnit?: number;
+      /**
+       * @description unit the given pricePerUnit is per: 'si' (the fuel's unitSi, default) or 'us' (its unitUs)
+       * @enum {string}
+       */
+      priceUnit?: 'si' | 'us';
+      /** @description output ÷ input; default: the efficiency of the house's first heater burning the fuel */
+      heaterEfficiency?: number;
+      /**
+       * @description the evening the night begins, YYYY-MM-DD
+       * @example 2027-01-15
+       */
+      date: string;
+      /** @description °C; default: the house's night setpoint */
+      nightSetpointC?: number;
+    };
+    NightHourDto: {
+      /** @description start of the hour, local standard time */
+      at: string;
+      /** @description °C */
+      outdoorC: number;
+      /** @description share of the hour after sunset / before sunrise */
+      nightShare: number;
+      /** @description average heat demand over the hour's night share, W */
+      heatW: number;
+      /** @description heat the heaters deliver (at most their installed output), W */
+      deliveredW: number;
+      /** @description true when the heaters cannot hold the night setpoint this hour */
+      belowSetpoint: boolean;
+    };
+    SeasonRunInputsDto: {
+      /** @enum {string} */
+      climateSource: 'normals' | 'temperature-log';
+      temperatureLogId: number | null;
+      temperatureLogName: string | null;
+      fuelId: string;
+      /** @enum {string} */
+      fuelFrom: 'request' | 'house-heater';
+      pricePerUnit: number;
+      /** @enum {string} */
+      priceUnit: 'si' | 'us';
+      /** @enum {string} */
+      priceFrom: 'request' | 'farm-fuel-prices';
+      heaterEfficiency: number;
+      /** @enum {string} */
+      heaterEfficiencyFrom: 'request' | 'house-heater';
+      /** @description the farm's IANA zone */
+      timeZone: string;
+      /** @description the zone's standard-time offset from UTC (daylight saving ignored), h */
+      utcOffsetHours: number;
+    };
+    HouseNightDemandDto: {
+      /** @description heat delivered to the house, kWh */
+      energyKWh: number;
+      /** @description heat content of the fuel burnt (energy ÷ efficiency), kWh */
+      fuelInputKWh: number;
+      /** @description fuel in its SI purchase unit (the fuel's unitSi) */
+      fuelQuantitySi: number;
+      /** @description fuel in its US purchase unit (the fuel's unitUs) */
+      fuelQuantityUs: number;
+      /** @description money, in the currency of the price */
+      cost: number;
+      houseId: number;
+      /** @description the evening the night begins, YYYY-MM-DD */
+      date: string;
+      /** @description local standard time; null where the sun does not set */
+      sunset: string | null;
+      /** @description next morning, local standard time; null where the sun does not rise */
+      sunrise: string | null;
+      /** @description h */
+      nightHours: number;
+      /** @description °C */
+      nightSetpointC: number;
+      /** @description UA with the curtain drawn (if any), W/K */
+      uaWPerK: number;
+      /** @description highest hourly heat demand, W */
+      peakW: number;
+      /** @description coldest night hour, °C */
+      minOutdoorC: number | null;
+      /** @description installed heater output, W */
+      installedOutputW: number;
+      /** @description heat the heaters could not deliver, kWh */
+      unmetHeatKWh: number;
+      /** @description night hours in which the heaters cannot hold the setpoint */
+      hoursBelowSetpoint: number;
+      /** @description set when some hour cannot be held; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
+      capacityCaution: string | null;
+      hourly: components['schemas']['NightHourDto'][];
+      /** @description may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
+      cautions: string[];
+      inputsUsed: components['schemas']['SeasonRunInputsDto'];
+    };
+    MeasureFuelPriceDto: {
+      /** @description reference-data fuels id */
+      fuelId: string;
+      /** @description without a price the fuel switch is reported as not applicable */
+      pricePerUnit?: number;
+      /**
+       * @description needed with a price
+       * @enum {string}
+       */
+      priceUnit?: 'si' | 'us';
+    };
+    MeasureDto: {
+      /** @enum {string} */
+      kind:
+        | 'second-poly-layer'
+        | 'thermal-curtain'
+        | 'perimeter-insulation'
+        | 'sealing'
+        | 'night-setpoint-lower'
+        | 'later-start'
+        | 'heater-efficiency'
+        | 'fuel-switch';
+      /** @description what the measure costs, same currency as the fuel price; omit (or null) when not known yet: the payback then asks for it */
+      costAmount?: number | null;
+      label?: string;
+      /** @description second-poly-layer: surfaces to cover */
+      surfaces?: ('roof' | 'sidewalls')[];
+      /** @description second-poly-layer: the coverings id the surfaces become */
+      coveringId?: string;
+      /** @description thermal-curtain: curtains id */
+      curtainId?: string;
+      /** @description sealing: air-leakage class to reach */
+      airLeakageClassId?: string;
+      /** @description sealing: measured air changes per hour after sealing */
+      airChangesPerHour?: number;
+      /** @description night-setpoint-lower: K (0 is accepted and reported as not applicable) */
+      lowerByK?: number;
+      /** @description later-start: days */
+      delayDays?: number;
+      /** @description heater-efficiency / fuel-switch: efficiency of the new heaters */
+      efficiency?: number;
+      /** @description fuel-switch: the new fuel and its price (without it the measure is reported as not applicable) */
+      fuel?: components['schemas']['MeasureFuelPriceDto'];
+    };
+    MeasuresRequestDto: {
+      /** @description 'normals' (default: the farm's monthly climate normals) or { temperatureLogId } to use a logged year instead */
+      climateSource?: 'normals' | components['schemas']['TemperatureLogClimateSourceDto'];
+      /** @description reference-data fuels id; default: the fuel of the house's first heater */
+      fuelId?: string;
+      /** @description money per purchase unit; default: the farm's price for the fuel */
+      pricePerUnit?: number;
+      /**
+       * @description unit the given pricePerUnit is per: 'si' (the fuel's unitSi, default) or 'us' (its unitUs)
+       * @enum {string}
+       */
+      priceUnit?: 'si' | 'us';
+      /** @description output ÷ input; default: the efficiency of the house's first heater burning the fuel */
+      heaterEfficiency?: number;
+      /**
+       * @description first day, YYYY-MM-DD; give both dates or neither. Default: the heating season in progress or, between seasons, the next one (1 Sep – 31 May north of the equator, 1 Mar – 30 Nov south); with a temperature log, the whole days the log covers (at most 366)
+       * @example 2026-09-01
+       */
+      startDate?: string;
+      /**
+       * @description last day (inclusive), YYYY-MM-DD; at most 366 days from startDate
+       * @example 2027-05-31
+       */
+      endDate?: string;
+      /** @description measures to compare; an empty list compares the default measures (reference-data/measures.json) that apply to the house, without costs, so a ranking shows at once */
+      measures: components['schemas']['MeasureDto'][];
+    };
+    MeasureSeasonDto: {
+      /** @description heat delivered to the house, kWh */
+      energyKWh: number;
+      /** @description heat content of the fuel burnt (energy ÷ efficiency), kWh */
+      fuelInputKWh: number;
+      /** @description fuel in its SI purchase unit (the fuel's unitSi) */
+      fuelQuantitySi: number;
+      /** @description fuel in its US purchase unit (the fuel's unitUs) */
+      fuelQuantityUs: number;
+      /** @description money, in the currency of the price */
+      cost: number;
+      fuelId: string;
+      unitSi: string;
+      unitUs: string;
+    };
+    MeasureLightChangeDto: {
+      /** @enum {string} */
+      surface: 'roof' | 'sidewalls';
+      /** @description light transmittance before, 0–1 */
+      before: number;
+      /** @description light transmittance after, 0–1 */
+      after: number;
+      /** @description relative change of light reaching the crop, e.g. −0.11 for 11 % less */
+      relativeChange: number;
+      source: string;
+    };
+    MeasureResultDto: {
+      /** @description position in the request list (or in the default list) */
+      index: number;
+      /** @enum {string} */
+      kind:
+        | 'second-poly-layer'
+        | 'thermal-curtain'
+        | 'perimeter-insulation'
+        | 'sealing'
+        | 'night-setpoint-lower'
+        | 'later-start'
+        | 'heater-efficiency'
+        | 'fuel-switch';
+      label: string;
+      /** @description what changed, in words; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
+      description: string;
+      /** @description null when no cost was entered */
+      costAmount: number | null;
+      /** @description false when the measure changes nothing for this house (already done, or no better than what it has) */
+      applicable: boolean;
+      /** @description why the measure does not apply, in plain words; null when it applies; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
+      notApplicableReason: string | null;
+      /** @description the season with the measure (the house as it is when the measure does not apply) */
+      season: components['schemas']['MeasureSeasonDto'];
+      /** @description heat the house no longer needs, kWh per season (0 for heater or fuel changes) */
+      heatSavedKWh: number;
+      /** @description fuel energy no longer bought, kWh per season */
+      fuelInputSavedKWh: number;
+      /** @description in the baseline fuel's unitSi; null when the measure burns another fuel */
+      fuelSavedSi: number | null;
+      /** @description in the baseline fuel's unitUs */
+      fuelSavedUs: number | null;
+      /** @description money saved per season (= per year with one season a year); negative when it costs more to run */
+      yearlyMoneySaved: number;
+      /**
+       * @description 'years': cost ÷ saving; 'immediate': cost 0 and a saving; 'enter-cost': a saving but no cost entered; 'never': no money saved; 'not-applicable': changes nothing for this house
+       * @enum {string}
+       */
+      paybackStatus: 'years' | 'immediate' | 'enter-cost' | 'never' | 'not-applicable';
+      /** @description cost ÷ yearly money saved, years (0 when 'immediate'); null for the other statuses */
+      paybackYears: number | null;
+      /**
+       * @description '2.4 years', 'immediately', 'enter a cost', 'never' or 'not applicable'
+       * @example 2.4 years
+       */
+      paybackText: string;
+      /** @description light change for measures that add a layer or a screen */
+      lightChange: components['schemas']['MeasureLightChangeDto'] | null;
+      /** @description may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
+      notes: string[];
+    };
+    MeasureComparisonDto: {
+      houseId: number;
+      /** @description the season of the house as it is */
+      baseline: components['schemas']['MeasureSeasonDto'];
+      /** @description shortest payback first (equal paybacks: larger saving first), then measures without a cost, then those that never pay back, then those that do not apply */
+      measures: components['schemas']['MeasureResultDto'][];
+      /** @description true when the request listed no measures and the default measures that apply to the house were compared without costs */
+      defaultsUsed: boolean;
+      /** @description may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
+      notes: string[];
+      inputsUsed: components['schemas']['SeasonInputsUsedDto'];
+    };
+    ProductionPeriodDto: {
+      /**
+       * @description first day, 'MM-DD'
+       * @example 11-15
+       */
+      startMonthDay: string;
+      /**
+       * @description last day (inclusive), 'MM-DD'; may wrap the year end
+       * @example 03-31
+       */
+      endMonthDay: string;
+      /** @enum {string} */
+      mode: 'heated' | 'empty';
+      /** @description replaces the house's day heating setpoint in this period, °C */
+      dayHeatingC?: number;
+      /** @description replaces the house's night heating setpoint in this period, °C */
+      nightHeatingC?: number;
+      /** @example Spring bedding crop */
+      label?: string;
+    };
+    ProductionCalendarDto: {
+      /** @description empty list = heated all season at the house setpoints; otherwise days no period covers are unheated, and where periods overlap the later one wins */
+      periods: components['schemas']['ProductionPeriodDto'][];
+      houseId: number;
+    };
+    PutProductionCalendarDto: {
+      /** @description empty list = heated all season at the house setpoints; otherwise days no period covers are unheated, and where periods overlap the later one wins */
+      periods: components['schemas']['ProductionPeriodDto'][];
+    };
+    FuelPriceDto: {
+      /** @description reference-data fuels id (one price per fuel) */
+      fuelId: string;
+      /** @description money per purchase unit */
+      pricePerUnit: number;
+      /**
+       * @description 'si': per the fuel's unitSi (m³, L, kg, kWh); 'us': per its unitUs (therm, US gal, short ton, kWh)
+       * @enum {string}
+       */
+      priceUnit: 'si' | 'us';
+      /** @description where the price came from (supplier, contract, date) */
+      note?: string | null;
+      /** @example Propane */
+      fuelLabel: string;
+      /**
+       * @description the unit the price is per
+       * @example US gal
+       */
+      priceUnitLabel: string;
+    };
+    FarmFuelPricesDto: {
+      farmId: number;
+      prices: components['schemas']['FuelPriceDto'][];
+    };
+    FuelPriceInputDto: {
+      /** @description reference-data fuels id (one price per fuel) */
+      fuelId: string;
+      /** @description money per purchase unit */
+      pricePerUnit: number;
+      /**
+       * @description 'si': per the fuel's unitSi (m³, L, kg, kWh); 'us': per its unitUs (therm, US gal, short ton, kWh)
+       * @enum {string}
+       */
+      priceUnit: 'si' | 'us';
+      /** @description where the price came from (supplier, contract, date) */
+      note?: string | null;
+    };
+    PutFuelPricesDto: {
+      /** @description replaces every price of the farm */
+      prices: components['schemas']['FuelPriceInputDto'][];
+    };
+    SeasonBudgetRequestDto: {
+      /**
+       * @description first day, YYYY-MM-DD (default as for a house season)
+       * @example 2026-09-01
+       */
+      startDate?: string;
+      /**
+       * @description last day (inclusive), YYYY-MM-DD
+       * @example 2027-05-31
+       */
+      endDate?: string;
+      /** @description 'normals' (default: the farm's monthly climate normals) or { temperatureLogId } to use a logged year instead */
+      climateSource?: 'normals' | components['schemas']['TemperatureLogClimateSourceDto'];
+    };
+    BudgetMonthOfHouseDto: {
+      year: number;
+      month: number;
+      /** @description heat delivered, kWh */
+      energyKWh: number;
+      /** @description fuel burnt, kWh */
+      fuelInputKWh: number;
+      fuelQuantitySi: number;
+      fuelQuantityUs: number;
+      /** @description null when the farm has no price for the fuel */
+      cost: number | null;
+      /** @description heat the heaters could not deliver, kWh */
+      unmetHeatKWh: number;
+      /** @description hours in which the heaters could not hold the setpoint */
+      hoursBelowSetpoint: number;
+    };
+    BudgetHouseDto: {
+      houseId: number;
+      name: string;
+      /** @description fuel of the first heater; null when the house has no heaters */
+      fuelId: string | null;
+      fuelLabel: string | null;
+      unitSi: string | null;
+      unitUs: string | null;
+      heaterEfficiency: number | null;
+      pricePerUnit: number | null;
+      /** @enum {string|null} */
+      priceUnit: 'si' | 'us' | null;
+      /** @description heat delivered, kWh */
+      energyKWh: number;
+      /** @description fuel burnt, kWh */
+      fuelInputKWh: number;
+      /** @description in the fuel's unitSi */
+      fuelQuantitySi: number;
+      /** @description in the fuel's unitUs */
+      fuelQuantityUs: number;
+      /** @description null when the farm has no price for the fuel */
+      cost: number | null;
+      heatedDays: number;
+      /** @description periods of the house's production calendar (0 = heated all season) */
+      calendarPeriodCount: number;
+      /** @description heat the house's heaters could not deliver, kWh */
+      unmetHeatKWh: number;
+      /** @description hours in which the heaters could not hold the setpoint */
+      hoursBelowSetpoint: number;
+      /** @description set when the heaters cannot hold the setpoint in some hour; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
+      capacityCaution: string | null;
+      monthly: components['schemas']['BudgetMonthOfHouseDto'][];
+      /** @description why the house is not (fully) budgeted, e.g. no heaters or no price */
+      problem: string | null;
+    };
+    BudgetFuelTotalDto: {
+      fuelId: string;
+      label: string;
+      unitSi: string;
+      unitUs: string;
+      houseCount: number;
+      /** @description kWh */
+      energyKWh: number;
+      /** @description kWh */
+      fuelInputKWh: number;
+      fuelQuantitySi: number;
+      fuelQuantityUs: number;
+      /** @description null when the farm has no price for the fuel */
+      cost: number | null;
+    };
+    BudgetMonthFuelDto: {
+      fuelId: string;
+      fuelQuantitySi: number;
+      fuelQuantityUs: number;
+    };
+    BudgetMonthDto: {
+      year: number;
+      month: number;
+      /** @description heat delivered to all houses, kWh */
+      energyKWh: number;
+      /** @description kWh */
+      fuelInputKWh: number;
+      /** @description cost of the priced fuels */
+      cost: number;
+      byFuel: components['schemas']['BudgetMonthFuelDto'][];
+    };
+    SeasonBudgetDto: {
+      farmId: number;
+      startDate: string;
+      endDate: string;
+      /** @enum {string} */
+      seasonFrom: 'request' | 'default-heating-season' | 'temperature-log';
+      /** @enum {string} */
+      climateSource: 'normals' | 'temperature-log';
+      temperatureLogId: number | null;
+      houses: components['schemas']['BudgetHouseDto'][];
+      byFuel: components['schemas']['BudgetFuelTotalDto'][];
+      /** @description heat delivered to all houses, kWh */
+      totalEnergyKWh: number;
+      /** @description sum of the priced houses */
+      totalCost: number;
+      /** @description false when some house has no price (or no heaters) and is left out of totalCost */
+      costComplete: boolean;
+      monthly: components['schemas']['BudgetMonthDto'][];
+      /** @description may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
+      notes: string[];
+      /** @description may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
+      cautions: string[];
+    };
+    ColumnProposalDto: {
+      /** @description one column holding date and time (or the date alone in a daily file) */
+      timestampColumn: string | null;
+      /** @description separate date column, when the file splits date and time */
+      dateColumn: string | null;
+      /** @description separate time-of-day column */
+      timeColumn: string | null;
+      /** @description the (mean) temperature; null when a daily file has only minimum and maximum */
+      temperatureColumn: string | null;
+      minColumn: string | null;
+      maxColumn: string | null;
+      /** @enum {string} */
+      unit: 'C' | 'F';
+      /** @description why the unit was guessed, in words */
+      unitReason: string;
+      /** @enum {string} */
+      resolution: 'hourly' | 'daily';
+      /**
+       * @description order of day, month and year in dates with the year last
+       * @enum {string}
+       */
+      dateOrder: 'YMD' | 'MDY' | 'DMY';
+      /** @description true when day-first and month-first both fit the dates seen; the user should confirm */
+      dateOrderAmbiguous: boolean;
+      /** @description numbers are written with a decimal comma */
+      decimalComma: boolean;
+    };
+    TemperatureCsvInspectionDto: {
+      /**
+       * @description ',' ';' or a tab
+       * @enum {string}
+       */
+      delimiter: ',' | ';' | '\t';
+      hasHeader: boolean;
+      /** @description column names (from the header, or 'Column 1', 'Column 2' … without one) */
+      headers: string[];
+      /** @description the first data rows as they appear */
+      sampleRows: string[][];
+      /** @description data rows in the file */
+      dataRowCount: number;
+      proposal: components['schemas']['ColumnProposalDto'];
+      notes: string[];
+    };
+    TemperatureLogDto: {
+      id: number;
+      farmId: number;
+      name: string;
+      /** @enum {string} */
+      resolution: 'hourly' | 'daily';
+      /** @description first reading's date, YYYY-MM-DD */
+      startDate: string;
+      /** @description last reading's date, YYYY-MM-DD */
+      endDate: string;
+      /** @description data rows in the file */
+      rowCount: number;
+      /** @description readings kept (rows without any temperature are skipped) */
+      readingCount: number;
+      /** Format: date-time */
+      createdAt: string;
+    };
+    TemperatureColumnMappingDto: {
+      timestampColumn?: string | null;
+      dateColumn?: string | null;
+      timeColumn?: string | null;
+      temperatureColumn?: string | null;
+      minColumn?: string | null;
+      maxColumn?: string | null;
+      /** @enum {string} */
+      unit: 'C' | 'F';
+      /**
+       * @description inferred from the times when absent
+       * @enum {string}
+       */
+      resolution?: 'hourly' | 'daily';
+      /** @enum {string} */
+      dateOrder?: 'YMD' | 'MDY' | 'DMY';
+      decimalComma?: boolean;
+      /**
+       * @description detected when absent
+       * @enum {string}
+       */
+      delimiter?: ',' | ';' | '\t';
+      /** @description detected when absent */
+      hasHeader?: boolean;
+    };
+    TemperatureLogDayDto: {
+      /** @description YYYY-MM-DD (as logged) */
+      date: string;
+      /** @description lowest reading (hourly) or the logged minimum (daily), °C; null for a daily log with means only */
+      minC: number | null;
+      /** @description mean of the readings (hourly) or the logged temperature (daily), °C */
+      meanC: number;
+      /** @description °C */
+      maxC: number | null;
+      /** @description readings that day */
+      readingCount: number;
+    };
+    TemperatureLogDetailDto: {
+      id: number;
+      farmId: number;
+      name: string;
+      /** @enum {string} */
+      resolution: 'hourly' | 'daily';
+      /** @description first reading's date, YYYY-MM-DD */
+      startDate: string;
+      /** @description last reading's date, YYYY-MM-DD */
+      endDate: string;
+      /** @description data rows in the file */
+      rowCount: number;
+      /** @description readings kept (rows without any temperature are skipped) */
+      readingCount: number;
+      /** Format: date-time */
+      createdAt: string;
+      /** @description how the file was read */
+      mapping: components['schemas']['TemperatureColumnMappingDto'];
+      days: components['schemas']['TemperatureLogDayDto'][];
+    };
+  };
+  responses: never;
+  parameters: never;
+  requestBodies: never;
+  headers: never;
+  pathItems: never;
 }
 export type $defs = Record<string, never>;
 export interface operations {
-    HealthController_health: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        requestBody?: never;
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["HealthDto"];
-                };
-            };
-        };
+  HealthController_health: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    ReferenceDataController_all: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
         };
-        requestBody?: never;
-        responses: {
-            /** @description Every handbook table by name: { title, description, rows: [{ id, label, source, confidence, ...values }] } */
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": {
-                        [key: string]: {
-                            title: string;
-                            description?: string;
-                            rows: ({
-                                id: string;
-                                label?: string;
-                                source: string;
-                                /** @enum {string} */
-                                confidence: "verified" | "verified-secondary" | "derived" | "memory" | "common-practice";
-                                notes?: string;
-                            } & {
-                                [key: string]: unknown;
-                            })[];
-                        };
-                    };
-                };
-            };
+        content: {
+          'application/json': components['schemas']['HealthDto'];
         };
+      };
     };
-    UsersController_updateMe: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        requestBody: {
-            content: {
-                "application/json": components["schemas"]["UpdateMeDto"];
-            };
-        };
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["UserDto"];
-                };
-            };
-        };
+  };
+  ReferenceDataController_all: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    UsersController_list: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
+    requestBody?: never;
+    responses: {
+      /** @description Every handbook table by name: { title, description, rows: [{ id, label, source, confidence, ...values }] } */
+      200: {
+        headers: {
+          [name: string]: unknown;
         };
-        requestBody?: never;
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["UserDto"][];
-                };
+        content: {
+          'application/json': {
+            [key: string]: {
+              title: string;
+              description?: string;
+              rows: ({
+                id: string;
+                label?: string;
+                source: string;
+                /** @enum {string} */
+                confidence: 'verified' | 'verified-secondary' | 'derived' | 'memory' | 'common-practice';
+                notes?: string;
+              } & {
+                [key: string]: unknown;
+              })[];
             };
+          };
         };
+      };
     };
-    UsersController_remove: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                id: number;
-            };
-            cookie?: never;
-        };
-        requestBody?: never;
-        responses: {
-            204: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
-        };
+  };
+  UsersController_updateMe: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    UsersController_update: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                id: number;
-            };
-            cookie?: never;
-        };
-        requestBody: {
-            content: {
-                "application/json": components["schemas"]["AdminUpdateUserDto"];
-            };
-        };
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["UserDto"];
-                };
-            };
-        };
+    requestBody: {
+      content: {
+        'application/json': components['schemas']['UpdateMeDto'];
+      };
     };
-    AuthController_register: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
         };
-        requestBody: {
-            content: {
-                "application/json": components["schemas"]["RegisterDto"];
-            };
+        content: {
+          'application/json': components['schemas']['UserDto'];
         };
-        responses: {
-            201: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["SessionDto"];
-                };
-            };
-        };
+      };
     };
-    AuthController_login: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        requestBody: {
-            content: {
-                "application/json": components["schemas"]["LoginDto"];
-            };
-        };
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["SessionDto"];
-                };
-            };
-            /** @description Too many sign-in attempts from this address */
-            429: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
-        };
+  };
+  UsersController_list: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    AuthController_logout: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
         };
-        requestBody?: never;
-        responses: {
-            204: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
+        content: {
+          'application/json': components['schemas']['UserDto'][];
         };
+      };
     };
-    AuthController_me: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        requestBody?: never;
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["UserDto"];
-                };
-            };
-        };
+  };
+  UsersController_remove: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        id: number;
+      };
+      cookie?: never;
     };
-    AuthController_demoAccounts: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
+    requestBody?: never;
+    responses: {
+      204: {
+        headers: {
+          [name: string]: unknown;
         };
-        requestBody?: never;
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["DemoAccountsDto"];
-                };
-            };
-        };
+        content?: never;
+      };
     };
-    FarmsController_permissions: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        requestBody?: never;
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["PermissionsDto"];
-                };
-            };
-        };
+  };
+  UsersController_update: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        id: number;
+      };
+      cookie?: never;
     };
-    FarmsController_list: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        requestBody?: never;
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["FarmDto"][];
-                };
-            };
-        };
+    requestBody: {
+      content: {
+        'application/json': components['schemas']['AdminUpdateUserDto'];
+      };
     };
-    FarmsController_create: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
         };
-        requestBody: {
-            content: {
-                "application/json": components["schemas"]["CreateFarmDto"];
-            };
+        content: {
+          'application/json': components['schemas']['UserDto'];
         };
-        responses: {
-            201: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["FarmDto"];
-                };
-            };
-        };
+      };
     };
-    FarmsController_get: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                farmId: number;
-            };
-            cookie?: never;
-        };
-        requestBody?: never;
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["FarmDto"];
-                };
-            };
-        };
+  };
+  AuthController_register: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    FarmsController_remove: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                farmId: number;
-            };
-            cookie?: never;
-        };
-        requestBody?: never;
-        responses: {
-            204: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
-        };
+    requestBody: {
+      content: {
+        'application/json': components['schemas']['RegisterDto'];
+      };
     };
-    FarmsController_update: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                farmId: number;
-            };
-            cookie?: never;
+    responses: {
+      201: {
+        headers: {
+          [name: string]: unknown;
         };
-        requestBody: {
-            content: {
-                "application/json": components["schemas"]["UpdateFarmDto"];
-            };
+        content: {
+          'application/json': components['schemas']['SessionDto'];
         };
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["FarmDto"];
-                };
-            };
-        };
+      };
     };
-    FarmsController_members: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                farmId: number;
-            };
-            cookie?: never;
-        };
-        requestBody?: never;
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["MemberDto"][];
-                };
-            };
-        };
+  };
+  AuthController_login: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    FarmsController_addMember: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                farmId: number;
-            };
-            cookie?: never;
-        };
-        requestBody: {
-            content: {
-                "application/json": components["schemas"]["AddMemberDto"];
-            };
-        };
-        responses: {
-            201: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["MemberDto"];
-                };
-            };
-        };
+    requestBody: {
+      content: {
+        'application/json': components['schemas']['LoginDto'];
+      };
     };
-    FarmsController_removeMember: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                farmId: number;
-                userId: number;
-            };
-            cookie?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
         };
-        requestBody?: never;
-        responses: {
-            204: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
+        content: {
+          'application/json': components['schemas']['SessionDto'];
         };
+      };
+      /** @description Too many sign-in attempts from this address */
+      429: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
     };
-    FarmsController_updateMember: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                farmId: number;
-                userId: number;
-            };
-            cookie?: never;
-        };
-        requestBody: {
-            content: {
-                "application/json": components["schemas"]["UpdateMemberDto"];
-            };
-        };
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["MemberDto"];
-                };
-            };
-        };
+  };
+  AuthController_logout: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    HousesController_list: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                farmId: number;
-            };
-            cookie?: never;
+    requestBody?: never;
+    responses: {
+      204: {
+        headers: {
+          [name: string]: unknown;
         };
-        requestBody?: never;
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["HouseDto"][];
-                };
-            };
-        };
+        content?: never;
+      };
     };
-    HousesController_create: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                farmId: number;
-            };
-            cookie?: never;
-        };
-        requestBody: {
-            content: {
-                "application/json": components["schemas"]["CreateHouseDto"];
-            };
-        };
-        responses: {
-            201: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["HouseDto"];
-                };
-            };
-            /** @description dimensions the engine cannot compute with, or an unknown reference id */
-            422: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
-        };
+  };
+  AuthController_me: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    HousesController_get: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                houseId: number;
-            };
-            cookie?: never;
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
         };
-        requestBody?: never;
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["HouseDto"];
-                };
-            };
+        content: {
+          'application/json': components['schemas']['UserDto'];
         };
+      };
     };
-    HousesController_remove: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                houseId: number;
-            };
-            cookie?: never;
-        };
-        requestBody?: never;
-        responses: {
-            204: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
-        };
+  };
+  AuthController_demoAccounts: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    HousesController_update: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                houseId: number;
-            };
-            cookie?: never;
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
         };
-        requestBody: {
-            content: {
-                "application/json": components["schemas"]["UpdateHouseDto"];
-            };
+        content: {
+          'application/json': components['schemas']['DemoAccountsDto'];
         };
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["HouseDto"];
-                };
-            };
-        };
+      };
     };
-    ClimateController_get: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                farmId: number;
-            };
-            cookie?: never;
-        };
-        requestBody?: never;
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["FarmClimateDto"];
-                };
-            };
-        };
+  };
+  FarmsController_permissions: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    ClimateController_put: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                farmId: number;
-            };
-            cookie?: never;
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
         };
-        requestBody: {
-            content: {
-                "application/json": components["schemas"]["SiteClimateDto"];
-            };
+        content: {
+          'application/json': components['schemas']['PermissionsDto'];
         };
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["FarmClimateDto"];
-                };
-            };
-            /** @description physically impossible climate (e.g. minimum above maximum), field named */
-            422: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
-        };
+      };
     };
-    EstimatesController_heating: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        requestBody: {
-            content: {
-                "application/json": components["schemas"]["HeatingEstimateRequestDto"];
-            };
-        };
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["HeatingEstimateDto"];
-                };
-            };
-            /** @description body fails validation; details per field */
-            400: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
-            /** @description the engine cannot compute with the input (e.g. ridge below eave, unknown reference id); field named */
-            422: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
-        };
+  };
+  FarmsController_list: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    EstimatesController_cooling: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
         };
-        requestBody: {
-            content: {
-                "application/json": components["schemas"]["CoolingEstimateRequestDto"];
-            };
+        content: {
+          'application/json': components['schemas']['FarmDto'][];
         };
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["CoolingEstimateDto"];
-                };
-            };
-            /** @description body fails validation; details per field */
-            400: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
-            /** @description the engine cannot compute with the input (e.g. ridge below eave, unknown reference id); field named */
-            422: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
-        };
+      };
     };
-    EstimatesController_heatingForHouse: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                houseId: number;
-            };
-            cookie?: never;
-        };
-        requestBody: {
-            content: {
-                "application/json": components["schemas"]["HouseHeatingEstimateRequestDto"];
-            };
-        };
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["HouseHeatingEstimateDto"];
-                };
-            };
-            /** @description role lacks estimate:run */
-            403: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
-            /** @description no such house, or not a member of its farm */
-            404: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
-            /** @description the engine cannot compute with the input (e.g. ridge below eave, unknown reference id); field named; also when the farm has no climate and no designOutdoorC is given */
-            422: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
-        };
+  };
+  FarmsController_create: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    EstimatesController_coolingForHouse: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                houseId: number;
-            };
-            cookie?: never;
-        };
-        requestBody: {
-            content: {
-                "application/json": components["schemas"]["HouseCoolingEstimateRequestDto"];
-            };
-        };
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["HouseCoolingEstimateDto"];
-                };
-            };
-            /** @description role lacks estimate:run */
-            403: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
-            /** @description no such house, or not a member of its farm */
-            404: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
-            /** @description the engine cannot compute with the input (e.g. ridge below eave, unknown reference id); field named; also when the farm has no climate and the summer design values are not given */
-            422: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
-        };
+    requestBody: {
+      content: {
+        'application/json': components['schemas']['CreateFarmDto'];
+      };
     };
-    SeasonController_seasonOfHouse: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                houseId: number;
-            };
-            cookie?: never;
+    responses: {
+      201: {
+        headers: {
+          [name: string]: unknown;
         };
-        requestBody: {
-            content: {
-                "application/json": components["schemas"]["SeasonRequestDto"];
-            };
+        content: {
+          'application/json': components['schemas']['FarmDto'];
         };
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["HouseSeasonEstimateDto"];
-                };
-            };
-            /** @description body fails validation; details per field */
-            400: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
-            /** @description role lacks estimate:run */
-            403: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
-            /** @description no such house, or not a member of its farm */
-            404: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
-            /** @description the engine cannot compute with the input, field named: no climate and no log (climateSource), no fuel price (pricePerUnit), a log that does not cover the dates (climateSource), a season over 366 days (endDate) … */
-            422: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
-        };
+      };
     };
-    SeasonController_nightDemand: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                houseId: number;
-            };
-            cookie?: never;
-        };
-        requestBody: {
-            content: {
-                "application/json": components["schemas"]["NightDemandRequestDto"];
-            };
-        };
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["HouseNightDemandDto"];
-                };
-            };
-            /** @description body fails validation; details per field */
-            400: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
-            /** @description role lacks estimate:run */
-            403: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
-            /** @description no such house, or not a member of its farm */
-            404: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
-            /** @description the engine cannot compute with the input, field named: no climate and no log (climateSource), no fuel price (pricePerUnit), a log that does not cover the dates (climateSource), a season over 366 days (endDate) … */
-            422: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
-        };
+  };
+  FarmsController_get: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        farmId: number;
+      };
+      cookie?: never;
     };
-    SeasonController_measures: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                houseId: number;
-            };
-            cookie?: never;
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
         };
-        requestBody: {
-            content: {
-                "application/json": components["schemas"]["MeasuresRequestDto"];
-            };
+        content: {
+          'application/json': components['schemas']['FarmDto'];
         };
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["MeasureComparisonDto"];
-                };
-            };
-            /** @description body fails validation; details per field */
-            400: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
-            /** @description role lacks estimate:run */
-            403: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
-            /** @description no such house, or not a member of its farm */
-            404: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
-            /** @description the engine cannot compute with the input, field named: no climate and no log (climateSource), no fuel price (pricePerUnit), a log that does not cover the dates (climateSource), a season over 366 days (endDate) …; measures[i].field for a measure's settings */
-            422: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
-        };
+      };
     };
-    SeasonController_getCalendar: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                houseId: number;
-            };
-            cookie?: never;
-        };
-        requestBody?: never;
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["ProductionCalendarDto"];
-                };
-            };
-            /** @description no such house, or not a member of its farm */
-            404: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
-        };
+  };
+  FarmsController_remove: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        farmId: number;
+      };
+      cookie?: never;
     };
-    SeasonController_putCalendar: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                houseId: number;
-            };
-            cookie?: never;
+    requestBody?: never;
+    responses: {
+      204: {
+        headers: {
+          [name: string]: unknown;
         };
-        requestBody: {
-            content: {
-                "application/json": components["schemas"]["PutProductionCalendarDto"];
-            };
-        };
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["ProductionCalendarDto"];
-                };
-            };
-            /** @description body fails validation; details per field */
-            400: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
-            /** @description role lacks house:write */
-            403: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
-            /** @description no such house, or not a member of its farm */
-            404: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
-            /** @description an impossible date such as 02-30, field named (periods[i].startMonthDay) */
-            422: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
-        };
+        content?: never;
+      };
     };
-    SeasonController_getFuelPrices: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                farmId: number;
-            };
-            cookie?: never;
-        };
-        requestBody?: never;
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["FarmFuelPricesDto"];
-                };
-            };
-            /** @description no such farm, or not a member */
-            404: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
-        };
+  };
+  FarmsController_update: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        farmId: number;
+      };
+      cookie?: never;
     };
-    SeasonController_putFuelPrices: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                farmId: number;
-            };
-            cookie?: never;
-        };
-        requestBody: {
-            content: {
-                "application/json": components["schemas"]["PutFuelPricesDto"];
-            };
-        };
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["FarmFuelPricesDto"];
-                };
-            };
-            /** @description body fails validation; details per field */
-            400: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
-            /** @description role lacks house:write */
-            403: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
-            /** @description no such farm, or not a member */
-            404: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
-            /** @description unknown fuel or a fuel listed twice (prices.i.fuelId) */
-            422: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
-        };
+    requestBody: {
+      content: {
+        'application/json': components['schemas']['UpdateFarmDto'];
+      };
     };
-    SeasonController_budget: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                farmId: number;
-            };
-            cookie?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
         };
-        requestBody: {
-            content: {
-                "application/json": components["schemas"]["SeasonBudgetRequestDto"];
-            };
+        content: {
+          'application/json': components['schemas']['FarmDto'];
         };
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["SeasonBudgetDto"];
-                };
-            };
-            /** @description body fails validation; details per field */
-            400: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
-            /** @description no such farm, or not a member */
-            404: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
-            /** @description the engine cannot compute with the input, field named: no climate and no log (climateSource), no fuel price (pricePerUnit), a log that does not cover the dates (climateSource), a season over 366 days (endDate) … */
-            422: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
-        };
+      };
     };
-    SeasonController_budgetCsv: {
-        parameters: {
-            query?: {
-                /** @description si (default): kWh and each fuel’s SI unit; us: MMBtu and each fuel’s US unit */
-                units?: "si" | "us";
-                startDate?: string;
-                endDate?: string;
-                /** @description use this temperature log instead of the climate normals */
-                temperatureLogId?: number;
-            };
-            header?: never;
-            path: {
-                farmId: number;
-            };
-            cookie?: never;
-        };
-        requestBody?: never;
-        responses: {
-            /** @description CSV file (attachment) */
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "text/csv": string;
-                };
-            };
-            /** @description no such farm, or not a member */
-            404: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
-            /** @description the engine cannot compute with the input, field named: no climate and no log (climateSource), no fuel price (pricePerUnit), a log that does not cover the dates (climateSource), a season over 366 days (endDate) … */
-            422: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
-        };
+  };
+  FarmsController_members: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        farmId: number;
+      };
+      cookie?: never;
     };
-    TemperatureLogsController_inspect: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                farmId: number;
-            };
-            cookie?: never;
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
         };
-        requestBody: {
-            content: {
-                "multipart/form-data": {
-                    /**
-                     * Format: binary
-                     * @description CSV file, UTF-8, at most 5 MB
-                     */
-                    file: string;
-                };
-            };
+        content: {
+          'application/json': components['schemas']['MemberDto'][];
         };
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["TemperatureCsvInspectionDto"];
-                };
-            };
-            /** @description no file part */
-            400: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
-            /** @description role lacks house:write */
-            403: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
-            /** @description no such farm, or not a member */
-            404: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
-            /** @description file over 5 MB */
-            413: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
-            /** @description the file cannot be read: not UTF-8, empty, unknown columns or bad rows; details = [{ field: 'line 12', message }] (field 'file' for the file as a whole) */
-            422: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
-        };
+      };
     };
-    TemperatureLogsController_list: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                farmId: number;
-            };
-            cookie?: never;
-        };
-        requestBody?: never;
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["TemperatureLogDto"][];
-                };
-            };
-            /** @description no such farm, or not a member */
-            404: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
-        };
+  };
+  FarmsController_addMember: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        farmId: number;
+      };
+      cookie?: never;
     };
-    TemperatureLogsController_upload: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                farmId: number;
-            };
-            cookie?: never;
-        };
-        requestBody: {
-            content: {
-                "multipart/form-data": {
-                    /**
-                     * Format: binary
-                     * @description CSV file, UTF-8, at most 5 MB
-                     */
-                    file: string;
-                    name: string;
-                    /** @description TemperatureColumnMappingDto as JSON, e.g. {"timestampColumn":"Time","temperatureColumn":"Temp (°C)","unit":"C"} */
-                    mapping: string;
-                };
-            };
-        };
-        responses: {
-            201: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["TemperatureLogDto"];
-                };
-            };
-            /** @description no file part, or name/mapping invalid (details per field, mapping.* for the mapping) */
-            400: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
-            /** @description role lacks house:write */
-            403: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
-            /** @description no such farm, or not a member */
-            404: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
-            /** @description file over 5 MB */
-            413: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
-            /** @description the file cannot be read: not UTF-8, empty, unknown columns or bad rows; details = [{ field: 'line 12', message }] (field 'file' for the file as a whole) */
-            422: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
-        };
+    requestBody: {
+      content: {
+        'application/json': components['schemas']['AddMemberDto'];
+      };
     };
-    TemperatureLogsController_get: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                logId: number;
-            };
-            cookie?: never;
+    responses: {
+      201: {
+        headers: {
+          [name: string]: unknown;
         };
-        requestBody?: never;
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["TemperatureLogDetailDto"];
-                };
-            };
-            /** @description no such log, or not a member of its farm */
-            404: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
+        content: {
+          'application/json': components['schemas']['MemberDto'];
         };
+      };
     };
-    TemperatureLogsController_remove: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                logId: number;
-            };
-            cookie?: never;
-        };
-        requestBody?: never;
-        responses: {
-            204: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
-            /** @description role lacks house:write */
-            403: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
-            /** @description no such log, or not a member of its farm */
-            404: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
-        };
+  };
+  FarmsController_removeMember: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        farmId: number;
+        userId: number;
+      };
+      cookie?: never;
     };
+    requestBody?: never;
+    responses: {
+      204: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+    };
+  };
+  FarmsController_updateMember: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        farmId: number;
+        userId: number;
+      };
+      cookie?: never;
+    };
+    requestBody: {
+      content: {
+        'application/json': components['schemas']['UpdateMemberDto'];
+      };
+    };
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['MemberDto'];
+        };
+      };
+    };
+  };
+  HousesController_list: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        farmId: number;
+      };
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['HouseDto'][];
+        };
+      };
+    };
+  };
+  HousesController_create: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        farmId: number;
+      };
+      cookie?: never;
+    };
+    requestBody: {
+      content: {
+        'application/json': components['schemas']['CreateHouseDto'];
+      };
+    };
+    responses: {
+      201: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['HouseDto'];
+        };
+      };
+      /** @description dimensions the engine cannot compute with, or an unknown reference id */
+      422: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+    };
+  };
+  HousesController_get: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        houseId: number;
+      };
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['HouseDto'];
+        };
+      };
+    };
+  };
+  HousesController_remove: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        houseId: number;
+      };
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      204: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+    };
+  };
+  HousesController_update: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        houseId: number;
+      };
+      cookie?: never;
+    };
+    requestBody: {
+      content: {
+        'application/json': components['schemas']['UpdateHouseDto'];
+      };
+    };
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['HouseDto'];
+        };
+      };
+    };
+  };
+  ClimateController_get: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        farmId: number;
+      };
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['FarmClimateDto'];
+        };
+      };
+    };
+  };
+  ClimateController_put: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        farmId: number;
+      };
+      cookie?: never;
+    };
+    requestBody: {
+      content: {
+        'application/json': components['schemas']['SiteClimateDto'];
+      };
+    };
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['FarmClimateDto'];
+        };
+      };
+      /** @description physically impossible climate (e.g. minimum above maximum), field named */
+      422: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+    };
+  };
+  EstimatesController_heating: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    requestBody: {
+      content: {
+        'application/json': components['schemas']['HeatingEstimateRequestDto'];
+      };
+    };
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['HeatingEstimateDto'];
+        };
+      };
+      /** @description body fails validation; details per field */
+      400: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+      /** @description the engine cannot compute with the input (e.g. ridge below eave, unknown reference id); field named */
+      422: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+    };
+  };
+  EstimatesController_cooling: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    requestBody: {
+      content: {
+        'application/json': components['schemas']['CoolingEstimateRequestDto'];
+      };
+    };
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['CoolingEstimateDto'];
+        };
+      };
+      /** @description body fails validation; details per field */
+      400: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+      /** @description the engine cannot compute with the input (e.g. ridge below eave, unknown reference id); field named */
+      422: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+    };
+  };
+  EstimatesController_heatingForHouse: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        houseId: number;
+      };
+      cookie?: never;
+    };
+    requestBody: {
+      content: {
+        'application/json': components['schemas']['HouseHeatingEstimateRequestDto'];
+      };
+    };
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['HouseHeatingEstimateDto'];
+        };
+      };
+      /** @description role lacks estimate:run */
+      403: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+      /** @description no such house, or not a member of its farm */
+      404: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+      /** @description the engine cannot compute with the input (e.g. ridge below eave, unknown reference id); field named; also when the farm has no climate and no designOutdoorC is given */
+      422: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+    };
+  };
+  EstimatesController_coolingForHouse: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        houseId: number;
+      };
+      cookie?: never;
+    };
+    requestBody: {
+      content: {
+        'application/json': components['schemas']['HouseCoolingEstimateRequestDto'];
+      };
+    };
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['HouseCoolingEstimateDto'];
+        };
+      };
+      /** @description role lacks estimate:run */
+      403: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+      /** @description no such house, or not a member of its farm */
+      404: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+      /** @description the engine cannot compute with the input (e.g. ridge below eave, unknown reference id); field named; also when the farm has no climate and the summer design values are not given */
+      422: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+    };
+  };
+  SeasonController_seasonOfHouse: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        houseId: number;
+      };
+      cookie?: never;
+    };
+    requestBody: {
+      content: {
+        'application/json': components['schemas']['SeasonRequestDto'];
+      };
+    };
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['HouseSeasonEstimateDto'];
+        };
+      };
+      /** @description body fails validation; details per field */
+      400: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+      /** @description role lacks estimate:run */
+      403: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+      /** @description no such house, or not a member of its farm */
+      404: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+      /** @description the engine cannot compute with the input, field named: no climate and no log (climateSource), no fuel price (pricePerUnit), a log that does not cover the dates (climateSource), a season over 366 days (endDate) … */
+      422: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+    };
+  };
+  SeasonController_nightDemand: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        houseId: number;
+      };
+      cookie?: never;
+    };
+    requestBody: {
+      content: {
+        'application/json': components['schemas']['NightDemandRequestDto'];
+      };
+    };
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['HouseNightDemandDto'];
+        };
+      };
+      /** @description body fails validation; details per field */
+      400: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+      /** @description role lacks estimate:run */
+      403: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+      /** @description no such house, or not a member of its farm */
+      404: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+      /** @description the engine cannot compute with the input, field named: no climate and no log (climateSource), no fuel price (pricePerUnit), a log that does not cover the dates (climateSource), a season over 366 days (endDate) … */
+      422: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+    };
+  };
+  SeasonController_measures: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        houseId: number;
+      };
+      cookie?: never;
+    };
+    requestBody: {
+      content: {
+        'application/json': components['schemas']['MeasuresRequestDto'];
+      };
+    };
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['MeasureComparisonDto'];
+        };
+      };
+      /** @description body fails validation; details per field */
+      400: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+      /** @description role lacks estimate:run */
+      403: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+      /** @description no such house, or not a member of its farm */
+      404: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+      /** @description the engine cannot compute with the input, field named: no climate and no log (climateSource), no fuel price (pricePerUnit), a log that does not cover the dates (climateSource), a season over 366 days (endDate) …; measures[i].field for a measure's settings */
+      422: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+    };
+  };
+  SeasonController_getCalendar: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        houseId: number;
+      };
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ProductionCalendarDto'];
+        };
+      };
+      /** @description no such house, or not a member of its farm */
+      404: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+    };
+  };
+  SeasonController_putCalendar: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        houseId: number;
+      };
+      cookie?: never;
+    };
+    requestBody: {
+      content: {
+        'application/json': components['schemas']['PutProductionCalendarDto'];
+      };
+    };
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ProductionCalendarDto'];
+        };
+      };
+      /** @description body fails validation; details per field */
+      400: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+      /** @description role lacks house:write */
+      403: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+      /** @description no such house, or not a member of its farm */
+      404: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+      /** @description an impossible date such as 02-30, field named (periods[i].startMonthDay) */
+      422: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+    };
+  };
+  SeasonController_getFuelPrices: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        farmId: number;
+      };
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['FarmFuelPricesDto'];
+        };
+      };
+      /** @description no such farm, or not a member */
+      404: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+    };
+  };
+  SeasonController_putFuelPrices: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        farmId: number;
+      };
+      cookie?: never;
+    };
+    requestBody: {
+      content: {
+        'application/json': components['schemas']['PutFuelPricesDto'];
+      };
+    };
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['FarmFuelPricesDto'];
+        };
+      };
+      /** @description body fails validation; details per field */
+      400: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+      /** @description role lacks house:write */
+      403: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+      /** @description no such farm, or not a member */
+      404: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+      /** @description unknown fuel or a fuel listed twice (prices.i.fuelId) */
+      422: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+    };
+  };
+  SeasonController_budget: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        farmId: number;
+      };
+      cookie?: never;
+    };
+    requestBody: {
+      content: {
+        'application/json': components['schemas']['SeasonBudgetRequestDto'];
+      };
+    };
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['SeasonBudgetDto'];
+        };
+      };
+      /** @description body fails validation; details per field */
+      400: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+      /** @description no such farm, or not a member */
+      404: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+      /** @description the engine cannot compute with the input, field named: no climate and no log (climateSource), no fuel price (pricePerUnit), a log that does not cover the dates (climateSource), a season over 366 days (endDate) … */
+      422: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+    };
+  };
+  SeasonController_budgetCsv: {
+    parameters: {
+      query?: {
+        /** @description si (default): kWh and each fuel’s SI unit; us: MMBtu and each fuel’s US unit */
+        units?: 'si' | 'us';
+        startDate?: string;
+        endDate?: string;
+        /** @description use this temperature log instead of the climate normals */
+        temperatureLogId?: number;
+      };
+      header?: never;
+      path: {
+        farmId: number;
+      };
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      /** @description CSV file (attachment) */
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'text/csv': string;
+        };
+      };
+      /** @description no such farm, or not a member */
+      404: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+      /** @description the engine cannot compute with the input, field named: no climate and no log (climateSource), no fuel price (pricePerUnit), a log that does not cover the dates (climateSource), a season over 366 days (endDate) … */
+      422: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+    };
+  };
+  TemperatureLogsController_inspect: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        farmId: number;
+      };
+      cookie?: never;
+    };
+    requestBody: {
+      content: {
+        'multipart/form-data': {
+          /**
+           * Format: binary
+           * @description CSV file, UTF-8, at most 5 MB
+           */
+          file: string;
+        };
+      };
+    };
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['TemperatureCsvInspectionDto'];
+        };
+      };
+      /** @description no file part */
+      400: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+      /** @description role lacks house:write */
+      403: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+      /** @description no such farm, or not a member */
+      404: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+      /** @description file over 5 MB */
+      413: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+      /** @description the file cannot be read: not UTF-8, empty, unknown columns or bad rows; details = [{ field: 'line 12', message }] (field 'file' for the file as a whole) */
+      422: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+    };
+  };
+  TemperatureLogsController_list: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        farmId: number;
+      };
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['TemperatureLogDto'][];
+        };
+      };
+      /** @description no such farm, or not a member */
+      404: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+    };
+  };
+  TemperatureLogsController_upload: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        farmId: number;
+      };
+      cookie?: never;
+    };
+    requestBody: {
+      content: {
+        'multipart/form-data': {
+          /**
+           * Format: binary
+           * @description CSV file, UTF-8, at most 5 MB
+           */
+          file: string;
+          name: string;
+          /** @description TemperatureColumnMappingDto as JSON, e.g. {"timestampColumn":"Time","temperatureColumn":"Temp (°C)","unit":"C"} */
+          mapping: string;
+        };
+      };
+    };
+    responses: {
+      201: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['TemperatureLogDto'];
+        };
+      };
+      /** @description no file part, or name/mapping invalid (details per field, mapping.* for the mapping) */
+      400: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+      /** @description role lacks house:write */
+      403: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+      /** @description no such farm, or not a member */
+      404: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+      /** @description file over 5 MB */
+      413: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+      /** @description the file cannot be read: not UTF-8, empty, unknown columns or bad rows; details = [{ field: 'line 12', message }] (field 'file' for the file as a whole) */
+      422: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+    };
+  };
+  TemperatureLogsController_get: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        logId: number;
+      };
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['TemperatureLogDetailDto'];
+        };
+      };
+      /** @description no such log, or not a member of its farm */
+      404: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+    };
+  };
+  TemperatureLogsController_remove: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        logId: number;
+      };
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      204: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+      /** @description role lacks house:write */
+      403: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+      /** @description no such log, or not a member of its farm */
+      404: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+    };
+  };
 }

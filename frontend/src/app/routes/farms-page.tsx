@@ -6,6 +6,7 @@ import { useNavigate } from 'react-router-dom';
 import { ErrorAlert } from '../../components/feedback';
 import { paths } from '../../config/paths';
 import { FarmFormDialog, FarmsTable, farmsListQueryOptions } from '../../features/farms';
+import { PageTitle } from '../../components/page-title';
 
 export default function FarmsPage() {
   const farms = useQuery(farmsListQueryOptions());
@@ -13,6 +14,7 @@ export default function FarmsPage() {
   const navigate = useNavigate();
   return (
     <Stack spacing={2}>
+      <PageTitle title={'Farms'} />
       <Stack direction="row" sx={{ alignItems: 'center', justifyContent: 'space-between' }}>
         <Typography variant="h1">Farms</Typography>
         <Button variant="contained" startIcon={<AddIcon />} onClick={() => setCreating(true)}>

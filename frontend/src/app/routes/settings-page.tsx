@@ -2,6 +2,7 @@ import { Stack, Typography } from '@mui/material';
 import { ErrorAlert, LoadingState } from '../../components/feedback';
 import { SettingsForm } from '../../features/settings';
 import { useCurrentUser, useSetCurrentUser } from '../session';
+import { PageTitle } from '../../components/page-title';
 
 export default function SettingsPage() {
   const currentUser = useCurrentUser();
@@ -10,6 +11,7 @@ export default function SettingsPage() {
   if (!currentUser.data) return <LoadingState />;
   return (
     <Stack spacing={2}>
+      <PageTitle title={'Settings'} />
       <Typography variant="h1">Settings</Typography>
       <SettingsForm user={currentUser.data} onUpdated={setCurrentUser} />
     </Stack>
