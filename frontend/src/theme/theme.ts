@@ -13,7 +13,8 @@ export const theme = createTheme({
     primary: leafGreen,
     secondary: warmAmber,
     error: { main: '#b3261e' },
-    warning: { main: '#c26a00' },
+    // dark enough for text on white (about 5.8:1), as outlined chips and warning text need
+    warning: { main: '#9a5400' },
     info: { main: '#2c6d8f' },
     success: { main: '#2e7d32' },
     background: { default: '#f6f5f0', paper: '#ffffff' },

@@ -3,6 +3,7 @@ import { useQuery } from '@tanstack/react-query';
 import { ErrorAlert, LoadingState } from '../../components/feedback';
 import { usersListQueryOptions, UsersTable } from '../../features/users';
 import { useCurrentUser } from '../session';
+import { PageTitle } from '../../components/page-title';
 
 export default function AdminUsersPage() {
   const currentUser = useCurrentUser();
@@ -12,6 +13,7 @@ export default function AdminUsersPage() {
   if (!currentUser.data) return <LoadingState />;
   return (
     <Stack spacing={2}>
+      <PageTitle title={'Users'} />
       <Typography variant="h1">Users</Typography>
       {isAdmin ? (
         <>

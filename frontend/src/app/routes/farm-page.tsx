@@ -16,6 +16,7 @@ import { TemperatureLogsSection } from '../../features/temperature-logs';
 import { referenceDataQueryOptions } from '../../lib/reference-data';
 import { useCurrentUser } from '../session';
 import { farmReportsQueryOptions, ReportLinks } from '../../features/reports';
+import { PageTitle } from '../../components/page-title';
 
 /** The farm page's tabs; the open one is kept in the URL (?tab=climate) so a reload keeps it. */
 const FARM_TABS = [
@@ -53,6 +54,7 @@ export default function FarmPage() {
 
   return (
     <Stack spacing={3}>
+      <PageTitle title={farm.data.name} />
       <Breadcrumbs aria-label="Breadcrumb">
         <Link component={RouterLink} to={paths.farms}>
           Farms

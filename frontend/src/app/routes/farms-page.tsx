@@ -7,6 +7,7 @@ import { ErrorAlert } from '../../components/feedback';
 import { paths } from '../../config/paths';
 import { FarmFormDialog, FarmsTable, farmsListQueryOptions } from '../../features/farms';
 import { ClientFarms } from '../../features/reports';
+import { PageTitle } from '../../components/page-title';
 
 export default function FarmsPage() {
   const farms = useQuery(farmsListQueryOptions());
@@ -14,6 +15,7 @@ export default function FarmsPage() {
   const navigate = useNavigate();
   return (
     <Stack spacing={2}>
+      <PageTitle title={'Farms'} />
       <Stack direction="row" sx={{ alignItems: 'center', justifyContent: 'space-between' }}>
         <Typography variant="h1">Farms</Typography>
         <Button variant="contained" startIcon={<AddIcon />} onClick={() => setCreating(true)}>

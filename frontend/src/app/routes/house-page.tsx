@@ -22,6 +22,7 @@ import {
 import { houseSpecOf } from '../../lib/house-spec';
 import { referenceDataQueryOptions } from '../../lib/reference-data';
 import { useDebouncedValue } from '../../lib/use-debounced-value';
+import { PageTitle } from '../../components/page-title';
 
 /** The form's unsaved edits as the result panels use them: null spec = show the stored house. */
 interface FormEdits {
@@ -75,6 +76,7 @@ export default function HousePage() {
 
   return (
     <Stack spacing={2}>
+      <PageTitle title={house.data.name} />
       <Breadcrumbs aria-label="Breadcrumb">
         <Link component={RouterLink} to={paths.farms}>
           Farms

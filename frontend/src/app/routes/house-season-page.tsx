@@ -7,6 +7,7 @@ import { farmAllows, farmDetailQueryOptions } from '../../features/farms';
 import { houseDetailQueryOptions } from '../../features/houses';
 import { SeasonView } from '../../features/season';
 import { farmTemperatureLogsQueryOptions } from '../../features/temperature-logs';
+import { PageTitle } from '../../components/page-title';
 
 /** A house's heating season: night demand, hourly season with the degree-day check, calendar, measures. */
 export default function HouseSeasonPage() {
@@ -22,6 +23,7 @@ export default function HouseSeasonPage() {
 
   return (
     <Stack spacing={2}>
+      <PageTitle title={`Heating season: ${house.data.name}`} />
       <Breadcrumbs aria-label="Breadcrumb">
         <Link component={RouterLink} to={paths.farms}>
           Farms

@@ -4,6 +4,7 @@ import { paths } from '../../config/paths';
 import { SignInForm } from '../../features/auth';
 import { useAccessToken } from '../session';
 import { AuthLayout } from './auth-layout';
+import { PageTitle } from '../../components/page-title';
 
 function returnPath(state: unknown): string {
   const from = (state as { from?: unknown } | null)?.from;
@@ -18,6 +19,7 @@ export default function LoginPage() {
   if (token) return <Navigate to={target} replace />;
   return (
     <AuthLayout>
+      <PageTitle title={'Sign in'} />
       <SignInForm onSignedIn={() => navigate(target, { replace: true })} />
       <Typography sx={{ mt: 2 }}>
         <Link component={RouterLink} to={paths.forgotPassword}>

@@ -7,6 +7,7 @@ import { paths } from '../../config/paths';
 import { farmAllows, farmDetailQueryOptions } from '../../features/farms';
 import { HouseForm, newHouseDefaults, useCreateHouse } from '../../features/houses';
 import { referenceDataQueryOptions } from '../../lib/reference-data';
+import { PageTitle } from '../../components/page-title';
 
 export default function NewHousePage() {
   const farmId = Number(useParams().farmId);
@@ -29,6 +30,7 @@ export default function NewHousePage() {
 
   return (
     <Stack spacing={2} sx={{ maxWidth: 900 }}>
+      <PageTitle title={`New house – ${farm.data.name}`} />
       <Breadcrumbs aria-label="Breadcrumb">
         <Link component={RouterLink} to={paths.farms}>
           Farms

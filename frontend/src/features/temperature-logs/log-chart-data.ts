@@ -22,3 +22,18 @@ export function logChartSeries(days: TemperatureLogDay[], units: Units): LogChar
     unitLabel: units.label('temperature'),
   };
 }
+
+/** The chart in words: how many days, the coldest and the warmest day by their mean. */
+export function logSummary(
+  days: ReadonlyArray<{ date: string; meanC: number }>,
+  temperature: (celsius: number) => string,
+): string {
+  if (days.length === 0) return 'No days in this log.';
+  let coldest = days[0];
+  let warmest = days[0];
+  for (const day of days) {
+    if (day.meanC < coldest.meanC) coldest = day;
+    if (day.meanC > warmest.meanC) warmest = day;
+  }
+  return `${days.length} day${days.length === 1 ? '' : 's'}; the coldest day by its mean was ${coldest.date} (${temperature(coldest.meanC)}), the warmest ${warmest.date} (${temperature(warmest.meanC)}).`;
+}

@@ -1,4 +1,15 @@
-import { Alert, Box, Button, List, ListItemButton, ListItemText, Paper, Stack, Typography } from '@mui/material';
+import {
+  Alert,
+  Box,
+  Button,
+  List,
+  ListItem,
+  ListItemButton,
+  ListItemText,
+  Paper,
+  Stack,
+  Typography,
+} from '@mui/material';
 import { useQuery } from '@tanstack/react-query';
 import { Form, Formik } from 'formik';
 import type { User } from '../../../api/types';
@@ -69,14 +80,15 @@ export function SignInForm({ onSignedIn }: SignInFormProps) {
               </Typography>
               <List dense aria-label="Demo accounts">
                 {demoAccounts.data.accounts.map((account) => (
-                  <ListItemButton
-                    key={account.email}
-                    onClick={() =>
-                      void setValues({ email: account.email, password: demoAccounts.data?.password ?? '' })
-                    }
-                  >
-                    <ListItemText primary={`${account.name} — ${account.email}`} secondary={account.description} />
-                  </ListItemButton>
+                  <ListItem key={account.email} disablePadding>
+                    <ListItemButton
+                      onClick={() =>
+                        void setValues({ email: account.email, password: demoAccounts.data?.password ?? '' })
+                      }
+                    >
+                      <ListItemText primary={`${account.name} — ${account.email}`} secondary={account.description} />
+                    </ListItemButton>
+                  </ListItem>
                 ))}
               </List>
             </Paper>

@@ -39,6 +39,8 @@ export function ClimateChart({ series, unitLabel }: { series: ClimateChartSeries
       aria-label={`Chart of the monthly mean daily minimum and maximum in ${unitLabel}`}
     >
       <Line
+        // The frame around the canvas carries the chart's name and description.
+        aria-hidden
         data={data}
         options={{
           responsive: true,

@@ -28,6 +28,8 @@ export function DesignDayChart({ hours, coolingSetpointC }: { hours: DesignDayHo
       aria-label={`Line chart of outdoor and indoor temperature through the design day, in ${units.label('temperature')}`}
     >
       <Line
+        // The frame around the canvas carries the chart's name and description.
+        aria-hidden
         data={data}
         options={{
           responsive: true,

@@ -23,6 +23,8 @@ export function HeatLossChart({ components }: { components: HeatLossComponent[] 
   return (
     <Box sx={{ height: 200 }} role="img" aria-label={`Bar chart of the heat loss by part, in ${units.label('power')}`}>
       <Bar
+        // The frame around the canvas carries the chart's name and description.
+        aria-hidden
         data={data}
         options={{
           indexAxis: 'y',

@@ -39,6 +39,8 @@ function BudgetChart({ budget, units }: { budget: SeasonBudget; units: Units }) 
   return (
     <Box sx={{ height: 280 }} role="img" aria-label="Bar chart of the farm's fuel cost and heat per month">
       <Bar
+        // The frame around the canvas carries the chart's name and description.
+        aria-hidden
         data={{
           labels: series.labels,
           datasets: [

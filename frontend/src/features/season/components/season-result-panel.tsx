@@ -66,6 +66,8 @@ export function SeasonResultPanel({ season }: { season: HouseSeasonEstimate }) {
         ) : null}
         <Box sx={{ height: 280 }} role="img" aria-label="Monthly chart of fuel and heat for the season">
           <Bar
+            // The frame around the canvas carries the chart's name and description.
+            aria-hidden
             data={{
               labels: series.labels,
               datasets: [

@@ -1,12 +1,12 @@
 import { Box, Typography } from '@mui/material';
 import { useTheme } from '@mui/material/styles';
 import { useQuery } from '@tanstack/react-query';
-import { useMemo } from 'react';
+import { useId, useMemo } from 'react';
 import { Line } from 'react-chartjs-2';
 import { ErrorAlert, LoadingState } from '../../../components/feedback';
 import '../../../lib/chart';
 import { useUnits } from '../../../lib/units';
-import { logChartSeries } from '../log-chart-data';
+import { logChartSeries, logSummary } from '../log-chart-data';
 import { temperatureLogDetailQueryOptions } from '../queries';
 
 /** Daily minimum, mean and maximum of one stored log. */
@@ -15,6 +15,7 @@ export function TemperatureLogChart({ logId }: { logId: number }) {
   const theme = useTheme();
   const log = useQuery(temperatureLogDetailQueryOptions(logId));
   const series = useMemo(() => (log.data ? logChartSeries(log.data.days, units) : null), [log.data, units]);
+  const summaryId = useId();
   if (log.isPending) return <LoadingState label="Loading the log…" />;
   if (log.isError) return <ErrorAlert error={log.error} title="The log could not be loaded" />;
   if (!series) return null;
@@ -32,8 +33,11 @@ export function TemperatureLogChart({ logId }: { logId: number }) {
         sx={{ height: 260 }}
         role="img"
         aria-label={`Chart of the daily temperatures of ${log.data.name} in ${series.unitLabel}`}
+        aria-describedby={summaryId}
       >
         <Line
+          // The frame around the canvas carries the chart's name and description.
+          aria-hidden
           data={{
             labels: series.labels,
             datasets: lines.map((line) => ({
@@ -54,6 +58,9 @@ export function TemperatureLogChart({ logId }: { logId: number }) {
           }}
         />
       </Box>
+      <Typography id={summaryId} variant="body2" color="text.secondary" sx={{ mt: 1 }}>
+        {logSummary(log.data.days, (celsius) => units.format('temperature', celsius))}
+      </Typography>
     </Box>
   );
 }
