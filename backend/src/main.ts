@@ -12,7 +12,10 @@ async function bootstrap(): Promise<void> {
   mountOpenApi(app);
   const port = app.get(ConfigService<Environment, true>).get('PORT', { infer: true });
   await app.listen(port);
-  new Logger('Thermbay').log(`serving app and API on http://localhost:${port} (API docs at /api/docs)`);
+  new Logger('Thermbay').log(
+    `serving app and API on http://localhost:${port} (API docs at /api/docs); ` +
+      `listening ${process.uptime().toFixed(1)} s after the process started`,
+  );
 }
 
 bootstrap().catch((error: Error) => {
