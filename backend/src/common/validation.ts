@@ -1,7 +1,8 @@
 import { ValidationError, ValidationPipe } from '@nestjs/common';
 import { FieldProblem, RequestValidationException } from './filters/all-exceptions.filter';
 
-function flatten(errors: ValidationError[], parent = ''): FieldProblem[] {
+/** Class-validator's errors as one problem per field, with dotted paths. */
+export function flatten(errors: ValidationError[], parent = ''): FieldProblem[] {
   return errors.flatMap((error) => {
     const field = parent ? `${parent}.${error.property}` : error.property;
     const own = Object.values(error.constraints ?? {}).map((message) => ({

@@ -8,6 +8,7 @@ import type { Environment } from '../config/environment';
 import { FarmClimate } from '../climate/models/farm-climate.model';
 import { Farm } from '../farms/models/farm.model';
 import { Membership } from '../farms/models/membership.model';
+import { HouseAlternative } from '../alternatives/models/house-alternative.model';
 import { House } from '../houses/models/house.model';
 import { FarmFuelPrice } from '../season/models/farm-fuel-price.model';
 import { HouseCalendar } from '../season/models/house-calendar.model';
@@ -15,7 +16,17 @@ import { TemperatureLog } from '../temperature-logs/models/temperature-log.model
 import { User } from '../users/models/user.model';
 import { createMigrator, prepareSqlite } from './migrator';
 
-export const MODELS = [User, Farm, Membership, House, FarmClimate, TemperatureLog, HouseCalendar, FarmFuelPrice];
+export const MODELS = [
+  User,
+  Farm,
+  Membership,
+  House,
+  FarmClimate,
+  TemperatureLog,
+  HouseCalendar,
+  FarmFuelPrice,
+  HouseAlternative,
+];
 
 /** Brings the schema up to date before anything else touches the database. */
 @Injectable()

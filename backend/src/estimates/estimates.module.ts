@@ -9,5 +9,6 @@ import { EstimatesService } from './estimates.service';
   imports: [FarmsModule, HousesModule, ClimateModule],
   controllers: [EstimatesController],
   providers: [EstimatesService],
+  exports: [EstimatesService],
 })
 export class EstimatesModule {}
