@@ -106,3 +106,11 @@ export type Measure = Schemas['MeasureDto'];
 export type MeasureKind = Measure['kind'];
 export type MeasureComparison = Schemas['MeasureComparisonDto'];
 export type MeasureResult = Schemas['MeasureResultDto'];
+
+export type Alternative = Schemas['AlternativeDto'];
+export type CreateAlternativeRequest = Schemas['CreateAlternativeDto'];
+export type UpdateAlternativeRequest = Schemas['UpdateAlternativeDto'];
+export type AdoptAlternativeResult = Schemas['AdoptAlternativeResultDto'];
+export type SideBySideRequest = Schemas['SideBySideRequestDto'];
+export type SideBySide = Schemas['SideBySideDto'];
+export type SideBySideColumn = Schemas['SideBySideColumnDto'];

@@ -14,6 +14,7 @@ const FarmPage = lazy(() => import('./routes/farm-page'));
 const NewHousePage = lazy(() => import('./routes/new-house-page'));
 const HousePage = lazy(() => import('./routes/house-page'));
 const HouseSeasonPage = lazy(() => import('./routes/house-season-page'));
+const SideBySidePage = lazy(() => import('./routes/side-by-side-page'));
 const SettingsPage = lazy(() => import('./routes/settings-page'));
 const AdminUsersPage = lazy(() => import('./routes/admin-users-page'));
 const NotFoundPage = lazy(() => import('./routes/not-found-page'));
@@ -38,6 +39,7 @@ export function createAppRouter() {
             { path: 'farms/:farmId/houses/new', element: <NewHousePage /> },
             { path: 'houses/:houseId', element: <HousePage /> },
             { path: 'houses/:houseId/season', element: <HouseSeasonPage /> },
+            { path: 'houses/:houseId/side-by-side', element: <SideBySidePage /> },
             { path: 'settings', element: <SettingsPage /> },
             { path: 'admin/users', element: <AdminUsersPage /> },
           ],

@@ -28,14 +28,16 @@ export interface SeasonViewProps {
   /** house:write */
   canEditCalendar: boolean;
   logs: ClimateLogOption[];
+  /** run the season and the measures for one of the house's alternatives instead of the house */
+  alternative?: { id: number; name: string; ownCalendar: boolean } | null;
 }
 
 /** The house's heating season: one night, the hourly season beside the degree-day check, the calendar, measures. */
-export function SeasonView({ houseId, canRun, canEditCalendar, logs }: SeasonViewProps) {
+export function SeasonView({ houseId, canRun, canEditCalendar, logs, alternative = null }: SeasonViewProps) {
   const [climateChoice, setClimateChoice] = useState('normals');
   const climateSource: SeasonRequest['climateSource'] =
     climateChoice === 'normals' ? 'normals' : { temperatureLogId: Number(climateChoice) };
-  const request: SeasonRequest = { climateSource };
+  const request: SeasonRequest = { climateSource, ...(alternative ? { alternativeId: alternative.id } : {}) };
   const season = useQuery({ ...houseSeasonQueryOptions(houseId, request), enabled: canRun });
   const referenceData = useQuery(referenceDataQueryOptions());
   const fuelUnitsFor = useCallback(
@@ -96,17 +98,29 @@ export function SeasonView({ houseId, canRun, canEditCalendar, logs }: SeasonVie
             </Grid>
           </Grid>
           <FuelCautions cautions={season.data.cautions} />
-          <NightDemandPanel
-            key={`${nightDate}-${climateChoice}`}
-            houseId={houseId}
-            initialDate={nightDate}
-            climateSource={climateSource}
-            fuelUnitsFor={fuelUnitsFor}
-          />
+          {alternative ? null : (
+            <NightDemandPanel
+              key={`${nightDate}-${climateChoice}`}
+              houseId={houseId}
+              initialDate={nightDate}
+              climateSource={climateSource}
+              fuelUnitsFor={fuelUnitsFor}
+            />
+          )}
         </>
       ) : null}
+      {alternative?.ownCalendar ? (
+        <Alert severity="info">
+          “{alternative.name}” brings its own production calendar; the house&apos;s calendar below is not used for it.
+        </Alert>
+      ) : null}
       <CalendarEditor houseId={houseId} canEdit={canEditCalendar} />
-      <MeasuresPanel key={climateChoice} houseId={houseId} climateSource={climateSource} />
+      <MeasuresPanel
+        key={`${climateChoice}-${alternative?.id ?? 'house'}`}
+        houseId={houseId}
+        climateSource={climateSource}
+        alternativeId={alternative?.id}
+      />
     </Stack>
   );
 }
