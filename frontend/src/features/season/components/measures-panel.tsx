@@ -37,8 +37,11 @@ export function MeasuresPanel({
   houseId,
   climateSource,
   alternativeId,
+  priceFields = {},
 }: {
   houseId: number;
+  /** a fuel-price what-if of the page (not saved) */
+  priceFields?: Pick<SeasonRequest, 'pricePerUnit' | 'priceUnit'>;
   climateSource: SeasonRequest['climateSource'];
   /** run for one of the house's alternatives */
   alternativeId?: number;
@@ -50,6 +53,7 @@ export function MeasuresPanel({
   const [kindToAdd, setKindToAdd] = useState<MeasureKind>('second-poly-layer');
   const comparison = useQuery({
     ...measuresQueryOptions(houseId, {
+      ...priceFields,
       measures: requested,
       climateSource,
       ...(alternativeId ? { alternativeId } : {}),

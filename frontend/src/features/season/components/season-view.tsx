@@ -4,7 +4,8 @@ import { useCallback, useState } from 'react';
 import type { SeasonRequest } from '../../../api/types';
 import { ErrorAlert, LoadingState } from '../../../components/feedback';
 import { referenceDataQueryOptions, referenceRows } from '../../../lib/reference-data';
-import type { FuelUnits } from '../../../lib/units';
+import { useDebouncedValue } from '../../../lib/use-debounced-value';
+import { useUnits, type FuelUnits } from '../../../lib/units';
 import { houseSeasonQueryOptions } from '../queries';
 import { nightStartDate } from '../season-chart-data';
 import { CalendarEditor } from './calendar-editor';
@@ -37,7 +38,19 @@ export function SeasonView({ houseId, canRun, canEditCalendar, logs, alternative
   const [climateChoice, setClimateChoice] = useState('normals');
   const climateSource: SeasonRequest['climateSource'] =
     climateChoice === 'normals' ? 'normals' : { temperatureLogId: Number(climateChoice) };
-  const request: SeasonRequest = { climateSource, ...(alternative ? { alternativeId: alternative.id } : {}) };
+  // A fuel-price what-if is this page's own scenario: sent with each run, never saved to the farm.
+  const [priceWhatIf, setPriceWhatIf] = useState('');
+  const settledPrice = useDebouncedValue(priceWhatIf, 500);
+  const whatIfPrice = settledPrice.trim() === '' ? null : Number(settledPrice);
+  const whatIfValid = whatIfPrice === null || (Number.isFinite(whatIfPrice) && whatIfPrice >= 0 && whatIfPrice <= 1e6);
+  const units = useUnits();
+  const priceFields: Pick<SeasonRequest, 'pricePerUnit' | 'priceUnit'> =
+    whatIfPrice !== null && whatIfValid ? { pricePerUnit: whatIfPrice, priceUnit: units.system } : {};
+  const request: SeasonRequest = {
+    climateSource,
+    ...priceFields,
+    ...(alternative ? { alternativeId: alternative.id } : {}),
+  };
   const season = useQuery({ ...houseSeasonQueryOptions(houseId, request), enabled: canRun });
   const referenceData = useQuery(referenceDataQueryOptions());
   const fuelUnitsFor = useCallback(
@@ -84,6 +97,20 @@ export function SeasonView({ houseId, canRun, canEditCalendar, logs, alternative
           Logged temperatures limit the season to the days the log covers.
         </Typography>
       </Stack>
+      <Stack direction={{ xs: 'column', sm: 'row' }} spacing={2} sx={{ alignItems: { sm: 'center' } }}>
+        <TextField
+          label={`What if fuel cost (per ${season.data ? units.fuelUnit(season.data.fuel) : 'purchase unit'})`}
+          value={priceWhatIf}
+          onChange={(event) => setPriceWhatIf(event.target.value)}
+          inputMode="decimal"
+          error={!whatIfValid}
+          helperText={whatIfValid ? 'Empty = the farm’s price' : 'A number from 0 up'}
+          sx={{ maxWidth: 380 }}
+        />
+        <Typography variant="body2" color="text.secondary">
+          A what-if for this page only: the farm&apos;s shared fuel prices are not changed (set them on the farm page).
+        </Typography>
+      </Stack>
 
       {season.isPending ? <LoadingState label="Computing the season hour by hour…" /> : null}
       <ErrorAlert error={season.error} title="The season could not be computed" />
@@ -116,9 +143,10 @@ export function SeasonView({ houseId, canRun, canEditCalendar, logs, alternative
       ) : null}
       <CalendarEditor houseId={houseId} canEdit={canEditCalendar} />
       <MeasuresPanel
-        key={`${climateChoice}-${alternative?.id ?? 'house'}`}
+        key={`${climateChoice}-${alternative?.id ?? 'house'}-${priceFields.pricePerUnit ?? 'farm'}`}
         houseId={houseId}
         climateSource={climateSource}
+        priceFields={priceFields}
         alternativeId={alternative?.id}
       />
     </Stack>
