@@ -4,6 +4,7 @@ import { APP_GUARD } from '@nestjs/core';
 import { ServeStaticModule } from '@nestjs/serve-static';
 import { existsSync } from 'node:fs';
 import { resolve } from 'node:path';
+import { AlternativesModule } from './alternatives/alternatives.module';
 import { AuthModule } from './auth/auth.module';
 import { ClimateModule } from './climate/climate.module';
 import { JwtAuthGuard } from './common/guards/jwt-auth.guard';
@@ -20,6 +21,7 @@ import { ReportsModule } from './reports/reports.module';
 import { ReferenceDataModule } from './reference-data/reference-data.module';
 import { SeasonModule } from './season/season.module';
 import { SeedModule } from './seed/seed.module';
+import { SideBySideModule } from './side-by-side/side-by-side.module';
 import { UsersModule } from './users/users.module';
 import { WeatherModule } from './weather/weather.module';
 
@@ -47,6 +49,8 @@ const staticFrontend = existsSync(frontendDist())
     SeasonModule,
     WeatherModule,
     ReportsModule,
+    AlternativesModule,
+    SideBySideModule,
     SeedModule,
     ...staticFrontend,
   ],

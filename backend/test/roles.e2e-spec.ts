@@ -70,6 +70,15 @@ describe('roles × routes (e2e)', () => {
         .expect(201)
     ).body.id as number;
 
+  const newAlternative = async () =>
+    (
+      await t.http
+        .post(`/api/houses/${houseId}/alternatives`)
+        .set(bearer(token.owner))
+        .send({ name: 'Matrix alternative', patch: { coverings: { roof: 'poly-double-inflated' } } })
+        .expect(201)
+    ).body.id as number;
+
   const SEASON = { startDate: '2026-12-01', endDate: '2027-02-28' };
   const smallCsv = Buffer.from(hourlyCsv('2027-01-01', 2));
   const uploadLog = (who: Who) =>
@@ -475,6 +484,58 @@ describe('roles × routes (e2e)', () => {
       call: (who) => t.http.get('/api/mail/inbox').set(bearer(token[who])),
     },
     {
+      route: 'GET /houses/:id/alternatives',
+      expected: { owner: 200, grower: 200, adviser: 200, viewer: 200, outsider: 404, admin: 404 },
+      call: (who) => t.http.get(`/api/houses/${houseId}/alternatives`).set(bearer(token[who])),
+    },
+    {
+      route: 'POST /houses/:id/alternatives',
+      expected: { owner: 201, grower: 201, adviser: 201, viewer: 403, outsider: 404, admin: 404 },
+      call: (who) =>
+        t.http
+          .post(`/api/houses/${houseId}/alternatives`)
+          .set(bearer(token[who]))
+          .send({ name: `proposal by ${who}`, patch: { perimeterInsulated: true } }),
+    },
+    {
+      route: 'GET /alternatives/:id',
+      expected: { owner: 200, grower: 200, adviser: 200, viewer: 200, outsider: 404, admin: 404 },
+      call: async (who) => t.http.get(`/api/alternatives/${await newAlternative()}`).set(bearer(token[who])),
+    },
+    {
+      route: 'PATCH /alternatives/:id',
+      expected: { owner: 200, grower: 200, adviser: 200, viewer: 403, outsider: 404, admin: 404 },
+      call: async (who) =>
+        t.http
+          .patch(`/api/alternatives/${await newAlternative()}`)
+          .set(bearer(token[who]))
+          .send({ costAmount: 1000 }),
+    },
+    {
+      route: 'DELETE /alternatives/:id',
+      expected: { owner: 204, grower: 204, adviser: 204, viewer: 403, outsider: 404, admin: 404 },
+      call: async (who) => t.http.delete(`/api/alternatives/${await newAlternative()}`).set(bearer(token[who])),
+    },
+    {
+      route: 'POST /alternatives/:id/adopt',
+      expected: { owner: 200, grower: 200, adviser: 403, viewer: 403, outsider: 404, admin: 404 },
+      call: async (who) => t.http.post(`/api/alternatives/${await newAlternative()}/adopt`).set(bearer(token[who])),
+    },
+    {
+      route: 'POST /houses/:id/duplicate',
+      expected: { owner: 201, grower: 201, adviser: 403, viewer: 403, outsider: 404, admin: 404 },
+      call: (who) => t.http.post(`/api/houses/${houseId}/duplicate`).set(bearer(token[who])).send({}),
+    },
+    {
+      route: 'POST /houses/:id/side-by-side',
+      expected: { owner: 200, grower: 200, adviser: 200, viewer: 403, outsider: 404, admin: 404 },
+      call: async (who) =>
+        t.http
+          .post(`/api/houses/${houseId}/side-by-side`)
+          .set(bearer(token[who]))
+          .send({ ...SEASON, alternativeIds: [await newAlternative()] }),
+    },
+    {
       route: 'GET /users (site admin only)',
       expected: { owner: 403, grower: 403, adviser: 403, viewer: 403, outsider: 403, admin: 200 },
       call: (who) => t.http.get('/api/users').set(bearer(token[who])),
@@ -503,6 +564,8 @@ describe('roles × routes (e2e)', () => {
     expect(map.grower).toContain('house:write');
     expect(map.adviser).not.toContain('house:write');
     expect(map.adviser).toContain('report:write');
+    expect(map.adviser).toContain('alternative:write');
+    expect(map.viewer).not.toContain('alternative:write');
   });
 
   it('only the owner deletes a farm, and its houses go with it', async () => {

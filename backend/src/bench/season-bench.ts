@@ -6,7 +6,13 @@
  *  4. a whole estimateSeason call with the sun already cached (heat loss, climate curve, the
  *     simulation and the four extra runs of the degree-day comparison),
  *  5. rendering a heater-sizing report of the demo house as PDF (document building included).
+ *  6. a side-by-side of a house and four alternatives (each column a design-night heating, a summer
+ *     cooling and a season estimate), as POST /houses/:id/side-by-side computes it once the rows
+ *     are read (sun cached, as on a running server after the first request for the site-year).
  */
+import { demoSideBySideInput } from '@thermbay/engine/alternatives/demo-side-by-side';
+import { compareSideBySide } from '@thermbay/engine/alternatives/side-by-side';
+import { exampleDoublePolyGableHouse } from '@thermbay/engine/heating/example-houses';
 import { loadReferenceData } from '../reference-data/load-reference-data';
 import { benchReportPdf } from './report-pdf-bench';
 import { baseVariant, estimateSeason, prepareSeason, variantParameters } from '@thermbay/engine/estimate-season';
@@ -80,6 +86,14 @@ function main(): void {
   );
   estimateSeason(input, ref, sunCache);
   const whole = medianMs(51, () => estimateSeason(input, ref, sunCache).total.energyKWh);
+  const singlePoly = exampleDoublePolyGableHouse({
+    coverings: { roof: 'poly-single', sidewalls: 'poly-single', endwalls: 'poly-single' },
+  });
+  const sideBySideInput = demoSideBySideInput(singlePoly);
+  const sideBySide = () =>
+    compareSideBySide(sideBySideInput.house, sideBySideInput.alternatives, ref, sunCache).house.season.total.cost;
+  sideBySide();
+  const fiveColumns = medianMs(21, sideBySide);
 
   const format = (ms: number) => `${ms.toFixed(3)} ms`;
   console.log(`Season engine benchmark (${hourCount} hours, demo house, median of repeated runs)`);
@@ -88,8 +102,12 @@ function main(): void {
   console.log(`  ratio simulation / bare loop:      ${(simulated.medianMs / bare.medianMs).toFixed(2)}×`);
   console.log(`  sun positions for a site-year:     ${format(sun.medianMs)}`);
   console.log(`  whole estimateSeason (sun cached): ${format(whole.medianMs)}`);
+  console.log(
+    `  side-by-side, house + 4 alternatives (heating, cooling, season each): ${format(fiveColumns.medianMs)}`,
+  );
   // keep the results alive so no loop is optimised away
-  if (!Number.isFinite(bare.sink + simulated.sink + sun.sink + whole.sink)) console.log('non-finite result');
+  if (!Number.isFinite(bare.sink + simulated.sink + sun.sink + whole.sink + fiveColumns.sink))
+    console.log('non-finite result');
 }
 
 main();

@@ -12,6 +12,7 @@ export const PERMISSIONS = [
   'members:manage',
   'house:read',
   'house:write',
+  'alternative:write',
   'estimate:run',
   'report:write',
 ] as const;
@@ -19,8 +20,8 @@ export type Permission = (typeof PERMISSIONS)[number];
 
 export const ROLE_PERMISSIONS: Record<FarmRole, readonly Permission[]> = {
   owner: PERMISSIONS,
-  grower: ['farm:read', 'house:read', 'house:write', 'estimate:run'],
-  adviser: ['farm:read', 'house:read', 'estimate:run', 'report:write'],
+  grower: ['farm:read', 'house:read', 'house:write', 'alternative:write', 'estimate:run'],
+  adviser: ['farm:read', 'house:read', 'alternative:write', 'estimate:run', 'report:write'],
   viewer: ['farm:read', 'house:read'],
 };
 

@@ -3,7 +3,8 @@ import { ValidateBy, ValidateIf, type ValidationOptions } from 'class-validator'
 import { FieldProblem, RequestValidationException } from './filters/all-exceptions.filter';
 import { nulCharacterProblems } from './nul-characters';
 
-function flatten(errors: ValidationError[], parent = ''): FieldProblem[] {
+/** Class-validator's errors as one problem per field, with dotted paths. */
+export function flatten(errors: ValidationError[], parent = ''): FieldProblem[] {
   return errors.flatMap((error) => {
     const field = parent ? `${parent}.${error.property}` : error.property;
     const own = Object.values(error.constraints ?? {}).map((message) => ({

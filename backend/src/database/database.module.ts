@@ -10,6 +10,7 @@ import { PasswordResetToken } from '../auth/models/password-reset-token.model';
 import { FarmClimate } from '../climate/models/farm-climate.model';
 import { Farm } from '../farms/models/farm.model';
 import { Membership } from '../farms/models/membership.model';
+import { HouseAlternative } from '../alternatives/models/house-alternative.model';
 import { House } from '../houses/models/house.model';
 import { Invitation } from '../invitations/models/invitation.model';
 import { Report } from '../reports/models/report.model';
@@ -39,6 +40,7 @@ export const MODELS = [
   PasswordResetToken,
   Invitation,
   Report,
+  HouseAlternative,
 ];
 
 /** Brings the schema up to date before anything else touches the database. */

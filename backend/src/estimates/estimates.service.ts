@@ -3,8 +3,8 @@ import { InjectModel } from '@nestjs/sequelize';
 import { ClimateService } from '../climate/climate.service';
 import type { SiteClimateDto } from '../climate/dto/climate.dto';
 import type { AuthenticatedUser } from '../common/decorators/current-user.decorator';
-import { estimateCooling, type CoolingConditions } from '@thermbay/engine/estimate-cooling';
-import { estimateHeating, type HeatingConditions } from '@thermbay/engine/estimate-heating';
+import { estimateCooling, type CoolingConditions, type CoolingInput } from '@thermbay/engine/estimate-cooling';
+import { estimateHeating, type HeatingConditions, type HeatingEstimateInput } from '@thermbay/engine/estimate-heating';
 import { EngineInputError } from '@thermbay/engine/errors';
 import type { HouseSpec } from '@thermbay/engine/house.types';
 import { referenceRow, type ReferenceRow } from '@thermbay/engine/reference-data.types';
@@ -62,9 +62,23 @@ export class EstimatesService {
     given: PartialHeatingConditionsDto = {},
   ): Promise<HouseHeatingEstimateDto> {
     const stored = await this.houses.loadFor(user, houseId, 'estimate:run');
-    const farm = await this.farmOf(stored.farmId);
-    const climate = await this.climate.findForFarm(stored.farmId);
-    const house = houseToSpec(stored);
+    const setup = await this.heatingSetup(stored.farmId, houseToSpec(stored), given);
+    const estimate = estimateHeating(setup.input, this.reference.data);
+    return { ...estimate, houseId, conditionsUsed: setup.conditionsUsed, conditionsSource: setup.conditionsSource };
+  }
+
+  /** The design-night input for a house of a farm (access already checked), with where each value came from. */
+  async heatingSetup(
+    farmId: number,
+    house: HouseSpec,
+    given: PartialHeatingConditionsDto = {},
+  ): Promise<{
+    input: HeatingEstimateInput;
+    conditionsUsed: HeatingConditionsUsedDto;
+    conditionsSource: HeatingConditionsSourceDto;
+  }> {
+    const farm = await this.farmOf(farmId);
+    const climate = await this.climate.findForFarm(farmId);
 
     const designOutdoorC = given.designOutdoorC ?? climate?.winterDesignC;
     if (designOutdoorC === undefined) {
@@ -85,8 +99,7 @@ export class EstimatesService {
       curtainClosed: given.curtainClosed === undefined ? 'default' : 'request',
     };
     const conditions: HeatingConditions = { ...conditionsUsed };
-    const estimate = estimateHeating({ house, conditions }, this.reference.data);
-    return { ...estimate, houseId, conditionsUsed, conditionsSource };
+    return { input: { house, conditions }, conditionsUsed, conditionsSource };
   }
 
   async coolingForHouse(
@@ -96,9 +109,26 @@ export class EstimatesService {
     now: Date = new Date(),
   ): Promise<HouseCoolingEstimateDto> {
     const stored = await this.houses.loadFor(user, houseId, 'estimate:run');
-    const farm = await this.farmOf(stored.farmId);
-    const climate = await this.climate.findForFarm(stored.farmId);
-    const house = houseToSpec(stored);
+    const setup = await this.coolingSetup(stored.farmId, houseToSpec(stored), given, now);
+    const estimate = estimateCooling(setup.input, this.reference.data);
+    return {
+      ...estimate,
+      houseId,
+      siteUsed: setup.input.site,
+      conditionsUsed: setup.input.conditions,
+      conditionsSource: setup.conditionsSource,
+    };
+  }
+
+  /** The summer input for a house of a farm (access already checked), with where each value came from. */
+  async coolingSetup(
+    farmId: number,
+    house: HouseSpec,
+    given: PartialCoolingConditionsDto = {},
+    now: Date = new Date(),
+  ): Promise<{ input: CoolingInput; conditionsSource: CoolingConditionsSourceDto }> {
+    const farm = await this.farmOf(farmId);
+    const climate = await this.climate.findForFarm(farmId);
     const siteUsed = { latitudeDeg: farm.latitudeDeg, longitudeDeg: farm.longitudeDeg, elevationM: farm.elevationM };
 
     const fromClimate = (
@@ -143,8 +173,7 @@ export class EstimatesService {
       evaporativePad: given.evaporativePad ? 'request' : 'none',
       winterDesignC: stated('winterDesignC') ? 'request' : climate ? 'farm climate' : 'reference data',
     };
-    const estimate = estimateCooling({ house, site: siteUsed, conditions: conditionsUsed }, this.reference.data);
-    return { ...estimate, houseId, siteUsed, conditionsUsed, conditionsSource };
+    return { input: { house, site: siteUsed, conditions: conditionsUsed }, conditionsSource };
   }
 
   private async farmOf(farmId: number): Promise<Farm> {

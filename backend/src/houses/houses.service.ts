@@ -1,6 +1,11 @@
 import { Injectable, NotFoundException } from '@nestjs/common';
 import { InjectConnection, InjectModel } from '@nestjs/sequelize';
 import { Sequelize } from 'sequelize-typescript';
+import { plainToInstance } from 'class-transformer';
+import { validateSync } from 'class-validator';
+import { NOT_PATCHABLE_FIELDS } from '@thermbay/engine/alternatives/house-patch';
+import type { FieldProblem } from '../common/filters/all-exceptions.filter';
+import { flatten } from '../common/validation';
 import type { AuthenticatedUser } from '../common/decorators/current-user.decorator';
 import type { Permission } from '../common/permissions';
 import { assertVersion, changesNothing, expectedVersion } from '../common/versioning';
@@ -8,7 +13,7 @@ import { EngineInputError } from '@thermbay/engine/errors';
 import { validateHouseDimensions } from '@thermbay/engine/geometry/house-geometry';
 import { FarmAccessService } from '../farms/farm-access.service';
 import { ReferenceDataService } from '../reference-data/reference-data.service';
-import type { CreateHouseDto, HouseDto, UpdateHouseDto } from './dto/house.dto';
+import { CreateHouseDto, type HouseDto, type UpdateHouseDto } from './dto/house.dto';
 import { houseToDto, houseToSpec } from './house.mapper';
 import { House } from './models/house.model';
 
@@ -81,6 +86,28 @@ export class HousesService {
       throw error;
     }
     return house;
+  }
+
+  /**
+   * Runs a candidate house (e.g. the house with an alternative's patch merged on) through the same
+   * checks a saved house passes: the request validation of a house body, then the engine's. Returns
+   * the first problem, naming the field, or null when the house is valid.
+   */
+  checkHouse(candidate: object): FieldProblem | null {
+    const body: Record<string, unknown> = { ...candidate };
+    for (const key of NOT_PATCHABLE_FIELDS) if (key !== 'name' && key !== 'notes') delete body[key];
+    const errors = validateSync(plainToInstance(CreateHouseDto, body), {
+      whitelist: true,
+      forbidNonWhitelisted: true,
+    });
+    if (errors.length > 0) return flatten(errors)[0];
+    try {
+      this.assertComputable(body as unknown as CreateHouseDto);
+    } catch (error) {
+      if (error instanceof EngineInputError) return { field: error.field, message: error.message };
+      throw error;
+    }
+    return null;
   }
 
   /** A house is saved only if the engine can compute with it (ridge above eave, known ids …). */

@@ -1,5 +1,6 @@
 import { Module } from '@nestjs/common';
 import { SequelizeModule } from '@nestjs/sequelize';
+import { AlternativesModule } from '../alternatives/alternatives.module';
 import { ClimateModule } from '../climate/climate.module';
 import { FarmsModule } from '../farms/farms.module';
 import { HousesModule } from '../houses/houses.module';
@@ -20,6 +21,7 @@ import { SunCacheService } from './sun-cache.service';
     SequelizeModule.forFeature([FarmFuelPrice, HouseCalendar]),
     FarmsModule,
     HousesModule,
+    AlternativesModule,
     ClimateModule,
     TemperatureLogsModule,
   ],
@@ -32,6 +34,6 @@ import { SunCacheService } from './sun-cache.service';
     CalendarService,
     FuelPricesService,
   ],
-  exports: [SeasonService],
+  exports: [SeasonService, SeasonInputsService, SunCacheService],
 })
 export class SeasonModule {}

@@ -3,10 +3,21 @@ import type { AuthenticatedUser } from '../common/decorators/current-user.decora
 import { estimateSeason, type EstimateSeasonInput } from '@thermbay/engine/estimate-season';
 import { compareMeasures, defaultMeasures, type Measure, type MeasureResult } from '@thermbay/engine/season/measures';
 import { nightHeatingDemand } from '@thermbay/engine/season/night-demand';
+import type { HouseSpec } from '@thermbay/engine/house.types';
+import type { ProductionCalendar } from '@thermbay/engine/season/production-calendar';
+import { AlternativesService } from '../alternatives/alternatives.service';
 import { houseToSpec } from '../houses/house.mapper';
 import { HousesService } from '../houses/houses.service';
+import type { House } from '../houses/models/house.model';
+import type { FarmFuelPrice } from './models/farm-fuel-price.model';
 import { ReferenceDataService } from '../reference-data/reference-data.service';
-import type { MeasureDto, MeasuresRequestDto, NightDemandRequestDto, SeasonRequestDto } from './dto/season-request.dto';
+import type {
+  MeasureDto,
+  MeasuresRequestDto,
+  NightDemandRequestDto,
+  SeasonOptionsDto,
+  SeasonRequestDto,
+} from './dto/season-request.dto';
 import type {
   HouseNightDemandDto,
   HouseSeasonEstimateDto,
@@ -37,6 +48,7 @@ function measureResultToDto(result: MeasureResult): MeasureResultDto {
 export class SeasonService {
   constructor(
     private readonly houses: HousesService,
+    private readonly alternatives: AlternativesService,
     private readonly inputs: SeasonInputsService,
     private readonly reference: ReferenceDataService,
     private readonly sun: SunCacheService,
@@ -112,22 +124,27 @@ export class SeasonService {
     };
   }
 
-  private async prepare(
-    user: AuthenticatedUser,
-    houseId: number,
-    body: SeasonRequestDto,
-  ): Promise<{
-    input: EstimateSeasonInput;
-    inputsUsed: SeasonInputsUsedDto;
-    context: FarmSeasonContext;
-    choice: HouseFuelChoice;
-  }> {
-    const stored = await this.houses.loadFor(user, houseId, 'estimate:run');
-    const farm = await this.inputs.farm(stored.farmId);
-    const house = houseToSpec(stored);
-    const context = await this.inputs.farmContext(farm, body, new Date());
-    const choice = this.inputs.fuelChoice(house, await this.inputs.pricesOf(farm.id), body);
-    const calendar = await this.inputs.calendarOf(houseId);
+  private async prepare(user: AuthenticatedUser, houseId: number, body: SeasonRequestDto): Promise<PreparedSeasonRun> {
+    const run = await this.alternatives.houseForRun(user, houseId, body.alternativeId, 'estimate:run');
+    return this.prepareFor(run.stored, run.house, run.calendar, body);
+  }
+
+  /**
+   * The season input for a house (or an alternative of it) of a stored house's farm, access
+   * already checked. `calendar` undefined = the stored house's own production calendar.
+   */
+  async prepareFor(
+    stored: House,
+    house: HouseSpec,
+    calendarOverride: ProductionCalendar | null | undefined,
+    body: SeasonOptionsDto & { startDate?: string; endDate?: string },
+    shared?: { context: FarmSeasonContext; prices: Map<string, FarmFuelPrice> },
+  ): Promise<PreparedSeasonRun> {
+    const houseId = stored.id;
+    const farm = shared?.context.farm ?? (await this.inputs.farm(stored.farmId));
+    const context = shared?.context ?? (await this.inputs.farmContext(farm, body, new Date()));
+    const choice = this.inputs.fuelChoice(house, shared?.prices ?? (await this.inputs.pricesOf(farm.id)), body);
+    const calendar = calendarOverride === undefined ? await this.inputs.calendarOf(houseId) : calendarOverride;
     const input: EstimateSeasonInput = {
       house,
       site: context.site,
@@ -146,4 +163,11 @@ export class SeasonService {
     };
     return { input, inputsUsed, context, choice };
   }
+}
+
+export interface PreparedSeasonRun {
+  input: EstimateSeasonInput;
+  inputsUsed: SeasonInputsUsedDto;
+  context: FarmSeasonContext;
+  choice: HouseFuelChoice;
 }

@@ -685,6 +685,77 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/houses/{houseId}/alternatives": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** A house's alternatives, each read against the house as it is now (house:read); one that no longer makes a valid house is listed with `invalid` */
+        get: operations["AlternativesController_list"];
+        put?: never;
+        /** Save an alternative of the house: a patch, or the edited house from which the patch is taken (alternative:write: owners, growers and advisers) */
+        post: operations["AlternativesController_create"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/alternatives/{alternativeId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** One alternative, read against its house as it is now (house:read) */
+        get: operations["AlternativesController_get"];
+        put?: never;
+        post?: never;
+        /** Delete an alternative (alternative:write) */
+        delete: operations["AlternativesController_remove"];
+        options?: never;
+        head?: never;
+        /** Rename, re-cost or change an alternative (alternative:write) */
+        patch: operations["AlternativesController_update"];
+        trace?: never;
+    };
+    "/api/alternatives/{alternativeId}/adopt": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Make this alternative the house, in one step (house:write: owners and growers); the house as it was is kept as an alternative */
+        post: operations["AlternativesController_adopt"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/houses/{houseId}/duplicate": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** A copy of the house with its production calendar and alternatives (house:write on its farm) */
+        post: operations["AlternativesController_duplicate"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/farms/{farmId}/temperature-logs/inspect": {
         parameters: {
             query?: never;
@@ -936,6 +1007,23 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/houses/{houseId}/side-by-side": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** The house and up to four of its alternatives, each with its design night, summer cooling, season, light and (for an alternative) saving and payback against the house (estimate:run) */
+        post: operations["SideBySideController_compare"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
 }
 export type webhooks = Record<string, never>;
 export interface components {
@@ -1068,10 +1156,10 @@ export interface components {
             accounts: components["schemas"]["DemoAccountDto"][];
         };
         RolePermissionsDto: {
-            owner: ("farm:read" | "farm:update" | "farm:delete" | "members:manage" | "house:read" | "house:write" | "estimate:run" | "report:write")[];
-            grower: ("farm:read" | "farm:update" | "farm:delete" | "members:manage" | "house:read" | "house:write" | "estimate:run" | "report:write")[];
-            adviser: ("farm:read" | "farm:update" | "farm:delete" | "members:manage" | "house:read" | "house:write" | "estimate:run" | "report:write")[];
-            viewer: ("farm:read" | "farm:update" | "farm:delete" | "members:manage" | "house:read" | "house:write" | "estimate:run" | "report:write")[];
+            owner: ("farm:read" | "farm:update" | "farm:delete" | "members:manage" | "house:read" | "house:write" | "alternative:write" | "estimate:run" | "report:write")[];
+            grower: ("farm:read" | "farm:update" | "farm:delete" | "members:manage" | "house:read" | "house:write" | "alternative:write" | "estimate:run" | "report:write")[];
+            adviser: ("farm:read" | "farm:update" | "farm:delete" | "members:manage" | "house:read" | "house:write" | "alternative:write" | "estimate:run" | "report:write")[];
+            viewer: ("farm:read" | "farm:update" | "farm:delete" | "members:manage" | "house:read" | "house:write" | "alternative:write" | "estimate:run" | "report:write")[];
         };
         PermissionsDto: {
             roles: components["schemas"]["RolePermissionsDto"];
@@ -1085,7 +1173,7 @@ export interface components {
             timeZone: string;
             /** @enum {string} */
             myRole: "owner" | "grower" | "adviser" | "viewer";
-            permissions: ("farm:read" | "farm:update" | "farm:delete" | "members:manage" | "house:read" | "house:write" | "estimate:run" | "report:write")[];
+            permissions: ("farm:read" | "farm:update" | "farm:delete" | "members:manage" | "house:read" | "house:write" | "alternative:write" | "estimate:run" | "report:write")[];
             houseCount: number;
             /** @description raised by one on every save; send it back in If-Match to update */
             version: number;
@@ -1829,6 +1917,8 @@ export interface components {
             priceUnit?: "si" | "us";
             /** @description output ÷ input; default: the efficiency of the house's first heater burning the fuel */
             heaterEfficiency?: number;
+            /** @description run for one of the house's alternatives instead of the house (its fields merged onto the house, and its calendar if it has one) */
+            alternativeId?: number;
             /**
              * @description first day, YYYY-MM-DD; give both dates or neither. Default: the heating season in progress or, between seasons, the next one (1 Sep – 31 May north of the equator, 1 Mar – 30 Nov south); with a temperature log, the whole days the log covers (at most 366)
              * @example 2026-09-01
@@ -2174,6 +2264,8 @@ export interface components {
             priceUnit?: "si" | "us";
             /** @description output ÷ input; default: the efficiency of the house's first heater burning the fuel */
             heaterEfficiency?: number;
+            /** @description run for one of the house's alternatives instead of the house (its fields merged onto the house, and its calendar if it has one) */
+            alternativeId?: number;
             /**
              * @description first day, YYYY-MM-DD; give both dates or neither. Default: the heating season in progress or, between seasons, the next one (1 Sep – 31 May north of the equator, 1 Mar – 30 Nov south); with a temperature log, the whole days the log covers (at most 366)
              * @example 2026-09-01
@@ -2460,6 +2552,84 @@ export interface components {
             notes: string[];
             /** @description may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
             cautions: string[];
+        };
+        FieldProblemDto: {
+            /**
+             * @description the house field at fault
+             * @example ridgeHeightM
+             */
+            field: string;
+            message: string;
+        };
+        AlternativeDto: {
+            id: number;
+            houseId: number;
+            name: string;
+            notes: string | null;
+            /** @description the house fields this alternative changes, merged onto the house as it is when read (JSON Merge Patch: objects such as coverings merge key by key, null inside them removes a key; other values replace the house's). Fields not named follow every later edit of the house. Example: { coverings: { roof: 'poly-double-inflated' } } */
+            patch: {
+                [key: string]: unknown;
+            };
+            /**
+             * @description the fields the patch sets
+             * @example [
+             *       "coverings.roof"
+             *     ]
+             */
+            changedFields: string[];
+            calendar: components["schemas"]["ProductionPeriodDto"][] | null;
+            costAmount: number | null;
+            createdById: number | null;
+            createdByName: string | null;
+            /** @description set when the house as it is now, with this patch, is not a valid house (e.g. ridge under eave) */
+            invalid: components["schemas"]["FieldProblemDto"] | null;
+            /** @description the house with the patch applied; null when invalid */
+            house: components["schemas"]["HouseDto"] | null;
+            createdAt: string;
+            updatedAt: string;
+        };
+        CreateAlternativeDto: {
+            /** @example Inflated double poly */
+            name: string;
+            notes?: string | null;
+            /** @description the house fields this alternative changes, merged onto the house as it is when read (JSON Merge Patch: objects such as coverings merge key by key, null inside them removes a key; other values replace the house's). Fields not named follow every later edit of the house. Example: { coverings: { roof: 'poly-double-inflated' } } */
+            patch?: {
+                [key: string]: unknown;
+            };
+            /** @description instead of patch: the house as the user edited it (all or some of its fields); the patch is what differs from the stored house */
+            house?: {
+                [key: string]: unknown;
+            };
+            /** @description production periods in place of the house's calendar; null or absent = the house's own calendar */
+            calendar?: components["schemas"]["ProductionPeriodDto"][] | null;
+            /** @description installed cost, money in the currency of the farm’s fuel prices; null = not entered */
+            costAmount?: number | null;
+        };
+        UpdateAlternativeDto: {
+            /** @example Inflated double poly */
+            name?: string;
+            notes?: string | null;
+            /** @description the house fields this alternative changes, merged onto the house as it is when read (JSON Merge Patch: objects such as coverings merge key by key, null inside them removes a key; other values replace the house's). Fields not named follow every later edit of the house. Example: { coverings: { roof: 'poly-double-inflated' } } */
+            patch?: {
+                [key: string]: unknown;
+            };
+            /** @description instead of patch: the house as the user edited it (all or some of its fields); the patch is what differs from the stored house */
+            house?: {
+                [key: string]: unknown;
+            };
+            /** @description production periods in place of the house's calendar; null or absent = the house's own calendar */
+            calendar?: components["schemas"]["ProductionPeriodDto"][] | null;
+            /** @description installed cost, money in the currency of the farm’s fuel prices; null = not entered */
+            costAmount?: number | null;
+        };
+        AdoptAlternativeResultDto: {
+            house: components["schemas"]["HouseDto"];
+            /** @description the house as it was, kept as an alternative */
+            previous: components["schemas"]["AlternativeDto"];
+        };
+        DuplicateHouseDto: {
+            /** @description default: the house’s name + " (copy)" */
+            name?: string;
         };
         ColumnProposalDto: {
             /** @description one column holding date and time (or the date alone in a daily file) */
@@ -2763,6 +2933,112 @@ export interface components {
             /** @description why the message did not go; kept in the send log */
             error: string | null;
             recipients: string[];
+        };
+        SideBySideRequestDto: {
+            /** @description 'normals' (default: the farm's monthly climate normals) or { temperatureLogId } to use a logged year instead */
+            climateSource?: "normals" | components["schemas"]["TemperatureLogClimateSourceDto"];
+            /** @description reference-data fuels id; default: the fuel of the house's first heater */
+            fuelId?: string;
+            /** @description money per purchase unit; default: the farm's price for the fuel */
+            pricePerUnit?: number;
+            /**
+             * @description unit the given pricePerUnit is per: 'si' (the fuel's unitSi, default) or 'us' (its unitUs)
+             * @enum {string}
+             */
+            priceUnit?: "si" | "us";
+            /** @description output ÷ input; default: the efficiency of the house's first heater burning the fuel */
+            heaterEfficiency?: number;
+            /**
+             * @description first day, YYYY-MM-DD; give both dates or neither. Default: the heating season in progress or, between seasons, the next one (1 Sep – 31 May north of the equator, 1 Mar – 30 Nov south); with a temperature log, the whole days the log covers (at most 366)
+             * @example 2026-09-01
+             */
+            startDate?: string;
+            /**
+             * @description last day (inclusive), YYYY-MM-DD; at most 366 days from startDate
+             * @example 2027-05-31
+             */
+            endDate?: string;
+            /** @description ids of the house's alternatives to set beside it, in column order (at most 4) */
+            alternativeIds?: number[];
+        };
+        SeasonEstimateDto: {
+            period: components["schemas"]["SeasonPeriodDto"];
+            fuel: components["schemas"]["SeasonFuelDto"];
+            heatLoss: components["schemas"]["SeasonHeatLossDto"];
+            /** @description one row per calendar month the season touches */
+            monthly: components["schemas"]["SeasonMonthDto"][];
+            total: components["schemas"]["SeasonTotalDto"];
+            heaterCapacity: components["schemas"]["SeasonHeaterCapacityDto"];
+            /** @description the hour of highest heat demand; null if no heat was needed */
+            peak: components["schemas"]["SeasonPeakDto"] | null;
+            /** @description share of the season's heat delivered at night (sunset to sunrise) */
+            nightShareOfHeat: number;
+            /** @description heat the sun supplied in place of the heater, kWh */
+            solarOffsetKWh: number;
+            degreeDays: components["schemas"]["DegreeDayCrossCheckDto"];
+            assumptions: components["schemas"]["SeasonAssumptionDto"][];
+            /** @description combustion / electrical safety cautions; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
+            cautions: string[];
+        };
+        SurfaceLightDto: {
+            /** @enum {string} */
+            group: "roof" | "sidewalls" | "endwalls";
+            coveringId: string;
+            coveringLabel: string;
+            /** @description share of daylight the covering lets through (reference value) */
+            lightTransmittance: number;
+            /** @description transmittance ÷ the house's − 1 for the same surface (negative = light lost) */
+            changeFromHouse: number;
+        };
+        VersusHouseDto: {
+            /** @description the house's season cost − this column's, money a year (positive = saves) */
+            yearlySaving: number;
+            /** @description heat delivered, house − this column, kWh a season */
+            heatSavedKWh: number;
+            /** @description heat content of the fuel burnt, house − this column, kWh a season */
+            fuelInputSavedKWh: number;
+            /** @description design-night heat loss, this column − house, W */
+            designHeatLossChangeW: number;
+            /** @description cost ÷ yearly saving, years */
+            paybackYears: number | null;
+            /**
+             * @description 'enter-cost' when no cost is entered; 'never' when it saves nothing
+             * @enum {string}
+             */
+            paybackStatus: "years" | "immediate" | "enter-cost" | "never";
+        };
+        SideBySideColumnDto: {
+            /**
+             * @description 'house' or 'alternative-<id>'
+             * @example alternative-12
+             */
+            key: string;
+            alternativeId: number | null;
+            name: string;
+            /** @description the house fields the alternative sets (none for the house) */
+            changedFields: string[];
+            /** @description true when the alternative brings its own production calendar */
+            ownCalendar: boolean;
+            /** @description installed cost; null = not entered */
+            costAmount: number | null;
+            /** @description set when this alternative cannot be computed now (e.g. ridge under eave after a house edit) */
+            invalid: components["schemas"]["FieldProblemDto"] | null;
+            heating: components["schemas"]["HeatingEstimateDto"] | null;
+            cooling: components["schemas"]["CoolingEstimateDto"] | null;
+            season: components["schemas"]["SeasonEstimateDto"] | null;
+            light: components["schemas"]["SurfaceLightDto"][] | null;
+            /** @description null for the house */
+            versusHouse: components["schemas"]["VersusHouseDto"] | null;
+        };
+        SideBySideDto: {
+            houseId: number;
+            houseName: string;
+            /** @description the house first, then each alternative */
+            columns: components["schemas"]["SideBySideColumnDto"][];
+            /** @description the design night of the house's column */
+            heatingConditionsUsed: components["schemas"]["HeatingConditionsUsedDto"];
+            /** @description the season inputs of the house's column */
+            seasonInputsUsed: components["schemas"]["SeasonInputsUsedDto"];
         };
     };
     responses: never;
@@ -4458,6 +4734,268 @@ export interface operations {
             };
         };
     };
+    AlternativesController_list: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                houseId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["AlternativeDto"][];
+                };
+            };
+            /** @description no such house, or not a member of its farm */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    AlternativesController_create: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                houseId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["CreateAlternativeDto"];
+            };
+        };
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["AlternativeDto"];
+                };
+            };
+            /** @description role lacks alternative:write */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no such house, or not a member of its farm */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description the house with this patch would not be a valid house, or the patch names a field a house does not have (field named: patch.<field>) */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    AlternativesController_get: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                alternativeId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["AlternativeDto"];
+                };
+            };
+            /** @description no such alternative, or not a member of its farm */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    AlternativesController_remove: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                alternativeId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description role lacks alternative:write */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no such alternative, or not a member of its farm */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    AlternativesController_update: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                alternativeId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["UpdateAlternativeDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["AlternativeDto"];
+                };
+            };
+            /** @description role lacks alternative:write */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no such alternative, or not a member of its farm */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description the house with this patch would not be a valid house, or the patch names a field a house does not have (field named: patch.<field>) */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    AlternativesController_adopt: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                alternativeId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["AdoptAlternativeResultDto"];
+                };
+            };
+            /** @description role lacks house:write */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no such alternative, or not a member of its farm */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description the alternative is not a valid house now (field named) */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    AlternativesController_duplicate: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                houseId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["DuplicateHouseDto"];
+            };
+        };
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["HouseDto"];
+                };
+            };
+            /** @description role lacks house:write */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no such house, or not a member of its farm */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
     TemperatureLogsController_inspect: {
         parameters: {
             query?: never;
@@ -5026,6 +5564,59 @@ export interface operations {
                 content: {
                     "application/json": components["schemas"]["ReportSentDto"];
                 };
+            };
+        };
+    };
+    SideBySideController_compare: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                houseId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["SideBySideRequestDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["SideBySideDto"];
+                };
+            };
+            /** @description body fails validation (e.g. more than four alternatives); details per field */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description role lacks estimate:run */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no such house, or not a member of its farm */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description the house's own column cannot be computed (no climate, no fuel price …) or an id is not one of the house's alternatives; field named. An alternative that is not valid now is a column with `invalid`, not an error */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
             };
         };
     };

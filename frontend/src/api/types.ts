@@ -131,3 +131,11 @@ export type UpdateReportRequest = Schemas['UpdateReportDto'];
 export type SendReportRequest = Schemas['SendReportDto'];
 export type ReportSent = Schemas['ReportSentDto'];
 export type ClientFarm = Schemas['ClientFarmDto'];
+
+export type Alternative = Schemas['AlternativeDto'];
+export type CreateAlternativeRequest = Schemas['CreateAlternativeDto'];
+export type UpdateAlternativeRequest = Schemas['UpdateAlternativeDto'];
+export type AdoptAlternativeResult = Schemas['AdoptAlternativeResultDto'];
+export type SideBySideRequest = Schemas['SideBySideRequestDto'];
+export type SideBySide = Schemas['SideBySideDto'];
+export type SideBySideColumn = Schemas['SideBySideColumnDto'];

@@ -49,7 +49,7 @@ export function AppShell() {
         Skip to main content
       </Link>
       <AppBar position="sticky">
-        <Toolbar sx={{ gap: 2 }}>
+        <Toolbar sx={{ gap: { xs: 0.5, sm: 2 }, px: { xs: 1, sm: 2 } }}>
           <Typography
             component={RouterLink}
             to={paths.farms}
@@ -65,7 +65,13 @@ export function AppShell() {
             <Button color="inherit" component={RouterLink} to={paths.messages}>
               Messages
             </Button>
-            <Button color="inherit" component={RouterLink} to={paths.settings}>
+            {/* on a phone, Settings is in the account menu only */}
+            <Button
+              color="inherit"
+              component={RouterLink}
+              to={paths.settings}
+              sx={{ display: { xs: 'none', sm: 'inline-flex' } }}
+            >
               Settings
             </Button>
             {user?.siteRole === 'admin' ? (

@@ -18,6 +18,7 @@ const NewHousePage = lazy(() => import('./routes/new-house-page'));
 const HousePage = lazy(() => import('./routes/house-page'));
 const HouseSeasonPage = lazy(() => import('./routes/house-season-page'));
 const ReportPage = lazy(() => import('./routes/report-page'));
+const SideBySidePage = lazy(() => import('./routes/side-by-side-page'));
 const SettingsPage = lazy(() => import('./routes/settings-page'));
 const AdminUsersPage = lazy(() => import('./routes/admin-users-page'));
 const AdminOutboxPage = lazy(() => import('./routes/admin-outbox-page'));
@@ -48,6 +49,7 @@ export function createAppRouter() {
             { path: 'houses/:houseId', element: <HousePage /> },
             { path: 'houses/:houseId/season', element: <HouseSeasonPage /> },
             { path: 'reports/:reportId', element: <ReportPage /> },
+            { path: 'houses/:houseId/side-by-side', element: <SideBySidePage /> },
             { path: 'settings', element: <SettingsPage /> },
             { path: 'admin/users', element: <AdminUsersPage /> },
             { path: 'admin/outbox', element: <AdminOutboxPage /> },

@@ -53,8 +53,11 @@ export function FormTextField({ name, helperText, ...rest }: BaseProps) {
 /** Present for screen readers, invisible on screen (the unit is already shown after the value). */
 const visuallyHidden = {
   position: 'absolute',
-  width: 1,
-  height: 1,
+  // '1px', not 1: in `sx` the number 1 means 100 %, which made the hidden span as wide as the
+  // field and pushed a phone's page sideways
+  width: '1px',
+  height: '1px',
+  margin: '-1px',
   overflow: 'hidden',
   clip: 'rect(0 0 0 0)',
   whiteSpace: 'nowrap',

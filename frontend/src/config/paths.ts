@@ -10,8 +10,13 @@ export const paths = {
   farm: (farmId: number | string) => `/farms/${farmId}`,
   newHouse: (farmId: number | string) => `/farms/${farmId}/houses/new`,
   house: (houseId: number | string) => `/houses/${houseId}`,
-  houseSeason: (houseId: number | string) => `/houses/${houseId}/season`,
   report: (reportId: number | string) => `/reports/${reportId}`,
+  houseSeason: (houseId: number | string, alternativeId?: number) =>
+    alternativeId ? `/houses/${houseId}/season?alternative=${alternativeId}` : `/houses/${houseId}/season`,
+  houseSideBySide: (houseId: number | string, alternativeIds?: number[]) =>
+    alternativeIds && alternativeIds.length > 0
+      ? `/houses/${houseId}/side-by-side?alternatives=${alternativeIds.join(',')}`
+      : `/houses/${houseId}/side-by-side`,
   settings: '/settings',
   adminUsers: '/admin/users',
   adminOutbox: '/admin/outbox',

@@ -49,5 +49,35 @@ export const theme = createTheme({
     MuiLink: {
       defaultProps: { underline: 'hover' },
     },
+    // On a phone a wide table scrolls inside its card, its first column (the row's name) fixed.
+    MuiTable: {
+      styleOverrides: {
+        root: ({ theme }) => ({
+          [theme.breakpoints.down('md')]: {
+            display: 'block',
+            overflowX: 'auto',
+            maxWidth: '100%',
+            '& tr > :first-of-type': {
+              position: 'sticky',
+              left: 0,
+              zIndex: 1,
+              backgroundColor: theme.palette.background.paper,
+            },
+          },
+        }),
+      },
+    },
+    // Print: the page's content only, without the app's bar and buttons.
+    MuiCssBaseline: {
+      styleOverrides: {
+        '@media print': {
+          '.MuiAppBar-root, .no-print, button': { display: 'none !important' },
+          body: { backgroundColor: '#ffffff' },
+          '.MuiTable-root': { display: 'table', overflow: 'visible' },
+        },
+        // long words (reference ids, covering names) wrap instead of widening the page
+        body: { overflowWrap: 'break-word' },
+      },
+    },
   },
 });

@@ -5,6 +5,7 @@ import * as rowVersions from './0004-row-versions';
 import * as loginAttempts from './0005-login-attempts';
 import * as mailInvitationsPasswordTokens from './0006-mail-invitations-password-tokens';
 import * as reports from './0007-reports';
+import * as houseAlternatives from './0008-house-alternatives';
 import * as weatherYears from './0010-weather-years';
 
 /**
@@ -19,5 +20,6 @@ export const MIGRATIONS = [
   { name: '0005-login-attempts', ...loginAttempts },
   { name: '0006-mail-invitations-password-tokens', ...mailInvitationsPasswordTokens },
   { name: '0007-reports', ...reports },
+  { name: '0008-house-alternatives', ...houseAlternatives },
   { name: '0010-weather-years', ...weatherYears },
 ];

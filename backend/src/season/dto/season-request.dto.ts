@@ -103,6 +103,15 @@ export class SeasonOptionsDto {
 
 export class SeasonRequestDto extends SeasonOptionsDto {
   @ApiPropertyOptional({
+    description:
+      "run for one of the house's alternatives instead of the house (its fields merged onto the house, and its calendar if it has one)",
+  })
+  @IsOptional()
+  @IsInt()
+  @Min(1)
+  alternativeId?: number;
+
+  @ApiPropertyOptional({
     example: '2026-09-01',
     description:
       'first day, YYYY-MM-DD; give both dates or neither. Default: the heating season in progress or, between seasons, the next one (1 Sep – 31 May north of the equator, 1 Mar – 30 Nov south); with a temperature log, the whole days the log covers (at most 366)',

@@ -1,15 +1,17 @@
-import { Box, Breadcrumbs, Button, Grid, Link, Stack, Typography } from '@mui/material';
-import { useQuery } from '@tanstack/react-query';
+import { Alert, Box, Breadcrumbs, Button, Grid, Link, Stack, Typography } from '@mui/material';
+import { useQuery, useQueryClient } from '@tanstack/react-query';
 import { useCallback, useMemo, useState } from 'react';
 import { Link as RouterLink, useNavigate, useParams } from 'react-router-dom';
 import { ConfirmDialog } from '../../components/confirm-dialog';
 import { ErrorAlert, LoadingState } from '../../components/feedback';
 import { useSaveConflict } from '../../components/save-conflict';
+import { UnsavedChangesGuard } from '../../components/unsaved-changes-guard';
 import { paths } from '../../config/paths';
-import type { HouseInput, HouseSpec } from '../../api/types';
+import type { AdoptAlternativeResult, HouseInput, HouseSpec } from '../../api/types';
+import { AlternativesSection, SaveAlternativeDialog, useCreateAlternative } from '../../features/alternatives';
 import { CoolingPanel } from '../../features/cooling-estimate';
 import { farmAllows, farmDetailQueryOptions } from '../../features/farms';
-import { HeatingPanel } from '../../features/heating-estimate';
+import { HeatingPanel, HeatingSummaryBar } from '../../features/heating-estimate';
 import { HouseReports } from '../../features/reports';
 import {
   HouseForm,
@@ -17,6 +19,7 @@ import {
   houseInputOf,
   houseKeys,
   useDeleteHouse,
+  useDuplicateHouse,
   useUpdateHouse,
 } from '../../features/houses';
 import { houseSpecOf } from '../../lib/house-spec';
@@ -47,6 +50,12 @@ export default function HousePage() {
   const deleteHouse = useDeleteHouse();
   const navigate = useNavigate();
   const [confirmingDelete, setConfirmingDelete] = useState(false);
+  const [savingAlternative, setSavingAlternative] = useState(false);
+  // Remounting the form (a new key) drops its edits, e.g. once they are kept as an alternative.
+  const [formGeneration, setFormGeneration] = useState(0);
+  const createAlternative = useCreateAlternative(houseId);
+  const duplicateHouse = useDuplicateHouse(houseId);
+  const queryClient = useQueryClient();
   const houseInput = useMemo(() => (house.data ? houseInputOf(house.data) : undefined), [house.data]);
   // Panels follow the form as the user types (debounced); invalid values keep the last valid ones.
   const [formEdits, setFormEdits] = useState<FormEdits>(NO_EDITS);
@@ -72,7 +81,16 @@ export default function HousePage() {
   if (!house.data || !houseInput || !farm.data || !referenceData.data) return <LoadingState label="Loading house…" />;
 
   const canWrite = farmAllows(farm.data, 'house:write');
+  const canWriteAlternatives = farmAllows(farm.data, 'alternative:write');
   const canRunEstimates = farmAllows(farm.data, 'estimate:run');
+  // the unsaved edits right now (not debounced): what "Save as alternative" keeps and leaving asks about
+  const liveEdits = formEdits.houseId === houseId ? formEdits : NO_EDITS;
+  const hasEdits = liveEdits !== NO_EDITS;
+  const onAdopted = (result: AdoptAlternativeResult) => {
+    queryClient.setQueryData(houseKeys.detail(result.house.id), result.house);
+    void queryClient.invalidateQueries({ queryKey: houseKeys.list(result.house.farmId) });
+    void queryClient.invalidateQueries({ queryKey: ['season'] });
+  };
 
   return (
     <Stack spacing={2}>
@@ -87,28 +105,65 @@ export default function HousePage() {
         <Typography color="text.primary">{house.data.name}</Typography>
       </Breadcrumbs>
       <Typography variant="h1">{house.data.name}</Typography>
-      <Link component={RouterLink} to={paths.houseSeason(house.data.id)} sx={{ alignSelf: 'flex-start' }}>
-        Heating season, fuel budget and measures →
-      </Link>
+      <Stack direction="row" sx={{ flexWrap: 'wrap', columnGap: 3, rowGap: 1 }}>
+        <Link component={RouterLink} to={paths.houseSeason(house.data.id)}>
+          Heating season, fuel budget and measures →
+        </Link>
+        <Link component={RouterLink} to={paths.houseSideBySide(house.data.id)}>
+          Alternatives side by side →
+        </Link>
+      </Stack>
+      <HeatingSummaryBar house={house.data} editedHouse={settledEdits.editedHouse} canRunEstimates={canRunEstimates} />
+      {!canWrite && canWriteAlternatives ? (
+        <Alert severity="info">
+          Your role lets you try changes to this house and save them as an alternative (a proposal the grower can
+          compare and adopt), but not change the house itself.
+        </Alert>
+      ) : null}
 
       <Grid container spacing={3} sx={{ alignItems: 'flex-start' }}>
         <Grid size={{ xs: 12, lg: 7 }}>
           <HouseForm
+            key={formGeneration}
             house={houseInput}
             referenceData={referenceData.data}
-            readOnly={!canWrite}
+            readOnly={!canWrite && !canWriteAlternatives}
+            canSave={canWrite}
             onSubmit={async (input) => {
               await updateHouse.mutateAsync({ body: input, version: house.data.version });
             }}
             onValuesChange={onFormValuesChange}
             actions={
-              canWrite ? (
-                <Button color="error" onClick={() => setConfirmingDelete(true)}>
-                  Delete house
-                </Button>
-              ) : null
+              <>
+                {canWrite ? (
+                  <Button color="error" onClick={() => setConfirmingDelete(true)}>
+                    Delete house
+                  </Button>
+                ) : null}
+                {canWrite ? (
+                  <Button
+                    disabled={duplicateHouse.isPending}
+                    onClick={() => duplicateHouse.mutate({}, { onSuccess: (copy) => navigate(paths.house(copy.id)) })}
+                  >
+                    Duplicate house
+                  </Button>
+                ) : null}
+                {canWriteAlternatives ? (
+                  <Button
+                    variant="outlined"
+                    disabled={!hasEdits || liveEdits.editsInvalid || !liveEdits.editedHouse}
+                    onClick={() => {
+                      createAlternative.reset();
+                      setSavingAlternative(true);
+                    }}
+                  >
+                    Save as alternative
+                  </Button>
+                ) : null}
+              </>
             }
           />
+          <ErrorAlert error={duplicateHouse.error} title="Not duplicated" />
         </Grid>
 
         <Grid size={{ xs: 12, lg: 5 }}>
@@ -118,6 +173,13 @@ export default function HousePage() {
               Results
             </Typography>
             <Stack spacing={2}>
+              <AlternativesSection
+                houseId={house.data.id}
+                canWrite={canWriteAlternatives}
+                canAdopt={canWrite}
+                canRun={canRunEstimates}
+                onAdopted={onAdopted}
+              />
               {/*
                 RESULT PANELS SLOT — add the heating, cooling and season panels here, one per line,
                 each taking the stored house (SI) and its farm, e.g.
@@ -150,10 +212,32 @@ export default function HousePage() {
       </Grid>
 
       {saveConflict}
+      <UnsavedChangesGuard dirty={hasEdits && !savingAlternative && !updateHouse.isPending} />
+      {savingAlternative ? (
+        <SaveAlternativeDialog
+          open
+          busy={createAlternative.isPending}
+          error={createAlternative.error}
+          onClose={() => setSavingAlternative(false)}
+          onSave={({ name, costAmount }) =>
+            liveEdits.editedHouse &&
+            createAlternative.mutate(
+              { name, costAmount, house: { ...liveEdits.editedHouse } },
+              {
+                onSuccess: () => {
+                  setSavingAlternative(false);
+                  setFormEdits(NO_EDITS);
+                  setFormGeneration((generation) => generation + 1);
+                },
+              },
+            )
+          }
+        />
+      ) : null}
       <ConfirmDialog
         open={confirmingDelete}
         title={`Delete ${house.data.name}?`}
-        message="The house and its saved results are removed for every member of the farm. This cannot be undone."
+        message="The house, its production calendar and all its alternatives are removed for every member of the farm. This cannot be undone."
         confirmLabel="Delete house"
         busy={deleteHouse.isPending}
         onClose={() => setConfirmingDelete(false)}

@@ -1,8 +1,9 @@
-import { Breadcrumbs, Link, Stack, Typography } from '@mui/material';
+import { Breadcrumbs, Link, MenuItem, Stack, TextField, Typography } from '@mui/material';
 import { useQuery } from '@tanstack/react-query';
-import { Link as RouterLink, useParams } from 'react-router-dom';
+import { Link as RouterLink, useParams, useSearchParams } from 'react-router-dom';
 import { ErrorAlert, LoadingState } from '../../components/feedback';
 import { paths } from '../../config/paths';
+import { houseAlternativesQueryOptions } from '../../features/alternatives';
 import { farmAllows, farmDetailQueryOptions } from '../../features/farms';
 import { houseDetailQueryOptions } from '../../features/houses';
 import { SeasonView } from '../../features/season';
@@ -16,6 +17,11 @@ export default function HouseSeasonPage() {
   const farmId = house.data?.farmId ?? 0;
   const farm = useQuery({ ...farmDetailQueryOptions(farmId), enabled: house.isSuccess });
   const logs = useQuery({ ...farmTemperatureLogsQueryOptions(farmId), enabled: house.isSuccess });
+  const alternatives = useQuery(houseAlternativesQueryOptions(houseId));
+  const [search, setSearch] = useSearchParams();
+  const alternativeId = Number(search.get('alternative')) || null;
+  const alternative = alternatives.data?.find((alt) => alt.id === alternativeId) ?? null;
+  const valid = (alternatives.data ?? []).filter((alt) => !alt.invalid);
 
   if (house.isError) return <ErrorAlert error={house.error} title="House could not be loaded" />;
   if (farm.isError) return <ErrorAlert error={farm.error} title="Farm could not be loaded" />;
@@ -36,8 +42,35 @@ export default function HouseSeasonPage() {
         </Link>
         <Typography color="text.primary">Season</Typography>
       </Breadcrumbs>
-      <Typography variant="h1">Heating season: {house.data.name}</Typography>
+      <Typography variant="h1">
+        Heating season: {house.data.name}
+        {alternative ? ` — alternative “${alternative.name}”` : ''}
+      </Typography>
+      {valid.length > 0 ? (
+        <TextField
+          select
+          label="Run for"
+          value={alternative ? String(alternative.id) : 'house'}
+          onChange={(event) =>
+            setSearch(event.target.value === 'house' ? {} : { alternative: event.target.value }, { replace: true })
+          }
+          sx={{ maxWidth: 380 }}
+        >
+          <MenuItem value="house">The house as it is</MenuItem>
+          {valid.map((alt) => (
+            <MenuItem key={alt.id} value={String(alt.id)}>
+              Alternative: {alt.name}
+            </MenuItem>
+          ))}
+        </TextField>
+      ) : null}
       <SeasonView
+        key={alternative?.id ?? 'house'}
+        alternative={
+          alternative
+            ? { id: alternative.id, name: alternative.name, ownCalendar: alternative.calendar !== null }
+            : null
+        }
         houseId={houseId}
         canRun={farmAllows(farm.data, 'estimate:run')}
         canEditCalendar={farmAllows(farm.data, 'house:write')}

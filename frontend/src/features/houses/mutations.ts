@@ -37,3 +37,15 @@ export function useDeleteHouse() {
     },
   });
 }
+
+/** A copy of the house with its production calendar and alternatives. */
+export function useDuplicateHouse(houseId: number) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (body: { name?: string }) => api.post<House>(`/api/houses/${houseId}/duplicate`, body),
+    onSuccess: (house) => {
+      queryClient.setQueryData(houseKeys.detail(house.id), house);
+      void queryClient.invalidateQueries({ queryKey: houseKeys.list(house.farmId) });
+    },
+  });
+}

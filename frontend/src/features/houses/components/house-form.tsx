@@ -2,7 +2,7 @@ import AddIcon from '@mui/icons-material/Add';
 import DeleteOutlineIcon from '@mui/icons-material/DeleteOutlined';
 import { Alert, Box, Button, Grid, IconButton, Paper, Stack, Tooltip, Typography } from '@mui/material';
 import { FieldArray, Form, Formik, setIn, useFormikContext, type FormikErrors } from 'formik';
-import { Fragment, useEffect, useMemo, useRef, useState, type ReactNode } from 'react';
+import { Fragment, useEffect, useMemo, useRef, useState, type ReactNode, type RefObject } from 'react';
 import { ApiError, isStaleWrite } from '../../../api/client';
 import type { HouseInput, ReferenceData } from '../../../api/types';
 import { ErrorAlert } from '../../../components/feedback';
@@ -45,6 +45,52 @@ export interface HouseFormProps {
    * submit; `null` while they are invalid. `dirty` says whether they differ from the stored house.
    */
   onValuesChange?: (input: HouseInput | null, state: { dirty: boolean }) => void;
+  /** false: the fields are editable (for what-ifs) but the house cannot be saved (no Save button) */
+  canSave?: boolean;
+}
+
+/**
+ * After a save attempt that validation stopped: moves focus to the first field in error and says
+ * so beside the button (the fields may be far above it, out of sight on a phone).
+ */
+function InvalidSubmitNote({ formRef }: { formRef: RefObject<HTMLFormElement | null> }) {
+  const { submitCount, isSubmitting, isValidating, errors } = useFormikContext<HouseFormValues>();
+  const handled = useRef(0);
+  const [note, setNote] = useState<string | null>(null);
+  const errorCount = countErrors(errors);
+  useEffect(() => {
+    if (isSubmitting || isValidating || submitCount === handled.current) return;
+    handled.current = submitCount;
+    if (errorCount === 0) {
+      setNote(null);
+      return;
+    }
+    const first = formRef.current?.querySelector<HTMLElement>('[aria-invalid="true"]');
+    first?.focus();
+    first?.scrollIntoView?.({ block: 'center' });
+    const label = first instanceof HTMLInputElement ? first.labels?.[0]?.textContent?.replace(/\s*\*\s*$/, '') : null;
+    setNote(
+      `Not saved: ${errorCount === 1 ? 'one field needs' : `${errorCount} fields need`} attention${label ? ` (first: ${label})` : ''}.`,
+    );
+  }, [submitCount, isSubmitting, isValidating, errorCount, formRef]);
+  useEffect(() => {
+    if (errorCount === 0) setNote(null);
+  }, [errorCount]);
+  if (!note) return null;
+  return (
+    <Typography role="alert" color="error" variant="body2" sx={{ alignSelf: 'center' }}>
+      {note}
+    </Typography>
+  );
+}
+
+function countErrors(errors: unknown): number {
+  if (!errors) return 0;
+  if (typeof errors === 'string') return 1;
+  if (Array.isArray(errors)) return errors.reduce((total: number, item) => total + countErrors(item), 0);
+  if (typeof errors === 'object')
+    return Object.values(errors).reduce((total: number, item) => total + countErrors(item), 0);
+  return 0;
 }
 
 function Section({ id, title, children }: { id: string; title: string; children: ReactNode }) {
@@ -134,8 +180,10 @@ export function HouseForm({
   submitLabel = 'Save house',
   actions,
   onValuesChange,
+  canSave = true,
 }: HouseFormProps) {
   const units = useUnits();
+  const formRef = useRef<HTMLFormElement>(null);
   const schema = useMemo(() => houseFormSchema(units), [units]);
   const initialValues = useMemo(() => houseToFormValues(house, units), [house, units]);
   const [submitError, setSubmitError] = useState<unknown>(null);
@@ -196,7 +244,7 @@ export function HouseForm({
               onValuesChange={onValuesChange}
             />
           ) : null}
-          <Form noValidate aria-label="House details">
+          <Form noValidate aria-label="House details" ref={formRef}>
             <Stack spacing={2}>
               {readOnly ? (
                 <Alert severity="info">Your role on this farm lets you read this house but not change it.</Alert>
@@ -408,11 +456,14 @@ export function HouseForm({
               </Section>
 
               {readOnly ? null : (
-                <Stack direction="row" spacing={2} sx={{ justifyContent: 'flex-end' }}>
+                <Stack direction="row" sx={{ justifyContent: 'flex-end', flexWrap: 'wrap', gap: 2 }}>
+                  {canSave ? <InvalidSubmitNote formRef={formRef} /> : null}
                   {actions}
-                  <Button type="submit" variant="contained" disabled={isSubmitting}>
-                    {isSubmitting ? 'Saving…' : submitLabel}
-                  </Button>
+                  {canSave ? (
+                    <Button type="submit" variant="contained" disabled={isSubmitting}>
+                      {isSubmitting ? 'Saving…' : submitLabel}
+                    </Button>
+                  ) : null}
                 </Stack>
               )}
             </Stack>

@@ -36,9 +36,15 @@ import { measuresQueryOptions } from '../queries';
 export function MeasuresPanel({
   houseId,
   climateSource,
+  alternativeId,
+  priceFields = {},
 }: {
   houseId: number;
+  /** a fuel-price what-if of the page (not saved) */
+  priceFields?: Pick<SeasonRequest, 'pricePerUnit' | 'priceUnit'>;
   climateSource: SeasonRequest['climateSource'];
+  /** run for one of the house's alternatives */
+  alternativeId?: number;
 }) {
   const units = useUnits();
   // [] asks the API for its default measures at cost 0; after that, the user's list and costs.
@@ -46,7 +52,12 @@ export function MeasuresPanel({
   const [rows, setRows] = useState<MeasureRow[] | null>(null);
   const [kindToAdd, setKindToAdd] = useState<MeasureKind>('second-poly-layer');
   const comparison = useQuery({
-    ...measuresQueryOptions(houseId, { measures: requested, climateSource }),
+    ...measuresQueryOptions(houseId, {
+      ...priceFields,
+      measures: requested,
+      climateSource,
+      ...(alternativeId ? { alternativeId } : {}),
+    }),
     placeholderData: keepPreviousData,
   });
 

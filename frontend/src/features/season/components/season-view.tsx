@@ -4,7 +4,8 @@ import { useCallback, useState } from 'react';
 import type { SeasonRequest } from '../../../api/types';
 import { ErrorAlert, LoadingState } from '../../../components/feedback';
 import { referenceDataQueryOptions, referenceRows } from '../../../lib/reference-data';
-import type { FuelUnits } from '../../../lib/units';
+import { useDebouncedValue } from '../../../lib/use-debounced-value';
+import { useUnits, type FuelUnits } from '../../../lib/units';
 import { houseSeasonQueryOptions } from '../queries';
 import { nightStartDate } from '../season-chart-data';
 import { CalendarEditor } from './calendar-editor';
@@ -28,14 +29,28 @@ export interface SeasonViewProps {
   /** house:write */
   canEditCalendar: boolean;
   logs: ClimateLogOption[];
+  /** run the season and the measures for one of the house's alternatives instead of the house */
+  alternative?: { id: number; name: string; ownCalendar: boolean } | null;
 }
 
 /** The house's heating season: one night, the hourly season beside the degree-day check, the calendar, measures. */
-export function SeasonView({ houseId, canRun, canEditCalendar, logs }: SeasonViewProps) {
+export function SeasonView({ houseId, canRun, canEditCalendar, logs, alternative = null }: SeasonViewProps) {
   const [climateChoice, setClimateChoice] = useState('normals');
   const climateSource: SeasonRequest['climateSource'] =
     climateChoice === 'normals' ? 'normals' : { temperatureLogId: Number(climateChoice) };
-  const request: SeasonRequest = { climateSource };
+  // A fuel-price what-if is this page's own scenario: sent with each run, never saved to the farm.
+  const [priceWhatIf, setPriceWhatIf] = useState('');
+  const settledPrice = useDebouncedValue(priceWhatIf, 500);
+  const whatIfPrice = settledPrice.trim() === '' ? null : Number(settledPrice);
+  const whatIfValid = whatIfPrice === null || (Number.isFinite(whatIfPrice) && whatIfPrice >= 0 && whatIfPrice <= 1e6);
+  const units = useUnits();
+  const priceFields: Pick<SeasonRequest, 'pricePerUnit' | 'priceUnit'> =
+    whatIfPrice !== null && whatIfValid ? { pricePerUnit: whatIfPrice, priceUnit: units.system } : {};
+  const request: SeasonRequest = {
+    climateSource,
+    ...priceFields,
+    ...(alternative ? { alternativeId: alternative.id } : {}),
+  };
   const season = useQuery({ ...houseSeasonQueryOptions(houseId, request), enabled: canRun });
   const referenceData = useQuery(referenceDataQueryOptions());
   const fuelUnitsFor = useCallback(
@@ -82,6 +97,20 @@ export function SeasonView({ houseId, canRun, canEditCalendar, logs }: SeasonVie
           Logged temperatures limit the season to the days the log covers.
         </Typography>
       </Stack>
+      <Stack direction={{ xs: 'column', sm: 'row' }} spacing={2} sx={{ alignItems: { sm: 'center' } }}>
+        <TextField
+          label={`What if fuel cost (per ${season.data ? units.fuelUnit(season.data.fuel) : 'purchase unit'})`}
+          value={priceWhatIf}
+          onChange={(event) => setPriceWhatIf(event.target.value)}
+          inputMode="decimal"
+          error={!whatIfValid}
+          helperText={whatIfValid ? 'Empty = the farm’s price' : 'A number from 0 up'}
+          sx={{ maxWidth: 380 }}
+        />
+        <Typography variant="body2" color="text.secondary">
+          A what-if for this page only: the farm&apos;s shared fuel prices are not changed (set them on the farm page).
+        </Typography>
+      </Stack>
 
       {season.isPending ? <LoadingState label="Computing the season hour by hour…" /> : null}
       <ErrorAlert error={season.error} title="The season could not be computed" />
@@ -96,17 +125,30 @@ export function SeasonView({ houseId, canRun, canEditCalendar, logs }: SeasonVie
             </Grid>
           </Grid>
           <FuelCautions cautions={season.data.cautions} />
-          <NightDemandPanel
-            key={`${nightDate}-${climateChoice}`}
-            houseId={houseId}
-            initialDate={nightDate}
-            climateSource={climateSource}
-            fuelUnitsFor={fuelUnitsFor}
-          />
+          {alternative ? null : (
+            <NightDemandPanel
+              key={`${nightDate}-${climateChoice}`}
+              houseId={houseId}
+              initialDate={nightDate}
+              climateSource={climateSource}
+              fuelUnitsFor={fuelUnitsFor}
+            />
+          )}
         </>
       ) : null}
+      {alternative?.ownCalendar ? (
+        <Alert severity="info">
+          “{alternative.name}” brings its own production calendar; the house&apos;s calendar below is not used for it.
+        </Alert>
+      ) : null}
       <CalendarEditor houseId={houseId} canEdit={canEditCalendar} />
-      <MeasuresPanel key={climateChoice} houseId={houseId} climateSource={climateSource} />
+      <MeasuresPanel
+        key={`${climateChoice}-${alternative?.id ?? 'house'}-${priceFields.pricePerUnit ?? 'farm'}`}
+        houseId={houseId}
+        climateSource={climateSource}
+        priceFields={priceFields}
+        alternativeId={alternative?.id}
+      />
     </Stack>
   );
 }
