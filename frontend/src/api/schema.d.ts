@@ -1622,6 +1622,11 @@ export interface components {
             lowerByK?: number;
             /** @description later-start: days */
             delayDays?: number;
+            /**
+             * @description heater-efficiency: the kind of heater the units are replaced by (default: condensing); its typical efficiency applies unless `efficiency` is given
+             * @enum {string}
+             */
+            heaterType?: "gravity-vented" | "power-vented" | "separated-combustion" | "condensing" | "unvented" | "boiler" | "electric";
             /** @description heater-efficiency / fuel-switch: efficiency of the new heaters */
             efficiency?: number;
             /** @description fuel-switch: the new fuel and its price (without it the measure is reported as not applicable) */

@@ -1,3 +1,4 @@
+import type { HeaterType } from '../vocabulary';
 import type { HouseSpec } from '../house.types';
 import { referenceRow, type ReferenceData, type ReferenceRow } from '../reference-data.types';
 import type { SeasonVariant, VariantOptions } from '../estimate-season';
@@ -12,7 +13,7 @@ export interface MeasureDefaultsRow extends ReferenceRow {
   defaultAirLeakageClassId?: string;
   defaultLowerByK?: number;
   defaultDelayDays?: number;
-  defaultEfficiency?: number;
+  defaultHeaterType?: HeaterType;
   shadeFraction?: number;
 }
 

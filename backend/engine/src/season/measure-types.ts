@@ -1,3 +1,4 @@
+import type { HeaterType } from '../vocabulary';
 import type { FuelPrice } from './fuel';
 import type { FuelAmount } from './season-types';
 
@@ -24,7 +25,12 @@ export type Measure =
   | (MeasureBase & { kind: 'sealing'; airLeakageClassId?: string; airChangesPerHour?: number })
   | (MeasureBase & { kind: 'night-setpoint-lower'; lowerByK?: number })
   | (MeasureBase & { kind: 'later-start'; delayDays?: number })
-  | (MeasureBase & { kind: 'heater-efficiency'; efficiency?: number })
+  | (MeasureBase & {
+      kind: 'heater-efficiency';
+      /** the kind of heater the units are replaced by; its typical efficiency applies unless `efficiency` is given */
+      heaterType?: HeaterType;
+      efficiency?: number;
+    })
   | (MeasureBase & { kind: 'fuel-switch'; fuel?: FuelPrice; efficiency?: number });
 
 export type MeasureKind = Measure['kind'];

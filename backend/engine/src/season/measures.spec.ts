@@ -87,6 +87,29 @@ describe('measure comparison', () => {
     expect(heater.yearlyMoneySaved).toBeCloseTo(comparison.baseline.cost * (1 - 0.8 / 0.92), 6);
   });
 
+  it('defaults the heater upgrade to a condensing unit heater, and lets the user pick the target type', () => {
+    // Recalled ranges (heater-types.json, memory; Sanford, UW Extension A3907-02): condensing
+    // units 0.90–0.93 (middle 0.915), separated-combustion units that do not condense 0.80–0.83
+    // (middle 0.815). The demo house burns at 0.80, so the saving is 1 − 0.80/0.915 = 12.6 % of
+    // the fuel bill for a condensing unit and 1 − 0.80/0.815 = 1.8 % for a separated-combustion one.
+    const upgrades = compareMeasures(
+      input,
+      [{ kind: 'heater-efficiency' }, { kind: 'heater-efficiency', heaterType: 'separated-combustion' }],
+      ref,
+      sunCache,
+    ).measures.sort((a, b) => a.index - b.index);
+    const [condensing, separated] = upgrades;
+    expect(condensing.label).toBe('Replace heaters with condensing unit heaters');
+    expect(condensing.description).toMatch(/Condensing unit heater/);
+    expect(condensing.description).toMatch(/80 % → 92 %/);
+    expect(condensing.yearlyMoneySaved / comparison.baseline.cost).toBeCloseTo(1 - 0.8 / 0.915, 6);
+    expect(separated.description).toMatch(/Separated-combustion unit heater \(non-condensing\)/);
+    expect(separated.yearlyMoneySaved / comparison.baseline.cost).toBeCloseTo(1 - 0.8 / 0.815, 6);
+    expect(() =>
+      compareMeasures(input, [{ kind: 'heater-efficiency', heaterType: 'heat-pump' as never }], ref, sunCache),
+    ).toThrow(expect.objectContaining({ field: 'measures[0].heaterType' }));
+  });
+
   it('reports another fuel’s quantity in its own units and no fuel saving in the old units', () => {
     const gas = byKind.get('fuel-switch')!;
     expect(gas.season.fuelId).toBe('natural-gas');

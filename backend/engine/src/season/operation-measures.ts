@@ -6,6 +6,7 @@ import { fuelCost, fuelForHeat, validateFuelPrice, validateHeaterEfficiency, typ
 import { measureDefaults, notApplicable, percent, type MeasureContext, type PreparedMeasure } from './measure-plan';
 import type { Measure } from './measure-types';
 import { delayFirstHeatedPeriod } from './production-calendar';
+import { heaterTypeRow } from '../heating/heating-reference';
 
 /** Measures that change how the house is run or heated: setpoints, dates, heaters, fuel. */
 
@@ -73,8 +74,11 @@ export function planHeaterEfficiency(
 ): PreparedMeasure {
   const { field, base, ref } = context;
   const defaults = measureDefaults(ref, 'heater-efficiency');
-  const efficiency = validateHeaterEfficiency(measure.efficiency ?? defaults.defaultEfficiency!, `${field}.efficiency`);
-  const description = `heater efficiency ${percent(base.heaterEfficiency)} → ${percent(efficiency)}`;
+  const heaterType = measure.heaterType ?? defaults.defaultHeaterType;
+  if (!heaterType) throw new Error('reference-data/measures.json heater-efficiency needs a defaultHeaterType');
+  const typeRow = heaterTypeRow(ref, heaterType, `${field}.heaterType`);
+  const efficiency = validateHeaterEfficiency(measure.efficiency ?? typeRow.typicalEfficiency, `${field}.efficiency`);
+  const description = `heaters replaced (${typeRow.label}): efficiency ${percent(base.heaterEfficiency)} → ${percent(efficiency)}`;
   if (!(efficiency > base.heaterEfficiency)) {
     return notApplicable(
       base,

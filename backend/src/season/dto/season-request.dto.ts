@@ -17,7 +17,7 @@ import {
   ValidateNested,
   type ValidationOptions,
 } from 'class-validator';
-import { BOUNDS } from '@thermbay/engine/vocabulary';
+import { BOUNDS, HEATER_TYPES, type HeaterType } from '@thermbay/engine/vocabulary';
 import type { PriceUnit } from '@thermbay/engine/season/fuel';
 import { MEASURE_KINDS, type MeasureKind } from '@thermbay/engine/season/measures';
 
@@ -233,6 +233,15 @@ export class MeasureDto {
   @Min(1)
   @Max(180)
   delayDays?: number;
+
+  @ApiPropertyOptional({
+    enum: HEATER_TYPES,
+    description:
+      'heater-efficiency: the kind of heater the units are replaced by (default: condensing); its typical efficiency applies unless `efficiency` is given',
+  })
+  @IsOptional()
+  @IsIn(HEATER_TYPES)
+  heaterType?: HeaterType;
 
   @ApiPropertyOptional({
     minimum: BOUNDS.heaterEfficiency.min,
