@@ -194,7 +194,8 @@ export function estimateCooling(input: CoolingInput, ref: ReferenceData): Coolin
   const winterFraction = ventilationValue(ref, 'winter-ventilation', 'fraction');
   const winter = winterVentilation({
     fractionOfSummerRate: winterFraction.value,
-    summerRequiredFlowM3PerS: capacity.requiredFlowM3PerS,
+    // base rate × elevation only: the light and temperature-rise factors are summer corrections
+    summerBaseFlowM3PerS: capacity.baseRateM3PerSM2 * capacity.factors.elevation * geometry.floorAreaM2,
     volumeM3: geometry.volumeM3,
     indoorC: house.setpoints.nightHeatingC,
     outdoorC: winterDesignC,
@@ -350,7 +351,7 @@ export function estimateCooling(input: CoolingInput, ref: ReferenceData): Coolin
   sourced('stageStepK', 'Temperature step between fan stages', stagingRow.stageStepK as number, 'K', stagingRow);
   sourced(
     'winterVentilationFraction',
-    'Winter humidity ventilation as a share of the summer rate',
+    'Winter humidity ventilation as a share of the summer base rate (base rate × elevation factor; no light or temperature-rise factor)',
     winterFraction.value,
     '–',
     winterFraction.row,
