@@ -15,7 +15,7 @@ import { designFlowM3PerS, METRES_PER_FOOT, requiredCapacity, type CapacityResul
 import { thermostatStaging, type StagingResult } from './cooling/staging';
 import { winterVentilation, type WinterVentilation } from './cooling/winter-ventilation';
 import { EngineInputError, requireInRange } from './errors';
-import { computeHouseGeometry } from './geometry/house-geometry';
+import { computeHouseGeometry, opaqueEnvelopeShare } from './geometry/house-geometry';
 import { heatLossCoefficients } from './heating/heat-loss';
 import type { HouseSpec } from './house.types';
 import { dryAirDensityKgPerM3, standardAtmosphericPressurePa } from './psychrometrics';
@@ -160,7 +160,8 @@ export function estimateCooling(input: CoolingInput, ref: ReferenceData): Coolin
       dailyRangeK: conditions.dailyRangeK,
       summerDesignWetBulbC: conditions.summerDesignWetBulbC,
       floorAreaM2: geometry.floorAreaM2,
-      roofLightTransmittance: roofCovering.lightTransmittance,
+      // the opaque kneewall's share of the envelope passes no light
+      roofLightTransmittance: roofCovering.lightTransmittance * (1 - opaqueEnvelopeShare(geometry)),
       transpirationFraction,
       conductanceWPerK,
       installedFlowM3PerS: exchange.installedFlowM3PerS,

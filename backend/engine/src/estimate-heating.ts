@@ -48,6 +48,8 @@ export interface HeatingEstimate {
     roofAreaM2: number;
     sidewallAreaM2: number;
     endwallAreaM2: number;
+    /** opaque kneewall on the sidewalls and endwalls, m² (0 without one) */
+    kneewallAreaM2: number;
     coverAreaM2: number;
     perimeterM: number;
     volumeM3: number;
@@ -169,6 +171,18 @@ export function estimateHeating(input: HeatingEstimateInput, ref: ReferenceData)
             row.uWPerM2K,
             'W/(m²·K)',
           ),
+    );
+  }
+  const kneewallRow = coefficients.rows.kneewall;
+  if (kneewallRow && geometry.kneewallAreaM2 > 0) {
+    assumptions.push(
+      fromRow(
+        kneewallRow,
+        'kneewall.uWPerM2K',
+        `U-value, kneewall ${metres(geometry.kneewallHeightM)} high: ${kneewallRow.label}`,
+        kneewallRow.uWPerM2K,
+        'W/(m²·K)',
+      ),
     );
   }
   const curtainRow = coefficients.rows.curtain;
@@ -369,6 +383,7 @@ export function estimateHeating(input: HeatingEstimateInput, ref: ReferenceData)
       roofAreaM2: geometry.roofAreaM2,
       sidewallAreaM2: geometry.sidewallAreaM2,
       endwallAreaM2: geometry.endwallAreaM2,
+      kneewallAreaM2: geometry.kneewallAreaM2,
       coverAreaM2: geometry.coverAreaM2,
       perimeterM: geometry.perimeterM,
       volumeM3: geometry.volumeM3,

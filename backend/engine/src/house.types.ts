@@ -46,6 +46,14 @@ export interface HouseSpec {
   /** a measured air-change rate that replaces the leakage class's rate, 1/h */
   airChangesPerHourOverride?: number | null;
   perimeterInsulated: boolean;
+  /**
+   * height of the band at the foot of the sidewalls and endwalls that is (or would be) a kneewall,
+   * m; 0 or absent for none. It is opaque only when `kneewallId` names a construction: without one
+   * the glazing reaches the ground (and the insulation measure knows how high to build).
+   */
+  kneewallHeightM?: number | null;
+  /** reference-data/kneewalls.json id of the kneewall's construction, or null for glazing to the ground */
+  kneewallId?: string | null;
   /** reference-data/curtains.json id of a thermal curtain drawn at night, or null for none */
   curtainId?: string | null;
   heaters: HeaterGroup[];

@@ -712,6 +712,10 @@ export interface components {
             /** @description measured air changes per hour */
             airChangesPerHourOverride?: number | null;
             perimeterInsulated: boolean;
+            /** @description height of the band at the foot of the sidewalls and endwalls, m (at most the eave height); opaque when kneewallId names a construction, glazing otherwise */
+            kneewallHeightM?: number | null;
+            /** @description reference-data kneewalls id of the kneewall construction; null: glazing to the ground */
+            kneewallId?: string | null;
             /** @description reference-data curtains id, drawn at night */
             curtainId?: string | null;
             heaters: components["schemas"]["HeaterGroupDto"][];
@@ -745,6 +749,10 @@ export interface components {
             /** @description measured air changes per hour */
             airChangesPerHourOverride?: number | null;
             perimeterInsulated: boolean;
+            /** @description height of the band at the foot of the sidewalls and endwalls, m (at most the eave height); opaque when kneewallId names a construction, glazing otherwise */
+            kneewallHeightM?: number | null;
+            /** @description reference-data kneewalls id of the kneewall construction; null: glazing to the ground */
+            kneewallId?: string | null;
             /** @description reference-data curtains id, drawn at night */
             curtainId?: string | null;
             heaters: components["schemas"]["HeaterGroupDto"][];
@@ -774,6 +782,10 @@ export interface components {
             /** @description measured air changes per hour */
             airChangesPerHourOverride?: number | null;
             perimeterInsulated?: boolean;
+            /** @description height of the band at the foot of the sidewalls and endwalls, m (at most the eave height); opaque when kneewallId names a construction, glazing otherwise */
+            kneewallHeightM?: number | null;
+            /** @description reference-data kneewalls id of the kneewall construction; null: glazing to the ground */
+            kneewallId?: string | null;
             /** @description reference-data curtains id, drawn at night */
             curtainId?: string | null;
             heaters?: components["schemas"]["HeaterGroupDto"][];
@@ -831,6 +843,10 @@ export interface components {
             /** @description measured air changes per hour */
             airChangesPerHourOverride?: number | null;
             perimeterInsulated: boolean;
+            /** @description height of the band at the foot of the sidewalls and endwalls, m (at most the eave height); opaque when kneewallId names a construction, glazing otherwise */
+            kneewallHeightM?: number | null;
+            /** @description reference-data kneewalls id of the kneewall construction; null: glazing to the ground */
+            kneewallId?: string | null;
             /** @description reference-data curtains id, drawn at night */
             curtainId?: string | null;
             heaters: components["schemas"]["HeaterGroupDto"][];
@@ -862,9 +878,11 @@ export interface components {
             roofAreaM2: number;
             /** @description m² */
             sidewallAreaM2: number;
-            /** @description m² */
+            /** @description glazed endwall area, m² */
             endwallAreaM2: number;
-            /** @description roof + sidewalls + endwalls, m² */
+            /** @description opaque kneewall on the sidewalls and endwalls, m² (0 without one) */
+            kneewallAreaM2: number;
+            /** @description roof + sidewalls + endwalls + kneewall, m² */
             coverAreaM2: number;
             /** @description outside perimeter of the house at the ground, m */
             perimeterM: number;
@@ -873,7 +891,7 @@ export interface components {
         };
         HeatLossComponentDto: {
             /** @enum {string} */
-            key: "roof" | "sidewalls" | "endwalls" | "perimeter" | "infiltration";
+            key: "roof" | "sidewalls" | "endwalls" | "kneewall" | "perimeter" | "infiltration";
             label: string;
             /** @description area (m²), perimeter (m) or volume (m³), see quantityUnit */
             quantity: number;
@@ -899,6 +917,8 @@ export interface components {
             totalW: number;
             /** @description through the coverings, W */
             coveringW: number;
+            /** @description through the opaque kneewall, W (0 without one) */
+            kneewallW: number;
             /** @description through the perimeter, W */
             perimeterW: number;
             /** @description air leakage, W */
@@ -1125,6 +1145,8 @@ export interface components {
         };
         WinterVentilationDto: {
             fractionOfSummerRate: number;
+            /** @description m³/s: the summer rate the fraction is taken of (base rate × floor area × elevation factor only) */
+            summerBaseFlowM3PerS: number;
             /** @description m³/s */
             flowM3PerS: number;
             /** @description 1/h */
@@ -1612,6 +1634,10 @@ export interface components {
             surfaces?: ("roof" | "sidewalls")[];
             /** @description second-poly-layer: the coverings id the surfaces become */
             coveringId?: string;
+            /** @description perimeter-insulation: kneewalls id the kneewall is built of (default 2 in foam board) */
+            kneewallId?: string;
+            /** @description perimeter-insulation: kneewall height, m, where the house gives none (default 0.91 m) */
+            kneewallHeightM?: number;
             /** @description thermal-curtain: curtains id */
             curtainId?: string;
             /** @description sealing: air-leakage class to reach */
@@ -1675,8 +1701,11 @@ export interface components {
             unitUs: string;
         };
         MeasureLightChangeDto: {
-            /** @enum {string} */
-            surface: "roof" | "sidewalls";
+            /**
+             * @description 'kneewall': light through the whole envelope, an opaque kneewall passing none
+             * @enum {string}
+             */
+            surface: "roof" | "sidewalls" | "kneewall";
             /** @description light transmittance before, 0–1 */
             before: number;
             /** @description light transmittance after, 0–1 */

@@ -54,6 +54,7 @@ export const demoHouseBHeating: HouseHeatingEstimate = {
     roofAreaM2: 231.901468756456,
     sidewallAreaM2: 71.338318,
     endwallAreaM2: 33.80459458747329,
+    kneewallAreaM2: 0,
     coverAreaM2: 337.0443813439293,
     perimeterM: 70.714,
     volumeM3: 494.57812111202793,
@@ -64,6 +65,7 @@ export const demoHouseBHeating: HouseHeatingEstimate = {
     deltaTK: 39,
     totalW: 96639.48500069606,
     coveringW: 87675.35491899632,
+    kneewallW: 0,
     perimeterW: 3805.82748,
     infiltrationW: 5158.302601699728,
     curtainApplied: false,
@@ -577,6 +579,7 @@ export const demoHouseBCooling: HouseCoolingEstimate = {
   },
   winterVentilation: {
     fractionOfSummerRate: 0.25,
+    summerBaseFlowM3PerS: 7.5469297026560004,
     flowM3PerS: 1.8867324256640001,
     airChangesPerHour: 13.733395074409035,
     heatCostW: 88910.66154474112,

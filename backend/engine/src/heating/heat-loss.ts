@@ -12,12 +12,13 @@ import {
   type AirPropertyRow,
   type CoveringRow,
   type CurtainRow,
+  type KneewallRow,
   type PerimeterRow,
 } from './heating-reference';
 
 /**
  * Steady-state heat loss of a closed house:
- *   UA = Σ U_group · A_group  +  F · perimeter  +  ρ · cp · V · ACH / 3600      (W/K)
+ *   UA = Σ U_group · A_group  +  U_kneewall · A_kneewall  +  F · perimeter  +  ρ · cp · V · ACH / 3600   (W/K)
  *   Q  = UA · (T_inside − T_outside)                                            (W)
  * A drawn curtain lowers the U of the surfaces it shields by its fractional reduction s:
  * U_closed = U · (1 − s). It is credited on the roof (the curtain runs under it at gutter height)
@@ -38,6 +39,8 @@ export interface HeatLossCoefficients {
   /** U · A per surface group, W/K, after any curtain */
   coveringWPerK: Record<SurfaceGroup, number>;
   coveringTotalWPerK: number;
+  /** U · A of the opaque kneewall, W/K (0 without one) */
+  kneewallWPerK: number;
   perimeterWPerK: number;
   infiltrationWPerK: number;
   totalWPerK: number;
@@ -61,6 +64,7 @@ export interface HeatLossCoefficients {
     airLeakage: AirLeakageRow;
     perimeter: PerimeterRow;
     curtain: CurtainRow | null;
+    kneewall: KneewallRow | null;
     specificHeat: AirPropertyRow;
   };
 }
@@ -129,6 +133,13 @@ export function heatLossCoefficients(
   }
   const coveringTotalWPerK = SURFACE_GROUPS.reduce((sum, group) => sum + coveringWPerK[group], 0);
 
+  const kneewall =
+    house.kneewallId === undefined || house.kneewallId === null || house.kneewallId === ''
+      ? null
+      : chosenRow<KneewallRow>(ref, 'kneewalls', house.kneewallId, 'house.kneewallId');
+  // the kneewall runs below the curtain and keeps its U when the curtain is drawn
+  const kneewallWPerK = kneewall ? kneewall.uWPerM2K * geometry.kneewallAreaM2 : 0;
+
   if (typeof house.perimeterInsulated !== 'boolean') {
     throw new EngineInputError('house.perimeterInsulated', 'house.perimeterInsulated must be true or false');
   }
@@ -157,9 +168,10 @@ export function heatLossCoefficients(
   return {
     coveringWPerK,
     coveringTotalWPerK,
+    kneewallWPerK,
     perimeterWPerK,
     infiltrationWPerK,
-    totalWPerK: coveringTotalWPerK + perimeterWPerK + infiltrationWPerK,
+    totalWPerK: coveringTotalWPerK + kneewallWPerK + perimeterWPerK + infiltrationWPerK,
     effectiveUWPerM2K,
     coveringUWPerM2K: coverings.uWPerM2K,
     areasM2,
@@ -170,11 +182,11 @@ export function heatLossCoefficients(
     curtainReduction,
     curtainApplied,
     overridesUsed: { coveringU: coverings.overridden, airChangesPerHour: airChangesPerHourOverridden },
-    rows: { coverings: coverings.rows, airLeakage, perimeter, curtain, specificHeat },
+    rows: { coverings: coverings.rows, airLeakage, perimeter, curtain, kneewall, specificHeat },
   };
 }
 
-export type HeatLossComponentKey = 'roof' | 'sidewalls' | 'endwalls' | 'perimeter' | 'infiltration';
+export type HeatLossComponentKey = 'roof' | 'sidewalls' | 'endwalls' | 'kneewall' | 'perimeter' | 'infiltration';
 
 export interface HeatLossComponent {
   key: HeatLossComponentKey;
@@ -195,6 +207,7 @@ export interface HeatLossBreakdown {
   deltaTK: number;
   totalW: number;
   coveringW: number;
+  kneewallW: number;
   perimeterW: number;
   infiltrationW: number;
   curtainApplied: boolean;
@@ -246,6 +259,18 @@ export function designHeatLoss(
         coefficients.coveringWPerK[group],
       ),
     ),
+    ...(coefficients.rows.kneewall && geometry.kneewallAreaM2 > 0
+      ? [
+          component(
+            'kneewall',
+            `Kneewall (${coefficients.rows.kneewall.label})`,
+            geometry.kneewallAreaM2,
+            'm2',
+            coefficients.rows.kneewall.uWPerM2K,
+            coefficients.kneewallWPerK,
+          ),
+        ]
+      : []),
     component(
       'perimeter',
       coefficients.rows.perimeter.label ?? 'Perimeter',
@@ -270,6 +295,7 @@ export function designHeatLoss(
     deltaTK,
     totalW: coefficients.totalWPerK * heatingDeltaTK,
     coveringW: coefficients.coveringTotalWPerK * heatingDeltaTK,
+    kneewallW: coefficients.kneewallWPerK * heatingDeltaTK,
     perimeterW: coefficients.perimeterWPerK * heatingDeltaTK,
     infiltrationW: coefficients.infiltrationWPerK * heatingDeltaTK,
     curtainApplied: coefficients.curtainApplied,

@@ -26,6 +26,12 @@ export interface PerimeterRow extends ReferenceRow {
   wPerMK: number;
 }
 
+export interface KneewallRow extends ReferenceRow {
+  label: string;
+  uWPerM2K: number;
+  insulated?: boolean;
+}
+
 export interface CurtainRow extends ReferenceRow {
   label: string;
   uReduction: number;

@@ -3,8 +3,10 @@ import { BOUNDS, quantityToken, type SurfaceGroup } from '../vocabulary';
 import type { HouseSpec } from '../house.types';
 import { referenceRow, type ReferenceData, type ReferenceRow } from '../reference-data.types';
 import { coveringLightRow, type CoveringLightRow } from './house-heat-loss';
+import { computeHouseGeometry, opaqueEnvelopeShare } from '../geometry/house-geometry';
+import { chosenRow, type KneewallRow } from '../heating/heating-reference';
 import { measureDefaults, notApplicable, percent, type MeasureContext, type PreparedMeasure } from './measure-plan';
-import type { Measure } from './measure-types';
+import type { LightChange, Measure } from './measure-types';
 
 /** Measures that change the house's envelope: a second layer, a curtain, perimeter insulation, sealing. */
 
@@ -136,22 +138,70 @@ export function planCurtain(
   };
 }
 
+/**
+ * Insulate the edge and the kneewall: the perimeter takes the insulated factor, and the kneewall
+ * is built of the target board (2 in foam by default) at the house's kneewall height, or at the
+ * default height where the house gives none. Where that band was glazing it now passes no light.
+ */
 export function planPerimeterInsulation(
   measure: Extract<Measure, { kind: 'perimeter-insulation' }>,
   context: MeasureContext,
 ): PreparedMeasure {
-  const { base, house, withHouse } = context;
-  if (house.perimeterInsulated) {
-    return notApplicable(base, 'perimeter and kneewall insulated', 'The perimeter is already insulated.');
+  const { field, base, house, ref, withHouse } = context;
+  const defaults = measureDefaults(ref, 'perimeter-insulation');
+  const targetId = measure.kneewallId ?? defaults.targetKneewallId;
+  if (!targetId) throw new Error('reference-data/measures.json perimeter-insulation needs a targetKneewallId');
+  const target = chosenRow<KneewallRow>(ref, 'kneewalls', targetId, `${field}.kneewallId`);
+  const houseHeightM =
+    typeof house.kneewallHeightM === 'number' && house.kneewallHeightM > 0 ? house.kneewallHeightM : null;
+  const heightM = requireInRange(
+    `${field}.kneewallHeightM`,
+    houseHeightM ?? measure.kneewallHeightM ?? defaults.defaultKneewallHeightM,
+    BOUNDS.kneewallHeightM.min,
+    Math.min(BOUNDS.kneewallHeightM.max, house.eaveHeightM),
+  );
+  const present = house.kneewallId
+    ? chosenRow<KneewallRow>(ref, 'kneewalls', house.kneewallId, 'house.kneewallId')
+    : null;
+  const kneewallBetter = !present || target.uWPerM2K < present.uWPerM2K || presentHeight(house) < heightM;
+  const description = `perimeter insulated and kneewall of ${target.label} (${quantityToken('length', heightM)} high)`;
+  if (house.perimeterInsulated && !kneewallBetter) {
+    return notApplicable(
+      base,
+      description,
+      `The perimeter is already insulated and the kneewall (${present!.label}) loses as little heat as ${target.label} or less.`,
+    );
   }
-  return {
-    variant: withHouse({ perimeterInsulated: true }),
-    options: {},
-    description: 'perimeter and kneewall insulated',
-    lightChange: null,
-    notes: [],
-    notApplicableReason: null,
-  };
+  const changed: Partial<HouseSpec> = { perimeterInsulated: true };
+  if (kneewallBetter) Object.assign(changed, { kneewallId: target.id, kneewallHeightM: heightM });
+  const variant = withHouse(changed);
+  const notes: string[] = [];
+  let lightChange: LightChange | null = null;
+  const beforeFactor = 1 - opaqueEnvelopeShare(computeHouseGeometry(house));
+  const afterFactor = 1 - opaqueEnvelopeShare(computeHouseGeometry(variant.house));
+  if (afterFactor < beforeFactor - 1e-12) {
+    const roof = coveringLightRow(ref, house.coverings.roof, 'house.coverings.roof');
+    lightChange = {
+      surface: 'kneewall',
+      before: roof.lightTransmittance * beforeFactor,
+      after: roof.lightTransmittance * afterFactor,
+      relativeChange: afterFactor / beforeFactor - 1,
+      source:
+        "the opaque kneewall's share of the envelope area (method: light taken to enter in proportion to glazed area)",
+    };
+    notes.push(
+      'The glazed band at the foot of the walls becomes opaque: less light and less free solar heat there; the saving shown already accounts for it.',
+    );
+  }
+  if (present && kneewallBetter) notes.push(`Replaces the kneewall of ${present.label}.`);
+  if (!kneewallBetter)
+    notes.push(`The kneewall (${present!.label}) already loses as little heat; only the edge is insulated.`);
+  return { variant, options: {}, description, lightChange, notes, notApplicableReason: null };
+}
+
+/** Height of the house's opaque kneewall, m (0 without a construction). */
+function presentHeight(house: HouseSpec): number {
+  return house.kneewallId && typeof house.kneewallHeightM === 'number' ? house.kneewallHeightM : 0;
 }
 
 export function planSealing(measure: Extract<Measure, { kind: 'sealing' }>, context: MeasureContext): PreparedMeasure {

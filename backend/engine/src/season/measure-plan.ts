@@ -14,6 +14,8 @@ export interface MeasureDefaultsRow extends ReferenceRow {
   defaultLowerByK?: number;
   defaultDelayDays?: number;
   defaultHeaterType?: HeaterType;
+  targetKneewallId?: string;
+  defaultKneewallHeightM?: number;
   shadeFraction?: number;
 }
 

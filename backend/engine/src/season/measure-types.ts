@@ -21,7 +21,13 @@ interface MeasureBase {
 export type Measure =
   | (MeasureBase & { kind: 'second-poly-layer'; surfaces?: Array<'roof' | 'sidewalls'>; coveringId?: string })
   | (MeasureBase & { kind: 'thermal-curtain'; curtainId?: string })
-  | (MeasureBase & { kind: 'perimeter-insulation' })
+  | (MeasureBase & {
+      kind: 'perimeter-insulation';
+      /** kneewalls.json id the kneewall is built of (default: 2 in foam board) */
+      kneewallId?: string;
+      /** kneewall height where the house gives none, m */
+      kneewallHeightM?: number;
+    })
   | (MeasureBase & { kind: 'sealing'; airLeakageClassId?: string; airChangesPerHour?: number })
   | (MeasureBase & { kind: 'night-setpoint-lower'; lowerByK?: number })
   | (MeasureBase & { kind: 'later-start'; delayDays?: number })
@@ -64,8 +70,8 @@ export const PAYBACK_STATUSES: readonly PaybackStatus[] = [
 ];
 
 export interface LightChange {
-  /** which surface's light the figures describe */
-  surface: 'roof' | 'sidewalls';
+  /** which surface's light the figures describe ('kneewall': the whole envelope's, a kneewall being opaque) */
+  surface: 'roof' | 'sidewalls' | 'kneewall';
   before: number;
   after: number;
   /** relative change of light reaching the crop, e.g. −0.11 for 11 % less */

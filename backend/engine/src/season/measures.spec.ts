@@ -124,12 +124,18 @@ describe('measure comparison', () => {
     expect(layer.after).toBe(0.78);
     expect(layer.relativeChange).toBeCloseTo(0.78 / 0.88 - 1, 9);
     expect(byKind.get('thermal-curtain')!.lightChange!.relativeChange).toBeLessThan(0);
-    expect(byKind.get('perimeter-insulation')!.lightChange).toBeNull();
+    // the house has no kneewall: the measure builds one 0.91 m high, opaque where there was poly
+    const kneewall = byKind.get('perimeter-insulation')!.lightChange!;
+    expect(kneewall.surface).toBe('kneewall');
+    expect(kneewall.relativeChange).toBeLessThan(0);
   });
 
   it('reports a measure already done as not applicable, without running it, and puts it last', () => {
     const already = compareMeasures(
-      { ...input, house: { ...singlePolyHouse, perimeterInsulated: true } },
+      {
+        ...input,
+        house: { ...singlePolyHouse, perimeterInsulated: true, kneewallId: 'foam-board-50mm', kneewallHeightM: 0.9 },
+      },
       [
         { kind: 'perimeter-insulation', costMoney: 800 },
         { kind: 'night-setpoint-lower', costMoney: 100 },
@@ -141,7 +147,8 @@ describe('measure comparison', () => {
     expect(already.measures[1]).toMatchObject({
       kind: 'perimeter-insulation',
       applicable: false,
-      notApplicableReason: 'The perimeter is already insulated.',
+      notApplicableReason:
+        'The perimeter is already insulated and the kneewall (Foam board, 2 in (50 mm) closed-cell polystyrene) loses as little heat as Foam board, 2 in (50 mm) closed-cell polystyrene or less.',
       paybackStatus: 'not-applicable',
       paybackYears: null,
       paybackText: 'not applicable',
@@ -166,6 +173,8 @@ describe('which measures apply to a house', () => {
     ...demoSeasonInput().house,
     coverings: { roof: 'poly-double-ir-inner', sidewalls: 'poly-double-ir-inner', endwalls: 'polycarbonate-twin-8mm' },
     perimeterInsulated: true,
+    kneewallId: 'foam-board-50mm',
+    kneewallHeightM: 0.6,
     airLeakageClassId: 'new-film-double',
   };
   const compare = (house: HouseSpec, measures: Measure[], overrides: Partial<EstimateSeasonInput> = {}) =>

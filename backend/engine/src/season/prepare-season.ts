@@ -186,7 +186,10 @@ export function variantParameters(
       uaNightWPerK: options.curtainOpen ? thermal.uaOpenWPerK : thermal.uaClosedWPerK,
       solarGainAreaM2: options.withoutSun
         ? 0
-        : thermal.roofCovering.lightTransmittance * thermal.geometry.floorAreaM2 * prepared.solarUsefulFraction,
+        : thermal.roofCovering.lightTransmittance *
+          thermal.envelopeLightFactor *
+          thermal.geometry.floorAreaM2 *
+          prepared.solarUsefulFraction,
       daySetpointC: options.nightSetpointAllDay ? nightSetpointC : daySetpointC,
       nightSetpointC,
       heaterOutputW: options.uncapped ? Infinity : variant.heaterOutputW,

@@ -20,6 +20,8 @@ export const BOUNDS = {
   fanCount: { min: 0, max: 100 },
   fanCapacityM3PerS: { min: 0.1, max: 25 },
   inletAreaM2: { min: 0, max: 500 },
+  /** also at most the eave height */
+  kneewallHeightM: { min: 0, max: 3 },
   setpointC: { min: -5, max: 40 },
   designOutdoorC: { min: -50, max: 25 },
   summerDesignC: { min: 15, max: 55 },

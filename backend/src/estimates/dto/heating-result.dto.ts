@@ -14,6 +14,7 @@ export const HEAT_LOSS_COMPONENT_KEYS: readonly HeatLossComponentKey[] = [
   'roof',
   'sidewalls',
   'endwalls',
+  'kneewall',
   'perimeter',
   'infiltration',
 ];
@@ -25,8 +26,10 @@ export class HouseGeometrySummaryDto {
   @ApiProperty({ description: 'm²' }) floorAreaM2: number;
   @ApiProperty({ description: 'm²' }) roofAreaM2: number;
   @ApiProperty({ description: 'm²' }) sidewallAreaM2: number;
-  @ApiProperty({ description: 'm²' }) endwallAreaM2: number;
-  @ApiProperty({ description: 'roof + sidewalls + endwalls, m²' }) coverAreaM2: number;
+  @ApiProperty({ description: 'glazed endwall area, m²' }) endwallAreaM2: number;
+  @ApiProperty({ description: 'opaque kneewall on the sidewalls and endwalls, m² (0 without one)' })
+  kneewallAreaM2: number;
+  @ApiProperty({ description: 'roof + sidewalls + endwalls + kneewall, m²' }) coverAreaM2: number;
   @ApiProperty({ description: 'outside perimeter of the house at the ground, m' }) perimeterM: number;
   @ApiProperty({ description: 'm³' }) volumeM3: number;
 }
@@ -51,6 +54,7 @@ export class HeatLossBreakdownDto {
   @ApiProperty({ description: 'inside − outside, K (may be ≤ 0: then no heat is needed)' }) deltaTK: number;
   @ApiProperty({ description: 'W' }) totalW: number;
   @ApiProperty({ description: 'through the coverings, W' }) coveringW: number;
+  @ApiProperty({ description: 'through the opaque kneewall, W (0 without one)' }) kneewallW: number;
   @ApiProperty({ description: 'through the perimeter, W' }) perimeterW: number;
   @ApiProperty({ description: 'air leakage, W' }) infiltrationW: number;
   @ApiProperty() curtainApplied: boolean;

@@ -151,6 +151,29 @@ export class HouseSpecDto {
 
   @ApiProperty() @IsBoolean() perimeterInsulated: boolean;
 
+  @ApiPropertyOptional({
+    ...range('kneewallHeightM'),
+    nullable: true,
+    type: Number,
+    description:
+      'height of the band at the foot of the sidewalls and endwalls, m (at most the eave height); opaque when kneewallId names a construction, glazing otherwise',
+  })
+  @IsOptional()
+  @IsNumber()
+  @Min(BOUNDS.kneewallHeightM.min)
+  @Max(BOUNDS.kneewallHeightM.max)
+  kneewallHeightM?: number | null;
+
+  @ApiPropertyOptional({
+    nullable: true,
+    type: String,
+    description: 'reference-data kneewalls id of the kneewall construction; null: glazing to the ground',
+  })
+  @IsOptional()
+  @IsString()
+  @Length(1, 80)
+  kneewallId?: string | null;
+
   @ApiPropertyOptional({ nullable: true, type: String, description: 'reference-data curtains id, drawn at night' })
   @IsOptional()
   @IsString()
@@ -200,6 +223,8 @@ export class HouseDto extends CreateHouseDto {
   @ApiProperty({ type: CoveringOverridesDto }) declare coveringUOverridesWPerM2K: CoveringOverridesDto;
   @ApiProperty({ nullable: true, type: Number }) declare airChangesPerHourOverride: number | null;
   @ApiProperty({ nullable: true, type: String }) declare curtainId: string | null;
+  @ApiProperty({ nullable: true, type: Number }) declare kneewallHeightM: number | null;
+  @ApiProperty({ nullable: true, type: String }) declare kneewallId: string | null;
   @ApiProperty() createdAt: string;
   @ApiProperty() updatedAt: string;
 }

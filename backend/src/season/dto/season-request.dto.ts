@@ -193,6 +193,25 @@ export class MeasureDto {
   @MaxLength(100)
   coveringId?: string;
 
+  @ApiPropertyOptional({
+    description: 'perimeter-insulation: kneewalls id the kneewall is built of (default 2 in foam board)',
+  })
+  @IsOptional()
+  @IsString()
+  @MaxLength(100)
+  kneewallId?: string;
+
+  @ApiPropertyOptional({
+    minimum: BOUNDS.kneewallHeightM.min,
+    maximum: BOUNDS.kneewallHeightM.max,
+    description: 'perimeter-insulation: kneewall height, m, where the house gives none (default 0.91 m)',
+  })
+  @IsOptional()
+  @IsNumber()
+  @Min(BOUNDS.kneewallHeightM.min)
+  @Max(BOUNDS.kneewallHeightM.max)
+  kneewallHeightM?: number;
+
   @ApiPropertyOptional({ description: 'thermal-curtain: curtains id' })
   @IsOptional()
   @IsString()

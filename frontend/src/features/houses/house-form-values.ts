@@ -45,6 +45,10 @@ export interface HouseFormValues {
   perimeterInsulated: boolean;
   /** '' = no curtain */
   curtainId: string;
+  /** '' = none */
+  kneewallHeightM: string;
+  /** '' = glazing to the ground */
+  kneewallId: string;
   heaters: HeaterFormValues[];
   exhaustFans: { count: string; capacityEachM3PerS: string };
   inletAreaM2: string;
@@ -77,6 +81,8 @@ export function newHouseDefaults(referenceData: ReferenceData): HouseInput {
     airChangesPerHourOverride: null,
     perimeterInsulated: false,
     curtainId: null,
+    kneewallHeightM: null,
+    kneewallId: null,
     heaters: [
       { count: 2, ratedInputW: 73_000, efficiency: 0.8, fuelId: firstRowId(referenceData, 'fuels', 'natural-gas') },
     ],
@@ -112,6 +118,8 @@ export function houseToFormValues(house: HouseInput, units: Units): HouseFormVal
         : String(house.airChangesPerHourOverride),
     perimeterInsulated: house.perimeterInsulated,
     curtainId: house.curtainId ?? '',
+    kneewallHeightM: t('length', house.kneewallHeightM),
+    kneewallId: house.kneewallId ?? '',
     heaters: house.heaters.map((heater) => ({
       count: String(heater.count),
       ratedInputW: t('power', heater.ratedInputW),
@@ -179,6 +187,14 @@ export function formValuesToHouseInput(
       values.airChangesPerHourOverride.trim() === '' ? null : Number(values.airChangesPerHourOverride),
     perimeterInsulated: values.perimeterInsulated,
     curtainId: values.curtainId === '' ? null : values.curtainId,
+    kneewallHeightM:
+      optionalSi(
+        'length',
+        values.kneewallHeightM,
+        initialValues.kneewallHeightM,
+        original.kneewallHeightM ?? undefined,
+      ) ?? null,
+    kneewallId: values.kneewallId === '' ? null : values.kneewallId,
     heaters: values.heaters.map((heater, index) => {
       const initialHeater = initialValues.heaters[index];
       const originalHeater = original.heaters[index];
@@ -294,6 +310,12 @@ export function convertFormValues(
     lengthM: convert('length', values.lengthM, previousInitial.lengthM, nextInitial.lengthM),
     eaveHeightM: convert('length', values.eaveHeightM, previousInitial.eaveHeightM, nextInitial.eaveHeightM),
     ridgeHeightM: convert('length', values.ridgeHeightM, previousInitial.ridgeHeightM, nextInitial.ridgeHeightM),
+    kneewallHeightM: convert(
+      'length',
+      values.kneewallHeightM,
+      previousInitial.kneewallHeightM,
+      nextInitial.kneewallHeightM,
+    ),
     coveringUOverridesWPerM2K: group(
       'uValue',
       values.coveringUOverridesWPerM2K,

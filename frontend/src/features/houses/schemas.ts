@@ -78,6 +78,13 @@ export function houseFormSchema(units: Units) {
       .optional(),
     perimeterInsulated: yup.boolean(),
     curtainId: yup.string(),
+    kneewallHeightM: measured('Kneewall height', 'length', BOUNDS.kneewallHeightM)
+      .optional()
+      .test('below-eave', 'The kneewall cannot be higher than the eave', function kneewallBelowEave(height) {
+        const eave = Number(this.parent.eaveHeightM);
+        return height === undefined || !Number.isFinite(eave) || height <= eave;
+      }),
+    kneewallId: yup.string(),
     heaters: yup
       .array(
         yup.object({

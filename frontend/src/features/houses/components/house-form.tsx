@@ -155,6 +155,15 @@ export function HouseForm({
     [referenceData],
   );
   const fuelOptions = useMemo(() => optionsFrom(referenceData, 'fuels'), [referenceData]);
+  const kneewallOptions = useMemo(
+    () => [
+      { value: '', label: 'None: glazing to the ground' },
+      ...optionsFrom(referenceData, 'kneewalls', (row) =>
+        typeof row.uWPerM2K === 'number' ? `U ${units.format('uValue', row.uWPerM2K)}` : null,
+      ),
+    ],
+    [referenceData, units],
+  );
 
   const length = units.label('length');
 
@@ -283,6 +292,21 @@ export function HouseForm({
                   </Grid>
                   <Grid size={{ xs: 12, md: 4 }}>
                     <FormCheckboxField name="perimeterInsulated" label="Perimeter insulated" />
+                  </Grid>
+                  <Grid size={{ xs: 12, md: 8 }}>
+                    <FormSelectField
+                      name="kneewallId"
+                      label="Kneewall (opaque band at the foot of the walls)"
+                      options={kneewallOptions}
+                    />
+                  </Grid>
+                  <Grid size={{ xs: 12, md: 4 }}>
+                    <FormNumberField
+                      name="kneewallHeightM"
+                      label="Kneewall height"
+                      unit={length}
+                      helperText="Sidewalls and endwalls; blank for none"
+                    />
                   </Grid>
                 </Grid>
               </Section>
