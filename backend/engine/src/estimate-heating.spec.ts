@@ -36,7 +36,16 @@ describe('estimateHeating', () => {
       ['assumptions', 'cautions', 'condensation', 'geometry', 'heatLoss', 'heater'].sort(),
     );
     expect(Object.keys(estimate.geometry).sort()).toEqual(
-      ['coverAreaM2', 'endwallAreaM2', 'floorAreaM2', 'perimeterM', 'roofAreaM2', 'sidewallAreaM2', 'volumeM3'].sort(),
+      [
+        'coverAreaM2',
+        'endwallAreaM2',
+        'floorAreaM2',
+        'kneewallAreaM2',
+        'perimeterM',
+        'roofAreaM2',
+        'sidewallAreaM2',
+        'volumeM3',
+      ].sort(),
     );
     expect(Object.keys(estimate.heatLoss).sort()).toEqual(
       [
@@ -46,6 +55,7 @@ describe('estimateHeating', () => {
         'deltaTK',
         'infiltrationW',
         'insideC',
+        'kneewallW',
         'outsideC',
         'perimeterW',
         'totalW',

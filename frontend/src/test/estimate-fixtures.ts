@@ -579,7 +579,7 @@ export const demoHouseBCooling: HouseCoolingEstimate = {
   },
   winterVentilation: {
     fractionOfSummerRate: 0.25,
-    summerBaseFlowM3PerS: 7.5469297026560004,
+    summerBaseFlowM3PerS: 7.546929702656,
     flowM3PerS: 1.8867324256640001,
     airChangesPerHour: 13.733395074409035,
     heatCostW: 88910.66154474112,
