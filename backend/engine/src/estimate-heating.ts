@@ -3,8 +3,8 @@ import { EngineInputError, requireInRange } from './errors';
 import { computeHouseGeometry } from './geometry/house-geometry';
 import { condensationRisk, type CondensationResult } from './heating/condensation';
 import { designHeatLoss, heatLossCoefficients, CURTAIN_SURFACES, type HeatLossBreakdown } from './heating/heat-loss';
-import { requiredRow, type SafetyRow } from './heating/heating-reference';
 import { sizeHeaters, type HeaterSizingResult } from './heating/heater-sizing';
+import { combustionSafety } from './heating/combustion-safety';
 import { SURFACE_GROUPS, type SurfaceGroup } from './vocabulary';
 import { type HouseSpec } from './house.types';
 import { insideAirDensityKgPerM3 } from './psychrometrics/psychrometrics';
@@ -67,7 +67,13 @@ const USER_CONFIDENCE = 'user-entered';
 const PSYCHROLIB_SOURCE =
   'computed with psychrolib (ASHRAE 2017 Fundamentals ch. 1): standard-atmosphere pressure at the site elevation';
 
-function fromRow(row: ReferenceRow, key: string, label: string, value: number, unit: string): HeatingAssumption {
+function fromRow(
+  row: ReferenceRow,
+  key: string,
+  label: string,
+  value: number | string,
+  unit: string,
+): HeatingAssumption {
   return { key, label, value, unit, source: row.source, confidence: row.confidence, overridden: false };
 }
 
@@ -348,29 +354,10 @@ export function estimateHeating(input: HeatingEstimateInput, ref: ReferenceData)
     );
   }
   if (sizing.result.fuelFired) {
-    const safety = (id: string) => requiredRow<SafetyRow>(ref, 'safety', id);
-    const inlet = safety('combustion-air-inlet');
-    const aboveRidge = safety('chimney-above-ridge');
-    const aboveRoof = safety('chimney-above-roof-edge');
-    const clearance = safety('chimney-clearance-horizontal');
-    const coLimit = safety('co-niosh-rel');
-    const ethylene = safety('ethylene-crop-injury');
-    const sulfurDioxide = safety('so2-crop-injury');
-    const inletAreaM2 = sizing.fuelFiredInputW * (inlet.valueM2PerW as number);
-    cautions.push(
-      `Fuel-fired heaters need a fresh-air inlet for combustion: a free area of at least about ${quantityToken('areaPerPower', inlet.valueM2PerW as number)} of heater input ` +
-        `(about ${quantityToken('smallArea', inletAreaM2)} for the ${kW(sizing.fuelFiredInputW)} entered); local codes may require more.`,
-      `Vent every fuel-fired heater to the outside through a sound flue. Chimneys: at least ${metres(aboveRidge.valueM as number)} above the ridge, ${metres(aboveRoof.valueM as number)} above the roof where they pass through, ` +
-        `and ${metres(clearance.valueM as number)} horizontally from the nearest roof; exhaust fans can pull flue gas back into the house.`,
-      `Carbon monoxide from a faulty, unvented or back-drafting heater can kill people. Fit carbon monoxide alarms (NIOSH recommended limit ${coLimit.valuePpm} ppm over 8 h).`,
-      `Incomplete combustion releases ethylene, which injures sensitive crops from about ${ethylene.valuePpm} ppm, and sulfur-bearing fuels release sulfur dioxide, injurious from about ${sulfurDioxide.valuePpm} ppm. ` +
-        'A yellow or orange flame signals trouble; unvented heaters are not recommended even as back-up.',
-      'Have fuel-fired equipment sized, installed and serviced by licensed installers under local codes.',
-    );
-    for (const row of [inlet, aboveRidge, aboveRoof, clearance, coLimit, ethylene, sulfurDioxide]) {
-      const value = row.valueM2PerW ?? row.valueM ?? row.valuePpm;
-      const unit = row.valueM2PerW !== undefined ? 'm²/W' : row.valueM !== undefined ? 'm' : 'ppm';
-      assumptions.push(fromRow(row, `safety.${row.id}`, row.label, value as number, unit));
+    const safety = combustionSafety(sizing.fuelFiredInputW, sizing.unventedInputW, ref);
+    cautions.push(...safety.cautions);
+    for (const { row, value, unit } of safety.rows) {
+      assumptions.push(fromRow(row, `safety.${row.id}`, row.label, value, unit));
     }
   }
   cautions.push(

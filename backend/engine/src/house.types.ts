@@ -2,7 +2,7 @@
  * A greenhouse as the engine sees it. SI units throughout; names carry their unit.
  * The API's house DTOs and the stored house map onto this shape one to one.
  */
-import type { HouseShape, SurfaceGroup } from './vocabulary';
+import type { HeaterType, HouseShape, SurfaceGroup } from './vocabulary';
 
 export interface HeaterGroup {
   /** number of identical units */
@@ -13,6 +13,11 @@ export interface HeaterGroup {
   efficiency: number;
   /** id of a row in reference-data/fuels.json */
   fuelId: string;
+  /**
+   * what kind of heater (reference-data/heater-types.json): sets the efficiency the form offers
+   * and the cautions; null or absent when not stated
+   */
+  heaterType?: HeaterType | null;
 }
 
 export interface ExhaustFans {

@@ -683,6 +683,11 @@ export interface components {
              * @example propane
              */
             fuelId: string;
+            /**
+             * @description what kind of heater (reference-data heater-types): its typical efficiency is offered as the default and an unvented fuel-fired type brings the strong cautions; null when not stated
+             * @enum {string|null}
+             */
+            heaterType?: "gravity-vented" | "power-vented" | "separated-combustion" | "condensing" | "unvented" | "boiler" | "electric" | null;
         };
         ExhaustFansDto: {
             count: number;

@@ -7,6 +7,7 @@ import { measureDefaults, notApplicable, percent, type MeasureContext, type Prep
 import type { Measure } from './measure-types';
 import { delayFirstHeatedPeriod } from './production-calendar';
 import { heaterTypeRow } from '../heating/heating-reference';
+import { requireHhvEfficiency } from '../heating/heater-sizing';
 
 /** Measures that change how the house is run or heated: setpoints, dates, heaters, fuel. */
 
@@ -78,6 +79,7 @@ export function planHeaterEfficiency(
   if (!heaterType) throw new Error('reference-data/measures.json heater-efficiency needs a defaultHeaterType');
   const typeRow = heaterTypeRow(ref, heaterType, `${field}.heaterType`);
   const efficiency = validateHeaterEfficiency(measure.efficiency ?? typeRow.typicalEfficiency, `${field}.efficiency`);
+  requireHhvEfficiency(`${field}.efficiency`, efficiency, base.fuelRow);
   const description = `heaters replaced (${typeRow.label}): efficiency ${percent(base.heaterEfficiency)} → ${percent(efficiency)}`;
   if (!(efficiency > base.heaterEfficiency)) {
     return notApplicable(
@@ -111,6 +113,7 @@ export function planFuelSwitch(
     measure.efficiency === undefined || measure.efficiency === null
       ? base.heaterEfficiency
       : validateHeaterEfficiency(measure.efficiency, `${field}.efficiency`);
+  requireHhvEfficiency(`${field}.efficiency`, efficiency, row);
   const description = `${base.fuelRow.label} → ${row.label} at ${fuel.pricePerUnit} per ${fuel.priceUnit === 'si' ? row.unitSi : row.unitUs}`;
   const basePrice = pricePerFuelKWh(base.fuel, base.fuelRow);
   const samePrice =

@@ -3,7 +3,7 @@ import { EngineInputError, requireInRange } from '../errors';
 import type { HouseSpec } from '../house.types';
 import { referenceRow, type ReferenceData } from '../reference-data.types';
 import { clearnessByMonth, validateSiteClimate, type SiteClimate } from '../climate/site-climate';
-import { validateHeaterGroups } from '../heating/heater-sizing';
+import { requireHhvEfficiency, validateHeaterGroups } from '../heating/heater-sizing';
 import { fuelCost, fuelForHeat, validateFuelPrice, validateHeaterEfficiency } from './fuel';
 import { houseThermal, type HouseThermal } from './house-heat-loss';
 import { dailySetpoints, validateCalendar } from './production-calendar';
@@ -83,6 +83,7 @@ export function prepareSeason(
   validateHouseSetpoints(input.house);
   const fuel = validateFuelPrice(input.fuel, ref);
   validateHeaterEfficiency(input.heaterEfficiency);
+  requireHhvEfficiency('heaterEfficiency', input.heaterEfficiency, fuel);
   if (input.calendar) validateCalendar(input.calendar);
   if (!input.climate || typeof input.climate !== 'object') throw new EngineInputError('climate', 'climate is required');
 

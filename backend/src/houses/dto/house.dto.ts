@@ -17,7 +17,7 @@ import {
   ValidateNested,
 } from 'class-validator';
 import { BOUNDS } from '@thermbay/engine/vocabulary';
-import { HOUSE_SHAPES, type HouseShape } from '@thermbay/engine/vocabulary';
+import { HEATER_TYPES, HOUSE_SHAPES, type HeaterType, type HouseShape } from '@thermbay/engine/vocabulary';
 
 const range = (name: keyof typeof BOUNDS) => ({ minimum: BOUNDS[name].min, maximum: BOUNDS[name].max });
 
@@ -76,6 +76,16 @@ export class HeaterGroupDto {
   @IsString()
   @Length(1, 80)
   fuelId: string;
+
+  @ApiPropertyOptional({
+    enum: HEATER_TYPES,
+    nullable: true,
+    description:
+      'what kind of heater (reference-data heater-types): its typical efficiency is offered as the default and an unvented fuel-fired type brings the strong cautions; null when not stated',
+  })
+  @IsOptional()
+  @IsIn(HEATER_TYPES)
+  heaterType?: HeaterType | null;
 }
 
 export class ExhaustFansDto {

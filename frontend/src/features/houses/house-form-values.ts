@@ -1,5 +1,6 @@
 import type { ApiError } from '../../api/client';
 import type { House, HouseInput, HouseShape, ReferenceData, SurfaceGroup } from '../../api/types';
+import type { HeaterType } from '@thermbay/engine/vocabulary';
 import type { Quantity, Units } from '../../lib/units';
 
 export const HOUSE_SHAPES: readonly HouseShape[] = ['gable', 'gothic-arch', 'quonset'];
@@ -27,6 +28,8 @@ export interface HeaterFormValues {
   /** percent */
   efficiency: string;
   fuelId: string;
+  /** '' = not stated */
+  heaterType: string;
 }
 
 export interface HouseFormValues {
@@ -125,6 +128,7 @@ export function houseToFormValues(house: HouseInput, units: Units): HouseFormVal
       ratedInputW: t('power', heater.ratedInputW),
       efficiency: pct(heater.efficiency),
       fuelId: heater.fuelId,
+      heaterType: heater.heaterType ?? '',
     })),
     exhaustFans: {
       count: String(house.exhaustFans.count),
@@ -206,6 +210,7 @@ export function formValuesToHouseInput(
             ? originalHeater.efficiency
             : Number(heater.efficiency) / 100,
         fuelId: heater.fuelId,
+        heaterType: heater.heaterType === '' ? null : (heater.heaterType as HeaterType),
       };
     }),
     exhaustFans: {

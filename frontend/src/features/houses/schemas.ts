@@ -95,6 +95,7 @@ export function houseFormSchema(units: Units) {
             .max(efficiencyRangePct.max, rangeMessage('Efficiency', efficiencyRangePct, '%'))
             .required('Enter the efficiency'),
           fuelId: yup.string().required('Choose the fuel'),
+          heaterType: yup.string(),
         }),
       )
       .max(BOUNDS.heaterGroups.max, `At most ${BOUNDS.heaterGroups.max} heater groups`),
