@@ -59,6 +59,7 @@ describe('estimateHeating', () => {
         'outsideC',
         'perimeterW',
         'totalW',
+        'wind',
       ].sort(),
     );
     expect(Object.keys(estimate.heatLoss.components[0]).sort()).toEqual(

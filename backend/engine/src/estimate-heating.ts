@@ -5,6 +5,7 @@ import { condensationRisk, type CondensationResult } from './heating/condensatio
 import { designHeatLoss, heatLossCoefficients, CURTAIN_SURFACES, type HeatLossBreakdown } from './heating/heat-loss';
 import { sizeHeaters, type HeaterSizingResult } from './heating/heater-sizing';
 import { combustionSafety } from './heating/combustion-safety';
+import type { WindCorrection } from './heating/wind';
 import { SURFACE_GROUPS, type SurfaceGroup } from './vocabulary';
 import { type HouseSpec } from './house.types';
 import { insideAirDensityKgPerM3 } from './psychrometrics/psychrometrics';
@@ -25,6 +26,8 @@ export interface HeatingConditions {
    * the curtain open, since curtains are opened to shed snow and can fail to close.
    */
   curtainClosed?: boolean;
+  /** design wind speed, m/s; default the wind the U tables assume (reference-data/wind.json) */
+  designWindSpeedMPerS?: number;
 }
 
 export interface HeatingEstimateInput {
@@ -111,6 +114,51 @@ function validateConditions(conditions: HeatingConditions, house: HouseSpec): nu
   );
 }
 
+function windAssumptions(wind: WindCorrection, entered: boolean): HeatingAssumption[] {
+  const list: HeatingAssumption[] = [
+    entered
+      ? {
+          key: 'wind.designWindSpeedMPerS',
+          label: `Design wind speed (the U tables assume ${quantityToken('velocity', wind.tableWindSpeedMPerS)})`,
+          value: wind.windSpeedMPerS,
+          unit: 'm/s',
+          source: USER_SOURCE,
+          confidence: USER_CONFIDENCE,
+          overridden: true,
+        }
+      : fromRow(
+          wind.rows.defaultWind,
+          'wind.designWindSpeedMPerS',
+          wind.rows.defaultWind.label,
+          wind.windSpeedMPerS,
+          'm/s',
+        ),
+  ];
+  for (const row of wind.rows.relations) {
+    const groups = SURFACE_GROUPS.filter((group) => wind.relation[group] === row.id);
+    const factor = wind.uFactor[groups[0]];
+    list.push(
+      fromRow(
+        row,
+        `wind.${row.id}`,
+        `U at the design wind ÷ tabulated U, ${groups.join(' and ')}: ${row.label}`,
+        factor,
+        '–',
+      ),
+    );
+  }
+  list.push(
+    fromRow(
+      wind.rows.infiltration,
+      'wind.infiltrationFactor',
+      wind.rows.infiltration.label,
+      wind.infiltrationFactor,
+      '–',
+    ),
+  );
+  return list;
+}
+
 // Quantities in labels and cautions are tokens (see prose.ts): the reader's unit system shows them.
 const kW = (watts: number) => quantityToken('power', watts);
 const degC = (celsius: number) => quantityToken('temperature', celsius);
@@ -132,6 +180,7 @@ export function estimateHeating(input: HeatingEstimateInput, ref: ReferenceData)
   const coefficients = heatLossCoefficients(house, geometry, ref, {
     curtainClosed,
     airDensityKgPerM3: air.airDensityKgPerM3,
+    windSpeedMPerS: conditions.designWindSpeedMPerS ?? undefined,
   });
   const heatLoss = designHeatLoss(coefficients, geometry, insideC, outsideC);
   const sizing = sizeHeaters(
@@ -148,7 +197,8 @@ export function estimateHeating(input: HeatingEstimateInput, ref: ReferenceData)
     SURFACE_GROUPS.map((group) => ({
       group,
       coveringId: coefficients.rows.coverings[group].id,
-      uWPerM2K: coefficients.coveringUWPerM2K[group],
+      // the covering's U at the design wind (the curtain is not credited for the cover's own surface)
+      uWPerM2K: coefficients.coveringUWPerM2K[group] * coefficients.wind.uFactor[group],
     })),
     ref,
   );
@@ -224,6 +274,7 @@ export function estimateHeating(input: HeatingEstimateInput, ref: ReferenceData)
           '1/h',
         ),
   );
+  assumptions.push(...windAssumptions(coefficients.wind, conditions.designWindSpeedMPerS !== undefined));
   const perimeterRow = coefficients.rows.perimeter;
   assumptions.push(
     fromRow(
@@ -332,6 +383,7 @@ export function estimateHeating(input: HeatingEstimateInput, ref: ReferenceData)
     const closed = heatLossCoefficients(house, geometry, ref, {
       curtainClosed: true,
       airDensityKgPerM3: air.airDensityKgPerM3,
+      windSpeedMPerS: conditions.designWindSpeedMPerS ?? undefined,
     });
     const closedLossW = designHeatLoss(closed, geometry, insideC, outsideC).totalW;
     cautions.push(

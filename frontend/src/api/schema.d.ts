@@ -824,6 +824,8 @@ export interface components {
             monthly: components["schemas"]["MonthlyClimateDto"][];
             /** @description where the numbers came from (e.g. national climate normals, station name) */
             sourceNote?: string | null;
+            /** @description winter design wind speed, m/s; null: the 6.7 m/s (15 mph) the U tables assume (reference-data/wind.json) */
+            designWindSpeedMPerS?: number | null;
         };
         FarmClimateDto: {
             farmId: number;
@@ -871,6 +873,8 @@ export interface components {
             insideC?: number;
             /** @description credit a drawn curtain in the design loss; default false (heaters sized with the curtain open) */
             curtainClosed?: boolean;
+            /** @description design wind speed, m/s; default the farm climate's, else the 6.7 m/s (15 mph) the U tables assume */
+            designWindSpeedMPerS?: number;
         };
         HeatingEstimateRequestDto: {
             house: components["schemas"]["HouseSpecDto"];
@@ -893,6 +897,21 @@ export interface components {
             perimeterM: number;
             /** @description m³ */
             volumeM3: number;
+        };
+        WindFactorsDto: {
+            roof: number;
+            sidewalls: number;
+            endwalls: number;
+        };
+        WindSummaryDto: {
+            /** @description design wind speed, m/s */
+            windSpeedMPerS: number;
+            /** @description the wind the U tables assume, m/s */
+            tableWindSpeedMPerS: number;
+            /** @description U at the design wind ÷ tabulated U, per covering group */
+            uFactor: components["schemas"]["WindFactorsDto"];
+            /** @description air changes at the design wind ÷ tabulated air changes */
+            infiltrationFactor: number;
         };
         HeatLossComponentDto: {
             /** @enum {string} */
@@ -929,6 +948,7 @@ export interface components {
             /** @description air leakage, W */
             infiltrationW: number;
             curtainApplied: boolean;
+            wind: components["schemas"]["WindSummaryDto"];
             components: components["schemas"]["HeatLossComponentDto"][];
         };
         HeaterSizingDto: {
@@ -1198,6 +1218,8 @@ export interface components {
             insideC?: number;
             /** @description credit a drawn curtain in the design loss; default false (heaters sized with the curtain open) */
             curtainClosed?: boolean;
+            /** @description design wind speed, m/s; default the farm climate's, else the 6.7 m/s (15 mph) the U tables assume */
+            designWindSpeedMPerS?: number;
         };
         HouseHeatingEstimateRequestDto: {
             conditions?: components["schemas"]["PartialHeatingConditionsDto"];
@@ -1212,6 +1234,8 @@ export interface components {
             /** @description °C */
             insideC: number;
             curtainClosed: boolean;
+            /** @description m/s */
+            designWindSpeedMPerS: number;
         };
         HeatingConditionsSourceDto: {
             /** @enum {string} */
@@ -1224,6 +1248,8 @@ export interface components {
             insideC: "house night setpoint" | "request";
             /** @enum {string} */
             curtainClosed: "default" | "request";
+            /** @enum {string} */
+            designWindSpeedMPerS: "farm climate" | "reference data" | "request";
         };
         HouseHeatingEstimateDto: {
             geometry: components["schemas"]["HouseGeometrySummaryDto"];

@@ -69,6 +69,12 @@ export const demoHouseBHeating: HouseHeatingEstimate = {
     perimeterW: 3805.82748,
     infiltrationW: 5158.302601699728,
     curtainApplied: false,
+    wind: {
+      windSpeedMPerS: 6.7,
+      tableWindSpeedMPerS: 6.7,
+      uFactor: { roof: 1, sidewalls: 1, endwalls: 1 },
+      infiltrationFactor: 1,
+    },
     components: [
       {
         key: 'roof',
@@ -255,6 +261,7 @@ export const demoHouseBHeating: HouseHeatingEstimate = {
     insideRelativeHumidityPct: 85,
     insideC: 10,
     curtainClosed: false,
+    designWindSpeedMPerS: 6.7,
   },
   conditionsSource: {
     designOutdoorC: 'farm climate',
@@ -262,6 +269,7 @@ export const demoHouseBHeating: HouseHeatingEstimate = {
     insideRelativeHumidityPct: 'reference data',
     insideC: 'house night setpoint',
     curtainClosed: 'default',
+    designWindSpeedMPerS: 'reference data',
   },
 };
 

@@ -15,6 +15,13 @@ import {
   type KneewallRow,
   type PerimeterRow,
 } from './heating-reference';
+import { windCorrection, type WindCorrection } from './wind';
+
+/** The wind part of a breakdown: speed and the factors it applied. */
+export type WindSummary = Pick<
+  WindCorrection,
+  'windSpeedMPerS' | 'tableWindSpeedMPerS' | 'uFactor' | 'infiltrationFactor'
+>;
 
 /**
  * Steady-state heat loss of a closed house:
@@ -31,6 +38,11 @@ export const CURTAIN_SURFACES: readonly SurfaceGroup[] = ['roof', 'sidewalls'];
 export interface HeatLossOptions {
   /** whether the house's curtain (if it has one) is drawn */
   curtainClosed: boolean;
+  /**
+   * design wind speed, m/s; absent: the wind the tables assume (no correction). Corrects the U of
+   * each covering and the air-change rate (see ./wind.ts).
+   */
+  windSpeedMPerS?: number;
   /** density of the air that leaks out, kg/m³ (see psychrometrics/insideAirDensityKgPerM3) */
   airDensityKgPerM3: number;
 }
@@ -54,6 +66,8 @@ export interface HeatLossCoefficients {
   perimeterFactorWPerMK: number;
   airDensityKgPerM3: number;
   specificHeatJPerKgK: number;
+  /** wind the coefficients are for, m/s, and the factors it applied (1 at the tables' wind) */
+  wind: WindCorrection;
   /** fractional U reduction applied to CURTAIN_SURFACES; 0 when there is no curtain or it is open */
   curtainReduction: number;
   curtainApplied: boolean;
@@ -123,12 +137,13 @@ export function heatLossCoefficients(
   const curtainApplied = options.curtainClosed && curtain !== null;
   const curtainReduction = curtainApplied ? curtain.uReduction : 0;
 
+  const wind = windCorrection(house, ref, options.windSpeedMPerS);
   const areasM2 = groupAreasM2(geometry);
   const effectiveUWPerM2K = {} as Record<SurfaceGroup, number>;
   const coveringWPerK = {} as Record<SurfaceGroup, number>;
   for (const group of SURFACE_GROUPS) {
     const shielded = CURTAIN_SURFACES.includes(group);
-    effectiveUWPerM2K[group] = coverings.uWPerM2K[group] * (shielded ? 1 - curtainReduction : 1);
+    effectiveUWPerM2K[group] = coverings.uWPerM2K[group] * wind.uFactor[group] * (shielded ? 1 - curtainReduction : 1);
     coveringWPerK[group] = effectiveUWPerM2K[group] * areasM2[group];
   }
   const coveringTotalWPerK = SURFACE_GROUPS.reduce((sum, group) => sum + coveringWPerK[group], 0);
@@ -153,7 +168,7 @@ export function heatLossCoefficients(
   const airLeakage = chosenRow<AirLeakageRow>(ref, 'air-leakage', house.airLeakageClassId, 'house.airLeakageClassId');
   const achOverride = house.airChangesPerHourOverride;
   const airChangesPerHourOverridden = achOverride !== undefined && achOverride !== null;
-  const airChangesPerHour = airChangesPerHourOverridden
+  const tableAirChangesPerHour = airChangesPerHourOverridden
     ? requireInRange(
         'house.airChangesPerHourOverride',
         achOverride,
@@ -161,6 +176,7 @@ export function heatLossCoefficients(
         BOUNDS.airChangesPerHour.max,
       )
     : airLeakage.airChangesPerHour;
+  const airChangesPerHour = tableAirChangesPerHour * wind.infiltrationFactor;
   const specificHeat = specificHeatOfAirRow(ref);
   const infiltrationWPerK =
     (options.airDensityKgPerM3 * specificHeat.valueJPerKgK * geometry.volumeM3 * airChangesPerHour) / 3600;
@@ -179,6 +195,7 @@ export function heatLossCoefficients(
     perimeterFactorWPerMK: perimeter.wPerMK,
     airDensityKgPerM3: options.airDensityKgPerM3,
     specificHeatJPerKgK: specificHeat.valueJPerKgK,
+    wind,
     curtainReduction,
     curtainApplied,
     overridesUsed: { coveringU: coverings.overridden, airChangesPerHour: airChangesPerHourOverridden },
@@ -211,6 +228,8 @@ export interface HeatLossBreakdown {
   perimeterW: number;
   infiltrationW: number;
   curtainApplied: boolean;
+  /** design wind speed, m/s, and the factors applied to each covering's U and to the air changes */
+  wind: WindSummary;
   components: HeatLossComponent[];
 }
 
@@ -299,6 +318,12 @@ export function designHeatLoss(
     perimeterW: coefficients.perimeterWPerK * heatingDeltaTK,
     infiltrationW: coefficients.infiltrationWPerK * heatingDeltaTK,
     curtainApplied: coefficients.curtainApplied,
+    wind: {
+      windSpeedMPerS: coefficients.wind.windSpeedMPerS,
+      tableWindSpeedMPerS: coefficients.wind.tableWindSpeedMPerS,
+      uFactor: coefficients.wind.uFactor,
+      infiltrationFactor: coefficients.wind.infiltrationFactor,
+    },
     components,
   };
 }

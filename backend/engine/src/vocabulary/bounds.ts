@@ -29,6 +29,7 @@ export const BOUNDS = {
   latitudeDeg: { min: -66, max: 66 },
   longitudeDeg: { min: -180, max: 180 },
   relativeHumidityPct: { min: 5, max: 100 },
+  designWindSpeedMPerS: { min: 0, max: 25 },
 } as const;
 
 export type BoundName = keyof typeof BOUNDS;

@@ -17,4 +17,5 @@ export class FarmClimate extends Model {
   @Column({ type: DataType.DOUBLE, allowNull: false }) declare summerDailyRangeK: number;
   @Column({ type: DataType.JSON, allowNull: false }) declare monthly: MonthlyClimate[];
   @Column({ type: DataType.TEXT, allowNull: true }) declare sourceNote: string | null;
+  @Column({ type: DataType.DOUBLE, allowNull: true }) declare designWindSpeedMPerS: number | null;
 }

@@ -48,6 +48,20 @@ export class HeatLossComponentDto {
   @ApiProperty({ minimum: 0, maximum: 1, description: 'share of the total, 0–1' }) share: number;
 }
 
+export class WindFactorsDto {
+  @ApiProperty() roof: number;
+  @ApiProperty() sidewalls: number;
+  @ApiProperty() endwalls: number;
+}
+
+export class WindSummaryDto {
+  @ApiProperty({ description: 'design wind speed, m/s' }) windSpeedMPerS: number;
+  @ApiProperty({ description: 'the wind the U tables assume, m/s' }) tableWindSpeedMPerS: number;
+  @ApiProperty({ type: WindFactorsDto, description: 'U at the design wind ÷ tabulated U, per covering group' })
+  uFactor: WindFactorsDto;
+  @ApiProperty({ description: 'air changes at the design wind ÷ tabulated air changes' }) infiltrationFactor: number;
+}
+
 export class HeatLossBreakdownDto {
   @ApiProperty({ description: '°C' }) insideC: number;
   @ApiProperty({ description: '°C' }) outsideC: number;
@@ -58,6 +72,7 @@ export class HeatLossBreakdownDto {
   @ApiProperty({ description: 'through the perimeter, W' }) perimeterW: number;
   @ApiProperty({ description: 'air leakage, W' }) infiltrationW: number;
   @ApiProperty() curtainApplied: boolean;
+  @ApiProperty({ type: WindSummaryDto }) wind: WindSummaryDto;
   @ApiProperty({ type: HeatLossComponentDto, isArray: true }) components: HeatLossComponentDto[];
 }
 
@@ -137,6 +152,7 @@ export class HeatingConditionsUsedDto {
   @ApiProperty({ description: '%' }) insideRelativeHumidityPct: number;
   @ApiProperty({ description: '°C' }) insideC: number;
   @ApiProperty() curtainClosed: boolean;
+  @ApiProperty({ description: 'm/s' }) designWindSpeedMPerS: number;
 }
 
 /** Where each condition came from: the request, or the default named. */
@@ -146,6 +162,8 @@ export class HeatingConditionsSourceDto {
   @ApiProperty({ enum: ['reference data', 'request'] }) insideRelativeHumidityPct: 'reference data' | 'request';
   @ApiProperty({ enum: ['house night setpoint', 'request'] }) insideC: 'house night setpoint' | 'request';
   @ApiProperty({ enum: ['default', 'request'] }) curtainClosed: 'default' | 'request';
+  @ApiProperty({ enum: ['farm climate', 'reference data', 'request'] })
+  designWindSpeedMPerS: 'farm climate' | 'reference data' | 'request';
 }
 
 export class HouseHeatingEstimateDto extends HeatingEstimateDto {
