@@ -150,13 +150,33 @@ describe('estimateCooling', () => {
     const winter = result.winterVentilation;
     expect(winter.fractionOfSummerRate).toBeGreaterThanOrEqual(0.2);
     expect(winter.fractionOfSummerRate).toBeLessThanOrEqual(0.3);
-    expect(winter.flowM3PerS).toBeCloseTo(winter.fractionOfSummerRate * result.capacity.requiredFlowM3PerS, 10);
+    // base rate × elevation only (light and temperature-rise factors are summer corrections)
+    const floorM2 = computeHouseGeometry(exampleDoublePolyGableHouse()).floorAreaM2;
+    expect(winter.flowM3PerS).toBeCloseTo(
+      winter.fractionOfSummerRate * result.capacity.baseRateM3PerSM2 * result.capacity.factors.elevation * floorM2,
+      10,
+    );
     // house air at the 15 °C night setpoint, 300 m: p = 101325 × (1 − 2.25577e−5 × 300)^5.2559 = 97,772.6 Pa,
     // ρ = 97772.6 / (287.042 × 288.15) = 1.18210 kg/m³ (ideal gas, testing/air-by-hand.ts)
     const density = dryAirDensityByHand(15, 300);
     expect(density).toBeCloseTo(1.1821, 4);
     expectRelativelyClose(winter.heatCostW, density * 1006 * winter.flowM3PerS * (15 - -8), 1e-6);
     expect(winter.atOutdoorC).toBe(-8);
+  });
+
+  it('winter fan stage stays at 25 % of 8 cfm/ft² = 2 cfm/ft² at sea level, whatever the summer light and rise factors', () => {
+    // Row ranges (memory, NGMA / ASABE EP406.4): winter stage 20–30 % of the summer rate, about
+    // 1.5–2.5 cfm/ft². Hand arithmetic: 0.25 × 8 cfm/ft² = 2 cfm/ft² = 0.25 × 0.04064 m³/(s·m²).
+    const bright = run({
+      site: { elevationM: 0 },
+      conditions: { peakInteriorLightLux: 80_000, allowedTemperatureRiseK: 2.5 },
+    });
+    expect(bright.capacity.factors.house).toBeGreaterThan(2); // the summer rate is more than doubled
+    const floorM2 = computeHouseGeometry(exampleDoublePolyGableHouse()).floorAreaM2;
+    const cfmPerFt2 = (bright.winterVentilation.flowM3PerS / floorM2 / 0.3048) * 60;
+    expect(cfmPerFt2).toBeCloseTo(2, 9);
+    expect(cfmPerFt2).toBeGreaterThanOrEqual(1.5);
+    expect(cfmPerFt2).toBeLessThanOrEqual(2.5);
   });
 
   it('warns when running the winter fan stage all night would cost more than half the house loss (common practice, no source)', () => {

@@ -15,7 +15,7 @@ import { designFlowM3PerS, METRES_PER_FOOT, requiredCapacity, type CapacityResul
 import { thermostatStaging, type StagingResult } from './cooling/staging';
 import { winterVentilation, type WinterVentilation } from './cooling/winter-ventilation';
 import { EngineInputError, requireInRange } from './errors';
-import { computeHouseGeometry } from './geometry/house-geometry';
+import { computeHouseGeometry, opaqueEnvelopeShare } from './geometry/house-geometry';
 import { heatLossCoefficients } from './heating/heat-loss';
 import type { HouseSpec } from './house.types';
 import { dryAirDensityKgPerM3, standardAtmosphericPressurePa } from './psychrometrics';
@@ -160,7 +160,8 @@ export function estimateCooling(input: CoolingInput, ref: ReferenceData): Coolin
       dailyRangeK: conditions.dailyRangeK,
       summerDesignWetBulbC: conditions.summerDesignWetBulbC,
       floorAreaM2: geometry.floorAreaM2,
-      roofLightTransmittance: roofCovering.lightTransmittance,
+      // the opaque kneewall's share of the envelope passes no light
+      roofLightTransmittance: roofCovering.lightTransmittance * (1 - opaqueEnvelopeShare(geometry)),
       transpirationFraction,
       conductanceWPerK,
       installedFlowM3PerS: exchange.installedFlowM3PerS,
@@ -194,7 +195,8 @@ export function estimateCooling(input: CoolingInput, ref: ReferenceData): Coolin
   const winterFraction = ventilationValue(ref, 'winter-ventilation', 'fraction');
   const winter = winterVentilation({
     fractionOfSummerRate: winterFraction.value,
-    summerRequiredFlowM3PerS: capacity.requiredFlowM3PerS,
+    // base rate × elevation only: the light and temperature-rise factors are summer corrections
+    summerBaseFlowM3PerS: capacity.baseRateM3PerSM2 * capacity.factors.elevation * geometry.floorAreaM2,
     volumeM3: geometry.volumeM3,
     indoorC: house.setpoints.nightHeatingC,
     outdoorC: winterDesignC,
@@ -350,7 +352,7 @@ export function estimateCooling(input: CoolingInput, ref: ReferenceData): Coolin
   sourced('stageStepK', 'Temperature step between fan stages', stagingRow.stageStepK as number, 'K', stagingRow);
   sourced(
     'winterVentilationFraction',
-    'Winter humidity ventilation as a share of the summer rate',
+    'Winter humidity ventilation as a share of the summer base rate (base rate × elevation factor; no light or temperature-rise factor)',
     winterFraction.value,
     '–',
     winterFraction.row,

@@ -37,7 +37,16 @@ describe('estimateHeating', () => {
       ['assumptions', 'cautions', 'condensation', 'geometry', 'heatLoss', 'heater'].sort(),
     );
     expect(Object.keys(estimate.geometry).sort()).toEqual(
-      ['coverAreaM2', 'endwallAreaM2', 'floorAreaM2', 'perimeterM', 'roofAreaM2', 'sidewallAreaM2', 'volumeM3'].sort(),
+      [
+        'coverAreaM2',
+        'endwallAreaM2',
+        'floorAreaM2',
+        'kneewallAreaM2',
+        'perimeterM',
+        'roofAreaM2',
+        'sidewallAreaM2',
+        'volumeM3',
+      ].sort(),
     );
     expect(Object.keys(estimate.heatLoss).sort()).toEqual(
       [
@@ -47,9 +56,11 @@ describe('estimateHeating', () => {
         'deltaTK',
         'infiltrationW',
         'insideC',
+        'kneewallW',
         'outsideC',
         'perimeterW',
         'totalW',
+        'wind',
       ].sort(),
     );
     expect(Object.keys(estimate.heatLoss.components[0]).sort()).toEqual(
@@ -269,7 +280,8 @@ describe('estimateHeating', () => {
           perimeterInsulated: fc.boolean(),
           heaterCount: fc.integer({ min: BOUNDS.heaterCount.min, max: BOUNDS.heaterCount.max }),
           ratedInputW: fc.double({ min: BOUNDS.heaterInputW.min, max: BOUNDS.heaterInputW.max, noNaN: true }),
-          efficiency: fc.double({ min: BOUNDS.heaterEfficiency.min, max: BOUNDS.heaterEfficiency.max, noNaN: true }),
+          // at most 1.0: fuel-fired heaters cannot exceed the higher heating value
+          efficiency: fc.double({ min: BOUNDS.heaterEfficiency.min, max: 1, noNaN: true }),
           fuelId: fc.constantFrom(...fuelIds),
           insideC: fc.double({ min: BOUNDS.setpointC.min, max: BOUNDS.setpointC.max, noNaN: true }),
           designOutdoorC: fc.double({ min: BOUNDS.designOutdoorC.min, max: BOUNDS.designOutdoorC.max, noNaN: true }),
@@ -390,5 +402,45 @@ describe('estimateHeating', () => {
         },
       ),
     );
+  });
+});
+
+describe('estimateHeating: unvented heaters', () => {
+  it('gives the strong cautions and sizes the fresh-air inlet by the published rule', () => {
+    // HortScience 8(1):23–24 (1973): free inlet ≈ 1 in² per 2,500 Btu/h of input
+    // (safety.json combustion-air-inlet, 8.805e-7 m²/W). Two 30 kW unvented units: 60,000 W ×
+    // 8.805e-7 = 0.05283 m² = 528.3 cm².
+    const estimate = estimateHeating(
+      {
+        house: exampleDoublePolyGableHouse({
+          heaters: [{ count: 2, ratedInputW: 30_000, efficiency: 1, fuelId: 'propane', heaterType: 'unvented' }],
+        }),
+        conditions: { designOutdoorC: -10, elevationM: 0, insideRelativeHumidityPct: 80 },
+      },
+      ref,
+    );
+    const text = proseToPlainSi(estimate.cautions.join(' '));
+    expect(text).toMatch(/UNVENTED HEATERS/);
+    expect(text).toMatch(/carbon monoxide/i);
+    expect(text).toMatch(/carbon dioxide and water vapour/);
+    expect(text).toMatch(/ethylene/);
+    expect(text).toMatch(/nitrogen dioxide/);
+    expect(text).toMatch(/local codes/);
+    const inletToken = estimate.cautions.find((c) => c.includes('must run'))!.match(/\{\{smallArea:([^}]+)\}\}/)!;
+    expect(Number(inletToken[1])).toBeCloseTo(60_000 * 8.805e-7, 9);
+    expect(estimate.assumptions.map((a) => a.key)).toContain('safety.unvented-heater-products');
+  });
+
+  it('a vented heater does not get the unvented cautions', () => {
+    const estimate = estimateHeating(
+      {
+        house: exampleDoublePolyGableHouse({
+          heaters: [{ count: 2, ratedInputW: 30_000, efficiency: 0.8, fuelId: 'propane', heaterType: 'power-vented' }],
+        }),
+        conditions: { designOutdoorC: -10, elevationM: 0, insideRelativeHumidityPct: 80 },
+      },
+      ref,
+    );
+    expect(estimate.cautions.join(' ')).not.toMatch(/UNVENTED/);
   });
 });

@@ -3,8 +3,9 @@ import { EngineInputError, requireInRange } from './errors';
 import { computeHouseGeometry } from './geometry/house-geometry';
 import { condensationRisk, type CondensationResult } from './heating/condensation';
 import { designHeatLoss, heatLossCoefficients, CURTAIN_SURFACES, type HeatLossBreakdown } from './heating/heat-loss';
-import { requiredRow, type SafetyRow } from './heating/heating-reference';
 import { sizeHeaters, type HeaterSizingResult } from './heating/heater-sizing';
+import { combustionSafety } from './heating/combustion-safety';
+import type { WindCorrection } from './heating/wind';
 import { SURFACE_GROUPS, type SurfaceGroup } from './vocabulary';
 import { type HouseSpec } from './house.types';
 import { insideAirDensityKgPerM3 } from './psychrometrics/psychrometrics';
@@ -25,6 +26,8 @@ export interface HeatingConditions {
    * the curtain open, since curtains are opened to shed snow and can fail to close.
    */
   curtainClosed?: boolean;
+  /** design wind speed, m/s; default the wind the U tables assume (reference-data/wind.json) */
+  designWindSpeedMPerS?: number;
 }
 
 export interface HeatingEstimateInput {
@@ -48,6 +51,8 @@ export interface HeatingEstimate {
     roofAreaM2: number;
     sidewallAreaM2: number;
     endwallAreaM2: number;
+    /** opaque kneewall on the sidewalls and endwalls, m² (0 without one) */
+    kneewallAreaM2: number;
     coverAreaM2: number;
     perimeterM: number;
     volumeM3: number;
@@ -65,7 +70,13 @@ const USER_CONFIDENCE = 'user-entered';
 const PSYCHROLIB_SOURCE =
   'computed with psychrolib (ASHRAE 2017 Fundamentals ch. 1): standard-atmosphere pressure at the site elevation';
 
-function fromRow(row: ReferenceRow, key: string, label: string, value: number, unit: string): HeatingAssumption {
+function fromRow(
+  row: ReferenceRow,
+  key: string,
+  label: string,
+  value: number | string,
+  unit: string,
+): HeatingAssumption {
   return { key, label, value, unit, source: row.source, confidence: row.confidence, overridden: false };
 }
 
@@ -103,6 +114,51 @@ function validateConditions(conditions: HeatingConditions, house: HouseSpec): nu
   );
 }
 
+function windAssumptions(wind: WindCorrection, entered: boolean): HeatingAssumption[] {
+  const list: HeatingAssumption[] = [
+    entered
+      ? {
+          key: 'wind.designWindSpeedMPerS',
+          label: `Design wind speed (the U tables assume ${quantityToken('velocity', wind.tableWindSpeedMPerS)})`,
+          value: wind.windSpeedMPerS,
+          unit: 'm/s',
+          source: USER_SOURCE,
+          confidence: USER_CONFIDENCE,
+          overridden: true,
+        }
+      : fromRow(
+          wind.rows.defaultWind,
+          'wind.designWindSpeedMPerS',
+          wind.rows.defaultWind.label,
+          wind.windSpeedMPerS,
+          'm/s',
+        ),
+  ];
+  for (const row of wind.rows.relations) {
+    const groups = SURFACE_GROUPS.filter((group) => wind.relation[group] === row.id);
+    const factor = wind.uFactor[groups[0]];
+    list.push(
+      fromRow(
+        row,
+        `wind.${row.id}`,
+        `U at the design wind ÷ tabulated U, ${groups.join(' and ')}: ${row.label}`,
+        factor,
+        '–',
+      ),
+    );
+  }
+  list.push(
+    fromRow(
+      wind.rows.infiltration,
+      'wind.infiltrationFactor',
+      wind.rows.infiltration.label,
+      wind.infiltrationFactor,
+      '–',
+    ),
+  );
+  return list;
+}
+
 // Quantities in labels and cautions are tokens (see prose.ts): the reader's unit system shows them.
 const kW = (watts: number) => quantityToken('power', watts);
 const degC = (celsius: number) => quantityToken('temperature', celsius);
@@ -124,6 +180,7 @@ export function estimateHeating(input: HeatingEstimateInput, ref: ReferenceData)
   const coefficients = heatLossCoefficients(house, geometry, ref, {
     curtainClosed,
     airDensityKgPerM3: air.airDensityKgPerM3,
+    windSpeedMPerS: conditions.designWindSpeedMPerS ?? undefined,
   });
   const heatLoss = designHeatLoss(coefficients, geometry, insideC, outsideC);
   const sizing = sizeHeaters(
@@ -140,7 +197,8 @@ export function estimateHeating(input: HeatingEstimateInput, ref: ReferenceData)
     SURFACE_GROUPS.map((group) => ({
       group,
       coveringId: coefficients.rows.coverings[group].id,
-      uWPerM2K: coefficients.coveringUWPerM2K[group],
+      // the covering's U at the design wind (the curtain is not credited for the cover's own surface)
+      uWPerM2K: coefficients.coveringUWPerM2K[group] * coefficients.wind.uFactor[group],
     })),
     ref,
   );
@@ -169,6 +227,18 @@ export function estimateHeating(input: HeatingEstimateInput, ref: ReferenceData)
             row.uWPerM2K,
             'W/(m²·K)',
           ),
+    );
+  }
+  const kneewallRow = coefficients.rows.kneewall;
+  if (kneewallRow && geometry.kneewallAreaM2 > 0) {
+    assumptions.push(
+      fromRow(
+        kneewallRow,
+        'kneewall.uWPerM2K',
+        `U-value, kneewall ${metres(geometry.kneewallHeightM)} high: ${kneewallRow.label}`,
+        kneewallRow.uWPerM2K,
+        'W/(m²·K)',
+      ),
     );
   }
   const curtainRow = coefficients.rows.curtain;
@@ -204,6 +274,7 @@ export function estimateHeating(input: HeatingEstimateInput, ref: ReferenceData)
           '1/h',
         ),
   );
+  assumptions.push(...windAssumptions(coefficients.wind, conditions.designWindSpeedMPerS !== undefined));
   const perimeterRow = coefficients.rows.perimeter;
   assumptions.push(
     fromRow(
@@ -312,6 +383,7 @@ export function estimateHeating(input: HeatingEstimateInput, ref: ReferenceData)
     const closed = heatLossCoefficients(house, geometry, ref, {
       curtainClosed: true,
       airDensityKgPerM3: air.airDensityKgPerM3,
+      windSpeedMPerS: conditions.designWindSpeedMPerS ?? undefined,
     });
     const closedLossW = designHeatLoss(closed, geometry, insideC, outsideC).totalW;
     cautions.push(
@@ -334,29 +406,10 @@ export function estimateHeating(input: HeatingEstimateInput, ref: ReferenceData)
     );
   }
   if (sizing.result.fuelFired) {
-    const safety = (id: string) => requiredRow<SafetyRow>(ref, 'safety', id);
-    const inlet = safety('combustion-air-inlet');
-    const aboveRidge = safety('chimney-above-ridge');
-    const aboveRoof = safety('chimney-above-roof-edge');
-    const clearance = safety('chimney-clearance-horizontal');
-    const coLimit = safety('co-niosh-rel');
-    const ethylene = safety('ethylene-crop-injury');
-    const sulfurDioxide = safety('so2-crop-injury');
-    const inletAreaM2 = sizing.fuelFiredInputW * (inlet.valueM2PerW as number);
-    cautions.push(
-      `Fuel-fired heaters need a fresh-air inlet for combustion: a free area of at least about ${quantityToken('areaPerPower', inlet.valueM2PerW as number)} of heater input ` +
-        `(about ${quantityToken('smallArea', inletAreaM2)} for the ${kW(sizing.fuelFiredInputW)} entered); local codes may require more.`,
-      `Vent every fuel-fired heater to the outside through a sound flue. Chimneys: at least ${metres(aboveRidge.valueM as number)} above the ridge, ${metres(aboveRoof.valueM as number)} above the roof where they pass through, ` +
-        `and ${metres(clearance.valueM as number)} horizontally from the nearest roof; exhaust fans can pull flue gas back into the house.`,
-      `Carbon monoxide from a faulty, unvented or back-drafting heater can kill people. Fit carbon monoxide alarms (NIOSH recommended limit ${coLimit.valuePpm} ppm over 8 h).`,
-      `Incomplete combustion releases ethylene, which injures sensitive crops from about ${ethylene.valuePpm} ppm, and sulfur-bearing fuels release sulfur dioxide, injurious from about ${sulfurDioxide.valuePpm} ppm. ` +
-        'A yellow or orange flame signals trouble; unvented heaters are not recommended even as back-up.',
-      'Have fuel-fired equipment sized, installed and serviced by licensed installers under local codes.',
-    );
-    for (const row of [inlet, aboveRidge, aboveRoof, clearance, coLimit, ethylene, sulfurDioxide]) {
-      const value = row.valueM2PerW ?? row.valueM ?? row.valuePpm;
-      const unit = row.valueM2PerW !== undefined ? 'm²/W' : row.valueM !== undefined ? 'm' : 'ppm';
-      assumptions.push(fromRow(row, `safety.${row.id}`, row.label, value as number, unit));
+    const safety = combustionSafety(sizing.fuelFiredInputW, sizing.unventedInputW, ref);
+    cautions.push(...safety.cautions);
+    for (const { row, value, unit } of safety.rows) {
+      assumptions.push(fromRow(row, `safety.${row.id}`, row.label, value, unit));
     }
   }
   cautions.push(
@@ -369,6 +422,7 @@ export function estimateHeating(input: HeatingEstimateInput, ref: ReferenceData)
       roofAreaM2: geometry.roofAreaM2,
       sidewallAreaM2: geometry.sidewallAreaM2,
       endwallAreaM2: geometry.endwallAreaM2,
+      kneewallAreaM2: geometry.kneewallAreaM2,
       coverAreaM2: geometry.coverAreaM2,
       perimeterM: geometry.perimeterM,
       volumeM3: geometry.volumeM3,

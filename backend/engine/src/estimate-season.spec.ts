@@ -405,3 +405,11 @@ describe('estimateSeason with the installed heaters as a limit', () => {
     expect(none.heaterCapacity.caution).toMatch(/^The house has no heaters/);
   });
 });
+
+describe('estimateSeason: efficiency on the higher-heating-value basis', () => {
+  it('refuses a fuel-fired efficiency above 1.0, naming heaterEfficiency', () => {
+    expect(() => estimateSeason(demoSeasonInput({ heaterEfficiency: 1.03 }), ref)).toThrow(
+      expect.objectContaining({ field: 'heaterEfficiency' }),
+    );
+  });
+});

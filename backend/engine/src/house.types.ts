@@ -2,7 +2,7 @@
  * A greenhouse as the engine sees it. SI units throughout; names carry their unit.
  * The API's house DTOs and the stored house map onto this shape one to one.
  */
-import type { HouseShape, SurfaceGroup } from './vocabulary';
+import type { HeaterType, HouseShape, SurfaceGroup } from './vocabulary';
 
 export interface HeaterGroup {
   /** number of identical units */
@@ -13,6 +13,11 @@ export interface HeaterGroup {
   efficiency: number;
   /** id of a row in reference-data/fuels.json */
   fuelId: string;
+  /**
+   * what kind of heater (reference-data/heater-types.json): sets the efficiency the form offers
+   * and the cautions; null or absent when not stated
+   */
+  heaterType?: HeaterType | null;
 }
 
 export interface ExhaustFans {
@@ -46,6 +51,14 @@ export interface HouseSpec {
   /** a measured air-change rate that replaces the leakage class's rate, 1/h */
   airChangesPerHourOverride?: number | null;
   perimeterInsulated: boolean;
+  /**
+   * height of the band at the foot of the sidewalls and endwalls that is (or would be) a kneewall,
+   * m; 0 or absent for none. It is opaque only when `kneewallId` names a construction: without one
+   * the glazing reaches the ground (and the insulation measure knows how high to build).
+   */
+  kneewallHeightM?: number | null;
+  /** reference-data/kneewalls.json id of the kneewall's construction, or null for glazing to the ground */
+  kneewallId?: string | null;
   /** reference-data/curtains.json id of a thermal curtain drawn at night, or null for none */
   curtainId?: string | null;
   heaters: HeaterGroup[];

@@ -17,6 +17,7 @@ export function climateToDto(row: FarmClimate): SiteClimateDto {
     summerDailyRangeK: row.summerDailyRangeK,
     monthly: [...row.monthly].sort((a, b) => a.month - b.month),
     sourceNote: row.sourceNote ?? null,
+    designWindSpeedMPerS: row.designWindSpeedMPerS ?? null,
   };
 }
 

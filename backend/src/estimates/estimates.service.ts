@@ -90,6 +90,8 @@ export class EstimatesService {
       insideRelativeHumidityPct: given.insideRelativeHumidityPct ?? this.defaultInsideHumidityPct(),
       insideC: given.insideC ?? house.setpoints.nightHeatingC,
       curtainClosed: given.curtainClosed ?? false,
+      designWindSpeedMPerS:
+        given.designWindSpeedMPerS ?? climate?.designWindSpeedMPerS ?? this.defaultDesignWindMPerS(),
     };
     const conditionsSource: HeatingConditionsSourceDto = {
       designOutdoorC: given.designOutdoorC === undefined ? 'farm climate' : 'request',
@@ -97,6 +99,12 @@ export class EstimatesService {
       insideRelativeHumidityPct: given.insideRelativeHumidityPct === undefined ? 'reference data' : 'request',
       insideC: given.insideC === undefined ? 'house night setpoint' : 'request',
       curtainClosed: given.curtainClosed === undefined ? 'default' : 'request',
+      designWindSpeedMPerS:
+        given.designWindSpeedMPerS !== undefined
+          ? 'request'
+          : climate?.designWindSpeedMPerS !== undefined && climate?.designWindSpeedMPerS !== null
+            ? 'farm climate'
+            : 'reference data',
     };
     const conditions: HeatingConditions = { ...conditionsUsed };
     return { input: { house, conditions }, conditionsUsed, conditionsSource };
@@ -180,6 +188,19 @@ export class EstimatesService {
     const farm = await this.farms.findByPk(farmId);
     if (!farm) throw new NotFoundException('No such farm');
     return farm;
+  }
+
+  /** The wind the U tables assume (reference-data/wind.json), used when the farm gives none. */
+  private defaultDesignWindMPerS(): number {
+    const row = referenceRow<ReferenceRow & { valueMPerS?: number }>(
+      this.reference.data,
+      'wind',
+      'design-wind-default',
+    );
+    if (!row || typeof row.valueMPerS !== 'number') {
+      throw new Error('reference-data/wind.json needs a row design-wind-default with valueMPerS');
+    }
+    return row.valueMPerS;
   }
 
   private defaultInsideHumidityPct(): number {

@@ -17,6 +17,8 @@ export function houseToSpec(house: House | HouseDto): HouseSpec {
     airChangesPerHourOverride: house.airChangesPerHourOverride ?? null,
     perimeterInsulated: house.perimeterInsulated,
     curtainId: house.curtainId ?? null,
+    kneewallHeightM: house.kneewallHeightM ?? null,
+    kneewallId: house.kneewallId ?? null,
     heaters: house.heaters.map((h) => ({ ...h })),
     exhaustFans: { ...house.exhaustFans },
     inletAreaM2: house.inletAreaM2,
@@ -35,6 +37,8 @@ export function houseToDto(house: House): HouseDto {
     airChangesPerHourOverride: house.airChangesPerHourOverride ?? null,
     curtainId: house.curtainId ?? null,
     version: house.version,
+    kneewallHeightM: house.kneewallHeightM ?? null,
+    kneewallId: house.kneewallId ?? null,
     createdAt: house.createdAt.toISOString(),
     updatedAt: house.updatedAt.toISOString(),
   };

@@ -27,6 +27,7 @@ export class ReferenceDataService {
     }
     check('air-leakage', 'airLeakageClassId', house.airLeakageClassId);
     check('curtains', 'curtainId', house.curtainId);
+    check('kneewalls', 'kneewallId', house.kneewallId);
     house.heaters?.forEach((heater, index) => check('fuels', `heaters.${index}.fuelId`, heater.fuelId));
   }
 }

@@ -137,7 +137,7 @@ export const DEMO_HOUSES: DemoHouse[] = [
   {
     name: 'Range C – cucumbers',
     notes:
-      'Invented demo range: three 30 × 150 ft gable spans, gutter-connected, double poly roof, twin-wall sides, energy curtain.',
+      'Invented demo range: three 30 × 150 ft gable spans, gutter-connected, double poly roof, twin-wall sides above a 2 ft concrete-block kneewall, energy curtain.',
     shape: 'gable',
     spans: 3,
     widthM: round(30 * FT),
@@ -154,6 +154,8 @@ export const DEMO_HOUSES: DemoHouse[] = [
     airChangesPerHourOverride: null,
     perimeterInsulated: true,
     curtainId: 'energy-screen-aluminised',
+    kneewallHeightM: round(2 * FT),
+    kneewallId: 'concrete-block-200mm',
     heaters: [{ count: 6, ratedInputW: round(400_000 * BTU_PER_H_IN_W, 2), efficiency: 0.8, fuelId: 'natural-gas' }],
     exhaustFans: { count: 10, capacityEachM3PerS: round(20_000 * CFM_IN_M3_PER_S) },
     inletAreaM2: 20,

@@ -1300,6 +1300,11 @@ export interface components {
              * @example propane
              */
             fuelId: string;
+            /**
+             * @description what kind of heater (reference-data heater-types): its typical efficiency is offered as the default and an unvented fuel-fired type brings the strong cautions; null when not stated
+             * @enum {string|null}
+             */
+            heaterType?: "gravity-vented" | "power-vented" | "separated-combustion" | "condensing" | "unvented" | "boiler" | "electric" | null;
         };
         ExhaustFansDto: {
             count: number;
@@ -1329,6 +1334,10 @@ export interface components {
             /** @description measured air changes per hour */
             airChangesPerHourOverride?: number | null;
             perimeterInsulated: boolean;
+            /** @description height of the band at the foot of the sidewalls and endwalls, m (at most the eave height); opaque when kneewallId names a construction, glazing otherwise */
+            kneewallHeightM?: number | null;
+            /** @description reference-data kneewalls id of the kneewall construction; null: glazing to the ground */
+            kneewallId?: string | null;
             /** @description reference-data curtains id, drawn at night */
             curtainId?: string | null;
             heaters: components["schemas"]["HeaterGroupDto"][];
@@ -1364,6 +1373,10 @@ export interface components {
             /** @description measured air changes per hour */
             airChangesPerHourOverride?: number | null;
             perimeterInsulated: boolean;
+            /** @description height of the band at the foot of the sidewalls and endwalls, m (at most the eave height); opaque when kneewallId names a construction, glazing otherwise */
+            kneewallHeightM?: number | null;
+            /** @description reference-data kneewalls id of the kneewall construction; null: glazing to the ground */
+            kneewallId?: string | null;
             /** @description reference-data curtains id, drawn at night */
             curtainId?: string | null;
             heaters: components["schemas"]["HeaterGroupDto"][];
@@ -1393,6 +1406,10 @@ export interface components {
             /** @description measured air changes per hour */
             airChangesPerHourOverride?: number | null;
             perimeterInsulated?: boolean;
+            /** @description height of the band at the foot of the sidewalls and endwalls, m (at most the eave height); opaque when kneewallId names a construction, glazing otherwise */
+            kneewallHeightM?: number | null;
+            /** @description reference-data kneewalls id of the kneewall construction; null: glazing to the ground */
+            kneewallId?: string | null;
             /** @description reference-data curtains id, drawn at night */
             curtainId?: string | null;
             heaters?: components["schemas"]["HeaterGroupDto"][];
@@ -1426,6 +1443,8 @@ export interface components {
             monthly: components["schemas"]["MonthlyClimateDto"][];
             /** @description where the numbers came from (e.g. national climate normals, station name) */
             sourceNote?: string | null;
+            /** @description winter design wind speed, m/s; null: the 6.7 m/s (15 mph) the U tables assume (reference-data/wind.json) */
+            designWindSpeedMPerS?: number | null;
         };
         FarmClimateDto: {
             farmId: number;
@@ -1452,6 +1471,10 @@ export interface components {
             /** @description measured air changes per hour */
             airChangesPerHourOverride?: number | null;
             perimeterInsulated: boolean;
+            /** @description height of the band at the foot of the sidewalls and endwalls, m (at most the eave height); opaque when kneewallId names a construction, glazing otherwise */
+            kneewallHeightM?: number | null;
+            /** @description reference-data kneewalls id of the kneewall construction; null: glazing to the ground */
+            kneewallId?: string | null;
             /** @description reference-data curtains id, drawn at night */
             curtainId?: string | null;
             heaters: components["schemas"]["HeaterGroupDto"][];
@@ -1471,6 +1494,8 @@ export interface components {
             insideC?: number;
             /** @description credit a drawn curtain in the design loss; default false (heaters sized with the curtain open) */
             curtainClosed?: boolean;
+            /** @description design wind speed, m/s; default the farm climate's, else the 6.7 m/s (15 mph) the U tables assume */
+            designWindSpeedMPerS?: number;
         };
         HeatingEstimateRequestDto: {
             house: components["schemas"]["HouseSpecDto"];
@@ -1483,18 +1508,35 @@ export interface components {
             roofAreaM2: number;
             /** @description m² */
             sidewallAreaM2: number;
-            /** @description m² */
+            /** @description glazed endwall area, m² */
             endwallAreaM2: number;
-            /** @description roof + sidewalls + endwalls, m² */
+            /** @description opaque kneewall on the sidewalls and endwalls, m² (0 without one) */
+            kneewallAreaM2: number;
+            /** @description roof + sidewalls + endwalls + kneewall, m² */
             coverAreaM2: number;
             /** @description outside perimeter of the house at the ground, m */
             perimeterM: number;
             /** @description m³ */
             volumeM3: number;
         };
+        WindFactorsDto: {
+            roof: number;
+            sidewalls: number;
+            endwalls: number;
+        };
+        WindSummaryDto: {
+            /** @description design wind speed, m/s */
+            windSpeedMPerS: number;
+            /** @description the wind the U tables assume, m/s */
+            tableWindSpeedMPerS: number;
+            /** @description U at the design wind ÷ tabulated U, per covering group */
+            uFactor: components["schemas"]["WindFactorsDto"];
+            /** @description air changes at the design wind ÷ tabulated air changes */
+            infiltrationFactor: number;
+        };
         HeatLossComponentDto: {
             /** @enum {string} */
-            key: "roof" | "sidewalls" | "endwalls" | "perimeter" | "infiltration";
+            key: "roof" | "sidewalls" | "endwalls" | "kneewall" | "perimeter" | "infiltration";
             label: string;
             /** @description area (m²), perimeter (m) or volume (m³), see quantityUnit */
             quantity: number;
@@ -1520,11 +1562,14 @@ export interface components {
             totalW: number;
             /** @description through the coverings, W */
             coveringW: number;
+            /** @description through the opaque kneewall, W (0 without one) */
+            kneewallW: number;
             /** @description through the perimeter, W */
             perimeterW: number;
             /** @description air leakage, W */
             infiltrationW: number;
             curtainApplied: boolean;
+            wind: components["schemas"]["WindSummaryDto"];
             components: components["schemas"]["HeatLossComponentDto"][];
         };
         HeaterSizingDto: {
@@ -1746,6 +1791,8 @@ export interface components {
         };
         WinterVentilationDto: {
             fractionOfSummerRate: number;
+            /** @description m³/s: the summer rate the fraction is taken of (base rate × floor area × elevation factor only) */
+            summerBaseFlowM3PerS: number;
             /** @description m³/s */
             flowM3PerS: number;
             /** @description 1/h */
@@ -1792,6 +1839,8 @@ export interface components {
             insideC?: number;
             /** @description credit a drawn curtain in the design loss; default false (heaters sized with the curtain open) */
             curtainClosed?: boolean;
+            /** @description design wind speed, m/s; default the farm climate's, else the 6.7 m/s (15 mph) the U tables assume */
+            designWindSpeedMPerS?: number;
         };
         HouseHeatingEstimateRequestDto: {
             conditions?: components["schemas"]["PartialHeatingConditionsDto"];
@@ -1806,6 +1855,8 @@ export interface components {
             /** @description °C */
             insideC: number;
             curtainClosed: boolean;
+            /** @description m/s */
+            designWindSpeedMPerS: number;
         };
         HeatingConditionsSourceDto: {
             /** @enum {string} */
@@ -1818,6 +1869,8 @@ export interface components {
             insideC: "house night setpoint" | "request";
             /** @enum {string} */
             curtainClosed: "default" | "request";
+            /** @enum {string} */
+            designWindSpeedMPerS: "farm climate" | "reference data" | "request";
         };
         HouseHeatingEstimateDto: {
             geometry: components["schemas"]["HouseGeometrySummaryDto"];
@@ -2235,6 +2288,10 @@ export interface components {
             surfaces?: ("roof" | "sidewalls")[];
             /** @description second-poly-layer: the coverings id the surfaces become */
             coveringId?: string;
+            /** @description perimeter-insulation: kneewalls id the kneewall is built of (default 2 in foam board) */
+            kneewallId?: string;
+            /** @description perimeter-insulation: kneewall height, m, where the house gives none (default 0.91 m) */
+            kneewallHeightM?: number;
             /** @description thermal-curtain: curtains id */
             curtainId?: string;
             /** @description sealing: air-leakage class to reach */
@@ -2245,6 +2302,11 @@ export interface components {
             lowerByK?: number;
             /** @description later-start: days */
             delayDays?: number;
+            /**
+             * @description heater-efficiency: the kind of heater the units are replaced by (default: condensing); its typical efficiency applies unless `efficiency` is given
+             * @enum {string}
+             */
+            heaterType?: "gravity-vented" | "power-vented" | "separated-combustion" | "condensing" | "unvented" | "boiler" | "electric";
             /** @description heater-efficiency / fuel-switch: efficiency of the new heaters */
             efficiency?: number;
             /** @description fuel-switch: the new fuel and its price (without it the measure is reported as not applicable) */
@@ -2295,8 +2357,11 @@ export interface components {
             unitUs: string;
         };
         MeasureLightChangeDto: {
-            /** @enum {string} */
-            surface: "roof" | "sidewalls";
+            /**
+             * @description 'kneewall': light through the whole envelope, an opaque kneewall passing none
+             * @enum {string}
+             */
+            surface: "roof" | "sidewalls" | "kneewall";
             /** @description light transmittance before, 0–1 */
             before: number;
             /** @description light transmittance after, 0–1 */

@@ -107,7 +107,16 @@ export interface SelectOption {
   label: string;
 }
 
-export function FormSelectField({ name, options, helperText, ...rest }: BaseProps & { options: SelectOption[] }) {
+export function FormSelectField({
+  name,
+  options,
+  helperText,
+  onValueChange,
+  ...rest
+}: BaseProps & {
+  options: SelectOption[];
+  /** called after the field takes a new value */ onValueChange?: (value: string) => void;
+}) {
   const [field] = useField<string>(name);
   const hasEmptyOption = options.some((option) => option.value === '');
   const error = useFieldError(name);
@@ -122,7 +131,10 @@ export function FormSelectField({ name, options, helperText, ...rest }: BaseProp
       id={rest.id ?? `field-${name}`}
       name={field.name}
       value={field.value ?? ''}
-      onChange={field.onChange}
+      onChange={(event) => {
+        field.onChange(event);
+        onValueChange?.(String(event.target.value));
+      }}
       onBlur={field.onBlur}
       error={Boolean(error)}
       helperText={error ?? helperText}

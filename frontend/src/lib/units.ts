@@ -64,6 +64,7 @@ export type Quantity =
   | 'perimeterFactor'
   | 'conductance'
   | 'velocity'
+  | 'windSpeed'
   | 'illuminance'
   | 'pressure'
   | 'density'
@@ -148,6 +149,8 @@ const UNITS: Record<Quantity, Record<UnitSystem, UnitDefinition>> = {
   // UA of a whole house
   conductance: { si: scaled('W/K', 1, 0), us: scaled('Btu/(h·°F)', W_PER_K_PER_BTU_PER_HF, 0) },
   velocity: { si: scaled('m/s', 1, 2), us: scaled('ft/min', METRES_PER_SECOND_PER_FOOT_PER_MINUTE, 0) },
+  // wind is read in m/s and in miles per hour (1 mph = 0.44704 m/s exactly)
+  windSpeed: { si: scaled('m/s', 1, 1), us: scaled('mph', 0.44704, 1) },
   illuminance: { si: scaled('lx', 1, 0), us: scaled('fc', LUX_PER_FOOTCANDLE, 0) },
   pressure: { si: scaled('kPa', 1000, 1), us: scaled('psi', PASCALS_PER_PSI, 2) },
   density: { si: scaled('kg/m³', 1, 3), us: scaled('lb/ft³', KG_PER_M3_PER_LB_PER_FT3, 4) },

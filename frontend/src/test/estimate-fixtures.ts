@@ -58,6 +58,7 @@ export const demoHouseBHeating: HouseHeatingEstimate = {
     roofAreaM2: 231.901468756456,
     sidewallAreaM2: 71.338318,
     endwallAreaM2: 33.80459458747329,
+    kneewallAreaM2: 0,
     coverAreaM2: 337.0443813439293,
     perimeterM: 70.714,
     volumeM3: 494.57812111202793,
@@ -68,9 +69,16 @@ export const demoHouseBHeating: HouseHeatingEstimate = {
     deltaTK: 39,
     totalW: 96639.48500069606,
     coveringW: 87675.35491899632,
+    kneewallW: 0,
     perimeterW: 3805.82748,
     infiltrationW: 5158.302601699728,
     curtainApplied: false,
+    wind: {
+      windSpeedMPerS: 6.7,
+      tableWindSpeedMPerS: 6.7,
+      uFactor: { roof: 1, sidewalls: 1, endwalls: 1 },
+      infiltrationFactor: 1,
+    },
     components: [
       {
         key: 'roof',
@@ -258,6 +266,7 @@ export const demoHouseBHeating: HouseHeatingEstimate = {
     insideRelativeHumidityPct: 85,
     insideC: 10,
     curtainClosed: false,
+    designWindSpeedMPerS: 6.7,
   },
   conditionsSource: {
     designOutdoorC: 'farm climate',
@@ -265,6 +274,7 @@ export const demoHouseBHeating: HouseHeatingEstimate = {
     insideRelativeHumidityPct: 'reference data',
     insideC: 'house night setpoint',
     curtainClosed: 'default',
+    designWindSpeedMPerS: 'reference data',
   },
 };
 
@@ -582,6 +592,7 @@ export const demoHouseBCooling: HouseCoolingEstimate = {
   },
   winterVentilation: {
     fractionOfSummerRate: 0.25,
+    summerBaseFlowM3PerS: 7.546929702656,
     flowM3PerS: 1.8867324256640001,
     airChangesPerHour: 13.733395074409035,
     heatCostW: 88910.66154474112,

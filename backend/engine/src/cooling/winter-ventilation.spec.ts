@@ -3,7 +3,7 @@ import { winterVentilation } from './winter-ventilation';
 describe('winterVentilation', () => {
   const base = {
     fractionOfSummerRate: 0.25,
-    summerRequiredFlowM3PerS: 10,
+    summerBaseFlowM3PerS: 10,
     volumeM3: 1000,
     indoorC: 15,
     outdoorC: -5,

@@ -1,5 +1,7 @@
 export interface WinterVentilation {
   fractionOfSummerRate: number;
+  /** the summer rate the fraction is taken of: base rate × floor area × elevation factor, m³/s */
+  summerBaseFlowM3PerS: number;
   flowM3PerS: number;
   airChangesPerHour: number;
   /** sensible heat to warm the ventilation air from outdoor to the night heating setpoint, W */
@@ -11,7 +13,12 @@ export interface WinterVentilation {
 
 export interface WinterVentilationInput {
   fractionOfSummerRate: number;
-  summerRequiredFlowM3PerS: number;
+  /**
+   * the summer rate the fraction applies to: base rate × floor area × elevation factor only, m³/s.
+   * The light, temperature-rise and short-house factors size fans for summer sun; applying them
+   * here would push the winter stage above the 1.5–2.5 cfm/ft² the fraction stands for.
+   */
+  summerBaseFlowM3PerS: number;
   volumeM3: number;
   indoorC: number;
   outdoorC: number;
@@ -22,14 +29,15 @@ export interface WinterVentilationInput {
 }
 
 /**
- * The winter fan stage (a fraction of the summer rate) and what running it costs in heat,
+ * The winter fan stage (a fraction of the summer base rate × elevation) and what running it costs in heat,
  * ρ·c_p·V̇·(T_i − T_o), beside the house's own loss at the same temperatures so the two can be weighed.
  */
 export function winterVentilation(input: WinterVentilationInput): WinterVentilation {
-  const flowM3PerS = input.fractionOfSummerRate * input.summerRequiredFlowM3PerS;
+  const flowM3PerS = input.fractionOfSummerRate * input.summerBaseFlowM3PerS;
   const deltaTK = Math.max(0, input.indoorC - input.outdoorC);
   return {
     fractionOfSummerRate: input.fractionOfSummerRate,
+    summerBaseFlowM3PerS: input.summerBaseFlowM3PerS,
     flowM3PerS,
     airChangesPerHour: (flowM3PerS * 3600) / input.volumeM3,
     heatCostW: input.airDensityKgPerM3 * input.cpJPerKgK * flowM3PerS * deltaTK,

@@ -9,6 +9,7 @@ import {
   gableProfile,
   gothicArchMaxRiseM,
   gothicArchProfile,
+  opaqueEnvelopeShare,
   quonsetProfile,
 } from './house-geometry';
 
@@ -166,18 +167,73 @@ describe('computeHouseGeometry', () => {
           const geometry = computeHouseGeometry(
             exampleDoublePolyGableHouse({ shape: houseShape, spans, widthM, lengthM, eaveHeightM, ridgeHeightM }),
           );
-          for (const value of Object.values(geometry)) {
+          for (const [key, value] of Object.entries(geometry)) {
             expect(Number.isFinite(value)).toBe(true);
-            expect(value).toBeGreaterThan(0);
+            // no kneewall here, so its area and height are 0
+            if (key === 'kneewallAreaM2' || key === 'kneewallHeightM') expect(value).toBe(0);
+            else expect(value).toBeGreaterThan(0);
           }
           expectRelativelyClose(
             geometry.coverAreaM2,
-            geometry.roofAreaM2 + geometry.sidewallAreaM2 + geometry.endwallAreaM2,
+            geometry.roofAreaM2 + geometry.sidewallAreaM2 + geometry.endwallAreaM2 + geometry.kneewallAreaM2,
             1e-12,
           );
           expect(geometry.volumeM3).toBeGreaterThanOrEqual(geometry.floorAreaM2 * eaveHeightM);
           expect(geometry.volumeM3).toBeLessThanOrEqual(geometry.floorAreaM2 * ridgeHeightM * (1 + 1e-12));
           expect(geometry.roofAreaM2).toBeGreaterThanOrEqual(geometry.floorAreaM2 * (1 - 1e-12));
+        },
+      ),
+    );
+  });
+});
+
+describe('opaque kneewall', () => {
+  it('takes height × (2 L + 2 spans × W) from the glazed walls and keeps the envelope whole (hand arithmetic)', () => {
+    // 9 m × 30 m, eave 2.4 m, kneewall 0.6 m:
+    //   kneewall  = 0.6 × (2 × 30 + 2 × 9) = 46.8 m²
+    //   sidewalls = 2 × 2.4 × 30 − 2 × 0.6 × 30 = 144 − 36 = 108 m²
+    //   endwalls  = 61.2 − 2 × 9 × 0.6 = 61.2 − 10.8 = 50.4 m²
+    const plain = computeHouseGeometry(exampleDoublePolyGableHouse());
+    const walled = computeHouseGeometry(
+      exampleDoublePolyGableHouse({ kneewallHeightM: 0.6, kneewallId: 'wood-plywood-19mm' }),
+    );
+    expect(walled.kneewallAreaM2).toBeCloseTo(46.8, 9);
+    expect(walled.sidewallAreaM2).toBeCloseTo(108, 9);
+    expect(walled.endwallAreaM2).toBeCloseTo(50.4, 9);
+    expect(walled.coverAreaM2).toBeCloseTo(plain.coverAreaM2, 9);
+    expect(opaqueEnvelopeShare(walled)).toBeCloseTo(46.8 / plain.coverAreaM2, 12);
+  });
+
+  it('a height without a construction is glazing to the ground: nothing opaque', () => {
+    const glazed = computeHouseGeometry(exampleDoublePolyGableHouse({ kneewallHeightM: 0.6, kneewallId: null }));
+    expect(glazed.kneewallAreaM2).toBe(0);
+    expect(opaqueEnvelopeShare(glazed)).toBe(0);
+  });
+
+  it('refuses a kneewall above the eave, naming house.kneewallHeightM', () => {
+    expectEngineError(
+      () =>
+        computeHouseGeometry(exampleDoublePolyGableHouse({ kneewallHeightM: 2.5, kneewallId: 'wood-plywood-19mm' })),
+      'house.kneewallHeightM',
+    );
+  });
+
+  it('property: a kneewall never adds light (the opaque share only grows with its height)', () => {
+    fc.assert(
+      fc.property(
+        fc.double({ min: 0, max: 2.4, noNaN: true }),
+        fc.double({ min: 0, max: 2.4, noNaN: true }),
+        (a, b) => {
+          const [low, high] = a <= b ? [a, b] : [b, a];
+          const share = (h: number) =>
+            opaqueEnvelopeShare(
+              computeHouseGeometry(
+                exampleDoublePolyGableHouse({ kneewallHeightM: h, kneewallId: 'concrete-block-200mm' }),
+              ),
+            );
+          expect(share(low)).toBeGreaterThanOrEqual(0);
+          expect(share(high)).toBeGreaterThanOrEqual(share(low) - 1e-12);
+          expect(1 - share(high)).toBeLessThanOrEqual(1);
         },
       ),
     );

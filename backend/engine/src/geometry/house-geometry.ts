@@ -22,14 +22,23 @@ import { type HouseSpec } from '../house.types';
  *
  * Only the two outer long walls of a range are sidewalls (inner spans share gutters); every span
  * has an endwall at each end.
+ *
+ * An opaque kneewall (a construction named in `kneewallId`, `kneewallHeightM` high) runs along the
+ * foot of both sidewalls and of every endwall: its area (height × (2 × length + 2 × spans × width))
+ * leaves the sidewall and endwall areas, which are the glazed areas.
  */
 export interface HouseGeometry {
   floorAreaM2: number;
   roofAreaM2: number;
-  /** the two outer long walls, eave height × length each */
+  /** glazed area of the two outer long walls: (eave height − kneewall height) × length each */
   sidewallAreaM2: number;
-  /** both ends of every span: rectangle up to the eave plus the roof profile above it */
+  /** glazed area of both ends of every span: rectangle up to the eave plus the roof profile, less the kneewall */
   endwallAreaM2: number;
+  /** opaque kneewall on the sidewalls and endwalls, m² (0 without one) */
+  kneewallAreaM2: number;
+  /** height of the opaque kneewall, m (0 without one) */
+  kneewallHeightM: number;
+  /** whole envelope above ground: roof + glazed walls + kneewall */
   coverAreaM2: number;
   perimeterM: number;
   volumeM3: number;
@@ -147,10 +156,33 @@ export function validateHouseDimensions(house: HouseSpec, fieldPrefix = 'house')
       `a gothic arch's ridge can rise at most ${maxGothicRiseM.toFixed(2)} m (width × √3/2) above the eave`,
     );
   }
+  opaqueKneewallHeightM(house, fieldPrefix);
+}
+
+/** Height of the house's opaque kneewall, m: 0 unless a construction is named. Checks the height. */
+export function opaqueKneewallHeightM(house: HouseSpec, fieldPrefix = 'house'): number {
+  const height = house.kneewallHeightM;
+  if (height !== undefined && height !== null) {
+    requireInRange(`${fieldPrefix}.kneewallHeightM`, height, BOUNDS.kneewallHeightM.min, BOUNDS.kneewallHeightM.max);
+    if (height > house.eaveHeightM) {
+      throw new EngineInputError(
+        `${fieldPrefix}.kneewallHeightM`,
+        `${fieldPrefix}.kneewallHeightM cannot exceed the eave height (${house.eaveHeightM} m)`,
+      );
+    }
+  }
+  const hasConstruction = typeof house.kneewallId === 'string' && house.kneewallId !== '';
+  return hasConstruction ? (height ?? 0) : 0;
+}
+
+/** Share of the envelope (roof, walls and kneewall) that the opaque kneewall takes: it passes no light. */
+export function opaqueEnvelopeShare(geometry: HouseGeometry): number {
+  return geometry.coverAreaM2 > 0 ? geometry.kneewallAreaM2 / geometry.coverAreaM2 : 0;
 }
 
 export function computeHouseGeometry(house: HouseSpec): HouseGeometry {
   validateHouseDimensions(house);
+  const kneewallHeightM = opaqueKneewallHeightM(house);
   const { spans, widthM, lengthM, eaveHeightM } = house;
   const roofRiseM = house.ridgeHeightM - eaveHeightM;
   const profile = roofProfile(house.shape, widthM, roofRiseM);
@@ -158,15 +190,20 @@ export function computeHouseGeometry(house: HouseSpec): HouseGeometry {
   const endwallAreaPerSpanEndM2 = widthM * eaveHeightM + profile.areaAboveEaveM2;
   const floorAreaM2 = spans * widthM * lengthM;
   const roofAreaM2 = spans * profile.arcLengthM * lengthM;
-  const sidewallAreaM2 = 2 * eaveHeightM * lengthM;
-  const endwallAreaM2 = 2 * spans * endwallAreaPerSpanEndM2;
+  const kneewallSidewallM2 = 2 * kneewallHeightM * lengthM;
+  const kneewallEndwallM2 = 2 * spans * widthM * kneewallHeightM;
+  const sidewallAreaM2 = 2 * eaveHeightM * lengthM - kneewallSidewallM2;
+  const endwallAreaM2 = 2 * spans * endwallAreaPerSpanEndM2 - kneewallEndwallM2;
+  const kneewallAreaM2 = kneewallSidewallM2 + kneewallEndwallM2;
 
   return {
     floorAreaM2,
     roofAreaM2,
     sidewallAreaM2,
     endwallAreaM2,
-    coverAreaM2: roofAreaM2 + sidewallAreaM2 + endwallAreaM2,
+    kneewallAreaM2,
+    kneewallHeightM,
+    coverAreaM2: roofAreaM2 + sidewallAreaM2 + endwallAreaM2 + kneewallAreaM2,
     perimeterM: 2 * (spans * widthM + lengthM),
     volumeM3: spans * endwallAreaPerSpanEndM2 * lengthM,
     roofArcLengthM: profile.arcLengthM,

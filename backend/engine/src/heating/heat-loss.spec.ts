@@ -293,3 +293,40 @@ describe('heat-loss properties', () => {
     );
   });
 });
+
+describe('heat loss: opaque kneewall', () => {
+  it('adds U_kneewall · A and takes the band out of the glazed walls (hand arithmetic)', () => {
+    // Example house with a 0.6 m kneewall of 3/4 in plywood (kneewalls.json U 3.17, memory):
+    //   kneewall 46.8 m² × 3.17 = 148.356 W/K; sidewalls 108 m² × 3.97 = 428.76 W/K;
+    //   endwalls 50.4 m² × 3.49 = 175.896 W/K.
+    const house = exampleDoublePolyGableHouse({ kneewallHeightM: 0.6, kneewallId: 'wood-plywood-19mm' });
+    const geometry = computeHouseGeometry(house);
+    const coefficients = heatLossCoefficients(house, geometry, ref, SEA_LEVEL);
+    expect(coefficients.kneewallWPerK).toBeCloseTo(148.356, 6);
+    expect(coefficients.coveringWPerK.sidewalls).toBeCloseTo(428.76, 6);
+    expect(coefficients.coveringWPerK.endwalls).toBeCloseTo(175.896, 6);
+    const breakdown = designHeatLoss(coefficients, geometry, 15, -10);
+    const kneewall = breakdown.components.find((component) => component.key === 'kneewall')!;
+    expect(kneewall.watts).toBeCloseTo(148.356 * 25, 6);
+    expect(breakdown.kneewallW).toBeCloseTo(148.356 * 25, 6);
+    expect(breakdown.totalW).toBeCloseTo(
+      breakdown.components.reduce((sum, component) => sum + component.watts, 0),
+      6,
+    );
+  });
+
+  it('2 in foam board loses less than the double poly it replaces (U 0.523 against 3.97)', () => {
+    const glazed = exampleDoublePolyGableHouse({ kneewallHeightM: 0.9 });
+    const foam = exampleDoublePolyGableHouse({ kneewallHeightM: 0.9, kneewallId: 'foam-board-50mm' });
+    // 0.9 × 78 = 70.2 m² on the sidewalls and endwalls; sidewall part 54 m² × (3.97 − 0.523),
+    // endwall part 16.2 m² × (3.49 − 0.523): 186.138 + 48.0654 = 234.2034 W/K × 25 K.
+    expect(lossW(glazed, 15, -10) - lossW(foam, 15, -10)).toBeCloseTo(234.2034 * 25, 4);
+  });
+
+  it('refuses an unknown kneewall construction, naming house.kneewallId', () => {
+    expectEngineError(
+      () => lossW(exampleDoublePolyGableHouse({ kneewallHeightM: 0.6, kneewallId: 'straw-bale' }), 15, -10),
+      'house.kneewallId',
+    );
+  });
+});

@@ -12,12 +12,20 @@ import {
   type AirPropertyRow,
   type CoveringRow,
   type CurtainRow,
+  type KneewallRow,
   type PerimeterRow,
 } from './heating-reference';
+import { windCorrection, type WindCorrection } from './wind';
+
+/** The wind part of a breakdown: speed and the factors it applied. */
+export type WindSummary = Pick<
+  WindCorrection,
+  'windSpeedMPerS' | 'tableWindSpeedMPerS' | 'uFactor' | 'infiltrationFactor'
+>;
 
 /**
  * Steady-state heat loss of a closed house:
- *   UA = Σ U_group · A_group  +  F · perimeter  +  ρ · cp · V · ACH / 3600      (W/K)
+ *   UA = Σ U_group · A_group  +  U_kneewall · A_kneewall  +  F · perimeter  +  ρ · cp · V · ACH / 3600   (W/K)
  *   Q  = UA · (T_inside − T_outside)                                            (W)
  * A drawn curtain lowers the U of the surfaces it shields by its fractional reduction s:
  * U_closed = U · (1 − s). It is credited on the roof (the curtain runs under it at gutter height)
@@ -30,6 +38,11 @@ export const CURTAIN_SURFACES: readonly SurfaceGroup[] = ['roof', 'sidewalls'];
 export interface HeatLossOptions {
   /** whether the house's curtain (if it has one) is drawn */
   curtainClosed: boolean;
+  /**
+   * design wind speed, m/s; absent: the wind the tables assume (no correction). Corrects the U of
+   * each covering and the air-change rate (see ./wind.ts).
+   */
+  windSpeedMPerS?: number;
   /** density of the air that leaks out, kg/m³ (see psychrometrics/insideAirDensityKgPerM3) */
   airDensityKgPerM3: number;
 }
@@ -38,6 +51,8 @@ export interface HeatLossCoefficients {
   /** U · A per surface group, W/K, after any curtain */
   coveringWPerK: Record<SurfaceGroup, number>;
   coveringTotalWPerK: number;
+  /** U · A of the opaque kneewall, W/K (0 without one) */
+  kneewallWPerK: number;
   perimeterWPerK: number;
   infiltrationWPerK: number;
   totalWPerK: number;
@@ -51,6 +66,8 @@ export interface HeatLossCoefficients {
   perimeterFactorWPerMK: number;
   airDensityKgPerM3: number;
   specificHeatJPerKgK: number;
+  /** wind the coefficients are for, m/s, and the factors it applied (1 at the tables' wind) */
+  wind: WindCorrection;
   /** fractional U reduction applied to CURTAIN_SURFACES; 0 when there is no curtain or it is open */
   curtainReduction: number;
   curtainApplied: boolean;
@@ -61,6 +78,7 @@ export interface HeatLossCoefficients {
     airLeakage: AirLeakageRow;
     perimeter: PerimeterRow;
     curtain: CurtainRow | null;
+    kneewall: KneewallRow | null;
     specificHeat: AirPropertyRow;
   };
 }
@@ -119,15 +137,23 @@ export function heatLossCoefficients(
   const curtainApplied = options.curtainClosed && curtain !== null;
   const curtainReduction = curtainApplied ? curtain.uReduction : 0;
 
+  const wind = windCorrection(house, ref, options.windSpeedMPerS);
   const areasM2 = groupAreasM2(geometry);
   const effectiveUWPerM2K = {} as Record<SurfaceGroup, number>;
   const coveringWPerK = {} as Record<SurfaceGroup, number>;
   for (const group of SURFACE_GROUPS) {
     const shielded = CURTAIN_SURFACES.includes(group);
-    effectiveUWPerM2K[group] = coverings.uWPerM2K[group] * (shielded ? 1 - curtainReduction : 1);
+    effectiveUWPerM2K[group] = coverings.uWPerM2K[group] * wind.uFactor[group] * (shielded ? 1 - curtainReduction : 1);
     coveringWPerK[group] = effectiveUWPerM2K[group] * areasM2[group];
   }
   const coveringTotalWPerK = SURFACE_GROUPS.reduce((sum, group) => sum + coveringWPerK[group], 0);
+
+  const kneewall =
+    house.kneewallId === undefined || house.kneewallId === null || house.kneewallId === ''
+      ? null
+      : chosenRow<KneewallRow>(ref, 'kneewalls', house.kneewallId, 'house.kneewallId');
+  // the kneewall runs below the curtain and keeps its U when the curtain is drawn
+  const kneewallWPerK = kneewall ? kneewall.uWPerM2K * geometry.kneewallAreaM2 : 0;
 
   if (typeof house.perimeterInsulated !== 'boolean') {
     throw new EngineInputError('house.perimeterInsulated', 'house.perimeterInsulated must be true or false');
@@ -142,7 +168,7 @@ export function heatLossCoefficients(
   const airLeakage = chosenRow<AirLeakageRow>(ref, 'air-leakage', house.airLeakageClassId, 'house.airLeakageClassId');
   const achOverride = house.airChangesPerHourOverride;
   const airChangesPerHourOverridden = achOverride !== undefined && achOverride !== null;
-  const airChangesPerHour = airChangesPerHourOverridden
+  const tableAirChangesPerHour = airChangesPerHourOverridden
     ? requireInRange(
         'house.airChangesPerHourOverride',
         achOverride,
@@ -150,6 +176,7 @@ export function heatLossCoefficients(
         BOUNDS.airChangesPerHour.max,
       )
     : airLeakage.airChangesPerHour;
+  const airChangesPerHour = tableAirChangesPerHour * wind.infiltrationFactor;
   const specificHeat = specificHeatOfAirRow(ref);
   const infiltrationWPerK =
     (options.airDensityKgPerM3 * specificHeat.valueJPerKgK * geometry.volumeM3 * airChangesPerHour) / 3600;
@@ -157,9 +184,10 @@ export function heatLossCoefficients(
   return {
     coveringWPerK,
     coveringTotalWPerK,
+    kneewallWPerK,
     perimeterWPerK,
     infiltrationWPerK,
-    totalWPerK: coveringTotalWPerK + perimeterWPerK + infiltrationWPerK,
+    totalWPerK: coveringTotalWPerK + kneewallWPerK + perimeterWPerK + infiltrationWPerK,
     effectiveUWPerM2K,
     coveringUWPerM2K: coverings.uWPerM2K,
     areasM2,
@@ -167,14 +195,15 @@ export function heatLossCoefficients(
     perimeterFactorWPerMK: perimeter.wPerMK,
     airDensityKgPerM3: options.airDensityKgPerM3,
     specificHeatJPerKgK: specificHeat.valueJPerKgK,
+    wind,
     curtainReduction,
     curtainApplied,
     overridesUsed: { coveringU: coverings.overridden, airChangesPerHour: airChangesPerHourOverridden },
-    rows: { coverings: coverings.rows, airLeakage, perimeter, curtain, specificHeat },
+    rows: { coverings: coverings.rows, airLeakage, perimeter, curtain, kneewall, specificHeat },
   };
 }
 
-export type HeatLossComponentKey = 'roof' | 'sidewalls' | 'endwalls' | 'perimeter' | 'infiltration';
+export type HeatLossComponentKey = 'roof' | 'sidewalls' | 'endwalls' | 'kneewall' | 'perimeter' | 'infiltration';
 
 export interface HeatLossComponent {
   key: HeatLossComponentKey;
@@ -195,9 +224,12 @@ export interface HeatLossBreakdown {
   deltaTK: number;
   totalW: number;
   coveringW: number;
+  kneewallW: number;
   perimeterW: number;
   infiltrationW: number;
   curtainApplied: boolean;
+  /** design wind speed, m/s, and the factors applied to each covering's U and to the air changes */
+  wind: WindSummary;
   components: HeatLossComponent[];
 }
 
@@ -246,6 +278,18 @@ export function designHeatLoss(
         coefficients.coveringWPerK[group],
       ),
     ),
+    ...(coefficients.rows.kneewall && geometry.kneewallAreaM2 > 0
+      ? [
+          component(
+            'kneewall',
+            `Kneewall (${coefficients.rows.kneewall.label})`,
+            geometry.kneewallAreaM2,
+            'm2',
+            coefficients.rows.kneewall.uWPerM2K,
+            coefficients.kneewallWPerK,
+          ),
+        ]
+      : []),
     component(
       'perimeter',
       coefficients.rows.perimeter.label ?? 'Perimeter',
@@ -270,9 +314,16 @@ export function designHeatLoss(
     deltaTK,
     totalW: coefficients.totalWPerK * heatingDeltaTK,
     coveringW: coefficients.coveringTotalWPerK * heatingDeltaTK,
+    kneewallW: coefficients.kneewallWPerK * heatingDeltaTK,
     perimeterW: coefficients.perimeterWPerK * heatingDeltaTK,
     infiltrationW: coefficients.infiltrationWPerK * heatingDeltaTK,
     curtainApplied: coefficients.curtainApplied,
+    wind: {
+      windSpeedMPerS: coefficients.wind.windSpeedMPerS,
+      tableWindSpeedMPerS: coefficients.wind.tableWindSpeedMPerS,
+      uFactor: coefficients.wind.uFactor,
+      infiltrationFactor: coefficients.wind.infiltrationFactor,
+    },
     components,
   };
 }

@@ -128,6 +128,14 @@ describe('sizeHeaters', () => {
     ],
     ['house.heaters.0.count', [propane(1.5, 50_000)]],
     ['house.heaters.0.ratedInputW', [propane(1, 10)]],
+    // higher-heating-value basis: no fuel-fired heater gives more heat than its fuel holds
+    ['house.heaters.0.efficiency', [propane(1, 50_000, 1.02)]],
+    ['house.heaters.0.heaterType', [{ ...propane(1, 50_000), heaterType: 'electric' as const }]],
+    [
+      'house.heaters.0.heaterType',
+      [{ count: 1, ratedInputW: 5_000, efficiency: 1, fuelId: 'electricity', heaterType: 'condensing' as const }],
+    ],
+    ['house.heaters.0.heaterType', [{ ...propane(1, 50_000), heaterType: 'rocket-stove' as never }]],
   ])('refuses a bad %s', (field, heaters) => {
     expectEngineError(
       () => sizeHeaters({ designHeatLossW: 1000, totalConductanceWPerK: 100, insideC: 10, heaters }, ref),
@@ -142,7 +150,7 @@ describe('sizeHeaters', () => {
         fc.double({ min: 1, max: 60, noNaN: true }),
         fc.integer({ min: 0, max: 6 }),
         fc.double({ min: 500, max: 500_000, noNaN: true }),
-        fc.double({ min: 0.3, max: 1.05, noNaN: true }),
+        fc.double({ min: 0.3, max: 1, noNaN: true }),
         (ua, deltaTK, count, ratedInputW, efficiency) => {
           const insideC = 15;
           const designOutdoorC = insideC - deltaTK;
@@ -165,5 +173,39 @@ describe('sizeHeaters', () => {
         },
       ),
     );
+  });
+});
+
+describe('heater types', () => {
+  it('an electric heater may give its whole input (efficiency 1.0); a fuel-fired one may not exceed 1.0', () => {
+    const electric = sizeHeaters(
+      {
+        designHeatLossW: 1000,
+        totalConductanceWPerK: 100,
+        insideC: 10,
+        heaters: [{ count: 1, ratedInputW: 5_000, efficiency: 1, fuelId: 'electricity', heaterType: 'electric' }],
+      },
+      ref,
+    );
+    expect(electric.result.installedOutputW).toBe(5_000);
+    expect(electric.unventedInputW).toBe(0);
+  });
+
+  it('counts the input of unvented fuel-fired groups (their products stay in the house)', () => {
+    const sizing = sizeHeaters(
+      {
+        designHeatLossW: 1000,
+        totalConductanceWPerK: 100,
+        insideC: 10,
+        heaters: [
+          { ...propane(2, 30_000), heaterType: 'unvented' },
+          { ...propane(1, 40_000), heaterType: 'power-vented' },
+          propane(1, 10_000),
+        ],
+      },
+      ref,
+    );
+    expect(sizing.unventedInputW).toBe(60_000);
+    expect(sizing.fuelFiredInputW).toBe(110_000);
   });
 });

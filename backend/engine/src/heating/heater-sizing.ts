@@ -5,6 +5,7 @@ import { quantityToken } from '../vocabulary';
 import { referenceTable, type ReferenceData } from '../reference-data.types';
 import {
   chosenRow,
+  heaterTypeRow,
   requiredRow,
   type FuelFiredRow,
   type HeaterSizingRow,
@@ -43,6 +44,8 @@ export interface HeaterSizingDetails {
   minimumUnitCountRow: HeaterSizingRow;
   /** input of fuel-fired units, W (for combustion-air sizing) */
   fuelFiredInputW: number;
+  /** input of fuel-fired units stated as unvented, W: their combustion products stay in the house */
+  unventedInputW: number;
   /** outdoor temperature one of the largest units alone holds; null with no heaters */
   oneLargestUnitAloneHoldsC: number | null;
 }
@@ -57,12 +60,30 @@ export interface HeaterSizingInput {
   heaters: HeaterGroup[];
 }
 
+/**
+ * Fuel-fired output cannot exceed the heat the fuel holds on its higher-heating-value basis (the
+ * basis of reference-data/fuels.json): an efficiency above 1.0 there is an input error.
+ */
+export function requireHhvEfficiency(
+  field: string,
+  efficiency: number,
+  fuel: { fuelFired: boolean; label: string },
+): void {
+  if (fuel.fuelFired && efficiency > 1) {
+    throw new EngineInputError(
+      field,
+      `${field} cannot exceed 1.0 for a heater burning ${fuel.label}: fuel heat contents are on the higher heating value, ` +
+        'which no heater exceeds (ratings above 100 % are on the lower heating value)',
+    );
+  }
+}
+
 /** Checks each heater group and its fuel; throws EngineInputError naming e.g. `house.heaters.1.efficiency`. */
 export function validateHeaterGroups(
   heaters: unknown,
   ref: ReferenceData,
   fieldPrefix = 'house.heaters',
-): { group: HeaterGroup; fuel: FuelFiredRow }[] {
+): { group: HeaterGroup; fuel: FuelFiredRow; type: HeaterTypeRow | null }[] {
   if (!Array.isArray(heaters)) throw new EngineInputError(fieldPrefix, `${fieldPrefix} must be a list`);
   return heaters.map((group: HeaterGroup, index) => {
     const field = `${fieldPrefix}.${index}`;
@@ -74,7 +95,20 @@ export function validateHeaterGroups(
     requireInRange(`${field}.ratedInputW`, group.ratedInputW, BOUNDS.heaterInputW.min, BOUNDS.heaterInputW.max);
     requireInRange(`${field}.efficiency`, group.efficiency, BOUNDS.heaterEfficiency.min, BOUNDS.heaterEfficiency.max);
     const fuel = chosenRow<FuelFiredRow>(ref, 'fuels', group.fuelId, `${field}.fuelId`);
-    return { group, fuel };
+    requireHhvEfficiency(`${field}.efficiency`, group.efficiency, fuel);
+    const type =
+      group.heaterType === undefined || group.heaterType === null
+        ? null
+        : heaterTypeRow(ref, group.heaterType, `${field}.heaterType`);
+    if (type && type.fuelFired !== fuel.fuelFired) {
+      throw new EngineInputError(
+        `${field}.heaterType`,
+        type.fuelFired
+          ? `a ${type.label.toLowerCase()} burns fuel; it cannot run on ${fuel.label}`
+          : `a ${type.label.toLowerCase()} burns no fuel; it cannot run on ${fuel.label}`,
+      );
+    }
+    return { group, fuel, type };
   });
 }
 
@@ -104,6 +138,9 @@ export function sizeHeaters(input: HeaterSizingInput, ref: ReferenceData): Heate
   );
   const fuelFiredInputW = installed
     .filter(({ fuel }) => fuel.fuelFired)
+    .reduce((sum, { group }) => sum + group.count * group.ratedInputW, 0);
+  const unventedInputW = installed
+    .filter(({ fuel, type }) => fuel.fuelFired && type !== null && !type.vented)
     .reduce((sum, { group }) => sum + group.count * group.ratedInputW, 0);
   const unitCount = installed.reduce((sum, { group }) => sum + group.count, 0);
   const largestUnitOutputW = installed.reduce(
@@ -174,6 +211,7 @@ export function sizeHeaters(input: HeaterSizingInput, ref: ReferenceData): Heate
     safetyMarginRow,
     minimumUnitCountRow,
     fuelFiredInputW,
+    unventedInputW,
     oneLargestUnitAloneHoldsC,
   };
 }

@@ -1,5 +1,5 @@
 import { EngineInputError } from '../errors';
-import type { SurfaceGroup } from '../vocabulary';
+import { HEATER_TYPES, type HeaterType, type SurfaceGroup } from '../vocabulary';
 import { referenceRow, referenceTable, type ReferenceData, type ReferenceRow } from '../reference-data.types';
 
 /** Typed rows of the reference tables the heating engine reads, and checked look-ups. */
@@ -26,6 +26,12 @@ export interface PerimeterRow extends ReferenceRow {
   wPerMK: number;
 }
 
+export interface KneewallRow extends ReferenceRow {
+  label: string;
+  uWPerM2K: number;
+  insulated?: boolean;
+}
+
 export interface CurtainRow extends ReferenceRow {
   label: string;
   uReduction: number;
@@ -44,9 +50,25 @@ export interface AirPropertyRow extends ReferenceRow {
 
 export interface HeaterTypeRow extends ReferenceRow {
   label: string;
+  heaterType: HeaterType;
   typicalEfficiency: number;
+  minEfficiency: number;
+  maxEfficiency: number;
   fuelFired: boolean;
+  vented: boolean;
   defaultForSizing?: boolean;
+}
+
+/** The reference row of a heater type; an unknown type is bad input on `field`. */
+export function heaterTypeRow(ref: ReferenceData, heaterType: unknown, field: string): HeaterTypeRow {
+  const row = referenceTable<HeaterTypeRow>(ref, 'heater-types').rows.find((r) => r.heaterType === heaterType);
+  if (!row) {
+    throw new EngineInputError(
+      field,
+      `${field} '${String(heaterType)}' is not known (one of: ${HEATER_TYPES.join(', ')})`,
+    );
+  }
+  return row;
 }
 
 /** The part of a reference-data/fuels.json row the heating engine needs. */

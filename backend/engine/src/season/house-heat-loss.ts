@@ -1,7 +1,7 @@
 import { EngineInputError } from '../errors';
 import type { HouseSpec } from '../house.types';
 import { referenceRow, type ReferenceData, type ReferenceRow } from '../reference-data.types';
-import { computeHouseGeometry, type HouseGeometry } from '../geometry/house-geometry';
+import { computeHouseGeometry, opaqueEnvelopeShare, type HouseGeometry } from '../geometry/house-geometry';
 import { heatLossCoefficients } from '../heating/heat-loss';
 import { dryAirDensityKgPerM3, standardAtmosphericPressurePa } from '../psychrometrics';
 
@@ -21,6 +21,11 @@ export interface HouseThermal {
   /** air density used for infiltration, kg/m³ */
   airDensityKgPerM3: number;
   roofCovering: CoveringLightRow;
+  /**
+   * light reaching the crop ÷ light through the roof covering alone: 1 − the opaque kneewall's
+   * share of the envelope (1 without a kneewall)
+   */
+  envelopeLightFactor: number;
 }
 
 export function coveringLightRow(ref: ReferenceData, coveringId: string, field: string): CoveringLightRow {
@@ -53,5 +58,6 @@ export function houseThermal(house: HouseSpec, elevationM: number, ref: Referenc
     uaClosedWPerK: closed.totalWPerK,
     airDensityKgPerM3,
     roofCovering: coveringLightRow(ref, house.coverings.roof, 'house.coverings.roof'),
+    envelopeLightFactor: 1 - opaqueEnvelopeShare(geometry),
   };
 }

@@ -100,6 +100,29 @@ describe('measure comparison', () => {
     expect(heater.yearlyMoneySaved).toBeCloseTo(comparison.baseline.cost * (1 - 0.8 / 0.92), 6);
   });
 
+  it('defaults the heater upgrade to a condensing unit heater, and lets the user pick the target type', () => {
+    // Recalled ranges (heater-types.json, memory; Sanford, UW Extension A3907-02): condensing
+    // units 0.90–0.93 (middle 0.915), separated-combustion units that do not condense 0.80–0.83
+    // (middle 0.815). The demo house burns at 0.80, so the saving is 1 − 0.80/0.915 = 12.6 % of
+    // the fuel bill for a condensing unit and 1 − 0.80/0.815 = 1.8 % for a separated-combustion one.
+    const upgrades = compareMeasures(
+      input,
+      [{ kind: 'heater-efficiency' }, { kind: 'heater-efficiency', heaterType: 'separated-combustion' }],
+      ref,
+      sunCache,
+    ).measures.sort((a, b) => a.index - b.index);
+    const [condensing, separated] = upgrades;
+    expect(condensing.label).toBe('Replace heaters with condensing unit heaters');
+    expect(condensing.description).toMatch(/Condensing unit heater/);
+    expect(condensing.description).toMatch(/80 % → 92 %/);
+    expect(condensing.yearlyMoneySaved / comparison.baseline.cost).toBeCloseTo(1 - 0.8 / 0.915, 6);
+    expect(separated.description).toMatch(/Separated-combustion unit heater \(non-condensing\)/);
+    expect(separated.yearlyMoneySaved / comparison.baseline.cost).toBeCloseTo(1 - 0.8 / 0.815, 6);
+    expect(() =>
+      compareMeasures(input, [{ kind: 'heater-efficiency', heaterType: 'heat-pump' as never }], ref, sunCache),
+    ).toThrow(expect.objectContaining({ field: 'measures[0].heaterType' }));
+  });
+
   it('reports another fuel’s quantity in its own units and no fuel saving in the old units', () => {
     const gas = byKind.get('fuel-switch')!;
     expect(gas.season.fuelId).toBe('natural-gas');
@@ -114,12 +137,18 @@ describe('measure comparison', () => {
     expect(layer.after).toBe(0.78);
     expect(layer.relativeChange).toBeCloseTo(0.78 / 0.88 - 1, 9);
     expect(byKind.get('thermal-curtain')!.lightChange!.relativeChange).toBeLessThan(0);
-    expect(byKind.get('perimeter-insulation')!.lightChange).toBeNull();
+    // the house has no kneewall: the measure builds one 0.91 m high, opaque where there was poly
+    const kneewall = byKind.get('perimeter-insulation')!.lightChange!;
+    expect(kneewall.surface).toBe('kneewall');
+    expect(kneewall.relativeChange).toBeLessThan(0);
   });
 
   it('reports a measure already done as not applicable, without running it, and puts it last', () => {
     const already = compareMeasures(
-      { ...input, house: { ...singlePolyHouse, perimeterInsulated: true } },
+      {
+        ...input,
+        house: { ...singlePolyHouse, perimeterInsulated: true, kneewallId: 'foam-board-50mm', kneewallHeightM: 0.9 },
+      },
       [
         { kind: 'perimeter-insulation', costMoney: 800 },
         { kind: 'night-setpoint-lower', costMoney: 100 },
@@ -131,7 +160,8 @@ describe('measure comparison', () => {
     expect(already.measures[1]).toMatchObject({
       kind: 'perimeter-insulation',
       applicable: false,
-      notApplicableReason: 'The perimeter is already insulated.',
+      notApplicableReason:
+        'The perimeter is already insulated and the kneewall (Foam board, 2 in (50 mm) closed-cell polystyrene) loses as little heat as Foam board, 2 in (50 mm) closed-cell polystyrene or less.',
       paybackStatus: 'not-applicable',
       paybackYears: null,
       paybackText: 'not applicable',
@@ -156,6 +186,8 @@ describe('which measures apply to a house', () => {
     ...demoSeasonInput().house,
     coverings: { roof: 'poly-double-ir-inner', sidewalls: 'poly-double-ir-inner', endwalls: 'polycarbonate-twin-8mm' },
     perimeterInsulated: true,
+    kneewallId: 'foam-board-50mm',
+    kneewallHeightM: 0.6,
     airLeakageClassId: 'new-film-double',
   };
   const compare = (house: HouseSpec, measures: Measure[], overrides: Partial<EstimateSeasonInput> = {}) =>

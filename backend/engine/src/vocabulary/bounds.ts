@@ -20,6 +20,8 @@ export const BOUNDS = {
   fanCount: { min: 0, max: 100 },
   fanCapacityM3PerS: { min: 0.1, max: 25 },
   inletAreaM2: { min: 0, max: 500 },
+  /** also at most the eave height */
+  kneewallHeightM: { min: 0, max: 3 },
   setpointC: { min: -5, max: 40 },
   designOutdoorC: { min: -50, max: 25 },
   summerDesignC: { min: 15, max: 55 },
@@ -27,6 +29,7 @@ export const BOUNDS = {
   latitudeDeg: { min: -66, max: 66 },
   longitudeDeg: { min: -180, max: 180 },
   relativeHumidityPct: { min: 5, max: 100 },
+  designWindSpeedMPerS: { min: 0, max: 25 },
 } as const;
 
 export type BoundName = keyof typeof BOUNDS;

@@ -93,6 +93,20 @@ export class SiteClimateDto {
   @IsString()
   @MaxLength(1000)
   sourceNote?: string | null;
+
+  @ApiPropertyOptional({
+    nullable: true,
+    type: Number,
+    minimum: BOUNDS.designWindSpeedMPerS.min,
+    maximum: BOUNDS.designWindSpeedMPerS.max,
+    description:
+      'winter design wind speed, m/s; null: the 6.7 m/s (15 mph) the U tables assume (reference-data/wind.json)',
+  })
+  @IsOptional()
+  @IsNumber()
+  @Min(BOUNDS.designWindSpeedMPerS.min)
+  @Max(BOUNDS.designWindSpeedMPerS.max)
+  designWindSpeedMPerS?: number | null;
 }
 
 export class FarmClimateDto {

@@ -21,4 +21,5 @@ export class FarmClimate extends Model {
   /** raised by one on every save; a write names the version it was based on (If-Match) */
   @Column({ type: DataType.INTEGER, allowNull: false, defaultValue: 1 })
   declare version: number;
+  @Column({ type: DataType.DOUBLE, allowNull: true }) declare designWindSpeedMPerS: number | null;
 }

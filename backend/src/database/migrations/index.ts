@@ -6,6 +6,7 @@ import * as loginAttempts from './0005-login-attempts';
 import * as mailInvitationsPasswordTokens from './0006-mail-invitations-password-tokens';
 import * as reports from './0007-reports';
 import * as houseAlternatives from './0008-house-alternatives';
+import * as housePhysics from './0009-house-physics';
 import * as weatherYears from './0010-weather-years';
 
 /**
@@ -21,5 +22,6 @@ export const MIGRATIONS = [
   { name: '0006-mail-invitations-password-tokens', ...mailInvitationsPasswordTokens },
   { name: '0007-reports', ...reports },
   { name: '0008-house-alternatives', ...houseAlternatives },
+  { name: '0009-house-physics', ...housePhysics },
   { name: '0010-weather-years', ...weatherYears },
 ];

@@ -92,6 +92,10 @@ export class StagingDto {
 
 export class WinterVentilationDto {
   @ApiProperty() fractionOfSummerRate: number;
+  @ApiProperty({
+    description: 'm³/s: the summer rate the fraction is taken of (base rate × floor area × elevation factor only)',
+  })
+  summerBaseFlowM3PerS: number;
   @ApiProperty({ description: 'm³/s' }) flowM3PerS: number;
   @ApiProperty({ description: '1/h' }) airChangesPerHour: number;
   @ApiProperty({ description: 'W to warm the ventilation air to the night setpoint' }) heatCostW: number;

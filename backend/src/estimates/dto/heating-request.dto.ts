@@ -54,6 +54,17 @@ export class HeatingConditionsDto {
   @Omittable()
   @IsBoolean()
   curtainClosed?: boolean;
+
+  @ApiPropertyOptional({
+    minimum: BOUNDS.designWindSpeedMPerS.min,
+    maximum: BOUNDS.designWindSpeedMPerS.max,
+    description: "design wind speed, m/s; default the farm climate's, else the 6.7 m/s (15 mph) the U tables assume",
+  })
+  @Omittable()
+  @IsNumber()
+  @Min(BOUNDS.designWindSpeedMPerS.min)
+  @Max(BOUNDS.designWindSpeedMPerS.max)
+  designWindSpeedMPerS?: number;
 }
 
 export class PartialHeatingConditionsDto extends PartialType(HeatingConditionsDto, { skipNullProperties: false }) {}

@@ -14,6 +14,7 @@ export const HEAT_LOSS_COMPONENT_KEYS: readonly HeatLossComponentKey[] = [
   'roof',
   'sidewalls',
   'endwalls',
+  'kneewall',
   'perimeter',
   'infiltration',
 ];
@@ -25,8 +26,10 @@ export class HouseGeometrySummaryDto {
   @ApiProperty({ description: 'm²' }) floorAreaM2: number;
   @ApiProperty({ description: 'm²' }) roofAreaM2: number;
   @ApiProperty({ description: 'm²' }) sidewallAreaM2: number;
-  @ApiProperty({ description: 'm²' }) endwallAreaM2: number;
-  @ApiProperty({ description: 'roof + sidewalls + endwalls, m²' }) coverAreaM2: number;
+  @ApiProperty({ description: 'glazed endwall area, m²' }) endwallAreaM2: number;
+  @ApiProperty({ description: 'opaque kneewall on the sidewalls and endwalls, m² (0 without one)' })
+  kneewallAreaM2: number;
+  @ApiProperty({ description: 'roof + sidewalls + endwalls + kneewall, m²' }) coverAreaM2: number;
   @ApiProperty({ description: 'outside perimeter of the house at the ground, m' }) perimeterM: number;
   @ApiProperty({ description: 'm³' }) volumeM3: number;
 }
@@ -45,15 +48,31 @@ export class HeatLossComponentDto {
   @ApiProperty({ minimum: 0, maximum: 1, description: 'share of the total, 0–1' }) share: number;
 }
 
+export class WindFactorsDto {
+  @ApiProperty() roof: number;
+  @ApiProperty() sidewalls: number;
+  @ApiProperty() endwalls: number;
+}
+
+export class WindSummaryDto {
+  @ApiProperty({ description: 'design wind speed, m/s' }) windSpeedMPerS: number;
+  @ApiProperty({ description: 'the wind the U tables assume, m/s' }) tableWindSpeedMPerS: number;
+  @ApiProperty({ type: WindFactorsDto, description: 'U at the design wind ÷ tabulated U, per covering group' })
+  uFactor: WindFactorsDto;
+  @ApiProperty({ description: 'air changes at the design wind ÷ tabulated air changes' }) infiltrationFactor: number;
+}
+
 export class HeatLossBreakdownDto {
   @ApiProperty({ description: '°C' }) insideC: number;
   @ApiProperty({ description: '°C' }) outsideC: number;
   @ApiProperty({ description: 'inside − outside, K (may be ≤ 0: then no heat is needed)' }) deltaTK: number;
   @ApiProperty({ description: 'W' }) totalW: number;
   @ApiProperty({ description: 'through the coverings, W' }) coveringW: number;
+  @ApiProperty({ description: 'through the opaque kneewall, W (0 without one)' }) kneewallW: number;
   @ApiProperty({ description: 'through the perimeter, W' }) perimeterW: number;
   @ApiProperty({ description: 'air leakage, W' }) infiltrationW: number;
   @ApiProperty() curtainApplied: boolean;
+  @ApiProperty({ type: WindSummaryDto }) wind: WindSummaryDto;
   @ApiProperty({ type: HeatLossComponentDto, isArray: true }) components: HeatLossComponentDto[];
 }
 
@@ -133,6 +152,7 @@ export class HeatingConditionsUsedDto {
   @ApiProperty({ description: '%' }) insideRelativeHumidityPct: number;
   @ApiProperty({ description: '°C' }) insideC: number;
   @ApiProperty() curtainClosed: boolean;
+  @ApiProperty({ description: 'm/s' }) designWindSpeedMPerS: number;
 }
 
 /** Where each condition came from: the request, or the default named. */
@@ -142,6 +162,8 @@ export class HeatingConditionsSourceDto {
   @ApiProperty({ enum: ['reference data', 'request'] }) insideRelativeHumidityPct: 'reference data' | 'request';
   @ApiProperty({ enum: ['house night setpoint', 'request'] }) insideC: 'house night setpoint' | 'request';
   @ApiProperty({ enum: ['default', 'request'] }) curtainClosed: 'default' | 'request';
+  @ApiProperty({ enum: ['farm climate', 'reference data', 'request'] })
+  designWindSpeedMPerS: 'farm climate' | 'reference data' | 'request';
 }
 
 export class HouseHeatingEstimateDto extends HeatingEstimateDto {

@@ -18,7 +18,7 @@ import {
   ValidateNested,
 } from 'class-validator';
 import { BOUNDS } from '@thermbay/engine/vocabulary';
-import { HOUSE_SHAPES, type HouseShape } from '@thermbay/engine/vocabulary';
+import { HEATER_TYPES, HOUSE_SHAPES, type HeaterType, type HouseShape } from '@thermbay/engine/vocabulary';
 
 const range = (name: keyof typeof BOUNDS) => ({ minimum: BOUNDS[name].min, maximum: BOUNDS[name].max });
 
@@ -77,6 +77,16 @@ export class HeaterGroupDto {
   @IsString()
   @Length(1, 80)
   fuelId: string;
+
+  @ApiPropertyOptional({
+    enum: HEATER_TYPES,
+    nullable: true,
+    description:
+      'what kind of heater (reference-data heater-types): its typical efficiency is offered as the default and an unvented fuel-fired type brings the strong cautions; null when not stated',
+  })
+  @IsOptional()
+  @IsIn(HEATER_TYPES)
+  heaterType?: HeaterType | null;
 }
 
 export class ExhaustFansDto {
@@ -153,6 +163,29 @@ export class HouseSpecDto {
 
   @ApiProperty() @IsBoolean() perimeterInsulated: boolean;
 
+  @ApiPropertyOptional({
+    ...range('kneewallHeightM'),
+    nullable: true,
+    type: Number,
+    description:
+      'height of the band at the foot of the sidewalls and endwalls, m (at most the eave height); opaque when kneewallId names a construction, glazing otherwise',
+  })
+  @IsOptional()
+  @IsNumber()
+  @Min(BOUNDS.kneewallHeightM.min)
+  @Max(BOUNDS.kneewallHeightM.max)
+  kneewallHeightM?: number | null;
+
+  @ApiPropertyOptional({
+    nullable: true,
+    type: String,
+    description: 'reference-data kneewalls id of the kneewall construction; null: glazing to the ground',
+  })
+  @IsOptional()
+  @IsString()
+  @Length(1, 80)
+  kneewallId?: string | null;
+
   @ApiPropertyOptional({ nullable: true, type: String, description: 'reference-data curtains id, drawn at night' })
   @IsOptional()
   @IsString()
@@ -204,6 +237,8 @@ export class HouseDto extends CreateHouseDto {
   @ApiProperty({ nullable: true, type: Number }) declare airChangesPerHourOverride: number | null;
   @ApiProperty({ nullable: true, type: String }) declare curtainId: string | null;
   @ApiProperty({ description: 'raised by one on every save; send it back in If-Match to update' }) version: number;
+  @ApiProperty({ nullable: true, type: Number }) declare kneewallHeightM: number | null;
+  @ApiProperty({ nullable: true, type: String }) declare kneewallId: string | null;
   @ApiProperty() createdAt: string;
   @ApiProperty() updatedAt: string;
 }

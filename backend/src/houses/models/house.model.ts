@@ -55,6 +55,12 @@ export class House extends Model {
   @Column({ type: DataType.STRING, allowNull: true })
   declare curtainId: string | null;
 
+  @Column({ type: DataType.DOUBLE, allowNull: true })
+  declare kneewallHeightM: number | null;
+
+  @Column({ type: DataType.STRING, allowNull: true })
+  declare kneewallId: string | null;
+
   @Column({ type: DataType.JSON, allowNull: false, defaultValue: [] })
   declare heaters: HeaterGroup[];
 

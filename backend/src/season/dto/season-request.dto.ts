@@ -18,7 +18,7 @@ import {
   type ValidationOptions,
   IsObject,
 } from 'class-validator';
-import { BOUNDS } from '@thermbay/engine/vocabulary';
+import { BOUNDS, HEATER_TYPES, type HeaterType } from '@thermbay/engine/vocabulary';
 import type { PriceUnit } from '@thermbay/engine/season/fuel';
 import { MEASURE_KINDS, type MeasureKind } from '@thermbay/engine/season/measures';
 
@@ -202,6 +202,25 @@ export class MeasureDto {
   @MaxLength(100)
   coveringId?: string;
 
+  @ApiPropertyOptional({
+    description: 'perimeter-insulation: kneewalls id the kneewall is built of (default 2 in foam board)',
+  })
+  @IsOptional()
+  @IsString()
+  @MaxLength(100)
+  kneewallId?: string;
+
+  @ApiPropertyOptional({
+    minimum: BOUNDS.kneewallHeightM.min,
+    maximum: BOUNDS.kneewallHeightM.max,
+    description: 'perimeter-insulation: kneewall height, m, where the house gives none (default 0.91 m)',
+  })
+  @IsOptional()
+  @IsNumber()
+  @Min(BOUNDS.kneewallHeightM.min)
+  @Max(BOUNDS.kneewallHeightM.max)
+  kneewallHeightM?: number;
+
   @ApiPropertyOptional({ description: 'thermal-curtain: curtains id' })
   @Omittable()
   @IsString()
@@ -242,6 +261,15 @@ export class MeasureDto {
   @Min(1)
   @Max(180)
   delayDays?: number;
+
+  @ApiPropertyOptional({
+    enum: HEATER_TYPES,
+    description:
+      'heater-efficiency: the kind of heater the units are replaced by (default: condensing); its typical efficiency applies unless `efficiency` is given',
+  })
+  @IsOptional()
+  @IsIn(HEATER_TYPES)
+  heaterType?: HeaterType;
 
   @ApiPropertyOptional({
     minimum: BOUNDS.heaterEfficiency.min,

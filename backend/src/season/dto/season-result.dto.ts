@@ -254,7 +254,11 @@ export class MeasureSeasonDto extends SeasonFuelAmountDto {
 }
 
 export class MeasureLightChangeDto {
-  @ApiProperty({ enum: ['roof', 'sidewalls'] }) surface: 'roof' | 'sidewalls';
+  @ApiProperty({
+    enum: ['roof', 'sidewalls', 'kneewall'],
+    description: "'kneewall': light through the whole envelope, an opaque kneewall passing none",
+  })
+  surface: 'roof' | 'sidewalls' | 'kneewall';
   @ApiProperty({ description: 'light transmittance before, 0–1' }) before: number;
   @ApiProperty({ description: 'light transmittance after, 0–1' }) after: number;
   @ApiProperty({ description: 'relative change of light reaching the crop, e.g. −0.11 for 11 % less' })

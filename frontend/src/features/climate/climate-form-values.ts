@@ -32,6 +32,8 @@ export interface ClimateFormValues {
   summerDailyRangeK: string;
   monthly: MonthFormValues[];
   sourceNote: string;
+  /** '' = the wind the U tables assume */
+  designWindSpeedMPerS: string;
 }
 
 function monthRow(climate: SiteClimate | null, month: number): MonthlyClimate | undefined {
@@ -53,6 +55,7 @@ export function climateToFormValues(climate: SiteClimate | null, units: Units): 
       };
     }),
     sourceNote: climate?.sourceNote ?? '',
+    designWindSpeedMPerS: units.toInput('windSpeed', climate?.designWindSpeedMPerS ?? null),
   };
 }
 
@@ -97,6 +100,12 @@ export function formValuesToClimate(
       };
     }),
     sourceNote: values.sourceNote.trim() || null,
+    designWindSpeedMPerS:
+      values.designWindSpeedMPerS.trim() === ''
+        ? null
+        : stored?.designWindSpeedMPerS != null && values.designWindSpeedMPerS === initial.designWindSpeedMPerS
+          ? stored.designWindSpeedMPerS
+          : units.fromDisplay('windSpeed', Number(values.designWindSpeedMPerS)),
   };
 }
 

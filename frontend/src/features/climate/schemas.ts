@@ -54,5 +54,10 @@ export function climateFormSchema(units: Units) {
     ).required('Enter the mean daily range on the design day'),
     monthly: yup.array(month).length(12),
     sourceNote: yup.string().max(1000, 'At most 1000 characters'),
+    designWindSpeedMPerS: inRange(
+      'Design wind speed',
+      units.range('windSpeed', BOUNDS.designWindSpeedMPerS),
+      units.label('windSpeed'),
+    ).optional(),
   });
 }

@@ -5,6 +5,7 @@ export const COMPONENT_LABELS: Record<HeatLossComponent['key'], string> = {
   roof: 'Roof',
   sidewalls: 'Sidewalls',
   endwalls: 'Endwalls',
+  kneewall: 'Kneewall',
   perimeter: 'Perimeter',
   infiltration: 'Air leakage',
 };

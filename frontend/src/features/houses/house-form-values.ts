@@ -1,5 +1,6 @@
 import type { ApiError } from '../../api/client';
 import type { House, HouseInput, HouseShape, ReferenceData, SurfaceGroup } from '../../api/types';
+import type { HeaterType } from '@thermbay/engine/vocabulary';
 import type { Quantity, Units } from '../../lib/units';
 
 export const HOUSE_SHAPES: readonly HouseShape[] = ['gable', 'gothic-arch', 'quonset'];
@@ -27,6 +28,8 @@ export interface HeaterFormValues {
   /** percent */
   efficiency: string;
   fuelId: string;
+  /** '' = not stated */
+  heaterType: string;
 }
 
 export interface HouseFormValues {
@@ -45,6 +48,10 @@ export interface HouseFormValues {
   perimeterInsulated: boolean;
   /** '' = no curtain */
   curtainId: string;
+  /** '' = none */
+  kneewallHeightM: string;
+  /** '' = glazing to the ground */
+  kneewallId: string;
   heaters: HeaterFormValues[];
   exhaustFans: { count: string; capacityEachM3PerS: string };
   inletAreaM2: string;
@@ -77,6 +84,8 @@ export function newHouseDefaults(referenceData: ReferenceData): HouseInput {
     airChangesPerHourOverride: null,
     perimeterInsulated: false,
     curtainId: null,
+    kneewallHeightM: null,
+    kneewallId: null,
     heaters: [
       { count: 2, ratedInputW: 73_000, efficiency: 0.8, fuelId: firstRowId(referenceData, 'fuels', 'natural-gas') },
     ],
@@ -112,11 +121,14 @@ export function houseToFormValues(house: HouseInput, units: Units): HouseFormVal
         : String(house.airChangesPerHourOverride),
     perimeterInsulated: house.perimeterInsulated,
     curtainId: house.curtainId ?? '',
+    kneewallHeightM: t('length', house.kneewallHeightM),
+    kneewallId: house.kneewallId ?? '',
     heaters: house.heaters.map((heater) => ({
       count: String(heater.count),
       ratedInputW: t('power', heater.ratedInputW),
       efficiency: pct(heater.efficiency),
       fuelId: heater.fuelId,
+      heaterType: heater.heaterType ?? '',
     })),
     exhaustFans: {
       count: String(house.exhaustFans.count),
@@ -179,6 +191,14 @@ export function formValuesToHouseInput(
       values.airChangesPerHourOverride.trim() === '' ? null : Number(values.airChangesPerHourOverride),
     perimeterInsulated: values.perimeterInsulated,
     curtainId: values.curtainId === '' ? null : values.curtainId,
+    kneewallHeightM:
+      optionalSi(
+        'length',
+        values.kneewallHeightM,
+        initialValues.kneewallHeightM,
+        original.kneewallHeightM ?? undefined,
+      ) ?? null,
+    kneewallId: values.kneewallId === '' ? null : values.kneewallId,
     heaters: values.heaters.map((heater, index) => {
       const initialHeater = initialValues.heaters[index];
       const originalHeater = original.heaters[index];
@@ -190,6 +210,7 @@ export function formValuesToHouseInput(
             ? originalHeater.efficiency
             : Number(heater.efficiency) / 100,
         fuelId: heater.fuelId,
+        heaterType: heater.heaterType === '' ? null : (heater.heaterType as HeaterType),
       };
     }),
     exhaustFans: {
@@ -294,6 +315,12 @@ export function convertFormValues(
     lengthM: convert('length', values.lengthM, previousInitial.lengthM, nextInitial.lengthM),
     eaveHeightM: convert('length', values.eaveHeightM, previousInitial.eaveHeightM, nextInitial.eaveHeightM),
     ridgeHeightM: convert('length', values.ridgeHeightM, previousInitial.ridgeHeightM, nextInitial.ridgeHeightM),
+    kneewallHeightM: convert(
+      'length',
+      values.kneewallHeightM,
+      previousInitial.kneewallHeightM,
+      nextInitial.kneewallHeightM,
+    ),
     coveringUOverridesWPerM2K: group(
       'uValue',
       values.coveringUOverridesWPerM2K,

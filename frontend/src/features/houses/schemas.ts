@@ -78,6 +78,13 @@ export function houseFormSchema(units: Units) {
       .optional(),
     perimeterInsulated: yup.boolean(),
     curtainId: yup.string(),
+    kneewallHeightM: measured('Kneewall height', 'length', BOUNDS.kneewallHeightM)
+      .optional()
+      .test('below-eave', 'The kneewall cannot be higher than the eave', function kneewallBelowEave(height) {
+        const eave = Number(this.parent.eaveHeightM);
+        return height === undefined || !Number.isFinite(eave) || height <= eave;
+      }),
+    kneewallId: yup.string(),
     heaters: yup
       .array(
         yup.object({
@@ -88,6 +95,7 @@ export function houseFormSchema(units: Units) {
             .max(efficiencyRangePct.max, rangeMessage('Efficiency', efficiencyRangePct, '%'))
             .required('Enter the efficiency'),
           fuelId: yup.string().required('Choose the fuel'),
+          heaterType: yup.string(),
         }),
       )
       .max(BOUNDS.heaterGroups.max, `At most ${BOUNDS.heaterGroups.max} heater groups`),

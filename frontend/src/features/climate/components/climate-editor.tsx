@@ -133,6 +133,12 @@ export function ClimateEditor({ climate, readOnly = false, onSave }: ClimateEdit
                       unit={units.label('temperatureDifference')}
                       required
                     />
+                    <FormNumberField
+                      name="designWindSpeedMPerS"
+                      label="Winter design wind speed"
+                      unit={units.label('windSpeed')}
+                      helperText="Optional; blank: the 15 mph (6.7 m/s) the U-value tables assume"
+                    />
                     <FormTextField
                       name="sourceNote"
                       label="Source of these numbers"

@@ -162,6 +162,12 @@ function coveringOptions(referenceData: ReferenceData, units: Units): SelectOpti
   );
 }
 
+/** The typical efficiency of a heater type (heater-types.json), or null when none is stated. */
+function typicalEfficiencyOf(referenceData: ReferenceData, heaterType: string): number | null {
+  const row = referenceRows(referenceData, 'heater-types').find((candidate) => candidate.heaterType === heaterType);
+  return row && typeof row.typicalEfficiency === 'number' ? row.typicalEfficiency : null;
+}
+
 function newHeaterRow(referenceData: ReferenceData, units: Units): HeaterFormValues {
   const fuels = referenceRows(referenceData, 'fuels');
   return {
@@ -169,6 +175,7 @@ function newHeaterRow(referenceData: ReferenceData, units: Units): HeaterFormVal
     ratedInputW: units.toInput('power', 73_000),
     efficiency: '80',
     fuelId: fuels.find((row) => row.id === 'natural-gas')?.id ?? fuels[0]?.id ?? '',
+    heaterType: '',
   };
 }
 
@@ -203,6 +210,24 @@ export function HouseForm({
     [referenceData],
   );
   const fuelOptions = useMemo(() => optionsFrom(referenceData, 'fuels'), [referenceData]);
+  const heaterTypeOptions = useMemo(
+    () => [
+      { value: '', label: 'Not stated' },
+      ...referenceRows(referenceData, 'heater-types')
+        .filter((row) => typeof row.heaterType === 'string')
+        .map((row) => ({ value: String(row.heaterType), label: String(row.label ?? row.heaterType) })),
+    ],
+    [referenceData],
+  );
+  const kneewallOptions = useMemo(
+    () => [
+      { value: '', label: 'None: glazing to the ground' },
+      ...optionsFrom(referenceData, 'kneewalls', (row) =>
+        typeof row.uWPerM2K === 'number' ? `U ${units.format('uValue', row.uWPerM2K)}` : null,
+      ),
+    ],
+    [referenceData, units],
+  );
 
   const length = units.label('length');
 
@@ -232,7 +257,7 @@ export function HouseForm({
         }
       }}
     >
-      {({ values, isSubmitting, dirty }) => (
+      {({ values, isSubmitting, dirty, setFieldValue }) => (
         <FormReadOnlyContext.Provider value={readOnly}>
           <FollowUnitSystem units={units} initialValues={initialValues} />
           {onValuesChange ? (
@@ -334,6 +359,21 @@ export function HouseForm({
                   <Grid size={{ xs: 12, md: 4 }}>
                     <FormCheckboxField name="perimeterInsulated" label="Perimeter insulated" />
                   </Grid>
+                  <Grid size={{ xs: 12, md: 8 }}>
+                    <FormSelectField
+                      name="kneewallId"
+                      label="Kneewall (opaque band at the foot of the walls)"
+                      options={kneewallOptions}
+                    />
+                  </Grid>
+                  <Grid size={{ xs: 12, md: 4 }}>
+                    <FormNumberField
+                      name="kneewallHeightM"
+                      label="Kneewall height"
+                      unit={length}
+                      helperText="Sidewalls and endwalls; blank for none"
+                    />
+                  </Grid>
                 </Grid>
               </Section>
 
@@ -377,6 +417,22 @@ export function HouseForm({
                                 label="Fuel"
                                 options={fuelOptions}
                                 required
+                              />
+                            </Grid>
+                            <Grid size={{ xs: 12, md: 6 }}>
+                              <FormSelectField
+                                name={`heaters.${index}.heaterType`}
+                                label="Heater type"
+                                options={heaterTypeOptions}
+                                helperText="Sets the usual efficiency; unvented heaters bring strong cautions"
+                                onValueChange={(type) => {
+                                  const typical = typicalEfficiencyOf(referenceData, type);
+                                  if (typical !== null)
+                                    void setFieldValue(
+                                      `heaters.${index}.efficiency`,
+                                      String(Math.round(typical * 1000) / 10),
+                                    );
+                                }}
                               />
                             </Grid>
                           </Grid>

@@ -1,0 +1,208 @@
+import type { Confidence } from '../vocabulary';
+import { referenceRow, type ReferenceData, type ReferenceRow } from '../reference-data.types';
+import { PEAK_ROW_ID, peakHoursAfterSolarNoon } from '../climate/daily-temperature-curve';
+import { DEFAULT_CLEARNESS_ROW_ID, type SiteClimate } from '../climate/site-climate';
+import { priceUnitLabel } from './fuel';
+import type { HouseThermal } from './house-heat-loss';
+import { isLoggedTemperatures, type LoggedTemperatures } from './season-hours';
+import type { Assumption, PreparedSeason, SeasonVariant } from './season-types';
+
+/** The assumptions behind a season estimate, each with its source and confidence. */
+
+function rowAssumption(
+  key: string,
+  label: string,
+  value: number | string,
+  unit: string,
+  row: ReferenceRow,
+  overridden = false,
+): Assumption {
+  return {
+    key,
+    label,
+    value,
+    unit,
+    source: overridden ? 'entered by the user' : row.source,
+    confidence: overridden ? 'user-entered' : row.confidence,
+    overridden,
+  };
+}
+
+export function seasonAssumptions(
+  prepared: PreparedSeason,
+  variant: SeasonVariant,
+  thermal: HouseThermal,
+  ref: ReferenceData,
+): Assumption[] {
+  const list: Assumption[] = [];
+  const derived = (key: string, label: string, value: number | string, unit: string, source: string): Assumption => ({
+    key,
+    label,
+    value,
+    unit,
+    source,
+    confidence: 'derived',
+    overridden: false,
+  });
+  list.push(
+    derived(
+      'ua-curtain-open',
+      'Heat-loss coefficient, curtain open (coverings, perimeter and air leakage)',
+      round(thermal.uaOpenWPerK, 1),
+      'W/K',
+      'computed from reference-data coverings.json, perimeter.json, air-leakage.json and the house dimensions',
+    ),
+  );
+  if (variant.house.curtainId) {
+    list.push(
+      derived(
+        'ua-curtain-closed',
+        'Heat-loss coefficient, curtain drawn (sunset to sunrise)',
+        round(thermal.uaClosedWPerK, 1),
+        'W/K',
+        'computed with the curtain row of reference-data/curtains.json',
+      ),
+    );
+  }
+  const roof = thermal.roofCovering;
+  list.push({
+    key: 'roof-light-transmittance',
+    label: `Light transmittance of the roof covering (${roof.label ?? roof.id})`,
+    value: roof.lightTransmittance,
+    unit: '–',
+    source: roof.lightSource ?? roof.source,
+    confidence: roof.lightConfidence ?? roof.confidence,
+    overridden: false,
+  });
+  list.push(
+    rowAssumption(
+      'solar-useful-fraction',
+      prepared.solarUsefulFractionRow.label ?? 'Share of transmitted sunlight that offsets heating',
+      prepared.solarUsefulFraction,
+      '–',
+      prepared.solarUsefulFractionRow,
+      prepared.input.solarUsefulFraction !== undefined && prepared.input.solarUsefulFraction !== null,
+    ),
+  );
+  const clearnessRow = referenceRow(ref, 'climate-defaults', DEFAULT_CLEARNESS_ROW_ID)!;
+  list.push(
+    rowAssumption(
+      'clearness-by-month',
+      'Sky clearness, January to December (actual ÷ clear-sky sunlight)',
+      prepared.clearness.map((value) => value.toFixed(2)).join(' '),
+      '–',
+      clearnessRow,
+      prepared.clearnessFromUser,
+    ),
+  );
+  list.push({
+    key: 'clear-sky-model',
+    label: 'Clear-sky sunlight on a horizontal surface, by month',
+    value: 'monthly A, B, C coefficients',
+    unit: '',
+    source: referenceRow(ref, 'clear-sky', 'month-01')?.source ?? 'reference-data/clear-sky.json',
+    confidence: referenceRow(ref, 'clear-sky', 'month-01')?.confidence ?? 'memory',
+    overridden: false,
+  });
+  if (!isLoggedTemperatures(prepared.input.climate as SiteClimate | LoggedTemperatures)) {
+    const minimumRow = referenceRow(ref, 'climate-defaults', 'daily-curve-minimum-at-sunrise');
+    if (minimumRow)
+      list.push(
+        rowAssumption('daily-curve-minimum', 'Daily minimum temperature at sunrise', 'sunrise', '', minimumRow),
+      );
+  }
+  const peakRow = referenceRow(ref, 'climate-defaults', PEAK_ROW_ID)!;
+  list.push(
+    rowAssumption(
+      'daily-curve-peak',
+      peakRow.label ?? 'Daily maximum after solar noon',
+      peakHoursAfterSolarNoon(ref),
+      'h',
+      peakRow,
+    ),
+  );
+  list.push({
+    key: 'daily-curve-interpolation',
+    label:
+      'Days between monthly normals: straight-line interpolation between mid-month values; half-cosine curve from minimum to maximum',
+    value: 'cosine',
+    unit: '',
+    source: 'common practice, no single source',
+    confidence: 'common-practice',
+    overridden: false,
+  });
+  const fuel = variant.fuelRow;
+  list.push(
+    rowAssumption(
+      'fuel-heat-content-si',
+      `Heat content of ${fuel.label}`,
+      fuel.heatContentJPerUnitSi / 1e6,
+      `MJ/${fuel.unitSi}`,
+      fuel,
+    ),
+  );
+  list.push({
+    ...rowAssumption(
+      'fuel-heat-content-us',
+      `Heat content of ${fuel.label}`,
+      fuel.heatContentBtuPerUnitUs,
+      `Btu/${fuel.unitUs}`,
+      fuel,
+    ),
+    confidence: (fuel.usConfidence as Confidence | undefined) ?? fuel.confidence,
+  });
+  list.push(
+    derived(
+      'installed-heater-output',
+      'Installed heater output (count × rated input × efficiency); heat delivered in an hour is capped at it',
+      round(variant.heaterOutputW, 0),
+      'W',
+      "computed from the house's heater groups",
+    ),
+  );
+  list.push({
+    key: 'heater-efficiency',
+    label: 'Heater efficiency (output ÷ input)',
+    value: variant.heaterEfficiency,
+    unit: '–',
+    source: 'entered by the user',
+    confidence: 'user-entered',
+    overridden: true,
+  });
+  list.push({
+    key: 'fuel-price',
+    label: `Price of ${fuel.label}`,
+    value: variant.fuel.pricePerUnit,
+    unit: `per ${priceUnitLabel(fuel, variant.fuel.priceUnit)}`,
+    source: 'entered by the user',
+    confidence: 'user-entered',
+    overridden: true,
+  });
+  const baseRow = referenceRow(ref, 'degree-days', 'greenhouse-base-night-setpoint');
+  if (baseRow)
+    list.push(rowAssumption('degree-day-base', 'Degree-day base: the night setpoint', 'night setpoint', '°C', baseRow));
+  list.push({
+    key: 'local-standard-time',
+    label: 'Hours are local standard time (daylight saving time ignored)',
+    value: prepared.input.site.utcOffsetHours,
+    unit: 'h from UTC',
+    source: 'method',
+    confidence: 'common-practice',
+    overridden: false,
+  });
+  list.push({
+    key: 'no-heat-storage',
+    label: 'Each hour balances on its own: heat stored in soil, structure and crop is not modelled',
+    value: 1,
+    unit: 'h time step',
+    source: 'method',
+    confidence: 'common-practice',
+    overridden: false,
+  });
+  return list;
+}
+
+function round(value: number, digits: number): number {
+  const factor = 10 ** digits;
+  return Math.round(value * factor) / factor;
+}
