@@ -1,7 +1,7 @@
 import { parse } from 'csv-parse/sync';
 import { DEMO_CLIMATE } from '../src/seed/demo-scenario';
 import { GABLE_HOUSE_SPEC } from './fixtures';
-import { bearer, createTestApp, type TestApp } from './test-app';
+import { bearer, createTestApp, type TestApp, ifMatch } from './test-app';
 
 /**
  * The season-budget CSV read back with a real CSV parser (csv-parse), on a farm of its own:
@@ -52,15 +52,19 @@ describe('season budget CSV (e2e)', () => {
         .expect(201)
     ).body.id;
     const { sourceNote: _note, ...climate } = DEMO_CLIMATE as typeof DEMO_CLIMATE & { sourceNote?: string };
+    const versionOf = async (path: string) =>
+      (await t.http.get(path).set(bearer(token)).expect(200)).body.version as number;
     await t.http
       .put(`/api/farms/${farmId}/climate`)
       .set(bearer(token))
+      .set(ifMatch(await versionOf(`/api/farms/${farmId}/climate`)))
       .send({ ...climate, sourceNote: 'Invented test climate' })
       .expect(200);
     // only propane has a price; natural gas has none
     await t.http
       .put(`/api/farms/${farmId}/fuel-prices`)
       .set(bearer(token))
+      .set(ifMatch(await versionOf(`/api/farms/${farmId}/fuel-prices`)))
       .send({ prices: [{ fuelId: 'propane', pricePerUnit: 2, priceUnit: 'us', note: 'invented test price' }] })
       .expect(200);
     const addHouse = (name: string, fuelId: string) =>
@@ -153,8 +157,8 @@ describe('season budget CSV (e2e)', () => {
   });
 
   // The export is to open in a spreadsheet with its units (°, ³) intact: it starts with a UTF-8
-  // byte-order mark. Marked failing until the export writes one; flip it to `it` then.
-  it.failing('starts with a UTF-8 byte-order mark so that a spreadsheet reads m³ and °C correctly', async () => {
+  // byte-order mark.
+  it('starts with a UTF-8 byte-order mark so that a spreadsheet reads m³ and °C correctly', async () => {
     const bytes = await download({ units: 'si' });
     expect([...bytes.subarray(0, 3)]).toEqual([0xef, 0xbb, 0xbf]);
   });

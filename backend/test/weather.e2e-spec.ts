@@ -1,5 +1,5 @@
 import type { WeatherService } from '../src/weather/weather.service';
-import { bearer, createTestApp, signIn, type TestApp } from './test-app';
+import { bearer, createTestApp, ifMatch, signIn, type TestApp } from './test-app';
 
 /**
  * Weather history through the local stand-in (invented weather, same request and answer format as
@@ -74,9 +74,11 @@ describe('weather history and the climate proposal (e2e)', () => {
     expect(p.proposedClimate.summerDesignC).toBe(p.summerDesign1C);
     expect(p.proposedClimate.sourceNote).toMatch(/INVENTED/);
     // Nothing was saved by asking; saving is the user's PUT of what they confirm.
+    const loaded = (await t.http.get(`/api/farms/${farmId}/climate`).set(bearer(owner)).expect(200)).body;
     const saved = await t.http
       .put(`/api/farms/${farmId}/climate`)
       .set(bearer(owner))
+      .set(ifMatch(loaded.version))
       .send(p.proposedClimate)
       .expect(200);
     expect(saved.body.climate.winterDesignC).toBe(p.winterDesign996C);

@@ -217,7 +217,11 @@ describe('farm climate, temperature logs and the season', () => {
     await page.getByRole('textbox', { name: /E-mail address to invite/ }).fill('nobody-yet@example.com');
     await page.getByRole('button', { name: 'Invite' }).click();
     await page.getByRole('status').filter({ hasText: 'Invitation sent to nobody-yet@example.com' }).waitFor();
-    await page.getByRole('group', { name: 'Pending invitations' }).or(page.getByLabel('Pending invitations')).getByText('nobody-yet@example.com').waitFor();
+    await page
+      .getByRole('group', { name: 'Pending invitations' })
+      .or(page.getByLabel('Pending invitations'))
+      .getByText('nobody-yet@example.com')
+      .waitFor();
     await screenshot(page, 'farm-members.png');
     expect(pageErrors).toEqual([]);
     await page.context().close();

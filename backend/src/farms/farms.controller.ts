@@ -11,14 +11,7 @@ import {
 import { CurrentUser, type AuthenticatedUser } from '../common/decorators/current-user.decorator';
 import { ROLE_PERMISSIONS } from '../common/permissions';
 import { ApiVersionedWrite, IF_MATCH_HEADER } from '../common/versioning';
-import {
-  CreateFarmDto,
-  FarmDto,
-  MemberDto,
-  PermissionsDto,
-  UpdateFarmDto,
-  UpdateMemberDto,
-} from './dto/farm.dto';
+import { CreateFarmDto, FarmDto, MemberDto, PermissionsDto, UpdateFarmDto, UpdateMemberDto } from './dto/farm.dto';
 import { FarmsService } from './farms.service';
 
 @ApiTags('farms')

@@ -1,18 +1,5 @@
 import { ParseIdPipe } from '../common/pipes/parse-id.pipe';
-import {
-  Body,
-  Controller,
-  Get,
-  Header,
-  Headers,
-  HttpCode,
-  Param,
- 
-  Post,
-  Put,
-  Query,
-  Res,
-} from '@nestjs/common';
+import { Body, Controller, Get, Header, Headers, HttpCode, Param, Post, Put, Query, Res } from '@nestjs/common';
 import {
   ApiBadRequestResponse,
   ApiBearerAuth,

@@ -1,4 +1,5 @@
 import { Alert, Stack, Typography } from '@mui/material';
+import { PageTitle } from '../../components/page-title';
 import { useQuery } from '@tanstack/react-query';
 import { ErrorAlert, LoadingState } from '../../components/feedback';
 import { FailedSendList, MessageList, outboxQueryOptions } from '../../features/mail';
@@ -13,6 +14,7 @@ export default function AdminOutboxPage() {
   if (!isAdmin) return <Alert severity="warning">Only site administrators can read the outbox.</Alert>;
   return (
     <Stack spacing={2}>
+      <PageTitle title={'Outbox'} />
       <Typography variant="h1">Outbox</Typography>
       <Typography color="text.secondary">
         Every message the app sent through its local mail server, newest first. Nothing here left this machine.

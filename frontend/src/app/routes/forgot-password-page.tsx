@@ -1,4 +1,5 @@
 import { Link, Typography } from '@mui/material';
+import { PageTitle } from '../../components/page-title';
 import { Link as RouterLink } from 'react-router-dom';
 import { paths } from '../../config/paths';
 import { ForgotPasswordForm } from '../../features/auth';
@@ -7,6 +8,7 @@ import { AuthLayout } from './auth-layout';
 export default function ForgotPasswordPage() {
   return (
     <AuthLayout>
+      <PageTitle title={'Forgotten password'} />
       <ForgotPasswordForm />
       <Typography sx={{ mt: 3 }}>
         <Link component={RouterLink} to={paths.login}>

@@ -1,4 +1,5 @@
 import { useNavigate, useParams } from 'react-router-dom';
+import { PageTitle } from '../../components/page-title';
 import { paths } from '../../config/paths';
 import { useSignedIn } from '../../features/auth';
 import { InvitationPanel } from '../../features/invitations';
@@ -12,6 +13,7 @@ export default function InvitationPage() {
   const signedIn = useSignedIn();
   return (
     <AuthLayout>
+      <PageTitle title={'Invitation'} />
       <InvitationPanel
         token={token}
         signedInEmail={currentUser.data?.email ?? null}

@@ -1,4 +1,5 @@
 import { Breadcrumbs, GlobalStyles, Link, Paper, Stack, Typography } from '@mui/material';
+import { PageTitle } from '../../components/page-title';
 import { useQuery } from '@tanstack/react-query';
 import { Link as RouterLink, useNavigate, useParams } from 'react-router-dom';
 import { ErrorAlert, LoadingState } from '../../components/feedback';
@@ -40,6 +41,7 @@ export default function ReportPage() {
   const data = report.data;
   return (
     <Stack spacing={2}>
+      <PageTitle title={report.data?.title ?? 'Report'} />
       {printStyles}
       <Breadcrumbs aria-label="Breadcrumb">
         <Link component={RouterLink} to={paths.farm(data.farmId)}>

@@ -1,4 +1,5 @@
 import { Link, Typography } from '@mui/material';
+import { PageTitle } from '../../components/page-title';
 import { Link as RouterLink, useNavigate, useParams } from 'react-router-dom';
 import { paths } from '../../config/paths';
 import { ResetPasswordForm } from '../../features/auth';
@@ -9,6 +10,7 @@ export default function ResetPasswordPage() {
   const navigate = useNavigate();
   return (
     <AuthLayout>
+      <PageTitle title={'New password'} />
       <ResetPasswordForm token={token} onReset={() => navigate(paths.farms, { replace: true })} />
       <Typography sx={{ mt: 3 }}>
         Link not working?{' '}

@@ -1,3 +1,4 @@
+import { PageTitle } from '../../components/page-title';
 import {
   Alert,
   Breadcrumbs,
@@ -50,6 +51,7 @@ export default function SideBySidePage() {
 
   return (
     <Stack spacing={2}>
+      <PageTitle title={'Side by side'} />
       <Breadcrumbs aria-label="Breadcrumb" className="no-print">
         <Link component={RouterLink} to={paths.farms}>
           Farms
