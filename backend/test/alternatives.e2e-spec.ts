@@ -1,5 +1,5 @@
 import { houseBody } from './fixtures';
-import { bearer, createTestApp, signIn, type TestApp } from './test-app';
+import { bearer, createTestApp, signIn, type TestApp, ifMatch, versionOf } from './test-app';
 
 interface House {
   id: number;
@@ -62,7 +62,12 @@ describe('alternatives of a house and the side-by-side (e2e)', () => {
     expect(recover.invalid).toBeNull();
 
     // the adviser cannot edit the house …
-    await t.http.patch(`/api/houses/${houseB.id}`).set(bearer(adviser)).send({ notes: 'x' }).expect(403);
+    await t.http
+      .patch(`/api/houses/${houseB.id}`)
+      .set(bearer(adviser))
+      .set(ifMatch(await versionOf(t, adviser, `/api/houses/${houseB.id}`)))
+      .send({ notes: 'x' })
+      .expect(403);
     // … but may propose an alternative of it
     const bigger = [{ ...houseB.heaters[0], count: houseB.heaters[0].count + 2 }];
     const proposal: Alternative = (
@@ -103,6 +108,7 @@ describe('alternatives of a house and the side-by-side (e2e)', () => {
     await t.http
       .patch(`/api/houses/${house.id}`)
       .set(bearer(grower))
+      .set(ifMatch(await versionOf(t, grower, `/api/houses/${house.id}`)))
       .send({ coverings: { roof: 'glass-single', sidewalls: 'glass-single', endwalls: 'glass-single' }, spans: 2 })
       .expect(200);
     const after: Alternative = (await t.http.get(`/api/alternatives/${alt.id}`).set(bearer(grower)).expect(200)).body;
@@ -122,7 +128,12 @@ describe('alternatives of a house and the side-by-side (e2e)', () => {
     const good: Alternative = (
       await addAlternative(house.id, { name: 'Double poly', patch: DOUBLE_POLY, costAmount: 3000 }).expect(201)
     ).body;
-    await t.http.patch(`/api/houses/${house.id}`).set(bearer(grower)).send({ ridgeHeightM: 3.5 }).expect(200);
+    await t.http
+      .patch(`/api/houses/${house.id}`)
+      .set(bearer(grower))
+      .set(ifMatch(await versionOf(t, grower, `/api/houses/${house.id}`)))
+      .send({ ridgeHeightM: 3.5 })
+      .expect(200);
 
     const list: Alternative[] = (
       await t.http.get(`/api/houses/${house.id}/alternatives`).set(bearer(grower)).expect(200)
@@ -166,6 +177,7 @@ describe('alternatives of a house and the side-by-side (e2e)', () => {
     await t.http
       .patch(`/api/houses/${copy.id}`)
       .set(bearer(grower))
+      .set(ifMatch(await versionOf(t, grower, `/api/houses/${copy.id}`)))
       .send({ coverings: { ...houseB.coverings, ...DOUBLE_POLY.coverings } })
       .expect(200);
 
@@ -232,6 +244,7 @@ describe('alternatives of a house and the side-by-side (e2e)', () => {
     await t.http
       .put(`/api/houses/${house.id}/calendar`)
       .set(bearer(grower))
+      .set(ifMatch(await versionOf(t, grower, `/api/houses/${house.id}/calendar`)))
       .send({ periods: [{ startMonthDay: '01-15', endMonthDay: '05-31', mode: 'heated' }] })
       .expect(200);
     const alt: Alternative = (

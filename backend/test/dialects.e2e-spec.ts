@@ -1,4 +1,4 @@
-import { bearer, createTestApp, signIn, type TestApp } from './test-app';
+import { bearer, createTestApp, signIn, type TestApp, ifMatch, versionOf } from './test-app';
 
 /**
  * Inputs that SQLite takes in its stride but PostgreSQL refuses at the column (integer range,
@@ -32,7 +32,11 @@ describe('the same answers on SQLite and PostgreSQL (e2e)', () => {
   });
 
   it('a NUL character in a text field is refused with 400 naming the field', async () => {
-    const res = await t.http.patch(`/api/farms/${farmId}`).set(bearer(owner)).send({ name: 'North\u0000Ridge' });
+    const res = await t.http
+      .patch(`/api/farms/${farmId}`)
+      .set(bearer(owner))
+      .set(ifMatch(await versionOf(t, owner, `/api/farms/${farmId}`)))
+      .send({ name: 'North\u0000Ridge' });
     expect(res.status).toBe(400);
     expect(res.body).toMatchObject({ statusCode: 400, field: 'name' });
     const nested = await t.http.patch('/api/users/me').set(bearer(owner)).send({ name: 'Own\u0000er' });
@@ -41,7 +45,12 @@ describe('the same answers on SQLite and PostgreSQL (e2e)', () => {
 
   it('text is stored and read back exactly, accents and symbols included', async () => {
     const name = 'Serre nº 2 — “Été” 温室 m³';
-    await t.http.patch(`/api/farms/${farmId}`).set(bearer(owner)).send({ name }).expect(200);
+    await t.http
+      .patch(`/api/farms/${farmId}`)
+      .set(bearer(owner))
+      .set(ifMatch(await versionOf(t, owner, `/api/farms/${farmId}`)))
+      .send({ name })
+      .expect(200);
     expect((await t.http.get(`/api/farms/${farmId}`).set(bearer(owner)).expect(200)).body.name).toBe(name);
   });
 });

@@ -3,7 +3,7 @@ import { QueryTypes } from 'sequelize';
 import { DEMO_CLIMATE } from '../src/seed/demo-scenario';
 import { houseBody } from './fixtures';
 import { hourlyCsv, HOURLY_MAPPING } from './temperature-csv';
-import { bearer, createTestApp, joinByInvitation, signIn, type TestApp } from './test-app';
+import { bearer, createTestApp, joinByInvitation, signIn, type TestApp, ifMatch, versionOf } from './test-app';
 
 /**
  * Deleting a farm deletes everything that belongs to it: houses and their production calendars,
@@ -45,12 +45,19 @@ describe('deleting a farm (e2e)', () => {
     await t.http
       .put(`/api/houses/${houseId}/calendar`)
       .set(bearer(owner))
+      .set(ifMatch(await versionOf(t, owner, `/api/houses/${houseId}/calendar`)))
       .send({ periods: [{ startMonthDay: '10-01', endMonthDay: '04-30', mode: 'heated', label: 'Winter' }] })
       .expect(200);
-    await t.http.put(`/api/farms/${farmId}/climate`).set(bearer(owner)).send(DEMO_CLIMATE).expect(200);
+    await t.http
+      .put(`/api/farms/${farmId}/climate`)
+      .set(bearer(owner))
+      .set(ifMatch(await versionOf(t, owner, `/api/farms/${farmId}/climate`)))
+      .send(DEMO_CLIMATE)
+      .expect(200);
     await t.http
       .put(`/api/farms/${farmId}/fuel-prices`)
       .set(bearer(owner))
+      .set(ifMatch(await versionOf(t, owner, `/api/farms/${farmId}/fuel-prices`)))
       .send({ prices: [{ fuelId: 'propane', pricePerUnit: 2, priceUnit: 'us', note: 'invented test price' }] })
       .expect(200);
     await t.http

@@ -133,10 +133,12 @@ describe('malformed input (e2e)', () => {
 
   it('takes only canonical whole-number ids: 0x1, 1e0, 1.0, 01, +1 and " 1" never reach row 1', async () => {
     await t.http.get(`/api/houses/${houseId}`).set(bearer(owner)).expect(200);
-    for (const id of ['0x1', '1e0', '1.0', '01', '+1', '%201', '0', '-1', '99999999999', String(houseId) + '.0']) {
+    for (const id of ['0x1', '1e0', '1.0', '01', '+1', '%201', '0', '-1', String(houseId) + '.0']) {
       const res = await t.http.get(`/api/houses/${id}`).set(bearer(owner));
       expect({ id, status: res.status }).toEqual({ id, status: 400 });
       expect(res.body.field).toBe('houseId');
     }
+    // a well-formed id beyond every row's range is not found, as on any database
+    await t.http.get('/api/houses/99999999999').set(bearer(owner)).expect(404);
   });
 });

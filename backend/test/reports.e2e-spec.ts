@@ -1,7 +1,7 @@
 import { ReceivedMail } from '../src/mail/models/received-mail.model';
 import type { Response } from 'superagent';
 import { pdfText } from './pdf-text';
-import { bearer, createTestApp, signIn, type TestApp } from './test-app';
+import { bearer, createTestApp, signIn, type TestApp, ifMatch, versionOf } from './test-app';
 
 /** Binary bodies (PDF) as a Buffer. */
 const binary = (res: Response, callback: (error: Error | null, body: Buffer) => void) => {
@@ -55,6 +55,7 @@ describe('heater-sizing reports (e2e)', () => {
     await t.http
       .patch(`/api/houses/${houseId}`)
       .set(bearer(owner))
+      .set(ifMatch(await versionOf(t, owner, `/api/houses/${houseId}`)))
       .send({ name: 'Renamed after the report', widthM: before.house.widthM + 3 })
       .expect(200);
     const after = (await t.http.get(`/api/reports/${report.id}`).set(bearer(adviser)).expect(200)).body;

@@ -96,7 +96,7 @@ describe('roles × routes (e2e)', () => {
     const email = `${label}-${registered}@example.org`;
     const res = await t.http
       .post('/api/auth/register')
-      .send({ email, password: 'roles-matrix-pass-8472', name: email })
+      .send({ email, password: 'member-pass-8472', name: email })
       .expect(201);
     return { id: res.body.user.id as number, email, token: res.body.accessToken as string };
   };

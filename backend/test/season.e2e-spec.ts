@@ -1,7 +1,7 @@
 import { parse } from 'csv-parse/sync';
 import { hourlyCsv, HOURLY_MAPPING } from './temperature-csv';
 import { houseBody } from './fixtures';
-import { bearer, createTestApp, ifMatch, signIn, type TestApp } from './test-app';
+import { bearer, createTestApp, ifMatch, signIn, type TestApp, versionOf } from './test-app';
 
 interface House {
   id: number;
@@ -66,12 +66,14 @@ describe('season, calendars, fuel prices and the farm budget (e2e)', () => {
       const unknown = await t.http
         .put(`/api/farms/${farmId}/fuel-prices`)
         .set(bearer(grower))
+        .set(ifMatch(await versionOf(t, grower, `/api/farms/${farmId}/fuel-prices`)))
         .send({ prices: [{ fuelId: 'unobtainium', pricePerUnit: 1, priceUnit: 'si' }] })
         .expect(422);
       expect(unknown.body.field).toBe('prices.0.fuelId');
       const twice = await t.http
         .put(`/api/farms/${farmId}/fuel-prices`)
         .set(bearer(grower))
+        .set(ifMatch(await versionOf(t, grower, `/api/farms/${farmId}/fuel-prices`)))
         .send({
           prices: [
             { fuelId: 'propane', pricePerUnit: 1, priceUnit: 'si' },
@@ -83,6 +85,7 @@ describe('season, calendars, fuel prices and the farm budget (e2e)', () => {
       const negative = await t.http
         .put(`/api/farms/${farmId}/fuel-prices`)
         .set(bearer(grower))
+        .set(ifMatch(await versionOf(t, grower, `/api/farms/${farmId}/fuel-prices`)))
         .send({ prices: [{ fuelId: 'propane', pricePerUnit: -1, priceUnit: 'si' }] })
         .expect(400);
       expect(negative.body.details[0].field).toBe('prices.0.pricePerUnit');
@@ -130,12 +133,14 @@ describe('season, calendars, fuel prices and the farm budget (e2e)', () => {
       const res = await t.http
         .put(`/api/houses/${houses.C.id}/calendar`)
         .set(bearer(grower))
+        .set(ifMatch(await versionOf(t, grower, `/api/houses/${houses.C.id}/calendar`)))
         .send({ periods: [{ startMonthDay: '02-30', endMonthDay: '03-31', mode: 'heated' }] })
         .expect(422);
       expect(res.body.field).toBe('periods[0].startMonthDay');
       const badMode = await t.http
         .put(`/api/houses/${houses.C.id}/calendar`)
         .set(bearer(grower))
+        .set(ifMatch(await versionOf(t, grower, `/api/houses/${houses.C.id}/calendar`)))
         .send({ periods: [{ startMonthDay: '01-01', endMonthDay: '03-31', mode: 'warm' }] })
         .expect(400);
       expect(badMode.body.details[0].field).toBe('periods.0.mode');
@@ -665,7 +670,12 @@ describe('season, calendars, fuel prices and the farm budget (e2e)', () => {
       const original = budget.houses[0].name as string;
       const risky = ' =HYPERLINK("http://example.com","x")';
       const stored = (
-        await t.http.patch(`/api/houses/${houseId}`).set(bearer(grower)).send({ name: risky }).expect(200)
+        await t.http
+          .patch(`/api/houses/${houseId}`)
+          .set(bearer(grower))
+          .set(ifMatch(await versionOf(t, grower, `/api/houses/${houseId}`)))
+          .send({ name: risky })
+          .expect(200)
       ).body.name as string;
       try {
         const res = await t.http
@@ -677,7 +687,12 @@ describe('season, calendars, fuel prices and the farm budget (e2e)', () => {
         expect(names).toContain(`'${stored}`);
         expect(names.some((name) => /^\s*=/.test(name))).toBe(false);
       } finally {
-        await t.http.patch(`/api/houses/${houseId}`).set(bearer(grower)).send({ name: original }).expect(200);
+        await t.http
+          .patch(`/api/houses/${houseId}`)
+          .set(bearer(grower))
+          .set(ifMatch(await versionOf(t, grower, `/api/houses/${houseId}`)))
+          .send({ name: original })
+          .expect(200);
       }
     });
   });

@@ -139,6 +139,12 @@ export const bearer = (token: string) => ({ Authorization: `Bearer ${token}` });
 
 /** The If-Match header naming the version a write is based on. */
 export const ifMatch = (version: number) => ({ 'If-Match': String(version) });
+
+/** The version a reader of `path` sees now (what a client sends back in If-Match to save). */
+export async function versionOf(t: TestApp, token: string, path: string): Promise<number> {
+  const response = await t.http.get(path).set(bearer(token)).expect(200);
+  return response.body.version as number;
+}
 /** The link token in the newest message the local SMTP server kept for `email`, after `path`. */
 export async function linkTokenFromMail(t: TestApp, email: string, path: '/invitations/' | '/reset-password/') {
   const { ReceivedMail } = await import('../src/mail/models/received-mail.model');

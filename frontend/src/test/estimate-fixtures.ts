@@ -29,6 +29,8 @@ export const demoHouseB: House = {
   airChangesPerHourOverride: null,
   perimeterInsulated: false,
   curtainId: null,
+  kneewallHeightM: null,
+  kneewallId: null,
   heaters: [
     {
       count: 1,

@@ -1,4 +1,4 @@
-import { type ArgumentMetadata, Injectable, type PipeTransform } from '@nestjs/common';
+import { type ArgumentMetadata, Injectable, NotFoundException, type PipeTransform } from '@nestjs/common';
 import { RequestValidationException } from '../filters/all-exceptions.filter';
 
 /** Largest id a row can have (a signed 32-bit integer, as both SQLite and PostgreSQL serials allow). */
@@ -14,9 +14,11 @@ const MAX_ID = 2_147_483_647;
 export class ParseIdPipe implements PipeTransform<unknown, number> {
   transform(value: unknown, metadata: ArgumentMetadata): number {
     const name = metadata.data ?? 'id';
-    if (typeof value === 'string' && /^[1-9]\d{0,9}$/.test(value)) {
+    if (typeof value === 'string' && /^[1-9]\d*$/.test(value)) {
       const id = Number(value);
       if (id <= MAX_ID) return id;
+      // A well-formed id no row can have: simply not found, the same on every database.
+      throw new NotFoundException(`No such ${name.replace(/Id$/, '')}`);
     }
     throw new RequestValidationException([{ field: name, message: `${name} must be a whole number from 1 upwards` }]);
   }
