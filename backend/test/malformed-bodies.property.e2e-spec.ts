@@ -9,7 +9,8 @@ import { bearer, createTestApp, signIn, type TestApp } from './test-app';
  * NaN or Infinity. Seeded: set FUZZ_SEED to replay a run; the seed is printed on failure.
  */
 const RUNS_PER_ROUTE = Number(process.env.FUZZ_RUNS ?? 100);
-const SEED = Number(process.env.FUZZ_SEED ?? Date.now() % 2_147_483_647);
+// A fixed seed, so that every run (and CI) checks the same bodies; FUZZ_SEED replays or widens it.
+const SEED = Number(process.env.FUZZ_SEED ?? 20_261_202);
 
 interface Route {
   method: 'post' | 'put' | 'patch';
@@ -61,17 +62,34 @@ function hostileBody(fields: string[]): fc.Arbitrary<Json> {
   return fc.oneof({ weight: 8, arbitrary: object }, { weight: 1, arbitrary: hostileValue });
 }
 
-/** Every string and number in an answer, to look for NaN and Infinity. */
-function findNonFinite(value: unknown, path = '$'): string | null {
+/**
+ * Every string and number in an answer, to look for NaN and Infinity written by the server. A
+ * string the request itself sent (a house named "NaN") is the user's text, echoed, not a result.
+ */
+function findNonFinite(value: unknown, sent: ReadonlySet<string>, path = '$'): string | null {
   if (typeof value === 'number') return Number.isFinite(value) ? null : path;
-  if (typeof value === 'string') return /\bNaN\b|Infinity/.test(value) ? path : null;
+  if (typeof value === 'string') return /\bNaN\b|Infinity/.test(value) && !sent.has(value) ? path : null;
   if (value && typeof value === 'object') {
     for (const [key, inner] of Object.entries(value)) {
-      const found = findNonFinite(inner, `${path}.${key}`);
+      const found = findNonFinite(inner, sent, `${path}.${key}`);
       if (found) return found;
     }
   }
   return null;
+}
+
+/** Every string in a generated body (values and keys), trimmed as the API may store them. */
+function stringsIn(value: unknown, found = new Set<string>()): Set<string> {
+  if (typeof value === 'string') {
+    found.add(value);
+    found.add(value.trim());
+  } else if (value && typeof value === 'object') {
+    for (const [key, inner] of Object.entries(value)) {
+      found.add(key);
+      stringsIn(inner, found);
+    }
+  }
+  return found;
 }
 
 /** The routes the committed OpenAPI document lists (openapi.e2e-spec checks it is current). */
@@ -152,7 +170,7 @@ describe('malformed bodies on every write and estimate route (property, e2e)', (
                 message: expect.any(String),
               });
             }
-            expect({ where, nonFinite: findNonFinite(res.body) }).toEqual({ where, nonFinite: null });
+            expect({ where, nonFinite: findNonFinite(res.body, stringsIn(body)) }).toEqual({ where, nonFinite: null });
             expect(({} as Record<string, unknown>).polluted).toBeUndefined();
           }),
           { numRuns: RUNS_PER_ROUTE, seed: SEED + index, endOnFailure: true },

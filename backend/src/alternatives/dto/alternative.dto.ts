@@ -1,3 +1,4 @@
+import { Omittable } from '../../common/validation';
 import { ApiProperty, ApiPropertyOptional, PartialType } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
 import {
@@ -35,7 +36,7 @@ export class CreateAlternativeDto {
   notes?: string | null;
 
   @ApiPropertyOptional({ type: 'object', additionalProperties: true, description: PATCH_DESCRIPTION })
-  @IsOptional()
+  @Omittable()
   @IsObject()
   patch?: Record<string, unknown>;
 
@@ -45,7 +46,7 @@ export class CreateAlternativeDto {
     description:
       'instead of patch: the house as the user edited it (all or some of its fields); the patch is what differs from the stored house',
   })
-  @IsOptional()
+  @Omittable()
   @IsObject()
   house?: Record<string, unknown>;
 
@@ -77,7 +78,7 @@ export class CreateAlternativeDto {
   costAmount?: number | null;
 }
 
-export class UpdateAlternativeDto extends PartialType(CreateAlternativeDto) {}
+export class UpdateAlternativeDto extends PartialType(CreateAlternativeDto, { skipNullProperties: false }) {}
 
 export class FieldProblemDto {
   @ApiProperty({ example: 'ridgeHeightM', description: 'the house field at fault' }) field: string;
@@ -117,7 +118,7 @@ export class AdoptAlternativeResultDto {
 
 export class DuplicateHouseDto {
   @ApiPropertyOptional({ maxLength: BOUNDS.nameLength.max, description: 'default: the house’s name + " (copy)"' })
-  @IsOptional()
+  @Omittable()
   @IsString()
   @Length(BOUNDS.nameLength.min, BOUNDS.nameLength.max)
   name?: string;

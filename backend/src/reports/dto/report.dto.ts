@@ -1,5 +1,6 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
-import { ArrayMaxSize, IsArray, IsEmail, IsInt, IsOptional, IsString, Length, MaxLength } from 'class-validator';
+import { ArrayMaxSize, IsArray, IsEmail, IsInt, IsString, Length, MaxLength } from 'class-validator';
+import { Omittable } from '../../common/validation';
 import { MailOutcomeDto } from '../../mail/dto/mail.dto';
 
 export const REPORT_TEXT_MAX = 20_000;
@@ -7,38 +8,38 @@ export const REPORT_TEXT_MAX = 20_000;
 export class CreateReportDto {
   @ApiProperty({ example: 'Heater sizing, north house' }) @IsString() @Length(1, 200) title: string;
   @ApiPropertyOptional({ description: 'plain text' })
-  @IsOptional()
+  @Omittable()
   @IsString()
   @MaxLength(REPORT_TEXT_MAX)
   notes?: string;
   @ApiPropertyOptional({ description: 'plain text' })
-  @IsOptional()
+  @Omittable()
   @IsString()
   @MaxLength(REPORT_TEXT_MAX)
   recommendations?: string;
 }
 
 export class UpdateReportDto {
-  @ApiPropertyOptional() @IsOptional() @IsString() @Length(1, 200) title?: string;
-  @ApiPropertyOptional() @IsOptional() @IsString() @MaxLength(REPORT_TEXT_MAX) notes?: string;
-  @ApiPropertyOptional() @IsOptional() @IsString() @MaxLength(REPORT_TEXT_MAX) recommendations?: string;
+  @ApiPropertyOptional() @Omittable() @IsString() @Length(1, 200) title?: string;
+  @ApiPropertyOptional() @Omittable() @IsString() @MaxLength(REPORT_TEXT_MAX) notes?: string;
+  @ApiPropertyOptional() @Omittable() @IsString() @MaxLength(REPORT_TEXT_MAX) recommendations?: string;
 }
 
 export class SendReportDto {
   @ApiPropertyOptional({ type: Number, isArray: true, description: 'farm members, by user id' })
-  @IsOptional()
+  @Omittable()
   @IsArray()
   @ArrayMaxSize(50)
   @IsInt({ each: true })
   memberUserIds?: number[];
   @ApiPropertyOptional({ type: String, isArray: true, description: 'any other addresses' })
-  @IsOptional()
+  @Omittable()
   @IsArray()
   @ArrayMaxSize(20)
   @IsEmail({}, { each: true, message: 'each of emails must be an e-mail address' })
   emails?: string[];
   @ApiPropertyOptional({ description: 'a short message above the report' })
-  @IsOptional()
+  @Omittable()
   @IsString()
   @MaxLength(2000)
   message?: string;
