@@ -127,10 +127,10 @@ describe('reports, e-mail, invitations and password reset', () => {
     await page.getByLabel(/E-mail/).fill('viewer-reset@example.org');
     await page.getByRole('button', { name: 'Send reset link' }).click();
     // the same answer for an address without an account
-    await page.getByRole('status').filter({ hasText: 'If an account uses that address' }).waitFor();
+    await page.getByRole('status').filter({ hasText: 'If an account uses that address' }).waitFor({ timeout: 90_000 });
     await page.getByLabel(/E-mail/).fill('grower@example.com');
     await page.getByRole('button', { name: 'Send reset link' }).click();
-    await page.getByRole('status').filter({ hasText: 'If an account uses that address' }).waitFor();
+    await page.getByRole('status').filter({ hasText: 'If an account uses that address' }).waitFor({ timeout: 90_000 });
 
     const link = await linkFromOutbox(
       /Reset your Thermbay password/,

@@ -185,14 +185,14 @@ describe('farm climate, temperature logs and the season', () => {
     await page.context().close();
   });
 
-  it('the owner manages members: an unknown e-mail is told to register first, the last owner cannot be removed', async () => {
+  it('the owner manages members: the last owner cannot be removed or demoted, on the page or through the API', async () => {
     const { page, pageErrors } = await newPage(browser);
     await signIn(page, DEMO_OWNER.email, DEMO_OWNER.password);
     await openFirstFarmTab(page, 'Members');
     const grid = page.getByRole('grid', { name: 'Farm members' });
     await grid.getByText('grower@example.com').waitFor();
     expect(await page.getByRole('button', { name: 'Remove owner@example.com' }).isDisabled()).toBe(true);
-    // and the API refuses it too, whatever the page offers: removing or demoting the only owner is 400
+    // and the API refuses it too, whatever the page offers: removing or demoting the only owner is 409
     const farmId = Number(/\/farms\/(\d+)/.exec(page.url())?.[1]);
     const login = await page.request.post('/api/auth/login', {
       data: { email: DEMO_OWNER.email, password: DEMO_OWNER.password },
@@ -206,13 +206,13 @@ describe('farm climate, temperature logs and the season', () => {
     const owners = members.filter((member) => member.role === 'owner');
     expect(owners.map((member) => member.email)).toEqual([DEMO_OWNER.email]);
     const removal = await page.request.delete(`/api/farms/${farmId}/members/${owners[0]!.userId}`, { headers });
-    expect(removal.status()).toBe(400);
+    expect(removal.status()).toBe(409);
     expect((await removal.json()).message).toMatch(/at least one owner/);
     const demotion = await page.request.patch(`/api/farms/${farmId}/members/${owners[0]!.userId}`, {
       headers,
       data: { role: 'viewer' },
     });
-    expect(demotion.status()).toBe(400);
+    expect(demotion.status()).toBe(409);
 
     await page.getByRole('textbox', { name: /E-mail address to invite/ }).fill('nobody-yet@example.com');
     await page.getByRole('button', { name: 'Invite' }).click();
