@@ -85,12 +85,19 @@ function cpuMs(pid: number): number {
   return (Number(fields[11]) + Number(fields[12])) * 10;
 }
 
-async function api<T>(method: string, path: string, token: string | null, body?: unknown): Promise<T> {
+async function api<T>(
+  method: string,
+  path: string,
+  token: string | null,
+  body?: unknown,
+  version?: number,
+): Promise<T> {
   const response = await fetch(BASE + path, {
     method,
     headers: {
       'content-type': 'application/json',
       ...(token ? { authorization: `Bearer ${token}` } : {}),
+      ...(version === undefined ? {} : { 'if-match': String(version) }),
     },
     body: body === undefined ? undefined : JSON.stringify(body),
   });
@@ -224,10 +231,17 @@ async function main(): Promise<void> {
         timeZone: 'America/New_York',
       })
     ).id;
-    await api('PUT', `/api/farms/${farm.id}/climate`, token, climate.climate);
-    await api('PUT', `/api/farms/${farm.id}/fuel-prices`, token, {
-      prices: prices.prices.map(({ fuelId, pricePerUnit, priceUnit }) => ({ fuelId, pricePerUnit, priceUnit })),
-    });
+    // Versioned writes name the version they were based on; a new farm's rows start at the version the API reports.
+    const climateNow = await api<{ version: number }>('GET', `/api/farms/${farm.id}/climate`, token);
+    await api('PUT', `/api/farms/${farm.id}/climate`, token, climate.climate, climateNow.version);
+    const pricesNow = await api<{ version: number }>('GET', `/api/farms/${farm.id}/fuel-prices`, token);
+    await api(
+      'PUT',
+      `/api/farms/${farm.id}/fuel-prices`,
+      token,
+      { prices: prices.prices.map(({ fuelId, pricePerUnit, priceUnit }) => ({ fuelId, pricePerUnit, priceUnit })) },
+      pricesNow.version,
+    );
     for (let index = 0; index < FARM_HOUSES; index++) {
       await api('POST', `/api/farms/${farm.id}/houses`, token, {
         ...HOUSE,
