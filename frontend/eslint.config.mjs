@@ -43,6 +43,18 @@ export default tseslint.config(
       'react-hooks/exhaustive-deps': 'warn',
       '@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_', varsIgnorePattern: '^_' }],
       'import-x/no-cycle': 'error',
+      // Query keys come from the one registry (src/api/query-keys.ts), never literals that can drift.
+      'no-restricted-syntax': [
+        'error',
+        {
+          selector: "Property[key.name='queryKey'] > ArrayExpression",
+          message: 'Name query keys from src/api/query-keys.ts, not an array literal.',
+        },
+        {
+          selector: "Property[key.name='queryKey'] > TSAsExpression > ArrayExpression",
+          message: 'Name query keys from src/api/query-keys.ts, not an array literal.',
+        },
+      ],
       'import-x/no-restricted-paths': ['error', { zones: boundaryZones }],
       'no-restricted-imports': [
         'error',
@@ -70,6 +82,10 @@ export default tseslint.config(
         },
       ],
     },
+  },
+  {
+    files: ['src/api/query-keys.ts', '**/*.test.{ts,tsx}'],
+    rules: { 'no-restricted-syntax': 'off' },
   },
   prettier,
 );

@@ -1,6 +1,7 @@
 import { queryOptions } from '@tanstack/react-query';
 import { api } from '../api/client';
 import type { ReferenceData, ReferenceRow } from '../api/types';
+import { referenceDataKeys } from '../api/query-keys';
 
 /**
  * Handbook tables (coverings, air leakage, curtains, fuels …) are shared read-only data that
@@ -8,7 +9,7 @@ import type { ReferenceData, ReferenceRow } from '../api/types';
  */
 export const referenceDataQueryOptions = () =>
   queryOptions({
-    queryKey: ['reference-data'] as const,
+    queryKey: referenceDataKeys.all,
     queryFn: ({ signal }) => api.get<ReferenceData>('/api/reference-data', { signal }),
     staleTime: Infinity,
   });

@@ -17,7 +17,6 @@ import {
   HouseForm,
   houseDetailQueryOptions,
   houseInputOf,
-  houseKeys,
   useDeleteHouse,
   useDuplicateHouse,
   useUpdateHouse,
@@ -26,6 +25,7 @@ import { houseSpecOf } from '../../lib/house-spec';
 import { referenceDataQueryOptions } from '../../lib/reference-data';
 import { useDebouncedValue } from '../../lib/use-debounced-value';
 import { PageTitle } from '../../components/page-title';
+import { houseKeys, seasonKeys } from '../../api/query-keys';
 
 /** The form's unsaved edits as the result panels use them: null spec = show the stored house. */
 interface FormEdits {
@@ -89,7 +89,7 @@ export default function HousePage() {
   const onAdopted = (result: AdoptAlternativeResult) => {
     queryClient.setQueryData(houseKeys.detail(result.house.id), result.house);
     void queryClient.invalidateQueries({ queryKey: houseKeys.list(result.house.farmId) });
-    void queryClient.invalidateQueries({ queryKey: ['season'] });
+    void queryClient.invalidateQueries({ queryKey: seasonKeys.all });
   };
 
   return (

@@ -6,7 +6,7 @@ import type {
   CreateAlternativeRequest,
   UpdateAlternativeRequest,
 } from '../../api/types';
-import { alternativeKeys } from './queries';
+import { alternativeKeys } from '../../api/query-keys';
 
 export function useCreateAlternative(houseId: number) {
   const queryClient = useQueryClient();

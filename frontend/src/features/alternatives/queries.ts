@@ -1,17 +1,12 @@
 import { queryOptions } from '@tanstack/react-query';
 import { api } from '../../api/client';
 import type { Alternative, SideBySide, SideBySideRequest } from '../../api/types';
+import { alternativeKeys } from '../../api/query-keys';
 
 /**
  * Keys: ['alternatives', 'list', houseId] and ['alternatives', 'side-by-side', houseId, version,
  * request]. `version` is the house's updatedAt, so a saved house edit recomputes every column.
  */
-export const alternativeKeys = {
-  all: ['alternatives'] as const,
-  list: (houseId: number) => [...alternativeKeys.all, 'list', houseId] as const,
-  sideBySide: (houseId: number, version: string, request: SideBySideRequest) =>
-    [...alternativeKeys.all, 'side-by-side', houseId, version, request] as const,
-};
 
 export const houseAlternativesQueryOptions = (houseId: number) =>
   queryOptions({

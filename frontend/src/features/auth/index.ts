@@ -3,6 +3,6 @@ export { RegisterForm } from './components/register-form';
 export { ChangePasswordForm } from './components/change-password-form';
 export { ForgotPasswordForm } from './components/forgot-password-form';
 export { ResetPasswordForm } from './components/reset-password-form';
-export { currentUserQueryOptions, authKeys } from './queries';
+export { currentUserQueryOptions } from './queries';
 export { useLogout, useSignedIn } from './mutations';
 export { PASSWORD_HELP } from './schemas';

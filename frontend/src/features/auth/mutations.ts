@@ -8,7 +8,7 @@ import type {
   RegisterRequest,
   ServerMessage,
 } from '../../api/types';
-import { authKeys } from './queries';
+import { authKeys } from '../../api/query-keys';
 
 export function useSignedIn() {
   const queryClient = useQueryClient();

@@ -1,12 +1,7 @@
 import { queryOptions } from '@tanstack/react-query';
 import { api } from '../../api/client';
 import type { DemoAccounts, User } from '../../api/types';
-
-export const authKeys = {
-  all: ['auth'] as const,
-  me: () => [...authKeys.all, 'me'] as const,
-  demoAccounts: () => [...authKeys.all, 'demo-accounts'] as const,
-};
+import { authKeys } from '../../api/query-keys';
 
 export const currentUserQueryOptions = () =>
   queryOptions({

@@ -1,4 +1,4 @@
 export { ClimateSection } from './components/climate-section';
 export { ClimateEditor } from './components/climate-editor';
-export { farmClimateQueryOptions, climateKeys } from './queries';
+export { farmClimateQueryOptions } from './queries';
 export { usePutFarmClimate } from './mutations';

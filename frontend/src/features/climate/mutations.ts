@@ -2,7 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../api/client';
 import type { FarmClimate, SiteClimate } from '../../api/types';
 import type { VersionedSave } from '../../components/save-conflict';
-import { climateKeys } from './queries';
+import { climateKeys, estimateKeys, seasonKeys } from '../../api/query-keys';
 
 export function usePutFarmClimate(farmId: number) {
   const queryClient = useQueryClient();
@@ -12,8 +12,8 @@ export function usePutFarmClimate(farmId: number) {
     onSuccess: (saved) => {
       queryClient.setQueryData(climateKeys.farm(farmId), saved);
       // Season and estimate results read the farm climate: let them recompute.
-      void queryClient.invalidateQueries({ queryKey: ['season'] });
-      void queryClient.invalidateQueries({ queryKey: ['estimates'] });
+      void queryClient.invalidateQueries({ queryKey: seasonKeys.all });
+      void queryClient.invalidateQueries({ queryKey: estimateKeys.all });
     },
   });
 }

@@ -1,11 +1,7 @@
 import { queryOptions } from '@tanstack/react-query';
 import { api } from '../../api/client';
 import type { FarmClimate } from '../../api/types';
-
-export const climateKeys = {
-  all: ['climate'] as const,
-  farm: (farmId: number) => [...climateKeys.all, 'farm', farmId] as const,
-};
+import { climateKeys } from '../../api/query-keys';
 
 export const farmClimateQueryOptions = (farmId: number) =>
   queryOptions({

@@ -1,11 +1,7 @@
 import { queryOptions } from '@tanstack/react-query';
 import { api } from '../../api/client';
 import type { ClimateProposal, WeatherSource, WeatherYearStatus } from '../../api/types';
-
-export const weatherKeys = {
-  all: ['weather'] as const,
-  source: (farmId: number) => [...weatherKeys.all, 'source', farmId] as const,
-};
+import { weatherKeys } from '../../api/query-keys';
 
 export const weatherSourceQueryOptions = (farmId: number) =>
   queryOptions({

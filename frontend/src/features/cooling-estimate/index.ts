@@ -1,2 +1,1 @@
 export { CoolingPanel, type CoolingPanelProps } from './components/cooling-panel';
-export { coolingEstimateKeys } from './queries';

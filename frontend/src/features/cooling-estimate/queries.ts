@@ -8,20 +8,13 @@ import type {
   HouseSpec,
   PartialCoolingConditions,
 } from '../../api/types';
+import { coolingEstimateKeys } from '../../api/query-keys';
 
 /**
  * Keys: ['estimates', 'cooling', houseId, 'stored', storedVersion, conditions] for the stored
  * house (its updatedAt makes a save refetch) and ['estimates', 'cooling', houseId, 'edited',
  * { spec, site, conditions }] for unsaved edits.
  */
-export const coolingEstimateKeys = {
-  all: ['estimates', 'cooling'] as const,
-  house: (houseId: number) => [...coolingEstimateKeys.all, houseId] as const,
-  stored: (houseId: number, storedVersion: string, conditions: PartialCoolingConditions) =>
-    [...coolingEstimateKeys.house(houseId), 'stored', storedVersion, conditions] as const,
-  edited: (houseId: number, spec: HouseSpec, site: CoolingSite, conditions: CoolingConditions) =>
-    [...coolingEstimateKeys.house(houseId), 'edited', { spec, site, conditions }] as const,
-};
 
 /** Keep the previous result on screen while the next computes, but never another house's. */
 const sameHouse = (houseId: number, previousKey: readonly unknown[] | undefined) => previousKey?.[2] === houseId;

@@ -2,7 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../api/client';
 import type { Farm, FarmInput } from '../../api/types';
 import type { VersionedSave } from '../../components/save-conflict';
-import { farmKeys } from './queries';
+import { farmKeys } from '../../api/query-keys';
 
 export function useCreateFarm() {
   const queryClient = useQueryClient();

@@ -1,13 +1,7 @@
 import { queryOptions } from '@tanstack/react-query';
 import { api } from '../../api/client';
 import type { Farm } from '../../api/types';
-
-export const farmKeys = {
-  all: ['farms'] as const,
-  lists: () => [...farmKeys.all, 'list'] as const,
-  details: () => [...farmKeys.all, 'detail'] as const,
-  detail: (farmId: number) => [...farmKeys.details(), farmId] as const,
-};
+import { farmKeys } from '../../api/query-keys';
 
 export const farmsListQueryOptions = () =>
   queryOptions({

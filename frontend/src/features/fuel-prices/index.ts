@@ -1,2 +1,2 @@
 export { FuelPricesEditor } from './components/fuel-prices-editor';
-export { farmFuelPricesQueryOptions, fuelPriceKeys } from './queries';
+export { farmFuelPricesQueryOptions } from './queries';

@@ -2,10 +2,9 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../api/client';
 import type { FarmFuelPrices, FuelPricesInput } from '../../api/types';
 import type { VersionedSave } from '../../components/save-conflict';
-import { fuelPriceKeys } from './queries';
+import { fuelPriceKeys, seasonKeys } from '../../api/query-keys';
 
 /** Season results (keys under 'season') are priced with these: they recompute after a change. */
-const SEASON_RESULTS_KEY = ['season'] as const;
 
 export function usePutFuelPrices(farmId: number) {
   const queryClient = useQueryClient();
@@ -14,7 +13,7 @@ export function usePutFuelPrices(farmId: number) {
       api.put<FarmFuelPrices>(`/api/farms/${farmId}/fuel-prices`, body, { ifMatch: version }),
     onSuccess: (saved) => {
       queryClient.setQueryData(fuelPriceKeys.farm(farmId), saved);
-      void queryClient.invalidateQueries({ queryKey: SEASON_RESULTS_KEY });
+      void queryClient.invalidateQueries({ queryKey: seasonKeys.all });
     },
   });
 }

@@ -1,11 +1,7 @@
 import { queryOptions } from '@tanstack/react-query';
 import { api } from '../../api/client';
 import type { FarmFuelPrices } from '../../api/types';
-
-export const fuelPriceKeys = {
-  all: ['fuel-prices'] as const,
-  farm: (farmId: number) => [...fuelPriceKeys.all, 'farm', farmId] as const,
-};
+import { fuelPriceKeys } from '../../api/query-keys';
 
 export const farmFuelPricesQueryOptions = (farmId: number) =>
   queryOptions({

@@ -7,6 +7,7 @@ import type {
   HouseSpec,
   PartialHeatingConditions,
 } from '../../api/types';
+import { heatingEstimateKeys } from '../../api/query-keys';
 
 /**
  * Keys: ['estimates', 'heating', houseId, 'stored', storedVersion, conditions] for the stored
@@ -14,14 +15,6 @@ import type {
  * { spec, conditions }] for unsaved edits. Query keys hash objects with sorted keys, so equal
  * conditions share a cache entry.
  */
-export const heatingEstimateKeys = {
-  all: ['estimates', 'heating'] as const,
-  house: (houseId: number) => [...heatingEstimateKeys.all, houseId] as const,
-  stored: (houseId: number, storedVersion: string, conditions: PartialHeatingConditions) =>
-    [...heatingEstimateKeys.house(houseId), 'stored', storedVersion, conditions] as const,
-  edited: (houseId: number, spec: HouseSpec, conditions: HeatingConditions) =>
-    [...heatingEstimateKeys.house(houseId), 'edited', { spec, conditions }] as const,
-};
 
 /** Keep the previous result on screen while the next computes, but never another house's. */
 const sameHouse = (houseId: number, previousKey: readonly unknown[] | undefined) => previousKey?.[2] === houseId;

@@ -2,7 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../api/client';
 import type { House, HouseInput } from '../../api/types';
 import type { VersionedSave } from '../../components/save-conflict';
-import { houseKeys } from './queries';
+import { houseKeys } from '../../api/query-keys';
 
 export function useCreateHouse(farmId: number) {
   const queryClient = useQueryClient();

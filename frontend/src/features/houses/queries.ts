@@ -1,14 +1,7 @@
 import { queryOptions } from '@tanstack/react-query';
 import { api } from '../../api/client';
 import type { House } from '../../api/types';
-
-export const houseKeys = {
-  all: ['houses'] as const,
-  lists: () => [...houseKeys.all, 'list'] as const,
-  list: (farmId: number) => [...houseKeys.lists(), { farmId }] as const,
-  details: () => [...houseKeys.all, 'detail'] as const,
-  detail: (houseId: number) => [...houseKeys.details(), houseId] as const,
-};
+import { houseKeys } from '../../api/query-keys';
 
 export const farmHousesQueryOptions = (farmId: number) =>
   queryOptions({

@@ -1,10 +1,7 @@
 import { queryOptions, useMutation } from '@tanstack/react-query';
 import { api } from '../../api/client';
 import type { AcceptedInvitation, AuthResponse, InvitationPreview, InvitedSignUpRequest } from '../../api/types';
-
-export const invitationKeys = {
-  preview: (token: string) => ['invitations', 'preview', token] as const,
-};
+import { invitationKeys } from '../../api/query-keys';
 
 export const invitationPreviewQueryOptions = (token: string) =>
   queryOptions({

@@ -1,2 +1,2 @@
 export { FailedSendList, MessageList } from './components/message-list';
-export { inboxQueryOptions, mailKeys, outboxQueryOptions } from './queries';
+export { inboxQueryOptions, outboxQueryOptions } from './queries';

@@ -1,12 +1,7 @@
 import { queryOptions } from '@tanstack/react-query';
 import { api } from '../../api/client';
 import type { Outbox, ReceivedMail } from '../../api/types';
-
-export const mailKeys = {
-  all: ['mail'] as const,
-  outbox: () => [...mailKeys.all, 'outbox'] as const,
-  inbox: () => [...mailKeys.all, 'inbox'] as const,
-};
+import { mailKeys } from '../../api/query-keys';
 
 export const outboxQueryOptions = () =>
   queryOptions({

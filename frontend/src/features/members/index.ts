@@ -1,4 +1,4 @@
 export { MembersSection } from './components/members-section';
 export { MembersTable } from './components/members-table';
-export { farmMembersQueryOptions, memberKeys } from './queries';
+export { farmMembersQueryOptions } from './queries';
 export { memberErrorMessage } from './member-errors';

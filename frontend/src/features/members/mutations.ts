@@ -1,14 +1,14 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../api/client';
 import type { CreateInvitationRequest, FarmMember, FarmRole, InvitationSent } from '../../api/types';
-import { memberKeys } from './queries';
+import { farmKeys, memberKeys } from '../../api/query-keys';
 
 function useRefreshMembers(farmId: number) {
   const queryClient = useQueryClient();
   return () => {
     void queryClient.invalidateQueries({ queryKey: memberKeys.farm(farmId) });
     // A role change may change what the signed-in user may do on this farm.
-    void queryClient.invalidateQueries({ queryKey: ['farms'] });
+    void queryClient.invalidateQueries({ queryKey: farmKeys.all });
   };
 }
 

@@ -1,12 +1,7 @@
 import { queryOptions } from '@tanstack/react-query';
 import { api } from '../../api/client';
 import type { FarmMember, Invitation } from '../../api/types';
-
-export const memberKeys = {
-  all: ['members'] as const,
-  farm: (farmId: number) => [...memberKeys.all, 'farm', farmId] as const,
-  invitations: (farmId: number) => [...memberKeys.all, 'invitations', farmId] as const,
-};
+import { memberKeys } from '../../api/query-keys';
 
 export const farmMembersQueryOptions = (farmId: number) =>
   queryOptions({

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../api/client';
 import type { CreateReportRequest, Report, ReportSent, SendReportRequest, UpdateReportRequest } from '../../api/types';
-import { reportKeys } from './queries';
+import { reportKeys } from '../../api/query-keys';
 
 function useRefreshReports() {
   const queryClient = useQueryClient();

@@ -1,16 +1,7 @@
 import { queryOptions } from '@tanstack/react-query';
 import { api } from '../../api/client';
 import type { ClientFarm, Report, ReportSummary, UnitSystem } from '../../api/types';
-
-export const reportKeys = {
-  all: ['reports'] as const,
-  house: (houseId: number) => [...reportKeys.all, 'house', houseId] as const,
-  farm: (farmId: number) => [...reportKeys.all, 'farm', farmId] as const,
-  /** the server writes the document in the reader's units, so the unit system is part of the key */
-  detail: (reportId: number, unitSystem: UnitSystem | undefined) =>
-    [...reportKeys.all, 'detail', reportId, unitSystem] as const,
-  advising: () => [...reportKeys.all, 'advising'] as const,
-};
+import { reportKeys } from '../../api/query-keys';
 
 export const houseReportsQueryOptions = (houseId: number) =>
   queryOptions({

@@ -1,2 +1,2 @@
 export { SeasonBudgetSection } from './components/season-budget-section';
-export { seasonBudgetQueryOptions, seasonBudgetKeys } from './queries';
+export { seasonBudgetQueryOptions } from './queries';

@@ -1,12 +1,9 @@
 import { queryOptions } from '@tanstack/react-query';
 import { api } from '../../api/client';
 import type { SeasonBudget, SeasonBudgetRequest } from '../../api/types';
+import { seasonBudgetKeys } from '../../api/query-keys';
 
 /** Under 'season' so that a change of prices, climate or calendar refreshes every season result. */
-export const seasonBudgetKeys = {
-  all: ['season', 'budget'] as const,
-  farm: (farmId: number, request: SeasonBudgetRequest) => [...seasonBudgetKeys.all, farmId, request] as const,
-};
 
 /** The budget is computed (and stored nowhere), so it is a POST read like a query. */
 export const seasonBudgetQueryOptions = (farmId: number, request: SeasonBudgetRequest = {}) =>

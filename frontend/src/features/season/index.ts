@@ -1,2 +1,1 @@
 export { SeasonView, type ClimateLogOption } from './components/season-view';
-export { seasonKeys } from './queries';

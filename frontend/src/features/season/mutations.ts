@@ -2,7 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../api/client';
 import type { ProductionCalendar, ProductionCalendarInput } from '../../api/types';
 import type { VersionedSave } from '../../components/save-conflict';
-import { seasonKeys } from './queries';
+import { seasonKeys } from '../../api/query-keys';
 
 export function usePutProductionCalendar(houseId: number) {
   const queryClient = useQueryClient();

@@ -9,19 +9,12 @@ import type {
   ProductionCalendar,
   SeasonRequest,
 } from '../../api/types';
+import { seasonKeys } from '../../api/query-keys';
 
 /**
  * Season results are computed on request and stored nowhere: POST reads cached like queries.
  * Everything sits under 'season' so that a change of prices, climate or calendar refreshes it.
  */
-export const seasonKeys = {
-  all: ['season'] as const,
-  house: (houseId: number) => [...seasonKeys.all, 'house', houseId] as const,
-  estimate: (houseId: number, request: SeasonRequest) => [...seasonKeys.house(houseId), 'estimate', request] as const,
-  night: (houseId: number, request: NightDemandRequest) => [...seasonKeys.house(houseId), 'night', request] as const,
-  calendar: (houseId: number) => [...seasonKeys.house(houseId), 'calendar'] as const,
-  measures: (houseId: number, request: MeasuresRequest) => [...seasonKeys.house(houseId), 'measures', request] as const,
-};
 
 export const houseSeasonQueryOptions = (houseId: number, request: SeasonRequest) =>
   queryOptions({

@@ -1,2 +1,2 @@
 export { TemperatureLogsSection } from './components/temperature-logs-section';
-export { farmTemperatureLogsQueryOptions, temperatureLogKeys } from './queries';
+export { farmTemperatureLogsQueryOptions } from './queries';

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api, postForm, uploadWithProgress, type UploadProgress } from '../../api/client';
 import type { TemperatureColumnMapping, TemperatureCsvInspection, TemperatureLog } from '../../api/types';
-import { temperatureLogKeys } from './queries';
+import { temperatureLogKeys } from '../../api/query-keys';
 
 function fileForm(file: File, fields: Record<string, string> = {}): FormData {
   const form = new FormData();

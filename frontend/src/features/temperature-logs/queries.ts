@@ -1,12 +1,7 @@
 import { queryOptions } from '@tanstack/react-query';
 import { api } from '../../api/client';
 import type { TemperatureLog, TemperatureLogDetail } from '../../api/types';
-
-export const temperatureLogKeys = {
-  all: ['temperature-logs'] as const,
-  farm: (farmId: number) => [...temperatureLogKeys.all, 'farm', farmId] as const,
-  detail: (logId: number) => [...temperatureLogKeys.all, 'detail', logId] as const,
-};
+import { temperatureLogKeys } from '../../api/query-keys';
 
 export const farmTemperatureLogsQueryOptions = (farmId: number) =>
   queryOptions({

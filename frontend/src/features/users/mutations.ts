@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../api/client';
 import type { UpdateUserRequest, User } from '../../api/types';
-import { userKeys } from './queries';
+import { userKeys } from '../../api/query-keys';
 
 export function useUpdateUser() {
   const queryClient = useQueryClient();

@@ -1,11 +1,7 @@
 import { queryOptions } from '@tanstack/react-query';
 import { api } from '../../api/client';
 import type { User } from '../../api/types';
-
-export const userKeys = {
-  all: ['users'] as const,
-  lists: () => [...userKeys.all, 'list'] as const,
-};
+import { userKeys } from '../../api/query-keys';
 
 export const usersListQueryOptions = () =>
   queryOptions({

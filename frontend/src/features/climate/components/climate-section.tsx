@@ -4,9 +4,10 @@ import { useState } from 'react';
 import { ErrorAlert, LoadingState } from '../../../components/feedback';
 import { useSaveConflict } from '../../../components/save-conflict';
 import { usePutFarmClimate } from '../mutations';
-import { climateKeys, farmClimateQueryOptions } from '../queries';
+import { farmClimateQueryOptions } from '../queries';
 import { ClimateEditor } from './climate-editor';
 import { WeatherFillDialog } from './weather-fill-dialog';
+import { climateKeys } from '../../../api/query-keys';
 
 /** The farm's climate, loaded and saved; editable for roles with house:write. */
 export function ClimateSection({ farmId, canEdit }: { farmId: number; canEdit: boolean }) {

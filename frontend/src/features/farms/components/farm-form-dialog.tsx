@@ -17,8 +17,8 @@ import { useSaveConflict } from '../../../components/save-conflict';
 import { FormNumberField, FormTextField } from '../../../components/form-fields';
 import { useUnits, type Units } from '../../../lib/units';
 import { useCreateFarm, useUpdateFarm } from '../mutations';
-import { farmKeys } from '../queries';
 import { farmFormSchema, type FarmFormValues } from '../schemas';
+import { farmKeys } from '../../../api/query-keys';
 
 function allTimeZones(): string[] {
   try {

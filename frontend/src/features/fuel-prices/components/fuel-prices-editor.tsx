@@ -30,7 +30,8 @@ import {
   type FuelPriceFormValues,
 } from '../fuel-price-values';
 import { usePutFuelPrices } from '../mutations';
-import { farmFuelPricesQueryOptions, fuelPriceKeys } from '../queries';
+import { farmFuelPricesQueryOptions } from '../queries';
+import { fuelPriceKeys } from '../../../api/query-keys';
 
 /** The farm's price for each fuel, per the fuel's SI or US purchase unit, as on the bill. */
 export function FuelPricesEditor({

@@ -32,7 +32,8 @@ import {
   type CalendarFormValues,
 } from '../calendar-values';
 import { usePutProductionCalendar } from '../mutations';
-import { productionCalendarQueryOptions, seasonKeys } from '../queries';
+import { productionCalendarQueryOptions } from '../queries';
+import { seasonKeys } from '../../../api/query-keys';
 
 const MODE_OPTIONS = [
   { value: 'heated', label: 'Heated' },
