@@ -1,5 +1,6 @@
 import type { ReportSnapshot } from './report-snapshot';
 import { format, formatNumber, prose, unitLabel, convert, type ReportQuantity, type UnitSystem } from './report-units';
+import { quantityOfSiUnit } from '@thermbay/engine/vocabulary';
 
 /**
  * The report as a document in the reader's units: headed sections of paragraphs, fact lists,
@@ -59,24 +60,9 @@ export const STANDING_CAUTIONS = [
   'Installation: have heaters, gas lines and electrical work sized, installed and serviced by licensed installers under local codes.',
 ];
 
-/** Assumption units the report converts; anything else is shown as the engine wrote it. */
-const UNIT_KINDS: Record<string, ReportQuantity> = {
-  'W/(m²·K)': 'uValue',
-  'W/(m·K)': 'perimeterF',
-  '°C': 'temperature',
-  K: 'temperatureDifference',
-  m: 'length',
-  'm²': 'area',
-  'm³': 'volume',
-  W: 'power',
-  Pa: 'pressure',
-  'kg/m³': 'density',
-  'm²/W': 'areaPerPower',
-};
-
 function assumptionValue(value: number | string, unit: string, system: UnitSystem): string {
   if (typeof value === 'string') return unit ? `${value} ${unit}` : value;
-  const kind = UNIT_KINDS[unit];
+  const kind = quantityOfSiUnit(unit);
   if (kind) return format(kind, value, system);
   if (unit === 'fraction') return `${formatNumber(value * 100, 0)} %`;
   const decimals = Math.abs(value) >= 100 ? 0 : Math.abs(value) >= 1 ? 2 : 3;
@@ -207,7 +193,7 @@ export function buildReportDocument(snapshot: ReportSnapshot, meta: ReportMeta, 
           part.key === 'infiltration'
             ? `${formatNumber(part.coefficient, 2)} air changes/h`
             : part.key === 'perimeter'
-              ? f('perimeterF', part.coefficient)
+              ? f('perimeterFactor', part.coefficient)
               : f('uValue', part.coefficient),
           formatNumber(convert('power', part.watts, system), system === 'si' ? 1 : 0),
           `${formatNumber(part.share * 100, 0)} %`,

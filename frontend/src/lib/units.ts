@@ -1,209 +1,44 @@
 import { createContext, createElement, useContext, useMemo, type ReactNode } from 'react';
+import {
+  DISPLAY_UNITS,
+  JOULES_PER_KWH,
+  JOULES_PER_THERM,
+  isDisplayQuantity,
+  shownToSi,
+  siToShown,
+  type DisplayQuantity,
+  type UnitSystem,
+} from '@thermbay/engine/vocabulary';
 
 /**
- * The one place where SI values (as stored and computed) become what the user reads, and where
- * typed values become SI again. Factors are exact definitions (NIST SP 811, Appendix B) or
- * built from them, so a round trip loses nothing but floating-point noise.
+ * The one place in the UI where SI values (as stored and computed) become what the user reads, and
+ * where typed values become SI again. The labels, factors and decimals are the shared table
+ * `DISPLAY_UNITS` of the vocabulary (the server-built report reads the same one).
  */
 
-export type UnitSystem = 'si' | 'us';
+export type { UnitSystem };
+export { JOULES_PER_KWH, JOULES_PER_THERM };
 
-// Exact definitions.
-export const METRES_PER_FOOT = 0.3048;
-export const SQUARE_METRES_PER_SQUARE_FOOT = METRES_PER_FOOT ** 2; // 0.092 903 04
-export const CUBIC_METRES_PER_CUBIC_FOOT = METRES_PER_FOOT ** 3; // 0.028 316 846 592
-export const JOULES_PER_BTU = 1055.05585262; // International Table Btu
-export const SECONDS_PER_HOUR = 3600;
-export const JOULES_PER_KWH = 3.6e6;
-export const KELVIN_PER_FAHRENHEIT_DEGREE = 5 / 9;
-export const LITRES_PER_US_GALLON = 3.785411784;
-export const KILOGRAMS_PER_POUND = 0.45359237;
-export const SQUARE_METRES_PER_SQUARE_INCH = 0.0254 ** 2; // 6.4516 E-04
-export const LUX_PER_FOOTCANDLE = 1 / SQUARE_METRES_PER_SQUARE_FOOT; // lumen per ft² → lumen per m²
-export const STANDARD_GRAVITY_M_PER_S2 = 9.80665; // defines the pound-force
-/** lbf/in² = 0.453 592 37 kg × 9.806 65 m/s² / (0.0254 m)² */
-export const PASCALS_PER_PSI = (KILOGRAMS_PER_POUND * STANDARD_GRAVITY_M_PER_S2) / SQUARE_METRES_PER_SQUARE_INCH;
-/** 1 therm = 100 000 Btu_IT (the "EC" therm; the US-statute therm on the 59 °F Btu is 0.02 % smaller). */
-export const JOULES_PER_THERM = 1e5 * JOULES_PER_BTU;
-export const JOULES_PER_MMBTU = 1e6 * JOULES_PER_BTU;
+export type Quantity = DisplayQuantity;
 
-// Derived from the exact ones.
-export const WATTS_PER_BTU_PER_HOUR = JOULES_PER_BTU / SECONDS_PER_HOUR;
-export const WATTS_PER_M2K_PER_BTU_PER_HFT2F =
-  WATTS_PER_BTU_PER_HOUR / SQUARE_METRES_PER_SQUARE_FOOT / KELVIN_PER_FAHRENHEIT_DEGREE;
-export const CUBIC_METRES_PER_SECOND_PER_CFM = CUBIC_METRES_PER_CUBIC_FOOT / 60;
-export const M3_PER_S_M2_PER_CFM_PER_FT2 = CUBIC_METRES_PER_SECOND_PER_CFM / SQUARE_METRES_PER_SQUARE_FOOT;
-export const W_PER_MK_PER_BTU_PER_HFTF = WATTS_PER_BTU_PER_HOUR / METRES_PER_FOOT / KELVIN_PER_FAHRENHEIT_DEGREE;
-export const W_PER_K_PER_BTU_PER_HF = WATTS_PER_BTU_PER_HOUR / KELVIN_PER_FAHRENHEIT_DEGREE;
-export const METRES_PER_SECOND_PER_FOOT_PER_MINUTE = METRES_PER_FOOT / 60;
-export const KG_PER_M3_PER_LB_PER_FT3 = KILOGRAMS_PER_POUND / CUBIC_METRES_PER_CUBIC_FOOT;
-export const J_PER_KGK_PER_BTU_PER_LBF = JOULES_PER_BTU / KILOGRAMS_PER_POUND / KELVIN_PER_FAHRENHEIT_DEGREE;
-/** combustion-air inlet sizing: in² of free area per 1000 Btu/h of heater input */
-export const M2_PER_W_PER_IN2_PER_KBTUH = SQUARE_METRES_PER_SQUARE_INCH / (1000 * WATTS_PER_BTU_PER_HOUR);
-
-export type Quantity =
-  | 'length'
-  | 'area'
-  | 'smallArea'
-  | 'volume'
-  | 'temperature'
-  | 'temperatureDifference'
-  | 'power'
-  | 'uValue'
-  | 'airFlow'
-  | 'airFlowPerFloorArea'
-  | 'energy'
-  | 'irradiance'
-  | 'heatContentPerVolume'
-  | 'heatContentPerLiquidVolume'
-  | 'heatContentPerMass'
-  | 'energyKWh'
-  | 'degreeDays'
-  | 'fraction'
-  | 'durationHours'
-  | 'perimeterFactor'
-  | 'conductance'
-  | 'velocity'
-  | 'windSpeed'
-  | 'illuminance'
-  | 'pressure'
-  | 'density'
-  | 'specificHeat'
-  | 'areaPerPower';
-
-interface UnitDefinition {
-  /** symbol shown after the number */
-  label: string;
-  /** SI value (the API's unit) → value in this unit */
-  fromSi: (siValue: number) => number;
-  /** value in this unit → SI value */
-  toSi: (displayValue: number) => number;
-  /** decimals shown and offered in inputs */
-  decimals: number;
-}
-
-const scaled = (label: string, siPerUnit: number, decimals: number): UnitDefinition => ({
-  label,
-  fromSi: (siValue) => siValue / siPerUnit,
-  toSi: (displayValue) => displayValue * siPerUnit,
-  decimals,
-});
-
-/** SI units per quantity: the API's unit, except power (W shown as kW) and energy (J as kWh). */
-const UNITS: Record<Quantity, Record<UnitSystem, UnitDefinition>> = {
-  length: { si: scaled('m', 1, 2), us: scaled('ft', METRES_PER_FOOT, 1) },
-  area: { si: scaled('m²', 1, 1), us: scaled('ft²', SQUARE_METRES_PER_SQUARE_FOOT, 0) },
-  // SI value in m², for openings such as a combustion-air inlet: cm² / in²
-  smallArea: { si: scaled('cm²', 1e-4, 0), us: scaled('in²', SQUARE_METRES_PER_SQUARE_INCH, 0) },
-  volume: { si: scaled('m³', 1, 0), us: scaled('ft³', CUBIC_METRES_PER_CUBIC_FOOT, 0) },
-  temperature: {
-    si: scaled('°C', 1, 1),
-    us: {
-      label: '°F',
-      fromSi: (celsius) => celsius * 1.8 + 32,
-      toSi: (fahrenheit) => (fahrenheit - 32) / 1.8,
-      decimals: 1,
-    },
-  },
-  temperatureDifference: {
-    si: scaled('K', 1, 1),
-    us: scaled('°F', KELVIN_PER_FAHRENHEIT_DEGREE, 1),
-  },
-  power: { si: scaled('kW', 1000, 1), us: scaled('Btu/h', WATTS_PER_BTU_PER_HOUR, 0) },
-  uValue: {
-    si: scaled('W/(m²·K)', 1, 2),
-    us: scaled('Btu/(h·ft²·°F)', WATTS_PER_M2K_PER_BTU_PER_HFT2F, 3),
-  },
-  airFlow: { si: scaled('m³/s', 1, 2), us: scaled('cfm', CUBIC_METRES_PER_SECOND_PER_CFM, 0) },
-  airFlowPerFloorArea: {
-    si: scaled('m³/(s·m²)', 1, 4),
-    us: scaled('cfm/ft²', M3_PER_S_M2_PER_CFM_PER_FT2, 1),
-  },
-  energy: { si: scaled('kWh', JOULES_PER_KWH, 0), us: scaled('MMBtu', JOULES_PER_MMBTU, 2) },
-  irradiance: { si: scaled('W/m²', 1, 0), us: scaled('W/m²', 1, 0) },
-  heatContentPerVolume: {
-    si: scaled('MJ/m³', 1e6, 1),
-    us: scaled('Btu/ft³', JOULES_PER_BTU / CUBIC_METRES_PER_CUBIC_FOOT, 0),
-  },
-  heatContentPerLiquidVolume: {
-    // SI value is J per litre here (fuel is bought by the litre)
-    si: scaled('MJ/L', 1e6, 2),
-    us: scaled('Btu/gal', JOULES_PER_BTU / LITRES_PER_US_GALLON, 0),
-  },
-  heatContentPerMass: {
-    si: scaled('MJ/kg', 1e6, 1),
-    us: scaled('Btu/lb', JOULES_PER_BTU / KILOGRAMS_PER_POUND, 0),
-  },
-  // The season routes give energy in kWh (not J): this quantity's SI value is kWh.
-  energyKWh: { si: scaled('kWh', 1, 0), us: scaled('MMBtu', JOULES_PER_MMBTU / JOULES_PER_KWH, 2) },
-  // K·day to a base temperature; a °F·day is 5/9 of a K·day.
-  degreeDays: { si: scaled('K·d', 1, 0), us: scaled('°F·d', KELVIN_PER_FAHRENHEIT_DEGREE, 0) },
-  // A share 0–1 shown as a percentage (clearness, light transmission, efficiency).
-  fraction: { si: scaled('%', 0.01, 0), us: scaled('%', 0.01, 0) },
-  durationHours: { si: scaled('h', 1, 1), us: scaled('h', 1, 1) },
-  // perimeter heat-loss factor F (W per metre of perimeter per kelvin)
-  perimeterFactor: {
-    si: scaled('W/(m·K)', 1, 2),
-    us: scaled('Btu/(h·ft·°F)', W_PER_MK_PER_BTU_PER_HFTF, 3),
-  },
-  // UA of a whole house
-  conductance: { si: scaled('W/K', 1, 0), us: scaled('Btu/(h·°F)', W_PER_K_PER_BTU_PER_HF, 0) },
-  velocity: { si: scaled('m/s', 1, 2), us: scaled('ft/min', METRES_PER_SECOND_PER_FOOT_PER_MINUTE, 0) },
-  // wind is read in m/s and in miles per hour (1 mph = 0.44704 m/s exactly)
-  windSpeed: { si: scaled('m/s', 1, 1), us: scaled('mph', 0.44704, 1) },
-  illuminance: { si: scaled('lx', 1, 0), us: scaled('fc', LUX_PER_FOOTCANDLE, 0) },
-  pressure: { si: scaled('kPa', 1000, 1), us: scaled('psi', PASCALS_PER_PSI, 2) },
-  density: { si: scaled('kg/m³', 1, 3), us: scaled('lb/ft³', KG_PER_M3_PER_LB_PER_FT3, 4) },
-  specificHeat: { si: scaled('J/(kg·K)', 1, 0), us: scaled('Btu/(lb·°F)', J_PER_KGK_PER_BTU_PER_LBF, 3) },
-  // SI value in m² per W; shown as cm² per kW (1 cm²/kW = 1E-07 m²/W)
-  areaPerPower: { si: scaled('cm²/kW', 1e-7, 1), us: scaled('in² per 1,000 Btu/h', M2_PER_W_PER_IN2_PER_KBTUH, 2) },
-};
-
-/**
- * The unit strings the API writes beside SI numbers (e.g. in assumption lists) → the quantity that
- * converts them. Null for units that read the same in both systems (1/h, %, ppm, fraction, counts).
- */
-const QUANTITY_OF_SI_UNIT: Record<string, Quantity> = {
-  m: 'length',
-  'm²': 'area',
-  'm³': 'volume',
-  '°C': 'temperature',
-  K: 'temperatureDifference',
-  W: 'power',
-  'W/(m²·K)': 'uValue',
-  'W/(m·K)': 'perimeterFactor',
-  'W/K': 'conductance',
-  'm³/s': 'airFlow',
-  'm³/(s·m²)': 'airFlowPerFloorArea',
-  'W/m²': 'irradiance',
-  'm/s': 'velocity',
-  lx: 'illuminance',
-  Pa: 'pressure',
-  'kg/m³': 'density',
-  'J/(kg·K)': 'specificHeat',
-  'm²/W': 'areaPerPower',
-};
-
-export function quantityOfSiUnit(unit: string): Quantity | null {
-  return QUANTITY_OF_SI_UNIT[unit.trim()] ?? null;
-}
+export { quantityOfSiUnit } from '@thermbay/engine/vocabulary';
 
 export function unitLabel(quantity: Quantity, system: UnitSystem): string {
-  return UNITS[quantity][system].label;
+  return DISPLAY_UNITS[quantity][system].label;
 }
 
 export function unitDecimals(quantity: Quantity, system: UnitSystem): number {
-  return UNITS[quantity][system].decimals;
+  return DISPLAY_UNITS[quantity][system].decimals;
 }
 
 /** SI value → number in the user's unit (unrounded). */
 export function toDisplay(quantity: Quantity, siValue: number, system: UnitSystem): number {
-  return UNITS[quantity][system].fromSi(siValue);
+  return siToShown(quantity, siValue, system);
 }
 
 /** Number typed in the user's unit → SI value (unrounded). */
 export function fromDisplay(quantity: Quantity, displayValue: number, system: UnitSystem): number {
-  return UNITS[quantity][system].toSi(displayValue);
+  return shownToSi(quantity, displayValue, system);
 }
 
 /** Rounds to the given decimals without the 1.005 → 1.00 surprise of toFixed on binary floats. */
@@ -348,9 +183,7 @@ export function formatFuelQuantity(
  */
 const PROSE_TOKEN = /\{\{([A-Za-z]+):(-?\d+(?:\.\d+)?(?:[eE][-+]?\d+)?)\}\}/g;
 
-function isQuantity(kind: string): kind is Quantity {
-  return Object.prototype.hasOwnProperty.call(UNITS, kind);
-}
+const isQuantity = isDisplayQuantity;
 
 /**
  * Engine prose with each quantity token written in the user's units:

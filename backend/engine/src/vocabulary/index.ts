@@ -6,5 +6,6 @@
 export * from './bounds';
 export * from './house-words';
 export * from './quantities';
+export * from './display-units';
 export * from './assumption';
 export * from './passwords';

@@ -53,7 +53,7 @@ describe('proseToPlainSi', () => {
     expect(proseToPlainSi(`at least ${q('length', 0.61)} above the ridge`)).toBe('at least 0.61 m above the ridge');
     expect(proseToPlainSi(q('temperature', -18.4))).toBe('-18.4 °C');
     expect(proseToPlainSi(q('temperatureDifference', 2))).toBe('2.0 K');
-    expect(proseToPlainSi(q('area', 5.57))).toBe('5.57 m²');
+    expect(proseToPlainSi(q('area', 5.57))).toBe('5.6 m²'); // one decimal, as the app shows SI readers
     expect(proseToPlainSi(q('airFlow', 12.345))).toBe('12.35 m³/s');
     // energy tokens hold joules: 3.6 MJ = 1 kWh (definition)
     expect(proseToPlainSi(q('energy', 1234 * 3.6e6))).toBe('1,234 kWh');

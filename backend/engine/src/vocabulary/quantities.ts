@@ -1,3 +1,5 @@
+import { DISPLAY_UNITS } from './display-units';
+
 /**
  * Quantities inside engine prose (cautions, advice, explanations, measure descriptions).
  *
@@ -62,35 +64,6 @@ export const q = quantityToken;
 /** Matches one token; group 1 the kind, group 2 the SI value (may use exponent notation). */
 export const QUANTITY_TOKEN_PATTERN = /\{\{([A-Za-z]+):(-?\d+(?:\.\d+)?(?:[eE][-+]?\d+)?)\}\}/g;
 
-interface PlainSiUnit {
-  label: string;
-  /** SI token value per shown unit */
-  siPerUnit: number;
-  decimals: number;
-}
-
-/** How `proseToPlainSi` shows each kind: the SI units and decimals the app shows SI readers. */
-const PLAIN_SI: Record<QuantityKind, PlainSiUnit> = {
-  length: { label: 'm', siPerUnit: 1, decimals: 2 },
-  area: { label: 'm²', siPerUnit: 1, decimals: 2 },
-  smallArea: { label: 'cm²', siPerUnit: 1e-4, decimals: 0 },
-  volume: { label: 'm³', siPerUnit: 1, decimals: 0 },
-  temperature: { label: '°C', siPerUnit: 1, decimals: 1 },
-  temperatureDifference: { label: 'K', siPerUnit: 1, decimals: 1 },
-  power: { label: 'kW', siPerUnit: 1000, decimals: 1 },
-  uValue: { label: 'W/(m²·K)', siPerUnit: 1, decimals: 2 },
-  airFlow: { label: 'm³/s', siPerUnit: 1, decimals: 2 },
-  airFlowPerFloorArea: { label: 'm³/(s·m²)', siPerUnit: 1, decimals: 4 },
-  energy: { label: 'kWh', siPerUnit: 3.6e6, decimals: 0 },
-  irradiance: { label: 'W/m²', siPerUnit: 1, decimals: 0 },
-  conductance: { label: 'W/K', siPerUnit: 1, decimals: 0 },
-  velocity: { label: 'm/s', siPerUnit: 1, decimals: 2 },
-  illuminance: { label: 'lx', siPerUnit: 1, decimals: 0 },
-  pressure: { label: 'kPa', siPerUnit: 1000, decimals: 1 },
-  density: { label: 'kg/m³', siPerUnit: 1, decimals: 3 },
-  areaPerPower: { label: 'cm²/kW', siPerUnit: 1e-7, decimals: 1 },
-};
-
 function isQuantityKind(kind: string): kind is QuantityKind {
   return Object.prototype.hasOwnProperty.call(SI_UNIT_OF_KIND, kind);
 }
@@ -104,7 +77,7 @@ export function proseToPlainSi(text: string): string {
   return text.replace(QUANTITY_TOKEN_PATTERN, (_token, kind: string, raw: string) => {
     const valueSi = Number(raw);
     if (!isQuantityKind(kind)) return raw;
-    const unit = PLAIN_SI[kind];
+    const unit = DISPLAY_UNITS[kind].si; // as the app shows SI readers
     const shown = Number((valueSi / unit.siPerUnit).toFixed(unit.decimals)) || 0; // `|| 0`: no "-0.0"
     const number = new Intl.NumberFormat('en-US', {
       minimumFractionDigits: unit.decimals,
