@@ -54,6 +54,18 @@ export const COOLING_BOUNDS = {
 export const OUTDOOR_TEMPERATURE_LIMITS_C = { min: -60, max: 60 } as const;
 
 /**
+ * Bounds on a farm's climate. The summer design values feed the cooling estimate, so they are the
+ * cooling bounds themselves: a climate the API saves is always one the cooling estimate accepts.
+ */
+export const CLIMATE_BOUNDS = {
+  monthlyMeanC: OUTDOOR_TEMPERATURE_LIMITS_C,
+  clearnessFraction: { min: 0, max: 1 },
+  summerDesignWetBulbC: COOLING_BOUNDS.summerDesignWetBulbC,
+  summerDailyRangeK: COOLING_BOUNDS.dailyRangeK,
+  sourceNoteLength: { min: 0, max: 1000 },
+} as const;
+
+/**
  * Largest temperature log file the API reads: its size in bytes and its data rows. 200,000
  * rows hold more than twenty years of hourly readings; the UI states both before a file is chosen.
  */

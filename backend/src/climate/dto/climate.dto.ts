@@ -14,31 +14,39 @@ import {
   ValidateNested,
   IsObject,
 } from 'class-validator';
-import { BOUNDS } from '@thermbay/engine/vocabulary';
+import { BOUNDS, CLIMATE_BOUNDS } from '@thermbay/engine/vocabulary';
 
 export class MonthlyClimateDto {
   @ApiProperty({ minimum: 1, maximum: 12 }) @IsInt() @Min(1) @Max(12) month: number;
-  @ApiProperty({ description: 'mean of the daily minimum temperatures, °C' })
+  @ApiProperty({
+    minimum: CLIMATE_BOUNDS.monthlyMeanC.min,
+    maximum: CLIMATE_BOUNDS.monthlyMeanC.max,
+    description: 'mean of the daily minimum temperatures, °C',
+  })
   @IsNumber()
-  @Min(-60)
-  @Max(60)
+  @Min(CLIMATE_BOUNDS.monthlyMeanC.min)
+  @Max(CLIMATE_BOUNDS.monthlyMeanC.max)
   meanDailyMinC: number;
-  @ApiProperty({ description: 'mean of the daily maximum temperatures, °C' })
+  @ApiProperty({
+    minimum: CLIMATE_BOUNDS.monthlyMeanC.min,
+    maximum: CLIMATE_BOUNDS.monthlyMeanC.max,
+    description: 'mean of the daily maximum temperatures, °C',
+  })
   @IsNumber()
-  @Min(-60)
-  @Max(60)
+  @Min(CLIMATE_BOUNDS.monthlyMeanC.min)
+  @Max(CLIMATE_BOUNDS.monthlyMeanC.max)
   meanDailyMaxC: number;
   @ApiPropertyOptional({
-    minimum: 0,
-    maximum: 1,
+    minimum: CLIMATE_BOUNDS.clearnessFraction.min,
+    maximum: CLIMATE_BOUNDS.clearnessFraction.max,
     nullable: true,
     type: Number,
     description: 'actual ÷ clear-sky solar over the month; default from reference data',
   })
   @IsOptional()
   @IsNumber()
-  @Min(0)
-  @Max(1)
+  @Min(CLIMATE_BOUNDS.clearnessFraction.min)
+  @Max(CLIMATE_BOUNDS.clearnessFraction.max)
   clearness?: number | null;
 }
 
@@ -63,16 +71,24 @@ export class SiteClimateDto {
   @Max(BOUNDS.summerDesignC.max)
   summerDesignC: number;
 
-  @ApiProperty({ description: 'wet bulb coincident with the summer design dry bulb, °C' })
+  @ApiProperty({
+    minimum: CLIMATE_BOUNDS.summerDesignWetBulbC.min,
+    maximum: CLIMATE_BOUNDS.summerDesignWetBulbC.max,
+    description: 'wet bulb coincident with the summer design dry bulb, °C',
+  })
   @IsNumber()
-  @Min(-10)
-  @Max(40)
+  @Min(CLIMATE_BOUNDS.summerDesignWetBulbC.min)
+  @Max(CLIMATE_BOUNDS.summerDesignWetBulbC.max)
   summerDesignWetBulbC: number;
 
-  @ApiProperty({ minimum: 2, maximum: 25, description: 'mean daily range on the summer design day, K' })
+  @ApiProperty({
+    minimum: CLIMATE_BOUNDS.summerDailyRangeK.min,
+    maximum: CLIMATE_BOUNDS.summerDailyRangeK.max,
+    description: 'mean daily range on the summer design day, K',
+  })
   @IsNumber()
-  @Min(2)
-  @Max(25)
+  @Min(CLIMATE_BOUNDS.summerDailyRangeK.min)
+  @Max(CLIMATE_BOUNDS.summerDailyRangeK.max)
   summerDailyRangeK: number;
 
   @ApiProperty({ type: MonthlyClimateDto, isArray: true, description: 'exactly 12 rows, one per month' })
@@ -91,7 +107,7 @@ export class SiteClimateDto {
   })
   @IsOptional()
   @IsString()
-  @MaxLength(1000)
+  @MaxLength(CLIMATE_BOUNDS.sourceNoteLength.max)
   sourceNote?: string | null;
 
   @ApiPropertyOptional({

@@ -1,13 +1,6 @@
-import { BOUNDS } from '@thermbay/engine/vocabulary';
+import { BOUNDS, CLIMATE_BOUNDS } from '@thermbay/engine/vocabulary';
 import * as yup from 'yup';
 import type { Units } from '../../lib/units';
-
-/** Outdoor temperatures the API accepts anywhere, °C (the engine's limits for monthly normals). */
-export const OUTDOOR_LIMITS_C = { min: -60, max: 60 } as const;
-/** Wet bulb limits of the API's climate body, °C. */
-export const WET_BULB_LIMITS_C = { min: -10, max: 40 } as const;
-/** Summer design daily range limits of the API's climate body, K. */
-export const DAILY_RANGE_LIMITS_K = { min: 2, max: 25 } as const;
 
 const typedNumber = (label: string) =>
   yup
@@ -23,7 +16,7 @@ const inRange = (label: string, range: { min: number; max: number }, unit: strin
 /** The climate form's values are strings in the user's units; ranges are the API's, converted. */
 export function climateFormSchema(units: Units) {
   const t = units.label('temperature');
-  const outdoor = units.range('temperature', OUTDOOR_LIMITS_C);
+  const outdoor = units.range('temperature', CLIMATE_BOUNDS.monthlyMeanC);
   const month = yup.object({
     meanDailyMinC: inRange('Minimum', outdoor, t).required('Enter the mean daily minimum'),
     meanDailyMaxC: inRange('Maximum', outdoor, t)
@@ -41,7 +34,11 @@ export function climateFormSchema(units: Units) {
     summerDesignC: inRange('Cooling design temperature', units.range('temperature', BOUNDS.summerDesignC), t).required(
       'Enter the cooling design temperature',
     ),
-    summerDesignWetBulbC: inRange('Coincident wet bulb', units.range('temperature', WET_BULB_LIMITS_C), t)
+    summerDesignWetBulbC: inRange(
+      'Coincident wet bulb',
+      units.range('temperature', CLIMATE_BOUNDS.summerDesignWetBulbC),
+      t,
+    )
       .required('Enter the wet bulb that goes with the cooling design temperature')
       .test('wet-below-dry', 'The wet bulb cannot be above the dry bulb it goes with', function check(value) {
         const dry = Number(this.parent.summerDesignC);
@@ -49,11 +46,13 @@ export function climateFormSchema(units: Units) {
       }),
     summerDailyRangeK: inRange(
       'Daily range',
-      units.range('temperatureDifference', DAILY_RANGE_LIMITS_K),
+      units.range('temperatureDifference', CLIMATE_BOUNDS.summerDailyRangeK),
       units.label('temperatureDifference'),
     ).required('Enter the mean daily range on the design day'),
     monthly: yup.array(month).length(12),
-    sourceNote: yup.string().max(1000, 'At most 1000 characters'),
+    sourceNote: yup
+      .string()
+      .max(CLIMATE_BOUNDS.sourceNoteLength.max, `At most ${CLIMATE_BOUNDS.sourceNoteLength.max} characters`),
     designWindSpeedMPerS: inRange(
       'Design wind speed',
       units.range('windSpeed', BOUNDS.designWindSpeedMPerS),
