@@ -11,6 +11,8 @@ export interface CoveringRow extends ReferenceRow {
   uBtuPerHFt2F: number;
   uRangeWPerM2K?: [number, number];
   lightTransmittance: number;
+  /** share of the crop's long-wave radiation the covering passes to the sky (0 opaque) */
+  thermalIrTransmittance: number;
 }
 
 export interface AirLeakageRow extends ReferenceRow {
