@@ -56,17 +56,6 @@ export function coolingAssumptions(
   }: CoolingAssumptionSources,
   ref: ReferenceData,
 ): CoolingAssumption[] {
-  const {
-    peakInteriorLightLux,
-    lightDefault,
-    allowedTemperatureRiseK,
-    riseDefault,
-    transpirationFraction,
-    transpirationDefault,
-    padToFanDistanceM,
-    winterDesignC,
-    winterDefault,
-  } = inputs;
   const assumptions: CoolingAssumption[] = [];
   const sourced = (
     key: string,
@@ -89,23 +78,23 @@ export function coolingAssumptions(
   sourced(
     'peakInteriorLightLux',
     'Peak interior light at plant height',
-    peakInteriorLightLux,
+    inputs.peakInteriorLightLux,
     'lx',
-    lightDefault.row,
+    inputs.lightDefault.row,
     conditions.peakInteriorLightLux !== undefined,
   );
   sourced(
     'allowedTemperatureRiseK',
     'Allowed inlet-to-fan temperature rise',
-    allowedTemperatureRiseK,
+    inputs.allowedTemperatureRiseK,
     'K',
-    riseDefault.row,
+    inputs.riseDefault.row,
     conditions.allowedTemperatureRiseK !== undefined,
   );
   assumptions.push({
     key: 'padToFanDistanceM',
     label: 'Inlet (pad) to fan distance',
-    value: padToFanDistanceM,
+    value: inputs.padToFanDistanceM,
     unit: 'm',
     source: 'House length: fans on one endwall, inlets or pads on the opposite one',
     confidence: 'common-practice',
@@ -130,9 +119,9 @@ export function coolingAssumptions(
   sourced(
     'transpirationFraction',
     'Share of transmitted solar heat taken up by crop transpiration',
-    transpirationFraction,
+    inputs.transpirationFraction,
     '–',
-    transpirationDefault.row,
+    inputs.transpirationDefault.row,
     conditions.transpirationFraction !== undefined,
   );
   sourced(
@@ -230,9 +219,9 @@ export function coolingAssumptions(
   sourced(
     'winterDesignC',
     'Outdoor temperature for the winter ventilation heat cost (house air at the night heating setpoint)',
-    winterDesignC,
+    inputs.winterDesignC,
     '°C',
-    winterDefault.row,
+    inputs.winterDefault.row,
     conditions.winterDesignC !== undefined,
   );
   return assumptions;
