@@ -59,6 +59,7 @@ describe('estimateHeating', () => {
         'kneewallW',
         'outsideC',
         'perimeterW',
+        'skyW',
         'totalW',
         'wind',
       ].sort(),
@@ -442,5 +443,71 @@ describe('estimateHeating: unvented heaters', () => {
       ref,
     );
     expect(estimate.cautions.join(' ')).not.toMatch(/UNVENTED/);
+  });
+});
+
+describe('estimateHeating on a clear night', () => {
+  const clearNight: HeatingConditions = { designOutdoorC: -15, elevationM: 0, insideRelativeHumidityPct: 70 };
+
+  it('adds the sky loss by hand: double poly roof (τ 0.30), −15 °C air, −18 °C dew point → 26.28 W per m² of floor', () => {
+    // Hand arithmetic (heating/sky-radiation.spec.ts works it through): ε_sky = 0.633852, T_sky = 230.34 K,
+    // q = 0.30 × 0.95 × 5.670374e-8 × (258.15⁴ − 230.34⁴) = 26.28 W/m².
+    const house = exampleDoublePolyGableHouse();
+    const floorAreaM2 = house.spans * house.widthM * house.lengthM;
+    const overcast = estimateHeating({ house, conditions: clearNight }, ref);
+    const clear = estimateHeating({ house, conditions: { ...clearNight, clearSky: true, outdoorDewPointC: -18 } }, ref);
+    expect(overcast.heatLoss.skyW).toBe(0);
+    expectRelativelyClose(clear.heatLoss.skyW, 26.28 * floorAreaM2, 1e-3);
+    expectRelativelyClose(clear.heatLoss.totalW, overcast.heatLoss.totalW + 26.28 * floorAreaM2, 1e-3);
+    const sky = clear.heatLoss.components.find((component) => component.key === 'sky')!;
+    expect(sky.watts).toBe(clear.heatLoss.skyW);
+    expect(clear.heatLoss.components.reduce((sum, component) => sum + component.share, 0)).toBeCloseTo(1, 10);
+    expect(clear.cautions.some((caution) => /clear night/.test(caution))).toBe(true);
+    // the same heaters hold less on a clear night
+    expect(clear.heater.lowestHeldOutdoorC!).toBeGreaterThan(overcast.heater.lowestHeldOutdoorC!);
+    // T_held = T_in − (output − sky loss) / UA: the sky loss costs (sky W ÷ UA) kelvin of outdoor reach
+    const uaWPerK = overcast.heatLoss.totalW / overcast.heatLoss.deltaTK;
+    expectRelativelyClose(
+      clear.heater.lowestHeldOutdoorC! - overcast.heater.lowestHeldOutdoorC!,
+      clear.heatLoss.skyW / uaWPerK,
+      1e-9,
+    );
+  });
+
+  it('nothing through glass or under a drawn curtain', () => {
+    const glass = exampleDoublePolyGableHouse({
+      coverings: { roof: 'glass-single', sidewalls: 'glass-single', endwalls: 'glass-single' },
+    });
+    const glassNight = estimateHeating({ house: glass, conditions: { ...clearNight, clearSky: true } }, ref);
+    const poly = exampleDoublePolyGableHouse();
+    const polyNight = estimateHeating({ house: poly, conditions: { ...clearNight, clearSky: true } }, ref);
+    expect(glassNight.heatLoss.skyW).toBeLessThan(polyNight.heatLoss.skyW / 5);
+    expect(glassNight.cautions.some((caution) => /clear night/.test(caution))).toBe(false);
+  });
+
+  it('an IR-absorbing inner film saves more on a clear night than under cloud (Bartok: 10–20 %)', () => {
+    const plain = exampleDoublePolyGableHouse();
+    const ir = exampleDoublePolyGableHouse({
+      coverings: { roof: 'poly-double-ir-inner', sidewalls: 'poly-double-ir-inner', endwalls: 'poly-double-ir-inner' },
+    });
+    const saving = (clearSky: boolean) => {
+      const a = estimateHeating({ house: plain, conditions: { ...clearNight, clearSky } }, ref).heatLoss.totalW;
+      const b = estimateHeating({ house: ir, conditions: { ...clearNight, clearSky } }, ref).heatLoss.totalW;
+      return 1 - b / a;
+    };
+    expect(saving(true)).toBeGreaterThan(saving(false));
+    expect(saving(true)).toBeGreaterThan(0.1);
+    expect(saving(true)).toBeLessThan(0.2);
+  });
+
+  it('refuses a dew point above the air temperature', () => {
+    expectEngineError(
+      () =>
+        estimateHeating(
+          { house: exampleDoublePolyGableHouse(), conditions: { ...clearNight, clearSky: true, outdoorDewPointC: -5 } },
+          ref,
+        ),
+      'conditions.outdoorDewPointC',
+    );
   });
 });

@@ -2,8 +2,9 @@ import { EngineInputError } from './errors';
 import { computeHouseGeometry } from './geometry/house-geometry';
 import { combustionSafety, type CombustionSafety } from './heating/combustion-safety';
 import { condensationRisk, type CondensationResult } from './heating/condensation';
-import { designHeatLoss, heatLossCoefficients, type HeatLossBreakdown } from './heating/heat-loss';
+import { designHeatLoss, heatLossCoefficients, withSkyLoss, type HeatLossBreakdown } from './heating/heat-loss';
 import { sizeHeaters, type HeaterSizingResult } from './heating/heater-sizing';
+import { clearNightSkyLoss, type ClearNightSky } from './heating/clear-night';
 import { assumptionFromRow, heatingAssumptions, type HeatingAssumption } from './heating/heating-assumptions';
 import { heatingCautions } from './heating/heating-cautions';
 import { validateHeatingConditions, type HeatingConditions } from './heating/heating-conditions';
@@ -58,11 +59,16 @@ export function estimateHeating(input: HeatingEstimateInput, ref: ReferenceData)
     airDensityKgPerM3: air.airDensityKgPerM3,
     windSpeedMPerS: conditions.designWindSpeedMPerS ?? undefined,
   });
-  const heatLoss = designHeatLoss(coefficients, geometry, insideC, outsideC);
+  const clearNight: ClearNightSky | null = conditions.clearSky
+    ? clearNightSkyLoss({ conditions, curtainClosed: coefficients.curtainApplied, geometry, coefficients }, ref)
+    : null;
+  const tabulated = designHeatLoss(coefficients, geometry, insideC, outsideC);
+  const heatLoss = clearNight ? withSkyLoss(tabulated, geometry.floorAreaM2, clearNight.loss.lossW) : tabulated;
   const sizing = sizeHeaters(
     {
       designHeatLossW: heatLoss.totalW,
       totalConductanceWPerK: coefficients.totalWPerK,
+      fixedLossW: heatLoss.skyW,
       insideC,
       heaters: house.heaters,
     },
@@ -85,6 +91,7 @@ export function estimateHeating(input: HeatingEstimateInput, ref: ReferenceData)
     : { cautions: [], rows: [] };
   const assumptions: HeatingAssumption[] = [
     ...heatingAssumptions({ conditions, insideC, geometry, coefficients, air, condensation, sizing }),
+    ...(clearNight?.assumptions ?? []),
     ...combustion.rows.map(({ row, value, unit }) =>
       assumptionFromRow(row, `safety.${row.id}`, row.label, value, unit),
     ),
@@ -103,7 +110,7 @@ export function estimateHeating(input: HeatingEstimateInput, ref: ReferenceData)
       combustionCautions: combustion.cautions,
     },
     ref,
-  );
+  ).concat(clearNight?.cautions ?? []);
 
   return {
     geometry: {

@@ -1496,6 +1496,10 @@ export interface components {
             curtainClosed?: boolean;
             /** @description design wind speed, m/s; default the farm climate's, else the 6.7 m/s (15 mph) the U tables assume */
             designWindSpeedMPerS?: number;
+            /** @description size for a clear night: add the long-wave loss to a sky colder than the air through a covering that passes thermal infrared; default false (the tabulated U-values, surroundings at the outdoor air temperature) */
+            clearSky?: boolean;
+            /** @description outdoor dew point on a clear design night, °C (at most the design temperature); default 3 K below it */
+            outdoorDewPointC?: number;
         };
         HeatingEstimateRequestDto: {
             house: components["schemas"]["HouseSpecDto"];
@@ -1536,7 +1540,7 @@ export interface components {
         };
         HeatLossComponentDto: {
             /** @enum {string} */
-            key: "roof" | "sidewalls" | "endwalls" | "kneewall" | "perimeter" | "infiltration";
+            key: "roof" | "sidewalls" | "endwalls" | "kneewall" | "perimeter" | "infiltration" | "sky";
             label: string;
             /** @description area (m²), perimeter (m) or volume (m³), see quantityUnit */
             quantity: number;
@@ -1568,6 +1572,8 @@ export interface components {
             perimeterW: number;
             /** @description air leakage, W */
             infiltrationW: number;
+            /** @description long-wave loss to a clear night sky, W (0 unless a clear night was asked for) */
+            skyW: number;
             curtainApplied: boolean;
             wind: components["schemas"]["WindSummaryDto"];
             components: components["schemas"]["HeatLossComponentDto"][];
@@ -1841,6 +1847,10 @@ export interface components {
             curtainClosed?: boolean;
             /** @description design wind speed, m/s; default the farm climate's, else the 6.7 m/s (15 mph) the U tables assume */
             designWindSpeedMPerS?: number;
+            /** @description size for a clear night: add the long-wave loss to a sky colder than the air through a covering that passes thermal infrared; default false (the tabulated U-values, surroundings at the outdoor air temperature) */
+            clearSky?: boolean;
+            /** @description outdoor dew point on a clear design night, °C (at most the design temperature); default 3 K below it */
+            outdoorDewPointC?: number;
         };
         HouseHeatingEstimateRequestDto: {
             conditions?: components["schemas"]["PartialHeatingConditionsDto"];
@@ -1857,6 +1867,7 @@ export interface components {
             curtainClosed: boolean;
             /** @description m/s */
             designWindSpeedMPerS: number;
+            clearSky: boolean;
         };
         HeatingConditionsSourceDto: {
             /** @enum {string} */
@@ -1871,6 +1882,8 @@ export interface components {
             curtainClosed: "default" | "request";
             /** @enum {string} */
             designWindSpeedMPerS: "farm climate" | "reference data" | "request";
+            /** @enum {string} */
+            clearSky: "default" | "request";
         };
         HouseHeatingEstimateDto: {
             geometry: components["schemas"]["HouseGeometrySummaryDto"];

@@ -1,4 +1,4 @@
-import { BOUNDS } from '../vocabulary';
+import { BOUNDS, OUTDOOR_TEMPERATURE_LIMITS_C } from '../vocabulary';
 import { EngineInputError, requireInRange } from '../errors';
 import { type HouseSpec } from '../house.types';
 
@@ -18,6 +18,14 @@ export interface HeatingConditions {
   curtainClosed?: boolean;
   /** design wind speed, m/s; default the wind the U tables assume (reference-data/wind.json) */
   designWindSpeedMPerS?: number;
+  /**
+   * Size for a clear night: add the long-wave loss to a sky colder than the air through a covering
+   * that passes thermal infrared (heating/sky-radiation.ts). Default false: the tabulated U-values'
+   * conditions, with surroundings at the outdoor air temperature.
+   */
+  clearSky?: boolean;
+  /** outdoor dew point on the design night, °C; default the clear-night depression below the air */
+  outdoorDewPointC?: number;
 }
 
 /**
@@ -43,6 +51,17 @@ export function validateHeatingConditions(conditions: HeatingConditions, house: 
   );
   if (conditions.curtainClosed !== undefined && typeof conditions.curtainClosed !== 'boolean') {
     throw new EngineInputError('conditions.curtainClosed', 'conditions.curtainClosed must be true or false');
+  }
+  if (conditions.clearSky !== undefined && typeof conditions.clearSky !== 'boolean') {
+    throw new EngineInputError('conditions.clearSky', 'conditions.clearSky must be true or false');
+  }
+  if (conditions.outdoorDewPointC !== undefined && conditions.outdoorDewPointC !== null) {
+    requireInRange(
+      'conditions.outdoorDewPointC',
+      conditions.outdoorDewPointC,
+      OUTDOOR_TEMPERATURE_LIMITS_C.min,
+      conditions.designOutdoorC,
+    );
   }
   if (conditions.insideC !== undefined && conditions.insideC !== null) {
     return requireInRange('conditions.insideC', conditions.insideC, BOUNDS.setpointC.min, BOUNDS.setpointC.max);

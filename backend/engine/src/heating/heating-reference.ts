@@ -1,5 +1,5 @@
 import { EngineInputError } from '../errors';
-import { HEATER_TYPES, type HeaterType, type SurfaceGroup } from '../vocabulary';
+import { HEATER_TYPES, type Confidence, type HeaterType, type SurfaceGroup } from '../vocabulary';
 import { referenceRow, referenceTable, type ReferenceData, type ReferenceRow } from '../reference-data.types';
 
 /** Typed rows of the reference tables the heating engine reads, and checked look-ups. */
@@ -13,6 +13,8 @@ export interface CoveringRow extends ReferenceRow {
   lightTransmittance: number;
   /** share of the crop's long-wave radiation the covering passes to the sky (0 opaque) */
   thermalIrTransmittance: number;
+  irSource?: string;
+  irConfidence?: Confidence;
 }
 
 export interface AirLeakageRow extends ReferenceRow {
