@@ -3478,6 +3478,13 @@ export interface operations {
                 };
                 content?: never;
             };
+            /** @description Too many attempts from this address or on this account */
+            429: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
         };
     };
     AuthController_requestPasswordReset: {
@@ -3500,6 +3507,13 @@ export interface operations {
                 content: {
                     "application/json": components["schemas"]["MessageDto"];
                 };
+            };
+            /** @description Too many requests from this address or for this e-mail address */
+            429: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
             };
         };
     };
@@ -3527,6 +3541,13 @@ export interface operations {
             };
             /** @description link used, expired or unknown; or the new password refused */
             400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description Too many attempts from this address */
+            429: {
                 headers: {
                     [name: string]: unknown;
                 };
@@ -3938,6 +3959,13 @@ export interface operations {
             };
             /** @description unknown, used, revoked or expired link */
             404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description Too many attempts from this address */
+            429: {
                 headers: {
                     [name: string]: unknown;
                 };
