@@ -3491,6 +3491,13 @@ export interface operations {
                 };
                 content?: never;
             };
+            /** @description Too many attempts from this address or on this account */
+            429: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
         };
     };
     AuthController_requestPasswordReset: {
@@ -3513,6 +3520,13 @@ export interface operations {
                 content: {
                     "application/json": components["schemas"]["MessageDto"];
                 };
+            };
+            /** @description Too many requests from this address or for this e-mail address */
+            429: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
             };
         };
     };
@@ -3540,6 +3554,13 @@ export interface operations {
             };
             /** @description link used, expired or unknown; or the new password refused */
             400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description Too many attempts from this address */
+            429: {
                 headers: {
                     [name: string]: unknown;
                 };
@@ -3951,6 +3972,13 @@ export interface operations {
             };
             /** @description unknown, used, revoked or expired link */
             404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description Too many attempts from this address */
+            429: {
                 headers: {
                     [name: string]: unknown;
                 };

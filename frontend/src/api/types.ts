@@ -125,6 +125,7 @@ export type AcceptedInvitation = Schemas['AcceptedInvitationDto'];
 export type ReportSummary = Schemas['ReportSummaryDto'];
 export type Report = Schemas['ReportDto'];
 export type ReportDocument = Schemas['ReportDocumentDto'];
+export type ReportSection = Schemas['ReportSectionDto'];
 export type ReportBlock = Schemas['ReportBlockDto'];
 export type CreateReportRequest = Schemas['CreateReportDto'];
 export type UpdateReportRequest = Schemas['UpdateReportDto'];
