@@ -18,6 +18,7 @@ import { MailSend } from '../mail/models/mail-send.model';
 import { ReceivedMail, ReceivedMailAttachment } from '../mail/models/received-mail.model';
 import { FarmFuelPrice } from '../season/models/farm-fuel-price.model';
 import { HouseCalendar } from '../season/models/house-calendar.model';
+import { HouseMeasurePlan } from '../season/models/house-measure-plan.model';
 import { TemperatureLog } from '../temperature-logs/models/temperature-log.model';
 import { User } from '../users/models/user.model';
 import { WeatherYear } from '../weather/models/weather-year.model';
@@ -31,6 +32,7 @@ export const MODELS = [
   FarmClimate,
   TemperatureLog,
   HouseCalendar,
+  HouseMeasurePlan,
   FarmFuelPrice,
   WeatherYear,
   LoginAttempt,

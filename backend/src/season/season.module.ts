@@ -9,6 +9,9 @@ import { CalendarService } from './calendar.service';
 import { FuelPricesService } from './fuel-prices.service';
 import { FarmFuelPrice } from './models/farm-fuel-price.model';
 import { HouseCalendar } from './models/house-calendar.model';
+import { HouseMeasurePlan } from './models/house-measure-plan.model';
+import { MeasurePlanController } from './measure-plan.controller';
+import { MeasurePlanService } from './measure-plan.service';
 import { SeasonBudgetService } from './season-budget.service';
 import { SeasonInputsService } from './season-inputs.service';
 import { SeasonController } from './season.controller';
@@ -18,14 +21,14 @@ import { SunCacheService } from './sun-cache.service';
 /** Season engine over HTTP; brings the temperature-log routes with it (one entry in AppModule). */
 @Module({
   imports: [
-    SequelizeModule.forFeature([FarmFuelPrice, HouseCalendar]),
+    SequelizeModule.forFeature([FarmFuelPrice, HouseCalendar, HouseMeasurePlan]),
     FarmsModule,
     HousesModule,
     AlternativesModule,
     ClimateModule,
     TemperatureLogsModule,
   ],
-  controllers: [SeasonController],
+  controllers: [SeasonController, MeasurePlanController],
   providers: [
     SunCacheService,
     SeasonInputsService,
@@ -33,6 +36,7 @@ import { SunCacheService } from './sun-cache.service';
     SeasonBudgetService,
     CalendarService,
     FuelPricesService,
+    MeasurePlanService,
   ],
   exports: [SeasonService, SeasonInputsService, SunCacheService],
 })
