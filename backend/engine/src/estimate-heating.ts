@@ -63,7 +63,7 @@ export function estimateHeating(input: HeatingEstimateInput, ref: ReferenceData)
     ? clearNightSkyLoss({ conditions, curtainClosed: coefficients.curtainApplied, geometry, coefficients }, ref)
     : null;
   const tabulated = designHeatLoss(coefficients, geometry, insideC, outsideC);
-  const heatLoss = clearNight ? withSkyLoss(tabulated, geometry.floorAreaM2, clearNight.loss.lossW) : tabulated;
+  const heatLoss = clearNight ? withSkyLoss(tabulated, geometry.floorAreaM2, clearNight.totalW) : tabulated;
   const sizing = sizeHeaters(
     {
       designHeatLossW: heatLoss.totalW,
@@ -81,6 +81,8 @@ export function estimateHeating(input: HeatingEstimateInput, ref: ReferenceData)
       coveringId: coefficients.rows.coverings[group].id,
       // the covering's U at the design wind (the curtain is not credited for the cover's own surface)
       uWPerM2K: coefficients.coveringUWPerM2K[group] * coefficients.wind.uFactor[group],
+      // under a clear sky the covering loses as if the air were colder
+      skyCoolingK: clearNight?.coverCoolingK[group] ?? 0,
     })),
     ref,
   );

@@ -1,16 +1,24 @@
 import type { HouseGeometry } from '../geometry/house-geometry';
-import type { ReferenceData } from '../reference-data.types';
-import { quantityToken } from '../vocabulary';
+import type { ReferenceData, ReferenceRow } from '../reference-data.types';
+import { SURFACE_GROUPS, quantityToken, type SurfaceGroup } from '../vocabulary';
 import type { HeatLossCoefficients } from './heat-loss';
 import { assumptionFromRow, type HeatingAssumption } from './heating-assumptions';
 import type { HeatingConditions } from './heating-conditions';
-import { skyConstants, skyRadiationLoss, type SkyLoss } from './sky-radiation';
+import { requiredRow } from './heating-reference';
+import { coverSkyCoolingK, skyConstants, skyRadiationLoss, type SkyLoss } from './sky-radiation';
 
 /** Share of long-wave radiation above which a covering's clear-night loss earns a caution. */
 const IR_TRANSPARENT_FROM = 0.2;
 
 export interface ClearNightSky {
+  /** radiation from the crop through the roof to the sky */
   loss: SkyLoss;
+  /** how much colder the air seems to each covering's outer surface, K */
+  coverCoolingK: Record<SurfaceGroup, number>;
+  /** extra loss through the coverings from that cooling, W */
+  coverW: number;
+  /** both paths together, W */
+  totalW: number;
   /** the roof covering's thermal-infrared transmittance used (0 under a drawn curtain) */
   thermalIrTransmittance: number;
   assumptions: HeatingAssumption[];
@@ -18,8 +26,9 @@ export interface ClearNightSky {
 }
 
 /**
- * The design night under a clear sky: the crop radiates through the roof covering to the sky
- * (heating/sky-radiation.ts). A drawn curtain is treated as opaque to long-wave radiation (common
+ * The design night under a clear sky (heating/sky-radiation.ts): the crop radiates through the roof
+ * covering to the sky, and every covering's outer surface, seeing the sky instead of the air, loses
+ * as if the air were colder by `coverCoolingK` (more loss through U; a colder inside surface). A drawn curtain is treated as opaque to long-wave radiation (common
  * practice, no source: aluminised and most woven curtain fabrics pass little of it).
  */
 export function clearNightSkyLoss(
@@ -44,6 +53,20 @@ export function clearNightSkyLoss(
     },
     constants,
   );
+  const outsideFilm = requiredRow<ReferenceRow & { hWPerM2K: number }>(ref, 'surface-coefficients', 'outside-winter');
+  const coverCoolingK = {} as Record<SurfaceGroup, number>;
+  let coverW = 0;
+  for (const group of SURFACE_GROUPS) {
+    const covering = input.coefficients.rows.coverings[group];
+    coverCoolingK[group] = coverSkyCoolingK(
+      covering.outerLongWaveEmissivity ?? 0,
+      input.conditions.designOutdoorC,
+      loss.skyTemperatureC,
+      outsideFilm.hWPerM2K,
+      constants,
+    );
+    coverW += input.coefficients.coveringWPerK[group] * coverCoolingK[group];
+  }
   const [, clearRow, , cropRow, depressionRow] = constants.rows;
   const assumptions: HeatingAssumption[] = [
     assumptionFromRow(
@@ -75,7 +98,22 @@ export function clearNightSkyLoss(
       constants.cropEmissivity,
       'fraction',
     ),
+    assumptionFromRow(
+      { id: 'emissivity', source: String(roof.emissivitySource ?? roof.source), confidence: 'memory' },
+      'sky.roofOuterEmissivity',
+      `Long-wave emissivity of the roof's outer surface (${roof.label})`,
+      roof.outerLongWaveEmissivity ?? 0,
+      'fraction',
+    ),
+    assumptionFromRow(
+      outsideFilm,
+      'sky.roofCoolingK',
+      'How much colder the air seems to the roof under the clear sky',
+      coverCoolingK.roof,
+      'K',
+    ),
   ];
+  const totalW = loss.lossW + coverW;
   const cautions =
     thermalIrTransmittance >= IR_TRANSPARENT_FROM
       ? [
@@ -84,5 +122,5 @@ export function clearNightSkyLoss(
             `loss. An IR-absorbing inner film, or a curtain drawn at night, stops most of it.`,
         ]
       : [];
-  return { loss, thermalIrTransmittance, assumptions, cautions };
+  return { loss, coverCoolingK, coverW, totalW, thermalIrTransmittance, assumptions, cautions };
 }

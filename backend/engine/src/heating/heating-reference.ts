@@ -15,6 +15,8 @@ export interface CoveringRow extends ReferenceRow {
   thermalIrTransmittance: number;
   irSource?: string;
   irConfidence?: Confidence;
+  /** long-wave emissivity of the outer surface (how strongly it radiates to the sky) */
+  outerLongWaveEmissivity: number;
 }
 
 export interface AirLeakageRow extends ReferenceRow {

@@ -13,8 +13,12 @@ import { requiredRow } from './heating-reference';
  * passes thermal infrared to a sky colder than the air:
  *   q = τ_IR × ε_crop × σ × (T_air⁴ − T_sky⁴)   per m² of floor (the crop sees the sky through the roof).
  * Films of ordinary polyethylene pass about half; glass, rigid plastics and IR-absorbing films
- * little, which is why they lose less on clear nights. The covering's own colder outside surface
- * is not modelled separately (it is inside the tabulated U).
+ * little, which is why they lose less on clear nights.
+ *
+ * The covering's outer surface also sees the sky instead of air at T_air: it radiates an extra
+ * ε_o σ (T_air⁴ − T_sky⁴) per m², which the outside film h_o must bring in from the air, so the
+ * covering behaves as if the outdoor air were colder by ΔT = ε_o σ (T_air⁴ − T_sky⁴) / h_o
+ * (`coverSkyCoolingK`): more loss through U, and a colder inside surface that drips sooner.
  */
 
 interface SkyRow extends ReferenceRow {
@@ -124,4 +128,20 @@ export function skyRadiationLoss(input: SkyLossInput, constants: SkyConstants): 
     wPerM2Floor,
     lossW: wPerM2Floor * input.floorAreaM2,
   };
+}
+
+/**
+ * How much colder the outdoor air seems to a covering whose outer surface (emissivity ε_o) sees a
+ * sky at `skyC` instead of air at `outdoorC`, with outside film coefficient h_o: ε_o σ (T_air⁴ − T_sky⁴) / h_o.
+ */
+export function coverSkyCoolingK(
+  outerEmissivity: number,
+  outdoorC: number,
+  skyC: number,
+  outsideFilmWPerM2K: number,
+  constants: SkyConstants,
+): number {
+  const airK = outdoorC + KELVIN_AT_0_C;
+  const skyK = skyC + KELVIN_AT_0_C;
+  return (Math.max(0, outerEmissivity) * constants.stefanBoltzmann * (airK ** 4 - skyK ** 4)) / outsideFilmWPerM2K;
 }
