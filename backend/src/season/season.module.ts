@@ -9,6 +9,8 @@ import { CalendarService } from './calendar.service';
 import { FuelPricesService } from './fuel-prices.service';
 import { FarmFuelPrice } from './models/farm-fuel-price.model';
 import { HouseCalendar } from './models/house-calendar.model';
+import { SavedCalibration } from '../calibration/models/saved-calibration.model';
+import { HeatLossBasisService } from './heat-loss-basis.service';
 import { SeasonBudgetService } from './season-budget.service';
 import { SeasonInputsService } from './season-inputs.service';
 import { SeasonController } from './season.controller';
@@ -18,7 +20,7 @@ import { SunCacheService } from './sun-cache.service';
 /** Season engine over HTTP; brings the temperature-log routes with it (one entry in AppModule). */
 @Module({
   imports: [
-    SequelizeModule.forFeature([FarmFuelPrice, HouseCalendar]),
+    SequelizeModule.forFeature([FarmFuelPrice, HouseCalendar, SavedCalibration]),
     FarmsModule,
     HousesModule,
     AlternativesModule,
@@ -33,7 +35,8 @@ import { SunCacheService } from './sun-cache.service';
     SeasonBudgetService,
     CalendarService,
     FuelPricesService,
+    HeatLossBasisService,
   ],
-  exports: [SeasonService, SeasonInputsService, SunCacheService],
+  exports: [SeasonService, SeasonInputsService, SunCacheService, HeatLossBasisService],
 })
 export class SeasonModule {}
