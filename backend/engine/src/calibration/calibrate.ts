@@ -11,7 +11,7 @@ import {
   variantParameters,
 } from '../season/prepare-season';
 import { validateCalendar, type ProductionCalendar } from '../season/production-calendar';
-import { validateSeasonRange } from '../season/season-hours';
+import { MAX_SEASON_DAYS, validateSeasonRange } from '../season/season-hours';
 import { simulateSeason, type SeasonHours, type SimulationParameters } from '../season/season-simulation';
 import type { LoggedClimateInput, PreparedSeason, SeasonSite, SeasonVariant } from '../season/season-types';
 import { SunCache } from '../season/sun-hours';
@@ -169,29 +169,45 @@ export function calibrateHeatLoss(
     meters.set(key, meter);
   });
 
-  // Lay out each distinct period's hours once (shared by the houses it serves).
-  const preparedSeasons = new Map<string, PreparedSeason>();
-  const prepareHours = (period: CalibrationPeriodInput, house: CalibrationHouseInput, fuel: FuelRow) => {
-    const cacheKey = `${period.startDate}/${period.endDate}/${period.climateFrom}`;
-    let prepared = preparedSeasons.get(cacheKey);
-    if (!prepared || prepared.input.climate !== period.climate) {
-      prepared = prepareSeason(
+  // Lay out the hours once per climate over the span of its bills when that fits in one season
+  // run (a period's own days are then picked out by its setpoints: days outside it are unheated);
+  // otherwise once per period.
+  const preparedByPeriod = new Map<CalibrationPeriodInput, PreparedSeason>();
+  const byClimate = new Map<CalibrationPeriodInput['climate'], CalibrationPeriodInput[]>();
+  for (const period of input.periods) byClimate.set(period.climate, [...(byClimate.get(period.climate) ?? []), period]);
+  for (const [climate, periods] of byClimate) {
+    const startDate = periods.reduce(
+      (first, period) => (period.startDate < first ? period.startDate : first),
+      periods[0].startDate,
+    );
+    const endDate = periods.reduce(
+      (last, period) => (period.endDate > last ? period.endDate : last),
+      periods[0].endDate,
+    );
+    const span = Math.round((Date.parse(endDate) - Date.parse(startDate)) / 86_400_000) + 1;
+    const ranges =
+      span <= MAX_SEASON_DAYS
+        ? [{ startDate, endDate, periods }]
+        : periods.map((period) => ({ ...period, periods: [period] }));
+    for (const range of ranges) {
+      const firstHouse = houses.get(range.periods[0].houseIds[0])!;
+      const fuel = fuelRow(ref, range.periods[0].fuelId);
+      const prepared = prepareSeason(
         {
-          house: house.house,
+          house: firstHouse.house,
           site: input.site,
-          climate: period.climate,
-          season: { startDate: period.startDate, endDate: period.endDate },
-          calendar: house.calendar,
+          climate,
+          season: { startDate: range.startDate, endDate: range.endDate },
+          calendar: firstHouse.calendar,
           fuel: { fuelId: fuel.id, pricePerUnit: 0, priceUnit: 'si' },
-          heaterEfficiency: efficiencyFor(house, fuel),
+          heaterEfficiency: efficiencyFor(firstHouse, fuel),
         },
         ref,
         sunCache,
       );
-      preparedSeasons.set(cacheKey, prepared);
+      for (const period of range.periods) preparedByPeriod.set(period, prepared);
     }
-    return prepared;
-  };
+  }
 
   const meterFits: MeterFit[] = [];
   for (const [key, meter] of meters) {
@@ -202,7 +218,7 @@ export function calibrateHeatLoss(
         const { dayCount } = validateSeasonRange({ startDate: period.startDate, endDate: period.endDate });
         const runs = meter.houseIds.map((houseId) => {
           const house = houses.get(houseId)!;
-          const season = prepareHours(period, house, meter.fuel);
+          const season = preparedByPeriod.get(period)!;
           const efficiency = efficiencyFor(house, meter.fuel);
           const variant: SeasonVariant = {
             house: house.house,
