@@ -330,6 +330,11 @@ describe('fuel records and the calibration against them (e2e)', () => {
       expect(houseA.heatLossFactor).toBeGreaterThan(1.1);
       const handbook = await t.http.post(`/api/farms/${farmId}/season-budget`).set(bearer(grower)).send({}).expect(200);
       expect(handbook.body.heatLossBasis).toBe('handbook');
+      const csv = await t.http
+        .get(`/api/farms/${farmId}/season-budget.csv?units=us&heatLossBasis=calibrated`)
+        .set(bearer(grower))
+        .expect(200);
+      expect(csv.headers['content-disposition']).toMatch(/-as-calibrated-us\.csv"$/);
     });
 
     it('deleting a record takes it out of the list', async () => {

@@ -5108,6 +5108,8 @@ export interface operations {
                 endDate?: string;
                 /** @description use this temperature log instead of the climate normals */
                 temperatureLogId?: number;
+                /** @description 'handbook' (default) or 'calibrated' (see the budget's heatLossBasis); the file name says which */
+                heatLossBasis?: "handbook" | "calibrated";
             };
             header?: never;
             path: {

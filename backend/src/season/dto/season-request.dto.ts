@@ -371,4 +371,12 @@ export class SeasonBudgetCsvQueryDto {
   @IsInt()
   @Min(1)
   temperatureLogId?: number;
+
+  @ApiPropertyOptional({
+    enum: HEAT_LOSS_BASES,
+    description: "'handbook' (default) or 'calibrated' (see the budget's heatLossBasis); the file name says which",
+  })
+  @Omittable()
+  @IsIn(HEAT_LOSS_BASES)
+  heatLossBasis?: HeatLossBasis;
 }

@@ -161,7 +161,7 @@ export function SeasonBudgetSection({ farmId, heatLossBasis }: { farmId: number;
   const exportCsv = useMutation({
     mutationFn: async () => {
       const file = await downloadFile(
-        `/api/farms/${farmId}/season-budget.csv?units=${units.system}`,
+        `/api/farms/${farmId}/season-budget.csv?units=${units.system}${heatLossBasis === 'calibrated' ? '&heatLossBasis=calibrated' : ''}`,
         `season-budget-farm-${farmId}-${units.system}.csv`,
       );
       saveBlob(file.blob, file.fileName);
