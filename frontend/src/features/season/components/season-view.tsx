@@ -161,6 +161,7 @@ export function SeasonView({
         climateSource={climateSource}
         priceFields={priceFields}
         alternativeId={alternative?.id}
+        heatLossBasis={heatLossBasis}
       />
     </Stack>
   );
