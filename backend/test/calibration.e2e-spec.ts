@@ -337,6 +337,33 @@ describe('fuel records and the calibration against them (e2e)', () => {
       expect(csv.headers['content-disposition']).toMatch(/-as-calibrated-us\.csv"$/);
     });
 
+    it('a house changed after the calibration keeps its factor, with a note to run it again', async () => {
+      const path = `/api/houses/${houses.A.id}`;
+      const house = (await t.http.get(path).set(bearer(grower)).expect(200)).body;
+      await t.http
+        .patch(path)
+        .set(bearer(grower))
+        .set(ifMatch(house.version))
+        .send({ setpoints: { ...house.setpoints, nightHeatingC: house.setpoints.nightHeatingC - 1 } })
+        .expect(200);
+      const res = await t.http
+        .post(`/api/farms/${farmId}/season-budget`)
+        .set(bearer(grower))
+        .send({ heatLossBasis: 'calibrated' })
+        .expect(200);
+      expect(res.body.houses.find((h: { houseId: number }) => h.houseId === houses.A.id).heatLossBasis).toBe(
+        'calibrated',
+      );
+      expect(res.body.heatLossBasisStatement).toMatch(/House A – tomatoes changed after the calibration/);
+    });
+
+    it('a deleted house leaves the bills that served it, without it', async () => {
+      await t.http.delete(`/api/houses/${houses.C.id}`).set(bearer(grower)).expect(204);
+      const gas = (await listRecords()).filter((record) => record.quantityUnit === 'therm');
+      expect(gas).toHaveLength(4);
+      for (const record of gas) expect(record.houseIds).toEqual([houses.B.id]);
+    });
+
     it('deleting a record takes it out of the list', async () => {
       await t.http.delete(`/api/fuel-records/${records[4].id}`).set(bearer(adviser)).expect(403);
       await t.http.delete(`/api/fuel-records/${records[4].id}`).set(bearer(grower)).expect(204);

@@ -10,8 +10,11 @@ export class FarmHeatLossBasis {
     private readonly calibration: SavedCalibration | null,
   ) {}
 
-  /** The basis and factor for one house; falls back to the handbook, saying why. */
-  forHouse(houseId: number, houseName: string): HeatLossBasisUsedDto {
+  /**
+   * The basis and factor for one house; falls back to the handbook, saying why. With the house's
+   * current version, a house changed since the calibration keeps its factor with a note.
+   */
+  forHouse(houseId: number, houseName: string, houseVersion?: number): HeatLossBasisUsedDto {
     const handbook = (note: string | null): HeatLossBasisUsedDto => ({
       heatLossBasisRequested: this.requested,
       heatLossBasis: 'handbook',
@@ -32,13 +35,18 @@ export class FarmHeatLossBasis {
         `${houseName} has no calibrated factor (no fitted bills name it), so its figures use the handbook values.`,
       );
     }
+    const calibratedAt = this.calibration.createdAt.toISOString();
+    const snapshot = this.calibration.inputs.houses.find((entry) => entry.id === houseId);
+    const changed = houseVersion !== undefined && snapshot !== undefined && snapshot.version !== houseVersion;
     return {
       heatLossBasisRequested: this.requested,
       heatLossBasis: 'calibrated',
       heatLossFactor: house.factor,
       calibrationId: this.calibration.id,
-      calibratedAt: this.calibration.createdAt.toISOString(),
-      heatLossBasisNote: null,
+      calibratedAt,
+      heatLossBasisNote: changed
+        ? `${houseName} was changed after the calibration of ${calibratedAt.slice(0, 10)}; its factor was fitted to the house as it was. Run the calibration again if the change affects its heat loss.`
+        : null,
     };
   }
 }
@@ -67,7 +75,8 @@ export function budgetBasis(
   used: Array<{ name: string; basis: HeatLossBasisUsedDto }>,
 ): BudgetHeatLossBasisDto {
   const calibrated = used.filter((house) => house.basis.heatLossBasis === 'calibrated');
-  const fellBack = used.filter((house) => house.basis.heatLossBasisNote !== null);
+  const fellBack = used.filter((house) => house.basis.heatLossBasis === 'handbook' && house.basis.heatLossBasisNote);
+  const changed = calibrated.filter((house) => house.basis.heatLossBasisNote);
   const first = used[0]?.basis;
   let statement: string;
   if (basis.requested === 'handbook') {
@@ -82,6 +91,9 @@ export function budgetBasis(
       '.' +
       (fellBack.length > 0
         ? ` ${fellBack.map((house) => house.name).join(', ')} ${fellBack.length === 1 ? 'has' : 'have'} no calibrated factor and stay${fellBack.length === 1 ? 's' : ''} on the handbook values.`
+        : '') +
+      (changed.length > 0
+        ? ` ${changed.map((house) => house.name).join(', ')} changed after the calibration: run it again if the change affects heat loss.`
         : '');
   }
   return {

@@ -44,7 +44,7 @@ export class SeasonBudgetService {
     });
     const ref = this.reference.data;
     const basis = await this.basis.forFarm(farmId, request.heatLossBasis);
-    const basisUsed = rows.map((row) => ({ name: row.name, basis: basis.forHouse(row.id, row.name) }));
+    const basisUsed = rows.map((row) => ({ name: row.name, basis: basis.forHouse(row.id, row.name, row.version) }));
 
     const houses: BudgetHouseDto[] = [];
     const cautions = new Set<string>();

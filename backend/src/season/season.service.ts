@@ -157,7 +157,11 @@ export class SeasonService {
       fuel: choice.fuel,
       heaterEfficiency: choice.heaterEfficiency,
     };
-    const basis = (await this.basis.forFarm(farm.id, body.heatLossBasis)).forHouse(houseId, stored.name);
+    const basis = (await this.basis.forFarm(farm.id, body.heatLossBasis)).forHouse(
+      houseId,
+      stored.name,
+      stored.version,
+    );
     if (basis.heatLossBasis === 'calibrated') input.heatLossFactor = basis.heatLossFactor;
     const inputsUsed: SeasonInputsUsedDto = {
       ...this.inputs.runInputs(context, choice),

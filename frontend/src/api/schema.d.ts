@@ -2266,7 +2266,7 @@ export interface components {
             calibrationId: number | null;
             /** @description when the calibration used was run, ISO 8601 */
             calibratedAt: string | null;
-            /** @description why the handbook was used although calibrated was asked for */
+            /** @description why the handbook was used although calibrated was asked for, or that the house changed after its calibration */
             heatLossBasisNote: string | null;
             startDate: string;
             endDate: string;

@@ -16,7 +16,8 @@ export class HeatLossBasisUsedDto {
   @ApiProperty({
     type: String,
     nullable: true,
-    description: 'why the handbook was used although calibrated was asked for',
+    description:
+      'why the handbook was used although calibrated was asked for, or that the house changed after its calibration',
   })
   heatLossBasisNote: string | null;
 }
