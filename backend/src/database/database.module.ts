@@ -23,6 +23,8 @@ import { TemperatureLog } from '../temperature-logs/models/temperature-log.model
 import { User } from '../users/models/user.model';
 import { WeatherYear } from '../weather/models/weather-year.model';
 import { migrateToLatest } from './migrator';
+import { FuelRecord, FuelRecordHouse } from '../calibration/models/fuel-record.model';
+import { SavedCalibration } from '../calibration/models/saved-calibration.model';
 
 export const MODELS = [
   User,
@@ -35,6 +37,9 @@ export const MODELS = [
   HouseMeasurePlan,
   FarmFuelPrice,
   WeatherYear,
+  FuelRecord,
+  FuelRecordHouse,
+  SavedCalibration,
   LoginAttempt,
   MailSend,
   ReceivedMail,

@@ -11,6 +11,7 @@ import type { SeasonBudgetRequestDto } from './dto/season-request.dto';
 import type { BudgetFuelTotalDto, BudgetHouseDto, BudgetMonthDto, SeasonBudgetDto } from './dto/season-budget.dto';
 import { SeasonInputsService, withRequestFields } from './season-inputs.service';
 import { SunCacheService } from './sun-cache.service';
+import { budgetBasis, HeatLossBasisService } from './heat-loss-basis.service';
 
 /**
  * The farm's season fuel budget: every house's season (its own fuel, heater efficiency and
@@ -26,6 +27,7 @@ export class SeasonBudgetService {
     private readonly inputs: SeasonInputsService,
     private readonly reference: ReferenceDataService,
     private readonly sun: SunCacheService,
+    private readonly basis: HeatLossBasisService,
   ) {}
 
   async budget(user: AuthenticatedUser, farmId: number, request: SeasonBudgetRequestDto): Promise<SeasonBudgetDto> {
@@ -41,16 +43,19 @@ export class SeasonBudgetService {
       ],
     });
     const ref = this.reference.data;
+    const basis = await this.basis.forFarm(farmId, request.heatLossBasis);
+    const basisUsed = rows.map((row) => ({ name: row.name, basis: basis.forHouse(row.id, row.name, row.version) }));
 
     const houses: BudgetHouseDto[] = [];
     const cautions = new Set<string>();
-    for (const row of rows) {
+    for (const [index, row] of rows.entries()) {
       const house = houseToSpec(row);
+      const used = basisUsed[index].basis;
       const calendar = await this.inputs.calendarOf(row.id);
       const heater = house.heaters[0];
       if (!heater) {
         houses.push(
-          emptyHouse(row, calendar?.length ?? 0, 'the house has no heaters, so it burns no fuel in this budget'),
+          emptyHouse(row, calendar?.length ?? 0, 'the house has no heaters, so it burns no fuel in this budget', used),
         );
         continue;
       }
@@ -70,6 +75,7 @@ export class SeasonBudgetService {
             calendar,
             fuel: price,
             heaterEfficiency: heater.efficiency,
+            heatLossFactor: used.heatLossBasis === 'calibrated' ? used.heatLossFactor : undefined,
           },
           ref,
           this.sun.cache,
@@ -79,6 +85,8 @@ export class SeasonBudgetService {
       houses.push({
         houseId: row.id,
         name: row.name,
+        heatLossBasis: used.heatLossBasis,
+        heatLossFactor: used.heatLossFactor,
         fuelId: fuel.id,
         fuelLabel: fuel.label,
         unitSi: fuel.unitSi,
@@ -172,7 +180,10 @@ export class SeasonBudgetService {
     if (!costComplete) notes.push('Some houses have no heaters or no fuel price; their cost is left out of the total.');
     if (houses.length === 0) notes.push('The farm has no houses yet.');
 
+    const basisStatement = budgetBasis(basis, basisUsed);
+    notes.unshift(basisStatement.heatLossBasisStatement);
     return {
+      ...basisStatement,
       farmId,
       startDate: context.season.startDate,
       endDate: context.season.endDate,
@@ -191,10 +202,17 @@ export class SeasonBudgetService {
   }
 }
 
-function emptyHouse(row: House, calendarPeriodCount: number, problem: string): BudgetHouseDto {
+function emptyHouse(
+  row: House,
+  calendarPeriodCount: number,
+  problem: string,
+  used: { heatLossBasis: BudgetHouseDto['heatLossBasis']; heatLossFactor: number },
+): BudgetHouseDto {
   return {
     houseId: row.id,
     name: row.name,
+    heatLossBasis: used.heatLossBasis,
+    heatLossFactor: used.heatLossFactor,
     fuelId: null,
     fuelLabel: null,
     unitSi: null,

@@ -200,8 +200,10 @@ export class SeasonController {
       startDate: query.startDate,
       endDate: query.endDate,
       climateSource: query.temperatureLogId ? { temperatureLogId: query.temperatureLogId } : undefined,
+      heatLossBasis: query.heatLossBasis,
     });
-    const filename = `season-budget-farm-${farmId}-${budget.startDate}-to-${budget.endDate}-${units}.csv`;
+    const basis = budget.heatLossBasis === 'handbook' ? '' : `-as-calibrated`;
+    const filename = `season-budget-farm-${farmId}-${budget.startDate}-to-${budget.endDate}${basis}-${units}.csv`;
     response.setHeader('Content-Disposition', `attachment; filename="${filename}"`);
     return budgetCsv(budget, units);
   }

@@ -12,6 +12,8 @@ import { HouseCalendar } from './models/house-calendar.model';
 import { HouseMeasurePlan } from './models/house-measure-plan.model';
 import { MeasurePlanController } from './measure-plan.controller';
 import { MeasurePlanService } from './measure-plan.service';
+import { SavedCalibration } from '../calibration/models/saved-calibration.model';
+import { HeatLossBasisService } from './heat-loss-basis.service';
 import { SeasonBudgetService } from './season-budget.service';
 import { SeasonInputsService } from './season-inputs.service';
 import { SeasonController } from './season.controller';
@@ -21,7 +23,7 @@ import { SunCacheService } from './sun-cache.service';
 /** Season engine over HTTP; brings the temperature-log routes with it (one entry in AppModule). */
 @Module({
   imports: [
-    SequelizeModule.forFeature([FarmFuelPrice, HouseCalendar, HouseMeasurePlan]),
+    SequelizeModule.forFeature([FarmFuelPrice, HouseCalendar, HouseMeasurePlan, SavedCalibration]),
     FarmsModule,
     HousesModule,
     AlternativesModule,
@@ -37,7 +39,8 @@ import { SunCacheService } from './sun-cache.service';
     CalendarService,
     FuelPricesService,
     MeasurePlanService,
+    HeatLossBasisService,
   ],
-  exports: [SeasonService, SeasonInputsService, SunCacheService],
+  exports: [SeasonService, SeasonInputsService, SunCacheService, HeatLossBasisService],
 })
 export class SeasonModule {}

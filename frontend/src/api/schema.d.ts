@@ -685,6 +685,24 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/houses/{houseId}/measure-plan": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** The measures kept with the house, with their costs (house:read) */
+        get: operations["MeasurePlanController_get"];
+        /** Keep these measures and costs with the house (house:write) */
+        put: operations["MeasurePlanController_put"];
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/houses/{houseId}/alternatives": {
         parameters: {
             query?: never;
@@ -1018,6 +1036,111 @@ export interface paths {
         put?: never;
         /** The house and up to four of its alternatives, each with its design night, summer cooling, season, light and (for an alternative) saving and payback against the house (estimate:run) */
         post: operations["SideBySideController_compare"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/farms/{farmId}/fuel-records": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** The farm's fuel bills and tank deliveries, oldest first (farm:read) */
+        get: operations["FuelRecordsController_list"];
+        put?: never;
+        /** Add a fuel bill or tank delivery (house:write) */
+        post: operations["FuelRecordsController_create"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/fuel-records/{recordId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post?: never;
+        /** Delete a fuel record (house:write) */
+        delete: operations["FuelRecordsController_remove"];
+        options?: never;
+        head?: never;
+        /** Change a fuel record (house:write) */
+        patch: operations["FuelRecordsController_update"];
+        trace?: never;
+    };
+    "/api/farms/{farmId}/fuel-records/inspect": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Read a fuel-record CSV and propose which columns hold what; stores nothing (house:write) */
+        post: operations["FuelRecordsController_inspect"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/farms/{farmId}/fuel-records/upload": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Store every row of a fuel-record CSV read with the confirmed columns; nothing is stored when any row is bad (house:write) */
+        post: operations["FuelRecordsController_upload"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/farms/{farmId}/calibrations": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** The farm's saved calibrations, newest first (the first is the one estimates use) (farm:read) */
+        get: operations["CalibrationController_list"];
+        put?: never;
+        /** Fit each meter's heat-loss factor to the farm's fuel records and save it with its inputs (house:write); run again when new bills arrive */
+        post: operations["CalibrationController_run"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/calibrations/{calibrationId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** One saved calibration (farm:read) */
+        get: operations["CalibrationController_get"];
+        put?: never;
+        post?: never;
         delete?: never;
         options?: never;
         head?: never;
@@ -1995,6 +2118,11 @@ export interface components {
              * @example 2027-05-31
              */
             endDate?: string;
+            /**
+             * @description 'handbook' (default) or 'calibrated': each house's heat-loss coefficient × the factor of the farm's newest calibration against its fuel bills (a house without one stays on the handbook, and the answer says so)
+             * @enum {string}
+             */
+            heatLossBasis?: "handbook" | "calibrated";
         };
         SeasonPeriodDto: {
             /** @description YYYY-MM-DD */
@@ -2154,6 +2282,23 @@ export interface components {
             timeZone: string;
             /** @description the zone's standard-time offset from UTC (daylight saving ignored), h */
             utcOffsetHours: number;
+            /**
+             * @description the basis asked for
+             * @enum {string}
+             */
+            heatLossBasisRequested: "handbook" | "calibrated";
+            /**
+             * @description the basis used (handbook when the house has no calibration)
+             * @enum {string}
+             */
+            heatLossBasis: "handbook" | "calibrated";
+            /** @description multiplier applied to the heat-loss coefficient (1 on the handbook basis) */
+            heatLossFactor: number;
+            calibrationId: number | null;
+            /** @description when the calibration used was run, ISO 8601 */
+            calibratedAt: string | null;
+            /** @description why the handbook was used although calibrated was asked for, or that the house changed after its calibration */
+            heatLossBasisNote: string | null;
             startDate: string;
             endDate: string;
             /** @enum {string} */
@@ -2351,6 +2496,11 @@ export interface components {
              * @example 2027-05-31
              */
             endDate?: string;
+            /**
+             * @description 'handbook' (default) or 'calibrated': each house's heat-loss coefficient × the factor of the farm's newest calibration against its fuel bills (a house without one stays on the handbook, and the answer says so)
+             * @enum {string}
+             */
+            heatLossBasis?: "handbook" | "calibrated";
             /** @description measures to compare; an empty list compares the default measures (reference-data/measures.json) that apply to the house, without costs, so a ranking shows at once */
             measures: components["schemas"]["MeasureDto"][];
         };
@@ -2525,6 +2675,11 @@ export interface components {
             endDate?: string;
             /** @description 'normals' (default: the farm's monthly climate normals) or { temperatureLogId } to use a logged year instead */
             climateSource?: "normals" | components["schemas"]["TemperatureLogClimateSourceDto"];
+            /**
+             * @description 'handbook' (default) or 'calibrated': each house's heat-loss coefficient × the factor of the farm's newest calibration against its fuel bills (a house without one stays on the handbook, and the answer says so)
+             * @enum {string}
+             */
+            heatLossBasis?: "handbook" | "calibrated";
         };
         BudgetMonthOfHouseDto: {
             year: number;
@@ -2543,6 +2698,13 @@ export interface components {
             hoursBelowSetpoint: number;
         };
         BudgetHouseDto: {
+            /**
+             * @description the heat-loss basis this house was estimated on
+             * @enum {string}
+             */
+            heatLossBasis: "handbook" | "calibrated";
+            /** @description multiplier applied to its heat-loss coefficient (1 on the handbook basis) */
+            heatLossFactor: number;
             houseId: number;
             name: string;
             /** @description fuel of the first heater; null when the house has no heaters */
@@ -2609,6 +2771,17 @@ export interface components {
             byFuel: components["schemas"]["BudgetMonthFuelDto"][];
         };
         SeasonBudgetDto: {
+            /** @enum {string} */
+            heatLossBasisRequested: "handbook" | "calibrated";
+            /**
+             * @description mixed: some houses calibrated, the others on the handbook values
+             * @enum {string}
+             */
+            heatLossBasis: "handbook" | "calibrated" | "mixed";
+            calibrationId: number | null;
+            calibratedAt: string | null;
+            /** @description the basis in words, for the page and the report */
+            heatLossBasisStatement: string;
             farmId: number;
             startDate: string;
             endDate: string;
@@ -2630,6 +2803,17 @@ export interface components {
             notes: string[];
             /** @description may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
             cautions: string[];
+        };
+        MeasurePlanDto: {
+            houseId: number;
+            /** @description empty until the first save */
+            measures: components["schemas"]["MeasureDto"][];
+            /** @description raised on every save; 0 before the first */
+            version: number;
+        };
+        PutMeasurePlanDto: {
+            /** @description the measures to keep with the house, each with its settings and cost (null cost = not known yet) */
+            measures: components["schemas"]["MeasureDto"][];
         };
         FieldProblemDto: {
             /**
@@ -3036,6 +3220,11 @@ export interface components {
              * @example 2027-05-31
              */
             endDate?: string;
+            /**
+             * @description 'handbook' (default) or 'calibrated': each house's heat-loss coefficient × the factor of the farm's newest calibration against its fuel bills (a house without one stays on the handbook, and the answer says so)
+             * @enum {string}
+             */
+            heatLossBasis?: "handbook" | "calibrated";
             /** @description ids of the house's alternatives to set beside it, in column order (at most 4) */
             alternativeIds?: number[];
         };
@@ -3117,6 +3306,189 @@ export interface components {
             heatingConditionsUsed: components["schemas"]["HeatingConditionsUsedDto"];
             /** @description the season inputs of the house's column */
             seasonInputsUsed: components["schemas"]["SeasonInputsUsedDto"];
+        };
+        FuelRecordDto: {
+            id: number;
+            farmId: number;
+            fuelId: string;
+            fuelLabel: string;
+            quantity: number;
+            quantityUnit: string;
+            /** @description the energy the quantity holds (higher heat content), kWh */
+            fuelEnergyKWh: number;
+            cost: number | null;
+            startDate: string;
+            endDate: string;
+            days: number;
+            houseIds: number[];
+            nonHeatingPerDay: number | null;
+            note: string | null;
+            version: number;
+        };
+        CreateFuelRecordDto: {
+            /**
+             * @description reference-data fuels id
+             * @example propane
+             */
+            fuelId: string;
+            /** @example 1200 */
+            quantity: number;
+            /**
+             * @description one of the fuel's purchase units: its unitSi or unitUs in reference-data/fuels.json (therm, m³, US gal, L, kWh, short ton, kg)
+             * @example US gal
+             */
+            quantityUnit: string;
+            /** @description money, the farm's currency; null = not entered */
+            cost?: number | null;
+            /**
+             * @description first day the bill covers (for a tank delivery: the day after the previous fill), YYYY-MM-DD
+             * @example 2025-11-01
+             */
+            startDate: string;
+            /**
+             * @description last day the bill covers (inclusive), YYYY-MM-DD; at most 366 days after the start
+             * @example 2025-11-30
+             */
+            endDate: string;
+            /** @description houses the meter or tank serves (houses of this farm) */
+            houseIds: number[];
+            /** @description fuel used for other things than heating the houses (a dryer, washing water), in quantityUnit per day; null = none */
+            nonHeatingPerDay?: number | null;
+            note?: string | null;
+        };
+        UpdateFuelRecordDto: {
+            /**
+             * @description reference-data fuels id
+             * @example propane
+             */
+            fuelId?: string;
+            /** @example 1200 */
+            quantity?: number;
+            /**
+             * @description one of the fuel's purchase units: its unitSi or unitUs in reference-data/fuels.json (therm, m³, US gal, L, kWh, short ton, kg)
+             * @example US gal
+             */
+            quantityUnit?: string;
+            /** @description money, the farm's currency; null = not entered */
+            cost?: number | null;
+            /**
+             * @description first day the bill covers (for a tank delivery: the day after the previous fill), YYYY-MM-DD
+             * @example 2025-11-01
+             */
+            startDate?: string;
+            /**
+             * @description last day the bill covers (inclusive), YYYY-MM-DD; at most 366 days after the start
+             * @example 2025-11-30
+             */
+            endDate?: string;
+            /** @description houses the meter or tank serves (houses of this farm) */
+            houseIds?: number[];
+            /** @description fuel used for other things than heating the houses (a dryer, washing water), in quantityUnit per day; null = none */
+            nonHeatingPerDay?: number | null;
+            note?: string | null;
+        };
+        FuelRecordColumnMappingDto: {
+            /** @description column holding the fuel (id or name); or give fuelId for every row */
+            fuelColumn?: string;
+            /** @description the fuel of every row, when the file has no fuel column */
+            fuelId?: string;
+            quantityColumn: string;
+            /** @description column holding the unit; or give unit for every row */
+            unitColumn?: string;
+            /** @description the unit of every row, when the file has no unit column */
+            unit?: string;
+            costColumn?: string;
+            startColumn: string;
+            endColumn: string;
+            /** @description column holding house names separated by ; or |; or give houseIds for every row */
+            housesColumn?: string;
+            /** @description the houses of every row, when the file has no house column */
+            houseIds?: number[];
+            nonHeatingColumn?: string;
+        };
+        FuelRecordCsvInspectionDto: {
+            columns: string[];
+            /** @description the first rows as read, at most 5 */
+            preview: string[][];
+            /** @description data rows in the file */
+            rowCount: number;
+            /** @description columns guessed from the header; the user confirms or changes them */
+            proposed: components["schemas"]["FuelRecordColumnMappingDto"];
+        };
+        FuelRecordsUploadResultDto: {
+            created: number;
+            records: components["schemas"]["FuelRecordDto"][];
+        };
+        CalibrationPeriodDto: {
+            /** @description the fuel record this period is */
+            recordId: number;
+            startDate: string;
+            endDate: string;
+            days: number;
+            /**
+             * @description where the outdoor temperatures came from
+             * @enum {string}
+             */
+            climateFrom: "temperature-log" | "normals";
+            temperatureLogName: string | null;
+            quantityUnit: string;
+            /** @description billed, in quantityUnit */
+            billedQuantity: number;
+            /** @description modelled with the handbook heat loss, non-heating use included, in quantityUnit */
+            handbookQuantity: number;
+            /** @description modelled with the fitted factor, in quantityUnit */
+            fittedQuantity: number | null;
+            /** @description kWh of fuel energy */
+            billedFuelKWh: number;
+            handbookFuelKWh: number;
+            fittedFuelKWh: number | null;
+            nonHeatingFuelKWh: number;
+            usedInFit: boolean;
+            note: string | null;
+        };
+        CalibrationMeterDto: {
+            /** @description one fuel and one set of houses, e.g. 'propane:3,4' */
+            key: string;
+            fuelId: string;
+            fuelLabel: string;
+            houseIds: number[];
+            houseNames: string[];
+            fitted: boolean;
+            /** @description why no factor was fitted */
+            refusal: string | null;
+            /** @description multiplier on the heat-loss coefficient */
+            factor: number | null;
+            /** @description lower end of the 90 % interval */
+            factorLow90: number | null;
+            factorHigh90: number | null;
+            standardError: number | null;
+            degreesOfFreedom: number | null;
+            /** @description ASHRAE Guideline 14 NMBE, % */
+            nmbePercent: number | null;
+            /** @description ASHRAE Guideline 14 CV(RMSE), % */
+            cvRmsePercent: number | null;
+            /** @description |NMBE| ≤ 5 % and CV(RMSE) ≤ 15 % (monthly limits) */
+            meetsGuideline14: boolean | null;
+            verdict: string;
+            meaning: string;
+            periods: components["schemas"]["CalibrationPeriodDto"][];
+        };
+        CalibrationHouseFactorDto: {
+            houseId: number;
+            name: string;
+            factor: number | null;
+            meterKey: string | null;
+        };
+        CalibrationDto: {
+            id: number;
+            farmId: number;
+            /** @description when the calibration was run, ISO 8601 */
+            createdAt: string;
+            /** @description fuel records the fit ran on */
+            recordCount: number;
+            meters: components["schemas"]["CalibrationMeterDto"][];
+            houses: components["schemas"]["CalibrationHouseFactorDto"][];
+            notes: string[];
         };
     };
     responses: never;
@@ -4806,6 +5178,8 @@ export interface operations {
                 endDate?: string;
                 /** @description use this temperature log instead of the climate normals */
                 temperatureLogId?: number;
+                /** @description 'handbook' (default) or 'calibrated' (see the budget's heatLossBasis); the file name says which */
+                heatLossBasis?: "handbook" | "calibrated";
             };
             header?: never;
             path: {
@@ -4833,6 +5207,98 @@ export interface operations {
             };
             /** @description the engine cannot compute with the input, field named: no climate and no log (climateSource), no fuel price (pricePerUnit), a log that does not cover the dates (climateSource), a season over 366 days (endDate) … */
             422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    MeasurePlanController_get: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                houseId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["MeasurePlanDto"];
+                };
+            };
+            /** @description no such house, or not a member of its farm */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    MeasurePlanController_put: {
+        parameters: {
+            query?: never;
+            header: {
+                "if-match": string;
+                /** @description the `version` of the measure plan you loaded (0 if it has never been saved); every save raises it by one */
+                "If-Match": string;
+            };
+            path: {
+                houseId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["PutMeasurePlanDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["MeasurePlanDto"];
+                };
+            };
+            /** @description body fails validation; details per field */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description role lacks house:write */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no such house, or not a member of its farm */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description someone else saved the measure plan first; `current` holds what is stored now (the same shape as the answer to GET) */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description If-Match missing */
+            428: {
                 headers: {
                     [name: string]: unknown;
                 };
@@ -5719,6 +6185,381 @@ export interface operations {
             };
             /** @description the house's own column cannot be computed (no climate, no fuel price …) or an id is not one of the house's alternatives; field named. An alternative that is not valid now is a column with `invalid`, not an error */
             422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    FuelRecordsController_list: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                farmId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["FuelRecordDto"][];
+                };
+            };
+            /** @description no such farm, or not a member */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    FuelRecordsController_create: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                farmId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["CreateFuelRecordDto"];
+            };
+        };
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["FuelRecordDto"];
+                };
+            };
+            /** @description a bad record or file: details name each row and field ('row 3.endDate') in the user's words; nothing is stored */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description role lacks house:write */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no such farm, or not a member */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    FuelRecordsController_remove: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                recordId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description role lacks house:write */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no such record, or not a member of its farm */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    FuelRecordsController_update: {
+        parameters: {
+            query?: never;
+            header: {
+                "if-match": string;
+                /** @description the `version` of the fuel record you loaded (0 if it has never been saved); every save raises it by one */
+                "If-Match": string;
+            };
+            path: {
+                recordId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["UpdateFuelRecordDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["FuelRecordDto"];
+                };
+            };
+            /** @description a bad record or file: details name each row and field ('row 3.endDate') in the user's words; nothing is stored */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description role lacks house:write */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no such record, or not a member of its farm */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description someone else saved the fuel record first; `current` holds what is stored now (the same shape as the answer to GET) */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description If-Match missing */
+            428: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    FuelRecordsController_inspect: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                farmId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "multipart/form-data": {
+                    /**
+                     * Format: binary
+                     * @description CSV file, UTF-8, at most 256 kB
+                     */
+                    file: string;
+                };
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["FuelRecordCsvInspectionDto"];
+                };
+            };
+            /** @description no file, or the file cannot be read */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description role lacks house:write */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no such farm, or not a member */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    FuelRecordsController_upload: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                farmId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "multipart/form-data": {
+                    /**
+                     * Format: binary
+                     * @description CSV file, UTF-8, at most 256 kB
+                     */
+                    file: string;
+                    /** @description FuelRecordColumnMappingDto as JSON */
+                    mapping: string;
+                };
+            };
+        };
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["FuelRecordsUploadResultDto"];
+                };
+            };
+            /** @description a bad record or file: details name each row and field ('row 3.endDate') in the user's words; nothing is stored */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description role lacks house:write */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no such farm, or not a member */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    CalibrationController_list: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                farmId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["CalibrationDto"][];
+                };
+            };
+            /** @description no such farm, or not a member */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    CalibrationController_run: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                farmId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["CalibrationDto"];
+                };
+            };
+            /** @description role lacks house:write */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no such farm, or not a member */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no factor could be fitted (fewer than three bills with heating per meter, no climate for a bill …); the message says why */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    CalibrationController_get: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                calibrationId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["CalibrationDto"];
+                };
+            };
+            /** @description no such calibration, or not a member of its farm */
+            404: {
                 headers: {
                     [name: string]: unknown;
                 };

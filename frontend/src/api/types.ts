@@ -140,3 +140,14 @@ export type AdoptAlternativeResult = Schemas['AdoptAlternativeResultDto'];
 export type SideBySideRequest = Schemas['SideBySideRequestDto'];
 export type SideBySide = Schemas['SideBySideDto'];
 export type SideBySideColumn = Schemas['SideBySideColumnDto'];
+
+export type FuelRecord = Schemas['FuelRecordDto'];
+export type FuelRecordInput = Schemas['CreateFuelRecordDto'];
+export type FuelRecordUpdate = Schemas['UpdateFuelRecordDto'];
+export type FuelRecordColumnMapping = Schemas['FuelRecordColumnMappingDto'];
+export type FuelRecordCsvInspection = Schemas['FuelRecordCsvInspectionDto'];
+export type FuelRecordsUploadResult = Schemas['FuelRecordsUploadResultDto'];
+export type Calibration = Schemas['CalibrationDto'];
+export type CalibrationMeter = Schemas['CalibrationMeterDto'];
+export type CalibrationPeriod = Schemas['CalibrationPeriodDto'];
+export type HeatLossBasis = NonNullable<Schemas['SeasonRequestDto']['heatLossBasis']>;

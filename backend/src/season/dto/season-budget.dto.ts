@@ -1,4 +1,5 @@
 import { ApiProperty } from '@nestjs/swagger';
+import { BudgetHeatLossBasisDto, HEAT_LOSS_BASES, type HeatLossBasis } from './heat-loss-basis.dto';
 import type { PriceUnit } from '@thermbay/engine/season/fuel';
 import { PRICE_UNITS } from './season-request.dto';
 import { PROSE_TOKENS_NOTE } from '@thermbay/engine/vocabulary';
@@ -18,6 +19,10 @@ export class BudgetMonthOfHouseDto {
 }
 
 export class BudgetHouseDto {
+  @ApiProperty({ enum: HEAT_LOSS_BASES, description: 'the heat-loss basis this house was estimated on' })
+  heatLossBasis: HeatLossBasis;
+  @ApiProperty({ description: 'multiplier applied to its heat-loss coefficient (1 on the handbook basis)' })
+  heatLossFactor: number;
   @ApiProperty() houseId: number;
   @ApiProperty() name: string;
   @ApiProperty({
@@ -88,7 +93,7 @@ export class BudgetMonthDto {
   @ApiProperty({ type: BudgetMonthFuelDto, isArray: true }) byFuel: BudgetMonthFuelDto[];
 }
 
-export class SeasonBudgetDto {
+export class SeasonBudgetDto extends BudgetHeatLossBasisDto {
   @ApiProperty() farmId: number;
   @ApiProperty() startDate: string;
   @ApiProperty() endDate: string;

@@ -1,4 +1,5 @@
-import { ApiProperty } from '@nestjs/swagger';
+import { ApiProperty, IntersectionType } from '@nestjs/swagger';
+import { HeatLossBasisUsedDto } from './heat-loss-basis.dto';
 import type { DegreeDayStep } from '@thermbay/engine/estimate-season';
 import type { PriceUnit } from '@thermbay/engine/season/fuel';
 import {
@@ -187,7 +188,7 @@ export class SeasonRunInputsDto {
   utcOffsetHours: number;
 }
 
-export class SeasonInputsUsedDto extends SeasonRunInputsDto {
+export class SeasonInputsUsedDto extends IntersectionType(SeasonRunInputsDto, HeatLossBasisUsedDto) {
   @ApiProperty() startDate: string;
   @ApiProperty() endDate: string;
   @ApiProperty({ enum: ['request', 'default-heating-season', 'temperature-log'] })

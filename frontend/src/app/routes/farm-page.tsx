@@ -12,6 +12,7 @@ import { ClimateSection } from '../../features/climate';
 import { FuelPricesEditor } from '../../features/fuel-prices';
 import { MembersSection } from '../../features/members';
 import { SeasonBudgetSection } from '../../features/season-budget';
+import { CalibrationBasisSwitch, useHeatLossBasisParam } from '../../features/calibration';
 import { TemperatureLogsSection } from '../../features/temperature-logs';
 import { referenceDataQueryOptions } from '../../lib/reference-data';
 import { useCurrentUser } from '../session';
@@ -43,6 +44,7 @@ export default function FarmPage() {
   const [confirmingDelete, setConfirmingDelete] = useState(false);
   const currentUser = useCurrentUser();
   const referenceData = useQuery(referenceDataQueryOptions());
+  const [heatLossBasis, setHeatLossBasis] = useHeatLossBasisParam();
   const [searchParams, setSearchParams] = useSearchParams();
   const requestedTab = searchParams.get('tab');
   const tab: FarmTab = isFarmTab(requestedTab) ? requestedTab : 'houses';
@@ -122,7 +124,13 @@ export default function FarmPage() {
         ) : null}
         {tab === 'season' ? (
           <Stack spacing={3}>
-            <SeasonBudgetSection farmId={farmId} />
+            <Stack direction="row" spacing={2} useFlexGap sx={{ alignItems: 'center', flexWrap: 'wrap' }}>
+              <CalibrationBasisSwitch farmId={farmId} value={heatLossBasis} onChange={setHeatLossBasis} />
+              <Button component={RouterLink} to={paths.fuelRecords(farmId)}>
+                Fuel bills and calibration
+              </Button>
+            </Stack>
+            <SeasonBudgetSection farmId={farmId} heatLossBasis={heatLossBasis} />
             {referenceData.data ? (
               <FuelPricesEditor
                 farmId={farmId}

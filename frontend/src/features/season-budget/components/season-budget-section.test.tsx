@@ -8,6 +8,8 @@ import { SeasonBudgetSection } from './season-budget-section';
 const propaneHouse = {
   houseId: 1,
   name: 'House A',
+  heatLossBasis: 'handbook' as const,
+  heatLossFactor: 1,
   fuelId: 'propane',
   fuelLabel: 'Propane',
   unitSi: 'L',
@@ -30,6 +32,11 @@ const propaneHouse = {
 };
 
 const budget: SeasonBudget = {
+  heatLossBasisRequested: 'handbook',
+  heatLossBasis: 'handbook',
+  calibrationId: null,
+  calibratedAt: null,
+  heatLossBasisStatement: 'Heat loss from the handbook values (coverings, perimeter and air-leakage class).',
   farmId: 3,
   startDate: '2026-09-01',
   endDate: '2027-05-31',

@@ -19,7 +19,7 @@ import { useTheme } from '@mui/material/styles';
 import { useMutation, useQuery } from '@tanstack/react-query';
 import { Bar } from 'react-chartjs-2';
 import { downloadFile } from '../../../api/client';
-import type { SeasonBudget } from '../../../api/types';
+import type { HeatLossBasis, SeasonBudget } from '../../../api/types';
 import { ErrorAlert, LoadingState } from '../../../components/feedback';
 import '../../../lib/chart';
 import { saveBlob } from '../../../lib/save-blob';
@@ -155,13 +155,13 @@ function BudgetTable({ budget, units }: { budget: SeasonBudget; units: Units }) 
 }
 
 /** The farm's season: fuel and cost of every house, the total, by month, with a CSV export. */
-export function SeasonBudgetSection({ farmId }: { farmId: number }) {
+export function SeasonBudgetSection({ farmId, heatLossBasis }: { farmId: number; heatLossBasis?: HeatLossBasis }) {
   const units = useUnits();
-  const budget = useQuery(seasonBudgetQueryOptions(farmId));
+  const budget = useQuery(seasonBudgetQueryOptions(farmId, heatLossBasis === 'calibrated' ? { heatLossBasis } : {}));
   const exportCsv = useMutation({
     mutationFn: async () => {
       const file = await downloadFile(
-        `/api/farms/${farmId}/season-budget.csv?units=${units.system}`,
+        `/api/farms/${farmId}/season-budget.csv?units=${units.system}${heatLossBasis === 'calibrated' ? '&heatLossBasis=calibrated' : ''}`,
         `season-budget-farm-${farmId}-${units.system}.csv`,
       );
       saveBlob(file.blob, file.fileName);
@@ -194,6 +194,9 @@ export function SeasonBudgetSection({ farmId }: { farmId: number }) {
               farm&apos;s {budget.data.climateSource === 'normals' ? 'climate normals' : 'temperature log'}. Costs are
               in the currency of the fuel prices.
             </Typography>
+            <Typography variant="body2" data-testid="budget-heat-loss-basis">
+              {budget.data.heatLossBasisStatement}
+            </Typography>
             <Stack direction="row" spacing={4} useFlexGap sx={{ flexWrap: 'wrap' }}>
               <Box>
                 <Typography variant="caption" color="text.secondary" component="div">
@@ -222,11 +225,13 @@ export function SeasonBudgetSection({ farmId }: { farmId: number }) {
             <BudgetChart budget={budget.data} units={units} />
             {budget.data.notes.length > 0 ? (
               <Box component="ul" sx={{ m: 0, pl: 2.5 }}>
-                {budget.data.notes.map((note) => (
-                  <Typography component="li" variant="body2" color="text.secondary" key={note}>
-                    {units.prose(note)}
-                  </Typography>
-                ))}
+                {budget.data.notes
+                  .filter((note) => note !== budget.data.heatLossBasisStatement)
+                  .map((note) => (
+                    <Typography component="li" variant="body2" color="text.secondary" key={note}>
+                      {units.prose(note)}
+                    </Typography>
+                  ))}
               </Box>
             ) : null}
             {budget.data.cautions.length > 0 ? (

@@ -38,6 +38,7 @@ export function MeasuresPanel({
   climateSource,
   alternativeId,
   priceFields = {},
+  heatLossBasis,
 }: {
   houseId: number;
   /** a fuel-price what-if of the page (not saved) */
@@ -45,6 +46,8 @@ export function MeasuresPanel({
   climateSource: SeasonRequest['climateSource'];
   /** run for one of the house's alternatives */
   alternativeId?: number;
+  /** 'calibrated': heat loss × the house's factor from the farm's fuel bills */
+  heatLossBasis?: SeasonRequest['heatLossBasis'];
 }) {
   const units = useUnits();
   // [] asks the API for its default measures at cost 0; after that, the user's list and costs.
@@ -57,6 +60,7 @@ export function MeasuresPanel({
       measures: requested,
       climateSource,
       ...(alternativeId ? { alternativeId } : {}),
+      ...(heatLossBasis === 'calibrated' ? { heatLossBasis } : {}),
     }),
     placeholderData: keepPreviousData,
   });

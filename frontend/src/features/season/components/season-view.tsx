@@ -31,10 +31,19 @@ export interface SeasonViewProps {
   logs: ClimateLogOption[];
   /** run the season and the measures for one of the house's alternatives instead of the house */
   alternative?: { id: number; name: string; ownCalendar: boolean } | null;
+  /** 'calibrated': heat loss × the house's factor from the farm's fuel bills */
+  heatLossBasis?: SeasonRequest['heatLossBasis'];
 }
 
 /** The house's heating season: one night, the hourly season beside the degree-day check, the calendar, measures. */
-export function SeasonView({ houseId, canRun, canEditCalendar, logs, alternative = null }: SeasonViewProps) {
+export function SeasonView({
+  houseId,
+  canRun,
+  canEditCalendar,
+  logs,
+  alternative = null,
+  heatLossBasis,
+}: SeasonViewProps) {
   const [climateChoice, setClimateChoice] = useState('normals');
   const climateSource: SeasonRequest['climateSource'] =
     climateChoice === 'normals' ? 'normals' : { temperatureLogId: Number(climateChoice) };
@@ -50,6 +59,7 @@ export function SeasonView({ houseId, canRun, canEditCalendar, logs, alternative
     climateSource,
     ...priceFields,
     ...(alternative ? { alternativeId: alternative.id } : {}),
+    ...(heatLossBasis === 'calibrated' ? { heatLossBasis } : {}),
   };
   const season = useQuery({ ...houseSeasonQueryOptions(houseId, request), enabled: canRun });
   const referenceData = useQuery(referenceDataQueryOptions());
@@ -114,6 +124,9 @@ export function SeasonView({ houseId, canRun, canEditCalendar, logs, alternative
 
       {season.isPending ? <LoadingState label="Computing the season hour by hour…" /> : null}
       <ErrorAlert error={season.error} title="The season could not be computed" />
+      {season.data?.inputsUsed.heatLossBasisNote ? (
+        <Alert severity="info">{season.data.inputsUsed.heatLossBasisNote}</Alert>
+      ) : null}
       {season.data ? (
         <>
           <Grid container spacing={3} sx={{ alignItems: 'stretch' }}>
@@ -148,6 +161,7 @@ export function SeasonView({ houseId, canRun, canEditCalendar, logs, alternative
         climateSource={climateSource}
         priceFields={priceFields}
         alternativeId={alternative?.id}
+        heatLossBasis={heatLossBasis}
       />
     </Stack>
   );
