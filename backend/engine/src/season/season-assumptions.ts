@@ -172,9 +172,9 @@ export function seasonAssumptions(
   list.push({
     key: 'fuel-price',
     label: `Price of ${fuel.label}`,
-    value: variant.fuel.pricePerUnit,
+    value: variant.fuel.pricePerUnit ?? 'not entered yet (no cost computed)',
     unit: `per ${priceUnitLabel(fuel, variant.fuel.priceUnit)}`,
-    source: 'entered by the user',
+    source: variant.fuel.pricePerUnit === null ? 'none' : 'entered by the user',
     confidence: 'user-entered',
     overridden: true,
   });
