@@ -172,8 +172,8 @@ export function seasonAssumptions(
   list.push({
     key: 'fuel-price',
     label: `Price of ${fuel.label}`,
-    value: variant.fuel.pricePerUnit ?? 'not entered yet (no cost computed)',
-    unit: `per ${priceUnitLabel(fuel, variant.fuel.priceUnit)}`,
+    value: variant.fuel.pricePerUnit ?? 'not entered yet, so no cost is computed',
+    unit: variant.fuel.pricePerUnit === null ? '' : `per ${priceUnitLabel(fuel, variant.fuel.priceUnit)}`,
     source: variant.fuel.pricePerUnit === null ? 'none' : 'entered by the user',
     confidence: 'user-entered',
     overridden: true,

@@ -8,3 +8,4 @@ export * from './house-words';
 export * from './quantities';
 export * from './assumption';
 export * from './passwords';
+export * from './currency';

@@ -100,6 +100,7 @@ export class SeasonBudgetDto {
   @ApiProperty({ type: BudgetFuelTotalDto, isArray: true }) byFuel: BudgetFuelTotalDto[];
   @ApiProperty({ description: 'heat delivered to all houses, kWh' }) totalEnergyKWh: number;
   @ApiProperty({ description: 'sum of the priced houses' }) totalCost: number;
+  @ApiProperty({ example: 'USD', description: "the farm's currency (ISO 4217) every amount is in" }) currency: string;
   @ApiProperty({ description: 'false when some house has no price (or no heaters) and is left out of totalCost' })
   costComplete: boolean;
   @ApiProperty({ type: BudgetMonthDto, isArray: true }) monthly: BudgetMonthDto[];
