@@ -107,9 +107,7 @@ export class SeasonBudgetService {
           unmetHeatKWh: month.unmetHeatKWh,
           hoursBelowSetpoint: month.hoursBelowSetpoint,
         })),
-        problem: stored
-          ? null
-          : `No price for ${fuel.label} yet: enter it to include this house's cost`,
+        problem: stored ? null : `No price for ${fuel.label} yet: enter it to include this house's cost`,
       });
     }
 
@@ -144,12 +142,12 @@ export class SeasonBudgetService {
           month: month.month,
           energyKWh: 0,
           fuelInputKWh: 0,
-          cost: 0,
+          cost: null,
           byFuel: [],
         };
         entry.energyKWh += month.energyKWh;
         entry.fuelInputKWh += month.fuelInputKWh;
-        entry.cost += month.cost ?? 0;
+        if (month.cost !== null) entry.cost = (entry.cost ?? 0) + month.cost;
         let fuelEntry = entry.byFuel.find((item) => item.fuelId === house.fuelId);
         if (!fuelEntry) {
           fuelEntry = { fuelId: house.fuelId, fuelQuantitySi: 0, fuelQuantityUs: 0 };
@@ -182,7 +180,9 @@ export class SeasonBudgetService {
       houses,
       byFuel: [...byFuel.values()],
       totalEnergyKWh: houses.reduce((sum, house) => sum + house.energyKWh, 0),
-      totalCost: houses.reduce((sum, house) => sum + (house.cost ?? 0), 0),
+      totalCost: houses.some((house) => house.cost !== null)
+        ? houses.reduce((sum, house) => sum + (house.cost ?? 0), 0)
+        : null,
       currency: farm.currency,
       costComplete,
       monthly: [...monthly.values()].sort((a, b) => a.year - b.year || a.month - b.month),

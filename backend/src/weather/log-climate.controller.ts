@@ -14,7 +14,8 @@ export class LogClimateController {
   @Get()
   @ApiOkResponse({
     type: LogClimateProposalDto,
-    description: "design temperatures and monthly normals from a year or more of the farm's hourly log (nothing is saved)",
+    description:
+      "design temperatures and monthly normals from a year or more of the farm's hourly log (nothing is saved)",
   })
   @ApiUnprocessableEntityResponse({
     description: 'the log is daily, covers less than a year of hours, or has more than 10 % of its hours missing',

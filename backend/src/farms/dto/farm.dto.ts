@@ -91,7 +91,8 @@ export class FarmDto {
   @ApiProperty() longitudeDeg: number;
   @ApiProperty() elevationM: number;
   @ApiProperty() timeZone: string;
-  @ApiProperty({ example: 'USD', description: 'ISO 4217 code every amount of the farm is written in' }) currency: string;
+  @ApiProperty({ example: 'USD', description: 'ISO 4217 code every amount of the farm is written in' })
+  currency: string;
   @ApiProperty({ enum: FARM_ROLES }) myRole: FarmRole;
   @ApiProperty({ enum: PERMISSIONS, isArray: true }) permissions: Permission[];
   @ApiProperty() houseCount: number;

@@ -111,6 +111,14 @@ export class DegreeDayStepDto {
   @ApiProperty({ description: 'change from the previous step, kWh' }) changeKWh: number;
 }
 
+export class ConventionalBaseCheckDto extends SeasonFuelAmountDto {
+  @ApiProperty({ description: '18.333 °C (65 °F)' }) baseTemperatureC: number;
+  @ApiProperty({ description: 'degree-days of the heated days to that base, K·day' }) degreeDaysKDay: number;
+  @ApiProperty({ description: '°F·day' }) degreeDaysFDay: number;
+  @ApiProperty({ description: `why the setpoint base is the one for a greenhouse; ${PROSE_TOKENS_NOTE}` }) note: string;
+  @ApiProperty() source: string;
+}
+
 export class DegreeDayCrossCheckDto extends SeasonFuelAmountDto {
   @ApiProperty({ description: `the base each heated day is counted to; ${PROSE_TOKENS_NOTE}` }) baseDescription: string;
   @ApiProperty({ type: Number, nullable: true, description: 'the base when it is the same all season, else null, °C' })
@@ -132,18 +140,10 @@ export class DegreeDayCrossCheckDto extends SeasonFuelAmountDto {
   steps: DegreeDayStepDto[];
   @ApiProperty({ type: String, isArray: true, description: PROSE_TOKENS_NOTE }) explanation: string[];
   @ApiProperty({
-    type: () => ConventionalBaseCheckDto,
+    type: ConventionalBaseCheckDto,
     description: 'the same method to the conventional 65 °F (18.3 °C) base, beside the setpoint base',
   })
   conventionalBase: ConventionalBaseCheckDto;
-}
-
-export class ConventionalBaseCheckDto extends SeasonFuelAmountDto {
-  @ApiProperty({ description: '18.333 °C (65 °F)' }) baseTemperatureC: number;
-  @ApiProperty({ description: 'degree-days of the heated days to that base, K·day' }) degreeDaysKDay: number;
-  @ApiProperty({ description: '°F·day' }) degreeDaysFDay: number;
-  @ApiProperty({ description: `why the setpoint base is the one for a greenhouse; ${PROSE_TOKENS_NOTE}` }) note: string;
-  @ApiProperty() source: string;
 }
 
 export class SeasonAssumptionDto {
