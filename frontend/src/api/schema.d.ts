@@ -1214,10 +1214,9 @@ export interface components {
             timeZone: string;
             /**
              * @description ISO 4217 code every amount of the farm is written in (default USD)
-             * @default USD
              * @example EUR
              */
-            currency: string;
+            currency?: string;
         };
         UpdateFarmDto: {
             /** @example North Ridge Produce */
@@ -1232,10 +1231,9 @@ export interface components {
             timeZone?: string;
             /**
              * @description ISO 4217 code every amount of the farm is written in (default USD)
-             * @default USD
              * @example EUR
              */
-            currency: string;
+            currency?: string;
         };
         MemberDto: {
             userId: number;

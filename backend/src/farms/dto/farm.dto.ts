@@ -11,7 +11,7 @@ import {
   type ValidatorConstraintInterface,
 } from 'class-validator';
 import { FARM_ROLES, PERMISSIONS, type FarmRole, type Permission } from '../../common/permissions';
-import { BOUNDS, DEFAULT_CURRENCY, isCurrencyCode } from '@thermbay/engine/vocabulary';
+import { BOUNDS, isCurrencyCode } from '@thermbay/engine/vocabulary';
 import { Omittable } from '../../common/validation';
 
 @ValidatorConstraint({ name: 'ianaTimeZone' })
@@ -74,7 +74,6 @@ export class CreateFarmDto {
   @ApiProperty({
     required: false,
     example: 'EUR',
-    default: DEFAULT_CURRENCY,
     description: 'ISO 4217 code every amount of the farm is written in (default USD)',
   })
   @Omittable()

@@ -9,7 +9,7 @@ import { paths } from '../../config/paths';
 import { farmAllows, farmDetailQueryOptions, FarmFormDialog, FarmSummary, useDeleteFarm } from '../../features/farms';
 import { farmHousesQueryOptions, HousesTable } from '../../features/houses';
 import { ClimateSection } from '../../features/climate';
-import { FuelPricesEditor } from '../../features/fuel-prices';
+import { FuelPricesEditor, MissingPriceForm } from '../../features/fuel-prices';
 import { MembersSection } from '../../features/members';
 import { SeasonBudgetSection } from '../../features/season-budget';
 import { TemperatureLogsSection } from '../../features/temperature-logs';
@@ -122,10 +122,21 @@ export default function FarmPage() {
         ) : null}
         {tab === 'season' ? (
           <Stack spacing={3}>
-            <SeasonBudgetSection farmId={farmId} />
+            <SeasonBudgetSection
+              farmId={farmId}
+              renderMissingPrice={(fuel) => (
+                <MissingPriceForm
+                  farmId={farmId}
+                  fuel={fuel}
+                  currency={farm.data.currency}
+                  canEdit={farmAllows(farm.data, 'house:write')}
+                />
+              )}
+            />
             {referenceData.data ? (
               <FuelPricesEditor
                 farmId={farmId}
+                currency={farm.data.currency}
                 referenceData={referenceData.data}
                 canEdit={farmAllows(farm.data, 'house:write')}
               />

@@ -70,6 +70,7 @@ export function MeasuresPanel({
     setRows((current) => current?.map((row, at) => (at === index ? { ...row, cost } : row)) ?? null);
   const result = comparison.data;
   const baselineFuel = result?.baseline;
+  const currency = result?.inputsUsed.currency ?? '';
 
   return (
     <Paper component="section" aria-labelledby="measures-heading" sx={{ p: 2 }}>
@@ -100,8 +101,10 @@ export function MeasuresPanel({
           <>
             {baselineFuel ? (
               <Typography variant="body2">
-                As it is, the house burns {units.fuel(baselineFuel, baselineFuel)} a season, costing{' '}
-                {units.money(baselineFuel.cost, 0)}.
+                As it is, the house burns {units.fuel(baselineFuel, baselineFuel)} a season
+                {baselineFuel.cost === null
+                  ? ' (no fuel price yet, so savings are in fuel and heat only).'
+                  : `, costing ${units.money(baselineFuel.cost, currency, 0)}.`}
               </Typography>
             ) : null}
             <TableContainer>
@@ -158,14 +161,14 @@ export function MeasuresPanel({
                           ) : measure.costAmount === null ? (
                             '—'
                           ) : (
-                            units.money(measure.costAmount, 0)
+                            units.money(measure.costAmount, currency, 0)
                           )}
                         </TableCell>
                         {measure.applicable ? (
                           <>
                             <TableCell align="right">
-                              {units.money(measure.yearlyMoneySaved, 0)}
-                              {measure.yearlyMoneySaved < 0 ? (
+                              {units.money(measure.yearlyMoneySaved, currency, 0)}
+                              {measure.yearlyMoneySaved !== null && measure.yearlyMoneySaved < 0 ? (
                                 <Typography variant="caption" color="warning.main" component="div">
                                   costs more to run
                                 </Typography>
