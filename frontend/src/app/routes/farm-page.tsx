@@ -12,7 +12,7 @@ import { ClimateSection } from '../../features/climate';
 import { FuelPricesEditor, MissingPriceForm } from '../../features/fuel-prices';
 import { MembersSection } from '../../features/members';
 import { SeasonBudgetSection } from '../../features/season-budget';
-import { TemperatureLogsSection } from '../../features/temperature-logs';
+import { farmTemperatureLogsQueryOptions, TemperatureLogsSection } from '../../features/temperature-logs';
 import { referenceDataQueryOptions } from '../../lib/reference-data';
 import { useCurrentUser } from '../session';
 import { farmReportsQueryOptions, ReportLinks } from '../../features/reports';
@@ -46,6 +46,7 @@ export default function FarmPage() {
   const [searchParams, setSearchParams] = useSearchParams();
   const requestedTab = searchParams.get('tab');
   const tab: FarmTab = isFarmTab(requestedTab) ? requestedTab : 'houses';
+  const logs = useQuery({ ...farmTemperatureLogsQueryOptions(farmId), enabled: tab === 'climate' });
   const openTab = (next: FarmTab) =>
     setSearchParams(next === 'houses' ? {} : { tab: next }, { replace: true, preventScrollReset: true });
 
@@ -116,7 +117,9 @@ export default function FarmPage() {
             <HousesTable houses={houses.data ?? []} loading={houses.isPending} />
           </Stack>
         ) : null}
-        {tab === 'climate' ? <ClimateSection farmId={farmId} canEdit={farmAllows(farm.data, 'house:write')} /> : null}
+        {tab === 'climate' ? (
+          <ClimateSection farmId={farmId} canEdit={farmAllows(farm.data, 'house:write')} logs={logs.data ?? []} />
+        ) : null}
         {tab === 'temperature-logs' ? (
           <TemperatureLogsSection farmId={farmId} canEdit={farmAllows(farm.data, 'house:write')} />
         ) : null}
