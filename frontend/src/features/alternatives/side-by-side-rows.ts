@@ -106,15 +106,7 @@ export function sideBySideRows(data: SideBySide, units: Units): SideBySideRow[] 
   const money = { currency: data.seasonInputsUsed.currency };
 
   rows.push(
-    numericRow(
-      'cost',
-      'Cost',
-      'Installed cost',
-      columns,
-      (c) => (c.alternativeId ? c.costAmount : null),
-      units,
-      money,
-    ),
+    numericRow('cost', 'Cost', 'Installed cost', columns, (c) => (c.alternativeId ? c.costAmount : null), units, money),
   );
 
   // design night

@@ -63,7 +63,9 @@ export function AlternativesSection({
                     <>
                       {alt.changedFields.length > 0 ? `Changes ${alt.changedFields.join(', ')}` : 'No field changes'}
                       {alt.calendar ? ', own calendar' : ''}
-                      {alt.costAmount !== null ? ` · cost ${units.money(alt.costAmount, currency, 0)}` : ' · no cost entered'}
+                      {alt.costAmount !== null
+                        ? ` · cost ${units.money(alt.costAmount, currency, 0)}`
+                        : ' · no cost entered'}
                       {alt.createdByName ? ` · by ${alt.createdByName}` : ''}
                     </>
                   }

@@ -54,7 +54,8 @@ describe('LogClimateDialog', () => {
           {
             statusCode: 422,
             error: 'Unprocessable Entity',
-            message: 'design temperatures need a whole year of hours (365 days, 8,760 hourly readings); this log covers about 31 days',
+            message:
+              'design temperatures need a whole year of hours (365 days, 8,760 hourly readings); this log covers about 31 days',
             field: 'readings',
           },
           422,

@@ -92,8 +92,7 @@ export function LogClimateDialog({ farmId, logs, open, current, onClose, onSave 
           <Typography variant="body2">
             From a log of at least a year of hourly readings, Thermbay works out the heating design temperature (the
             value 99.6 % or 99 % of the hours stay at or above), the cooling design temperature (0.4 % or 1 % of the
-            hours at or above) and each month&apos;s mean daily minimum and maximum. Nothing is saved until you
-            confirm.
+            hours at or above) and each month&apos;s mean daily minimum and maximum. Nothing is saved until you confirm.
           </Typography>
           {logs.length === 0 ? (
             <Typography variant="body2" color="text.secondary">

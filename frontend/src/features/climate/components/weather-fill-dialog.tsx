@@ -95,7 +95,6 @@ export function WeatherFillDialog({ farmId, open, current, onClose, onSave }: We
     }
   };
 
-
   return (
     <Dialog open={open} onClose={busy ? undefined : close} maxWidth="md" fullWidth aria-labelledby="weather-fill-title">
       <DialogTitle id="weather-fill-title">Fill the climate from weather history</DialogTitle>

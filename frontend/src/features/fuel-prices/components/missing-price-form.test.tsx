@@ -11,7 +11,14 @@ const gasOnly: FarmFuelPrices = {
   farmId: 7,
   version: 3,
   prices: [
-    { fuelId: 'natural-gas', fuelLabel: 'Natural gas', pricePerUnit: 0.5, priceUnit: 'si', priceUnitLabel: 'm³', note: 'bill' },
+    {
+      fuelId: 'natural-gas',
+      fuelLabel: 'Natural gas',
+      pricePerUnit: 0.5,
+      priceUnit: 'si',
+      priceUnitLabel: 'm³',
+      note: 'bill',
+    },
   ],
 };
 
