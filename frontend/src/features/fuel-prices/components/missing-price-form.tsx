@@ -99,7 +99,7 @@ export function MissingPriceForm({ farmId, fuel, currency, canEdit }: MissingPri
             onBlur={() => setTouched(true)}
             error={touched && 'problem' in parsed}
             helperText={touched && 'problem' in parsed ? parsed.problem : `In ${currency}`}
-            sx={{ maxWidth: 260 }}
+            sx={{ width: { xs: '100%', sm: 260 } }}
             slotProps={{
               htmlInput: { inputMode: 'decimal' },
               input: {
@@ -114,7 +114,7 @@ export function MissingPriceForm({ farmId, fuel, currency, canEdit }: MissingPri
               label="Priced per"
               value={priceUnit}
               onChange={(event) => setPriceUnit(event.target.value as PriceUnit)}
-              sx={{ minWidth: 140 }}
+              sx={{ width: { xs: '100%', sm: 160 } }}
               slotProps={{ htmlInput: { 'aria-label': `Unit the price of ${fuel.label} is per` } }}
             >
               {ownFirst.map((unit) => (
@@ -124,7 +124,12 @@ export function MissingPriceForm({ farmId, fuel, currency, canEdit }: MissingPri
               ))}
             </TextField>
           ) : null}
-          <Button type="submit" variant="contained" disabled={save.isPending || !prices.data} sx={{ mt: { sm: 1 } }}>
+          <Button
+            type="submit"
+            variant="contained"
+            disabled={save.isPending || !prices.data}
+            sx={{ mt: { sm: 1 }, whiteSpace: 'nowrap', flexShrink: 0 }}
+          >
             Save price
           </Button>
         </Stack>

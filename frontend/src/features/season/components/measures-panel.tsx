@@ -79,8 +79,8 @@ export function MeasuresPanel({
           Energy measures ranked by payback
         </Typography>
         <Typography variant="body2" color="text.secondary">
-          Enter what each measure would cost (installed, in the currency of your fuel prices), then rank them. Each is
-          compared alone against the house as it is.
+          Enter what each measure would cost (installed, in the farm&apos;s currency), then rank them. Each is compared
+          alone against the house as it is.
         </Typography>
         {comparison.isPending ? <LoadingState label="Comparing measures (each re-runs the season)…" /> : null}
         <ErrorAlert error={comparison.error} title="The measures could not be compared" />
