@@ -4525,7 +4525,7 @@ export interface operations {
                 };
                 content?: never;
             };
-            /** @description the engine cannot compute with the input, field named: no climate and no log (climateSource), no fuel price (pricePerUnit), a log that does not cover the dates (climateSource), a season over 366 days (endDate) … */
+            /** @description the engine cannot compute with the input, field named: no climate and no log (climateSource), a house without heaters (fuelId), a log that does not cover the dates (climateSource), a season over 366 days (endDate) …; a missing fuel price is no error (heat and fuel, costs null) */
             422: {
                 headers: {
                     [name: string]: unknown;
@@ -4578,7 +4578,7 @@ export interface operations {
                 };
                 content?: never;
             };
-            /** @description the engine cannot compute with the input, field named: no climate and no log (climateSource), no fuel price (pricePerUnit), a log that does not cover the dates (climateSource), a season over 366 days (endDate) … */
+            /** @description the engine cannot compute with the input, field named: no climate and no log (climateSource), a house without heaters (fuelId), a log that does not cover the dates (climateSource), a season over 366 days (endDate) …; a missing fuel price is no error (heat and fuel, costs null) */
             422: {
                 headers: {
                     [name: string]: unknown;
@@ -4631,7 +4631,7 @@ export interface operations {
                 };
                 content?: never;
             };
-            /** @description the engine cannot compute with the input, field named: no climate and no log (climateSource), no fuel price (pricePerUnit), a log that does not cover the dates (climateSource), a season over 366 days (endDate) …; measures[i].field for a measure's settings */
+            /** @description the engine cannot compute with the input, field named: no climate and no log (climateSource), a house without heaters (fuelId), a log that does not cover the dates (climateSource), a season over 366 days (endDate) …; a missing fuel price is no error (heat and fuel, costs null); measures[i].field for a measure's settings */
             422: {
                 headers: {
                     [name: string]: unknown;
@@ -4875,7 +4875,7 @@ export interface operations {
                 };
                 content?: never;
             };
-            /** @description the engine cannot compute with the input, field named: no climate and no log (climateSource), no fuel price (pricePerUnit), a log that does not cover the dates (climateSource), a season over 366 days (endDate) … */
+            /** @description the engine cannot compute with the input, field named: no climate and no log (climateSource), a house without heaters (fuelId), a log that does not cover the dates (climateSource), a season over 366 days (endDate) …; a missing fuel price is no error (heat and fuel, costs null) */
             422: {
                 headers: {
                     [name: string]: unknown;
@@ -4918,7 +4918,7 @@ export interface operations {
                 };
                 content?: never;
             };
-            /** @description the engine cannot compute with the input, field named: no climate and no log (climateSource), no fuel price (pricePerUnit), a log that does not cover the dates (climateSource), a season over 366 days (endDate) … */
+            /** @description the engine cannot compute with the input, field named: no climate and no log (climateSource), a house without heaters (fuelId), a log that does not cover the dates (climateSource), a season over 366 days (endDate) …; a missing fuel price is no error (heat and fuel, costs null) */
             422: {
                 headers: {
                     [name: string]: unknown;
