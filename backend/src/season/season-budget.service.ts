@@ -61,10 +61,10 @@ export class SeasonBudgetService {
       }
       const stored = prices.get(heater.fuelId);
       const fuel = fuelRow(ref, heater.fuelId, `houses.${row.id}.heaters.0.fuelId`);
-      // Without a price the quantities are still worth showing; the cost is left empty.
+      // Without a price the quantities are still worth showing; the engine leaves the cost empty.
       const price = stored
         ? { fuelId: heater.fuelId, pricePerUnit: stored.pricePerUnit, priceUnit: stored.priceUnit }
-        : { fuelId: heater.fuelId, pricePerUnit: 0, priceUnit: 'si' as const };
+        : { fuelId: heater.fuelId, pricePerUnit: null, priceUnit: 'si' as const };
       const estimate = withRequestFields(() =>
         estimateSeason(
           {
@@ -98,7 +98,7 @@ export class SeasonBudgetService {
         fuelInputKWh: estimate.total.fuelInputKWh,
         fuelQuantitySi: estimate.total.fuelQuantitySi,
         fuelQuantityUs: estimate.total.fuelQuantityUs,
-        cost: stored ? estimate.total.cost : null,
+        cost: estimate.total.cost,
         unmetHeatKWh: estimate.total.unmetHeatKWh,
         hoursBelowSetpoint: estimate.total.hoursBelowSetpoint,
         capacityCaution: estimate.heaterCapacity.caution,
@@ -111,13 +111,11 @@ export class SeasonBudgetService {
           fuelInputKWh: month.fuelInputKWh,
           fuelQuantitySi: month.fuelQuantitySi,
           fuelQuantityUs: month.fuelQuantityUs,
-          cost: stored ? month.cost : null,
+          cost: month.cost,
           unmetHeatKWh: month.unmetHeatKWh,
           hoursBelowSetpoint: month.hoursBelowSetpoint,
         })),
-        problem: stored
-          ? null
-          : `the farm has no price for ${fuel.label}: set it in the farm's fuel prices to include this house's cost`,
+        problem: stored ? null : `No price for ${fuel.label} yet: enter it to include this house's cost`,
       });
     }
 
@@ -152,12 +150,12 @@ export class SeasonBudgetService {
           month: month.month,
           energyKWh: 0,
           fuelInputKWh: 0,
-          cost: 0,
+          cost: null,
           byFuel: [],
         };
         entry.energyKWh += month.energyKWh;
         entry.fuelInputKWh += month.fuelInputKWh;
-        entry.cost += month.cost ?? 0;
+        if (month.cost !== null) entry.cost = (entry.cost ?? 0) + month.cost;
         let fuelEntry = entry.byFuel.find((item) => item.fuelId === house.fuelId);
         if (!fuelEntry) {
           fuelEntry = { fuelId: house.fuelId, fuelQuantitySi: 0, fuelQuantityUs: 0 };
@@ -193,7 +191,10 @@ export class SeasonBudgetService {
       houses,
       byFuel: [...byFuel.values()],
       totalEnergyKWh: houses.reduce((sum, house) => sum + house.energyKWh, 0),
-      totalCost: houses.reduce((sum, house) => sum + (house.cost ?? 0), 0),
+      totalCost: houses.some((house) => house.cost !== null)
+        ? houses.reduce((sum, house) => sum + (house.cost ?? 0), 0)
+        : null,
+      currency: farm.currency,
       costComplete,
       monthly: [...monthly.values()].sort((a, b) => a.year - b.year || a.month - b.month),
       notes,

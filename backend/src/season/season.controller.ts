@@ -34,7 +34,7 @@ import { SeasonBudgetService } from './season-budget.service';
 import { SeasonService } from './season.service';
 
 const SEASON_422 =
-  'the engine cannot compute with the input, field named: no climate and no log (climateSource), no fuel price (pricePerUnit), a log that does not cover the dates (climateSource), a season over 366 days (endDate) …';
+  'the engine cannot compute with the input, field named: no climate and no log (climateSource), a house without heaters (fuelId), a log that does not cover the dates (climateSource), a season over 366 days (endDate) …; a missing fuel price is no error (heat and fuel, costs null)';
 
 /** Season calculations compute and store nothing, so they answer 200, not 201. */
 @ApiTags('season')

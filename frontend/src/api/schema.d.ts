@@ -891,6 +891,22 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/farms/{farmId}/temperature-logs/{logId}/climate-proposal": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["LogClimateController_proposal"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/houses/{houseId}/reports": {
         parameters: {
             query?: never;
@@ -1294,6 +1310,11 @@ export interface components {
             longitudeDeg: number;
             elevationM: number;
             timeZone: string;
+            /**
+             * @description ISO 4217 code every amount of the farm is written in
+             * @example USD
+             */
+            currency: string;
             /** @enum {string} */
             myRole: "owner" | "grower" | "adviser" | "viewer";
             permissions: ("farm:read" | "farm:update" | "farm:delete" | "members:manage" | "house:read" | "house:write" | "alternative:write" | "estimate:run" | "report:write")[];
@@ -1314,6 +1335,11 @@ export interface components {
             elevationM: number;
             /** @example America/Chicago */
             timeZone: string;
+            /**
+             * @description ISO 4217 code every amount of the farm is written in (default USD)
+             * @example EUR
+             */
+            currency?: string;
         };
         UpdateFarmDto: {
             /** @example North Ridge Produce */
@@ -1326,6 +1352,11 @@ export interface components {
             elevationM?: number;
             /** @example America/Chicago */
             timeZone?: string;
+            /**
+             * @description ISO 4217 code every amount of the farm is written in (default USD)
+             * @example EUR
+             */
+            currency?: string;
         };
         MemberDto: {
             userId: number;
@@ -2140,7 +2171,8 @@ export interface components {
             unitSi: string;
             /** @example US gal */
             unitUs: string;
-            pricePerUnit: number;
+            /** @description null when no price is known */
+            pricePerUnit: number | null;
             /** @enum {string} */
             priceUnit: "si" | "us";
             /** @description the unit the price is per, e.g. 'US gal' */
@@ -2165,8 +2197,8 @@ export interface components {
             fuelQuantitySi: number;
             /** @description fuel in its US purchase unit (the fuel's unitUs) */
             fuelQuantityUs: number;
-            /** @description money, in the currency of the price */
-            cost: number;
+            /** @description money, in the farm's currency; null when no fuel price is known (heat and fuel are still given) */
+            cost: number | null;
             year: number;
             month: number;
             /** @description heated hours with any heat demand */
@@ -2189,8 +2221,8 @@ export interface components {
             fuelQuantitySi: number;
             /** @description fuel in its US purchase unit (the fuel's unitUs) */
             fuelQuantityUs: number;
-            /** @description money, in the currency of the price */
-            cost: number;
+            /** @description money, in the farm's currency; null when no fuel price is known (heat and fuel are still given) */
+            cost: number | null;
             heatingHours: number;
             /** @description heat the installed heaters could not deliver, kWh */
             unmetHeatKWh: number;
@@ -2222,6 +2254,27 @@ export interface components {
             /** @description change from the previous step, kWh */
             changeKWh: number;
         };
+        ConventionalBaseCheckDto: {
+            /** @description heat delivered to the house, kWh */
+            energyKWh: number;
+            /** @description heat content of the fuel burnt (energy ÷ efficiency), kWh */
+            fuelInputKWh: number;
+            /** @description fuel in its SI purchase unit (the fuel's unitSi) */
+            fuelQuantitySi: number;
+            /** @description fuel in its US purchase unit (the fuel's unitUs) */
+            fuelQuantityUs: number;
+            /** @description money, in the farm's currency; null when no fuel price is known (heat and fuel are still given) */
+            cost: number | null;
+            /** @description 18.333 °C (65 °F) */
+            baseTemperatureC: number;
+            /** @description degree-days of the heated days to that base, K·day */
+            degreeDaysKDay: number;
+            /** @description °F·day */
+            degreeDaysFDay: number;
+            /** @description why the setpoint base is the one for a greenhouse; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
+            note: string;
+            source: string;
+        };
         DegreeDayCrossCheckDto: {
             /** @description heat delivered to the house, kWh */
             energyKWh: number;
@@ -2231,8 +2284,8 @@ export interface components {
             fuelQuantitySi: number;
             /** @description fuel in its US purchase unit (the fuel's unitUs) */
             fuelQuantityUs: number;
-            /** @description money, in the currency of the price */
-            cost: number;
+            /** @description money, in the farm's currency; null when no fuel price is known (heat and fuel are still given) */
+            cost: number | null;
             /** @description the base each heated day is counted to; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
             baseDescription: string;
             /** @description the base when it is the same all season, else null, °C */
@@ -2249,6 +2302,8 @@ export interface components {
             steps: components["schemas"]["DegreeDayStepDto"][];
             /** @description may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
             explanation: string[];
+            /** @description the same method to the conventional 65 °F (18.3 °C) base, beside the setpoint base */
+            conventionalBase: components["schemas"]["ConventionalBaseCheckDto"];
         };
         SeasonAssumptionDto: {
             key: string;
@@ -2270,11 +2325,20 @@ export interface components {
             fuelId: string;
             /** @enum {string} */
             fuelFrom: "request" | "house-heater";
-            pricePerUnit: number;
+            /** @description null when the farm has no price for the fuel and the request gave none */
+            pricePerUnit: number | null;
             /** @enum {string} */
             priceUnit: "si" | "us";
-            /** @enum {string} */
-            priceFrom: "request" | "farm-fuel-prices";
+            /**
+             * @description 'none': no price yet, so heat and fuel are given and every cost is null
+             * @enum {string}
+             */
+            priceFrom: "request" | "farm-fuel-prices" | "none";
+            /**
+             * @description the farm's currency (ISO 4217) every amount is in
+             * @example USD
+             */
+            currency: string;
             heaterEfficiency: number;
             /** @enum {string} */
             heaterEfficiencyFrom: "request" | "house-heater";
@@ -2371,11 +2435,20 @@ export interface components {
             fuelId: string;
             /** @enum {string} */
             fuelFrom: "request" | "house-heater";
-            pricePerUnit: number;
+            /** @description null when the farm has no price for the fuel and the request gave none */
+            pricePerUnit: number | null;
             /** @enum {string} */
             priceUnit: "si" | "us";
-            /** @enum {string} */
-            priceFrom: "request" | "farm-fuel-prices";
+            /**
+             * @description 'none': no price yet, so heat and fuel are given and every cost is null
+             * @enum {string}
+             */
+            priceFrom: "request" | "farm-fuel-prices" | "none";
+            /**
+             * @description the farm's currency (ISO 4217) every amount is in
+             * @example USD
+             */
+            currency: string;
             heaterEfficiency: number;
             /** @enum {string} */
             heaterEfficiencyFrom: "request" | "house-heater";
@@ -2393,8 +2466,8 @@ export interface components {
             fuelQuantitySi: number;
             /** @description fuel in its US purchase unit (the fuel's unitUs) */
             fuelQuantityUs: number;
-            /** @description money, in the currency of the price */
-            cost: number;
+            /** @description money, in the farm's currency; null when no fuel price is known (heat and fuel are still given) */
+            cost: number | null;
             houseId: number;
             /** @description the evening the night begins, YYYY-MM-DD */
             date: string;
@@ -2513,8 +2586,8 @@ export interface components {
             fuelQuantitySi: number;
             /** @description fuel in its US purchase unit (the fuel's unitUs) */
             fuelQuantityUs: number;
-            /** @description money, in the currency of the price */
-            cost: number;
+            /** @description money, in the farm's currency; null when no fuel price is known (heat and fuel are still given) */
+            cost: number | null;
             fuelId: string;
             unitSi: string;
             unitUs: string;
@@ -2557,17 +2630,17 @@ export interface components {
             fuelSavedSi: number | null;
             /** @description in the baseline fuel's unitUs */
             fuelSavedUs: number | null;
-            /** @description money saved per season (= per year with one season a year); negative when it costs more to run */
-            yearlyMoneySaved: number;
+            /** @description money saved per season (= per year with one season a year); negative when it costs more to run; null without a fuel price */
+            yearlyMoneySaved: number | null;
             /**
-             * @description 'years': cost ÷ saving; 'immediate': cost 0 and a saving; 'enter-cost': a saving but no cost entered; 'never': no money saved; 'not-applicable': changes nothing for this house
+             * @description 'years': cost ÷ saving; 'immediate': cost 0 and a saving; 'enter-cost': a saving but no cost entered; 'enter-price': fuel saved but no fuel price known; 'never': no money saved; 'not-applicable': changes nothing for this house
              * @enum {string}
              */
-            paybackStatus: "years" | "immediate" | "enter-cost" | "never" | "not-applicable";
+            paybackStatus: "years" | "immediate" | "enter-cost" | "enter-price" | "never" | "not-applicable";
             /** @description cost ÷ yearly money saved, years (0 when 'immediate'); null for the other statuses */
             paybackYears: number | null;
             /**
-             * @description '2.4 years', 'immediately', 'enter a cost', 'never' or 'not applicable'
+             * @description '2.4 years', 'immediately', 'enter a cost', 'enter the fuel price', 'never' or 'not applicable'
              * @example 2.4 years
              */
             paybackText: string;
@@ -2766,8 +2839,8 @@ export interface components {
             energyKWh: number;
             /** @description kWh */
             fuelInputKWh: number;
-            /** @description cost of the priced fuels */
-            cost: number;
+            /** @description cost of the houses with a price; null when no house of the month has one */
+            cost: number | null;
             byFuel: components["schemas"]["BudgetMonthFuelDto"][];
         };
         SeasonBudgetDto: {
@@ -2794,8 +2867,13 @@ export interface components {
             byFuel: components["schemas"]["BudgetFuelTotalDto"][];
             /** @description heat delivered to all houses, kWh */
             totalEnergyKWh: number;
-            /** @description sum of the priced houses */
-            totalCost: number;
+            /** @description sum of the priced houses; null when no house has a price */
+            totalCost: number | null;
+            /**
+             * @description the farm's currency (ISO 4217) every amount is in
+             * @example USD
+             */
+            currency: string;
             /** @description false when some house has no price (or no heaters) and is left out of totalCost */
             costComplete: boolean;
             monthly: components["schemas"]["BudgetMonthDto"][];
@@ -3084,6 +3162,56 @@ export interface components {
             proposedClimate: components["schemas"]["SiteClimateDto"];
             currentClimate: components["schemas"]["SiteClimateDto"] | null;
         };
+        LogProposedClimateDto: {
+            /** @description heating design dry bulb (99 % or 99.6 %), °C */
+            winterDesignC: number;
+            /** @description cooling design dry bulb (1 %), °C */
+            summerDesignC: number;
+            /** @description mean daily range on the summer design day, K */
+            summerDailyRangeK: number;
+            /** @description exactly 12 rows, one per month */
+            monthly: components["schemas"]["MonthlyClimateDto"][];
+            /** @description where the numbers came from (e.g. national climate normals, station name) */
+            sourceNote?: string | null;
+            /** @description winter design wind speed, m/s; null: the 6.7 m/s (15 mph) the U tables assume (reference-data/wind.json) */
+            designWindSpeedMPerS?: number | null;
+            /** @description the farm's current coincident wet bulb (a temperature log has no humidity); null when it has none */
+            summerDesignWetBulbC: number | null;
+        };
+        LogClimateProposalDto: {
+            farmId: number;
+            temperatureLogId: number;
+            temperatureLogName: string;
+            /** @description first hour of the log, local standard time 'YYYY-MM-DDTHH:00' */
+            firstHour: string;
+            /** @description last hour of the log, local standard time */
+            lastHour: string;
+            /** @description hours from the first to the last */
+            hourCount: number;
+            /** @description hours with a reading (the percentiles are over these) */
+            hoursUsed: number;
+            /** @description dry bulb that 99.6 % of the hours are at or above, °C */
+            winterDesign996C: number;
+            /** @description dry bulb that 99 % of the hours are at or above, °C */
+            winterDesign99C: number;
+            /** @description dry bulb that 0.4 % of the hours are at or above, °C */
+            summerDesign04C: number;
+            /** @description dry bulb that 1 % of the hours are at or above, °C */
+            summerDesign1C: number;
+            /** @description always null: a temperature log has no humidity */
+            summerCoincidentWetBulb04C: number | null;
+            /** @description always null: a temperature log has no humidity */
+            summerCoincidentWetBulb1C: number | null;
+            /** @description mean daily range of the warmest month, K */
+            summerDailyRangeK: number;
+            /** @description clearness is null (no sunshine logged) */
+            monthly: components["schemas"]["MonthlyFromWeatherDto"][];
+            /** @description what would be saved (99.6 % heating, 1 % cooling) */
+            proposedClimate: components["schemas"]["LogProposedClimateDto"];
+            currentClimate: components["schemas"]["SiteClimateDto"] | null;
+            /** @description how the values were worked out, in words */
+            notes: string[];
+        };
         CreateReportDto: {
             /** @example Heater sizing, north house */
             title: string;
@@ -3258,8 +3386,8 @@ export interface components {
             changeFromHouse: number;
         };
         VersusHouseDto: {
-            /** @description the house's season cost − this column's, money a year (positive = saves) */
-            yearlySaving: number;
+            /** @description the house's season cost − this column's, money a year (positive = saves); null without a fuel price */
+            yearlySaving: number | null;
             /** @description heat delivered, house − this column, kWh a season */
             heatSavedKWh: number;
             /** @description heat content of the fuel burnt, house − this column, kWh a season */
@@ -3269,10 +3397,10 @@ export interface components {
             /** @description cost ÷ yearly saving, years */
             paybackYears: number | null;
             /**
-             * @description 'enter-cost' when no cost is entered; 'never' when it saves nothing
+             * @description 'enter-cost' when no cost is entered; 'enter-price' when the farm has no price for the fuel; 'never' when it saves nothing
              * @enum {string}
              */
-            paybackStatus: "years" | "immediate" | "enter-cost" | "never";
+            paybackStatus: "years" | "immediate" | "enter-cost" | "enter-price" | "never";
         };
         SideBySideColumnDto: {
             /**
@@ -4810,7 +4938,7 @@ export interface operations {
                 };
                 content?: never;
             };
-            /** @description the engine cannot compute with the input, field named: no climate and no log (climateSource), no fuel price (pricePerUnit), a log that does not cover the dates (climateSource), a season over 366 days (endDate) … */
+            /** @description the engine cannot compute with the input, field named: no climate and no log (climateSource), a house without heaters (fuelId), a log that does not cover the dates (climateSource), a season over 366 days (endDate) …; a missing fuel price is no error (heat and fuel, costs null) */
             422: {
                 headers: {
                     [name: string]: unknown;
@@ -4863,7 +4991,7 @@ export interface operations {
                 };
                 content?: never;
             };
-            /** @description the engine cannot compute with the input, field named: no climate and no log (climateSource), no fuel price (pricePerUnit), a log that does not cover the dates (climateSource), a season over 366 days (endDate) … */
+            /** @description the engine cannot compute with the input, field named: no climate and no log (climateSource), a house without heaters (fuelId), a log that does not cover the dates (climateSource), a season over 366 days (endDate) …; a missing fuel price is no error (heat and fuel, costs null) */
             422: {
                 headers: {
                     [name: string]: unknown;
@@ -4916,7 +5044,7 @@ export interface operations {
                 };
                 content?: never;
             };
-            /** @description the engine cannot compute with the input, field named: no climate and no log (climateSource), no fuel price (pricePerUnit), a log that does not cover the dates (climateSource), a season over 366 days (endDate) …; measures[i].field for a measure's settings */
+            /** @description the engine cannot compute with the input, field named: no climate and no log (climateSource), a house without heaters (fuelId), a log that does not cover the dates (climateSource), a season over 366 days (endDate) …; a missing fuel price is no error (heat and fuel, costs null); measures[i].field for a measure's settings */
             422: {
                 headers: {
                     [name: string]: unknown;
@@ -5160,7 +5288,7 @@ export interface operations {
                 };
                 content?: never;
             };
-            /** @description the engine cannot compute with the input, field named: no climate and no log (climateSource), no fuel price (pricePerUnit), a log that does not cover the dates (climateSource), a season over 366 days (endDate) … */
+            /** @description the engine cannot compute with the input, field named: no climate and no log (climateSource), a house without heaters (fuelId), a log that does not cover the dates (climateSource), a season over 366 days (endDate) …; a missing fuel price is no error (heat and fuel, costs null) */
             422: {
                 headers: {
                     [name: string]: unknown;
@@ -5205,7 +5333,7 @@ export interface operations {
                 };
                 content?: never;
             };
-            /** @description the engine cannot compute with the input, field named: no climate and no log (climateSource), no fuel price (pricePerUnit), a log that does not cover the dates (climateSource), a season over 366 days (endDate) … */
+            /** @description the engine cannot compute with the input, field named: no climate and no log (climateSource), a house without heaters (fuelId), a log that does not cover the dates (climateSource), a season over 366 days (endDate) …; a missing fuel price is no error (heat and fuel, costs null) */
             422: {
                 headers: {
                     [name: string]: unknown;
@@ -5906,6 +6034,36 @@ export interface operations {
             };
             /** @description the weather service could not be reached or answered garbage */
             502: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    LogClimateController_proposal: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                farmId: number;
+                logId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description design temperatures and monthly normals from a year or more of the farm's hourly log (nothing is saved) */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["LogClimateProposalDto"];
+                };
+            };
+            /** @description the log is daily, covers less than a year of hours, or has more than 10 % of its hours missing */
+            422: {
                 headers: {
                     [name: string]: unknown;
                 };

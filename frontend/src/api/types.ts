@@ -111,6 +111,7 @@ export type MeasureResult = Schemas['MeasureResultDto'];
 export type WeatherSource = Schemas['WeatherSourceDto'];
 export type WeatherYearStatus = Schemas['WeatherYearStatusDto'];
 export type ClimateProposal = Schemas['ClimateProposalDto'];
+export type LogClimateProposal = Schemas['LogClimateProposalDto'];
 
 export type ReceivedMail = Schemas['ReceivedMailDto'];
 export type ReceivedAttachment = Schemas['ReceivedAttachmentDto'];

@@ -184,9 +184,9 @@ export function seasonAssumptions(
   list.push({
     key: 'fuel-price',
     label: `Price of ${fuel.label}`,
-    value: variant.fuel.pricePerUnit,
-    unit: `per ${priceUnitLabel(fuel, variant.fuel.priceUnit)}`,
-    source: 'entered by the user',
+    value: variant.fuel.pricePerUnit ?? 'not entered yet, so no cost is computed',
+    unit: variant.fuel.pricePerUnit === null ? '' : `per ${priceUnitLabel(fuel, variant.fuel.priceUnit)}`,
+    source: variant.fuel.pricePerUnit === null ? 'none' : 'entered by the user',
     confidence: 'user-entered',
     overridden: true,
   });

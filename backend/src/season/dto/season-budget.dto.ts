@@ -89,7 +89,12 @@ export class BudgetMonthDto {
   @ApiProperty({ minimum: 1, maximum: 12 }) month: number;
   @ApiProperty({ description: 'heat delivered to all houses, kWh' }) energyKWh: number;
   @ApiProperty({ description: 'kWh' }) fuelInputKWh: number;
-  @ApiProperty({ description: 'cost of the priced fuels' }) cost: number;
+  @ApiProperty({
+    type: Number,
+    nullable: true,
+    description: 'cost of the houses with a price; null when no house of the month has one',
+  })
+  cost: number | null;
   @ApiProperty({ type: BudgetMonthFuelDto, isArray: true }) byFuel: BudgetMonthFuelDto[];
 }
 
@@ -104,7 +109,13 @@ export class SeasonBudgetDto extends BudgetHeatLossBasisDto {
   @ApiProperty({ type: BudgetHouseDto, isArray: true }) houses: BudgetHouseDto[];
   @ApiProperty({ type: BudgetFuelTotalDto, isArray: true }) byFuel: BudgetFuelTotalDto[];
   @ApiProperty({ description: 'heat delivered to all houses, kWh' }) totalEnergyKWh: number;
-  @ApiProperty({ description: 'sum of the priced houses' }) totalCost: number;
+  @ApiProperty({
+    type: Number,
+    nullable: true,
+    description: 'sum of the priced houses; null when no house has a price',
+  })
+  totalCost: number | null;
+  @ApiProperty({ example: 'USD', description: "the farm's currency (ISO 4217) every amount is in" }) currency: string;
   @ApiProperty({ description: 'false when some house has no price (or no heaters) and is left out of totalCost' })
   costComplete: boolean;
   @ApiProperty({ type: BudgetMonthDto, isArray: true }) monthly: BudgetMonthDto[];

@@ -68,6 +68,7 @@ export default function FuelRecordsPage() {
             fuels={fuels}
             houses={houseList}
             canEdit={canEdit}
+            currency={farm.data.currency}
           />
           {canEdit ? <FuelRecordsUpload farmId={farmId} fuels={fuels} houses={houseList} /> : null}
         </Stack>

@@ -6,6 +6,7 @@ import { paths } from '../../config/paths';
 import { houseAlternativesQueryOptions } from '../../features/alternatives';
 import { farmAllows, farmDetailQueryOptions } from '../../features/farms';
 import { houseDetailQueryOptions } from '../../features/houses';
+import { MissingPriceForm } from '../../features/fuel-prices';
 import { SeasonView } from '../../features/season';
 import { CalibrationBasisSwitch, useHeatLossBasisParam } from '../../features/calibration';
 import { farmTemperatureLogsQueryOptions } from '../../features/temperature-logs';
@@ -79,6 +80,14 @@ export default function HouseSeasonPage() {
         canRun={farmAllows(farm.data, 'estimate:run')}
         canEditCalendar={farmAllows(farm.data, 'house:write')}
         logs={logs.data ?? []}
+        renderMissingPrice={(fuel) => (
+          <MissingPriceForm
+            farmId={farm.data.id}
+            fuel={fuel}
+            currency={farm.data.currency}
+            canEdit={farmAllows(farm.data, 'house:write')}
+          />
+        )}
       />
     </Stack>
   );

@@ -69,7 +69,7 @@ function stubApi(initial: Alternative[]) {
 
 function renderSection(rights: { canWrite: boolean; canAdopt: boolean; canRun: boolean }) {
   const onAdopted = vi.fn();
-  renderWithProviders(<AlternativesSection houseId={HOUSE_ID} onAdopted={onAdopted} {...rights} />);
+  renderWithProviders(<AlternativesSection houseId={HOUSE_ID} currency="USD" onAdopted={onAdopted} {...rights} />);
   return { onAdopted, section: screen.getByRole('region', { name: 'Alternatives' }) };
 }
 

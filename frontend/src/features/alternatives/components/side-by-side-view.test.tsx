@@ -100,6 +100,7 @@ const data = {
   houseId: demoHouseB.id,
   houseName: demoHouseB.name,
   columns: [houseColumn, doublePoly, lowRidge],
+  seasonInputsUsed: { currency: 'USD' },
 } as unknown as SideBySide;
 
 /** The cells of the row headed `label`, in column order. */
@@ -138,8 +139,8 @@ describe('SideBySideView', () => {
       `${si.format('power', doublePolyHeating.heatLoss.totalW)}−${si.format('power', saved)} vs house`,
       '—',
     ]);
-    expect(rowCells('Installed cost')).toEqual(['—', `${si.money(4_200, 0)}`, '—']);
-    expect(rowCells('Yearly saving')[1]).toBe(si.money(3_000, 0));
+    expect(rowCells('Installed cost')).toEqual(['—', `${si.money(4_200, 'USD', 0)}`, '—']);
+    expect(rowCells('Yearly saving')[1]).toBe(si.money(3_000, 'USD', 0));
     expect(rowCells('Simple payback')).toEqual(['—', '1.4 years', '—']);
     // the warning words of the engine's results reach the table
     expect(rowCells('Heaters on the design night')).toEqual(['short', doublePolyHeating.heater.verdict, '—']);

@@ -39,6 +39,8 @@ export interface FuelRecordsGridProps {
   fuels: FuelOption[];
   houses: Array<{ id: number; name: string }>;
   canEdit: boolean;
+  /** the farm's currency (ISO 4217) for the cost column */
+  currency: string;
 }
 
 /** A problem found before sending, shown above the table. */
@@ -103,7 +105,7 @@ function UnitEditCell({ id, field, value, fuels }: GridRenderEditCellParams & { 
 }
 
 /** The farm's fuel bills and deliveries, edited row by row in the table. */
-export function FuelRecordsGrid({ farmId, records, loading, fuels, houses, canEdit }: FuelRecordsGridProps) {
+export function FuelRecordsGrid({ farmId, records, loading, fuels, houses, canEdit, currency }: FuelRecordsGridProps) {
   const units = useUnits();
   const create = useCreateFuelRecord(farmId);
   const update = useUpdateFuelRecord(farmId);
@@ -160,7 +162,7 @@ export function FuelRecordsGrid({ farmId, records, loading, fuels, houses, canEd
         value === null || value === undefined
           ? '—'
           : field === 'cost'
-            ? units.money(value)
+            ? units.money(value, currency)
             : new Intl.NumberFormat('en-US', { maximumFractionDigits: 2 }).format(value),
       valueParser: (value: unknown) => parseCellNumber(value),
     }) satisfies GridColDef<FuelRecordRow>;

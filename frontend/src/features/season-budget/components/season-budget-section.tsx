@@ -17,6 +17,7 @@ import {
 } from '@mui/material';
 import { useTheme } from '@mui/material/styles';
 import { useMutation, useQuery } from '@tanstack/react-query';
+import type { ReactNode } from 'react';
 import { Bar } from 'react-chartjs-2';
 import { downloadFile } from '../../../api/client';
 import type { HeatLossBasis, SeasonBudget } from '../../../api/types';
@@ -64,7 +65,12 @@ function BudgetChart({ budget, units }: { budget: SeasonBudget; units: Units }) 
           animation: false,
           plugins: { legend: { position: 'bottom' } },
           scales: {
-            cost: { type: 'linear', position: 'left', title: { display: true, text: 'Cost' }, beginAtZero: true },
+            cost: {
+              type: 'linear',
+              position: 'left',
+              title: { display: true, text: `Cost (${budget.currency})` },
+              beginAtZero: true,
+            },
             heat: {
               type: 'linear',
               position: 'right',
@@ -79,7 +85,31 @@ function BudgetChart({ budget, units }: { budget: SeasonBudget; units: Units }) 
   );
 }
 
+/** Fuels burnt by some house that the farm has no price for, once each. */
+export function unpricedFuels(budget: SeasonBudget): MissingPriceFuel[] {
+  const fuels = new Map<string, MissingPriceFuel>();
+  for (const house of budget.houses) {
+    if (house.fuelId && house.pricePerUnit === null && house.unitSi && house.unitUs) {
+      fuels.set(house.fuelId, {
+        fuelId: house.fuelId,
+        label: house.fuelLabel ?? house.fuelId,
+        unitSi: house.unitSi,
+        unitUs: house.unitUs,
+      });
+    }
+  }
+  return [...fuels.values()];
+}
+
+export interface MissingPriceFuel {
+  fuelId: string;
+  label: string;
+  unitSi: string;
+  unitUs: string;
+}
+
 function BudgetTable({ budget, units }: { budget: SeasonBudget; units: Units }) {
+  const currency = budget.currency;
   return (
     <TableContainer>
       <Table size="small" aria-label="Season fuel budget per house">
@@ -90,7 +120,7 @@ function BudgetTable({ budget, units }: { budget: SeasonBudget; units: Units }) 
             <TableCell align="right">Heated days</TableCell>
             <TableCell align="right">Heat delivered</TableCell>
             <TableCell align="right">Fuel</TableCell>
-            <TableCell align="right">Cost</TableCell>
+            <TableCell align="right">Cost ({currency})</TableCell>
           </TableRow>
         </TableHead>
         <TableBody>
@@ -121,7 +151,7 @@ function BudgetTable({ budget, units }: { budget: SeasonBudget; units: Units }) 
               <TableCell align="right">
                 {house.unitSi && house.unitUs ? units.fuel(house, { unitSi: house.unitSi, unitUs: house.unitUs }) : '—'}
               </TableCell>
-              <TableCell align="right">{units.money(house.cost, 0)}</TableCell>
+              <TableCell align="right">{units.money(house.cost, currency, 0)}</TableCell>
             </TableRow>
           ))}
         </TableBody>
@@ -133,7 +163,7 @@ function BudgetTable({ budget, units }: { budget: SeasonBudget; units: Units }) 
               </TableCell>
               <TableCell align="right">{units.format('energyKWh', fuel.energyKWh)}</TableCell>
               <TableCell align="right">{units.fuel(fuel, fuel)}</TableCell>
-              <TableCell align="right">{units.money(fuel.cost, 0)}</TableCell>
+              <TableCell align="right">{units.money(fuel.cost, currency, 0)}</TableCell>
             </TableRow>
           ))}
           <TableRow>
@@ -145,7 +175,7 @@ function BudgetTable({ budget, units }: { budget: SeasonBudget; units: Units }) 
             </TableCell>
             <TableCell />
             <TableCell align="right" sx={{ fontWeight: 700, color: 'text.primary' }} aria-label="Farm total cost">
-              {units.money(budget.totalCost, 0)}
+              {units.money(budget.totalCost, currency, 0)}
             </TableCell>
           </TableRow>
         </TableFooter>
@@ -155,7 +185,16 @@ function BudgetTable({ budget, units }: { budget: SeasonBudget; units: Units }) 
 }
 
 /** The farm's season: fuel and cost of every house, the total, by month, with a CSV export. */
-export function SeasonBudgetSection({ farmId, heatLossBasis }: { farmId: number; heatLossBasis?: HeatLossBasis }) {
+export function SeasonBudgetSection({
+  farmId,
+  heatLossBasis,
+  renderMissingPrice,
+}: {
+  farmId: number;
+  heatLossBasis?: HeatLossBasis;
+  /** asks for the farm's price of a fuel it has none for (the page supplies the form) */
+  renderMissingPrice?: (fuel: MissingPriceFuel) => ReactNode;
+}) {
   const units = useUnits();
   const budget = useQuery(seasonBudgetQueryOptions(farmId, heatLossBasis === 'calibrated' ? { heatLossBasis } : {}));
   const exportCsv = useMutation({
@@ -192,7 +231,7 @@ export function SeasonBudgetSection({ farmId, heatLossBasis }: { farmId: number;
             <Typography variant="body2" color="text.secondary">
               {budget.data.startDate} to {budget.data.endDate} ({SEASON_FROM[budget.data.seasonFrom]}), from the
               farm&apos;s {budget.data.climateSource === 'normals' ? 'climate normals' : 'temperature log'}. Costs are
-              in the currency of the fuel prices.
+              in {budget.data.currency}.
             </Typography>
             <Typography variant="body2" data-testid="budget-heat-loss-basis">
               {budget.data.heatLossBasisStatement}
@@ -203,7 +242,9 @@ export function SeasonBudgetSection({ farmId, heatLossBasis }: { farmId: number;
                   Season cost, all houses
                 </Typography>
                 <Typography variant="h3" component="p" data-testid="farm-season-cost">
-                  {units.money(budget.data.totalCost, 0)}
+                  {budget.data.totalCost === null
+                    ? 'needs fuel prices'
+                    : units.money(budget.data.totalCost, budget.data.currency, 0)}
                 </Typography>
               </Box>
               <Box>
@@ -217,10 +258,13 @@ export function SeasonBudgetSection({ farmId, heatLossBasis }: { farmId: number;
             </Stack>
             {!budget.data.costComplete ? (
               <Alert severity="warning">
-                Some houses have no fuel price or no heaters and are left out of the total cost. Enter the missing
-                prices under Fuel prices.
+                Some houses have no fuel price or no heaters and are left out of the total cost; their heat and fuel are
+                shown.
               </Alert>
             ) : null}
+            {unpricedFuels(budget.data).map((fuel) => (
+              <Box key={fuel.fuelId}>{renderMissingPrice?.(fuel)}</Box>
+            ))}
             <BudgetTable budget={budget.data} units={units} />
             <BudgetChart budget={budget.data} units={units} />
             {budget.data.notes.length > 0 ? (

@@ -74,6 +74,7 @@ export function MeasuresPanel({
     setRows((current) => current?.map((row, at) => (at === index ? { ...row, cost } : row)) ?? null);
   const result = comparison.data;
   const baselineFuel = result?.baseline;
+  const currency = result?.inputsUsed.currency ?? '';
 
   return (
     <Paper component="section" aria-labelledby="measures-heading" sx={{ p: 2 }}>
@@ -82,8 +83,8 @@ export function MeasuresPanel({
           Energy measures ranked by payback
         </Typography>
         <Typography variant="body2" color="text.secondary">
-          Enter what each measure would cost (installed, in the currency of your fuel prices), then rank them. Each is
-          compared alone against the house as it is.
+          Enter what each measure would cost (installed, in the farm&apos;s currency), then rank them. Each is compared
+          alone against the house as it is.
         </Typography>
         {comparison.isPending ? <LoadingState label="Comparing measures (each re-runs the season)…" /> : null}
         <ErrorAlert error={comparison.error} title="The measures could not be compared" />
@@ -104,8 +105,10 @@ export function MeasuresPanel({
           <>
             {baselineFuel ? (
               <Typography variant="body2">
-                As it is, the house burns {units.fuel(baselineFuel, baselineFuel)} a season, costing{' '}
-                {units.money(baselineFuel.cost, 0)}.
+                As it is, the house burns {units.fuel(baselineFuel, baselineFuel)} a season
+                {baselineFuel.cost === null
+                  ? ' (no fuel price yet, so savings are in fuel and heat only).'
+                  : `, costing ${units.money(baselineFuel.cost, currency, 0)}.`}
               </Typography>
             ) : null}
             <TableContainer>
@@ -162,14 +165,14 @@ export function MeasuresPanel({
                           ) : measure.costAmount === null ? (
                             '—'
                           ) : (
-                            units.money(measure.costAmount, 0)
+                            units.money(measure.costAmount, currency, 0)
                           )}
                         </TableCell>
                         {measure.applicable ? (
                           <>
                             <TableCell align="right">
-                              {units.money(measure.yearlyMoneySaved, 0)}
-                              {measure.yearlyMoneySaved < 0 ? (
+                              {units.money(measure.yearlyMoneySaved, currency, 0)}
+                              {measure.yearlyMoneySaved !== null && measure.yearlyMoneySaved < 0 ? (
                                 <Typography variant="caption" color="warning.main" component="div">
                                   costs more to run
                                 </Typography>
