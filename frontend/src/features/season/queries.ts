@@ -2,6 +2,7 @@ import { queryOptions } from '@tanstack/react-query';
 import { api } from '../../api/client';
 import type {
   MeasureComparison,
+  MeasurePlan,
   MeasuresRequest,
   HouseNightDemand,
   HouseSeasonEstimate,
@@ -9,7 +10,7 @@ import type {
   ProductionCalendar,
   SeasonRequest,
 } from '../../api/types';
-import { seasonKeys } from '../../api/query-keys';
+import { measurePlanKeys, seasonKeys } from '../../api/query-keys';
 
 /**
  * Season results are computed on request and stored nowhere: POST reads cached like queries.
@@ -42,4 +43,11 @@ export const measuresQueryOptions = (houseId: number, request: MeasuresRequest) 
     queryKey: seasonKeys.measures(houseId, request),
     queryFn: ({ signal }) => api.post<MeasureComparison>(`/api/houses/${houseId}/measures`, request, { signal }),
     staleTime: 0, // the house, climate, prices or calendar may change elsewhere; a rerun is quick
+  });
+
+/** The measures and costs kept with the house (empty at version 0 before the first save). */
+export const measurePlanQueryOptions = (houseId: number) =>
+  queryOptions({
+    queryKey: measurePlanKeys.house(houseId),
+    queryFn: ({ signal }) => api.get<MeasurePlan>(`/api/houses/${houseId}/measure-plan`, { signal }),
   });
