@@ -86,6 +86,28 @@ describe('malformed input (e2e)', () => {
     expect(res.body.message).not.toMatch(/levels deep/);
   });
 
+  it('refuses a prototype key anywhere in a body (a patch or merge must never follow one), 400 before validation', async () => {
+    const bodies = [
+      '{"constructor":[]}',
+      '{"__proto__":{"siteRole":"admin"}}',
+      '{"name":"Gus","setpoints":{"prototype":{"x":1}}}',
+      '[{"a":[{"__proto__":null}]}]',
+    ];
+    for (const body of bodies) {
+      const res = await t.http
+        .patch('/api/users/me')
+        .set(bearer(owner))
+        .set('Content-Type', 'application/json')
+        .send(body)
+        .expect(400);
+      expectErrorShape(res.body, 400);
+      expect(res.body.message).toMatch(/field name that is not allowed \((__proto__|constructor|prototype)\)/);
+    }
+    // the word as a value is just text
+    await t.http.patch('/api/users/me').set(bearer(owner)).send({ name: 'constructor' }).expect(200);
+    expect(({} as Record<string, unknown>).siteRole).toBeUndefined();
+  });
+
   it('refuses null where null means nothing, naming the field', async () => {
     const cases: Array<[string, string, object, string]> = [
       ['patch', '/api/users/me', { name: null }, 'name'],

@@ -57,6 +57,32 @@ export function wellFormedText(value: unknown): boolean {
   return true;
 }
 
+/** Keys that name an object's prototype machinery: no body of ours has them, and a merge could follow them. */
+const PROTOTYPE_KEYS = new Set(['__proto__', 'constructor', 'prototype']);
+
+/** The first prototype key anywhere in a parsed body (JSON.parse keeps "__proto__" as an own key), or null. */
+export function prototypeKeyIn(value: unknown): string | null {
+  if (Array.isArray(value)) {
+    for (const item of value) {
+      const found = prototypeKeyIn(item);
+      if (found) return found;
+    }
+    return null;
+  }
+  if (value && typeof value === 'object') {
+    for (const key of Object.keys(value)) {
+      if (PROTOTYPE_KEYS.has(key)) return key;
+      const found = prototypeKeyIn((value as Record<string, unknown>)[key]);
+      if (found) return found;
+    }
+  }
+  return null;
+}
+
+export class BodyPrototypeKeyError extends Error {
+  readonly type = 'entity.prototype.key';
+}
+
 function bodyError(error: { status?: number; statusCode?: number; type?: string; message?: string }): ErrorBody {
   switch (error.type) {
     case 'entity.too.large':
@@ -84,6 +110,12 @@ function bodyError(error: { status?: number; statusCode?: number; type?: string;
         error: 'Bad Request',
         message: 'The request body holds text that is not valid Unicode (a lone surrogate)',
       };
+    case 'entity.prototype.key':
+      return {
+        statusCode: 400,
+        error: 'Bad Request',
+        message: `The request body uses a field name that is not allowed (${error.message})`,
+      };
     case 'entity.parse.failed':
       return { statusCode: 400, error: 'Bad Request', message: 'The request body is not valid JSON' };
     default:
@@ -99,8 +131,11 @@ function bodyError(error: { status?: number; statusCode?: number; type?: string;
 function answeringErrors(parser: RequestHandler, name: string): RequestHandler {
   const handler = (request: Request, response: Response, next: NextFunction) => {
     void parser(request, response, (parseError?: unknown) => {
+      const prototypeKey = parseError ? null : prototypeKeyIn(request.body);
       const error =
-        parseError ?? (wellFormedText(request.body) ? undefined : new BodyNotUnicodeError('not well-formed'));
+        parseError ??
+        (prototypeKey ? new BodyPrototypeKeyError(prototypeKey) : undefined) ??
+        (wellFormedText(request.body) ? undefined : new BodyNotUnicodeError('not well-formed'));
       if (!error) return next();
       const body = bodyError(error as Parameters<typeof bodyError>[0]);
       // The rest of the body was not read: close the connection rather than read it on.
