@@ -18,14 +18,13 @@ import {
 import { useTheme } from '@mui/material/styles';
 import { useMutation, useQuery } from '@tanstack/react-query';
 import { Bar } from 'react-chartjs-2';
-import { downloadFile } from '../../../api/client';
 import type { SeasonBudget } from '../../../api/types';
 import { ErrorAlert, LoadingState } from '../../../components/feedback';
 import '../../../lib/chart';
 import { saveBlob } from '../../../lib/save-blob';
 import { useUnits, type Units } from '../../../lib/units';
 import { budgetChartSeries } from '../budget-chart-data';
-import { seasonBudgetQueryOptions } from '../queries';
+import { downloadSeasonBudgetCsv, seasonBudgetQueryOptions } from '../queries';
 
 const SEASON_FROM: Record<SeasonBudget['seasonFrom'], string> = {
   request: 'the dates asked for',
@@ -160,10 +159,7 @@ export function SeasonBudgetSection({ farmId }: { farmId: number }) {
   const budget = useQuery(seasonBudgetQueryOptions(farmId));
   const exportCsv = useMutation({
     mutationFn: async () => {
-      const file = await downloadFile(
-        `/api/farms/${farmId}/season-budget.csv?units=${units.system}`,
-        `season-budget-farm-${farmId}-${units.system}.csv`,
-      );
+      const file = await downloadSeasonBudgetCsv(farmId, units.system);
       saveBlob(file.blob, file.fileName);
     },
   });

@@ -67,8 +67,8 @@ describe('MeasuresPanel', () => {
     const bodies: unknown[] = [];
     vi.stubGlobal(
       'fetch',
-      vi.fn(async (_url: string, init: RequestInit) => {
-        const body = JSON.parse(String(init.body)) as { measures: unknown[] };
+      vi.fn(async (request: Request) => {
+        const body = (await request.json()) as { measures: unknown[] };
         bodies.push(body);
         const result =
           body.measures.length === 0
