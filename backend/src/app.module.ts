@@ -6,6 +6,7 @@ import { existsSync } from 'node:fs';
 import { resolve } from 'node:path';
 import { AlternativesModule } from './alternatives/alternatives.module';
 import { AuthModule } from './auth/auth.module';
+import { CalibrationModule } from './calibration/calibration.module';
 import { ClimateModule } from './climate/climate.module';
 import { JwtAuthGuard } from './common/guards/jwt-auth.guard';
 import { SiteRolesGuard } from './common/guards/site-roles.guard';
@@ -51,6 +52,7 @@ const staticFrontend = existsSync(frontendDist())
     ReportsModule,
     AlternativesModule,
     SideBySideModule,
+    CalibrationModule,
     SeedModule,
     ...staticFrontend,
   ],

@@ -109,7 +109,7 @@ describe('season budget CSV (e2e)', () => {
     const gasColumn = header.findIndex((cell) => cell.endsWith('(therm)'));
     expect(propaneColumn).toBeGreaterThan(5);
     expect(gasColumn).toBeGreaterThan(5);
-    expect(header[header.length - 1]).toBe('Cost');
+    expect(header[header.length - 1]).toBe('Cost (USD)');
 
     const pricedTotal = rows.find((row) => row[0] === PRICED_NAME && row[2] === 'season total')!;
     const pricedHouse = budget.houses.find((house: { name: string }) => house.name === PRICED_NAME);

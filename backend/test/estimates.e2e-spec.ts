@@ -293,6 +293,7 @@ describe('estimates (e2e)', () => {
         curtainClosed: false,
         // the demo climate gives no wind: the 6.7 m/s the U tables assume (reference-data/wind.json)
         designWindSpeedMPerS: 6.7,
+        clearSky: false,
       });
       expect(res.body.conditionsSource).toEqual({
         designOutdoorC: 'farm climate',
@@ -301,9 +302,37 @@ describe('estimates (e2e)', () => {
         insideC: 'house night setpoint',
         curtainClosed: 'default',
         designWindSpeedMPerS: 'reference data',
+        clearSky: 'default',
       });
       expect(res.body.condensation.insideRelativeHumidityPct).toBe(defaultRh.valuePct);
       expectSchema(res.body, 'HouseHeatingEstimateDto');
+    });
+
+    it('sizes for a clear night on request: the sky loss is its own part and the heaters hold less', async () => {
+      const house = houseNamed('House A');
+      const overcast = await t.http
+        .post(`/api/houses/${house.id}/estimate`)
+        .set(bearer(grower))
+        .send({ conditions: { designOutdoorC: -15 } })
+        .expect(200);
+      const clear = await t.http
+        .post(`/api/houses/${house.id}/estimate`)
+        .set(bearer(grower))
+        .send({ conditions: { designOutdoorC: -15, clearSky: true, outdoorDewPointC: -18 } })
+        .expect(200);
+      expect(overcast.body.heatLoss.skyW).toBe(0);
+      expect(clear.body.conditionsUsed.clearSky).toBe(true);
+      expect(clear.body.conditionsSource.clearSky).toBe('request');
+      const sky = clear.body.heatLoss.components.find((part: { key: string }) => part.key === 'sky');
+      expect(sky.watts).toBeCloseTo(clear.body.heatLoss.skyW, 6);
+      expect(clear.body.heatLoss.totalW).toBeCloseTo(overcast.body.heatLoss.totalW + clear.body.heatLoss.skyW, 3);
+      expectSchema(clear.body, 'HouseHeatingEstimateDto');
+      const tooWet = await t.http
+        .post(`/api/houses/${house.id}/estimate`)
+        .set(bearer(grower))
+        .send({ conditions: { designOutdoorC: -15, clearSky: true, outdoorDewPointC: -5 } })
+        .expect(422);
+      expect(tooWet.body.field).toBe('conditions.outdoorDewPointC');
     });
 
     it('lets the request replace any default, and a warmer night needs less heat', async () => {

@@ -362,6 +362,13 @@ describe('roles × routes (e2e)', () => {
           .set(bearer(token[who])),
     },
     {
+      // the matrix's log covers two days: every role let through is refused for the short log (422)
+      route: 'GET /farms/:id/temperature-logs/:logId/climate-proposal',
+      expected: { owner: 422, grower: 422, adviser: 422, viewer: 403, outsider: 404, admin: 404 },
+      call: async (who) =>
+        t.http.get(`/api/farms/${farmId}/temperature-logs/${await newLog()}/climate-proposal`).set(bearer(token[who])),
+    },
+    {
       route: 'DELETE /farms/:id (a farm the caller is a member of)',
       expected: { owner: 204, grower: 403, adviser: 403, viewer: 403, outsider: 404, admin: 404 },
       call: async (who) => t.http.delete(`/api/farms/${await newSharedFarm()}`).set(bearer(token[who])),

@@ -295,7 +295,7 @@ describe('season, calendars, fuel prices and the farm budget (e2e)', () => {
       expect(bad.body.details[0].field).toBe('climateSource');
     });
 
-    it('needs a climate or a log, and a price, naming the field (422)', async () => {
+    it('needs a climate or a log (422, naming the field); without a price it gives heat and no cost', async () => {
       const farm = (
         await t.http
           .post('/api/farms')
@@ -324,9 +324,10 @@ describe('season, calendars, fuel prices and the farm budget (e2e)', () => {
         .set(ifMatch(0))
         .send(demoClimate)
         .expect(200);
-      const noPrice = await post(SEASON).expect(422);
-      expect(noPrice.body.field).toBe('pricePerUnit');
-      expect(noPrice.body.message).toMatch(/fuel prices/);
+      const noPrice = (await post(SEASON).expect(200)).body;
+      expect(noPrice.total.energyKWh).toBeGreaterThan(0);
+      expect(noPrice.total.cost).toBeNull();
+      expect(noPrice.inputsUsed).toMatchObject({ priceFrom: 'none', pricePerUnit: null, currency: 'USD' });
       const priced = (await post({ ...SEASON, pricePerUnit: 1.5, priceUnit: 'us' }).expect(200)).body;
       expect(priced.inputsUsed.priceFrom).toBe('request');
     });

@@ -113,6 +113,12 @@ describe('accessibility of the main pages (axe: no serious or critical violation
     expect(await audit(page, 'season')).toEqual([]);
   });
 
+  it('fuel bills and calibration', async () => {
+    await page.goto(`${farmUrl}/fuel-records`);
+    await page.getByRole('grid', { name: 'Fuel bills and deliveries' }).waitFor();
+    expect(await audit(page, 'fuel bills')).toEqual([]);
+  });
+
   it('settings', async () => {
     await page.goto('/settings');
     expect(await audit(page, 'settings')).toEqual([]);
@@ -128,7 +134,7 @@ describe('accessibility of the main pages (axe: no serious or critical violation
   });
 
   it('gives every page its own document title, and the strict CSP blocks nothing the app needs', () => {
-    expect(titles.size).toBe(7);
+    expect(titles.size).toBe(8);
     for (const title of titles.values()) expect(title).toMatch(/ – Thermbay$/);
     expect(new Set(titles.values()).size).toBe(titles.size);
     expect(blocked).toEqual([]);

@@ -36,10 +36,19 @@ describe('creating farms and houses, and site administration', () => {
     await page.getByRole('link', { name: 'New house' }).click();
     await page.getByRole('heading', { name: 'New house', level: 1 }).waitFor();
     await page.getByRole('textbox', { name: /^Name/ }).fill('E2E House 1');
+    // leaving with what was typed asks first; Cancel keeps it
+    await page.getByRole('navigation', { name: 'Breadcrumb' }).getByRole('link', { name: 'E2E Test Farm' }).click();
+    const leave = page.getByRole('dialog', { name: 'Leave without saving?' });
+    await leave.getByText('Your edits to the new house are not saved.', { exact: false }).waitFor();
+    await leave.getByRole('button', { name: 'Cancel' }).click();
+    await leave.waitFor({ state: 'hidden' });
+    expect(await page.getByRole('textbox', { name: /^Name/ }).inputValue()).toBe('E2E House 1');
+    // creating it moves on to the new house without asking
     await page.getByRole('button', { name: 'Create house' }).click();
 
     await page.waitForURL(/\/houses\/\d+$/);
     await page.getByRole('heading', { name: 'E2E House 1', level: 1 }).waitFor();
+    expect(await page.getByRole('dialog').count()).toBe(0);
     await saveScreenshot(page, 'new-house.png');
     expect(pageErrors).toEqual([]);
     await page.context().close();

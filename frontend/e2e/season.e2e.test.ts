@@ -157,7 +157,9 @@ describe('farm climate, temperature logs and the season', () => {
 
     const cost = page.getByTestId('farm-season-cost');
     await cost.waitFor({ timeout: 60_000 });
-    expect(Number((await cost.textContent())?.replace(/,/g, ''))).toBeGreaterThan(0);
+    // the demo farm pays in US dollars: "$12,345"
+    expect(await cost.textContent()).toMatch(/^\$[\d,]+$/);
+    expect(Number((await cost.textContent())?.replace(/[$,]/g, ''))).toBeGreaterThan(0);
     const perHouse = page.getByRole('table', { name: 'Season fuel budget per house' });
     // demo House A burns propane, House B and Range C natural gas
     expect(await perHouse.textContent()).toContain('US gal');
@@ -270,6 +272,101 @@ describe('farm climate, temperature logs and the season', () => {
     await warning.waitFor({ timeout: 60_000 });
     expect(await warning.textContent()).toMatch(/crop sits below its setpoint for \d+ hours of the season/);
     expect(await page.evaluate(() => document.body.innerText)).not.toContain('{{');
+    expect(pageErrors).toEqual([]);
+    await page.context().close();
+  });
+
+  it('a new farm with no fuel price gets the heat, a price typed per gallon in place, and the cost in its currency', async () => {
+    const { page, pageErrors } = await newPage(browser);
+    await signIn(page, DEMO_OWNER.email, DEMO_OWNER.password);
+    await useUnitSystem(page, 'us');
+    // The new farm, its climate and its house are set up through the API the pages use.
+    const login = await page.request.post('/api/auth/login', {
+      data: { email: DEMO_OWNER.email, password: DEMO_OWNER.password },
+    });
+    const headers = { Authorization: `Bearer ${(await login.json()).accessToken}` };
+    const farms = (await (await page.request.get('/api/farms', { headers })).json()) as Array<{ id: number }>;
+    const demoClimate = (await (await page.request.get(`/api/farms/${farms[0]!.id}/climate`, { headers })).json())
+      .climate;
+    const farm = (await (
+      await page.request.post('/api/farms', {
+        headers,
+        data: {
+          name: 'Euro test farm',
+          latitudeDeg: 44,
+          longitudeDeg: -93,
+          elevationM: 250,
+          timeZone: 'America/Chicago',
+          currency: 'EUR',
+        },
+      })
+    ).json()) as { id: number };
+    expect(
+      (
+        await page.request.put(`/api/farms/${farm.id}/climate`, {
+          headers: { ...headers, 'If-Match': '0' },
+          data: demoClimate,
+        })
+      ).status(),
+    ).toBe(200);
+    // an invented 9 × 30 m gable house with two propane unit heaters
+    const house = (await (
+      await page.request.post(`/api/farms/${farm.id}/houses`, {
+        headers,
+        data: {
+          name: 'First house',
+          shape: 'gable',
+          spans: 1,
+          widthM: 9,
+          lengthM: 30,
+          eaveHeightM: 2.5,
+          ridgeHeightM: 4.5,
+          coverings: {
+            roof: 'poly-double-inflated',
+            sidewalls: 'poly-double-inflated',
+            endwalls: 'polycarbonate-twin-8mm',
+          },
+          airLeakageClassId: 'new-film-double',
+          perimeterInsulated: false,
+          curtainId: null,
+          heaters: [{ count: 2, ratedInputW: 60_000, efficiency: 0.8, fuelId: 'propane' }],
+          exhaustFans: { count: 2, capacityEachM3PerS: 5 },
+          inletAreaM2: 3,
+          setpoints: { dayHeatingC: 18, nightHeatingC: 15, coolingC: 25 },
+        },
+      })
+    ).json()) as { id: number };
+    expect(house.id).toBeGreaterThan(0);
+
+    await page.goto(`/houses/${house.id}/season`);
+    const missing = page.getByTestId('missing-price-propane');
+    await missing.waitFor({ timeout: 60_000 });
+    // the heat and fuel are there before any price
+    expect(await page.getByTestId('season-total-fuel').textContent()).toMatch(/[\d,]+ US gal/);
+    expect(await page.getByTestId('season-total-cost').textContent()).toContain('needs a fuel price');
+    expect(await missing.textContent()).toContain('per US gal');
+    await screenshot(page, 'season-price-missing.png');
+
+    await missing.getByRole('textbox', { name: 'Price of Propane' }).fill('2.10');
+    await missing.getByRole('button', { name: 'Save price' }).click();
+    await expect
+      .poll(async () => page.getByTestId('season-total-cost').textContent(), { timeout: 60_000 })
+      .toMatch(/^€[\d,]+$/);
+    expect(await page.getByTestId('missing-price-propane').count()).toBe(0);
+    // cost = US gallons × €2.10 (the price was per US gallon, the user's unit)
+    const gallons = Number((await page.getByTestId('season-total-fuel').textContent())!.replace(/[^\d.]/g, ''));
+    const euros = Number((await page.getByTestId('season-total-cost').textContent())!.replace(/[^\d.]/g, ''));
+    expect(Math.abs(euros - gallons * 2.1)).toBeLessThanOrEqual(gallons * 2.1 * 0.01 + 2);
+    // the farm budget says the same, in euros
+    await page.goto(`/farms/${farm.id}?tab=season`);
+    const farmCost = page.getByTestId('farm-season-cost');
+    await farmCost.waitFor({ timeout: 60_000 });
+    expect(await farmCost.textContent()).toMatch(/^€[\d,]+$/);
+    expect(await page.evaluate(() => document.body.innerText)).not.toMatch(/pricePerUnit|priceUnit|fuelId/);
+    await screenshot(page, 'farm-budget-euro.png');
+
+    await page.request.delete(`/api/farms/${farm.id}`, { headers });
+    await useUnitSystem(page, 'si');
     expect(pageErrors).toEqual([]);
     await page.context().close();
   });

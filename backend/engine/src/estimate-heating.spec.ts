@@ -59,6 +59,7 @@ describe('estimateHeating', () => {
         'kneewallW',
         'outsideC',
         'perimeterW',
+        'skyW',
         'totalW',
         'wind',
       ].sort(),
@@ -442,5 +443,84 @@ describe('estimateHeating: unvented heaters', () => {
       ref,
     );
     expect(estimate.cautions.join(' ')).not.toMatch(/UNVENTED/);
+  });
+});
+
+describe('estimateHeating on a clear night', () => {
+  const clearNight: HeatingConditions = { designOutdoorC: -15, elevationM: 0, insideRelativeHumidityPct: 70 };
+
+  it('adds the sky loss by hand: −15 °C air, −18 °C dew point, double poly roof and polycarbonate ends', () => {
+    // Hand arithmetic (heating/sky-radiation.spec.ts works the sky through): ε_sky = 0.633852, T_sky = 230.34 K,
+    // σ(T_air⁴ − T_sky⁴) = 5.670374e-8 × (4.44108e9 − 2.81499e9) = 92.205 W/m².
+    // Through the roof film (τ 0.30) from the crop (ε 0.95): 0.30 × 0.95 × 92.205 = 26.28 W per m² of floor.
+    // Each covering's outer surface sees the sky: the air seems colder by ε_o × 92.205 / h_o (h_o = 33.4 W/(m²·K)):
+    // polyethylene ε_o 0.40 → 1.1043 K; polycarbonate ε_o 0.9 → 2.4846 K; times each covering's U·A.
+    const house = exampleDoublePolyGableHouse();
+    const floorAreaM2 = house.spans * house.widthM * house.lengthM;
+    const overcast = estimateHeating({ house, conditions: clearNight }, ref);
+    const clear = estimateHeating({ house, conditions: { ...clearNight, clearSky: true, outdoorDewPointC: -18 } }, ref);
+    const ua = (key: string) =>
+      overcast.heatLoss.components.find((component) => component.key === key)!.conductanceWPerK;
+    const expectedSkyW = 26.28 * floorAreaM2 + (ua('roof') + ua('sidewalls')) * 1.1043 + ua('endwalls') * 2.4846;
+    expect(overcast.heatLoss.skyW).toBe(0);
+    expectRelativelyClose(clear.heatLoss.skyW, expectedSkyW, 1e-3);
+    expectRelativelyClose(clear.heatLoss.totalW, overcast.heatLoss.totalW + expectedSkyW, 1e-3);
+    const sky = clear.heatLoss.components.find((component) => component.key === 'sky')!;
+    expect(sky.watts).toBe(clear.heatLoss.skyW);
+    expect(clear.heatLoss.components.reduce((sum, component) => sum + component.share, 0)).toBeCloseTo(1, 10);
+    expect(clear.cautions.some((caution) => /clear night/.test(caution))).toBe(true);
+    // the same heaters hold less on a clear night
+    expect(clear.heater.lowestHeldOutdoorC!).toBeGreaterThan(overcast.heater.lowestHeldOutdoorC!);
+    // T_held = T_in − (output − sky loss) / UA: the sky loss costs (sky W ÷ UA) kelvin of outdoor reach
+    const uaWPerK = overcast.heatLoss.totalW / overcast.heatLoss.deltaTK;
+    expectRelativelyClose(
+      clear.heater.lowestHeldOutdoorC! - overcast.heater.lowestHeldOutdoorC!,
+      clear.heatLoss.skyW / uaWPerK,
+      1e-9,
+    );
+    // the roof's inside surface is colder by (U / h_i) × 1.1043 K, so it drips sooner
+    const roofOf = (estimate: typeof clear) =>
+      estimate.condensation.surfaces.find((surface) => surface.group === 'roof')!;
+    const filmRatio = roofOf(overcast).uWPerM2K / 9.31; // h_i, heat flowing up (reference-data/surface-coefficients.json)
+    expect(roofOf(overcast).insideSurfaceC - roofOf(clear).insideSurfaceC).toBeCloseTo(filmRatio * 1.1043, 3);
+  });
+
+  it('single film loses more than twice what single glass does: glass passes almost nothing, though its surface cools', () => {
+    const single = (covering: string) =>
+      exampleDoublePolyGableHouse({ coverings: { roof: covering, sidewalls: covering, endwalls: covering } });
+    const night = { ...clearNight, clearSky: true };
+    const glassNight = estimateHeating({ house: single('glass-single'), conditions: night }, ref);
+    const filmNight = estimateHeating({ house: single('poly-single'), conditions: night }, ref);
+    expect(glassNight.heatLoss.skyW).toBeGreaterThan(0);
+    expect(filmNight.heatLoss.skyW).toBeGreaterThan(2 * glassNight.heatLoss.skyW);
+    // the caution is about what the film passes; glass passes almost nothing
+    expect(glassNight.cautions.some((caution) => /clear night/.test(caution))).toBe(false);
+    expect(filmNight.cautions.some((caution) => /clear night/.test(caution))).toBe(true);
+  });
+
+  it('an IR-absorbing inner film saves more on a clear night than under cloud (Bartok: 10–20 %)', () => {
+    const plain = exampleDoublePolyGableHouse();
+    const ir = exampleDoublePolyGableHouse({
+      coverings: { roof: 'poly-double-ir-inner', sidewalls: 'poly-double-ir-inner', endwalls: 'poly-double-ir-inner' },
+    });
+    const saving = (clearSky: boolean) => {
+      const a = estimateHeating({ house: plain, conditions: { ...clearNight, clearSky } }, ref).heatLoss.totalW;
+      const b = estimateHeating({ house: ir, conditions: { ...clearNight, clearSky } }, ref).heatLoss.totalW;
+      return 1 - b / a;
+    };
+    expect(saving(true)).toBeGreaterThan(saving(false));
+    expect(saving(true)).toBeGreaterThan(0.1);
+    expect(saving(true)).toBeLessThan(0.2);
+  });
+
+  it('refuses a dew point above the air temperature', () => {
+    expectEngineError(
+      () =>
+        estimateHeating(
+          { house: exampleDoublePolyGableHouse(), conditions: { ...clearNight, clearSky: true, outdoorDewPointC: -5 } },
+          ref,
+        ),
+      'conditions.outdoorDewPointC',
+    );
   });
 });

@@ -65,14 +65,33 @@ describe('estimateSeason', () => {
     expectRelativelyClose(estimate.peak!.heatW, ua * 13, 1e-6);
   });
 
+  it('sets the conventional 65 °F base beside the setpoint base, saying why the setpoint base suits a greenhouse', () => {
+    const input = demoSeasonInput({
+      climate: constantClimate(2),
+      season: { startDate: '2026-01-01', endDate: '2026-03-31' },
+      house: { ...demoSeasonInput().house, setpoints: { dayHeatingC: 15, nightHeatingC: 15, coolingC: 24 } },
+    });
+    const { degreeDays } = estimateSeason(input, ref, sunCache);
+    const conventional = degreeDays.conventionalBase;
+    // 65 °F = (65 − 32) / 1.8 = 18.333 °C (AMS Glossary of Meteorology, 'heating degree-day'); at a
+    // constant 2 °C every one of the 90 days adds 16.333 K·day.
+    expect(conventional.baseTemperatureC).toBeCloseTo(18.3333, 4);
+    expect(conventional.degreeDaysKDay).toBeCloseTo((18.3333 - 2) * 90, 3);
+    expect(conventional.degreeDaysFDay).toBeCloseTo((65 - 35.6) * 90, 1);
+    // same UA, same formula: heat scales with the degree-days
+    expectRelativelyClose(conventional.energyKWh / degreeDays.energyKWh, (18.3333 - 2) / 13, 1e-6);
+    expect(conventional.note).toMatch(/internal gains/);
+    expect(conventional.note).toMatch(/night-setpoint base is the one to use for a greenhouse/);
+  });
+
   it('returns monthly totals that add up to the season total, with fuel and cost in the fuel’s units', () => {
     const estimate = estimateSeason(demoSeasonInput(), ref, sunCache);
     expect(estimate.monthly).toHaveLength(12);
     const sum = (key: 'energyKWh' | 'fuelQuantityUs' | 'fuelQuantitySi' | 'cost') =>
-      estimate.monthly.reduce((total, month) => total + month[key], 0);
+      estimate.monthly.reduce((total, month) => total + month[key]!, 0);
     expect(sum('energyKWh')).toBeCloseTo(estimate.total.energyKWh, 6);
     expect(sum('fuelQuantityUs')).toBeCloseTo(estimate.total.fuelQuantityUs, 6);
-    expect(sum('cost')).toBeCloseTo(estimate.total.cost, 6);
+    expect(sum('cost')).toBeCloseTo(estimate.total.cost!, 6);
     expect(estimate.total.cost).toBeCloseTo(estimate.total.fuelQuantityUs * 2.2, 6);
     expect(estimate.fuel).toMatchObject({ fuelId: 'propane', unitUs: 'US gal', priceUnitLabel: 'US gal' });
     // January needs more than July
@@ -81,6 +100,18 @@ describe('estimateSeason', () => {
     expect(Math.max(...estimate.monthly.map((month) => month.peakW))).toBeCloseTo(estimate.peak!.heatW, 9);
     expect(estimate.peak!.at).toMatch(/^2026-\d{2}-\d{2}T\d{2}:00$/);
     expect(estimate.cautions.join(' ')).toMatch(/carbon monoxide/);
+  });
+
+  it('computes heat and fuel without a price, and leaves every cost empty', () => {
+    const priced = estimateSeason(demoSeasonInput(), ref, sunCache);
+    const base = demoSeasonInput();
+    const unpriced = estimateSeason({ ...base, fuel: { ...base.fuel, pricePerUnit: null } }, ref, sunCache);
+    expect(unpriced.total.energyKWh).toBe(priced.total.energyKWh);
+    expect(unpriced.total.fuelQuantityUs).toBe(priced.total.fuelQuantityUs);
+    expect(unpriced.total.cost).toBeNull();
+    expect(unpriced.monthly.every((month) => month.cost === null)).toBe(true);
+    expect(unpriced.degreeDays.cost).toBeNull();
+    expect(unpriced.fuel.pricePerUnit).toBeNull();
   });
 
   it('counts sun by day: the hourly estimate is below the degree-day figure and each step is explained', () => {

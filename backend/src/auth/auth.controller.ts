@@ -1,4 +1,4 @@
-import { Body, Controller, Get, HttpCode, Post, Req, Res, UseGuards } from '@nestjs/common';
+import { Body, Controller, Get, HttpCode, Post, Req, Res } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import type { Request, Response } from 'express';
 import {
@@ -10,7 +10,6 @@ import {
   ApiTags,
   ApiTooManyRequestsResponse,
 } from '@nestjs/swagger';
-import { ThrottlerGuard } from '@nestjs/throttler';
 import { CurrentUser, type AuthenticatedUser } from '../common/decorators/current-user.decorator';
 import { Public } from '../common/decorators/public.decorator';
 import type { Environment } from '../config/environment';
@@ -28,22 +27,8 @@ import {
   RegisterDto,
   SessionDto,
 } from './dto/auth.dto';
-import { LOGIN_WINDOW_MS, LoginLimiterService, TooManyAttemptsException } from './login-limiter/login-limiter.service';
-
-/** Runs `work`; a limiter refusal also tells the client when to try again. */
-async function withRetryAfter<T>(response: Response, work: () => Promise<T>): Promise<T> {
-  try {
-    return await work();
-  } catch (error) {
-    if (error instanceof TooManyAttemptsException) response.setHeader('Retry-After', String(LOGIN_WINDOW_MS / 1000));
-    throw error;
-  }
-}
-
-/** The client's address: behind a reverse proxy, as TRUST_PROXY lets Express read it. */
-function clientAddress(request: Request): string {
-  return request.ip ?? request.socket.remoteAddress ?? 'unknown';
-}
+import { clientAddress, withRetryAfter } from './login-limiter/limited-request';
+import { LoginLimiterService } from './login-limiter/login-limiter.service';
 
 @ApiTags('auth')
 @Controller('auth')
@@ -96,37 +81,59 @@ export class AuthController {
   }
 
   @Post('password')
-  @UseGuards(ThrottlerGuard)
   @HttpCode(200)
   @ApiBearerAuth()
   @ApiOperation({ summary: 'Change the password, knowing the current one; every other session is signed out' })
   @ApiOkResponse({ type: SessionDto, description: 'a new session for this browser' })
   @ApiBadRequestResponse({ description: 'current password wrong, or the new one refused (the reason is given)' })
-  changePassword(@CurrentUser() me: AuthenticatedUser, @Body() body: ChangePasswordDto): Promise<SessionDto> {
-    return this.auth.changePassword(me.id, body);
+  @ApiTooManyRequestsResponse({ description: 'Too many attempts from this address or on this account' })
+  changePassword(
+    @CurrentUser() me: AuthenticatedUser,
+    @Body() body: ChangePasswordDto,
+    @Req() request: Request,
+    @Res({ passthrough: true }) response: Response,
+  ): Promise<SessionDto> {
+    return withRetryAfter(response, async () => {
+      await this.limiter.admitAction('password-change', clientAddress(request), me.email);
+      return this.auth.changePassword(me.id, body);
+    });
   }
 
   @Public()
-  @UseGuards(ThrottlerGuard)
   @Post('password-reset/request')
   @HttpCode(202)
   @ApiOperation({
     summary: 'E-mail a one-hour, single-use reset link; the same answer whether or not the account exists',
   })
   @ApiOkResponse({ type: MessageDto })
-  requestPasswordReset(@Body() body: PasswordResetRequestDto): Promise<MessageDto> {
-    return this.auth.requestPasswordReset(body);
+  @ApiTooManyRequestsResponse({ description: 'Too many requests from this address or for this e-mail address' })
+  requestPasswordReset(
+    @Body() body: PasswordResetRequestDto,
+    @Req() request: Request,
+    @Res({ passthrough: true }) response: Response,
+  ): Promise<MessageDto> {
+    return withRetryAfter(response, async () => {
+      await this.limiter.admitAction('password-reset-request', clientAddress(request), body.email);
+      return this.auth.requestPasswordReset(body);
+    });
   }
 
   @Public()
-  @UseGuards(ThrottlerGuard)
   @Post('password-reset')
   @HttpCode(200)
   @ApiOperation({ summary: 'Set a new password with a reset token; every session of the account is signed out' })
   @ApiOkResponse({ type: SessionDto, description: 'signed in with the new password' })
   @ApiBadRequestResponse({ description: 'link used, expired or unknown; or the new password refused' })
-  resetPassword(@Body() body: PasswordResetDto): Promise<SessionDto> {
-    return this.auth.resetPassword(body);
+  @ApiTooManyRequestsResponse({ description: 'Too many attempts from this address' })
+  resetPassword(
+    @Body() body: PasswordResetDto,
+    @Req() request: Request,
+    @Res({ passthrough: true }) response: Response,
+  ): Promise<SessionDto> {
+    return withRetryAfter(response, async () => {
+      await this.limiter.admitAction('password-reset', clientAddress(request));
+      return this.auth.resetPassword(body);
+    });
   }
 
   @Get('me')

@@ -6,7 +6,6 @@ import { getModelToken, SequelizeModule } from '@nestjs/sequelize';
 import type { Environment } from '../config/environment';
 import { MailModule } from '../mail/mail.module';
 import { UsersModule } from '../users/users.module';
-import { ThrottlerModule } from '@nestjs/throttler';
 import { PasswordResetToken } from './models/password-reset-token.model';
 import { AuthController } from './auth.controller';
 import { AuthService } from './auth.service';
@@ -33,14 +32,6 @@ import { LOGIN_ATTEMPT_STORE, LOGIN_WINDOW_MS, LoginLimiterService } from './log
       }),
     }),
     SequelizeModule.forFeature([LoginAttempt]),
-    // Password changes and resets and invitation links are limited per address by the throttler
-    // (in this process); sign-in and register go through the login limiter below instead.
-    ThrottlerModule.forRootAsync({
-      inject: [ConfigService],
-      useFactory: (config: ConfigService<Environment, true>) => [
-        { ttl: 60_000, limit: config.get('LOGIN_RATE_LIMIT_PER_MINUTE', { infer: true }) },
-      ],
-    }),
   ],
   controllers: [AuthController],
   providers: [
@@ -57,6 +48,6 @@ import { LOGIN_ATTEMPT_STORE, LOGIN_WINDOW_MS, LoginLimiterService } from './log
           : new MemoryLoginAttemptStore(LOGIN_WINDOW_MS),
     },
   ],
-  exports: [AuthService],
+  exports: [AuthService, LoginLimiterService],
 })
 export class AuthModule {}

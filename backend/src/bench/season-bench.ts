@@ -91,7 +91,7 @@ function main(): void {
   });
   const sideBySideInput = demoSideBySideInput(singlePoly);
   const sideBySide = () =>
-    compareSideBySide(sideBySideInput.house, sideBySideInput.alternatives, ref, sunCache).house.season.total.cost;
+    compareSideBySide(sideBySideInput.house, sideBySideInput.alternatives, ref, sunCache).house.season.total.energyKWh;
   sideBySide();
   const fiveColumns = medianMs(21, sideBySide);
 

@@ -18,10 +18,13 @@ import { MailSend } from '../mail/models/mail-send.model';
 import { ReceivedMail, ReceivedMailAttachment } from '../mail/models/received-mail.model';
 import { FarmFuelPrice } from '../season/models/farm-fuel-price.model';
 import { HouseCalendar } from '../season/models/house-calendar.model';
+import { HouseMeasurePlan } from '../season/models/house-measure-plan.model';
 import { TemperatureLog } from '../temperature-logs/models/temperature-log.model';
 import { User } from '../users/models/user.model';
 import { WeatherYear } from '../weather/models/weather-year.model';
 import { migrateToLatest } from './migrator';
+import { FuelRecord, FuelRecordHouse } from '../calibration/models/fuel-record.model';
+import { SavedCalibration } from '../calibration/models/saved-calibration.model';
 
 export const MODELS = [
   User,
@@ -31,8 +34,12 @@ export const MODELS = [
   FarmClimate,
   TemperatureLog,
   HouseCalendar,
+  HouseMeasurePlan,
   FarmFuelPrice,
   WeatherYear,
+  FuelRecord,
+  FuelRecordHouse,
+  SavedCalibration,
   LoginAttempt,
   MailSend,
   ReceivedMail,

@@ -92,6 +92,7 @@ export class EstimatesService {
       curtainClosed: given.curtainClosed ?? false,
       designWindSpeedMPerS:
         given.designWindSpeedMPerS ?? climate?.designWindSpeedMPerS ?? this.defaultDesignWindMPerS(),
+      clearSky: given.clearSky ?? false,
     };
     const conditionsSource: HeatingConditionsSourceDto = {
       designOutdoorC: given.designOutdoorC === undefined ? 'farm climate' : 'request',
@@ -105,8 +106,12 @@ export class EstimatesService {
           : climate?.designWindSpeedMPerS !== undefined && climate?.designWindSpeedMPerS !== null
             ? 'farm climate'
             : 'reference data',
+      clearSky: given.clearSky === undefined ? 'default' : 'request',
     };
-    const conditions: HeatingConditions = { ...conditionsUsed };
+    const conditions: HeatingConditions = {
+      ...conditionsUsed,
+      ...(given.outdoorDewPointC === undefined ? {} : { outdoorDewPointC: given.outdoorDewPointC }),
+    };
     return { input: { house, conditions }, conditionsUsed, conditionsSource };
   }
 

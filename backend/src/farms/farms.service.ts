@@ -141,6 +141,7 @@ export class FarmsService {
       longitudeDeg: farm.longitudeDeg,
       elevationM: farm.elevationM,
       timeZone: farm.timeZone,
+      currency: farm.currency,
       myRole: membership.role,
       permissions: [...ROLE_PERMISSIONS[membership.role]],
       houseCount: houseCount ?? (await this.houses.count({ where: { farmId: farm.id }, transaction })),

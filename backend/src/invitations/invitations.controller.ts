@@ -1,4 +1,5 @@
-import { Body, Controller, Delete, Get, HttpCode, Param, ParseIntPipe, Post, UseGuards } from '@nestjs/common';
+import { Body, Controller, Delete, Get, HttpCode, Param, ParseIntPipe, Post, Req, Res } from '@nestjs/common';
+import type { Request, Response } from 'express';
 import {
   ApiBearerAuth,
   ApiCreatedResponse,
@@ -7,9 +8,11 @@ import {
   ApiOkResponse,
   ApiOperation,
   ApiTags,
+  ApiTooManyRequestsResponse,
 } from '@nestjs/swagger';
-import { ThrottlerGuard } from '@nestjs/throttler';
 import { SessionDto } from '../auth/dto/auth.dto';
+import { clientAddress, withRetryAfter } from '../auth/login-limiter/limited-request';
+import { LoginLimiterService } from '../auth/login-limiter/login-limiter.service';
 import { CurrentUser, type AuthenticatedUser } from '../common/decorators/current-user.decorator';
 import { Public } from '../common/decorators/public.decorator';
 import {
@@ -27,7 +30,10 @@ const LINK_404 = 'unknown, used, revoked or expired link';
 @ApiTags('invitations')
 @Controller()
 export class InvitationsController {
-  constructor(private readonly invitations: InvitationsService) {}
+  constructor(
+    private readonly invitations: InvitationsService,
+    private readonly limiter: LoginLimiterService,
+  ) {}
 
   @Post('farms/:farmId/invitations')
   @ApiBearerAuth()
@@ -87,13 +93,21 @@ export class InvitationsController {
   }
 
   @Public()
-  @UseGuards(ThrottlerGuard)
   @Post('invitations/:token/sign-up')
   @ApiOperation({ summary: 'Create an account with the invited address and join the farm' })
   @ApiCreatedResponse({ type: SessionDto })
   @ApiNotFoundResponse({ description: LINK_404 })
-  signUp(@Param('token') token: string, @Body() body: InvitedSignUpDto): Promise<SessionDto> {
-    return this.invitations.signUp(token, body);
+  @ApiTooManyRequestsResponse({ description: 'Too many attempts from this address' })
+  signUp(
+    @Param('token') token: string,
+    @Body() body: InvitedSignUpDto,
+    @Req() request: Request,
+    @Res({ passthrough: true }) response: Response,
+  ): Promise<SessionDto> {
+    return withRetryAfter(response, async () => {
+      await this.limiter.admitAction('invitation-sign-up', clientAddress(request));
+      return this.invitations.signUp(token, body);
+    });
   }
 
   @Post('invitations/:token/accept')

@@ -1,4 +1,6 @@
 import type { ReportSnapshot } from './report-snapshot';
+import { DEFAULT_CURRENCY } from '@thermbay/engine/vocabulary';
+import { formatMoney } from '../common/money';
 import { format, formatNumber, prose, unitLabel, convert, type ReportQuantity, type UnitSystem } from './report-units';
 import { quantityOfSiUnit } from '@thermbay/engine/vocabulary';
 
@@ -96,6 +98,7 @@ function paragraphs(text: string): ReportBlock[] {
 
 export function buildReportDocument(snapshot: ReportSnapshot, meta: ReportMeta, system: UnitSystem): ReportDocument {
   const { farm, house, heating } = snapshot;
+  const currency = farm.currency ?? DEFAULT_CURRENCY;
   const f = (kind: ReportQuantity, value: number | null | undefined) => format(kind, value, system);
   const sections: ReportSection[] = [];
 
@@ -282,11 +285,20 @@ export function buildReportDocument(snapshot: ReportSnapshot, meta: ReportMeta, 
             },
             {
               label: 'Fuel',
-              value: `${season.fuel.label} at ${formatNumber(season.fuel.pricePerUnit, 2)} per ${season.fuel.priceUnitLabel}`,
+              value:
+                season.fuel.pricePerUnit === null
+                  ? `${season.fuel.label} (no price entered yet)`
+                  : `${season.fuel.label} at ${formatMoney(season.fuel.pricePerUnit, currency)} per ${season.fuel.priceUnitLabel}`,
             },
             { label: 'Heat delivered', value: format('energyKWh', season.total.energyKWh, system) },
             { label: 'Fuel burnt', value: `${formatNumber(quantity, 0)} ${fuelUnit}` },
-            { label: 'Fuel cost', value: formatNumber(season.total.cost, 0) },
+            {
+              label: 'Fuel cost',
+              value:
+                season.total.cost === null
+                  ? 'not computed: enter the fuel price on the farm page'
+                  : formatMoney(season.total.cost, currency, 0),
+            },
           ],
         },
       ],
@@ -310,7 +322,9 @@ export function buildReportDocument(snapshot: ReportSnapshot, meta: ReportMeta, 
         columns: ['Assumption', 'Value', 'Source', 'Confidence'],
         rows: assumptions.map((a) => [
           prose(a.label, system),
-          assumptionValue(a.value, a.unit, system),
+          a.key === 'fuel-price' && typeof a.value === 'number'
+            ? `${formatMoney(a.value, currency)} ${a.unit}`
+            : assumptionValue(a.value, a.unit, system),
           a.source,
           CONFIDENCE_WORDS[a.confidence] ?? a.confidence,
         ]),

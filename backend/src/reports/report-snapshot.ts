@@ -8,7 +8,16 @@ import type { HouseSeasonEstimateDto } from '../season/dto/season-result.dto';
 export interface ReportSnapshot {
   version: 1;
   takenAt: string;
-  farm: { id: number; name: string; latitudeDeg: number; longitudeDeg: number; elevationM: number; timeZone: string };
+  farm: {
+    id: number;
+    name: string;
+    latitudeDeg: number;
+    longitudeDeg: number;
+    elevationM: number;
+    timeZone: string;
+    /** ISO 4217; absent in reports saved before farms had a currency (they were in US dollars) */
+    currency?: string;
+  };
   house: HouseDto;
   climate: SiteClimateDto | null;
   /** the design-night estimate with its conditions, where each came from, assumptions and cautions */

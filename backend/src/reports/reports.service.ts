@@ -270,6 +270,7 @@ export class ReportsService {
           longitudeDeg: farm.longitudeDeg,
           elevationM: farm.elevationM,
           timeZone: farm.timeZone,
+          currency: farm.currency,
         },
         house: houseToDto(house),
         climate: await this.climate.findForFarm(house.farmId),

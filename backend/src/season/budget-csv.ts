@@ -1,4 +1,5 @@
 import { JOULES_PER_BTU, JOULES_PER_KWH } from '@thermbay/engine/season/fuel';
+import { moneyHeading, plainAmount } from '../common/money';
 import type { BudgetFuelTotalDto, SeasonBudgetDto } from './dto/season-budget.dto';
 
 export type CsvUnits = 'si' | 'us';
@@ -25,14 +26,12 @@ export function csvField(value: string | number | null): string {
 /** UTF-8 byte-order mark: spreadsheets then read "m³" and "–" as written rather than as a legacy code page. */
 export const UTF8_BOM = '\uFEFF';
 
-function fixed(value: number | null, digits: number): string | null {
-  return value === null ? null : value.toFixed(digits);
-}
-
 /**
  * The budget as CSV: one row per house per month, a season total per house, then the farm's
  * months and season total. The header names every unit: heat in kWh (SI) or MMBtu (US), and
- * one fuel column per fuel in its SI or US purchase unit (m³ / therm, L / US gal …).
+ * one fuel column per fuel in its SI or US purchase unit (m³ / therm, L / US gal …), and the
+ * farm's currency ("Cost (EUR)"); amounts are plain numbers in the currency's own decimals, and
+ * empty where a house has no fuel price.
  */
 export function budgetCsv(budget: SeasonBudgetDto, units: CsvUnits): string {
   const energyUnit = units === 'si' ? 'kWh' : 'MMBtu';
@@ -40,6 +39,7 @@ export function budgetCsv(budget: SeasonBudgetDto, units: CsvUnits): string {
   const fuels: BudgetFuelTotalDto[] = budget.byFuel;
   const unitOf = (fuel: BudgetFuelTotalDto) => (units === 'si' ? fuel.unitSi : fuel.unitUs);
   const quantity = (si: number, us: number) => (units === 'si' ? si : us).toFixed(1);
+  const money = (amount: number | null) => plainAmount(amount, budget.currency) ?? '';
 
   const header = [
     'House',
@@ -49,7 +49,7 @@ export function budgetCsv(budget: SeasonBudgetDto, units: CsvUnits): string {
     `Heat delivered (${energyUnit})`,
     `Fuel burnt (${energyUnit})`,
     ...fuels.map((fuel) => `${fuel.label} (${unitOf(fuel)})`),
-    'Cost',
+    moneyHeading('Cost', budget.currency),
   ];
   const lines: string[][] = [header];
   const fuelCells = (fuelId: string | null, si: number, us: number) =>
@@ -65,7 +65,7 @@ export function budgetCsv(budget: SeasonBudgetDto, units: CsvUnits): string {
         energy(month.energyKWh),
         energy(month.fuelInputKWh),
         ...fuelCells(house.fuelId, month.fuelQuantitySi, month.fuelQuantityUs),
-        fixed(month.cost, 2) ?? '',
+        money(month.cost),
       ]);
     }
     lines.push([
@@ -76,7 +76,7 @@ export function budgetCsv(budget: SeasonBudgetDto, units: CsvUnits): string {
       energy(house.energyKWh),
       energy(house.fuelInputKWh),
       ...fuelCells(house.fuelId, house.fuelQuantitySi, house.fuelQuantityUs),
-      fixed(house.cost, 2) ?? '',
+      money(house.cost),
     ]);
   }
   for (const month of budget.monthly) {
@@ -91,7 +91,7 @@ export function budgetCsv(budget: SeasonBudgetDto, units: CsvUnits): string {
         const entry = month.byFuel.find((item) => item.fuelId === fuel.fuelId);
         return entry ? quantity(entry.fuelQuantitySi, entry.fuelQuantityUs) : '';
       }),
-      month.cost.toFixed(2),
+      money(month.cost),
     ]);
   }
   lines.push([
@@ -102,7 +102,7 @@ export function budgetCsv(budget: SeasonBudgetDto, units: CsvUnits): string {
     energy(budget.totalEnergyKWh),
     energy(budget.houses.reduce((sum, house) => sum + house.fuelInputKWh, 0)),
     ...fuels.map((fuel) => quantity(fuel.fuelQuantitySi, fuel.fuelQuantityUs)),
-    budget.totalCost.toFixed(2),
+    money(budget.totalCost),
   ]);
   return UTF8_BOM + lines.map((cells) => cells.map(csvField).join(',')).join('\r\n') + '\r\n';
 }

@@ -11,6 +11,7 @@ import type { SeasonBudgetRequestDto } from './dto/season-request.dto';
 import type { BudgetFuelTotalDto, BudgetHouseDto, BudgetMonthDto, SeasonBudgetDto } from './dto/season-budget.dto';
 import { SeasonInputsService, withRequestFields } from './season-inputs.service';
 import { SunCacheService } from './sun-cache.service';
+import { budgetBasis, HeatLossBasisService } from './heat-loss-basis.service';
 
 /**
  * The farm's season fuel budget: every house's season (its own fuel, heater efficiency and
@@ -26,6 +27,7 @@ export class SeasonBudgetService {
     private readonly inputs: SeasonInputsService,
     private readonly reference: ReferenceDataService,
     private readonly sun: SunCacheService,
+    private readonly basis: HeatLossBasisService,
   ) {}
 
   async budget(user: AuthenticatedUser, farmId: number, request: SeasonBudgetRequestDto): Promise<SeasonBudgetDto> {
@@ -41,25 +43,28 @@ export class SeasonBudgetService {
       ],
     });
     const ref = this.reference.data;
+    const basis = await this.basis.forFarm(farmId, request.heatLossBasis);
+    const basisUsed = rows.map((row) => ({ name: row.name, basis: basis.forHouse(row.id, row.name, row.version) }));
 
     const houses: BudgetHouseDto[] = [];
     const cautions = new Set<string>();
-    for (const row of rows) {
+    for (const [index, row] of rows.entries()) {
       const house = houseToSpec(row);
+      const used = basisUsed[index].basis;
       const calendar = await this.inputs.calendarOf(row.id);
       const heater = house.heaters[0];
       if (!heater) {
         houses.push(
-          emptyHouse(row, calendar?.length ?? 0, 'the house has no heaters, so it burns no fuel in this budget'),
+          emptyHouse(row, calendar?.length ?? 0, 'the house has no heaters, so it burns no fuel in this budget', used),
         );
         continue;
       }
       const stored = prices.get(heater.fuelId);
       const fuel = fuelRow(ref, heater.fuelId, `houses.${row.id}.heaters.0.fuelId`);
-      // Without a price the quantities are still worth showing; the cost is left empty.
+      // Without a price the quantities are still worth showing; the engine leaves the cost empty.
       const price = stored
         ? { fuelId: heater.fuelId, pricePerUnit: stored.pricePerUnit, priceUnit: stored.priceUnit }
-        : { fuelId: heater.fuelId, pricePerUnit: 0, priceUnit: 'si' as const };
+        : { fuelId: heater.fuelId, pricePerUnit: null, priceUnit: 'si' as const };
       const estimate = withRequestFields(() =>
         estimateSeason(
           {
@@ -70,6 +75,7 @@ export class SeasonBudgetService {
             calendar,
             fuel: price,
             heaterEfficiency: heater.efficiency,
+            heatLossFactor: used.heatLossBasis === 'calibrated' ? used.heatLossFactor : undefined,
           },
           ref,
           this.sun.cache,
@@ -79,6 +85,8 @@ export class SeasonBudgetService {
       houses.push({
         houseId: row.id,
         name: row.name,
+        heatLossBasis: used.heatLossBasis,
+        heatLossFactor: used.heatLossFactor,
         fuelId: fuel.id,
         fuelLabel: fuel.label,
         unitSi: fuel.unitSi,
@@ -90,7 +98,7 @@ export class SeasonBudgetService {
         fuelInputKWh: estimate.total.fuelInputKWh,
         fuelQuantitySi: estimate.total.fuelQuantitySi,
         fuelQuantityUs: estimate.total.fuelQuantityUs,
-        cost: stored ? estimate.total.cost : null,
+        cost: estimate.total.cost,
         unmetHeatKWh: estimate.total.unmetHeatKWh,
         hoursBelowSetpoint: estimate.total.hoursBelowSetpoint,
         capacityCaution: estimate.heaterCapacity.caution,
@@ -103,13 +111,11 @@ export class SeasonBudgetService {
           fuelInputKWh: month.fuelInputKWh,
           fuelQuantitySi: month.fuelQuantitySi,
           fuelQuantityUs: month.fuelQuantityUs,
-          cost: stored ? month.cost : null,
+          cost: month.cost,
           unmetHeatKWh: month.unmetHeatKWh,
           hoursBelowSetpoint: month.hoursBelowSetpoint,
         })),
-        problem: stored
-          ? null
-          : `the farm has no price for ${fuel.label}: set it in the farm's fuel prices to include this house's cost`,
+        problem: stored ? null : `No price for ${fuel.label} yet: enter it to include this house's cost`,
       });
     }
 
@@ -144,12 +150,12 @@ export class SeasonBudgetService {
           month: month.month,
           energyKWh: 0,
           fuelInputKWh: 0,
-          cost: 0,
+          cost: null,
           byFuel: [],
         };
         entry.energyKWh += month.energyKWh;
         entry.fuelInputKWh += month.fuelInputKWh;
-        entry.cost += month.cost ?? 0;
+        if (month.cost !== null) entry.cost = (entry.cost ?? 0) + month.cost;
         let fuelEntry = entry.byFuel.find((item) => item.fuelId === house.fuelId);
         if (!fuelEntry) {
           fuelEntry = { fuelId: house.fuelId, fuelQuantitySi: 0, fuelQuantityUs: 0 };
@@ -172,7 +178,10 @@ export class SeasonBudgetService {
     if (!costComplete) notes.push('Some houses have no heaters or no fuel price; their cost is left out of the total.');
     if (houses.length === 0) notes.push('The farm has no houses yet.');
 
+    const basisStatement = budgetBasis(basis, basisUsed);
+    notes.unshift(basisStatement.heatLossBasisStatement);
     return {
+      ...basisStatement,
       farmId,
       startDate: context.season.startDate,
       endDate: context.season.endDate,
@@ -182,7 +191,10 @@ export class SeasonBudgetService {
       houses,
       byFuel: [...byFuel.values()],
       totalEnergyKWh: houses.reduce((sum, house) => sum + house.energyKWh, 0),
-      totalCost: houses.reduce((sum, house) => sum + (house.cost ?? 0), 0),
+      totalCost: houses.some((house) => house.cost !== null)
+        ? houses.reduce((sum, house) => sum + (house.cost ?? 0), 0)
+        : null,
+      currency: farm.currency,
       costComplete,
       monthly: [...monthly.values()].sort((a, b) => a.year - b.year || a.month - b.month),
       notes,
@@ -191,10 +203,17 @@ export class SeasonBudgetService {
   }
 }
 
-function emptyHouse(row: House, calendarPeriodCount: number, problem: string): BudgetHouseDto {
+function emptyHouse(
+  row: House,
+  calendarPeriodCount: number,
+  problem: string,
+  used: { heatLossBasis: BudgetHouseDto['heatLossBasis']; heatLossFactor: number },
+): BudgetHouseDto {
   return {
     houseId: row.id,
     name: row.name,
+    heatLossBasis: used.heatLossBasis,
+    heatLossFactor: used.heatLossFactor,
     fuelId: null,
     fuelLabel: null,
     unitSi: null,

@@ -35,7 +35,8 @@ export interface HouseFuelChoice {
   fuel: FuelPrice;
   heaterEfficiency: number;
   fuelFrom: 'request' | 'house-heater';
-  priceFrom: 'request' | 'farm-fuel-prices';
+  /** 'none': no price yet; the engine gives heat and fuel, and every cost is null */
+  priceFrom: 'request' | 'farm-fuel-prices' | 'none';
   heaterEfficiencyFrom: 'request' | 'house-heater';
 }
 
@@ -113,7 +114,10 @@ export class SeasonInputsService {
   ): Promise<FarmSeasonContext> {
     if ((request.startDate === undefined) !== (request.endDate === undefined)) {
       const missing = request.startDate === undefined ? 'startDate' : 'endDate';
-      throw new EngineInputError(missing, 'give both startDate and endDate, or neither for the default heating season');
+      throw new EngineInputError(
+        missing,
+        'Give both a first and a last day of the season, or neither for the default heating season',
+      );
     }
     const source = request.climateSource ?? 'normals';
     const log =
@@ -161,7 +165,7 @@ export class SeasonInputsService {
     } else {
       throw new EngineInputError(
         'climateSource',
-        "this farm has no climate yet: enter the farm's climate (monthly normals) on the farm page, or choose a temperature log as climateSource",
+        "This farm has no climate yet: enter its climate (monthly normals) on the farm page, or run the season on one of the farm's temperature logs",
       );
     }
     return { farm, site, climate, season, seasonFrom, log };
@@ -181,20 +185,30 @@ export class SeasonInputsService {
 
   /**
    * Fuel, price and efficiency: from the request, else the house's heaters and the farm's price
-   * list. Throws EngineInputError naming the request field that must be given.
+   * list. A missing price is no error: the price is null (priced in the user's unit system once
+   * entered) and the estimate gives heat and fuel without costs. Throws EngineInputError naming
+   * the request field that must be given (a house without heaters).
    */
   fuelChoice(house: HouseSpec, prices: Map<string, FarmFuelPrice>, options: SeasonOptionsDto): HouseFuelChoice {
     const firstHeater = house.heaters[0];
     const fuelId = options.fuelId ?? firstHeater?.fuelId;
-    if (!fuelId) throw new EngineInputError('fuelId', 'the house has no heaters: give fuelId (and heaterEfficiency)');
-    const row = fuelRow(this.reference.data, fuelId, 'fuelId');
+    if (!fuelId) {
+      throw new EngineInputError(
+        'fuelId',
+        'This house has no heaters yet: add its heaters on the house page to estimate the fuel it burns',
+      );
+    }
+    fuelRow(this.reference.data, fuelId, 'fuelId');
 
     const heaterOfFuel = house.heaters.find((heater) => heater.fuelId === fuelId) ?? firstHeater;
     const heaterEfficiency = options.heaterEfficiency ?? heaterOfFuel?.efficiency;
     if (heaterEfficiency === undefined)
-      throw new EngineInputError('heaterEfficiency', 'the house has no heaters: give heaterEfficiency');
+      throw new EngineInputError(
+        'heaterEfficiency',
+        'This house has no heaters yet: add its heaters (with their efficiency) on the house page',
+      );
 
-    let pricePerUnit: number;
+    let pricePerUnit: number | null;
     let priceUnit: PriceUnit;
     let priceFrom: HouseFuelChoice['priceFrom'];
     if (options.pricePerUnit !== undefined) {
@@ -203,15 +217,9 @@ export class SeasonInputsService {
       priceFrom = 'request';
     } else {
       const stored = prices.get(fuelId);
-      if (!stored) {
-        throw new EngineInputError(
-          'pricePerUnit',
-          `the farm has no price for ${row.label}: set it in the farm's fuel prices, or give pricePerUnit (per ${row.unitSi}, or per ${row.unitUs} with priceUnit 'us')`,
-        );
-      }
-      pricePerUnit = stored.pricePerUnit;
-      priceUnit = stored.priceUnit;
-      priceFrom = 'farm-fuel-prices';
+      pricePerUnit = stored?.pricePerUnit ?? null;
+      priceUnit = stored?.priceUnit ?? options.priceUnit ?? 'si';
+      priceFrom = stored ? 'farm-fuel-prices' : 'none';
     }
     return {
       fuel: { fuelId, pricePerUnit, priceUnit },
@@ -234,6 +242,7 @@ export class SeasonInputsService {
       priceFrom: choice.priceFrom,
       heaterEfficiency: choice.heaterEfficiency,
       heaterEfficiencyFrom: choice.heaterEfficiencyFrom,
+      currency: context.farm.currency,
       timeZone: context.farm.timeZone,
       utcOffsetHours: context.site.utcOffsetHours,
     };

@@ -34,7 +34,7 @@ import { SeasonBudgetService } from './season-budget.service';
 import { SeasonService } from './season.service';
 
 const SEASON_422 =
-  'the engine cannot compute with the input, field named: no climate and no log (climateSource), no fuel price (pricePerUnit), a log that does not cover the dates (climateSource), a season over 366 days (endDate) …';
+  'the engine cannot compute with the input, field named: no climate and no log (climateSource), a house without heaters (fuelId), a log that does not cover the dates (climateSource), a season over 366 days (endDate) …; a missing fuel price is no error (heat and fuel, costs null)';
 
 /** Season calculations compute and store nothing, so they answer 200, not 201. */
 @ApiTags('season')
@@ -200,8 +200,10 @@ export class SeasonController {
       startDate: query.startDate,
       endDate: query.endDate,
       climateSource: query.temperatureLogId ? { temperatureLogId: query.temperatureLogId } : undefined,
+      heatLossBasis: query.heatLossBasis,
     });
-    const filename = `season-budget-farm-${farmId}-${budget.startDate}-to-${budget.endDate}-${units}.csv`;
+    const basis = budget.heatLossBasis === 'handbook' ? '' : `-as-calibrated`;
+    const filename = `season-budget-farm-${farmId}-${budget.startDate}-to-${budget.endDate}${basis}-${units}.csv`;
     response.setHeader('Content-Disposition', `attachment; filename="${filename}"`);
     return budgetCsv(budget, units);
   }

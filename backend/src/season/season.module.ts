@@ -9,6 +9,11 @@ import { CalendarService } from './calendar.service';
 import { FuelPricesService } from './fuel-prices.service';
 import { FarmFuelPrice } from './models/farm-fuel-price.model';
 import { HouseCalendar } from './models/house-calendar.model';
+import { HouseMeasurePlan } from './models/house-measure-plan.model';
+import { MeasurePlanController } from './measure-plan.controller';
+import { MeasurePlanService } from './measure-plan.service';
+import { SavedCalibration } from '../calibration/models/saved-calibration.model';
+import { HeatLossBasisService } from './heat-loss-basis.service';
 import { SeasonBudgetService } from './season-budget.service';
 import { SeasonInputsService } from './season-inputs.service';
 import { SeasonController } from './season.controller';
@@ -18,14 +23,14 @@ import { SunCacheService } from './sun-cache.service';
 /** Season engine over HTTP; brings the temperature-log routes with it (one entry in AppModule). */
 @Module({
   imports: [
-    SequelizeModule.forFeature([FarmFuelPrice, HouseCalendar]),
+    SequelizeModule.forFeature([FarmFuelPrice, HouseCalendar, HouseMeasurePlan, SavedCalibration]),
     FarmsModule,
     HousesModule,
     AlternativesModule,
     ClimateModule,
     TemperatureLogsModule,
   ],
-  controllers: [SeasonController],
+  controllers: [SeasonController, MeasurePlanController],
   providers: [
     SunCacheService,
     SeasonInputsService,
@@ -33,7 +38,9 @@ import { SunCacheService } from './sun-cache.service';
     SeasonBudgetService,
     CalendarService,
     FuelPricesService,
+    MeasurePlanService,
+    HeatLossBasisService,
   ],
-  exports: [SeasonService, SeasonInputsService, SunCacheService],
+  exports: [SeasonService, SeasonInputsService, SunCacheService, HeatLossBasisService],
 })
 export class SeasonModule {}

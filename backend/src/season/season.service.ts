@@ -10,6 +10,7 @@ import { houseToSpec } from '../houses/house.mapper';
 import { HousesService } from '../houses/houses.service';
 import type { House } from '../houses/models/house.model';
 import type { FarmFuelPrice } from './models/farm-fuel-price.model';
+import type { HeatLossBasis } from './dto/heat-loss-basis.dto';
 import { ReferenceDataService } from '../reference-data/reference-data.service';
 import type {
   MeasureDto,
@@ -32,6 +33,7 @@ import {
   type HouseFuelChoice,
 } from './season-inputs.service';
 import { SunCacheService } from './sun-cache.service';
+import { HeatLossBasisService } from './heat-loss-basis.service';
 
 function toEngineMeasure(dto: MeasureDto): Measure {
   const { costAmount, ...settings } = dto;
@@ -52,6 +54,7 @@ export class SeasonService {
     private readonly inputs: SeasonInputsService,
     private readonly reference: ReferenceDataService,
     private readonly sun: SunCacheService,
+    private readonly basis: HeatLossBasisService,
   ) {}
 
   async season(user: AuthenticatedUser, houseId: number, body: SeasonRequestDto): Promise<HouseSeasonEstimateDto> {
@@ -137,7 +140,7 @@ export class SeasonService {
     stored: House,
     house: HouseSpec,
     calendarOverride: ProductionCalendar | null | undefined,
-    body: SeasonOptionsDto & { startDate?: string; endDate?: string },
+    body: SeasonOptionsDto & { startDate?: string; endDate?: string; heatLossBasis?: HeatLossBasis },
     shared?: { context: FarmSeasonContext; prices: Map<string, FarmFuelPrice> },
   ): Promise<PreparedSeasonRun> {
     const houseId = stored.id;
@@ -154,8 +157,15 @@ export class SeasonService {
       fuel: choice.fuel,
       heaterEfficiency: choice.heaterEfficiency,
     };
+    const basis = (await this.basis.forFarm(farm.id, body.heatLossBasis)).forHouse(
+      houseId,
+      stored.name,
+      stored.version,
+    );
+    if (basis.heatLossBasis === 'calibrated') input.heatLossFactor = basis.heatLossFactor;
     const inputsUsed: SeasonInputsUsedDto = {
       ...this.inputs.runInputs(context, choice),
+      ...basis,
       startDate: context.season.startDate,
       endDate: context.season.endDate,
       seasonFrom: context.seasonFrom,

@@ -6,6 +6,8 @@ import { Farm } from '../farms/models/farm.model';
 import { ReferenceDataModule } from '../reference-data/reference-data.module';
 import { TemperatureLogsModule } from '../temperature-logs/temperature-logs.module';
 import { WeatherYear } from './models/weather-year.model';
+import { LogClimateController } from './log-climate.controller';
+import { LogClimateService } from './log-climate.service';
 import { WeatherController } from './weather.controller';
 import { WeatherService } from './weather.service';
 
@@ -17,8 +19,8 @@ import { WeatherService } from './weather.service';
     ReferenceDataModule,
     TemperatureLogsModule,
   ],
-  controllers: [WeatherController],
-  providers: [WeatherService],
+  controllers: [WeatherController, LogClimateController],
+  providers: [WeatherService, LogClimateService],
   exports: [WeatherService],
 })
 export class WeatherModule {}

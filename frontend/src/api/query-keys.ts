@@ -121,6 +121,13 @@ export const alternativeKeys = {
     [...alternativeKeys.all, 'side-by-side', houseId, version, request] as const,
 };
 
+/** A farm's fuel bills and the calibrations run against them. */
+export const calibrationKeys = {
+  all: ['calibration'] as const,
+  records: (farmId: number) => [...calibrationKeys.all, 'records', farmId] as const,
+  calibrations: (farmId: number) => [...calibrationKeys.all, 'runs', farmId] as const,
+};
+
 export const reportKeys = {
   all: ['reports'] as const,
   house: (houseId: number) => [...reportKeys.all, 'house', houseId] as const,

@@ -685,6 +685,24 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/houses/{houseId}/measure-plan": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** The measures kept with the house, with their costs (house:read) */
+        get: operations["MeasurePlanController_get"];
+        /** Keep these measures and costs with the house (house:write) */
+        put: operations["MeasurePlanController_put"];
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/houses/{houseId}/alternatives": {
         parameters: {
             query?: never;
@@ -873,6 +891,22 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/farms/{farmId}/temperature-logs/{logId}/climate-proposal": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["LogClimateController_proposal"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/houses/{houseId}/reports": {
         parameters: {
             query?: never;
@@ -1018,6 +1052,111 @@ export interface paths {
         put?: never;
         /** The house and up to four of its alternatives, each with its design night, summer cooling, season, light and (for an alternative) saving and payback against the house (estimate:run) */
         post: operations["SideBySideController_compare"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/farms/{farmId}/fuel-records": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** The farm's fuel bills and tank deliveries, oldest first (farm:read) */
+        get: operations["FuelRecordsController_list"];
+        put?: never;
+        /** Add a fuel bill or tank delivery (house:write) */
+        post: operations["FuelRecordsController_create"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/fuel-records/{recordId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post?: never;
+        /** Delete a fuel record (house:write) */
+        delete: operations["FuelRecordsController_remove"];
+        options?: never;
+        head?: never;
+        /** Change a fuel record (house:write) */
+        patch: operations["FuelRecordsController_update"];
+        trace?: never;
+    };
+    "/api/farms/{farmId}/fuel-records/inspect": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Read a fuel-record CSV and propose which columns hold what; stores nothing (house:write) */
+        post: operations["FuelRecordsController_inspect"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/farms/{farmId}/fuel-records/upload": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Store every row of a fuel-record CSV read with the confirmed columns; nothing is stored when any row is bad (house:write) */
+        post: operations["FuelRecordsController_upload"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/farms/{farmId}/calibrations": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** The farm's saved calibrations, newest first (the first is the one estimates use) (farm:read) */
+        get: operations["CalibrationController_list"];
+        put?: never;
+        /** Fit each meter's heat-loss factor to the farm's fuel records and save it with its inputs (house:write); run again when new bills arrive */
+        post: operations["CalibrationController_run"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/calibrations/{calibrationId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** One saved calibration (farm:read) */
+        get: operations["CalibrationController_get"];
+        put?: never;
+        post?: never;
         delete?: never;
         options?: never;
         head?: never;
@@ -1171,6 +1310,11 @@ export interface components {
             longitudeDeg: number;
             elevationM: number;
             timeZone: string;
+            /**
+             * @description ISO 4217 code every amount of the farm is written in
+             * @example USD
+             */
+            currency: string;
             /** @enum {string} */
             myRole: "owner" | "grower" | "adviser" | "viewer";
             permissions: ("farm:read" | "farm:update" | "farm:delete" | "members:manage" | "house:read" | "house:write" | "alternative:write" | "estimate:run" | "report:write")[];
@@ -1191,6 +1335,11 @@ export interface components {
             elevationM: number;
             /** @example America/Chicago */
             timeZone: string;
+            /**
+             * @description ISO 4217 code every amount of the farm is written in (default USD)
+             * @example EUR
+             */
+            currency?: string;
         };
         UpdateFarmDto: {
             /** @example North Ridge Produce */
@@ -1203,6 +1352,11 @@ export interface components {
             elevationM?: number;
             /** @example America/Chicago */
             timeZone?: string;
+            /**
+             * @description ISO 4217 code every amount of the farm is written in (default USD)
+             * @example EUR
+             */
+            currency?: string;
         };
         MemberDto: {
             userId: number;
@@ -1496,6 +1650,10 @@ export interface components {
             curtainClosed?: boolean;
             /** @description design wind speed, m/s; default the farm climate's, else the 6.7 m/s (15 mph) the U tables assume */
             designWindSpeedMPerS?: number;
+            /** @description size for a clear night: add the long-wave loss to a sky colder than the air through a covering that passes thermal infrared; default false (the tabulated U-values, surroundings at the outdoor air temperature) */
+            clearSky?: boolean;
+            /** @description outdoor dew point on a clear design night, °C (at most the design temperature); default 3 K below it */
+            outdoorDewPointC?: number;
         };
         HeatingEstimateRequestDto: {
             house: components["schemas"]["HouseSpecDto"];
@@ -1536,7 +1694,7 @@ export interface components {
         };
         HeatLossComponentDto: {
             /** @enum {string} */
-            key: "roof" | "sidewalls" | "endwalls" | "kneewall" | "perimeter" | "infiltration";
+            key: "roof" | "sidewalls" | "endwalls" | "kneewall" | "perimeter" | "infiltration" | "sky";
             label: string;
             /** @description area (m²), perimeter (m) or volume (m³), see quantityUnit */
             quantity: number;
@@ -1568,6 +1726,8 @@ export interface components {
             perimeterW: number;
             /** @description air leakage, W */
             infiltrationW: number;
+            /** @description long-wave loss to a clear night sky, W (0 unless a clear night was asked for) */
+            skyW: number;
             curtainApplied: boolean;
             wind: components["schemas"]["WindSummaryDto"];
             components: components["schemas"]["HeatLossComponentDto"][];
@@ -1841,6 +2001,10 @@ export interface components {
             curtainClosed?: boolean;
             /** @description design wind speed, m/s; default the farm climate's, else the 6.7 m/s (15 mph) the U tables assume */
             designWindSpeedMPerS?: number;
+            /** @description size for a clear night: add the long-wave loss to a sky colder than the air through a covering that passes thermal infrared; default false (the tabulated U-values, surroundings at the outdoor air temperature) */
+            clearSky?: boolean;
+            /** @description outdoor dew point on a clear design night, °C (at most the design temperature); default 3 K below it */
+            outdoorDewPointC?: number;
         };
         HouseHeatingEstimateRequestDto: {
             conditions?: components["schemas"]["PartialHeatingConditionsDto"];
@@ -1857,6 +2021,7 @@ export interface components {
             curtainClosed: boolean;
             /** @description m/s */
             designWindSpeedMPerS: number;
+            clearSky: boolean;
         };
         HeatingConditionsSourceDto: {
             /** @enum {string} */
@@ -1871,6 +2036,8 @@ export interface components {
             curtainClosed: "default" | "request";
             /** @enum {string} */
             designWindSpeedMPerS: "farm climate" | "reference data" | "request";
+            /** @enum {string} */
+            clearSky: "default" | "request";
         };
         HouseHeatingEstimateDto: {
             geometry: components["schemas"]["HouseGeometrySummaryDto"];
@@ -1982,6 +2149,11 @@ export interface components {
              * @example 2027-05-31
              */
             endDate?: string;
+            /**
+             * @description 'handbook' (default) or 'calibrated': each house's heat-loss coefficient × the factor of the farm's newest calibration against its fuel bills (a house without one stays on the handbook, and the answer says so)
+             * @enum {string}
+             */
+            heatLossBasis?: "handbook" | "calibrated";
         };
         SeasonPeriodDto: {
             /** @description YYYY-MM-DD */
@@ -1999,7 +2171,8 @@ export interface components {
             unitSi: string;
             /** @example US gal */
             unitUs: string;
-            pricePerUnit: number;
+            /** @description null when no price is known */
+            pricePerUnit: number | null;
             /** @enum {string} */
             priceUnit: "si" | "us";
             /** @description the unit the price is per, e.g. 'US gal' */
@@ -2024,8 +2197,8 @@ export interface components {
             fuelQuantitySi: number;
             /** @description fuel in its US purchase unit (the fuel's unitUs) */
             fuelQuantityUs: number;
-            /** @description money, in the currency of the price */
-            cost: number;
+            /** @description money, in the farm's currency; null when no fuel price is known (heat and fuel are still given) */
+            cost: number | null;
             year: number;
             month: number;
             /** @description heated hours with any heat demand */
@@ -2048,8 +2221,8 @@ export interface components {
             fuelQuantitySi: number;
             /** @description fuel in its US purchase unit (the fuel's unitUs) */
             fuelQuantityUs: number;
-            /** @description money, in the currency of the price */
-            cost: number;
+            /** @description money, in the farm's currency; null when no fuel price is known (heat and fuel are still given) */
+            cost: number | null;
             heatingHours: number;
             /** @description heat the installed heaters could not deliver, kWh */
             unmetHeatKWh: number;
@@ -2081,6 +2254,27 @@ export interface components {
             /** @description change from the previous step, kWh */
             changeKWh: number;
         };
+        ConventionalBaseCheckDto: {
+            /** @description heat delivered to the house, kWh */
+            energyKWh: number;
+            /** @description heat content of the fuel burnt (energy ÷ efficiency), kWh */
+            fuelInputKWh: number;
+            /** @description fuel in its SI purchase unit (the fuel's unitSi) */
+            fuelQuantitySi: number;
+            /** @description fuel in its US purchase unit (the fuel's unitUs) */
+            fuelQuantityUs: number;
+            /** @description money, in the farm's currency; null when no fuel price is known (heat and fuel are still given) */
+            cost: number | null;
+            /** @description 18.333 °C (65 °F) */
+            baseTemperatureC: number;
+            /** @description degree-days of the heated days to that base, K·day */
+            degreeDaysKDay: number;
+            /** @description °F·day */
+            degreeDaysFDay: number;
+            /** @description why the setpoint base is the one for a greenhouse; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
+            note: string;
+            source: string;
+        };
         DegreeDayCrossCheckDto: {
             /** @description heat delivered to the house, kWh */
             energyKWh: number;
@@ -2090,8 +2284,8 @@ export interface components {
             fuelQuantitySi: number;
             /** @description fuel in its US purchase unit (the fuel's unitUs) */
             fuelQuantityUs: number;
-            /** @description money, in the currency of the price */
-            cost: number;
+            /** @description money, in the farm's currency; null when no fuel price is known (heat and fuel are still given) */
+            cost: number | null;
             /** @description the base each heated day is counted to; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
             baseDescription: string;
             /** @description the base when it is the same all season, else null, °C */
@@ -2108,6 +2302,8 @@ export interface components {
             steps: components["schemas"]["DegreeDayStepDto"][];
             /** @description may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
             explanation: string[];
+            /** @description the same method to the conventional 65 °F (18.3 °C) base, beside the setpoint base */
+            conventionalBase: components["schemas"]["ConventionalBaseCheckDto"];
         };
         SeasonAssumptionDto: {
             key: string;
@@ -2129,11 +2325,20 @@ export interface components {
             fuelId: string;
             /** @enum {string} */
             fuelFrom: "request" | "house-heater";
-            pricePerUnit: number;
+            /** @description null when the farm has no price for the fuel and the request gave none */
+            pricePerUnit: number | null;
             /** @enum {string} */
             priceUnit: "si" | "us";
-            /** @enum {string} */
-            priceFrom: "request" | "farm-fuel-prices";
+            /**
+             * @description 'none': no price yet, so heat and fuel are given and every cost is null
+             * @enum {string}
+             */
+            priceFrom: "request" | "farm-fuel-prices" | "none";
+            /**
+             * @description the farm's currency (ISO 4217) every amount is in
+             * @example USD
+             */
+            currency: string;
             heaterEfficiency: number;
             /** @enum {string} */
             heaterEfficiencyFrom: "request" | "house-heater";
@@ -2141,6 +2346,23 @@ export interface components {
             timeZone: string;
             /** @description the zone's standard-time offset from UTC (daylight saving ignored), h */
             utcOffsetHours: number;
+            /**
+             * @description the basis asked for
+             * @enum {string}
+             */
+            heatLossBasisRequested: "handbook" | "calibrated";
+            /**
+             * @description the basis used (handbook when the house has no calibration)
+             * @enum {string}
+             */
+            heatLossBasis: "handbook" | "calibrated";
+            /** @description multiplier applied to the heat-loss coefficient (1 on the handbook basis) */
+            heatLossFactor: number;
+            calibrationId: number | null;
+            /** @description when the calibration used was run, ISO 8601 */
+            calibratedAt: string | null;
+            /** @description why the handbook was used although calibrated was asked for, or that the house changed after its calibration */
+            heatLossBasisNote: string | null;
             startDate: string;
             endDate: string;
             /** @enum {string} */
@@ -2213,11 +2435,20 @@ export interface components {
             fuelId: string;
             /** @enum {string} */
             fuelFrom: "request" | "house-heater";
-            pricePerUnit: number;
+            /** @description null when the farm has no price for the fuel and the request gave none */
+            pricePerUnit: number | null;
             /** @enum {string} */
             priceUnit: "si" | "us";
-            /** @enum {string} */
-            priceFrom: "request" | "farm-fuel-prices";
+            /**
+             * @description 'none': no price yet, so heat and fuel are given and every cost is null
+             * @enum {string}
+             */
+            priceFrom: "request" | "farm-fuel-prices" | "none";
+            /**
+             * @description the farm's currency (ISO 4217) every amount is in
+             * @example USD
+             */
+            currency: string;
             heaterEfficiency: number;
             /** @enum {string} */
             heaterEfficiencyFrom: "request" | "house-heater";
@@ -2235,8 +2466,8 @@ export interface components {
             fuelQuantitySi: number;
             /** @description fuel in its US purchase unit (the fuel's unitUs) */
             fuelQuantityUs: number;
-            /** @description money, in the currency of the price */
-            cost: number;
+            /** @description money, in the farm's currency; null when no fuel price is known (heat and fuel are still given) */
+            cost: number | null;
             houseId: number;
             /** @description the evening the night begins, YYYY-MM-DD */
             date: string;
@@ -2338,6 +2569,11 @@ export interface components {
              * @example 2027-05-31
              */
             endDate?: string;
+            /**
+             * @description 'handbook' (default) or 'calibrated': each house's heat-loss coefficient × the factor of the farm's newest calibration against its fuel bills (a house without one stays on the handbook, and the answer says so)
+             * @enum {string}
+             */
+            heatLossBasis?: "handbook" | "calibrated";
             /** @description measures to compare; an empty list compares the default measures (reference-data/measures.json) that apply to the house, without costs, so a ranking shows at once */
             measures: components["schemas"]["MeasureDto"][];
         };
@@ -2350,8 +2586,8 @@ export interface components {
             fuelQuantitySi: number;
             /** @description fuel in its US purchase unit (the fuel's unitUs) */
             fuelQuantityUs: number;
-            /** @description money, in the currency of the price */
-            cost: number;
+            /** @description money, in the farm's currency; null when no fuel price is known (heat and fuel are still given) */
+            cost: number | null;
             fuelId: string;
             unitSi: string;
             unitUs: string;
@@ -2394,17 +2630,17 @@ export interface components {
             fuelSavedSi: number | null;
             /** @description in the baseline fuel's unitUs */
             fuelSavedUs: number | null;
-            /** @description money saved per season (= per year with one season a year); negative when it costs more to run */
-            yearlyMoneySaved: number;
+            /** @description money saved per season (= per year with one season a year); negative when it costs more to run; null without a fuel price */
+            yearlyMoneySaved: number | null;
             /**
-             * @description 'years': cost ÷ saving; 'immediate': cost 0 and a saving; 'enter-cost': a saving but no cost entered; 'never': no money saved; 'not-applicable': changes nothing for this house
+             * @description 'years': cost ÷ saving; 'immediate': cost 0 and a saving; 'enter-cost': a saving but no cost entered; 'enter-price': fuel saved but no fuel price known; 'never': no money saved; 'not-applicable': changes nothing for this house
              * @enum {string}
              */
-            paybackStatus: "years" | "immediate" | "enter-cost" | "never" | "not-applicable";
+            paybackStatus: "years" | "immediate" | "enter-cost" | "enter-price" | "never" | "not-applicable";
             /** @description cost ÷ yearly money saved, years (0 when 'immediate'); null for the other statuses */
             paybackYears: number | null;
             /**
-             * @description '2.4 years', 'immediately', 'enter a cost', 'never' or 'not applicable'
+             * @description '2.4 years', 'immediately', 'enter a cost', 'enter the fuel price', 'never' or 'not applicable'
              * @example 2.4 years
              */
             paybackText: string;
@@ -2512,6 +2748,11 @@ export interface components {
             endDate?: string;
             /** @description 'normals' (default: the farm's monthly climate normals) or { temperatureLogId } to use a logged year instead */
             climateSource?: "normals" | components["schemas"]["TemperatureLogClimateSourceDto"];
+            /**
+             * @description 'handbook' (default) or 'calibrated': each house's heat-loss coefficient × the factor of the farm's newest calibration against its fuel bills (a house without one stays on the handbook, and the answer says so)
+             * @enum {string}
+             */
+            heatLossBasis?: "handbook" | "calibrated";
         };
         BudgetMonthOfHouseDto: {
             year: number;
@@ -2530,6 +2771,13 @@ export interface components {
             hoursBelowSetpoint: number;
         };
         BudgetHouseDto: {
+            /**
+             * @description the heat-loss basis this house was estimated on
+             * @enum {string}
+             */
+            heatLossBasis: "handbook" | "calibrated";
+            /** @description multiplier applied to its heat-loss coefficient (1 on the handbook basis) */
+            heatLossFactor: number;
             houseId: number;
             name: string;
             /** @description fuel of the first heater; null when the house has no heaters */
@@ -2591,11 +2839,22 @@ export interface components {
             energyKWh: number;
             /** @description kWh */
             fuelInputKWh: number;
-            /** @description cost of the priced fuels */
-            cost: number;
+            /** @description cost of the houses with a price; null when no house of the month has one */
+            cost: number | null;
             byFuel: components["schemas"]["BudgetMonthFuelDto"][];
         };
         SeasonBudgetDto: {
+            /** @enum {string} */
+            heatLossBasisRequested: "handbook" | "calibrated";
+            /**
+             * @description mixed: some houses calibrated, the others on the handbook values
+             * @enum {string}
+             */
+            heatLossBasis: "handbook" | "calibrated" | "mixed";
+            calibrationId: number | null;
+            calibratedAt: string | null;
+            /** @description the basis in words, for the page and the report */
+            heatLossBasisStatement: string;
             farmId: number;
             startDate: string;
             endDate: string;
@@ -2608,8 +2867,13 @@ export interface components {
             byFuel: components["schemas"]["BudgetFuelTotalDto"][];
             /** @description heat delivered to all houses, kWh */
             totalEnergyKWh: number;
-            /** @description sum of the priced houses */
-            totalCost: number;
+            /** @description sum of the priced houses; null when no house has a price */
+            totalCost: number | null;
+            /**
+             * @description the farm's currency (ISO 4217) every amount is in
+             * @example USD
+             */
+            currency: string;
             /** @description false when some house has no price (or no heaters) and is left out of totalCost */
             costComplete: boolean;
             monthly: components["schemas"]["BudgetMonthDto"][];
@@ -2617,6 +2881,17 @@ export interface components {
             notes: string[];
             /** @description may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
             cautions: string[];
+        };
+        MeasurePlanDto: {
+            houseId: number;
+            /** @description empty until the first save */
+            measures: components["schemas"]["MeasureDto"][];
+            /** @description raised on every save; 0 before the first */
+            version: number;
+        };
+        PutMeasurePlanDto: {
+            /** @description the measures to keep with the house, each with its settings and cost (null cost = not known yet) */
+            measures: components["schemas"]["MeasureDto"][];
         };
         FieldProblemDto: {
             /**
@@ -2887,6 +3162,56 @@ export interface components {
             proposedClimate: components["schemas"]["SiteClimateDto"];
             currentClimate: components["schemas"]["SiteClimateDto"] | null;
         };
+        LogProposedClimateDto: {
+            /** @description heating design dry bulb (99 % or 99.6 %), °C */
+            winterDesignC: number;
+            /** @description cooling design dry bulb (1 %), °C */
+            summerDesignC: number;
+            /** @description mean daily range on the summer design day, K */
+            summerDailyRangeK: number;
+            /** @description exactly 12 rows, one per month */
+            monthly: components["schemas"]["MonthlyClimateDto"][];
+            /** @description where the numbers came from (e.g. national climate normals, station name) */
+            sourceNote?: string | null;
+            /** @description winter design wind speed, m/s; null: the 6.7 m/s (15 mph) the U tables assume (reference-data/wind.json) */
+            designWindSpeedMPerS?: number | null;
+            /** @description the farm's current coincident wet bulb (a temperature log has no humidity); null when it has none */
+            summerDesignWetBulbC: number | null;
+        };
+        LogClimateProposalDto: {
+            farmId: number;
+            temperatureLogId: number;
+            temperatureLogName: string;
+            /** @description first hour of the log, local standard time 'YYYY-MM-DDTHH:00' */
+            firstHour: string;
+            /** @description last hour of the log, local standard time */
+            lastHour: string;
+            /** @description hours from the first to the last */
+            hourCount: number;
+            /** @description hours with a reading (the percentiles are over these) */
+            hoursUsed: number;
+            /** @description dry bulb that 99.6 % of the hours are at or above, °C */
+            winterDesign996C: number;
+            /** @description dry bulb that 99 % of the hours are at or above, °C */
+            winterDesign99C: number;
+            /** @description dry bulb that 0.4 % of the hours are at or above, °C */
+            summerDesign04C: number;
+            /** @description dry bulb that 1 % of the hours are at or above, °C */
+            summerDesign1C: number;
+            /** @description always null: a temperature log has no humidity */
+            summerCoincidentWetBulb04C: number | null;
+            /** @description always null: a temperature log has no humidity */
+            summerCoincidentWetBulb1C: number | null;
+            /** @description mean daily range of the warmest month, K */
+            summerDailyRangeK: number;
+            /** @description clearness is null (no sunshine logged) */
+            monthly: components["schemas"]["MonthlyFromWeatherDto"][];
+            /** @description what would be saved (99.6 % heating, 1 % cooling) */
+            proposedClimate: components["schemas"]["LogProposedClimateDto"];
+            currentClimate: components["schemas"]["SiteClimateDto"] | null;
+            /** @description how the values were worked out, in words */
+            notes: string[];
+        };
         CreateReportDto: {
             /** @example Heater sizing, north house */
             title: string;
@@ -3023,6 +3348,11 @@ export interface components {
              * @example 2027-05-31
              */
             endDate?: string;
+            /**
+             * @description 'handbook' (default) or 'calibrated': each house's heat-loss coefficient × the factor of the farm's newest calibration against its fuel bills (a house without one stays on the handbook, and the answer says so)
+             * @enum {string}
+             */
+            heatLossBasis?: "handbook" | "calibrated";
             /** @description ids of the house's alternatives to set beside it, in column order (at most 4) */
             alternativeIds?: number[];
         };
@@ -3056,8 +3386,8 @@ export interface components {
             changeFromHouse: number;
         };
         VersusHouseDto: {
-            /** @description the house's season cost − this column's, money a year (positive = saves) */
-            yearlySaving: number;
+            /** @description the house's season cost − this column's, money a year (positive = saves); null without a fuel price */
+            yearlySaving: number | null;
             /** @description heat delivered, house − this column, kWh a season */
             heatSavedKWh: number;
             /** @description heat content of the fuel burnt, house − this column, kWh a season */
@@ -3067,10 +3397,10 @@ export interface components {
             /** @description cost ÷ yearly saving, years */
             paybackYears: number | null;
             /**
-             * @description 'enter-cost' when no cost is entered; 'never' when it saves nothing
+             * @description 'enter-cost' when no cost is entered; 'enter-price' when the farm has no price for the fuel; 'never' when it saves nothing
              * @enum {string}
              */
-            paybackStatus: "years" | "immediate" | "enter-cost" | "never";
+            paybackStatus: "years" | "immediate" | "enter-cost" | "enter-price" | "never";
         };
         SideBySideColumnDto: {
             /**
@@ -3104,6 +3434,189 @@ export interface components {
             heatingConditionsUsed: components["schemas"]["HeatingConditionsUsedDto"];
             /** @description the season inputs of the house's column */
             seasonInputsUsed: components["schemas"]["SeasonInputsUsedDto"];
+        };
+        FuelRecordDto: {
+            id: number;
+            farmId: number;
+            fuelId: string;
+            fuelLabel: string;
+            quantity: number;
+            quantityUnit: string;
+            /** @description the energy the quantity holds (higher heat content), kWh */
+            fuelEnergyKWh: number;
+            cost: number | null;
+            startDate: string;
+            endDate: string;
+            days: number;
+            houseIds: number[];
+            nonHeatingPerDay: number | null;
+            note: string | null;
+            version: number;
+        };
+        CreateFuelRecordDto: {
+            /**
+             * @description reference-data fuels id
+             * @example propane
+             */
+            fuelId: string;
+            /** @example 1200 */
+            quantity: number;
+            /**
+             * @description one of the fuel's purchase units: its unitSi or unitUs in reference-data/fuels.json (therm, m³, US gal, L, kWh, short ton, kg)
+             * @example US gal
+             */
+            quantityUnit: string;
+            /** @description money, the farm's currency; null = not entered */
+            cost?: number | null;
+            /**
+             * @description first day the bill covers (for a tank delivery: the day after the previous fill), YYYY-MM-DD
+             * @example 2025-11-01
+             */
+            startDate: string;
+            /**
+             * @description last day the bill covers (inclusive), YYYY-MM-DD; at most 366 days after the start
+             * @example 2025-11-30
+             */
+            endDate: string;
+            /** @description houses the meter or tank serves (houses of this farm) */
+            houseIds: number[];
+            /** @description fuel used for other things than heating the houses (a dryer, washing water), in quantityUnit per day; null = none */
+            nonHeatingPerDay?: number | null;
+            note?: string | null;
+        };
+        UpdateFuelRecordDto: {
+            /**
+             * @description reference-data fuels id
+             * @example propane
+             */
+            fuelId?: string;
+            /** @example 1200 */
+            quantity?: number;
+            /**
+             * @description one of the fuel's purchase units: its unitSi or unitUs in reference-data/fuels.json (therm, m³, US gal, L, kWh, short ton, kg)
+             * @example US gal
+             */
+            quantityUnit?: string;
+            /** @description money, the farm's currency; null = not entered */
+            cost?: number | null;
+            /**
+             * @description first day the bill covers (for a tank delivery: the day after the previous fill), YYYY-MM-DD
+             * @example 2025-11-01
+             */
+            startDate?: string;
+            /**
+             * @description last day the bill covers (inclusive), YYYY-MM-DD; at most 366 days after the start
+             * @example 2025-11-30
+             */
+            endDate?: string;
+            /** @description houses the meter or tank serves (houses of this farm) */
+            houseIds?: number[];
+            /** @description fuel used for other things than heating the houses (a dryer, washing water), in quantityUnit per day; null = none */
+            nonHeatingPerDay?: number | null;
+            note?: string | null;
+        };
+        FuelRecordColumnMappingDto: {
+            /** @description column holding the fuel (id or name); or give fuelId for every row */
+            fuelColumn?: string;
+            /** @description the fuel of every row, when the file has no fuel column */
+            fuelId?: string;
+            quantityColumn: string;
+            /** @description column holding the unit; or give unit for every row */
+            unitColumn?: string;
+            /** @description the unit of every row, when the file has no unit column */
+            unit?: string;
+            costColumn?: string;
+            startColumn: string;
+            endColumn: string;
+            /** @description column holding house names separated by ; or |; or give houseIds for every row */
+            housesColumn?: string;
+            /** @description the houses of every row, when the file has no house column */
+            houseIds?: number[];
+            nonHeatingColumn?: string;
+        };
+        FuelRecordCsvInspectionDto: {
+            columns: string[];
+            /** @description the first rows as read, at most 5 */
+            preview: string[][];
+            /** @description data rows in the file */
+            rowCount: number;
+            /** @description columns guessed from the header; the user confirms or changes them */
+            proposed: components["schemas"]["FuelRecordColumnMappingDto"];
+        };
+        FuelRecordsUploadResultDto: {
+            created: number;
+            records: components["schemas"]["FuelRecordDto"][];
+        };
+        CalibrationPeriodDto: {
+            /** @description the fuel record this period is */
+            recordId: number;
+            startDate: string;
+            endDate: string;
+            days: number;
+            /**
+             * @description where the outdoor temperatures came from
+             * @enum {string}
+             */
+            climateFrom: "temperature-log" | "normals";
+            temperatureLogName: string | null;
+            quantityUnit: string;
+            /** @description billed, in quantityUnit */
+            billedQuantity: number;
+            /** @description modelled with the handbook heat loss, non-heating use included, in quantityUnit */
+            handbookQuantity: number;
+            /** @description modelled with the fitted factor, in quantityUnit */
+            fittedQuantity: number | null;
+            /** @description kWh of fuel energy */
+            billedFuelKWh: number;
+            handbookFuelKWh: number;
+            fittedFuelKWh: number | null;
+            nonHeatingFuelKWh: number;
+            usedInFit: boolean;
+            note: string | null;
+        };
+        CalibrationMeterDto: {
+            /** @description one fuel and one set of houses, e.g. 'propane:3,4' */
+            key: string;
+            fuelId: string;
+            fuelLabel: string;
+            houseIds: number[];
+            houseNames: string[];
+            fitted: boolean;
+            /** @description why no factor was fitted */
+            refusal: string | null;
+            /** @description multiplier on the heat-loss coefficient */
+            factor: number | null;
+            /** @description lower end of the 90 % interval */
+            factorLow90: number | null;
+            factorHigh90: number | null;
+            standardError: number | null;
+            degreesOfFreedom: number | null;
+            /** @description ASHRAE Guideline 14 NMBE, % */
+            nmbePercent: number | null;
+            /** @description ASHRAE Guideline 14 CV(RMSE), % */
+            cvRmsePercent: number | null;
+            /** @description |NMBE| ≤ 5 % and CV(RMSE) ≤ 15 % (monthly limits) */
+            meetsGuideline14: boolean | null;
+            verdict: string;
+            meaning: string;
+            periods: components["schemas"]["CalibrationPeriodDto"][];
+        };
+        CalibrationHouseFactorDto: {
+            houseId: number;
+            name: string;
+            factor: number | null;
+            meterKey: string | null;
+        };
+        CalibrationDto: {
+            id: number;
+            farmId: number;
+            /** @description when the calibration was run, ISO 8601 */
+            createdAt: string;
+            /** @description fuel records the fit ran on */
+            recordCount: number;
+            meters: components["schemas"]["CalibrationMeterDto"][];
+            houses: components["schemas"]["CalibrationHouseFactorDto"][];
+            notes: string[];
         };
     };
     responses: never;
@@ -3478,6 +3991,13 @@ export interface operations {
                 };
                 content?: never;
             };
+            /** @description Too many attempts from this address or on this account */
+            429: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
         };
     };
     AuthController_requestPasswordReset: {
@@ -3500,6 +4020,13 @@ export interface operations {
                 content: {
                     "application/json": components["schemas"]["MessageDto"];
                 };
+            };
+            /** @description Too many requests from this address or for this e-mail address */
+            429: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
             };
         };
     };
@@ -3527,6 +4054,13 @@ export interface operations {
             };
             /** @description link used, expired or unknown; or the new password refused */
             400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description Too many attempts from this address */
+            429: {
                 headers: {
                     [name: string]: unknown;
                 };
@@ -3938,6 +4472,13 @@ export interface operations {
             };
             /** @description unknown, used, revoked or expired link */
             404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description Too many attempts from this address */
+            429: {
                 headers: {
                     [name: string]: unknown;
                 };
@@ -4397,7 +4938,7 @@ export interface operations {
                 };
                 content?: never;
             };
-            /** @description the engine cannot compute with the input, field named: no climate and no log (climateSource), no fuel price (pricePerUnit), a log that does not cover the dates (climateSource), a season over 366 days (endDate) … */
+            /** @description the engine cannot compute with the input, field named: no climate and no log (climateSource), a house without heaters (fuelId), a log that does not cover the dates (climateSource), a season over 366 days (endDate) …; a missing fuel price is no error (heat and fuel, costs null) */
             422: {
                 headers: {
                     [name: string]: unknown;
@@ -4450,7 +4991,7 @@ export interface operations {
                 };
                 content?: never;
             };
-            /** @description the engine cannot compute with the input, field named: no climate and no log (climateSource), no fuel price (pricePerUnit), a log that does not cover the dates (climateSource), a season over 366 days (endDate) … */
+            /** @description the engine cannot compute with the input, field named: no climate and no log (climateSource), a house without heaters (fuelId), a log that does not cover the dates (climateSource), a season over 366 days (endDate) …; a missing fuel price is no error (heat and fuel, costs null) */
             422: {
                 headers: {
                     [name: string]: unknown;
@@ -4503,7 +5044,7 @@ export interface operations {
                 };
                 content?: never;
             };
-            /** @description the engine cannot compute with the input, field named: no climate and no log (climateSource), no fuel price (pricePerUnit), a log that does not cover the dates (climateSource), a season over 366 days (endDate) …; measures[i].field for a measure's settings */
+            /** @description the engine cannot compute with the input, field named: no climate and no log (climateSource), a house without heaters (fuelId), a log that does not cover the dates (climateSource), a season over 366 days (endDate) …; a missing fuel price is no error (heat and fuel, costs null); measures[i].field for a measure's settings */
             422: {
                 headers: {
                     [name: string]: unknown;
@@ -4747,7 +5288,7 @@ export interface operations {
                 };
                 content?: never;
             };
-            /** @description the engine cannot compute with the input, field named: no climate and no log (climateSource), no fuel price (pricePerUnit), a log that does not cover the dates (climateSource), a season over 366 days (endDate) … */
+            /** @description the engine cannot compute with the input, field named: no climate and no log (climateSource), a house without heaters (fuelId), a log that does not cover the dates (climateSource), a season over 366 days (endDate) …; a missing fuel price is no error (heat and fuel, costs null) */
             422: {
                 headers: {
                     [name: string]: unknown;
@@ -4765,6 +5306,8 @@ export interface operations {
                 endDate?: string;
                 /** @description use this temperature log instead of the climate normals */
                 temperatureLogId?: number;
+                /** @description 'handbook' (default) or 'calibrated' (see the budget's heatLossBasis); the file name says which */
+                heatLossBasis?: "handbook" | "calibrated";
             };
             header?: never;
             path: {
@@ -4790,8 +5333,100 @@ export interface operations {
                 };
                 content?: never;
             };
-            /** @description the engine cannot compute with the input, field named: no climate and no log (climateSource), no fuel price (pricePerUnit), a log that does not cover the dates (climateSource), a season over 366 days (endDate) … */
+            /** @description the engine cannot compute with the input, field named: no climate and no log (climateSource), a house without heaters (fuelId), a log that does not cover the dates (climateSource), a season over 366 days (endDate) …; a missing fuel price is no error (heat and fuel, costs null) */
             422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    MeasurePlanController_get: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                houseId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["MeasurePlanDto"];
+                };
+            };
+            /** @description no such house, or not a member of its farm */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    MeasurePlanController_put: {
+        parameters: {
+            query?: never;
+            header: {
+                "if-match": string;
+                /** @description the `version` of the measure plan you loaded (0 if it has never been saved); every save raises it by one */
+                "If-Match": string;
+            };
+            path: {
+                houseId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["PutMeasurePlanDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["MeasurePlanDto"];
+                };
+            };
+            /** @description body fails validation; details per field */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description role lacks house:write */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no such house, or not a member of its farm */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description someone else saved the measure plan first; `current` holds what is stored now (the same shape as the answer to GET) */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description If-Match missing */
+            428: {
                 headers: {
                     [name: string]: unknown;
                 };
@@ -5406,6 +6041,36 @@ export interface operations {
             };
         };
     };
+    LogClimateController_proposal: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                farmId: number;
+                logId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description design temperatures and monthly normals from a year or more of the farm's hourly log (nothing is saved) */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["LogClimateProposalDto"];
+                };
+            };
+            /** @description the log is daily, covers less than a year of hours, or has more than 10 % of its hours missing */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
     ReportsController_listForHouse: {
         parameters: {
             query?: never;
@@ -5678,6 +6343,381 @@ export interface operations {
             };
             /** @description the house's own column cannot be computed (no climate, no fuel price …) or an id is not one of the house's alternatives; field named. An alternative that is not valid now is a column with `invalid`, not an error */
             422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    FuelRecordsController_list: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                farmId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["FuelRecordDto"][];
+                };
+            };
+            /** @description no such farm, or not a member */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    FuelRecordsController_create: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                farmId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["CreateFuelRecordDto"];
+            };
+        };
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["FuelRecordDto"];
+                };
+            };
+            /** @description a bad record or file: details name each row and field ('row 3.endDate') in the user's words; nothing is stored */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description role lacks house:write */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no such farm, or not a member */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    FuelRecordsController_remove: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                recordId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description role lacks house:write */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no such record, or not a member of its farm */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    FuelRecordsController_update: {
+        parameters: {
+            query?: never;
+            header: {
+                "if-match": string;
+                /** @description the `version` of the fuel record you loaded (0 if it has never been saved); every save raises it by one */
+                "If-Match": string;
+            };
+            path: {
+                recordId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["UpdateFuelRecordDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["FuelRecordDto"];
+                };
+            };
+            /** @description a bad record or file: details name each row and field ('row 3.endDate') in the user's words; nothing is stored */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description role lacks house:write */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no such record, or not a member of its farm */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description someone else saved the fuel record first; `current` holds what is stored now (the same shape as the answer to GET) */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description If-Match missing */
+            428: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    FuelRecordsController_inspect: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                farmId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "multipart/form-data": {
+                    /**
+                     * Format: binary
+                     * @description CSV file, UTF-8, at most 256 kB
+                     */
+                    file: string;
+                };
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["FuelRecordCsvInspectionDto"];
+                };
+            };
+            /** @description no file, or the file cannot be read */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description role lacks house:write */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no such farm, or not a member */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    FuelRecordsController_upload: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                farmId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "multipart/form-data": {
+                    /**
+                     * Format: binary
+                     * @description CSV file, UTF-8, at most 256 kB
+                     */
+                    file: string;
+                    /** @description FuelRecordColumnMappingDto as JSON */
+                    mapping: string;
+                };
+            };
+        };
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["FuelRecordsUploadResultDto"];
+                };
+            };
+            /** @description a bad record or file: details name each row and field ('row 3.endDate') in the user's words; nothing is stored */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description role lacks house:write */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no such farm, or not a member */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    CalibrationController_list: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                farmId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["CalibrationDto"][];
+                };
+            };
+            /** @description no such farm, or not a member */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    CalibrationController_run: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                farmId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["CalibrationDto"];
+                };
+            };
+            /** @description role lacks house:write */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no such farm, or not a member */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no factor could be fitted (fewer than three bills with heating per meter, no climate for a bill …); the message says why */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    CalibrationController_get: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                calibrationId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["CalibrationDto"];
+                };
+            };
+            /** @description no such calibration, or not a member of its farm */
+            404: {
                 headers: {
                     [name: string]: unknown;
                 };

@@ -19,6 +19,7 @@ const HousePage = lazy(() => import('./routes/house-page'));
 const HouseSeasonPage = lazy(() => import('./routes/house-season-page'));
 const ReportPage = lazy(() => import('./routes/report-page'));
 const SideBySidePage = lazy(() => import('./routes/side-by-side-page'));
+const FuelRecordsPage = lazy(() => import('./routes/fuel-records-page'));
 const SettingsPage = lazy(() => import('./routes/settings-page'));
 const AdminUsersPage = lazy(() => import('./routes/admin-users-page'));
 const AdminOutboxPage = lazy(() => import('./routes/admin-outbox-page'));
@@ -46,6 +47,7 @@ export function createAppRouter() {
             { path: 'farms', element: <FarmsPage /> },
             { path: 'farms/:farmId', element: <FarmPage /> },
             { path: 'farms/:farmId/houses/new', element: <NewHousePage /> },
+            { path: 'farms/:farmId/fuel-records', element: <FuelRecordsPage /> },
             { path: 'houses/:houseId', element: <HousePage /> },
             { path: 'houses/:houseId/season', element: <HouseSeasonPage /> },
             { path: 'reports/:reportId', element: <ReportPage /> },

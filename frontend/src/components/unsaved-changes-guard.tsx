@@ -7,7 +7,16 @@ import { ConfirmDialog } from './confirm-dialog';
  * to another page (React Router's blocker; the app uses a data router), and the browser's own
  * question on reload or closing the tab (`beforeunload`).
  */
-export function UnsavedChangesGuard({ dirty, what = 'this house' }: { dirty: boolean; what?: string }) {
+export function UnsavedChangesGuard({
+  dirty,
+  what = 'this house',
+  offerAlternative = true,
+}: {
+  dirty: boolean;
+  what?: string;
+  /** whether the page can keep the edits as an alternative (a house not yet created cannot) */
+  offerAlternative?: boolean;
+}) {
   const blocker = useBlocker(
     ({ currentLocation, nextLocation }) =>
       dirty && (currentLocation.pathname !== nextLocation.pathname || currentLocation.search !== nextLocation.search),
@@ -31,7 +40,7 @@ export function UnsavedChangesGuard({ dirty, what = 'this house' }: { dirty: boo
     <ConfirmDialog
       open={blocker.state === 'blocked'}
       title="Leave without saving?"
-      message={`Your edits to ${what} are not saved. Leave this page and lose them, or stay to save them (or save them as an alternative).`}
+      message={`Your edits to ${what} are not saved. Leave this page and lose them, or stay to save them${offerAlternative ? ' (or save them as an alternative)' : ''}.`}
       confirmLabel="Leave and lose edits"
       onClose={() => blocker.reset?.()}
       onConfirm={() => blocker.proceed?.()}

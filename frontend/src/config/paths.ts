@@ -21,4 +21,5 @@ export const paths = {
   adminUsers: '/admin/users',
   adminOutbox: '/admin/outbox',
   messages: '/messages',
+  fuelRecords: (farmId: number | string) => `/farms/${farmId}/fuel-records`,
 } as const;

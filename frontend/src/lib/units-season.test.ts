@@ -1,6 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import {
   formatFuelQuantity,
+  currencyCodes,
+  currencyDecimals,
+  currencySymbol,
   formatMoney,
   formatQuantity,
   fromDisplay,
@@ -69,9 +72,16 @@ describe('units: fuel quantities and money', () => {
     expect(formatFuelQuantity(null, propane, 'si')).toBe('—');
   });
 
-  it('formats money with grouping and no currency symbol (prices are in the grower’s own currency)', () => {
-    expect(formatMoney(10_541.4169)).toBe('10,541.42');
-    expect(formatMoney(36_800.06, 0)).toBe('36,800');
-    expect(formatMoney(null)).toBe('—');
+  it("formats money in the farm's currency with Intl.NumberFormat, in the currency's own decimals", () => {
+    expect(formatMoney(10_541.4169, 'USD')).toBe('$10,541.42');
+    expect(formatMoney(36_800.06, 'USD', 0)).toBe('$36,800');
+    expect(formatMoney(10_541.4169, 'EUR')).toBe('€10,541.42');
+    expect(formatMoney(10_541.4169, 'CAD')).toBe('CA$10,541.42');
+    // ISO 4217 gives the yen no minor unit
+    expect(currencyDecimals('JPY')).toBe(0);
+    expect(formatMoney(10_541.4169, 'JPY')).toBe('¥10,541');
+    expect(currencySymbol('EUR')).toBe('€');
+    expect(currencyCodes()).toEqual(expect.arrayContaining(['USD', 'EUR', 'CAD', 'MXN']));
+    expect(formatMoney(null, 'USD')).toBe('—');
   });
 });

@@ -116,15 +116,57 @@ export function kWhToTherms(kWh: number): number {
   return (kWh * JOULES_PER_KWH) / JOULES_PER_THERM;
 }
 
+/** The ISO 4217 codes this browser can format, for the farm's currency list. */
+export function currencyCodes(): string[] {
+  try {
+    return Intl.supportedValuesOf('currency');
+  } catch {
+    return ['USD', 'EUR', 'CAD', 'GBP', 'MXN', 'AUD'];
+  }
+}
+
+/** Decimals a currency is usually written with (2 for USD, EUR; 0 for JPY). */
+export function currencyDecimals(currency: string): number {
+  try {
+    return new Intl.NumberFormat('en-US', { style: 'currency', currency }).resolvedOptions().maximumFractionDigits ?? 2;
+  } catch {
+    return 2;
+  }
+}
+
 /**
- * Money has no unit conversion (prices are entered in the grower's own currency): grouped
- * thousands, two decimals, no currency symbol.
+ * Money has no unit conversion: it is written in the farm's currency (an ISO 4217 code) with
+ * Intl.NumberFormat, e.g. "$1,234.50", "€1,234.50", "CA$1,234.50". `decimals` defaults to the
+ * currency's own; '—' for no amount.
  */
-export function formatMoney(amount: number | null | undefined, decimals = 2): string {
+export function formatMoney(amount: number | null | undefined, currency: string, decimals?: number): string {
   if (amount === null || amount === undefined || !Number.isFinite(amount)) return '—';
-  return new Intl.NumberFormat('en-US', { minimumFractionDigits: decimals, maximumFractionDigits: decimals }).format(
-    roundTo(amount, decimals),
-  );
+  let digits = decimals ?? currencyDecimals(currency);
+  try {
+    return new Intl.NumberFormat('en-US', {
+      style: 'currency',
+      currency,
+      minimumFractionDigits: digits,
+      maximumFractionDigits: digits,
+    }).format(roundTo(amount, digits) || 0);
+  } catch {
+    // an unknown code (never stored by the API): the number with the code beside it
+    digits = decimals ?? 2;
+    const number = new Intl.NumberFormat('en-US', { minimumFractionDigits: digits, maximumFractionDigits: digits });
+    return `${number.format(roundTo(amount, digits))} ${currency}`;
+  }
+}
+
+/** The currency's sign alone, e.g. '$', '€', 'CA$' (for a column heading or beside a box). */
+export function currencySymbol(currency: string): string {
+  try {
+    const part = new Intl.NumberFormat('en-US', { style: 'currency', currency })
+      .formatToParts(0)
+      .find((item) => item.type === 'currency');
+    return part?.value ?? currency;
+  } catch {
+    return currency;
+  }
 }
 
 /** A fuel amount the API gives in both of the fuel's purchase units (e.g. m³ and therm). */
@@ -210,8 +252,8 @@ export interface Units {
   format: (quantity: Quantity, siValue: number | null | undefined, options?: FormatOptions) => string;
   toInput: (quantity: Quantity, siValue: number | null | undefined) => string;
   range: (quantity: Quantity, siRange: { min: number; max: number }) => { min: number; max: number };
-  /** money in the grower's currency (no conversion) */
-  money: (amount: number | null | undefined, decimals?: number) => string;
+  /** money in the farm's currency (ISO 4217 code; no conversion) */
+  money: (amount: number | null | undefined, currency: string, decimals?: number) => string;
   fuel: (
     amount: FuelAmount | null | undefined,
     fuelUnits: FuelUnits | null | undefined,
@@ -233,7 +275,7 @@ export function unitsFor(system: UnitSystem): Units {
     format: (quantity, siValue, options) => formatQuantity(quantity, siValue, system, options),
     toInput: (quantity, siValue) => toInputString(quantity, siValue, system),
     range: (quantity, siRange) => rangeInDisplay(quantity, siRange, system),
-    money: (amount, decimals) => formatMoney(amount, decimals),
+    money: (amount, currency, decimals) => formatMoney(amount, currency, decimals),
     fuel: (amount, fuelUnits, options) => formatFuelQuantity(amount, fuelUnits, system, options),
     fuelValue: (amount) => fuelQuantityIn(amount, system),
     fuelUnit: (fuelUnits) => fuelUnitIn(fuelUnits, system),

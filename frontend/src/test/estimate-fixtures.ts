@@ -74,6 +74,7 @@ export const demoHouseBHeating: HouseHeatingEstimate = {
     kneewallW: 0,
     perimeterW: 3805.82748,
     infiltrationW: 5158.302601699728,
+    skyW: 0,
     curtainApplied: false,
     wind: {
       windSpeedMPerS: 6.7,
@@ -269,6 +270,7 @@ export const demoHouseBHeating: HouseHeatingEstimate = {
     insideC: 10,
     curtainClosed: false,
     designWindSpeedMPerS: 6.7,
+    clearSky: false,
   },
   conditionsSource: {
     designOutdoorC: 'farm climate',
@@ -277,6 +279,7 @@ export const demoHouseBHeating: HouseHeatingEstimate = {
     insideC: 'house night setpoint',
     curtainClosed: 'default',
     designWindSpeedMPerS: 'reference data',
+    clearSky: 'default',
   },
 };
 

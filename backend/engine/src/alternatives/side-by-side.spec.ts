@@ -34,7 +34,7 @@ describe('compareSideBySide', () => {
   it('saves fuel with double poly, loses light, and pays back as cost ÷ saving', () => {
     const alt = result.alternatives[0];
     if (!alt.ok) throw new Error(alt.message);
-    const saving = result.house.season.total.cost - alt.column.season.total.cost;
+    const saving = result.house.season.total.cost! - alt.column.season.total.cost!;
     expect(saving).toBeGreaterThan(0);
     expect(alt.column.versusHouse?.yearlySaving).toBe(saving);
     expect(alt.column.versusHouse?.paybackStatus).toBe('years');

@@ -9,6 +9,7 @@ import { estimateHeating, type HeatingEstimate, type HeatingEstimateInput } from
 import { estimateSeason, type EstimateSeasonInput, type SeasonEstimate } from '../estimate-season';
 import type { CoveringRow } from '../heating/heating-reference';
 import { referenceRow, type ReferenceData } from '../reference-data.types';
+import { costDifference } from '../season/fuel';
 import { SunCache } from '../season/sun-hours';
 import { SURFACE_GROUPS, type SurfaceGroup } from '../vocabulary';
 
@@ -30,11 +31,11 @@ export interface SurfaceLight {
   changeFromHouse: number;
 }
 
-export type PaybackStatus = 'years' | 'immediate' | 'enter-cost' | 'never';
+export type PaybackStatus = 'years' | 'immediate' | 'enter-cost' | 'enter-price' | 'never';
 
 export interface VersusHouse {
-  /** house season cost − this column's, money a year (positive = saves) */
-  yearlySaving: number;
+  /** house season cost − this column's, money a year (positive = saves); null without a fuel price */
+  yearlySaving: number | null;
   /** heat delivered to the house, house − this column, kWh */
   heatSavedKWh: number;
   /** heat content of the fuel burnt, house − this column, kWh */
@@ -81,8 +82,9 @@ function lightOf(input: SideBySideColumnInput, ref: ReferenceData, house: Surfac
 
 export function paybackOf(
   costMoney: number | null,
-  yearlySaving: number,
+  yearlySaving: number | null,
 ): { paybackYears: number | null; paybackStatus: PaybackStatus } {
+  if (yearlySaving === null) return { paybackYears: null, paybackStatus: 'enter-price' };
   if (costMoney === null) return { paybackYears: null, paybackStatus: 'enter-cost' };
   if (costMoney <= 0 && yearlySaving >= 0) return { paybackYears: null, paybackStatus: 'immediate' };
   if (!(yearlySaving > 0)) return { paybackYears: null, paybackStatus: 'never' };
@@ -119,7 +121,7 @@ export function compareSideBySide(
   const outcomes = alternatives.map((alternative): SideBySideOutcome => {
     try {
       const result = computeColumn(alternative, ref, sunCache);
-      const yearlySaving = houseResult.season.total.cost - result.season.total.cost;
+      const yearlySaving = costDifference(houseResult.season.total.cost, result.season.total.cost);
       return {
         ok: true,
         column: {

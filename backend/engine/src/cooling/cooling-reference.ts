@@ -2,7 +2,8 @@ import { referenceRow, referenceTable, type ReferenceData, type ReferenceRow } f
 
 /** Typed access to the rows of ventilation.json, evaporative-pads.json and air-properties.json. */
 
-function requireRow<Row extends ReferenceRow>(ref: ReferenceData, table: string, id: string): Row {
+/** A row the installation must have: a missing one is a data error, not user input. */
+export function requireRow<Row extends ReferenceRow>(ref: ReferenceData, table: string, id: string): Row {
   const row = referenceRow<Row>(ref, table, id);
   if (!row) throw new Error(`reference-data/${table}.json needs a row ${id}`);
   return row;

@@ -73,6 +73,27 @@ describe('roof profiles (closed forms)', () => {
       ),
     );
   });
+
+  it('at a rise a quonset can have (up to w/2), the gothic arch lies between the gable and the quonset', () => {
+    // The order a grower expects of three frames of the same width and ridge: the pointed arch holds
+    // more air and film than straight rafters and less than a round hoop (geometry, no source needed).
+    fc.assert(
+      fc.property(
+        fc.double({ min: 2, max: 20, noNaN: true }),
+        fc.double({ min: 0.01, max: 0.5, noNaN: true }),
+        (widthM, riseOverWidth) => {
+          const riseM = riseOverWidth * widthM;
+          const gable = gableProfile(widthM, riseM);
+          const gothic = gothicArchProfile(widthM, riseM);
+          const quonset = quonsetProfile(widthM, riseM);
+          expect(gothic.areaAboveEaveM2).toBeGreaterThan(gable.areaAboveEaveM2);
+          expect(gothic.areaAboveEaveM2).toBeLessThan(quonset.areaAboveEaveM2);
+          expect(gothic.arcLengthM).toBeGreaterThan(gable.arcLengthM);
+          expect(gothic.arcLengthM).toBeLessThan(quonset.arcLengthM);
+        },
+      ),
+    );
+  });
 });
 
 describe('computeHouseGeometry', () => {

@@ -11,13 +11,16 @@ import { insideSurfaceCoefficientRow, type SurfaceCoefficientRow } from './heati
  * for T_o gives the outdoor temperature below which it starts:
  *   T_o = T_i − (T_i − T_dew) · h_i / U.
  * The covering's own U is used (no curtain credit): a drawn curtain leaves the covering colder,
- * not warmer. U can never exceed h_i physically (U includes the inside film); a user override
+ * not warmer. Under a clear sky the covering sees the sky instead of the air and behaves as if the
+ * air were `skyCoolingK` colder (heating/sky-radiation.ts). U can never exceed h_i physically (U includes the inside film); a user override
  * above h_i is capped there so the surface is never colder than outside.
  */
 export interface CondensationSurfaceInput {
   group: SurfaceGroup;
   coveringId: string;
   uWPerM2K: number;
+  /** on a clear night: how much colder the air seems to this covering, K (heating/sky-radiation.ts); default 0 */
+  skyCoolingK?: number;
 }
 
 export interface CondensationSurface {
@@ -67,7 +70,13 @@ export function condensationRisk(
   };
   const results = surfaces.map((surface): CondensationSurface => {
     const insideFilmWPerM2K = insideFilmRows[surface.group].hWPerM2K;
-    const insideSurfaceC = insideSurfaceTemperatureC(insideC, outsideC, surface.uWPerM2K, insideFilmWPerM2K);
+    const skyCoolingK = surface.skyCoolingK ?? 0;
+    const insideSurfaceC = insideSurfaceTemperatureC(
+      insideC,
+      outsideC - skyCoolingK,
+      surface.uWPerM2K,
+      insideFilmWPerM2K,
+    );
     const filmRatio = Math.min(surface.uWPerM2K / insideFilmWPerM2K, 1);
     return {
       group: surface.group,
@@ -75,7 +84,8 @@ export function condensationRisk(
       uWPerM2K: surface.uWPerM2K,
       insideSurfaceC,
       condenses: insideSurfaceC <= dewC,
-      condensationBelowOutdoorC: insideC - (insideC - dewC) / filmRatio,
+      // the outdoor air temperature at which it starts: the covering then sees air `skyCoolingK` colder
+      condensationBelowOutdoorC: insideC - (insideC - dewC) / filmRatio + skyCoolingK,
     };
   });
   return {

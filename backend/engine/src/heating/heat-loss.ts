@@ -203,14 +203,15 @@ export function heatLossCoefficients(
   };
 }
 
-export type HeatLossComponentKey = 'roof' | 'sidewalls' | 'endwalls' | 'kneewall' | 'perimeter' | 'infiltration';
+export type HeatLossComponentKey =
+  'roof' | 'sidewalls' | 'endwalls' | 'kneewall' | 'perimeter' | 'infiltration' | 'sky';
 
 export interface HeatLossComponent {
   key: HeatLossComponentKey;
   label: string;
   quantity: number;
   quantityUnit: 'm2' | 'm' | 'm3';
-  /** U in W/(m²·K), F in W/(m·K), or air changes per hour */
+  /** U in W/(m²·K), F in W/(m·K), air changes per hour, or (sky) W per m² of floor */
   coefficient: number;
   conductanceWPerK: number;
   watts: number;
@@ -227,6 +228,8 @@ export interface HeatLossBreakdown {
   kneewallW: number;
   perimeterW: number;
   infiltrationW: number;
+  /** long-wave loss to a clear night sky through the roof, W (0 unless a clear night is asked for) */
+  skyW: number;
   curtainApplied: boolean;
   /** design wind speed, m/s, and the factors applied to each covering's U and to the air changes */
   wind: WindSummary;
@@ -317,6 +320,7 @@ export function designHeatLoss(
     kneewallW: coefficients.kneewallWPerK * heatingDeltaTK,
     perimeterW: coefficients.perimeterWPerK * heatingDeltaTK,
     infiltrationW: coefficients.infiltrationWPerK * heatingDeltaTK,
+    skyW: 0,
     curtainApplied: coefficients.curtainApplied,
     wind: {
       windSpeedMPerS: coefficients.wind.windSpeedMPerS,
@@ -326,4 +330,28 @@ export function designHeatLoss(
     },
     components,
   };
+}
+
+/**
+ * The design loss with a clear night's radiation to the sky added as its own component (quantity:
+ * floor area; coefficient: W per m² of floor). Shares become shares of watts, since the sky part
+ * does not follow the inside–outside difference.
+ */
+export function withSkyLoss(breakdown: HeatLossBreakdown, floorAreaM2: number, skyW: number): HeatLossBreakdown {
+  const totalW = breakdown.totalW + skyW;
+  const sky: HeatLossComponent = {
+    key: 'sky',
+    label: 'Radiation to a clear night sky',
+    quantity: floorAreaM2,
+    quantityUnit: 'm2',
+    coefficient: floorAreaM2 > 0 ? skyW / floorAreaM2 : 0,
+    conductanceWPerK: breakdown.deltaTK > 0 ? skyW / breakdown.deltaTK : 0,
+    watts: skyW,
+    share: 0,
+  };
+  const components = [...breakdown.components, sky].map((component) => ({
+    ...component,
+    share: totalW > 0 ? component.watts / totalW : component.share,
+  }));
+  return { ...breakdown, totalW, skyW, components };
 }

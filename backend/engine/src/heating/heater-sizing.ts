@@ -55,6 +55,8 @@ export interface HeaterSizingInput {
   designHeatLossW: number;
   /** UA of the house in the same state as the design loss, W/K */
   totalConductanceWPerK: number;
+  /** loss that does not follow the inside–outside difference (radiation to a clear sky), W; default 0 */
+  fixedLossW?: number;
   /** inside temperature to hold, °C */
   insideC: number;
   heaters: HeaterGroup[];
@@ -160,7 +162,8 @@ export function sizeHeaters(input: HeaterSizingInput, ref: ReferenceData): Heate
   }
 
   const ua = input.totalConductanceWPerK;
-  const holdsC = (outputW: number) => input.insideC - outputW / ua;
+  const fixedLossW = input.fixedLossW ?? 0;
+  const holdsC = (outputW: number) => input.insideC - (outputW - fixedLossW) / ua;
   const requiredOutputW = Math.max(input.designHeatLossW, 0) * (1 + safetyMargin);
   const verdict: HeaterVerdict =
     unitCount === 0 ? 'none-installed' : installedOutputW >= requiredOutputW ? 'adequate' : 'short';

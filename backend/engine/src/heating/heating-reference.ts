@@ -1,5 +1,5 @@
 import { EngineInputError } from '../errors';
-import { HEATER_TYPES, type HeaterType, type SurfaceGroup } from '../vocabulary';
+import { HEATER_TYPES, type Confidence, type HeaterType, type SurfaceGroup } from '../vocabulary';
 import { referenceRow, referenceTable, type ReferenceData, type ReferenceRow } from '../reference-data.types';
 
 /** Typed rows of the reference tables the heating engine reads, and checked look-ups. */
@@ -11,6 +11,12 @@ export interface CoveringRow extends ReferenceRow {
   uBtuPerHFt2F: number;
   uRangeWPerM2K?: [number, number];
   lightTransmittance: number;
+  /** share of the crop's long-wave radiation the covering passes to the sky (0 opaque) */
+  thermalIrTransmittance: number;
+  irSource?: string;
+  irConfidence?: Confidence;
+  /** long-wave emissivity of the outer surface (how strongly it radiates to the sky) */
+  outerLongWaveEmissivity: number;
 }
 
 export interface AirLeakageRow extends ReferenceRow {

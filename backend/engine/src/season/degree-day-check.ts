@@ -1,9 +1,17 @@
 import { quantityToken } from '../vocabulary';
-import type { ReferenceData } from '../reference-data.types';
-import { degreeDayHeatKWh, FAHRENHEIT_DEGREES_PER_KELVIN } from './degree-days';
+import { EngineInputError } from '../errors';
+import { referenceRow, type ReferenceData, type ReferenceRow } from '../reference-data.types';
+import { degreeDayHeatKWh, FAHRENHEIT_DEGREES_PER_KELVIN, seasonDegreeDays } from './degree-days';
 import { fuelAmount, runVariant } from './prepare-season';
 import type { SimulationResult } from './season-simulation';
-import type { DegreeDayCrossCheck, DegreeDayStep, PreparedSeason, SeasonVariant, VariantRun } from './season-types';
+import type {
+  ConventionalBaseCheck,
+  DegreeDayCrossCheck,
+  DegreeDayStep,
+  PreparedSeason,
+  SeasonVariant,
+  VariantRun,
+} from './season-types';
 
 /** The degree-day figure, walked step by step to the hourly one, and the heater-shortfall caution. */
 
@@ -89,6 +97,36 @@ export function degreeDayCrossCheck(
     hourlyDifferenceFraction: degreeDayKWh > 0 ? hourlyKWh / degreeDayKWh - 1 : null,
     steps,
     explanation: explainDifference(steps, variant, hourlyKWh, degreeDayKWh, result),
+    conventionalBase: conventionalBaseCheck(prepared, variant, run, ref),
+  };
+}
+
+/**
+ * Degree-days of the same heated days to the conventional 65 °F base (reference-data
+ * degree-days.json, 'hdd-base-us'), through the same formula, so the figure can be set beside
+ * published base-65 degree-days.
+ */
+function conventionalBaseCheck(
+  prepared: PreparedSeason,
+  variant: SeasonVariant,
+  run: VariantRun,
+  ref: ReferenceData,
+): ConventionalBaseCheck {
+  const row = referenceRow<ReferenceRow & { baseC: number }>(ref, 'degree-days', 'hdd-base-us');
+  if (!row)
+    throw new EngineInputError('degree-days', "the reference data lack the 65 °F degree-day base ('hdd-base-us')");
+  const night = run.parameters.nightSetpointC;
+  const baseOfDay = night.map((setpoint) => (setpoint === setpoint ? row.baseC : Number.NaN));
+  const degreeDaysKDay = seasonDegreeDays(prepared.hours, baseOfDay).total;
+  return {
+    ...fuelAmount(degreeDayHeatKWh(run.thermal.uaOpenWPerK, degreeDaysKDay), variant),
+    baseTemperatureC: row.baseC,
+    degreeDaysKDay,
+    degreeDaysFDay: degreeDaysKDay * FAHRENHEIT_DEGREES_PER_KELVIN,
+    note:
+      `The conventional ${quantityToken('temperature', row.baseC)} base assumes a building's internal gains (people, lights, ` +
+      'appliances) cover the last few degrees; a greenhouse at night has almost none, so the night-setpoint base is the one to use for a greenhouse.',
+    source: `${row.source}; the reasoning on internal gains: ASHRAE Handbook — Fundamentals, degree-day method (recalled, not checked)`,
   };
 }
 

@@ -109,7 +109,7 @@ describe('fuel cost', () => {
     const perGallon = perLitre * 3.785412;
     const costSi = fuelCost(quantity, { pricePerUnit: perLitre, priceUnit: 'si' });
     const costUs = fuelCost(quantity, { pricePerUnit: perGallon, priceUnit: 'us' });
-    expect(Math.abs(costSi / costUs - 1)).toBeLessThan(0.001);
+    expect(Math.abs(costSi! / costUs! - 1)).toBeLessThan(0.001);
     expect(priceUnitLabel(propane, 'us')).toBe('US gal');
     expect(priceUnitLabel(propane, 'si')).toBe('L');
   });

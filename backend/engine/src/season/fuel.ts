@@ -17,8 +17,11 @@ export type PriceUnit = 'si' | 'us';
 
 export interface FuelPrice {
   fuelId: string;
-  /** money per purchase unit (currency is the user's) */
-  pricePerUnit: number;
+  /**
+   * money per purchase unit, in the farm's currency; null = no price known yet: quantities are
+   * computed, every cost is null
+   */
+  pricePerUnit: number | null;
   /** 'si': per the fuel's unitSi (m³, L, kg, kWh); 'us': per its unitUs (therm, US gal, short ton, kWh) */
   priceUnit: PriceUnit;
 }
@@ -58,9 +61,15 @@ export function fuelForHeat(heatDeliveredKWh: number, fuel: FuelRow, heaterEffic
   };
 }
 
-/** Cost of a quantity at a price quoted per the stated unit. */
-export function fuelCost(quantity: FuelQuantity, price: Pick<FuelPrice, 'pricePerUnit' | 'priceUnit'>): number {
+/** Cost of a quantity at a price quoted per the stated unit; null without a price. */
+export function fuelCost(quantity: FuelQuantity, price: Pick<FuelPrice, 'pricePerUnit' | 'priceUnit'>): number | null {
+  if (price.pricePerUnit === null) return null;
   return (price.priceUnit === 'si' ? quantity.quantitySi : quantity.quantityUs) * price.pricePerUnit;
+}
+
+/** a − b, or null when either is unknown (a saving between two costs). */
+export function costDifference(a: number | null, b: number | null): number | null {
+  return a === null || b === null ? null : a - b;
 }
 
 /** The unit a price refers to, e.g. 'US gal' or 'm³'. */
@@ -71,7 +80,7 @@ export function priceUnitLabel(fuel: FuelRow, priceUnit: PriceUnit): string {
 export function validateFuelPrice(price: FuelPrice, ref: ReferenceData, field = 'fuel'): FuelRow {
   if (!price || typeof price !== 'object') throw new EngineInputError(field, `${field} is required`);
   const row = fuelRow(ref, price.fuelId, `${field}.fuelId`);
-  requireInRange(`${field}.pricePerUnit`, price.pricePerUnit, 0, 1e6);
+  if (price.pricePerUnit !== null) requireInRange(`${field}.pricePerUnit`, price.pricePerUnit, 0, 1e6);
   if (price.priceUnit !== 'si' && price.priceUnit !== 'us') {
     throw new EngineInputError(
       `${field}.priceUnit`,

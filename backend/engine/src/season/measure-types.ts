@@ -57,14 +57,16 @@ export const MEASURE_KINDS: readonly MeasureKind[] = [
  * - 'years': cost ÷ yearly money saved (paybackYears > 0)
  * - 'immediate': a cost of 0 entered and money saved (paybackYears = 0)
  * - 'enter-cost': money saved but no cost entered yet (paybackYears null)
+ * - 'enter-price': fuel saved but no fuel price known, so no money figure (paybackYears null)
  * - 'never': it saves no money (paybackYears null)
  * - 'not-applicable': the measure changes nothing for this house (paybackYears null)
  */
-export type PaybackStatus = 'years' | 'immediate' | 'enter-cost' | 'never' | 'not-applicable';
+export type PaybackStatus = 'years' | 'immediate' | 'enter-cost' | 'enter-price' | 'never' | 'not-applicable';
 export const PAYBACK_STATUSES: readonly PaybackStatus[] = [
   'years',
   'immediate',
   'enter-cost',
+  'enter-price',
   'never',
   'not-applicable',
 ];
@@ -101,12 +103,12 @@ export interface MeasureResult {
   /** fuel saved in the baseline fuel's units; null when the variant burns another fuel */
   fuelSavedSi: number | null;
   fuelSavedUs: number | null;
-  /** money saved per season (= per year with one season a year) */
-  yearlyMoneySaved: number;
+  /** money saved per season (= per year with one season a year); null without a fuel price */
+  yearlyMoneySaved: number | null;
   paybackStatus: PaybackStatus;
   /** cost ÷ yearly money saved when the status is 'years' or 'immediate' (0), else null */
   paybackYears: number | null;
-  /** '2.4 years', 'immediately', 'enter a cost', 'never' or 'not applicable' */
+  /** '2.4 years', 'immediately', 'enter a cost', 'enter the fuel price', 'never' or 'not applicable' */
   paybackText: string;
   /** change in light for measures that add a layer or a screen, else null */
   lightChange: LightChange | null;

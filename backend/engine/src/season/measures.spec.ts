@@ -75,7 +75,7 @@ describe('measure comparison', () => {
     ] as const;
     for (const [kind, cost] of priced) {
       const result = byKind.get(kind)!;
-      const moneySaved = comparison.baseline.cost - result.season.cost;
+      const moneySaved = comparison.baseline.cost! - result.season.cost!;
       expect(moneySaved).toBeGreaterThan(0);
       expect(result.paybackStatus).toBe('years');
       expectRelativelyClose(result.paybackYears!, cost / moneySaved, 1e-9);
@@ -94,10 +94,21 @@ describe('measure comparison', () => {
       expect(result).toMatchObject({ applicable: true, notApplicableReason: null });
   });
 
+  it('without a fuel price, a measure that saves fuel asks for the price instead of a payback', () => {
+    const unpriced = { ...input, fuel: { ...input.fuel, pricePerUnit: null } };
+    const result = compareMeasures(unpriced, [{ kind: 'sealing', costMoney: 300 }], ref, sunCache);
+    expect(result.baseline.cost).toBeNull();
+    const [sealing] = result.measures;
+    expect(sealing.fuelInputSavedKWh).toBeGreaterThan(0);
+    expect(sealing.yearlyMoneySaved).toBeNull();
+    expect(sealing.paybackStatus).toBe('enter-price');
+    expect(sealing.paybackText).toBe('enter the fuel price');
+  });
+
   it('a more efficient heater saves fuel, not heat: saving = baseline × (1 − η_old / η_new)', () => {
     const heater = byKind.get('heater-efficiency')!;
     expect(heater.heatSavedKWh).toBeCloseTo(0, 6);
-    expect(heater.yearlyMoneySaved).toBeCloseTo(comparison.baseline.cost * (1 - 0.8 / 0.92), 6);
+    expect(heater.yearlyMoneySaved).toBeCloseTo(comparison.baseline.cost! * (1 - 0.8 / 0.92), 6);
   });
 
   it('defaults the heater upgrade to a condensing unit heater, and lets the user pick the target type', () => {
@@ -115,9 +126,9 @@ describe('measure comparison', () => {
     expect(condensing.label).toBe('Replace heaters with condensing unit heaters');
     expect(condensing.description).toMatch(/Condensing unit heater/);
     expect(condensing.description).toMatch(/80 % → 92 %/);
-    expect(condensing.yearlyMoneySaved / comparison.baseline.cost).toBeCloseTo(1 - 0.8 / 0.915, 6);
+    expect(condensing.yearlyMoneySaved! / comparison.baseline.cost!).toBeCloseTo(1 - 0.8 / 0.915, 6);
     expect(separated.description).toMatch(/Separated-combustion unit heater \(non-condensing\)/);
-    expect(separated.yearlyMoneySaved / comparison.baseline.cost).toBeCloseTo(1 - 0.8 / 0.815, 6);
+    expect(separated.yearlyMoneySaved! / comparison.baseline.cost!).toBeCloseTo(1 - 0.8 / 0.815, 6);
     expect(() =>
       compareMeasures(input, [{ kind: 'heater-efficiency', heaterType: 'heat-pump' as never }], ref, sunCache),
     ).toThrow(expect.objectContaining({ field: 'measures[0].heaterType' }));
@@ -326,7 +337,14 @@ describe('payback status and ranking', () => {
   });
 
   it('sorts years ascending, then enter-cost, then never, then not applicable (any mix)', () => {
-    const statusRank = { immediate: 0, years: 0, 'enter-cost': 1, never: 2, 'not-applicable': 3 } as const;
+    const statusRank = {
+      immediate: 0,
+      years: 0,
+      'enter-cost': 1,
+      'enter-price': 1,
+      never: 2,
+      'not-applicable': 3,
+    } as const;
     const row = fc.record({
       cost: fc.option(fc.integer({ min: 0, max: 50_000 }), { nil: null }),
       saved: fc.integer({ min: -2000, max: 5000 }),

@@ -18,6 +18,7 @@ import {
   type MeasureResult,
 } from './measure-types';
 import { planFuelSwitch, planHeaterEfficiency, planLaterStart, planNightSetpointLower } from './operation-measures';
+import { costDifference } from './fuel';
 import { compareMeasureResults, payback, paybackText } from './payback';
 import { SunCache } from './sun-hours';
 
@@ -129,8 +130,9 @@ export function compareMeasures(
     });
     const season = { ...fuelAmount(run.result.totalHeatWh / 1000, plan.variant), ...fuelUnits(plan.variant) };
     const sameFuel = plan.variant.fuelRow.id === base.fuelRow.id;
-    const yearlyMoneySaved = baseline.cost - season.cost;
-    const { status, years } = payback(costMoney, yearlyMoneySaved, true);
+    const yearlyMoneySaved = costDifference(baseline.cost, season.cost);
+    const fuelInputSavedKWh = baseline.fuelInputKWh - season.fuelInputKWh;
+    const { status, years } = payback(costMoney, yearlyMoneySaved, true, fuelInputSavedKWh);
     return {
       index,
       kind: measure.kind,
@@ -141,7 +143,7 @@ export function compareMeasures(
       notApplicableReason: null,
       season,
       heatSavedKWh: baseline.energyKWh - season.energyKWh,
-      fuelInputSavedKWh: baseline.fuelInputKWh - season.fuelInputKWh,
+      fuelInputSavedKWh,
       fuelSavedSi: sameFuel ? baseline.fuelQuantitySi - season.fuelQuantitySi : null,
       fuelSavedUs: sameFuel ? baseline.fuelQuantityUs - season.fuelQuantityUs : null,
       yearlyMoneySaved,

@@ -109,6 +109,13 @@ export function planFuelSwitch(
     return notApplicable(base, 'another fuel', 'Give the other fuel and its price to compare it.');
   }
   const row = validateFuelPrice(fuel, ref, `${field}.fuel`);
+  if (base.fuel.pricePerUnit === null) {
+    return notApplicable(
+      base,
+      `${base.fuelRow.label} → ${row.label}`,
+      `Enter the price of ${base.fuelRow.label} first: fuels can only be compared by what they cost.`,
+    );
+  }
   const efficiency =
     measure.efficiency === undefined || measure.efficiency === null
       ? base.heaterEfficiency
@@ -134,5 +141,5 @@ export function planFuelSwitch(
 
 /** Money per kWh of fuel burnt, to tell whether two prices of one fuel are the same. */
 function pricePerFuelKWh(price: FuelPrice, row: SeasonVariant['fuelRow']): number {
-  return fuelCost(fuelForHeat(1, row, 1), price);
+  return fuelCost(fuelForHeat(1, row, 1), price) ?? 0;
 }

@@ -11,6 +11,8 @@ export function paybackText(
       return 'immediately';
     case 'enter-cost':
       return 'enter a cost';
+    case 'enter-price':
+      return 'enter the fuel price';
     case 'never':
       return 'never';
     case 'not-applicable':
@@ -22,13 +24,18 @@ export function paybackText(
   }
 }
 
-/** Status and years of a simple payback: cost ÷ yearly money saved. */
+/**
+ * Status and years of a simple payback: cost ÷ yearly money saved. Without a fuel price
+ * (`yearlyMoneySaved` null) a measure that saves fuel asks for the price.
+ */
 export function payback(
   costMoney: number | null,
-  yearlyMoneySaved: number,
+  yearlyMoneySaved: number | null,
   applicable: boolean,
+  fuelInputSavedKWh = 0,
 ): { status: PaybackStatus; years: number | null } {
   if (!applicable) return { status: 'not-applicable', years: null };
+  if (yearlyMoneySaved === null) return { status: fuelInputSavedKWh > 0 ? 'enter-price' : 'never', years: null };
   if (!(yearlyMoneySaved > 0)) return { status: 'never', years: null };
   if (costMoney === null) return { status: 'enter-cost', years: null };
   if (costMoney === 0) return { status: 'immediate', years: 0 };
@@ -39,6 +46,7 @@ const STATUS_ORDER: Record<PaybackStatus, number> = {
   immediate: 0,
   years: 0,
   'enter-cost': 1,
+  'enter-price': 1,
   never: 2,
   'not-applicable': 3,
 };
@@ -49,5 +57,6 @@ export function compareMeasureResults(a: MeasureResult, b: MeasureResult): numbe
   if (byStatus !== 0) return byStatus;
   if (a.paybackStatus === 'not-applicable') return a.index - b.index;
   const byYears = (a.paybackYears ?? 0) - (b.paybackYears ?? 0);
-  return byYears || b.yearlyMoneySaved - a.yearlyMoneySaved || a.index - b.index;
+  const bySaving = (b.yearlyMoneySaved ?? 0) - (a.yearlyMoneySaved ?? 0) || b.fuelInputSavedKWh - a.fuelInputSavedKWh;
+  return byYears || bySaving || a.index - b.index;
 }

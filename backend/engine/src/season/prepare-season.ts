@@ -28,6 +28,15 @@ import type {
 
 export const SOLAR_USEFUL_FRACTION_ROW_ID = 'solar-useful-fraction';
 
+/** Range a heat-loss factor (calibrated against fuel bills) may take. */
+export const HEAT_LOSS_FACTOR_LIMITS = { min: 0.2, max: 5 } as const;
+
+/** A house's heat-loss coefficients multiplied by `factor`. */
+export function scaledThermal(thermal: HouseThermal, factor: number): HouseThermal {
+  if (factor === 1) return thermal;
+  return { ...thermal, uaOpenWPerK: thermal.uaOpenWPerK * factor, uaClosedWPerK: thermal.uaClosedWPerK * factor };
+}
+
 function validateSite(site: SeasonSite): SunSite {
   if (!site || typeof site !== 'object') throw new EngineInputError('site', 'site is required');
   requireInRange('site.latitudeDeg', site.latitudeDeg, BOUNDS.latitudeDeg.min, BOUNDS.latitudeDeg.max);
@@ -112,6 +121,10 @@ export function prepareSeason(
     solarUsefulFraction = requireInRange('solarUsefulFraction', input.solarUsefulFraction, 0, 1);
   }
 
+  if (input.heatLossFactor !== undefined && input.heatLossFactor !== null) {
+    requireInRange('heatLossFactor', input.heatLossFactor, HEAT_LOSS_FACTOR_LIMITS.min, HEAT_LOSS_FACTOR_LIMITS.max);
+  }
+
   const heaters = installedHeaterOutput(input.house, ref);
   const hours = buildSeasonHours({ site, range: input.season, climate, clearnessByMonth: clearness }, ref, sunCache);
   return {
@@ -171,7 +184,9 @@ export function variantParameters(
   ref: ReferenceData,
   options: VariantOptions = {},
 ): { thermal: HouseThermal; parameters: SimulationParameters } {
-  const thermal = options.thermal ?? houseThermal(variant.house, prepared.input.site.elevationM, ref);
+  const thermal =
+    options.thermal ??
+    scaledThermal(houseThermal(variant.house, prepared.input.site.elevationM, ref), prepared.input.heatLossFactor ?? 1);
   const { daySetpointC, nightSetpointC } = dailySetpoints(
     prepared.hours.firstDayNumber,
     prepared.hours.dayCount,

@@ -53,6 +53,18 @@ export function seasonAssumptions(
       'computed from reference-data coverings.json, perimeter.json, air-leakage.json and the house dimensions',
     ),
   );
+  const factor = prepared.input.heatLossFactor ?? 1;
+  if (factor !== 1) {
+    list.push({
+      key: 'heat-loss-factor',
+      label: 'Heat-loss factor fitted to the farm’s fuel bills (multiplies the heat-loss coefficients above)',
+      value: round(factor, 3),
+      unit: '–',
+      source: 'calibrated against the fuel records entered for this farm',
+      confidence: 'user-entered',
+      overridden: true,
+    });
+  }
   if (variant.house.curtainId) {
     list.push(
       derived(
@@ -172,9 +184,9 @@ export function seasonAssumptions(
   list.push({
     key: 'fuel-price',
     label: `Price of ${fuel.label}`,
-    value: variant.fuel.pricePerUnit,
-    unit: `per ${priceUnitLabel(fuel, variant.fuel.priceUnit)}`,
-    source: 'entered by the user',
+    value: variant.fuel.pricePerUnit ?? 'not entered yet, so no cost is computed',
+    unit: variant.fuel.pricePerUnit === null ? '' : `per ${priceUnitLabel(fuel, variant.fuel.priceUnit)}`,
+    source: variant.fuel.pricePerUnit === null ? 'none' : 'entered by the user',
     confidence: 'user-entered',
     overridden: true,
   });

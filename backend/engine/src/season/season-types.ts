@@ -45,6 +45,11 @@ export interface EstimateSeasonInput {
   heaterEfficiency: number;
   /** replaces the reference share of transmitted sunlight that offsets heating, 0–1 */
   solarUsefulFraction?: number;
+  /**
+   * multiplies the house's heat-loss coefficients (coverings, perimeter and air leakage), e.g. a
+   * factor fitted to the farm's fuel bills; 1 (the handbook values) when absent
+   */
+  heatLossFactor?: number;
 }
 
 // ---------------------------------------------------------------------------------------------
@@ -72,8 +77,8 @@ export interface FuelAmount {
   fuelQuantitySi: number;
   /** fuel in its US purchase unit (fuel.unitUs) */
   fuelQuantityUs: number;
-  /** money, in the currency of the price */
-  cost: number;
+  /** money, in the currency of the price; null when no price is known */
+  cost: number | null;
 }
 
 export interface SeasonMonth extends FuelAmount {
@@ -114,7 +119,19 @@ export interface DegreeDayCrossCheck extends FuelAmount {
   /** from the degree-day figure to the hourly figure, one effect at a time (order matters) */
   steps: DegreeDayStep[];
   /** sentences that may hold {{kind:valueSI}} quantity tokens (see prose.ts) */
-  explanation: string[];
+  explanation: string[]; /** the same method to the conventional 65 °F (18.3 °C) base, for comparison with published degree-days */
+  conventionalBase: ConventionalBaseCheck;
+}
+
+export interface ConventionalBaseCheck extends FuelAmount {
+  /** 18.333 °C (65 °F) */
+  baseTemperatureC: number;
+  /** degree-days of the heated days to that base, K·day */
+  degreeDaysKDay: number;
+  degreeDaysFDay: number;
+  /** why the setpoint base is the one for a greenhouse, in one sentence */
+  note: string;
+  source: string;
 }
 
 export interface HeaterCapacity {
@@ -132,7 +149,8 @@ export interface SeasonEstimate {
     label: string;
     unitSi: string;
     unitUs: string;
-    pricePerUnit: number;
+    /** null when no price is known (quantities only) */
+    pricePerUnit: number | null;
     priceUnit: PriceUnit;
     /** the unit the price is per, e.g. 'US gal' */
     priceUnitLabel: string;

@@ -9,3 +9,4 @@ export * from './quantities';
 export * from './display-units';
 export * from './assumption';
 export * from './passwords';
+export * from './currency';

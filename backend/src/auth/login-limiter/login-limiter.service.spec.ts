@@ -62,4 +62,24 @@ describe('LoginLimiterService', () => {
     const l = limiter(2, 1);
     expect(await admitted(4, (i) => l.admit('10.0.0.9', undefined, at(i)))).toBe(2);
   });
+
+  it('counts each guarded action apart from sign-in and from the other actions', async () => {
+    const l = limiter(2, 100);
+    expect(await admitted(3, (i) => l.admitAction('password-reset-request', '10.0.0.5', undefined, at(i)))).toBe(2);
+    await expect(l.admitAction('password-reset', '10.0.0.5', undefined, at(4))).resolves.toBeUndefined();
+    await expect(l.admitAction('invitation-sign-up', '10.0.0.5', undefined, at(4))).resolves.toBeUndefined();
+    await expect(l.admit('10.0.0.5', 'grower@example.com', at(4))).resolves.toBeUndefined();
+  });
+
+  it('counts a reset request against the address it would mail, from any client address', async () => {
+    const l = limiter(100, 3);
+    const requests = (i: number) =>
+      l.admitAction('password-reset-request', `203.0.113.${i}`, 'grower@example.com', at(i));
+    expect(await admitted(5, requests)).toBe(3);
+    await expect(l.admitAction('password-reset-request', '198.51.100.1', ' GROWER@example.com', at(6))).rejects.toThrow(
+      /this account/,
+    );
+    // signing in to that account is another count
+    await expect(l.admit('198.51.100.1', 'grower@example.com', at(6))).resolves.toBeUndefined();
+  });
 });

@@ -1,5 +1,4 @@
 import { ArgumentsHost, Catch, ExceptionFilter, HttpException, HttpStatus, Logger } from '@nestjs/common';
-import { ThrottlerException } from '@nestjs/throttler';
 import type { Response } from 'express';
 import { BaseError as SequelizeError, UniqueConstraintError } from 'sequelize';
 import { DatabaseBusyError } from '../../database/sqlite-writer';
@@ -99,9 +98,6 @@ export class AllExceptionsFilter implements ExceptionFilter {
         field: exception.details[0]?.field,
         details: exception.details,
       };
-    }
-    if (exception instanceof ThrottlerException) {
-      return { statusCode: 429, error: REASONS[429], message: 'Too many attempts; wait a minute and try again' };
     }
     if (exception instanceof DatabaseBusyError || BUSY_CODES.has(databaseErrorCode(exception) ?? '')) {
       return { statusCode: 503, error: REASONS[503], message: 'The database is busy; try again in a moment' };

@@ -8,6 +8,9 @@ import * as reports from './0007-reports';
 import * as houseAlternatives from './0008-house-alternatives';
 import * as housePhysics from './0009-house-physics';
 import * as weatherYears from './0010-weather-years';
+import * as farmCurrency from './0011-farm-currency';
+import * as fuelRecordsCalibrations from './0012-fuel-records-calibrations';
+import * as houseMeasurePlans from './0013-house-measure-plans';
 
 /**
  * Every schema change, in order. Add a file `NNNN-what-it-does.ts` exporting up/down and list it
@@ -24,4 +27,7 @@ export const MIGRATIONS = [
   { name: '0008-house-alternatives', ...houseAlternatives },
   { name: '0009-house-physics', ...housePhysics },
   { name: '0010-weather-years', ...weatherYears },
+  { name: '0011-farm-currency', ...farmCurrency },
+  { name: '0012-fuel-records-calibrations', ...fuelRecordsCalibrations },
+  { name: '0013-house-measure-plans', ...houseMeasurePlans },
 ];

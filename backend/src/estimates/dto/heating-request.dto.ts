@@ -2,7 +2,7 @@ import { Omittable } from '../../common/validation';
 import { ApiProperty, ApiPropertyOptional, PartialType } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
 import { IsBoolean, IsNumber, IsObject, Max, Min, ValidateNested } from 'class-validator';
-import { BOUNDS } from '@thermbay/engine/vocabulary';
+import { BOUNDS, OUTDOOR_TEMPERATURE_LIMITS_C } from '@thermbay/engine/vocabulary';
 import { HouseSpecDto } from '../../houses/dto/house.dto';
 
 /** Conditions of the heating design night, as the engine takes them. */
@@ -65,6 +65,26 @@ export class HeatingConditionsDto {
   @Min(BOUNDS.designWindSpeedMPerS.min)
   @Max(BOUNDS.designWindSpeedMPerS.max)
   designWindSpeedMPerS?: number;
+
+  @ApiPropertyOptional({
+    description:
+      'size for a clear night: add the long-wave loss to a sky colder than the air through a covering that passes ' +
+      'thermal infrared; default false (the tabulated U-values, surroundings at the outdoor air temperature)',
+  })
+  @Omittable()
+  @IsBoolean()
+  clearSky?: boolean;
+
+  @ApiPropertyOptional({
+    minimum: OUTDOOR_TEMPERATURE_LIMITS_C.min,
+    maximum: OUTDOOR_TEMPERATURE_LIMITS_C.max,
+    description: 'outdoor dew point on a clear design night, °C (at most the design temperature); default 3 K below it',
+  })
+  @Omittable()
+  @IsNumber()
+  @Min(OUTDOOR_TEMPERATURE_LIMITS_C.min)
+  @Max(OUTDOOR_TEMPERATURE_LIMITS_C.max)
+  outdoorDewPointC?: number;
 }
 
 export class PartialHeatingConditionsDto extends PartialType(HeatingConditionsDto, { skipNullProperties: false }) {}

@@ -17,6 +17,7 @@ export const HEAT_LOSS_COMPONENT_KEYS: readonly HeatLossComponentKey[] = [
   'kneewall',
   'perimeter',
   'infiltration',
+  'sky',
 ];
 export const HEATER_VERDICTS: readonly HeaterVerdict[] = ['adequate', 'short', 'none-installed'];
 /** reference-data confidence marks, plus the values a user typed for this house */
@@ -71,6 +72,8 @@ export class HeatLossBreakdownDto {
   @ApiProperty({ description: 'through the opaque kneewall, W (0 without one)' }) kneewallW: number;
   @ApiProperty({ description: 'through the perimeter, W' }) perimeterW: number;
   @ApiProperty({ description: 'air leakage, W' }) infiltrationW: number;
+  @ApiProperty({ description: 'long-wave loss to a clear night sky, W (0 unless a clear night was asked for)' })
+  skyW: number;
   @ApiProperty() curtainApplied: boolean;
   @ApiProperty({ type: WindSummaryDto }) wind: WindSummaryDto;
   @ApiProperty({ type: HeatLossComponentDto, isArray: true }) components: HeatLossComponentDto[];
@@ -153,6 +156,7 @@ export class HeatingConditionsUsedDto {
   @ApiProperty({ description: '°C' }) insideC: number;
   @ApiProperty() curtainClosed: boolean;
   @ApiProperty({ description: 'm/s' }) designWindSpeedMPerS: number;
+  @ApiProperty() clearSky: boolean;
 }
 
 /** Where each condition came from: the request, or the default named. */
@@ -164,6 +168,7 @@ export class HeatingConditionsSourceDto {
   @ApiProperty({ enum: ['default', 'request'] }) curtainClosed: 'default' | 'request';
   @ApiProperty({ enum: ['farm climate', 'reference data', 'request'] })
   designWindSpeedMPerS: 'farm climate' | 'reference data' | 'request';
+  @ApiProperty({ enum: ['default', 'request'] }) clearSky: 'default' | 'request';
 }
 
 export class HouseHeatingEstimateDto extends HeatingEstimateDto {

@@ -11,7 +11,8 @@ import {
   type ValidatorConstraintInterface,
 } from 'class-validator';
 import { FARM_ROLES, PERMISSIONS, type FarmRole, type Permission } from '../../common/permissions';
-import { BOUNDS } from '@thermbay/engine/vocabulary';
+import { BOUNDS, isCurrencyCode } from '@thermbay/engine/vocabulary';
+import { Omittable } from '../../common/validation';
 
 @ValidatorConstraint({ name: 'ianaTimeZone' })
 export class IsIanaTimeZone implements ValidatorConstraintInterface {
@@ -26,6 +27,16 @@ export class IsIanaTimeZone implements ValidatorConstraintInterface {
   }
   defaultMessage(): string {
     return 'timeZone must be an IANA time zone such as America/Chicago';
+  }
+}
+
+@ValidatorConstraint({ name: 'currencyCode' })
+export class IsCurrencyCode implements ValidatorConstraintInterface {
+  validate(value: unknown): boolean {
+    return isCurrencyCode(value);
+  }
+  defaultMessage(): string {
+    return 'The currency must be a three-letter ISO 4217 code such as USD, EUR or CAD';
   }
 }
 
@@ -59,6 +70,15 @@ export class CreateFarmDto {
   elevationM: number;
 
   @ApiProperty({ example: 'America/Chicago' }) @Validate(IsIanaTimeZone) timeZone: string;
+
+  @ApiProperty({
+    required: false,
+    example: 'EUR',
+    description: 'ISO 4217 code every amount of the farm is written in (default USD)',
+  })
+  @Omittable()
+  @Validate(IsCurrencyCode)
+  currency?: string;
 }
 
 export class UpdateFarmDto extends PartialType(CreateFarmDto, { skipNullProperties: false }) {}
@@ -70,6 +90,8 @@ export class FarmDto {
   @ApiProperty() longitudeDeg: number;
   @ApiProperty() elevationM: number;
   @ApiProperty() timeZone: string;
+  @ApiProperty({ example: 'USD', description: 'ISO 4217 code every amount of the farm is written in' })
+  currency: string;
   @ApiProperty({ enum: FARM_ROLES }) myRole: FarmRole;
   @ApiProperty({ enum: PERMISSIONS, isArray: true }) permissions: Permission[];
   @ApiProperty() houseCount: number;

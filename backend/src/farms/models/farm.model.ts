@@ -19,6 +19,10 @@ export class Farm extends Model {
   @Column({ type: DataType.STRING, allowNull: false })
   declare timeZone: string;
 
+  /** ISO 4217 code every amount of the farm is written in, e.g. USD */
+  @Column({ type: DataType.STRING(3), allowNull: false, defaultValue: 'USD' })
+  declare currency: string;
+
   /** raised by one on every save; a write names the version it was based on (If-Match) */
   @Column({ type: DataType.INTEGER, allowNull: false, defaultValue: 1 })
   declare version: number;

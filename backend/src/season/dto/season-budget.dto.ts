@@ -1,4 +1,5 @@
 import { ApiProperty } from '@nestjs/swagger';
+import { BudgetHeatLossBasisDto, HEAT_LOSS_BASES, type HeatLossBasis } from './heat-loss-basis.dto';
 import type { PriceUnit } from '@thermbay/engine/season/fuel';
 import { PRICE_UNITS } from './season-request.dto';
 import { PROSE_TOKENS_NOTE } from '@thermbay/engine/vocabulary';
@@ -18,6 +19,10 @@ export class BudgetMonthOfHouseDto {
 }
 
 export class BudgetHouseDto {
+  @ApiProperty({ enum: HEAT_LOSS_BASES, description: 'the heat-loss basis this house was estimated on' })
+  heatLossBasis: HeatLossBasis;
+  @ApiProperty({ description: 'multiplier applied to its heat-loss coefficient (1 on the handbook basis)' })
+  heatLossFactor: number;
   @ApiProperty() houseId: number;
   @ApiProperty() name: string;
   @ApiProperty({
@@ -84,11 +89,16 @@ export class BudgetMonthDto {
   @ApiProperty({ minimum: 1, maximum: 12 }) month: number;
   @ApiProperty({ description: 'heat delivered to all houses, kWh' }) energyKWh: number;
   @ApiProperty({ description: 'kWh' }) fuelInputKWh: number;
-  @ApiProperty({ description: 'cost of the priced fuels' }) cost: number;
+  @ApiProperty({
+    type: Number,
+    nullable: true,
+    description: 'cost of the houses with a price; null when no house of the month has one',
+  })
+  cost: number | null;
   @ApiProperty({ type: BudgetMonthFuelDto, isArray: true }) byFuel: BudgetMonthFuelDto[];
 }
 
-export class SeasonBudgetDto {
+export class SeasonBudgetDto extends BudgetHeatLossBasisDto {
   @ApiProperty() farmId: number;
   @ApiProperty() startDate: string;
   @ApiProperty() endDate: string;
@@ -99,7 +109,13 @@ export class SeasonBudgetDto {
   @ApiProperty({ type: BudgetHouseDto, isArray: true }) houses: BudgetHouseDto[];
   @ApiProperty({ type: BudgetFuelTotalDto, isArray: true }) byFuel: BudgetFuelTotalDto[];
   @ApiProperty({ description: 'heat delivered to all houses, kWh' }) totalEnergyKWh: number;
-  @ApiProperty({ description: 'sum of the priced houses' }) totalCost: number;
+  @ApiProperty({
+    type: Number,
+    nullable: true,
+    description: 'sum of the priced houses; null when no house has a price',
+  })
+  totalCost: number | null;
+  @ApiProperty({ example: 'USD', description: "the farm's currency (ISO 4217) every amount is in" }) currency: string;
   @ApiProperty({ description: 'false when some house has no price (or no heaters) and is left out of totalCost' })
   costComplete: boolean;
   @ApiProperty({ type: BudgetMonthDto, isArray: true }) monthly: BudgetMonthDto[];

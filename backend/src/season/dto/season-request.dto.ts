@@ -21,6 +21,7 @@ import {
 import { BOUNDS, HEATER_TYPES, type HeaterType } from '@thermbay/engine/vocabulary';
 import type { PriceUnit } from '@thermbay/engine/season/fuel';
 import { MEASURE_KINDS, type MeasureKind } from '@thermbay/engine/season/measures';
+import { HEAT_LOSS_BASES, type HeatLossBasis } from './heat-loss-basis.dto';
 
 export const PRICE_UNITS: readonly PriceUnit[] = ['si', 'us'];
 
@@ -127,6 +128,15 @@ export class SeasonRequestDto extends SeasonOptionsDto {
   @Omittable()
   @IsCalendarDate()
   endDate?: string;
+
+  @ApiPropertyOptional({
+    enum: HEAT_LOSS_BASES,
+    description:
+      "'handbook' (default) or 'calibrated': each house's heat-loss coefficient × the factor of the farm's newest calibration against its fuel bills (a house without one stays on the handbook, and the answer says so)",
+  })
+  @Omittable()
+  @IsIn(HEAT_LOSS_BASES)
+  heatLossBasis?: HeatLossBasis;
 }
 
 export class NightDemandRequestDto extends SeasonOptionsDto {
@@ -324,6 +334,15 @@ export class SeasonBudgetRequestDto {
   @Omittable()
   @IsClimateSource()
   climateSource?: ClimateSource;
+
+  @ApiPropertyOptional({
+    enum: HEAT_LOSS_BASES,
+    description:
+      "'handbook' (default) or 'calibrated': each house's heat-loss coefficient × the factor of the farm's newest calibration against its fuel bills (a house without one stays on the handbook, and the answer says so)",
+  })
+  @Omittable()
+  @IsIn(HEAT_LOSS_BASES)
+  heatLossBasis?: HeatLossBasis;
 }
 
 /** Query of the CSV export (a GET, so the log is named by id rather than a climateSource object). */
@@ -352,4 +371,12 @@ export class SeasonBudgetCsvQueryDto {
   @IsInt()
   @Min(1)
   temperatureLogId?: number;
+
+  @ApiPropertyOptional({
+    enum: HEAT_LOSS_BASES,
+    description: "'handbook' (default) or 'calibrated' (see the budget's heatLossBasis); the file name says which",
+  })
+  @Omittable()
+  @IsIn(HEAT_LOSS_BASES)
+  heatLossBasis?: HeatLossBasis;
 }

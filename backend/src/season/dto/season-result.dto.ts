@@ -1,4 +1,5 @@
-import { ApiProperty } from '@nestjs/swagger';
+import { ApiProperty, IntersectionType } from '@nestjs/swagger';
+import { HeatLossBasisUsedDto } from './heat-loss-basis.dto';
 import type { DegreeDayStep } from '@thermbay/engine/estimate-season';
 import type { PriceUnit } from '@thermbay/engine/season/fuel';
 import {
@@ -32,7 +33,12 @@ export class SeasonFuelAmountDto {
   @ApiProperty({ description: 'heat content of the fuel burnt (energy ÷ efficiency), kWh' }) fuelInputKWh: number;
   @ApiProperty({ description: "fuel in its SI purchase unit (the fuel's unitSi)" }) fuelQuantitySi: number;
   @ApiProperty({ description: "fuel in its US purchase unit (the fuel's unitUs)" }) fuelQuantityUs: number;
-  @ApiProperty({ description: 'money, in the currency of the price' }) cost: number;
+  @ApiProperty({
+    type: Number,
+    nullable: true,
+    description: "money, in the farm's currency; null when no fuel price is known (heat and fuel are still given)",
+  })
+  cost: number | null;
 }
 
 export class SeasonPeriodDto {
@@ -47,7 +53,8 @@ export class SeasonFuelDto {
   @ApiProperty() label: string;
   @ApiProperty({ example: 'L' }) unitSi: string;
   @ApiProperty({ example: 'US gal' }) unitUs: string;
-  @ApiProperty() pricePerUnit: number;
+  @ApiProperty({ type: Number, nullable: true, description: 'null when no price is known' })
+  pricePerUnit: number | null;
   @ApiProperty({ enum: PRICE_UNITS }) priceUnit: PriceUnit;
   @ApiProperty({ description: "the unit the price is per, e.g. 'US gal'" }) priceUnitLabel: string;
   @ApiProperty({ description: 'output ÷ input' }) heaterEfficiency: number;
@@ -105,6 +112,14 @@ export class DegreeDayStepDto {
   @ApiProperty({ description: 'change from the previous step, kWh' }) changeKWh: number;
 }
 
+export class ConventionalBaseCheckDto extends SeasonFuelAmountDto {
+  @ApiProperty({ description: '18.333 °C (65 °F)' }) baseTemperatureC: number;
+  @ApiProperty({ description: 'degree-days of the heated days to that base, K·day' }) degreeDaysKDay: number;
+  @ApiProperty({ description: '°F·day' }) degreeDaysFDay: number;
+  @ApiProperty({ description: `why the setpoint base is the one for a greenhouse; ${PROSE_TOKENS_NOTE}` }) note: string;
+  @ApiProperty() source: string;
+}
+
 export class DegreeDayCrossCheckDto extends SeasonFuelAmountDto {
   @ApiProperty({ description: `the base each heated day is counted to; ${PROSE_TOKENS_NOTE}` }) baseDescription: string;
   @ApiProperty({ type: Number, nullable: true, description: 'the base when it is the same all season, else null, °C' })
@@ -125,6 +140,11 @@ export class DegreeDayCrossCheckDto extends SeasonFuelAmountDto {
   })
   steps: DegreeDayStepDto[];
   @ApiProperty({ type: String, isArray: true, description: PROSE_TOKENS_NOTE }) explanation: string[];
+  @ApiProperty({
+    type: ConventionalBaseCheckDto,
+    description: 'the same method to the conventional 65 °F (18.3 °C) base, beside the setpoint base',
+  })
+  conventionalBase: ConventionalBaseCheckDto;
 }
 
 export class SeasonAssumptionDto {
@@ -177,9 +197,19 @@ export class SeasonRunInputsDto {
   @ApiProperty({ type: String, nullable: true }) temperatureLogName: string | null;
   @ApiProperty() fuelId: string;
   @ApiProperty({ enum: ['request', 'house-heater'] }) fuelFrom: 'request' | 'house-heater';
-  @ApiProperty() pricePerUnit: number;
+  @ApiProperty({
+    type: Number,
+    nullable: true,
+    description: 'null when the farm has no price for the fuel and the request gave none',
+  })
+  pricePerUnit: number | null;
   @ApiProperty({ enum: PRICE_UNITS }) priceUnit: PriceUnit;
-  @ApiProperty({ enum: ['request', 'farm-fuel-prices'] }) priceFrom: 'request' | 'farm-fuel-prices';
+  @ApiProperty({
+    enum: ['request', 'farm-fuel-prices', 'none'],
+    description: "'none': no price yet, so heat and fuel are given and every cost is null",
+  })
+  priceFrom: 'request' | 'farm-fuel-prices' | 'none';
+  @ApiProperty({ example: 'USD', description: "the farm's currency (ISO 4217) every amount is in" }) currency: string;
   @ApiProperty() heaterEfficiency: number;
   @ApiProperty({ enum: ['request', 'house-heater'] }) heaterEfficiencyFrom: 'request' | 'house-heater';
   @ApiProperty({ description: "the farm's IANA zone" }) timeZone: string;
@@ -187,7 +217,7 @@ export class SeasonRunInputsDto {
   utcOffsetHours: number;
 }
 
-export class SeasonInputsUsedDto extends SeasonRunInputsDto {
+export class SeasonInputsUsedDto extends IntersectionType(SeasonRunInputsDto, HeatLossBasisUsedDto) {
   @ApiProperty() startDate: string;
   @ApiProperty() endDate: string;
   @ApiProperty({ enum: ['request', 'default-heating-season', 'temperature-log'] })
@@ -300,13 +330,16 @@ export class MeasureResultDto {
   @ApiProperty({ type: Number, nullable: true, description: "in the baseline fuel's unitUs" }) fuelSavedUs:
     number | null;
   @ApiProperty({
-    description: 'money saved per season (= per year with one season a year); negative when it costs more to run',
+    type: Number,
+    nullable: true,
+    description:
+      'money saved per season (= per year with one season a year); negative when it costs more to run; null without a fuel price',
   })
-  yearlyMoneySaved: number;
+  yearlyMoneySaved: number | null;
   @ApiProperty({
     enum: PAYBACK_STATUSES,
     description:
-      "'years': cost ÷ saving; 'immediate': cost 0 and a saving; 'enter-cost': a saving but no cost entered; 'never': no money saved; 'not-applicable': changes nothing for this house",
+      "'years': cost ÷ saving; 'immediate': cost 0 and a saving; 'enter-cost': a saving but no cost entered; 'enter-price': fuel saved but no fuel price known; 'never': no money saved; 'not-applicable': changes nothing for this house",
   })
   paybackStatus: PaybackStatus;
   @ApiProperty({
@@ -317,7 +350,7 @@ export class MeasureResultDto {
   paybackYears: number | null;
   @ApiProperty({
     example: '2.4 years',
-    description: "'2.4 years', 'immediately', 'enter a cost', 'never' or 'not applicable'",
+    description: "'2.4 years', 'immediately', 'enter a cost', 'enter the fuel price', 'never' or 'not applicable'",
   })
   paybackText: string;
   @ApiProperty({

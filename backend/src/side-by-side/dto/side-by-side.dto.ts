@@ -36,8 +36,12 @@ export class SurfaceLightDto {
 }
 
 export class VersusHouseDto {
-  @ApiProperty({ description: "the house's season cost − this column's, money a year (positive = saves)" })
-  yearlySaving: number;
+  @ApiProperty({
+    type: Number,
+    nullable: true,
+    description: "the house's season cost − this column's, money a year (positive = saves); null without a fuel price",
+  })
+  yearlySaving: number | null;
   @ApiProperty({ description: 'heat delivered, house − this column, kWh a season' }) heatSavedKWh: number;
   @ApiProperty({ description: 'heat content of the fuel burnt, house − this column, kWh a season' })
   fuelInputSavedKWh: number;
@@ -45,10 +49,11 @@ export class VersusHouseDto {
   @ApiProperty({ nullable: true, type: Number, description: 'cost ÷ yearly saving, years' })
   paybackYears: number | null;
   @ApiProperty({
-    enum: ['years', 'immediate', 'enter-cost', 'never'],
-    description: "'enter-cost' when no cost is entered; 'never' when it saves nothing",
+    enum: ['years', 'immediate', 'enter-cost', 'enter-price', 'never'],
+    description:
+      "'enter-cost' when no cost is entered; 'enter-price' when the farm has no price for the fuel; 'never' when it saves nothing",
   })
-  paybackStatus: 'years' | 'immediate' | 'enter-cost' | 'never';
+  paybackStatus: 'years' | 'immediate' | 'enter-cost' | 'enter-price' | 'never';
 }
 
 export class SideBySideColumnDto {

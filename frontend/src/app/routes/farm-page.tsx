@@ -9,10 +9,11 @@ import { paths } from '../../config/paths';
 import { farmAllows, farmDetailQueryOptions, FarmFormDialog, FarmSummary, useDeleteFarm } from '../../features/farms';
 import { farmHousesQueryOptions, HousesTable } from '../../features/houses';
 import { ClimateSection } from '../../features/climate';
-import { FuelPricesEditor } from '../../features/fuel-prices';
+import { FuelPricesEditor, MissingPriceForm } from '../../features/fuel-prices';
 import { MembersSection } from '../../features/members';
 import { SeasonBudgetSection } from '../../features/season-budget';
-import { TemperatureLogsSection } from '../../features/temperature-logs';
+import { CalibrationBasisSwitch, useHeatLossBasisParam } from '../../features/calibration';
+import { farmTemperatureLogsQueryOptions, TemperatureLogsSection } from '../../features/temperature-logs';
 import { referenceDataQueryOptions } from '../../lib/reference-data';
 import { useCurrentUser } from '../session';
 import { farmReportsQueryOptions, ReportLinks } from '../../features/reports';
@@ -43,9 +44,11 @@ export default function FarmPage() {
   const [confirmingDelete, setConfirmingDelete] = useState(false);
   const currentUser = useCurrentUser();
   const referenceData = useQuery(referenceDataQueryOptions());
+  const [heatLossBasis, setHeatLossBasis] = useHeatLossBasisParam();
   const [searchParams, setSearchParams] = useSearchParams();
   const requestedTab = searchParams.get('tab');
   const tab: FarmTab = isFarmTab(requestedTab) ? requestedTab : 'houses';
+  const logs = useQuery({ ...farmTemperatureLogsQueryOptions(farmId), enabled: tab === 'climate' });
   const openTab = (next: FarmTab) =>
     setSearchParams(next === 'houses' ? {} : { tab: next }, { replace: true, preventScrollReset: true });
 
@@ -116,16 +119,36 @@ export default function FarmPage() {
             <HousesTable houses={houses.data ?? []} loading={houses.isPending} />
           </Stack>
         ) : null}
-        {tab === 'climate' ? <ClimateSection farmId={farmId} canEdit={farmAllows(farm.data, 'house:write')} /> : null}
+        {tab === 'climate' ? (
+          <ClimateSection farmId={farmId} canEdit={farmAllows(farm.data, 'house:write')} logs={logs.data ?? []} />
+        ) : null}
         {tab === 'temperature-logs' ? (
           <TemperatureLogsSection farmId={farmId} canEdit={farmAllows(farm.data, 'house:write')} />
         ) : null}
         {tab === 'season' ? (
           <Stack spacing={3}>
-            <SeasonBudgetSection farmId={farmId} />
+            <Stack direction="row" spacing={2} useFlexGap sx={{ alignItems: 'center', flexWrap: 'wrap' }}>
+              <CalibrationBasisSwitch farmId={farmId} value={heatLossBasis} onChange={setHeatLossBasis} />
+              <Button component={RouterLink} to={paths.fuelRecords(farmId)}>
+                Fuel bills and calibration
+              </Button>
+            </Stack>
+            <SeasonBudgetSection
+              farmId={farmId}
+              heatLossBasis={heatLossBasis}
+              renderMissingPrice={(fuel) => (
+                <MissingPriceForm
+                  farmId={farmId}
+                  fuel={fuel}
+                  currency={farm.data.currency}
+                  canEdit={farmAllows(farm.data, 'house:write')}
+                />
+              )}
+            />
             {referenceData.data ? (
               <FuelPricesEditor
                 farmId={farmId}
+                currency={farm.data.currency}
                 referenceData={referenceData.data}
                 canEdit={farmAllows(farm.data, 'house:write')}
               />

@@ -179,6 +179,7 @@ export default function HousePage() {
                 canAdopt={canWrite}
                 canRun={canRunEstimates}
                 onAdopted={onAdopted}
+                currency={farm.data.currency}
               />
               {/*
                 RESULT PANELS SLOT — add the heating, cooling and season panels here, one per line,

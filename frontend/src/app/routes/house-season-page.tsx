@@ -6,7 +6,9 @@ import { paths } from '../../config/paths';
 import { houseAlternativesQueryOptions } from '../../features/alternatives';
 import { farmAllows, farmDetailQueryOptions } from '../../features/farms';
 import { houseDetailQueryOptions } from '../../features/houses';
+import { MissingPriceForm } from '../../features/fuel-prices';
 import { SeasonView } from '../../features/season';
+import { CalibrationBasisSwitch, useHeatLossBasisParam } from '../../features/calibration';
 import { farmTemperatureLogsQueryOptions } from '../../features/temperature-logs';
 import { PageTitle } from '../../components/page-title';
 
@@ -19,6 +21,7 @@ export default function HouseSeasonPage() {
   const logs = useQuery({ ...farmTemperatureLogsQueryOptions(farmId), enabled: house.isSuccess });
   const alternatives = useQuery(houseAlternativesQueryOptions(houseId));
   const [search, setSearch] = useSearchParams();
+  const [heatLossBasis, setHeatLossBasis] = useHeatLossBasisParam();
   const alternativeId = Number(search.get('alternative')) || null;
   const alternative = alternatives.data?.find((alt) => alt.id === alternativeId) ?? null;
   const valid = (alternatives.data ?? []).filter((alt) => !alt.invalid);
@@ -64,8 +67,10 @@ export default function HouseSeasonPage() {
           ))}
         </TextField>
       ) : null}
+      <CalibrationBasisSwitch farmId={farm.data.id} value={heatLossBasis} onChange={setHeatLossBasis} />
       <SeasonView
         key={alternative?.id ?? 'house'}
+        heatLossBasis={heatLossBasis}
         alternative={
           alternative
             ? { id: alternative.id, name: alternative.name, ownCalendar: alternative.calendar !== null }
@@ -75,6 +80,14 @@ export default function HouseSeasonPage() {
         canRun={farmAllows(farm.data, 'estimate:run')}
         canEditCalendar={farmAllows(farm.data, 'house:write')}
         logs={logs.data ?? []}
+        renderMissingPrice={(fuel) => (
+          <MissingPriceForm
+            farmId={farm.data.id}
+            fuel={fuel}
+            currency={farm.data.currency}
+            canEdit={farmAllows(farm.data, 'house:write')}
+          />
+        )}
       />
     </Stack>
   );

@@ -1,6 +1,6 @@
 import { Breadcrumbs, Link, Stack, Typography } from '@mui/material';
 import { useQuery } from '@tanstack/react-query';
-import { useMemo } from 'react';
+import { useCallback, useMemo, useState } from 'react';
 import { Link as RouterLink, useNavigate, useParams } from 'react-router-dom';
 import { ErrorAlert, LoadingState } from '../../components/feedback';
 import { paths } from '../../config/paths';
@@ -8,6 +8,7 @@ import { farmAllows, farmDetailQueryOptions } from '../../features/farms';
 import { HouseForm, newHouseDefaults, useCreateHouse } from '../../features/houses';
 import { referenceDataQueryOptions } from '../../lib/reference-data';
 import { PageTitle } from '../../components/page-title';
+import { UnsavedChangesGuard } from '../../components/unsaved-changes-guard';
 
 export default function NewHousePage() {
   const farmId = Number(useParams().farmId);
@@ -19,6 +20,10 @@ export default function NewHousePage() {
     () => (referenceData.data ? newHouseDefaults(referenceData.data) : undefined),
     [referenceData.data],
   );
+  // Anything typed asks before it is left behind; once the house is being created (and after it
+  // is, while the page moves on to it) there is nothing to lose.
+  const [edited, setEdited] = useState(false);
+  const onValuesChange = useCallback((_input: unknown, { dirty }: { dirty: boolean }) => setEdited(dirty), []);
 
   if (farm.isPending || referenceData.isPending) return <LoadingState />;
   if (farm.isError) return <ErrorAlert error={farm.error} title="Farm could not be loaded" />;
@@ -41,11 +46,17 @@ export default function NewHousePage() {
         <Typography color="text.primary">New house</Typography>
       </Breadcrumbs>
       <Typography variant="h1">New house</Typography>
+      <UnsavedChangesGuard
+        dirty={edited && !createHouse.isPending && !createHouse.isSuccess}
+        what="the new house"
+        offerAlternative={false}
+      />
       {defaults ? (
         <HouseForm
           house={defaults}
           referenceData={referenceData.data}
           submitLabel="Create house"
+          onValuesChange={onValuesChange}
           onSubmit={async (input) => {
             const house = await createHouse.mutateAsync(input);
             navigate(paths.house(house.id), { replace: true });

@@ -23,6 +23,7 @@ import {
 } from '../../features/alternatives';
 import { farmAllows, farmDetailQueryOptions } from '../../features/farms';
 import { houseDetailQueryOptions } from '../../features/houses';
+import { CalibrationBasisSwitch, useHeatLossBasisParam } from '../../features/calibration';
 
 /** The house as it is and up to four of its alternatives, in columns. */
 export default function SideBySidePage() {
@@ -35,9 +36,13 @@ export default function SideBySidePage() {
   // with none named, the latest four
   const ids = search.has('alternatives') ? chosen : (alternatives.data ?? []).slice(-MAX_SIDE_BY_SIDE).map((a) => a.id);
   const canRun = farmAllows(farm.data, 'estimate:run');
+  const [heatLossBasis, setHeatLossBasis] = useHeatLossBasisParam();
   // the house's updatedAt in the key: a saved house edit recomputes every column
   const comparison = useQuery({
-    ...sideBySideQueryOptions(houseId, house.data?.updatedAt ?? '', { alternativeIds: ids }),
+    ...sideBySideQueryOptions(houseId, house.data?.updatedAt ?? '', {
+      alternativeIds: ids,
+      ...(heatLossBasis === 'calibrated' ? { heatLossBasis } : {}),
+    }),
     enabled: house.isSuccess && alternatives.isSuccess && canRun,
   });
 
@@ -70,6 +75,7 @@ export default function SideBySidePage() {
         the farm&apos;s climate and fuel prices and the house&apos;s production calendar (unless an alternative brings
         its own). Differences are against the house.
       </Typography>
+      <CalibrationBasisSwitch farmId={farm.data.id} value={heatLossBasis} onChange={setHeatLossBasis} />
 
       <ErrorAlert error={alternatives.error} title="Alternatives could not be loaded" />
       {alternatives.data && alternatives.data.length === 0 ? (

@@ -47,19 +47,22 @@ function numericRow(
   columns: SideBySideColumn[],
   pick: (column: SideBySideColumn) => number | null | undefined,
   units: Units,
-  kind: { quantity: Quantity; difference: Quantity } | 'money',
+  /** a quantity, or money in the farm's currency (ISO 4217) */
+  kind: { quantity: Quantity; difference: Quantity } | { currency: string },
   extra?: (column: SideBySideColumn) => { suffix: string; warning: boolean } | null,
 ): SideBySideRow {
-  const format = (q: Quantity | 'money', v: number) => (q === 'money' ? units.money(v, 0) : units.format(q, v));
+  const currency = 'currency' in kind ? kind.currency : '';
+  const format = (q: Quantity | 'money', v: number) =>
+    q === 'money' ? units.money(v, currency, 0) : units.format(q, v);
   const display = (q: Quantity | 'money', v: number) => (q === 'money' ? v : units.toDisplay(q, v));
-  const quantity = kind === 'money' ? 'money' : kind.quantity;
-  const differenceQuantity = kind === 'money' ? 'money' : kind.difference;
+  const quantity = 'currency' in kind ? 'money' : kind.quantity;
+  const differenceQuantity = 'currency' in kind ? 'money' : kind.difference;
   const house = columns[0] ? pick(columns[0]) : null;
   return {
     key,
     group,
     label,
-    unit: kind === 'money' ? 'money' : units.label(kind.quantity),
+    unit: 'currency' in kind ? 'money' : units.label(kind.quantity),
     cells: columns.map((column, index) => {
       const value = column.invalid ? null : pick(column);
       if (value === null || value === undefined) return { text: '—', difference: null, value: null };
@@ -100,17 +103,10 @@ export function sideBySideRows(data: SideBySide, units: Units): SideBySideRow[] 
   const rows: SideBySideRow[] = [];
   const power = { quantity: 'power', difference: 'power' } as const;
   const temperature = { quantity: 'temperature', difference: 'temperatureDifference' } as const;
+  const money = { currency: data.seasonInputsUsed.currency };
 
   rows.push(
-    numericRow(
-      'cost',
-      'Cost',
-      'Installed cost',
-      columns,
-      (c) => (c.alternativeId ? c.costAmount : null),
-      units,
-      'money',
-    ),
+    numericRow('cost', 'Cost', 'Installed cost', columns, (c) => (c.alternativeId ? c.costAmount : null), units, money),
   );
 
   // design night
@@ -253,8 +249,8 @@ export function sideBySideRows(data: SideBySide, units: Units): SideBySideRow[] 
         };
       }),
     },
-    numericRow('season-cost', 'Season', 'Season fuel cost', columns, (c) => c.season?.total.cost, units, 'money'),
-    numericRow('saving', 'Season', 'Yearly saving', columns, (c) => c.versusHouse?.yearlySaving, units, 'money'),
+    numericRow('season-cost', 'Season', 'Season fuel cost', columns, (c) => c.season?.total.cost, units, money),
+    numericRow('saving', 'Season', 'Yearly saving', columns, (c) => c.versusHouse?.yearlySaving, units, money),
     textRow('payback', 'Season', 'Simple payback', columns, (c) => {
       const versus = c.versusHouse;
       if (!versus) return null;
@@ -265,6 +261,8 @@ export function sideBySideRows(data: SideBySide, units: Units): SideBySideRow[] 
           return { text: 'at once (no cost)' };
         case 'enter-cost':
           return { text: 'enter a cost' };
+        case 'enter-price':
+          return { text: 'enter the fuel price' };
         default:
           return { text: 'never (no saving)', warning: true };
       }

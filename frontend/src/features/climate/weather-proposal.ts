@@ -1,5 +1,26 @@
 import type { ClimateProposal, SiteClimate } from '../../api/types';
 
+/**
+ * What any climate proposal offers, from weather history or from the farm's own temperature log:
+ * the design values at both percentiles, monthly normals and the climate it would save. A log
+ * has no humidity, so its wet bulb may be missing (null).
+ */
+export interface ProposalValues extends Pick<
+  ClimateProposal,
+  | 'winterDesign996C'
+  | 'winterDesign99C'
+  | 'summerDesign04C'
+  | 'summerDesign1C'
+  | 'summerCoincidentWetBulb04C'
+  | 'summerCoincidentWetBulb1C'
+  | 'summerDailyRangeK'
+  | 'monthly'
+> {
+  proposedClimate: Omit<ClimateProposal['proposedClimate'], 'summerDesignWetBulbC'> & {
+    summerDesignWetBulbC: number | null;
+  };
+}
+
 export type HeatingPercentile = '99.6' | '99';
 export type CoolingPercentile = '1' | '0.4';
 
@@ -10,12 +31,17 @@ export interface ProposalChoice {
   keepDesign: boolean;
   /** take the twelve monthly normals from the history */
   keepMonthly: boolean;
+  /** a wet bulb the user typed where the proposal has none (a log) and the farm has none yet, °C */
+  wetBulbC?: number | null;
 }
 
 export const DEFAULT_CHOICE: ProposalChoice = { heating: '99.6', cooling: '1', keepDesign: true, keepMonthly: true };
 
 /** The proposal's design values at the chosen percentiles (SI). */
-export function proposedDesign(proposal: ClimateProposal, choice: Pick<ProposalChoice, 'heating' | 'cooling'>) {
+export function proposedDesign(
+  proposal: ProposalValues,
+  choice: Pick<ProposalChoice, 'heating' | 'cooling' | 'wetBulbC'>,
+) {
   const wetBulb =
     choice.cooling === '1'
       ? (proposal.summerCoincidentWetBulb1C ?? proposal.summerCoincidentWetBulb04C)
@@ -23,7 +49,7 @@ export function proposedDesign(proposal: ClimateProposal, choice: Pick<ProposalC
   return {
     winterDesignC: choice.heating === '99.6' ? proposal.winterDesign996C : proposal.winterDesign99C,
     summerDesignC: choice.cooling === '1' ? proposal.summerDesign1C : proposal.summerDesign04C,
-    summerDesignWetBulbC: wetBulb ?? proposal.proposedClimate.summerDesignWetBulbC,
+    summerDesignWetBulbC: wetBulb ?? proposal.proposedClimate.summerDesignWetBulbC ?? choice.wetBulbC ?? null,
     summerDailyRangeK: proposal.summerDailyRangeK,
   };
 }
@@ -34,14 +60,16 @@ export function proposedDesign(proposal: ClimateProposal, choice: Pick<ProposalC
  * the other part with).
  */
 export function climateFromProposal(
-  proposal: ClimateProposal,
+  proposal: ProposalValues,
   current: SiteClimate | null,
   choice: ProposalChoice,
 ): SiteClimate | null {
   if (!choice.keepDesign && !choice.keepMonthly) return null;
   if (!current && !(choice.keepDesign && choice.keepMonthly)) return null;
+  const proposed = proposedDesign(proposal, choice);
+  if (choice.keepDesign && proposed.summerDesignWetBulbC === null) return null;
   const design = choice.keepDesign
-    ? proposedDesign(proposal, choice)
+    ? { ...proposed, summerDesignWetBulbC: proposed.summerDesignWetBulbC! }
     : {
         winterDesignC: current!.winterDesignC,
         summerDesignC: current!.summerDesignC,

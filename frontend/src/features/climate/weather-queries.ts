@@ -20,3 +20,11 @@ export const fetchClimateProposal = (farmId: number, fromYear: number, toYear: n
       params: { path: { farmId }, query: { fromYear, toYear } },
     }),
   );
+
+/** Design values and monthly normals from a year or more of one of the farm's hourly logs. */
+export const fetchLogClimateProposal = (farmId: number, logId: number) =>
+  unwrap(
+    client.GET('/api/farms/{farmId}/temperature-logs/{logId}/climate-proposal', {
+      params: { path: { farmId, logId } },
+    }),
+  );

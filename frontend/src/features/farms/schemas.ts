@@ -1,4 +1,4 @@
-import { BOUNDS } from '@thermbay/engine/vocabulary';
+import { BOUNDS, isCurrencyCode } from '@thermbay/engine/vocabulary';
 import * as yup from 'yup';
 import type { Units } from '../../lib/units';
 
@@ -39,6 +39,12 @@ export function farmFormSchema(units: Units) {
       .string()
       .required('Choose a time zone')
       .test('known-time-zone', 'Choose a time zone from the list', (value) => !value || isKnownTimeZone(value)),
+    currency: yup
+      .string()
+      .required('Choose the currency the farm pays in')
+      .test('known-currency', 'Choose a currency from the list (a three-letter code such as USD or EUR)', (value) =>
+        !value ? true : isCurrencyCode(value),
+      ),
   });
 }
 
@@ -48,4 +54,6 @@ export interface FarmFormValues {
   longitudeDeg: string;
   elevationM: string;
   timeZone: string;
+  /** ISO 4217 code, e.g. USD */
+  currency: string;
 }

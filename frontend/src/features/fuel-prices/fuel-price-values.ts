@@ -72,3 +72,30 @@ export const fuelPriceFormSchema = yup.object({
     }),
   ),
 });
+
+/** The price a grower types in place (season or budget page) for one fuel. */
+export interface SinglePrice {
+  fuelId: string;
+  pricePerUnit: number;
+  priceUnit: PriceUnit;
+}
+
+/**
+ * The whole set to PUT when one fuel's price is added in place: the stored prices as they are,
+ * with this fuel's price added (or replaced).
+ */
+export function withPrice(stored: FuelPrice[], price: SinglePrice): FuelPricesInput {
+  const others = stored
+    .filter((row) => row.fuelId !== price.fuelId)
+    .map(({ fuelId, pricePerUnit, priceUnit, note }) => ({ fuelId, pricePerUnit, priceUnit, note }));
+  return { prices: [...others, { ...price, note: null }] };
+}
+
+/** A typed price, or the reason it is not one (in the user's words). */
+export function parsePrice(text: string): { price: number } | { problem: string } {
+  const trimmed = text.trim().replace(/^\p{Sc}\s*/u, ''); // a currency sign in front is allowed
+  if (trimmed === '') return { problem: 'Enter the price' };
+  const value = Number(trimmed);
+  if (!Number.isFinite(value) || value < 0 || value > 1e6) return { problem: 'Enter a price of 0 or more' };
+  return { price: value };
+}

@@ -58,3 +58,24 @@ describe('heatLossRows', () => {
     expect(rows.find((row) => row.key === 'perimeter')!.quantity).toBe('232 ft');
   });
 });
+
+describe('the clear-night row', () => {
+  it('shows radiation to the sky per m² of floor, not as a U-value', () => {
+    const rows = heatLossRows(
+      [
+        {
+          key: 'sky',
+          label: 'Radiation to a clear night sky',
+          quantity: 270,
+          quantityUnit: 'm2',
+          coefficient: 26.28,
+          conductanceWPerK: 236.5,
+          watts: 7095.6,
+          share: 0.12,
+        },
+      ],
+      unitsFor('si'),
+    );
+    expect(rows[0]).toMatchObject({ label: 'Clear night sky', coefficient: '26 W/m² of floor', loss: '7.1 kW' });
+  });
+});

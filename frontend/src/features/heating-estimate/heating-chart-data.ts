@@ -8,6 +8,7 @@ export const COMPONENT_LABELS: Record<HeatLossComponent['key'], string> = {
   kneewall: 'Kneewall',
   perimeter: 'Perimeter',
   infiltration: 'Air leakage',
+  sky: 'Clear night sky',
 };
 
 const QUANTITY_OF: Record<HeatLossComponent['quantityUnit'], Quantity> = { m2: 'area', m: 'length', m3: 'volume' };
@@ -33,6 +34,8 @@ function detailOf(apiLabel: string): string | null {
 function coefficientOf(component: HeatLossComponent, units: Units): string {
   if (component.key === 'infiltration') return `${component.coefficient} ACH`;
   if (component.key === 'perimeter') return `F ${units.format('perimeterFactor', component.coefficient)}`;
+  // radiation to the sky is per m² of floor, not per kelvin
+  if (component.key === 'sky') return `${units.format('irradiance', component.coefficient)} of floor`;
   return `U ${units.format('uValue', component.coefficient)}`;
 }
 

@@ -6,8 +6,8 @@ const MONTHS = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', '
 export interface BudgetChartSeries {
   /** 'Sep 2026' … */
   labels: string[];
-  /** cost of the priced fuels per month, in the currency of the prices */
-  cost: number[];
+  /** cost of the priced fuels per month, in the farm's currency; null where nothing is priced */
+  cost: (number | null)[];
   /** heat delivered per month in the user's energy unit */
   heat: number[];
   heatUnitLabel: string;
@@ -19,7 +19,7 @@ export function budgetChartSeries(budget: Pick<SeasonBudget, 'monthly'>, units: 
   const heatDecimals = units.decimals('energyKWh');
   return {
     labels: months.map((month) => `${MONTHS[month.month - 1]} ${month.year}`),
-    cost: months.map((month) => Math.round(month.cost * 100) / 100),
+    cost: months.map((month) => (month.cost === null ? null : Math.round(month.cost * 100) / 100)),
     heat: months.map((month) => Number(units.toDisplay('energyKWh', month.energyKWh).toFixed(heatDecimals))),
     heatUnitLabel: units.label('energyKWh'),
   };

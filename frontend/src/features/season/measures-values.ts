@@ -62,6 +62,7 @@ export function lightChangeText(measure: Pick<MeasureResult, 'lightChange'>, uni
 const PAYBACK_WORDS: Record<Exclude<MeasureResult['paybackStatus'], 'years'>, string> = {
   immediate: 'immediately',
   'enter-cost': 'enter a cost',
+  'enter-price': 'enter the fuel price',
   never: 'never',
   'not-applicable': '—',
 };

@@ -18,8 +18,11 @@ export function AlternativesSection({
   canAdopt,
   canRun,
   onAdopted,
+  currency,
 }: {
   houseId: number;
+  /** the farm's currency (ISO 4217) for the alternatives' costs */
+  currency: string;
   /** alternative:write */
   canWrite: boolean;
   /** house:write: may make an alternative the house */
@@ -60,7 +63,9 @@ export function AlternativesSection({
                     <>
                       {alt.changedFields.length > 0 ? `Changes ${alt.changedFields.join(', ')}` : 'No field changes'}
                       {alt.calendar ? ', own calendar' : ''}
-                      {alt.costAmount !== null ? ` · cost ${units.money(alt.costAmount, 0)}` : ' · no cost entered'}
+                      {alt.costAmount !== null
+                        ? ` · cost ${units.money(alt.costAmount, currency, 0)}`
+                        : ' · no cost entered'}
                       {alt.createdByName ? ` · by ${alt.createdByName}` : ''}
                     </>
                   }

@@ -166,14 +166,20 @@ export function SideBySideView({ data, fileName }: { data: SideBySide; fileName:
               <Bar
                 data={{
                   labels: chart.labels,
-                  datasets: [{ label: 'Season fuel cost', data: chart.seasonCost, backgroundColor: palette[0] }],
+                  datasets: [
+                    {
+                      label: `Season fuel cost (${data.seasonInputsUsed.currency})`,
+                      data: chart.seasonCost,
+                      backgroundColor: palette[0],
+                    },
+                  ],
                 }}
                 options={{
                   responsive: true,
                   maintainAspectRatio: false,
                   animation: false,
                   plugins: { legend: { display: false } },
-                  scales: { y: { beginAtZero: true, title: { display: true, text: 'money' } } },
+                  scales: { y: { beginAtZero: true, title: { display: true, text: data.seasonInputsUsed.currency } } },
                 }}
               />
             </Box>

@@ -6,14 +6,25 @@ import { useSaveConflict } from '../../../components/save-conflict';
 import { usePutFarmClimate } from '../mutations';
 import { farmClimateQueryOptions } from '../queries';
 import { ClimateEditor } from './climate-editor';
+import { LogClimateDialog, type ClimateLogChoice } from './log-climate-dialog';
 import { WeatherFillDialog } from './weather-fill-dialog';
 import { climateKeys } from '../../../api/query-keys';
 
 /** The farm's climate, loaded and saved; editable for roles with house:write. */
-export function ClimateSection({ farmId, canEdit }: { farmId: number; canEdit: boolean }) {
+export function ClimateSection({
+  farmId,
+  canEdit,
+  logs = [],
+}: {
+  farmId: number;
+  canEdit: boolean;
+  /** the farm's temperature logs, to work the climate out from one */
+  logs?: ClimateLogChoice[];
+}) {
   const climate = useQuery(farmClimateQueryOptions(farmId));
   const save = usePutFarmClimate(farmId);
   const [filling, setFilling] = useState(false);
+  const [fromLog, setFromLog] = useState(false);
   const saveConflict = useSaveConflict({ what: 'climate', mutation: save, queryKey: climateKeys.farm(farmId) });
   return (
     <Paper component="section" aria-labelledby="climate-heading" sx={{ p: 2 }}>
@@ -27,9 +38,14 @@ export function ClimateSection({ farmId, canEdit }: { farmId: number; canEdit: b
             Climate
           </Typography>
           {canEdit && climate.data ? (
-            <Button variant="outlined" onClick={() => setFilling(true)}>
-              Fill from weather history
-            </Button>
+            <Stack direction="row" spacing={1} sx={{ flexWrap: 'wrap' }}>
+              <Button variant="outlined" onClick={() => setFromLog(true)}>
+                Propose from a temperature log
+              </Button>
+              <Button variant="outlined" onClick={() => setFilling(true)}>
+                Fill from weather history
+              </Button>
+            </Stack>
           ) : null}
         </Stack>
         {climate.isPending ? <LoadingState label="Loading climate…" /> : null}
@@ -47,6 +63,16 @@ export function ClimateSection({ farmId, canEdit }: { farmId: number; canEdit: b
             open={filling}
             current={climate.data.climate}
             onClose={() => setFilling(false)}
+            onSave={(body) => save.mutateAsync({ body, version: climate.data.version })}
+          />
+        ) : null}
+        {climate.data ? (
+          <LogClimateDialog
+            farmId={farmId}
+            logs={logs}
+            open={fromLog}
+            current={climate.data.climate}
+            onClose={() => setFromLog(false)}
             onSave={(body) => save.mutateAsync({ body, version: climate.data.version })}
           />
         ) : null}

@@ -1,21 +1,13 @@
 import {
   Alert,
   Button,
-  Checkbox,
   Dialog,
   DialogActions,
   DialogContent,
   DialogTitle,
-  FormControlLabel,
   LinearProgress,
   MenuItem,
   Stack,
-  Table,
-  TableBody,
-  TableCell,
-  TableContainer,
-  TableHead,
-  TableRow,
   TextField,
   Typography,
 } from '@mui/material';
@@ -23,17 +15,9 @@ import { useQuery } from '@tanstack/react-query';
 import { useRef, useState } from 'react';
 import type { ClimateProposal, SiteClimate } from '../../../api/types';
 import { ErrorAlert } from '../../../components/feedback';
-import { useUnits } from '../../../lib/units';
-import { MONTH_SHORT_NAMES } from '../climate-form-values';
 import { fetchClimateProposal, fetchWeatherYear, weatherSourceQueryOptions } from '../weather-queries';
-import {
-  climateFromProposal,
-  DEFAULT_CHOICE,
-  proposedDesign,
-  type CoolingPercentile,
-  type HeatingPercentile,
-  type ProposalChoice,
-} from '../weather-proposal';
+import { climateFromProposal, DEFAULT_CHOICE, type ProposalChoice } from '../weather-proposal';
+import { ClimateProposalReview } from './climate-proposal-review';
 
 export interface WeatherFillDialogProps {
   farmId: number;
@@ -46,14 +30,11 @@ export interface WeatherFillDialogProps {
 
 type Progress = { done: number; total: number; year: number | null };
 
-const cellSx = { py: 0.5, px: 1 } as const;
-
 /**
  * Fills the farm's climate from years of hourly weather history: fetch year by year (with
  * progress), show the proposal beside the current values, save only what the user keeps.
  */
 export function WeatherFillDialog({ farmId, open, current, onClose, onSave }: WeatherFillDialogProps) {
-  const units = useUnits();
   const source = useQuery({ ...weatherSourceQueryOptions(farmId), enabled: open });
   const [fromYear, setFromYear] = useState<number | null>(null);
   const [toYear, setToYear] = useState<number | null>(null);
@@ -71,7 +52,6 @@ export function WeatherFillDialog({ farmId, open, current, onClose, onSave }: We
   const spanInvalid = from === null || to === null || from > to || to - from + 1 > 30;
   const busy = progress !== null && proposal === null && error === null;
   const toSave = proposal ? climateFromProposal(proposal, current, choice) : null;
-  const t = units.label('temperature');
 
   const close = () => {
     cancelled.current = true;
@@ -114,22 +94,6 @@ export function WeatherFillDialog({ farmId, open, current, onClose, onSave }: We
       setSaving(false);
     }
   };
-
-  const design = proposal ? proposedDesign(proposal, choice) : null;
-  const row = (
-    label: string,
-    currentSi: number | null | undefined,
-    proposedSi: number | null | undefined,
-    quantity: 'temperature' | 'temperatureDifference' = 'temperature',
-  ) => (
-    <TableRow key={label}>
-      <TableCell component="th" scope="row" sx={cellSx}>
-        {label}
-      </TableCell>
-      <TableCell sx={cellSx}>{units.format(quantity, currentSi ?? null)}</TableCell>
-      <TableCell sx={cellSx}>{units.format(quantity, proposedSi ?? null)}</TableCell>
-    </TableRow>
-  );
 
   return (
     <Dialog open={open} onClose={busy ? undefined : close} maxWidth="md" fullWidth aria-labelledby="weather-fill-title">
@@ -207,7 +171,7 @@ export function WeatherFillDialog({ farmId, open, current, onClose, onSave }: We
             </Stack>
           ) : null}
           <ErrorAlert error={error} title="Nothing was changed" />
-          {proposal && design ? (
+          {proposal ? (
             <Stack spacing={2} data-testid="weather-proposal">
               <Typography variant="body2">
                 Years used: {proposal.yearsUsed.map((y) => y.year).join(', ')} (
@@ -217,118 +181,13 @@ export function WeatherFillDialog({ farmId, open, current, onClose, onSave }: We
                   ? ` Left out: ${proposal.yearsLeftOut.map((y) => `${y.year} (${y.reason})`).join('; ')}.`
                   : ''}
               </Typography>
-              <Stack direction={{ xs: 'column', sm: 'row' }} spacing={2}>
-                <TextField
-                  select
-                  label="Heating design at"
-                  value={choice.heating}
-                  onChange={(event) => setChoice({ ...choice, heating: event.target.value as HeatingPercentile })}
-                  sx={{ minWidth: 200 }}
-                >
-                  <MenuItem value="99.6">99.6 % (colder, the usual choice)</MenuItem>
-                  <MenuItem value="99">99 %</MenuItem>
-                </TextField>
-                <TextField
-                  select
-                  label="Cooling design at"
-                  value={choice.cooling}
-                  onChange={(event) => setChoice({ ...choice, cooling: event.target.value as CoolingPercentile })}
-                  sx={{ minWidth: 200 }}
-                >
-                  <MenuItem value="1">1 %</MenuItem>
-                  <MenuItem value="0.4">0.4 % (hotter)</MenuItem>
-                </TextField>
-              </Stack>
-              <TableContainer>
-                <Table size="small" aria-label="Current and proposed design temperatures">
-                  <TableHead>
-                    <TableRow>
-                      <TableCell sx={cellSx}>Design value</TableCell>
-                      <TableCell sx={cellSx}>Now</TableCell>
-                      <TableCell sx={cellSx}>From the history</TableCell>
-                    </TableRow>
-                  </TableHead>
-                  <TableBody>
-                    {row('Heating design temperature', current?.winterDesignC, design.winterDesignC)}
-                    {row('Cooling design temperature', current?.summerDesignC, design.summerDesignC)}
-                    {row('Coincident wet bulb', current?.summerDesignWetBulbC, design.summerDesignWetBulbC)}
-                    {row(
-                      'Daily range, warmest month',
-                      current?.summerDailyRangeK,
-                      design.summerDailyRangeK,
-                      'temperatureDifference',
-                    )}
-                  </TableBody>
-                </Table>
-              </TableContainer>
-              <TableContainer>
-                <Table size="small" aria-label="Current and proposed monthly normals">
-                  <TableHead>
-                    <TableRow>
-                      <TableCell sx={cellSx}>Month</TableCell>
-                      <TableCell sx={cellSx}>Min now ({t})</TableCell>
-                      <TableCell sx={cellSx}>Min proposed ({t})</TableCell>
-                      <TableCell sx={cellSx}>Max now ({t})</TableCell>
-                      <TableCell sx={cellSx}>Max proposed ({t})</TableCell>
-                      <TableCell sx={cellSx}>Clearness proposed</TableCell>
-                    </TableRow>
-                  </TableHead>
-                  <TableBody>
-                    {proposal.monthly.map((month) => {
-                      const now = current?.monthly.find((m) => m.month === month.month);
-                      return (
-                        <TableRow key={month.month}>
-                          <TableCell component="th" scope="row" sx={cellSx}>
-                            {MONTH_SHORT_NAMES[month.month - 1]}
-                          </TableCell>
-                          <TableCell sx={cellSx}>
-                            {units.format('temperature', now?.meanDailyMinC ?? null, { withoutUnit: true })}
-                          </TableCell>
-                          <TableCell sx={cellSx}>
-                            {units.format('temperature', month.meanDailyMinC, { withoutUnit: true })}
-                          </TableCell>
-                          <TableCell sx={cellSx}>
-                            {units.format('temperature', now?.meanDailyMaxC ?? null, { withoutUnit: true })}
-                          </TableCell>
-                          <TableCell sx={cellSx}>
-                            {units.format('temperature', month.meanDailyMaxC, { withoutUnit: true })}
-                          </TableCell>
-                          <TableCell sx={cellSx}>
-                            {month.clearness === null ? '—' : `${Math.round(month.clearness * 100)} %`}
-                          </TableCell>
-                        </TableRow>
-                      );
-                    })}
-                  </TableBody>
-                </Table>
-              </TableContainer>
-              <Stack direction={{ xs: 'column', sm: 'row' }} spacing={2}>
-                <FormControlLabel
-                  control={
-                    <Checkbox
-                      checked={choice.keepDesign}
-                      onChange={(event) => setChoice({ ...choice, keepDesign: event.target.checked })}
-                    />
-                  }
-                  label="Keep the design temperatures"
-                />
-                <FormControlLabel
-                  control={
-                    <Checkbox
-                      checked={choice.keepMonthly}
-                      onChange={(event) => setChoice({ ...choice, keepMonthly: event.target.checked })}
-                    />
-                  }
-                  label="Keep the monthly normals"
-                />
-              </Stack>
-              {!toSave ? (
-                <Typography variant="body2" color="error">
-                  {current
-                    ? 'Tick at least one part to keep.'
-                    : 'This farm has no climate yet: keep both parts to save a complete climate.'}
-                </Typography>
-              ) : null}
+              <ClimateProposalReview
+                proposal={proposal}
+                current={current}
+                choice={choice}
+                onChoice={setChoice}
+                proposedHeading="From the history"
+              />
             </Stack>
           ) : null}
         </Stack>

@@ -5,38 +5,38 @@ import {
   AccordionSummary,
   Alert,
   Box,
-  Chip,
   Grid,
   LinearProgress,
   Stack,
-  Table,
-  TableBody,
-  TableCell,
-  TableHead,
-  TableRow,
   Typography,
 } from '@mui/material';
 import { useQuery } from '@tanstack/react-query';
 import { useMemo, useState } from 'react';
-import type { CoolingConditionsSource, CoolingEstimate, House, HouseSpec, ReferenceData } from '../../../api/types';
+import type { CoolingEstimate, House, HouseSpec } from '../../../api/types';
 import {
   AssumptionList,
   CautionsAlert,
   EstimateError,
   Figure,
-  formatPercent,
   NoPermissionNote,
   ResultPanel,
 } from '../../../components/estimate-parts';
 import { ErrorAlert } from '../../../components/feedback';
 import { houseSpecOf } from '../../../lib/house-spec';
-import { referenceDataQueryOptions, referenceLabel } from '../../../lib/reference-data';
+import { referenceDataQueryOptions } from '../../../lib/reference-data';
 import { useDebouncedValue } from '../../../lib/use-debounced-value';
-import { useUnits, type Units } from '../../../lib/units';
+import { useUnits } from '../../../lib/units';
 import { hourRanges } from '../cooling-chart-data';
 import { editedCoolingEstimateQueryOptions, storedCoolingEstimateQueryOptions } from '../queries';
+import { AirExchangeFigures } from './air-exchange-figures';
+import { CapacityFactors } from './capacity-factors';
 import { DesignDayChart } from './design-day-chart';
+import { FanStaging } from './fan-staging';
+import { FanVerdict } from './fan-verdict';
+import { PadsResult } from './pads-result';
 import { EMPTY_PAD_WHAT_IF, PadWhatIf, parsePadWhatIf, type PadWhatIfValues } from './pad-what-if';
+import { SummerDesignFigures } from './summer-design-figures';
+import { WinterFanStage } from './winter-fan-stage';
 
 export interface CoolingPanelProps {
   /** the stored house (SI) */
@@ -47,118 +47,6 @@ export interface CoolingPanelProps {
   editedHouse?: HouseSpec | null;
   /** the form holds invalid values: results are for the last valid ones */
   editsInvalid?: boolean;
-}
-
-const SOURCE_WORDS: Record<CoolingConditionsSource[keyof CoolingConditionsSource], string> = {
-  'farm climate': 'farm climate',
-  request: 'typed here',
-  'calendar default': 'mid-summer default',
-  'reference data': 'default',
-  'house length': 'house length',
-  none: 'none',
-};
-
-const fmtNumber = (value: number, decimals: number) =>
-  new Intl.NumberFormat('en-US', { minimumFractionDigits: decimals, maximumFractionDigits: decimals }).format(value);
-
-function FanVerdict({ estimate, units }: { estimate: CoolingEstimate; units: Units }) {
-  const capacity = estimate.capacity;
-  const installed = units.format('airFlow', capacity.installedFlowM3PerS);
-  const required = units.format('airFlow', capacity.requiredFlowM3PerS);
-  if (capacity.verdict === 'adequate') {
-    return (
-      <Alert severity="success" data-testid="fan-verdict">
-        <strong>Fans are adequate.</strong> {installed} installed covers the {required} required.
-      </Alert>
-    );
-  }
-  if (capacity.verdict === 'no-fans') {
-    return (
-      <Alert severity="error" data-testid="fan-verdict">
-        <strong>No exhaust fans entered.</strong> The house needs {required} of exhaust.
-      </Alert>
-    );
-  }
-  return (
-    <Alert severity="error" data-testid="fan-verdict">
-      <strong>Fans are short:</strong> {installed} installed against {required} required.{' '}
-      {capacity.fansNeeded !== null ? (
-        <>
-          <strong>
-            {capacity.fansNeeded} fans of this size are needed in all
-            {capacity.additionalFansNeeded ? ` (add ${capacity.additionalFansNeeded})` : ''}.
-          </strong>
-        </>
-      ) : null}
-    </Alert>
-  );
-}
-
-function CapacityFactors({ estimate }: { estimate: CoolingEstimate }) {
-  const factors = estimate.capacity.factors;
-  const rows: [string, number][] = [
-    ['Elevation', factors.elevation],
-    ['Light', factors.light],
-    ['Temperature rise', factors.temperatureRise],
-    ['House (elevation × light × rise)', factors.house],
-    ['Inlet-to-fan distance (velocity)', factors.velocity],
-    ['Applied (larger of house and distance)', factors.applied],
-  ];
-  return (
-    <Table size="small" aria-label="Capacity factors">
-      <TableBody>
-        {rows.map(([label, value]) => (
-          <TableRow key={label}>
-            <TableCell>{label}</TableCell>
-            <TableCell align="right">× {fmtNumber(value, 3)}</TableCell>
-          </TableRow>
-        ))}
-      </TableBody>
-    </Table>
-  );
-}
-
-function PadsResult({
-  estimate,
-  units,
-  referenceData,
-}: {
-  estimate: CoolingEstimate;
-  units: Units;
-  referenceData: ReferenceData | undefined;
-}) {
-  const pads = estimate.pads;
-  if (!pads) return null;
-  return (
-    <Stack spacing={1}>
-      <Alert severity={pads.verdict === 'adequate' ? 'success' : 'warning'}>
-        {referenceLabel(referenceData, 'evaporative-pads', pads.padTypeId)}:{' '}
-        {pads.verdict === 'adequate'
-          ? `${units.format('area', pads.areaM2)} is enough (${units.format('area', pads.areaNeededM2)} needed).`
-          : `${units.format('area', pads.areaM2)} is short of the ${units.format('area', pads.areaNeededM2)} needed at the design face velocity.`}
-      </Alert>
-      <Grid container spacing={2}>
-        <Grid size={6}>
-          <Figure label="Face velocity" value={units.format('velocity', pads.faceVelocityMPerS)} />
-        </Grid>
-        <Grid size={6}>
-          <Figure label="Saturation efficiency" value={formatPercent(pads.saturationEfficiency)} />
-        </Grid>
-        <Grid size={6}>
-          <Figure
-            label="Air leaving the pads at the peak"
-            value={units.format('temperature', pads.leavingAirAtPeakC)}
-          />
-        </Grid>
-        <Grid size={6}>
-          <Figure
-            label="Peak indoor with pads"
-            value={units.format('temperature', estimate.designDay.peakIndoorWithPadsC)}
-          />
-        </Grid>
-      </Grid>
-    </Stack>
-  );
 }
 
 /**
@@ -232,86 +120,16 @@ export function CoolingPanel({ house, canRunEstimates, editedHouse = null, edits
 
       {estimate && stored.data ? (
         <>
-          <Grid container spacing={2}>
-            <Grid size={6}>
-              <Figure
-                label={`Summer design dry bulb (${SOURCE_WORDS[stored.data.conditionsSource.summerDesignC]})`}
-                value={units.format('temperature', stored.data.conditionsUsed.summerDesignC)}
-              />
-            </Grid>
-            <Grid size={6}>
-              <Figure
-                label={`Coincident wet bulb (${SOURCE_WORDS[stored.data.conditionsSource.summerDesignWetBulbC]})`}
-                value={units.format('temperature', stored.data.conditionsUsed.summerDesignWetBulbC)}
-              />
-            </Grid>
-            <Grid size={6}>
-              <Figure
-                label={`Daily range (${SOURCE_WORDS[stored.data.conditionsSource.dailyRangeK]})`}
-                value={units.format('temperatureDifference', stored.data.conditionsUsed.dailyRangeK)}
-              />
-            </Grid>
-            <Grid size={6}>
-              <Figure
-                label={`Design day (${SOURCE_WORDS[stored.data.conditionsSource.designDate]})`}
-                value={estimate.designDay.date}
-              />
-            </Grid>
-          </Grid>
+          <SummerDesignFigures
+            conditionsUsed={stored.data.conditionsUsed}
+            conditionsSource={stored.data.conditionsSource}
+            designDay={estimate.designDay}
+            units={units}
+          />
 
           <FanVerdict estimate={estimate} units={units} />
 
-          <Grid container spacing={2}>
-            <Grid size={6}>
-              <Figure
-                label="Air changes with all fans"
-                value={`${fmtNumber(estimate.airExchange.airChangesPerHour, 1)} per hour · ${fmtNumber(
-                  estimate.airExchange.airChangesPerMinute,
-                  2,
-                )} per minute`}
-              />
-            </Grid>
-            <Grid size={6}>
-              <Figure
-                label="Installed flow per floor area"
-                value={units.format('airFlowPerFloorArea', estimate.airExchange.flowPerFloorAreaM3PerSM2)}
-              />
-            </Grid>
-            <Grid size={6}>
-              <Figure
-                label="Installed exhaust"
-                value={units.format('airFlow', estimate.capacity.installedFlowM3PerS)}
-              />
-            </Grid>
-            <Grid size={6}>
-              <Figure
-                label="Required exhaust"
-                value={`${units.format('airFlow', estimate.capacity.requiredFlowM3PerS)} (${units.format(
-                  'airFlowPerFloorArea',
-                  floorAreaM2 > 0 ? estimate.capacity.requiredFlowM3PerS / floorAreaM2 : null,
-                )})`}
-              />
-            </Grid>
-            <Grid size={12}>
-              <Figure
-                label="Inlet free area"
-                value={
-                  <Stack direction="row" spacing={1} sx={{ alignItems: 'center' }} component="span">
-                    <span>
-                      {units.format('area', estimate.capacity.inletAreaM2)} entered,{' '}
-                      {units.format('area', estimate.capacity.inletAreaNeededM2)} needed
-                    </span>
-                    <Chip
-                      size="small"
-                      variant="outlined"
-                      color={estimate.capacity.inletVerdict === 'adequate' ? 'success' : 'warning'}
-                      label={estimate.capacity.inletVerdict === 'adequate' ? 'enough' : 'too small'}
-                    />
-                  </Stack>
-                }
-              />
-            </Grid>
-          </Grid>
+          <AirExchangeFigures estimate={estimate} floorAreaM2={floorAreaM2} units={units} />
 
           <Accordion disableGutters>
             <AccordionSummary expandIcon={<ExpandMoreIcon />}>
@@ -377,36 +195,7 @@ export function CoolingPanel({ house, canRunEstimates, editedHouse = null, edits
               </Typography>
             </AccordionSummary>
             <AccordionDetails>
-              <Stack spacing={1}>
-                {estimate.staging.warnings.map((warning) => (
-                  <Alert key={warning} severity="warning">
-                    {units.prose(warning)}
-                  </Alert>
-                ))}
-                <Typography variant="body2">
-                  Gap between night heating and the first fan stage:{' '}
-                  {units.format('temperatureDifference', estimate.staging.deadbandK)} (at least{' '}
-                  {units.format('temperatureDifference', estimate.staging.requiredDeadbandK)}).
-                </Typography>
-                <Table size="small" aria-label="Suggested fan stages">
-                  <TableHead>
-                    <TableRow>
-                      <TableCell>Stage</TableCell>
-                      <TableCell align="right">On at</TableCell>
-                      <TableCell align="right">Fans</TableCell>
-                    </TableRow>
-                  </TableHead>
-                  <TableBody>
-                    {estimate.staging.stages.map((stage) => (
-                      <TableRow key={stage.stage}>
-                        <TableCell>{stage.stage}</TableCell>
-                        <TableCell align="right">{units.format('temperature', stage.onAtC)}</TableCell>
-                        <TableCell align="right">{stage.fans}</TableCell>
-                      </TableRow>
-                    ))}
-                  </TableBody>
-                </Table>
-              </Stack>
+              <FanStaging staging={estimate.staging} units={units} />
             </AccordionDetails>
           </Accordion>
 
@@ -417,35 +206,7 @@ export function CoolingPanel({ house, canRunEstimates, editedHouse = null, edits
               </Typography>
             </AccordionSummary>
             <AccordionDetails>
-              <Grid container spacing={2}>
-                <Grid size={6}>
-                  <Figure
-                    label={`Rate (${formatPercent(estimate.winterVentilation.fractionOfSummerRate)} of summer)`}
-                    value={units.format('airFlow', estimate.winterVentilation.flowM3PerS)}
-                  />
-                </Grid>
-                <Grid size={6}>
-                  <Figure
-                    label="Air changes"
-                    value={`${fmtNumber(estimate.winterVentilation.airChangesPerHour, 1)} per hour`}
-                  />
-                </Grid>
-                <Grid size={6}>
-                  <Figure
-                    label={`Heat to warm it at ${units.format('temperature', estimate.winterVentilation.atOutdoorC)} outdoors`}
-                    value={units.format('power', estimate.winterVentilation.heatCostW)}
-                  />
-                </Grid>
-                <Grid size={6}>
-                  <Figure
-                    label="The house's own loss then"
-                    value={units.format('power', estimate.winterVentilation.houseHeatLossW)}
-                  />
-                </Grid>
-              </Grid>
-              <Typography variant="body2" color="text.secondary" sx={{ mt: 1 }}>
-                The winter fan stage is for cool sunny days and short humidity purges, not for running all night.
-              </Typography>
+              <WinterFanStage winterVentilation={estimate.winterVentilation} units={units} />
             </AccordionDetails>
           </Accordion>
 

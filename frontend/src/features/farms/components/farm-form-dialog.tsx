@@ -15,7 +15,8 @@ import type { Farm, FarmInput } from '../../../api/types';
 import { ErrorAlert } from '../../../components/feedback';
 import { useSaveConflict } from '../../../components/save-conflict';
 import { FormNumberField, FormTextField } from '../../../components/form-fields';
-import { useUnits, type Units } from '../../../lib/units';
+import { DEFAULT_CURRENCY } from '@thermbay/engine/vocabulary';
+import { currencyCodes, useUnits, type Units } from '../../../lib/units';
 import { useCreateFarm, useUpdateFarm } from '../mutations';
 import { farmFormSchema, type FarmFormValues } from '../schemas';
 import { farmKeys } from '../../../api/query-keys';
@@ -28,13 +29,30 @@ function allTimeZones(): string[] {
   }
 }
 
+/** "EUR — Euro" where the browser knows the name, else the code. */
+function currencyName(code: string): string {
+  try {
+    const name = new Intl.DisplayNames(['en'], { type: 'currency' }).of(code);
+    return name && name !== code ? `${code} — ${name}` : code;
+  } catch {
+    return code;
+  }
+}
+
 function browserTimeZone(): string {
   return Intl.DateTimeFormat().resolvedOptions().timeZone || 'UTC';
 }
 
 function toFormValues(farm: Farm | undefined, units: Units): FarmFormValues {
   if (!farm) {
-    return { name: '', latitudeDeg: '', longitudeDeg: '', elevationM: '', timeZone: browserTimeZone() };
+    return {
+      name: '',
+      latitudeDeg: '',
+      longitudeDeg: '',
+      elevationM: '',
+      timeZone: browserTimeZone(),
+      currency: DEFAULT_CURRENCY,
+    };
   }
   return {
     name: farm.name,
@@ -42,6 +60,7 @@ function toFormValues(farm: Farm | undefined, units: Units): FarmFormValues {
     longitudeDeg: String(farm.longitudeDeg),
     elevationM: units.toInput('length', farm.elevationM),
     timeZone: farm.timeZone,
+    currency: farm.currency,
   };
 }
 
@@ -57,6 +76,7 @@ function toFarmInput(values: FarmFormValues, initial: FarmFormValues, farm: Farm
     longitudeDeg: Number(values.longitudeDeg),
     elevationM,
     timeZone: values.timeZone,
+    currency: values.currency,
   };
 }
 
@@ -85,6 +105,7 @@ export function FarmFormDialog({ open, onClose, farm, onSaved }: FarmFormDialogP
   const schema = useMemo(() => farmFormSchema(units), [units]);
   const initialValues = useMemo(() => toFormValues(farm, units), [farm, units]);
   const timeZones = useMemo(allTimeZones, []);
+  const currencies = useMemo(currencyCodes, []);
   const title = farm ? `Edit ${farm.name}` : 'New farm';
 
   return (
@@ -108,6 +129,10 @@ export function FarmFormDialog({ open, onClose, farm, onSaved }: FarmFormDialogP
           }}
         >
           {({ values, errors, touched, submitCount, setFieldValue, setFieldTouched, isSubmitting }) => {
+            const currencyError =
+              (getIn(touched, 'currency') || submitCount > 0) && typeof errors.currency === 'string'
+                ? errors.currency
+                : undefined;
             const timeZoneError =
               (getIn(touched, 'timeZone') || submitCount > 0) && typeof errors.timeZone === 'string'
                 ? errors.timeZone
@@ -150,6 +175,24 @@ export function FarmFormDialog({ open, onClose, farm, onSaved }: FarmFormDialogP
                           required
                           error={Boolean(timeZoneError)}
                           helperText={timeZoneError}
+                        />
+                      )}
+                    />
+                    <Autocomplete
+                      options={currencies}
+                      value={values.currency || null}
+                      onChange={(_event, value) => void setFieldValue('currency', value ?? '')}
+                      onBlur={() => void setFieldTouched('currency', true)}
+                      getOptionLabel={(code) => currencyName(code)}
+                      autoHighlight
+                      renderInput={(params) => (
+                        <TextField
+                          {...params}
+                          id="field-currency"
+                          label="Currency"
+                          required
+                          error={Boolean(currencyError)}
+                          helperText={currencyError ?? 'Fuel prices and every cost of the farm are in this currency'}
                         />
                       )}
                     />

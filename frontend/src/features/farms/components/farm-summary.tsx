@@ -10,6 +10,7 @@ export function FarmSummary({ farm }: { farm: Farm }) {
     ['Longitude', `${farm.longitudeDeg.toFixed(4)}°`],
     ['Elevation', units.format('length', farm.elevationM, { decimals: 0 })],
     ['Time zone', farm.timeZone],
+    ['Currency', farm.currency],
   ];
   return (
     <Stack direction="row" spacing={3} useFlexGap sx={{ flexWrap: 'wrap', alignItems: 'center' }}>

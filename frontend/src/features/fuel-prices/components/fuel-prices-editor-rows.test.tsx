@@ -55,7 +55,9 @@ beforeEach(() => {
 });
 
 function renderEditor(canEdit = true) {
-  return renderWithProviders(<FuelPricesEditor farmId={FARM_ID} referenceData={referenceData} canEdit={canEdit} />);
+  return renderWithProviders(
+    <FuelPricesEditor farmId={FARM_ID} referenceData={referenceData} canEdit={canEdit} currency="USD" />,
+  );
 }
 
 describe('FuelPricesEditor', () => {

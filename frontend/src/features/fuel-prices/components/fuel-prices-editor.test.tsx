@@ -64,7 +64,7 @@ describe('FuelPricesEditor when someone else saved first (409)', () => {
   it('sends the version it loaded and offers their version or mine', async () => {
     const theirs = gas(0.61, 4, 'their bill');
     const { puts } = stubServer(gas(0.5, 3, 'old bill'), [conflict(theirs)]);
-    renderWithProviders(<FuelPricesEditor farmId={7} referenceData={referenceDataFixture} canEdit />);
+    renderWithProviders(<FuelPricesEditor farmId={7} referenceData={referenceDataFixture} canEdit currency="USD" />);
     await editAndSave('0.55');
 
     const dialog = await screen.findByRole('dialog', { name: 'Changed by someone else' });
@@ -78,7 +78,7 @@ describe('FuelPricesEditor when someone else saved first (409)', () => {
   it('"Reload their version" shows what they stored and sends nothing more', async () => {
     const theirs = gas(0.61, 4, 'their bill');
     const { puts } = stubServer(gas(0.5, 3, 'old bill'), [conflict(theirs)]);
-    renderWithProviders(<FuelPricesEditor farmId={7} referenceData={referenceDataFixture} canEdit />);
+    renderWithProviders(<FuelPricesEditor farmId={7} referenceData={referenceDataFixture} canEdit currency="USD" />);
     const user = await editAndSave('0.55');
 
     const dialog = await screen.findByRole('dialog', { name: 'Changed by someone else' });
@@ -99,7 +99,7 @@ describe('FuelPricesEditor when someone else saved first (409)', () => {
           ...gas((body as { prices: Array<{ pricePerUnit: number }> }).prices[0].pricePerUnit, 5, 'old bill'),
         }),
     ]);
-    renderWithProviders(<FuelPricesEditor farmId={7} referenceData={referenceDataFixture} canEdit />);
+    renderWithProviders(<FuelPricesEditor farmId={7} referenceData={referenceDataFixture} canEdit currency="USD" />);
     const user = await editAndSave('0.55');
 
     const dialog = await screen.findByRole('dialog', { name: 'Changed by someone else' });

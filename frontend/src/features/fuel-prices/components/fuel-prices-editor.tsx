@@ -38,8 +38,11 @@ export function FuelPricesEditor({
   farmId,
   referenceData,
   canEdit,
+  currency,
 }: {
   farmId: number;
+  /** the farm's currency (ISO 4217), set in the farm's settings */
+  currency: string;
   referenceData: ReferenceData;
   canEdit: boolean;
 }) {
@@ -61,8 +64,8 @@ export function FuelPricesEditor({
           Fuel prices
         </Typography>
         <Typography variant="body2" color="text.secondary">
-          Enter what the farm pays per unit, as on the bill, in any currency (season costs are shown in the same
-          currency). Leave a fuel blank if the farm does not buy it.
+          Enter what the farm pays per unit, as on the bill, in {currency} (the farm&apos;s currency, set with Edit
+          farm). Leave a fuel blank if the farm does not buy it.
         </Typography>
         {prices.isPending ? <LoadingState label="Loading prices…" /> : null}
         <ErrorAlert error={prices.error} title="Prices could not be loaded" />
@@ -98,7 +101,7 @@ export function FuelPricesEditor({
                         <TableHead>
                           <TableRow>
                             <TableCell>Fuel</TableCell>
-                            <TableCell sx={{ minWidth: 130 }}>Price</TableCell>
+                            <TableCell sx={{ minWidth: 130 }}>Price ({currency})</TableCell>
                             <TableCell sx={{ minWidth: 150 }}>Per</TableCell>
                             <TableCell sx={{ minWidth: 220 }}>Where the price came from</TableCell>
                           </TableRow>

@@ -9,12 +9,15 @@ export interface HeatingWhatIfValues {
   designOutdoor: string;
   insideRelativeHumidityPct: string;
   curtainClosed: boolean;
+  /** size for a clear night: radiation to a sky colder than the air */
+  clearSky: boolean;
 }
 
 export const EMPTY_HEATING_WHAT_IF: HeatingWhatIfValues = {
   designOutdoor: '',
   insideRelativeHumidityPct: '',
   curtainClosed: false,
+  clearSky: false,
 };
 
 interface ParsedWhatIf {
@@ -45,6 +48,7 @@ export function parseHeatingWhatIf(values: HeatingWhatIfValues, units: Units): P
     }
   }
   if (values.curtainClosed) conditions.curtainClosed = true;
+  if (values.clearSky) conditions.clearSky = true;
   return { conditions, errors };
 }
 
@@ -76,7 +80,8 @@ export function HeatingWhatIf({
     // Only a unit switch converts; values are read at that moment on purpose.
   }, [units]);
 
-  const changed = values.designOutdoor !== '' || values.insideRelativeHumidityPct !== '' || values.curtainClosed;
+  const changed =
+    values.designOutdoor !== '' || values.insideRelativeHumidityPct !== '' || values.curtainClosed || values.clearSky;
   return (
     <Stack
       direction={{ xs: 'column', sm: 'row' }}
@@ -117,6 +122,18 @@ export function HeatingWhatIf({
             label="Curtain drawn"
           />
         </span>
+      </Tooltip>
+      <Tooltip title="A clear sky is far colder than the air: a film that passes long-wave radiation loses more">
+        <FormControlLabel
+          sx={{ whiteSpace: 'nowrap', mt: 0.5 }}
+          control={
+            <Checkbox
+              checked={values.clearSky}
+              onChange={(event) => onChange({ ...values, clearSky: event.target.checked })}
+            />
+          }
+          label="Clear night"
+        />
       </Tooltip>
       {changed ? (
         <Button sx={{ mt: 0.5, flexShrink: 0 }} onClick={() => onChange(EMPTY_HEATING_WHAT_IF)}>

@@ -1,5 +1,6 @@
 import { Box, Stack, Table, TableBody, TableCell, TableHead, TableRow, Typography } from '@mui/material';
-import type { ReportBlock, ReportDocument } from '../../../api/types';
+import { useId } from 'react';
+import type { ReportBlock, ReportDocument, ReportSection } from '../../../api/types';
 
 /** Bars as plain boxes: vector on screen and in print, no canvas. */
 function Bars({ block }: { block: ReportBlock }) {
@@ -94,6 +95,21 @@ function Block({ block }: { block: ReportBlock }) {
   }
 }
 
+/** A section, named by its heading (so a screen reader lists it as a region). */
+function Section({ section }: { section: ReportSection }) {
+  const headingId = useId();
+  return (
+    <Box component="section" aria-labelledby={headingId} sx={{ mb: 3, breakInside: 'avoid-page' }}>
+      <Typography id={headingId} variant="h2" sx={{ fontSize: '1.3rem', mb: 1 }}>
+        {section.heading}
+      </Typography>
+      {section.blocks.map((block, index) => (
+        <Block key={index} block={block} />
+      ))}
+    </Box>
+  );
+}
+
 /** The report as the server wrote it in the reader's units: the same content as the PDF. */
 export function ReportView({ document }: { document: ReportDocument }) {
   return (
@@ -103,14 +119,7 @@ export function ReportView({ document }: { document: ReportDocument }) {
         {document.farmName} · {document.subtitle}
       </Typography>
       {document.sections.map((section) => (
-        <Box component="section" key={section.heading} sx={{ mb: 3, breakInside: 'avoid-page' }}>
-          <Typography variant="h2" sx={{ fontSize: '1.3rem', mb: 1 }}>
-            {section.heading}
-          </Typography>
-          {section.blocks.map((block, index) => (
-            <Block key={index} block={block} />
-          ))}
-        </Box>
+        <Section key={section.heading} section={section} />
       ))}
       <Typography variant="body2" color="text.secondary" sx={{ borderTop: 1, borderColor: 'divider', pt: 1 }}>
         {document.footer}

@@ -9,6 +9,8 @@ import { SeasonBudgetSection } from './season-budget-section';
 const propaneHouse = {
   houseId: 1,
   name: 'House A',
+  heatLossBasis: 'handbook' as const,
+  heatLossFactor: 1,
   fuelId: 'propane',
   fuelLabel: 'Propane',
   unitSi: 'L',
@@ -31,6 +33,11 @@ const propaneHouse = {
 };
 
 const budget: SeasonBudget = {
+  heatLossBasisRequested: 'handbook',
+  heatLossBasis: 'handbook',
+  calibrationId: null,
+  calibratedAt: null,
+  heatLossBasisStatement: 'Heat loss from the handbook values (coverings, perimeter and air-leakage class).',
   farmId: 3,
   startDate: '2026-09-01',
   endDate: '2027-05-31',
@@ -67,6 +74,7 @@ const budget: SeasonBudget = {
   ],
   totalEnergyKWh: 282_162.74,
   totalCost: 10_541.42,
+  currency: 'EUR',
   costComplete: false,
   monthly: [{ year: 2026, month: 9, energyKWh: 3984.7, fuelInputKWh: 4980.9, cost: 297.73, byFuel: [] }],
   notes: ['Heat is delivered heat.'],
@@ -113,7 +121,7 @@ describe('SeasonBudgetSection', () => {
 
     renderWithProviders(<SeasonBudgetSection farmId={3} />, 'us');
 
-    expect(await screen.findByTestId('farm-season-cost')).toHaveProperty('textContent', '10,541');
+    expect(await screen.findByTestId('farm-season-cost')).toHaveProperty('textContent', '€10,541');
     const table = screen.getByRole('table', { name: 'Season fuel budget per house' });
     const houseA = within(table).getByRole('row', { name: /House A/ });
     // 141 081.37 kWh = 481.39 MMBtu (1 MMBtu = 293.0711 kWh, NIST SP 811 B.8)
@@ -132,5 +140,39 @@ describe('SeasonBudgetSection', () => {
     expect(fetchMock.mock.calls.map(([request]) => requestPath(request))).toContain(
       '/api/farms/3/season-budget.csv?units=us',
     );
+  });
+
+  it('without any price, shows heat and fuel, no money, and asks for each missing price in place', async () => {
+    const unpriced: SeasonBudget = {
+      ...budget,
+      houses: budget.houses.map((house) => ({ ...house, pricePerUnit: null, priceUnit: null, cost: null })),
+      byFuel: budget.byFuel.map((fuel) => ({ ...fuel, cost: null })),
+      totalCost: null,
+      monthly: budget.monthly.map((month) => ({ ...month, cost: null })),
+    };
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(async () => jsonResponse(unpriced)),
+    );
+    const asked: string[] = [];
+    renderWithProviders(
+      <SeasonBudgetSection
+        farmId={3}
+        renderMissingPrice={(fuel) => {
+          asked.push(`${fuel.label} (${fuel.unitSi} / ${fuel.unitUs})`);
+          return <p>price form for {fuel.label}</p>;
+        }}
+      />,
+      'us',
+    );
+    expect(await screen.findByTestId('farm-season-cost')).toHaveProperty('textContent', 'needs fuel prices');
+    // one form per fuel, however many houses burn it
+    expect(screen.getAllByText('price form for Propane')).toHaveLength(1);
+    expect(asked.at(-1)).toBe('Propane (L / US gal)');
+    const houseA = within(screen.getByRole('table', { name: 'Season fuel budget per house' })).getByRole('row', {
+      name: /House A/,
+    });
+    expect(houseA.textContent).toContain('6,588 US gal');
+    expect(houseA.textContent).toContain('—');
   });
 });

@@ -17,8 +17,9 @@ import {
 } from '@mui/material';
 import { useTheme } from '@mui/material/styles';
 import { useMutation, useQuery } from '@tanstack/react-query';
+import type { ReactNode } from 'react';
 import { Bar } from 'react-chartjs-2';
-import type { SeasonBudget } from '../../../api/types';
+import type { HeatLossBasis, SeasonBudget } from '../../../api/types';
 import { ErrorAlert, LoadingState } from '../../../components/feedback';
 import '../../../lib/chart';
 import { saveBlob } from '../../../lib/save-blob';
@@ -63,7 +64,12 @@ function BudgetChart({ budget, units }: { budget: SeasonBudget; units: Units }) 
           animation: false,
           plugins: { legend: { position: 'bottom' } },
           scales: {
-            cost: { type: 'linear', position: 'left', title: { display: true, text: 'Cost' }, beginAtZero: true },
+            cost: {
+              type: 'linear',
+              position: 'left',
+              title: { display: true, text: `Cost (${budget.currency})` },
+              beginAtZero: true,
+            },
             heat: {
               type: 'linear',
               position: 'right',
@@ -78,7 +84,31 @@ function BudgetChart({ budget, units }: { budget: SeasonBudget; units: Units }) 
   );
 }
 
+/** Fuels burnt by some house that the farm has no price for, once each. */
+export function unpricedFuels(budget: SeasonBudget): MissingPriceFuel[] {
+  const fuels = new Map<string, MissingPriceFuel>();
+  for (const house of budget.houses) {
+    if (house.fuelId && house.pricePerUnit === null && house.unitSi && house.unitUs) {
+      fuels.set(house.fuelId, {
+        fuelId: house.fuelId,
+        label: house.fuelLabel ?? house.fuelId,
+        unitSi: house.unitSi,
+        unitUs: house.unitUs,
+      });
+    }
+  }
+  return [...fuels.values()];
+}
+
+export interface MissingPriceFuel {
+  fuelId: string;
+  label: string;
+  unitSi: string;
+  unitUs: string;
+}
+
 function BudgetTable({ budget, units }: { budget: SeasonBudget; units: Units }) {
+  const currency = budget.currency;
   return (
     <TableContainer>
       <Table size="small" aria-label="Season fuel budget per house">
@@ -89,7 +119,7 @@ function BudgetTable({ budget, units }: { budget: SeasonBudget; units: Units }) 
             <TableCell align="right">Heated days</TableCell>
             <TableCell align="right">Heat delivered</TableCell>
             <TableCell align="right">Fuel</TableCell>
-            <TableCell align="right">Cost</TableCell>
+            <TableCell align="right">Cost ({currency})</TableCell>
           </TableRow>
         </TableHead>
         <TableBody>
@@ -120,7 +150,7 @@ function BudgetTable({ budget, units }: { budget: SeasonBudget; units: Units }) 
               <TableCell align="right">
                 {house.unitSi && house.unitUs ? units.fuel(house, { unitSi: house.unitSi, unitUs: house.unitUs }) : '—'}
               </TableCell>
-              <TableCell align="right">{units.money(house.cost, 0)}</TableCell>
+              <TableCell align="right">{units.money(house.cost, currency, 0)}</TableCell>
             </TableRow>
           ))}
         </TableBody>
@@ -132,7 +162,7 @@ function BudgetTable({ budget, units }: { budget: SeasonBudget; units: Units }) 
               </TableCell>
               <TableCell align="right">{units.format('energyKWh', fuel.energyKWh)}</TableCell>
               <TableCell align="right">{units.fuel(fuel, fuel)}</TableCell>
-              <TableCell align="right">{units.money(fuel.cost, 0)}</TableCell>
+              <TableCell align="right">{units.money(fuel.cost, currency, 0)}</TableCell>
             </TableRow>
           ))}
           <TableRow>
@@ -144,7 +174,7 @@ function BudgetTable({ budget, units }: { budget: SeasonBudget; units: Units }) 
             </TableCell>
             <TableCell />
             <TableCell align="right" sx={{ fontWeight: 700, color: 'text.primary' }} aria-label="Farm total cost">
-              {units.money(budget.totalCost, 0)}
+              {units.money(budget.totalCost, currency, 0)}
             </TableCell>
           </TableRow>
         </TableFooter>
@@ -154,12 +184,21 @@ function BudgetTable({ budget, units }: { budget: SeasonBudget; units: Units }) 
 }
 
 /** The farm's season: fuel and cost of every house, the total, by month, with a CSV export. */
-export function SeasonBudgetSection({ farmId }: { farmId: number }) {
+export function SeasonBudgetSection({
+  farmId,
+  heatLossBasis,
+  renderMissingPrice,
+}: {
+  farmId: number;
+  heatLossBasis?: HeatLossBasis;
+  /** asks for the farm's price of a fuel it has none for (the page supplies the form) */
+  renderMissingPrice?: (fuel: MissingPriceFuel) => ReactNode;
+}) {
   const units = useUnits();
-  const budget = useQuery(seasonBudgetQueryOptions(farmId));
+  const budget = useQuery(seasonBudgetQueryOptions(farmId, heatLossBasis === 'calibrated' ? { heatLossBasis } : {}));
   const exportCsv = useMutation({
     mutationFn: async () => {
-      const file = await downloadSeasonBudgetCsv(farmId, units.system);
+      const file = await downloadSeasonBudgetCsv(farmId, units.system, heatLossBasis);
       saveBlob(file.blob, file.fileName);
     },
   });
@@ -188,7 +227,10 @@ export function SeasonBudgetSection({ farmId }: { farmId: number }) {
             <Typography variant="body2" color="text.secondary">
               {budget.data.startDate} to {budget.data.endDate} ({SEASON_FROM[budget.data.seasonFrom]}), from the
               farm&apos;s {budget.data.climateSource === 'normals' ? 'climate normals' : 'temperature log'}. Costs are
-              in the currency of the fuel prices.
+              in {budget.data.currency}.
+            </Typography>
+            <Typography variant="body2" data-testid="budget-heat-loss-basis">
+              {budget.data.heatLossBasisStatement}
             </Typography>
             <Stack direction="row" spacing={4} useFlexGap sx={{ flexWrap: 'wrap' }}>
               <Box>
@@ -196,7 +238,9 @@ export function SeasonBudgetSection({ farmId }: { farmId: number }) {
                   Season cost, all houses
                 </Typography>
                 <Typography variant="h3" component="p" data-testid="farm-season-cost">
-                  {units.money(budget.data.totalCost, 0)}
+                  {budget.data.totalCost === null
+                    ? 'needs fuel prices'
+                    : units.money(budget.data.totalCost, budget.data.currency, 0)}
                 </Typography>
               </Box>
               <Box>
@@ -210,19 +254,24 @@ export function SeasonBudgetSection({ farmId }: { farmId: number }) {
             </Stack>
             {!budget.data.costComplete ? (
               <Alert severity="warning">
-                Some houses have no fuel price or no heaters and are left out of the total cost. Enter the missing
-                prices under Fuel prices.
+                Some houses have no fuel price or no heaters and are left out of the total cost; their heat and fuel are
+                shown.
               </Alert>
             ) : null}
+            {unpricedFuels(budget.data).map((fuel) => (
+              <Box key={fuel.fuelId}>{renderMissingPrice?.(fuel)}</Box>
+            ))}
             <BudgetTable budget={budget.data} units={units} />
             <BudgetChart budget={budget.data} units={units} />
             {budget.data.notes.length > 0 ? (
               <Box component="ul" sx={{ m: 0, pl: 2.5 }}>
-                {budget.data.notes.map((note) => (
-                  <Typography component="li" variant="body2" color="text.secondary" key={note}>
-                    {units.prose(note)}
-                  </Typography>
-                ))}
+                {budget.data.notes
+                  .filter((note) => note !== budget.data.heatLossBasisStatement)
+                  .map((note) => (
+                    <Typography component="li" variant="body2" color="text.secondary" key={note}>
+                      {units.prose(note)}
+                    </Typography>
+                  ))}
               </Box>
             ) : null}
             {budget.data.cautions.length > 0 ? (

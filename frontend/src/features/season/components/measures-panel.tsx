@@ -38,6 +38,7 @@ export function MeasuresPanel({
   climateSource,
   alternativeId,
   priceFields = {},
+  heatLossBasis,
 }: {
   houseId: number;
   /** a fuel-price what-if of the page (not saved) */
@@ -45,6 +46,8 @@ export function MeasuresPanel({
   climateSource: SeasonRequest['climateSource'];
   /** run for one of the house's alternatives */
   alternativeId?: number;
+  /** 'calibrated': heat loss × the house's factor from the farm's fuel bills */
+  heatLossBasis?: SeasonRequest['heatLossBasis'];
 }) {
   const units = useUnits();
   // [] asks the API for its default measures at cost 0; after that, the user's list and costs.
@@ -57,6 +60,7 @@ export function MeasuresPanel({
       measures: requested,
       climateSource,
       ...(alternativeId ? { alternativeId } : {}),
+      ...(heatLossBasis === 'calibrated' ? { heatLossBasis } : {}),
     }),
     placeholderData: keepPreviousData,
   });
@@ -70,6 +74,7 @@ export function MeasuresPanel({
     setRows((current) => current?.map((row, at) => (at === index ? { ...row, cost } : row)) ?? null);
   const result = comparison.data;
   const baselineFuel = result?.baseline;
+  const currency = result?.inputsUsed.currency ?? '';
 
   return (
     <Paper component="section" aria-labelledby="measures-heading" sx={{ p: 2 }}>
@@ -78,8 +83,8 @@ export function MeasuresPanel({
           Energy measures ranked by payback
         </Typography>
         <Typography variant="body2" color="text.secondary">
-          Enter what each measure would cost (installed, in the currency of your fuel prices), then rank them. Each is
-          compared alone against the house as it is.
+          Enter what each measure would cost (installed, in the farm&apos;s currency), then rank them. Each is compared
+          alone against the house as it is.
         </Typography>
         {comparison.isPending ? <LoadingState label="Comparing measures (each re-runs the season)…" /> : null}
         <ErrorAlert error={comparison.error} title="The measures could not be compared" />
@@ -100,8 +105,10 @@ export function MeasuresPanel({
           <>
             {baselineFuel ? (
               <Typography variant="body2">
-                As it is, the house burns {units.fuel(baselineFuel, baselineFuel)} a season, costing{' '}
-                {units.money(baselineFuel.cost, 0)}.
+                As it is, the house burns {units.fuel(baselineFuel, baselineFuel)} a season
+                {baselineFuel.cost === null
+                  ? ' (no fuel price yet, so savings are in fuel and heat only).'
+                  : `, costing ${units.money(baselineFuel.cost, currency, 0)}.`}
               </Typography>
             ) : null}
             <TableContainer>
@@ -158,14 +165,14 @@ export function MeasuresPanel({
                           ) : measure.costAmount === null ? (
                             '—'
                           ) : (
-                            units.money(measure.costAmount, 0)
+                            units.money(measure.costAmount, currency, 0)
                           )}
                         </TableCell>
                         {measure.applicable ? (
                           <>
                             <TableCell align="right">
-                              {units.money(measure.yearlyMoneySaved, 0)}
-                              {measure.yearlyMoneySaved < 0 ? (
+                              {units.money(measure.yearlyMoneySaved, currency, 0)}
+                              {measure.yearlyMoneySaved !== null && measure.yearlyMoneySaved < 0 ? (
                                 <Typography variant="caption" color="warning.main" component="div">
                                   costs more to run
                                 </Typography>

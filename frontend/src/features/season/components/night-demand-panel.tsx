@@ -59,7 +59,7 @@ export function NightDemandPanel({
               />
               <Fact label="Heat" value={units.format('energyKWh', result.energyKWh)} />
               <Fact label="Fuel" value={units.fuel(result, fuelUnitsFor(result.inputsUsed.fuelId))} />
-              <Fact label="Cost" value={units.money(result.cost)} />
+              <Fact label="Cost" value={units.money(result.cost, result.inputsUsed.currency)} />
             </Stack>
             <Typography variant="body2" color="text.secondary">
               Held at {units.format('temperature', result.nightSetpointC)}; the coldest hour is{' '}

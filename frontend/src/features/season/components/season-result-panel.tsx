@@ -27,6 +27,7 @@ export function SeasonResultPanel({ season }: { season: HouseSeasonEstimate }) {
   const theme = useTheme();
   const series = seasonChartSeries(season, units);
   const fuelUnits = season.fuel;
+  const currency = season.inputsUsed.currency;
   return (
     <Paper component="section" aria-labelledby="season-result-heading" sx={{ p: 2, height: '100%' }}>
       <Stack spacing={2}>
@@ -35,8 +36,11 @@ export function SeasonResultPanel({ season }: { season: HouseSeasonEstimate }) {
         </Typography>
         <Typography variant="body2" color="text.secondary">
           {season.period.startDate} to {season.period.endDate}: {season.period.heatedDays} of {season.period.days} days
-          heated; {season.fuel.label} at {units.money(season.fuel.pricePerUnit)} per {season.fuel.priceUnitLabel},
-          heater efficiency {units.format('fraction', season.fuel.heaterEfficiency)}.
+          heated; {season.fuel.label}
+          {season.fuel.pricePerUnit === null
+            ? ' (no price yet)'
+            : ` at ${units.money(season.fuel.pricePerUnit, currency)} per ${season.fuel.priceUnitLabel}`}
+          , heater efficiency {units.format('fraction', season.fuel.heaterEfficiency)}.
         </Typography>
         {season.total.hoursBelowSetpoint > 0 ? (
           <Alert severity="warning" data-testid="season-below-setpoint">
@@ -49,7 +53,11 @@ export function SeasonResultPanel({ season }: { season: HouseSeasonEstimate }) {
         ) : null}
         <Stack direction="row" spacing={3} useFlexGap sx={{ flexWrap: 'wrap' }}>
           <Fact label="Fuel" value={units.fuel(season.total, fuelUnits)} testId="season-total-fuel" />
-          <Fact label="Cost" value={units.money(season.total.cost, 0)} testId="season-total-cost" />
+          <Fact
+            label={`Cost (${currency})`}
+            value={season.total.cost === null ? 'needs a fuel price' : units.money(season.total.cost, currency, 0)}
+            testId="season-total-cost"
+          />
           <Fact label="Heat delivered" value={units.format('energyKWh', season.total.energyKWh)} />
           <Fact label="Heating hours" value={season.total.heatingHours.toLocaleString('en-US')} />
           <Fact
@@ -126,7 +134,7 @@ export function SeasonResultPanel({ season }: { season: HouseSeasonEstimate }) {
                   {series.labels[index]}
                 </TableCell>
                 <TableCell align="right">{units.fuel(month, fuelUnits)}</TableCell>
-                <TableCell align="right">{units.money(month.cost, 0)}</TableCell>
+                <TableCell align="right">{units.money(month.cost, currency, 0)}</TableCell>
                 <TableCell align="right">{month.heatingHours}</TableCell>
                 <TableCell align="right">{units.format('power', month.peakW)}</TableCell>
                 <TableCell
@@ -161,9 +169,10 @@ export function DegreeDayPanel({ season }: { season: HouseSeasonEstimate }) {
         <Stack direction="row" spacing={3} useFlexGap sx={{ flexWrap: 'wrap' }}>
           <Fact label="Degree-days" value={units.format('degreeDays', degreeDays.degreeDaysKDay)} />
           <Fact label="Fuel (degree-day)" value={units.fuel(degreeDays, season.fuel)} />
-          <Fact label="Cost (degree-day)" value={units.money(degreeDays.cost, 0)} />
+          <Fact label="Cost (degree-day)" value={units.money(degreeDays.cost, season.inputsUsed.currency, 0)} />
         </Stack>
         <Typography variant="body2">Base: {units.prose(degreeDays.baseDescription)}.</Typography>
+        <ConventionalBase season={season} />
         <Typography variant="body1" sx={{ fontWeight: 500 }} data-testid="degree-day-difference">
           {hourlyVersusDegreeDayText(degreeDays)}
         </Typography>
@@ -198,5 +207,26 @@ export function DegreeDayPanel({ season }: { season: HouseSeasonEstimate }) {
         </Box>
       </Stack>
     </Paper>
+  );
+}
+
+/** The same degree-day method to the conventional 65 °F (18.3 °C) base, beside the setpoint base. */
+function ConventionalBase({ season }: { season: HouseSeasonEstimate }) {
+  const units = useUnits();
+  const conventional = season.degreeDays.conventionalBase;
+  return (
+    <Stack spacing={1} data-testid="degree-day-conventional-base">
+      <Stack direction="row" spacing={3} useFlexGap sx={{ flexWrap: 'wrap' }}>
+        <Fact
+          label={`Degree-days to ${units.format('temperature', conventional.baseTemperatureC)}`}
+          value={units.format('degreeDays', conventional.degreeDaysKDay)}
+        />
+        <Fact label="Fuel at that base" value={units.fuel(conventional, season.fuel)} />
+        <Fact label="Heat at that base" value={units.format('energyKWh', conventional.energyKWh)} />
+      </Stack>
+      <Typography variant="body2" color="text.secondary">
+        {units.prose(conventional.note)}
+      </Typography>
+    </Stack>
   );
 }

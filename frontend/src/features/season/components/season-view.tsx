@@ -1,6 +1,6 @@
 import { Alert, Grid, MenuItem, Stack, TextField, Typography } from '@mui/material';
 import { useQuery } from '@tanstack/react-query';
-import { useCallback, useState } from 'react';
+import { useCallback, useState, type ReactNode } from 'react';
 import type { SeasonRequest } from '../../../api/types';
 import { ErrorAlert, LoadingState } from '../../../components/feedback';
 import { referenceDataQueryOptions, referenceRows } from '../../../lib/reference-data';
@@ -31,10 +31,22 @@ export interface SeasonViewProps {
   logs: ClimateLogOption[];
   /** run the season and the measures for one of the house's alternatives instead of the house */
   alternative?: { id: number; name: string; ownCalendar: boolean } | null;
+  /** 'calibrated': heat loss × the house's factor from the farm's fuel bills */
+  heatLossBasis?: SeasonRequest['heatLossBasis'];
+  /** asks for the farm's price of a fuel it has none for (the page supplies the form) */
+  renderMissingPrice?: (fuel: { fuelId: string; label: string; unitSi: string; unitUs: string }) => ReactNode;
 }
 
 /** The house's heating season: one night, the hourly season beside the degree-day check, the calendar, measures. */
-export function SeasonView({ houseId, canRun, canEditCalendar, logs, alternative = null }: SeasonViewProps) {
+export function SeasonView({
+  houseId,
+  canRun,
+  canEditCalendar,
+  logs,
+  alternative = null,
+  heatLossBasis,
+  renderMissingPrice,
+}: SeasonViewProps) {
   const [climateChoice, setClimateChoice] = useState('normals');
   const climateSource: SeasonRequest['climateSource'] =
     climateChoice === 'normals' ? 'normals' : { temperatureLogId: Number(climateChoice) };
@@ -50,6 +62,7 @@ export function SeasonView({ houseId, canRun, canEditCalendar, logs, alternative
     climateSource,
     ...priceFields,
     ...(alternative ? { alternativeId: alternative.id } : {}),
+    ...(heatLossBasis === 'calibrated' ? { heatLossBasis } : {}),
   };
   const season = useQuery({ ...houseSeasonQueryOptions(houseId, request), enabled: canRun });
   const referenceData = useQuery(referenceDataQueryOptions());
@@ -114,6 +127,18 @@ export function SeasonView({ houseId, canRun, canEditCalendar, logs, alternative
 
       {season.isPending ? <LoadingState label="Computing the season hour by hour…" /> : null}
       <ErrorAlert error={season.error} title="The season could not be computed" />
+      {season.data?.inputsUsed.heatLossBasisNote ? (
+        <Alert severity="info">{season.data.inputsUsed.heatLossBasisNote}</Alert>
+      ) : null}
+      {season.data?.inputsUsed.priceFrom === 'none' ? (
+        <Stack spacing={1} data-testid="season-price-missing">
+          {renderMissingPrice?.(season.data.fuel) ?? (
+            <Alert severity="info">
+              The farm has no price for {season.data.fuel.label} yet: heat and fuel are shown, costs are not.
+            </Alert>
+          )}
+        </Stack>
+      ) : null}
       {season.data ? (
         <>
           <Grid container spacing={3} sx={{ alignItems: 'stretch' }}>
@@ -148,6 +173,7 @@ export function SeasonView({ houseId, canRun, canEditCalendar, logs, alternative
         climateSource={climateSource}
         priceFields={priceFields}
         alternativeId={alternative?.id}
+        heatLossBasis={heatLossBasis}
       />
     </Stack>
   );

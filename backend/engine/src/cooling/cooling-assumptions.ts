@@ -1,0 +1,228 @@
+import type { ReferenceData, ReferenceRow } from '../reference-data.types';
+import { clearSkyMonthRow } from '../solar/clear-sky';
+import type { Confidence } from '../vocabulary';
+import {
+  dailyRangeProfileRow,
+  requireRow,
+  ventilationValue,
+  type PadTypeRow,
+  type SourcedValue,
+} from './cooling-reference';
+import type { CoolingConditions, CoolingInputsWithDefaults, RoofCoveringRow } from './cooling-inputs';
+import type { CapacityResult } from './required-capacity';
+import type { StagingResult } from './staging';
+
+export interface CoolingAssumption {
+  key: string;
+  label: string;
+  value: number | string;
+  unit: string;
+  source: string;
+  confidence: Confidence;
+  overridden: boolean;
+}
+
+export interface CoolingAssumptionSources {
+  conditions: CoolingConditions;
+  inputs: CoolingInputsWithDefaults;
+  /** month and year of the design date */
+  designMonth: { year: number; month: number };
+  capacity: CapacityResult;
+  roofCovering: RoofCoveringRow;
+  /** UA of the house with the curtain open, W/K */
+  conductanceWPerK: number;
+  /** outdoor humidity ratio held through the design day, kg/kg */
+  designHumidityRatioKgPerKg: number;
+  airSpecificHeat: SourcedValue;
+  padType: PadTypeRow | null;
+  staging: StagingResult;
+  winterFraction: SourcedValue;
+}
+
+/** Every reference value the cooling estimate used, with its source, and where the user replaced one. */
+export function coolingAssumptions(
+  {
+    conditions,
+    inputs,
+    designMonth: { year, month },
+    capacity,
+    roofCovering,
+    conductanceWPerK,
+    designHumidityRatioKgPerKg,
+    airSpecificHeat: cp,
+    padType,
+    staging,
+    winterFraction,
+  }: CoolingAssumptionSources,
+  ref: ReferenceData,
+): CoolingAssumption[] {
+  const assumptions: CoolingAssumption[] = [];
+  const sourced = (
+    key: string,
+    label: string,
+    value: number | string,
+    unit: string,
+    row: ReferenceRow,
+    overridden = false,
+  ) => assumptions.push({ key, label, value, unit, source: row.source, confidence: row.confidence, overridden });
+
+  const baseRate = ventilationValue(ref, 'summer-base-rate', 'rateM3PerSM2');
+  sourced('summerBaseRate', 'Summer exhaust rate per floor area (base)', baseRate.value, 'm³/(s·m²)', baseRate.row);
+  sourced(
+    'elevationFactor',
+    'Elevation factor F_elev',
+    capacity.factors.elevation,
+    '–',
+    requireRow(ref, 'ventilation', 'elevation-factor'),
+  );
+  sourced(
+    'peakInteriorLightLux',
+    'Peak interior light at plant height',
+    inputs.peakInteriorLightLux,
+    'lx',
+    inputs.lightDefault.row,
+    conditions.peakInteriorLightLux !== undefined,
+  );
+  sourced(
+    'allowedTemperatureRiseK',
+    'Allowed inlet-to-fan temperature rise',
+    inputs.allowedTemperatureRiseK,
+    'K',
+    inputs.riseDefault.row,
+    conditions.allowedTemperatureRiseK !== undefined,
+  );
+  assumptions.push({
+    key: 'padToFanDistanceM',
+    label: 'Inlet (pad) to fan distance',
+    value: inputs.padToFanDistanceM,
+    unit: 'm',
+    source: 'House length: fans on one endwall, inlets or pads on the opposite one',
+    confidence: 'common-practice',
+    overridden: conditions.padToFanDistanceM !== undefined,
+  });
+  const velocityRef = ventilationValue(ref, 'velocity-factor', 'referenceDistanceM');
+  sourced(
+    'velocityReferenceDistanceM',
+    'Reference distance of the velocity factor',
+    velocityRef.value,
+    'm',
+    velocityRef.row,
+  );
+  const inletVelocity = ventilationValue(ref, 'inlet-velocity', 'maxVelocityMPerS');
+  sourced(
+    'maxInletVelocityMPerS',
+    'Maximum velocity through the free inlet area',
+    inletVelocity.value,
+    'm/s',
+    inletVelocity.row,
+  );
+  sourced(
+    'transpirationFraction',
+    'Share of transmitted solar heat taken up by crop transpiration',
+    inputs.transpirationFraction,
+    '–',
+    inputs.transpirationDefault.row,
+    conditions.transpirationFraction !== undefined,
+  );
+  sourced(
+    'roofLightTransmittance',
+    `Light transmittance of the roof covering (${roofCovering.label ?? roofCovering.id})`,
+    roofCovering.lightTransmittance,
+    '–',
+    roofCovering,
+  );
+  assumptions.push({
+    key: 'conductanceWPerK',
+    label: 'Heat-loss coefficient UA of cover, perimeter and air leakage (curtain open)',
+    value: conductanceWPerK,
+    unit: 'W/K',
+    source: 'Thermbay heat-loss calculation from the house, its coverings and leakage class (see the heating estimate)',
+    confidence: 'derived',
+    overridden: false,
+  });
+  const monthRow = clearSkyMonthRow(month, ref);
+  sourced(
+    'clearSkyModel',
+    'Clear-sky irradiance: DNI = A/exp(B/sin β), diffuse = C·DNI',
+    `A ${monthRow.aWPerM2} W/m², B ${monthRow.b}, C ${monthRow.c} (month ${month} of ${year})`,
+    '',
+    monthRow,
+  );
+  const profileRow = dailyRangeProfileRow(ref);
+  sourced(
+    'dailyRangeProfile',
+    'Outdoor temperature through the day: T = T_max − range × fraction(solar hour)',
+    'fraction-of-daily-range profile, minimum 05:00, maximum 15:00 solar time',
+    '',
+    profileRow,
+  );
+  assumptions.push({
+    key: 'designHumidityRatio',
+    label: 'Outdoor humidity ratio held through the design day (from design dry bulb and wet bulb)',
+    value: designHumidityRatioKgPerKg,
+    unit: 'kg/kg',
+    source: 'psychrolib (ASHRAE 2017 Fundamentals ch. 1) at the standard-atmosphere pressure of the site',
+    confidence: 'derived',
+    overridden: false,
+  });
+  sourced('airSpecificHeat', 'Specific heat of air', cp.value, 'J/(kg·K)', cp.row);
+  assumptions.push({
+    key: 'designDayModel',
+    label: 'Design-day method',
+    value:
+      'hours are local apparent solar time (hour 12 = solar noon); clear sky; steady state each hour with no heat storage in floor, benches or crop; no shade cloth; heaters not modelled (night temperatures free-floating); fans staged continuously; fan fraction and "setpoint held" describe the house with its pads when pads are entered',
+    unit: '',
+    source: 'Thermbay method; sun positions from suncalc 2.0.2, irradiance and temperature profile as listed',
+    confidence: 'derived',
+    overridden: false,
+  });
+  if (padType) {
+    sourced(
+      'padFaceVelocityMPerS',
+      `Pad design face velocity (${padType.label ?? padType.id})`,
+      padType.faceVelocityMPerS,
+      'm/s',
+      padType,
+    );
+    sourced(
+      'padSaturationEfficiency',
+      `Pad saturation efficiency (${padType.label ?? padType.id})`,
+      padType.saturationEfficiency,
+      '–',
+      padType,
+    );
+  }
+  const deadbandRow = requireRow(ref, 'ventilation', 'heat-cool-deadband');
+  sourced(
+    'requiredDeadbandK',
+    'Minimum gap between heating and first cooling stage',
+    staging.requiredDeadbandK,
+    'K',
+    deadbandRow,
+  );
+  const stagingRow = requireRow(ref, 'ventilation', 'fan-staging');
+  sourced(
+    'firstStageFraction',
+    'Share of fans in the first stage',
+    stagingRow.firstStageFraction as number,
+    '–',
+    stagingRow,
+  );
+  sourced('stageStepK', 'Temperature step between fan stages', stagingRow.stageStepK as number, 'K', stagingRow);
+  sourced(
+    'winterVentilationFraction',
+    'Winter humidity ventilation as a share of the summer base rate (base rate × elevation factor; no light or temperature-rise factor)',
+    winterFraction.value,
+    '–',
+    winterFraction.row,
+  );
+  sourced(
+    'winterDesignC',
+    'Outdoor temperature for the winter ventilation heat cost (house air at the night heating setpoint)',
+    inputs.winterDesignC,
+    '°C',
+    inputs.winterDefault.row,
+    conditions.winterDesignC !== undefined,
+  );
+  return assumptions;
+}
