@@ -154,9 +154,13 @@ describe('malformed bodies on every write and estimate route (property, e2e)', (
     it(`${route.method.toUpperCase()} ${route.path}: no 5xx, the one error shape, no NaN/Infinity (${RUNS_PER_ROUTE} runs, seed ${SEED + index})`, async () => {
       const url = route.path.replace(/\{(\w+)\}/g, (_, name: string) => String(ids[name] ?? 1));
       const token = route.path.startsWith('/api/users/{id}') ? admin : owner;
+      // Text a request of this route sent may be stored and come back in a later answer (a user
+      // named "Infinity" by run 3 is still so named at run 9): that is the user's text, not a leak.
+      const sentOnRoute = new Set<string>();
       try {
         await fc.assert(
           fc.asyncProperty(hostileBody(route.fields), async (body) => {
+            for (const text of stringsIn(body)) sentOnRoute.add(text);
             const res = await t.http[route.method](url)
               .set(bearer(token))
               .set('Content-Type', 'application/json')
@@ -170,7 +174,7 @@ describe('malformed bodies on every write and estimate route (property, e2e)', (
                 message: expect.any(String),
               });
             }
-            expect({ where, nonFinite: findNonFinite(res.body, stringsIn(body)) }).toEqual({ where, nonFinite: null });
+            expect({ where, nonFinite: findNonFinite(res.body, sentOnRoute) }).toEqual({ where, nonFinite: null });
             expect(({} as Record<string, unknown>).polluted).toBeUndefined();
           }),
           { numRuns: RUNS_PER_ROUTE, seed: SEED + index, endOnFailure: true },

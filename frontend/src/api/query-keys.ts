@@ -88,6 +88,12 @@ export const seasonKeys = {
   measures: (houseId: number, request: object) => [...seasonKeys.house(houseId), 'measures', request] as const,
 };
 
+/** The measures kept with a house (not a computed result: outside `seasonKeys`). */
+export const measurePlanKeys = {
+  all: ['measure-plans'] as const,
+  house: (houseId: number) => [...measurePlanKeys.all, houseId] as const,
+};
+
 export const seasonBudgetKeys = {
   all: [...seasonKeys.all, 'budget'] as const,
   farm: (farmId: number, request: object) => [...seasonBudgetKeys.all, farmId, request] as const,

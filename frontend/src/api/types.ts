@@ -106,6 +106,7 @@ export type HouseNightDemand = Schemas['HouseNightDemandDto'];
 export type MeasuresRequest = Schemas['MeasuresRequestDto'];
 export type Measure = Schemas['MeasureDto'];
 export type MeasureKind = Measure['kind'];
+export type MeasurePlan = Schemas['MeasurePlanDto'];
 export type MeasureComparison = Schemas['MeasureComparisonDto'];
 export type MeasureResult = Schemas['MeasureResultDto'];
 export type WeatherSource = Schemas['WeatherSourceDto'];

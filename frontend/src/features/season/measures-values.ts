@@ -1,10 +1,30 @@
 import type { Measure, MeasureComparison, MeasureKind, MeasureResult } from '../../api/types';
 import type { Units } from '../../lib/units';
 
-/** A measure as the user lists it: its kind and what it would cost ('' = not priced yet). */
+/** A measure's own settings (surfaces, heater type, degrees lowered …), kept as the API gave them. */
+export type MeasureSettings = Omit<Measure, 'kind' | 'costAmount'>;
+
+/** A measure as the user lists it: its kind, its settings and what it would cost ('' = not priced yet). */
 export interface MeasureRow {
   kind: MeasureKind;
   cost: string;
+  settings?: MeasureSettings;
+}
+
+/** Heater types a heater upgrade may install (fuel-fired, vented); the engine's default is condensing. */
+export const UPGRADE_HEATER_TYPES: NonNullable<Measure['heaterType']>[] = [
+  'condensing',
+  'separated-combustion',
+  'power-vented',
+];
+
+/** Rows from measures kept with the house (or any request list): cost as typed text, settings kept. */
+export function rowsFromMeasures(measures: Measure[]): MeasureRow[] {
+  return measures.map(({ kind, costAmount, ...settings }) => ({
+    kind,
+    cost: costAmount === null || costAmount === undefined ? '' : String(costAmount),
+    ...(Object.keys(settings).length > 0 ? { settings } : {}),
+  }));
 }
 
 export const MEASURE_KIND_LABELS: Record<MeasureKind, string> = {
@@ -44,9 +64,11 @@ export function isValidCost(text: string): boolean {
 
 /** Rows → the request's measures; an unpriced measure goes without a cost (its payback then asks for one). */
 export function measuresRequestBody(rows: MeasureRow[]): Measure[] {
-  return rows.map((row) =>
-    row.cost.trim() === '' ? { kind: row.kind } : { kind: row.kind, costAmount: Number(row.cost) },
-  );
+  return rows.map((row) => ({
+    kind: row.kind,
+    ...(row.settings ?? {}),
+    ...(row.cost.trim() === '' ? {} : { costAmount: Number(row.cost) }),
+  }));
 }
 
 /** "Roof: 78 % → 76 % (3 % less light)" for layer and screen measures. */

@@ -1,7 +1,7 @@
 import { queryOptions } from '@tanstack/react-query';
 import { client, unwrap } from '../../api/client';
 import type { MeasuresRequest, NightDemandRequest, SeasonRequest } from '../../api/types';
-import { seasonKeys } from '../../api/query-keys';
+import { measurePlanKeys, seasonKeys } from '../../api/query-keys';
 
 /**
  * Season results are computed on request and stored nowhere: POST reads cached like queries.
@@ -40,4 +40,12 @@ export const measuresQueryOptions = (houseId: number, request: MeasuresRequest) 
     queryFn: ({ signal }) =>
       unwrap(client.POST('/api/houses/{houseId}/measures', { params: { path: { houseId } }, body: request, signal })),
     staleTime: 0, // the house, climate, prices or calendar may change elsewhere; a rerun is quick
+  });
+
+/** The measures and costs kept with the house (empty at version 0 before the first save). */
+export const measurePlanQueryOptions = (houseId: number) =>
+  queryOptions({
+    queryKey: measurePlanKeys.house(houseId),
+    queryFn: ({ signal }) =>
+      unwrap(client.GET('/api/houses/{houseId}/measure-plan', { params: { path: { houseId } }, signal })),
   });

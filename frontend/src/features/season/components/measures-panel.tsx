@@ -19,6 +19,7 @@ import { keepPreviousData, useQuery } from '@tanstack/react-query';
 import { useEffect, useState } from 'react';
 import type { Measure, MeasureKind, SeasonRequest } from '../../../api/types';
 import { ErrorAlert, LoadingState } from '../../../components/feedback';
+import { referenceDataQueryOptions, referenceRows } from '../../../lib/reference-data';
 import { useUnits } from '../../../lib/units';
 import {
   ADDABLE_MEASURE_KINDS,
@@ -28,9 +29,12 @@ import {
   measuresRequestBody,
   paybackText,
   rowsFromComparison,
+  rowsFromMeasures,
+  UPGRADE_HEATER_TYPES,
   type MeasureRow,
 } from '../measures-values';
-import { measuresQueryOptions } from '../queries';
+import { usePutMeasurePlan } from '../mutations';
+import { measurePlanQueryOptions, measuresQueryOptions } from '../queries';
 
 /** Energy measures for this house, each priced by the user and ranked by simple payback. */
 export function MeasuresPanel({
@@ -39,6 +43,7 @@ export function MeasuresPanel({
   alternativeId,
   priceFields = {},
   heatLossBasis,
+  canSavePlan = false,
 }: {
   houseId: number;
   /** a fuel-price what-if of the page (not saved) */
@@ -48,10 +53,22 @@ export function MeasuresPanel({
   alternativeId?: number;
   /** 'calibrated': heat loss × the house's factor from the farm's fuel bills */
   heatLossBasis?: SeasonRequest['heatLossBasis'];
+  /** the user may keep the measures and costs with the house (house:write) */
+  canSavePlan?: boolean;
 }) {
   const units = useUnits();
+  // The house keeps its measures and costs; an alternative is compared with the house's list, unsaved.
+  const plan = useQuery({ ...measurePlanQueryOptions(houseId), enabled: !alternativeId });
+  const savePlan = usePutMeasurePlan(houseId);
+  const planReady = Boolean(alternativeId) || plan.isSuccess || plan.isError;
+  const referenceData = useQuery(referenceDataQueryOptions());
+  const heaterTypeLabels = new Map(
+    referenceRows(referenceData.data, 'heater-types').map((row) => [String(row.heaterType), String(row.label)]),
+  );
   // [] asks the API for its default measures at cost 0; after that, the user's list and costs.
-  const [requested, setRequested] = useState<Measure[]>([]);
+  const [chosen, setRequested] = useState<Measure[] | null>(null);
+  // until the user compares, the measures kept with the house (or [] for the API's defaults)
+  const requested = chosen ?? plan.data?.measures ?? [];
   const [rows, setRows] = useState<MeasureRow[] | null>(null);
   const [kindToAdd, setKindToAdd] = useState<MeasureKind>('second-poly-layer');
   const comparison = useQuery({
@@ -63,11 +80,29 @@ export function MeasuresPanel({
       ...(heatLossBasis === 'calibrated' ? { heatLossBasis } : {}),
     }),
     placeholderData: keepPreviousData,
+    enabled: planReady,
   });
 
+  // Measures kept with the house come back as they were left; otherwise the API's defaults, unpriced.
+  useEffect(() => {
+    if (rows !== null || !plan.data || plan.data.measures.length === 0) return;
+    setRows(rowsFromMeasures(plan.data.measures));
+  }, [rows, plan.data]);
   useEffect(() => {
     if (rows === null && comparison.data?.defaultsUsed) setRows(rowsFromComparison(comparison.data));
   }, [rows, comparison.data]);
+
+  /** Compares these rows and, where the user may, keeps them with the house for next time. */
+  const compare = (next: MeasureRow[]) => {
+    const measures = measuresRequestBody(next);
+    setRequested(measures);
+    if (canSavePlan && !alternativeId && plan.data) savePlan.mutate({ body: { measures }, version: plan.data.version });
+  };
+  const setHeaterType = (index: number, heaterType: NonNullable<Measure['heaterType']>) =>
+    setRows(
+      (current) =>
+        current?.map((row, at) => (at === index ? { ...row, settings: { ...row.settings, heaterType } } : row)) ?? null,
+    );
 
   const allCostsValid = (rows ?? []).every((row) => isValidCost(row.cost));
   const setCost = (index: number, cost: string) =>
@@ -86,7 +121,10 @@ export function MeasuresPanel({
           Enter what each measure would cost (installed, in the farm&apos;s currency), then rank them. Each is compared
           alone against the house as it is.
         </Typography>
-        {comparison.isPending ? <LoadingState label="Comparing measures (each re-runs the season)…" /> : null}
+        {!planReady ? <LoadingState label="Loading the measures kept with the house…" /> : null}
+        {planReady && comparison.isPending ? (
+          <LoadingState label="Comparing measures (each re-runs the season)…" />
+        ) : null}
         <ErrorAlert error={comparison.error} title="The measures could not be compared" />
         {comparison.isError && rows && rows.length > 0 && requested.length > 0 ? (
           <Box>
@@ -94,7 +132,7 @@ export function MeasuresPanel({
               onClick={() => {
                 const fewer = rows.slice(0, -1);
                 setRows(fewer);
-                setRequested(measuresRequestBody(fewer));
+                compare(fewer);
               }}
             >
               Remove the last measure ({MEASURE_KIND_LABELS[rows[rows.length - 1]!.kind]})
@@ -145,6 +183,24 @@ export function MeasuresPanel({
                           <Typography variant="caption" color="text.secondary" component="div">
                             {units.prose(measure.description)}
                           </Typography>
+                          {row?.kind === 'heater-efficiency' ? (
+                            <TextField
+                              select
+                              size="small"
+                              label="New heaters"
+                              value={row.settings?.heaterType ?? 'condensing'}
+                              onChange={(event) =>
+                                setHeaterType(measure.index, event.target.value as NonNullable<Measure['heaterType']>)
+                              }
+                              sx={{ mt: 1, minWidth: 220 }}
+                            >
+                              {UPGRADE_HEATER_TYPES.map((type) => (
+                                <MenuItem key={type} value={type}>
+                                  {heaterTypeLabels.get(type) ?? type}
+                                </MenuItem>
+                              ))}
+                            </TextField>
+                          ) : null}
                           {measure.notes.map((note) => (
                             <Typography variant="caption" color="warning.main" component="div" key={note}>
                               {units.prose(note)}
@@ -206,7 +262,7 @@ export function MeasuresPanel({
               <Button
                 variant="contained"
                 disabled={!allCostsValid || comparison.isFetching}
-                onClick={() => setRequested(measuresRequestBody(rows))}
+                onClick={() => compare(rows)}
               >
                 {comparison.isFetching ? 'Ranking…' : 'Rank by payback'}
               </Button>
@@ -228,13 +284,19 @@ export function MeasuresPanel({
                 onClick={() => {
                   const next = [...rows, { kind: kindToAdd, cost: '' }];
                   setRows(next);
-                  if (next.every((row) => isValidCost(row.cost))) setRequested(measuresRequestBody(next));
+                  if (next.every((row) => isValidCost(row.cost))) compare(next);
                 }}
               >
                 Add and compare
               </Button>
             </Stack>
             {!allCostsValid ? <Alert severity="error">Costs must be numbers of 0 or more.</Alert> : null}
+            <ErrorAlert error={savePlan.error} title="The measures and costs could not be kept with the house" />
+            {savePlan.isSuccess ? (
+              <Typography variant="body2" color="text.secondary" role="status">
+                Kept with the house: these measures and costs are here next time.
+              </Typography>
+            ) : null}
             <Box component="ul" sx={{ m: 0, pl: 2.5 }}>
               {result.notes.map((note) => (
                 <Typography component="li" variant="body2" color="text.secondary" key={note}>

@@ -174,6 +174,7 @@ export function SeasonView({
         priceFields={priceFields}
         alternativeId={alternative?.id}
         heatLossBasis={heatLossBasis}
+        canSavePlan={canEditCalendar}
       />
     </Stack>
   );
