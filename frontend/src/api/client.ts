@@ -185,12 +185,12 @@ export async function unwrap<T>(call: Promise<FetchResult<T>>): Promise<T> {
 }
 
 /**
- * The If-Match header of a versioned write (houses, farms, climates, calendars, fuel prices): the
- * version the edit was based on. The contract lists the header under both spellings; HTTP
- * headers are case-insensitive, so one header goes out.
+ * The If-Match header of a versioned write (houses, farms, climates, calendars, fuel prices, fuel
+ * records): the version the edit was based on, under the name the contract gives it (HTTP header
+ * names are case-insensitive).
  */
-export function ifMatch(version: number): { 'If-Match': string; 'if-match': string } {
-  return { 'If-Match': String(version), 'if-match': String(version) };
+export function ifMatch(version: number): { 'if-match': string } {
+  return { 'if-match': String(version) };
 }
 
 /**
