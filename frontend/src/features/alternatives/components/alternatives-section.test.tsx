@@ -88,8 +88,8 @@ describe('AlternativesSection', () => {
     const [valid, invalid] = items;
 
     expect(valid.textContent).toContain('Inflated double poly');
-    expect(valid.textContent).toContain('Changes coverings.roof, coverings.sidewalls');
-    expect(valid.textContent).toContain('cost $4,200');
+    expect(valid.textContent).toContain('Changes roof covering, sidewall covering');
+    expect(valid.textContent).toContain('cost $4,200'); // the farm's currency (USD here)
     expect(valid.textContent).toContain('by Ada Adviser');
     expect(within(valid).getByRole('link', { name: 'Season' }).getAttribute('href')).toBe(
       `/houses/${HOUSE_ID}/season?alternative=${doublePoly.id}`,

@@ -10,6 +10,7 @@ import { useUnits } from '../../../lib/units';
 import { useAdoptAlternative, useDeleteAlternative } from '../mutations';
 import { houseAlternativesQueryOptions } from '../queries';
 import { MAX_SIDE_BY_SIDE } from '../side-by-side-selection';
+import { changesSentence } from '../changed-fields';
 
 /** The house's saved alternatives, with the way to the side-by-side page and the season of each. */
 export function AlternativesSection({
@@ -61,7 +62,7 @@ export function AlternativesSection({
                   primary={alt.name}
                   secondary={
                     <>
-                      {alt.changedFields.length > 0 ? `Changes ${alt.changedFields.join(', ')}` : 'No field changes'}
+                      {changesSentence(alt.changedFields)}
                       {alt.calendar ? ', own calendar' : ''}
                       {alt.costAmount !== null
                         ? ` · cost ${units.money(alt.costAmount, currency, 0)}`

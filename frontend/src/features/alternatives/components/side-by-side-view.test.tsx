@@ -124,8 +124,8 @@ describe('SideBySideView', () => {
     expect(headers).toEqual([
       'Quantity',
       `${demoHouseB.name}the house as it is`,
-      'Inflated double polychanges coverings.roof, coverings.sidewalls',
-      'Lower ridgechanges ridgeHeightM',
+      'Inflated double polychanges roof covering, sidewall covering',
+      'Lower ridgechanges ridge height',
     ]);
   });
 

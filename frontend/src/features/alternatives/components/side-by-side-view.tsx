@@ -23,6 +23,7 @@ import '../../../lib/chart';
 import { saveBlob } from '../../../lib/save-blob';
 import { useUnits } from '../../../lib/units';
 import { sideBySideChartData, sideBySideCsv, sideBySideRows } from '../side-by-side-rows';
+import { changesSentence } from '../changed-fields';
 
 /** The first column stays in view while the table scrolls sideways inside its card. */
 const STICKY_FIRST = {
@@ -94,11 +95,12 @@ export function SideBySideView({ data, fileName }: { data: SideBySide; fileName:
                     <Typography variant="caption" color="text.secondary">
                       {index === 0
                         ? 'the house as it is'
-                        : column.changedFields.length > 0
-                          ? `changes ${column.changedFields.join(', ')}${column.ownCalendar ? ', calendar' : ''}`
-                          : column.ownCalendar
-                            ? 'changes the calendar'
-                            : 'no changes'}
+                        : column.changedFields.length > 0 || column.ownCalendar
+                          ? changesSentence([
+                              ...column.changedFields,
+                              ...(column.ownCalendar ? ['calendar'] : []),
+                            ]).toLowerCase()
+                          : 'no changes'}
                     </Typography>
                   </TableCell>
                 ))}

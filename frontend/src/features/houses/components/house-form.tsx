@@ -1,8 +1,8 @@
 import AddIcon from '@mui/icons-material/Add';
 import DeleteOutlineIcon from '@mui/icons-material/DeleteOutlined';
-import { Alert, Box, Button, Grid, IconButton, Paper, Stack, Tooltip, Typography } from '@mui/material';
-import { FieldArray, Form, Formik, setIn, useFormikContext, type FormikErrors } from 'formik';
-import { Fragment, useEffect, useMemo, useRef, useState, type ReactNode, type RefObject } from 'react';
+import { Alert, Box, Button, Grid, IconButton, Stack, Tooltip, Typography } from '@mui/material';
+import { FieldArray, Form, Formik, setIn, type FormikErrors } from 'formik';
+import { Fragment, useMemo, useRef, useState, type ReactNode } from 'react';
 import { ApiError, isStaleWrite } from '../../../api/client';
 import type { HouseInput, ReferenceData } from '../../../api/types';
 import { ErrorAlert } from '../../../components/feedback';
@@ -12,23 +12,22 @@ import {
   FormReadOnlyContext,
   FormSelectField,
   FormTextField,
-  type SelectOption,
 } from '../../../components/form-fields';
 import { referenceRows } from '../../../lib/reference-data';
-import { useUnits, type Units } from '../../../lib/units';
+import { useUnits } from '../../../lib/units';
 import {
   apiErrorToFieldErrors,
-  convertFormValues,
   formValuesToHouseInput,
   HOUSE_SHAPES,
   houseToFormValues,
   SHAPE_LABELS,
   SURFACE_GROUPS,
   SURFACE_LABELS,
-  type HeaterFormValues,
   type HouseFormValues,
 } from '../house-form-values';
 import { houseFormSchema } from '../schemas';
+import { coveringOptions, newHeaterRow, optionsFrom, typicalEfficiencyOf } from '../house-form-options';
+import { FollowUnitSystem, InvalidSubmitNote, ReportValues, Section } from './house-form-parts';
 
 export interface HouseFormProps {
   /** the stored house (or the defaults of a new one), SI */
@@ -47,136 +46,6 @@ export interface HouseFormProps {
   onValuesChange?: (input: HouseInput | null, state: { dirty: boolean }) => void;
   /** false: the fields are editable (for what-ifs) but the house cannot be saved (no Save button) */
   canSave?: boolean;
-}
-
-/**
- * After a save attempt that validation stopped: moves focus to the first field in error and says
- * so beside the button (the fields may be far above it, out of sight on a phone).
- */
-function InvalidSubmitNote({ formRef }: { formRef: RefObject<HTMLFormElement | null> }) {
-  const { submitCount, isSubmitting, isValidating, errors } = useFormikContext<HouseFormValues>();
-  const handled = useRef(0);
-  const [note, setNote] = useState<string | null>(null);
-  const errorCount = countErrors(errors);
-  useEffect(() => {
-    if (isSubmitting || isValidating || submitCount === handled.current) return;
-    handled.current = submitCount;
-    if (errorCount === 0) {
-      setNote(null);
-      return;
-    }
-    const first = formRef.current?.querySelector<HTMLElement>('[aria-invalid="true"]');
-    first?.focus();
-    first?.scrollIntoView?.({ block: 'center' });
-    const label = first instanceof HTMLInputElement ? first.labels?.[0]?.textContent?.replace(/\s*\*\s*$/, '') : null;
-    setNote(
-      `Not saved: ${errorCount === 1 ? 'one field needs' : `${errorCount} fields need`} attention${label ? ` (first: ${label})` : ''}.`,
-    );
-  }, [submitCount, isSubmitting, isValidating, errorCount, formRef]);
-  useEffect(() => {
-    if (errorCount === 0) setNote(null);
-  }, [errorCount]);
-  if (!note) return null;
-  return (
-    <Typography role="alert" color="error" variant="body2" sx={{ alignSelf: 'center' }}>
-      {note}
-    </Typography>
-  );
-}
-
-function countErrors(errors: unknown): number {
-  if (!errors) return 0;
-  if (typeof errors === 'string') return 1;
-  if (Array.isArray(errors)) return errors.reduce((total: number, item) => total + countErrors(item), 0);
-  if (typeof errors === 'object')
-    return Object.values(errors).reduce((total: number, item) => total + countErrors(item), 0);
-  return 0;
-}
-
-function Section({ id, title, children }: { id: string; title: string; children: ReactNode }) {
-  return (
-    <Paper component="section" aria-labelledby={id} sx={{ p: 2 }}>
-      <Typography id={id} variant="h3" component="h2" sx={{ mb: 2 }}>
-        {title}
-      </Typography>
-      {children}
-    </Paper>
-  );
-}
-
-/** Keeps the user's edits when they switch unit systems mid-edit (re-expressed in the new unit). */
-function FollowUnitSystem({ units, initialValues }: { units: Units; initialValues: HouseFormValues }) {
-  const { values, dirty, resetForm, setValues } = useFormikContext<HouseFormValues>();
-  const previous = useRef({ units, initialValues });
-  useEffect(() => {
-    const before = previous.current;
-    previous.current = { units, initialValues };
-    if (before.units.system === units.system) return;
-    const edited = dirty ? convertFormValues(values, before.initialValues, initialValues, before.units, units) : null;
-    resetForm({ values: initialValues });
-    if (edited) void setValues(edited, true);
-    // Runs only when the unit system changes; values/dirty are read at that moment on purpose.
-  }, [units, initialValues]);
-  return null;
-}
-
-/** Reports the form's values upward (SI, or null while invalid) as the user edits. */
-function ReportValues({
-  schema,
-  initialValues,
-  house,
-  units,
-  onValuesChange,
-}: {
-  schema: ReturnType<typeof houseFormSchema>;
-  initialValues: HouseFormValues;
-  house: HouseInput;
-  units: Units;
-  onValuesChange: NonNullable<HouseFormProps['onValuesChange']>;
-}) {
-  const { values, dirty } = useFormikContext<HouseFormValues>();
-  const report = useRef(onValuesChange);
-  report.current = onValuesChange;
-  useEffect(() => {
-    const valid = schema.isValidSync(values);
-    report.current(valid ? formValuesToHouseInput(values, initialValues, house, units) : null, { dirty });
-  }, [values, dirty, schema, initialValues, house, units]);
-  return null;
-}
-
-function optionsFrom(
-  referenceData: ReferenceData,
-  table: string,
-  describe?: (row: Record<string, unknown>) => string | null,
-): SelectOption[] {
-  return referenceRows(referenceData, table).map((row) => {
-    const extra = describe?.(row);
-    const label = row.label ?? row.id;
-    return { value: row.id, label: extra ? `${label} (${extra})` : label };
-  });
-}
-
-function coveringOptions(referenceData: ReferenceData, units: Units): SelectOption[] {
-  return optionsFrom(referenceData, 'coverings', (row) =>
-    typeof row.uWPerM2K === 'number' ? `U ${units.format('uValue', row.uWPerM2K)}` : null,
-  );
-}
-
-/** The typical efficiency of a heater type (heater-types.json), or null when none is stated. */
-function typicalEfficiencyOf(referenceData: ReferenceData, heaterType: string): number | null {
-  const row = referenceRows(referenceData, 'heater-types').find((candidate) => candidate.heaterType === heaterType);
-  return row && typeof row.typicalEfficiency === 'number' ? row.typicalEfficiency : null;
-}
-
-function newHeaterRow(referenceData: ReferenceData, units: Units): HeaterFormValues {
-  const fuels = referenceRows(referenceData, 'fuels');
-  return {
-    count: '1',
-    ratedInputW: units.toInput('power', 73_000),
-    efficiency: '80',
-    fuelId: fuels.find((row) => row.id === 'natural-gas')?.id ?? fuels[0]?.id ?? '',
-    heaterType: '',
-  };
 }
 
 export function HouseForm({

@@ -1,0 +1,42 @@
+import type { ReferenceData } from '../../api/types';
+import type { SelectOption } from '../../components/form-fields';
+import { referenceRows } from '../../lib/reference-data';
+import type { Units } from '../../lib/units';
+import type { HeaterFormValues } from './house-form-values';
+
+/** The house form's choices, read from the reference tables. */
+
+export function optionsFrom(
+  referenceData: ReferenceData,
+  table: string,
+  describe?: (row: Record<string, unknown>) => string | null,
+): SelectOption[] {
+  return referenceRows(referenceData, table).map((row) => {
+    const extra = describe?.(row);
+    const label = row.label ?? row.id;
+    return { value: row.id, label: extra ? `${label} (${extra})` : label };
+  });
+}
+
+export function coveringOptions(referenceData: ReferenceData, units: Units): SelectOption[] {
+  return optionsFrom(referenceData, 'coverings', (row) =>
+    typeof row.uWPerM2K === 'number' ? `U ${units.format('uValue', row.uWPerM2K)}` : null,
+  );
+}
+
+/** The typical efficiency of a heater type (heater-types.json), or null when none is stated. */
+export function typicalEfficiencyOf(referenceData: ReferenceData, heaterType: string): number | null {
+  const row = referenceRows(referenceData, 'heater-types').find((candidate) => candidate.heaterType === heaterType);
+  return row && typeof row.typicalEfficiency === 'number' ? row.typicalEfficiency : null;
+}
+
+export function newHeaterRow(referenceData: ReferenceData, units: Units): HeaterFormValues {
+  const fuels = referenceRows(referenceData, 'fuels');
+  return {
+    count: '1',
+    ratedInputW: units.toInput('power', 73_000),
+    efficiency: '80',
+    fuelId: fuels.find((row) => row.id === 'natural-gas')?.id ?? fuels[0]?.id ?? '',
+    heaterType: '',
+  };
+}
