@@ -64,11 +64,15 @@ export function changesNothing(current: Record<string, unknown>, changes: Record
   );
 }
 
-/** OpenAPI: the If-Match header and the 409 / 428 answers of a versioned write. */
+/**
+ * OpenAPI: the If-Match header and the 409 / 428 answers of a versioned write. The header is
+ * named exactly as the handler's `@Headers(IF_MATCH_HEADER)` reads it, so the document lists it
+ * once (with this description) rather than once per spelling.
+ */
 export function ApiVersionedWrite(what: string) {
   return applyDecorators(
     ApiHeader({
-      name: 'If-Match',
+      name: IF_MATCH_HEADER,
       required: true,
       description: `the \`version\` of the ${what} you loaded (0 if it has never been saved); every save raises it by one`,
       schema: { type: 'string', example: '3' },

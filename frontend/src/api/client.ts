@@ -1,8 +1,17 @@
 /**
- * The one HTTP client. Adds the bearer token, turns every error response into an ApiError
- * (the API's single error shape), and forgets the token on 401. No UI imports: the app
- * subscribes to token changes to decide where to send the user.
+ * The one HTTP client: an openapi-fetch client typed from the generated contract
+ * (`paths` in schema.d.ts), so every path, path parameter, request body and answer is checked
+ * against the API. Its middleware adds the bearer token, forgets the token on 401 and turns
+ * every error response into an ApiError (the API's single error shape). Two helpers sit
+ * beside it: `uploadWithProgress` (XMLHttpRequest, the one way to see upload progress) and
+ * `downloadFile` (a GET answered as a file). No UI imports: the app subscribes to token
+ * changes to decide where to send the user.
+ *
+ *   unwrap(client.GET('/api/farms/{farmId}', { params: { path: { farmId } }, signal }))
+ *   unwrap(client.PATCH('/api/farms/{farmId}', { params: { path: { farmId }, header: ifMatch(version) }, body }))
  */
+import createClient, { type Middleware } from 'openapi-fetch';
+import type { paths } from './schema';
 
 export interface ApiErrorDetail {
   field: string;
@@ -107,10 +116,10 @@ export function parseApiError(status: number, statusText: string, body: unknown)
   return new ApiError(status, message, field, details, body.current);
 }
 
-export interface RequestOptions {
-  signal?: AbortSignal;
-  /** the version the write is based on, sent as If-Match (houses, farms, climates, calendars, fuel prices) */
-  ifMatch?: number;
+const UNREACHABLE = 'Cannot reach the Thermbay server. Check your connection and try again.';
+
+function isAbort(error: unknown): boolean {
+  return error instanceof DOMException && error.name === 'AbortError';
 }
 
 async function readBody(response: Response): Promise<unknown> {
@@ -127,46 +136,70 @@ async function readBody(response: Response): Promise<unknown> {
   return text;
 }
 
-export async function apiRequest<T>(
-  method: 'GET' | 'POST' | 'PATCH' | 'PUT' | 'DELETE',
-  path: string,
-  body?: unknown,
-  options: RequestOptions = {},
-): Promise<T> {
-  const headers: Record<string, string> = { Accept: 'application/json' };
-  const token = tokenStorage.get();
-  if (token) headers.Authorization = `Bearer ${token}`;
-  if (body !== undefined) headers['Content-Type'] = 'application/json';
-  if (options.ifMatch !== undefined) headers['If-Match'] = String(options.ifMatch);
+/**
+ * Every request: the bearer token (when signed in); every answer: a 401 to a signed-in request
+ * forgets the token, and any error answer is thrown as an ApiError, so a call either resolves
+ * with its data or rejects with ApiError (status 0 when the server cannot be reached).
+ */
+export const sessionMiddleware: Middleware = {
+  onRequest({ request }) {
+    if (!request.headers.has('Accept')) request.headers.set('Accept', 'application/json');
+    const token = tokenStorage.get();
+    if (token) request.headers.set('Authorization', `Bearer ${token}`);
+    return request;
+  },
+  async onResponse({ request, response }) {
+    if (response.ok) return undefined;
+    if (response.status === 401 && request.headers.has('Authorization')) tokenStorage.clear();
+    throw parseApiError(response.status, response.statusText, await readBody(response));
+  },
+  onError({ error }) {
+    if (isAbort(error)) return undefined;
+    return new ApiError(0, UNREACHABLE);
+  },
+};
 
-  let response: Response;
-  try {
-    response = await fetch(path, {
-      method,
-      headers,
-      body: body === undefined ? undefined : JSON.stringify(body),
-      signal: options.signal,
-    });
-  } catch (cause) {
-    if (cause instanceof DOMException && cause.name === 'AbortError') throw cause;
-    throw new ApiError(0, 'Cannot reach the Thermbay server. Check your connection and try again.');
-  }
+export const client = createClient<paths>({
+  // Same origin as the page; absolute so the Request is valid outside a browser page too (tests).
+  baseUrl: globalThis.location?.origin ?? '',
+  // Looked up per call, so tests can replace fetch after this module loaded.
+  fetch: (request) => globalThis.fetch(request),
+});
+client.use(sessionMiddleware);
 
-  const payload = await readBody(response);
-  if (!response.ok) {
-    if (response.status === 401 && token) tokenStorage.clear();
-    throw parseApiError(response.status, response.statusText, payload);
-  }
-  return payload as T;
+/** An openapi-fetch answer: data on success, error otherwise. */
+interface FetchResult<T> {
+  data?: T;
+  error?: unknown;
+  response: Response;
 }
 
-export const api = {
-  get: <T>(path: string, options?: RequestOptions) => apiRequest<T>('GET', path, undefined, options),
-  post: <T>(path: string, body?: unknown, options?: RequestOptions) => apiRequest<T>('POST', path, body, options),
-  put: <T>(path: string, body?: unknown, options?: RequestOptions) => apiRequest<T>('PUT', path, body, options),
-  patch: <T>(path: string, body?: unknown, options?: RequestOptions) => apiRequest<T>('PATCH', path, body, options),
-  delete: <T = void>(path: string, options?: RequestOptions) => apiRequest<T>('DELETE', path, undefined, options),
-};
+/**
+ * The data of a call, or its ApiError thrown. The middleware already throws on every error
+ * answer; this turns what is left into a plain promise of the data (undefined for 204).
+ */
+export async function unwrap<T>(call: Promise<FetchResult<T>>): Promise<T> {
+  const { data, error, response } = await call;
+  if (error !== undefined || !response.ok) throw parseApiError(response.status, response.statusText, error);
+  return data as T;
+}
+
+/**
+ * The If-Match header of a versioned write (houses, farms, climates, calendars, fuel prices, fuel
+ * records): the version the edit was based on, under the name the contract gives it (HTTP header
+ * names are case-insensitive).
+ */
+export function ifMatch(version: number): { 'if-match': string } {
+  return { 'if-match': String(version) };
+}
+
+/**
+ * A multipart body as the contract types it. The contract writes a file part as a string
+ * (OpenAPI's binary format); the browser sends the FormData itself, with its own boundary.
+ */
+export function multipartBody<T>(form: FormData): NonNullable<T> {
+  return form as unknown as NonNullable<T>;
+}
 
 export interface UploadProgress {
   loadedBytes: number;
@@ -176,7 +209,8 @@ export interface UploadProgress {
   fraction: number | null;
 }
 
-export interface UploadOptions extends RequestOptions {
+export interface UploadOptions {
+  signal?: AbortSignal;
   method?: 'POST' | 'PUT';
   onProgress?: (progress: UploadProgress) => void;
 }
@@ -197,7 +231,8 @@ function parseXhrBody(request: XMLHttpRequest): unknown {
 /**
  * Sends a multipart body and reports how much of it has left the browser. fetch cannot report
  * upload progress, so this one call uses XMLHttpRequest — with the same bearer token, the same
- * error shape (ApiError) and the same sign-out on 401 as every other request.
+ * error shape (ApiError) and the same sign-out on 401 as the client. Name the answer's type
+ * from the contract (e.g. `uploadWithProgress<TemperatureLog>`).
  */
 export function uploadWithProgress<T>(path: string, body: FormData, options: UploadOptions = {}): Promise<T> {
   return new Promise<T>((resolve, reject) => {
@@ -237,7 +272,7 @@ export function uploadWithProgress<T>(path: string, body: FormData, options: Upl
     });
     request.addEventListener('error', () => {
       settle();
-      reject(new ApiError(0, 'Cannot reach the Thermbay server. Check your connection and try again.'));
+      reject(new ApiError(0, UNREACHABLE));
     });
     request.addEventListener('abort', () => {
       settle();
@@ -245,26 +280,6 @@ export function uploadWithProgress<T>(path: string, body: FormData, options: Upl
     });
     request.send(body);
   });
-}
-
-/** Sends a small multipart body with fetch (no progress needed), same token and errors. */
-export async function postForm<T>(path: string, body: FormData, options: RequestOptions = {}): Promise<T> {
-  const headers: Record<string, string> = { Accept: 'application/json' };
-  const token = tokenStorage.get();
-  if (token) headers.Authorization = `Bearer ${token}`;
-  let response: Response;
-  try {
-    response = await fetch(path, { method: 'POST', headers, body, signal: options.signal });
-  } catch (cause) {
-    if (cause instanceof DOMException && cause.name === 'AbortError') throw cause;
-    throw new ApiError(0, 'Cannot reach the Thermbay server. Check your connection and try again.');
-  }
-  const payload = await readBody(response);
-  if (!response.ok) {
-    if (response.status === 401 && token) tokenStorage.clear();
-    throw parseApiError(response.status, response.statusText, payload);
-  }
-  return payload as T;
 }
 
 export interface DownloadedFile {
@@ -283,29 +298,16 @@ function fileNameFrom(contentDisposition: string | null, fallback: string): stri
   }
 }
 
-/** GETs a file (e.g. a CSV export) with the token, as a Blob; errors as ApiError. */
+/**
+ * A file (CSV export, PDF, attachment) fetched through the client, named from Content-Disposition:
+ *
+ *   downloadFile(client.GET('/api/reports/{reportId}/pdf', { params: { path: { reportId } }, parseAs: 'blob' }), 'report.pdf')
+ */
 export async function downloadFile(
-  path: string,
+  call: Promise<FetchResult<Blob>>,
   fallbackFileName: string,
-  options: RequestOptions = {},
 ): Promise<DownloadedFile> {
-  const headers: Record<string, string> = {};
-  const token = tokenStorage.get();
-  if (token) headers.Authorization = `Bearer ${token}`;
-  let response: Response;
-  try {
-    response = await fetch(path, { method: 'GET', headers, signal: options.signal });
-  } catch (cause) {
-    if (cause instanceof DOMException && cause.name === 'AbortError') throw cause;
-    throw new ApiError(0, 'Cannot reach the Thermbay server. Check your connection and try again.');
-  }
-  if (!response.ok) {
-    const payload = await readBody(response);
-    if (response.status === 401 && token) tokenStorage.clear();
-    throw parseApiError(response.status, response.statusText, payload);
-  }
-  return {
-    blob: await response.blob(),
-    fileName: fileNameFrom(response.headers.get('content-disposition'), fallbackFileName),
-  };
+  const { response } = await call;
+  const blob = await unwrap(call);
+  return { blob, fileName: fileNameFrom(response.headers.get('content-disposition'), fallbackFileName) };
 }

@@ -4211,9 +4211,8 @@ export interface operations {
         parameters: {
             query?: never;
             header: {
-                "if-match": string;
                 /** @description the `version` of the farm you loaded (0 if it has never been saved); every save raises it by one */
-                "If-Match": string;
+                "if-match": string;
             };
             path: {
                 farmId: number;
@@ -4611,9 +4610,8 @@ export interface operations {
         parameters: {
             query?: never;
             header: {
-                "if-match": string;
                 /** @description the `version` of the house you loaded (0 if it has never been saved); every save raises it by one */
-                "If-Match": string;
+                "if-match": string;
             };
             path: {
                 houseId: number;
@@ -4682,9 +4680,8 @@ export interface operations {
         parameters: {
             query?: never;
             header: {
-                "if-match": string;
                 /** @description the `version` of the climate you loaded (0 if it has never been saved); every save raises it by one */
-                "If-Match": string;
+                "if-match": string;
             };
             path: {
                 farmId: number;
@@ -5085,9 +5082,8 @@ export interface operations {
         parameters: {
             query?: never;
             header: {
-                "if-match": string;
                 /** @description the `version` of the calendar you loaded (0 if it has never been saved); every save raises it by one */
-                "If-Match": string;
+                "if-match": string;
             };
             path: {
                 houseId: number;
@@ -5184,9 +5180,8 @@ export interface operations {
         parameters: {
             query?: never;
             header: {
-                "if-match": string;
                 /** @description the `version` of the fuel prices you loaded (0 if it has never been saved); every save raises it by one */
-                "If-Match": string;
+                "if-match": string;
             };
             path: {
                 farmId: number;
@@ -5374,9 +5369,8 @@ export interface operations {
         parameters: {
             query?: never;
             header: {
-                "if-match": string;
                 /** @description the `version` of the measure plan you loaded (0 if it has never been saved); every save raises it by one */
-                "If-Match": string;
+                "if-match": string;
             };
             path: {
                 houseId: number;
@@ -6461,9 +6455,8 @@ export interface operations {
         parameters: {
             query?: never;
             header: {
-                "if-match": string;
                 /** @description the `version` of the fuel record you loaded (0 if it has never been saved); every save raises it by one */
-                "If-Match": string;
+                "if-match": string;
             };
             path: {
                 recordId: number;

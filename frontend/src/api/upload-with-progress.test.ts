@@ -1,5 +1,5 @@
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { ApiError, downloadFile, tokenStorage, uploadWithProgress, type UploadProgress } from './client';
+import { ApiError, client, downloadFile, tokenStorage, uploadWithProgress, type UploadProgress } from './client';
 
 type Listener = (event: ProgressEvent) => void;
 
@@ -160,23 +160,52 @@ describe('uploadWithProgress', () => {
 });
 
 describe('downloadFile', () => {
-  it('fetches with the token and names the file from Content-Disposition', async () => {
+  const csvAnswer = () =>
+    new Response('house,month\nA,9\n', {
+      status: 200,
+      headers: {
+        'content-type': 'text/csv; charset=utf-8',
+        'content-disposition': 'attachment; filename="season-budget-farm-1-us.csv"',
+      },
+    });
+  const csvOfFarm1 = () =>
+    client.GET('/api/farms/{farmId}/season-budget.csv', {
+      params: { path: { farmId: 1 }, query: { units: 'us' } },
+      parseAs: 'blob',
+    });
+
+  it('fetches through the client with the token and names the file from Content-Disposition', async () => {
     tokenStorage.set('token-csv');
-    const fetchMock = vi.fn(
-      async () =>
-        new Response('house,month\nA,9\n', {
-          status: 200,
-          headers: {
-            'content-type': 'text/csv; charset=utf-8',
-            'content-disposition': 'attachment; filename="season-budget-farm-1-us.csv"',
-          },
-        }),
-    );
+    const fetchMock = vi.fn(async (_request: Request) => csvAnswer());
     vi.stubGlobal('fetch', fetchMock);
-    const file = await downloadFile('/api/farms/1/season-budget.csv?units=us', 'fallback.csv');
+    const file = await downloadFile(csvOfFarm1(), 'fallback.csv');
     expect(file.fileName).toBe('season-budget-farm-1-us.csv');
     expect(await file.blob.text()).toContain('house,month');
-    const [, init] = fetchMock.mock.calls[0] as unknown as [string, RequestInit];
-    expect((init.headers as Record<string, string>).Authorization).toBe('Bearer token-csv');
+    const request = fetchMock.mock.calls[0]![0];
+    expect(new URL(request.url).pathname + new URL(request.url).search).toBe('/api/farms/1/season-budget.csv?units=us');
+    expect(request.headers.get('Authorization')).toBe('Bearer token-csv');
+  });
+
+  it('falls back to the given name without Content-Disposition', async () => {
+    vi.stubGlobal('fetch', async () => new Response('x', { status: 200, headers: { 'content-type': 'text/csv' } }));
+    expect((await downloadFile(csvOfFarm1(), 'fallback.csv')).fileName).toBe('fallback.csv');
+  });
+
+  it('rejects with the API error, and forgets the token on 401', async () => {
+    tokenStorage.set('expired');
+    vi.stubGlobal(
+      'fetch',
+      async () =>
+        new Response(JSON.stringify({ statusCode: 401, message: 'Sign in again' }), {
+          status: 401,
+          headers: { 'content-type': 'application/json' },
+        }),
+    );
+    await expect(downloadFile(csvOfFarm1(), 'fallback.csv')).rejects.toMatchObject({
+      name: 'ApiError',
+      status: 401,
+      message: 'Sign in again',
+    });
+    expect(tokenStorage.get()).toBeNull();
   });
 });

@@ -2,6 +2,7 @@ import { Alert, AlertTitle, Box, Chip, Link, List, ListItem, Paper, Stack, Toolt
 import type { ReactNode } from 'react';
 import { Link as RouterLink } from 'react-router-dom';
 import { ApiError } from '../api/client';
+import type { CoolingAssumption, HeatingAssumption, SeasonAssumption } from '../api/types';
 import { paths } from '../config/paths';
 import { quantityOfSiUnit, useUnits, type Units } from '../lib/units';
 import { ErrorAlert } from './feedback';
@@ -11,17 +12,9 @@ import { ErrorAlert } from './feedback';
  * cautions alert, and the notes shown instead of a result (no permission, no farm climate).
  */
 
-export type Confidence = 'verified' | 'verified-secondary' | 'derived' | 'memory' | 'common-practice' | 'user-entered';
-
-export interface EstimateAssumption {
-  key: string;
-  label: string;
-  value: number | string;
-  unit: string;
-  source: string;
-  confidence: Confidence;
-  overridden: boolean;
-}
+/** An assumption as the heating, cooling and season answers list it (the API's one shape). */
+export type EstimateAssumption = HeatingAssumption | CoolingAssumption | SeasonAssumption;
+export type Confidence = EstimateAssumption['confidence'];
 
 export const CONFIDENCE_LABELS: Record<Confidence, string> = {
   verified: 'verified in the source',

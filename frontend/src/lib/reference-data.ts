@@ -1,5 +1,5 @@
 import { queryOptions } from '@tanstack/react-query';
-import { api } from '../api/client';
+import { client, unwrap } from '../api/client';
 import type { ReferenceData, ReferenceRow } from '../api/types';
 import { referenceDataKeys } from '../api/query-keys';
 
@@ -10,7 +10,7 @@ import { referenceDataKeys } from '../api/query-keys';
 export const referenceDataQueryOptions = () =>
   queryOptions({
     queryKey: referenceDataKeys.all,
-    queryFn: ({ signal }) => api.get<ReferenceData>('/api/reference-data', { signal }),
+    queryFn: ({ signal }) => unwrap(client.GET('/api/reference-data', { signal })),
     staleTime: Infinity,
   });
 

@@ -1,17 +1,13 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../api/client';
-import type {
-  AdoptAlternativeResult,
-  Alternative,
-  CreateAlternativeRequest,
-  UpdateAlternativeRequest,
-} from '../../api/types';
+import { client, unwrap } from '../../api/client';
+import type { CreateAlternativeRequest, UpdateAlternativeRequest } from '../../api/types';
 import { alternativeKeys } from '../../api/query-keys';
 
 export function useCreateAlternative(houseId: number) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (body: CreateAlternativeRequest) => api.post<Alternative>(`/api/houses/${houseId}/alternatives`, body),
+    mutationFn: (body: CreateAlternativeRequest) =>
+      unwrap(client.POST('/api/houses/{houseId}/alternatives', { params: { path: { houseId } }, body })),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: alternativeKeys.all }),
   });
 }
@@ -20,7 +16,7 @@ export function useUpdateAlternative() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: ({ id, body }: { id: number; body: UpdateAlternativeRequest }) =>
-      api.patch<Alternative>(`/api/alternatives/${id}`, body),
+      unwrap(client.PATCH('/api/alternatives/{alternativeId}', { params: { path: { alternativeId: id } }, body })),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: alternativeKeys.all }),
   });
 }
@@ -28,7 +24,8 @@ export function useUpdateAlternative() {
 export function useDeleteAlternative() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (id: number) => api.delete(`/api/alternatives/${id}`),
+    mutationFn: (id: number) =>
+      unwrap(client.DELETE('/api/alternatives/{alternativeId}', { params: { path: { alternativeId: id } } })),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: alternativeKeys.all }),
   });
 }
@@ -37,7 +34,8 @@ export function useDeleteAlternative() {
 export function useAdoptAlternative() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (id: number) => api.post<AdoptAlternativeResult>(`/api/alternatives/${id}/adopt`, {}),
+    mutationFn: (id: number) =>
+      unwrap(client.POST('/api/alternatives/{alternativeId}/adopt', { params: { path: { alternativeId: id } } })),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: alternativeKeys.all }),
   });
 }

@@ -1,6 +1,6 @@
 import { queryOptions } from '@tanstack/react-query';
-import { api } from '../../api/client';
-import type { Alternative, SideBySide, SideBySideRequest } from '../../api/types';
+import { client, unwrap } from '../../api/client';
+import type { SideBySideRequest } from '../../api/types';
 import { alternativeKeys } from '../../api/query-keys';
 
 /**
@@ -11,7 +11,8 @@ import { alternativeKeys } from '../../api/query-keys';
 export const houseAlternativesQueryOptions = (houseId: number) =>
   queryOptions({
     queryKey: alternativeKeys.list(houseId),
-    queryFn: ({ signal }) => api.get<Alternative[]>(`/api/houses/${houseId}/alternatives`, { signal }),
+    queryFn: ({ signal }) =>
+      unwrap(client.GET('/api/houses/{houseId}/alternatives', { params: { path: { houseId } }, signal })),
     // each alternative is read against the house as it is now: ask again on every visit
     staleTime: 0,
   });
@@ -19,7 +20,10 @@ export const houseAlternativesQueryOptions = (houseId: number) =>
 export const sideBySideQueryOptions = (houseId: number, version: string, request: SideBySideRequest) =>
   queryOptions({
     queryKey: alternativeKeys.sideBySide(houseId, version, request),
-    queryFn: ({ signal }) => api.post<SideBySide>(`/api/houses/${houseId}/side-by-side`, request, { signal }),
+    queryFn: ({ signal }) =>
+      unwrap(
+        client.POST('/api/houses/{houseId}/side-by-side', { params: { path: { houseId } }, body: request, signal }),
+      ),
     // the farm's climate or prices may have changed elsewhere: recompute on every visit
     staleTime: 0,
   });

@@ -1,12 +1,11 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api, tokenStorage } from '../../api/client';
+import { client, tokenStorage, unwrap } from '../../api/client';
 import type {
   AuthResponse,
   ChangePasswordRequest,
   LoginRequest,
   PasswordResetRequest,
   RegisterRequest,
-  ServerMessage,
 } from '../../api/types';
 import { authKeys } from '../../api/query-keys';
 
@@ -23,7 +22,7 @@ export function useSignedIn() {
 export function useLogin() {
   const onSignedIn = useSignedIn();
   return useMutation({
-    mutationFn: (body: LoginRequest) => api.post<AuthResponse>('/api/auth/login', body),
+    mutationFn: (body: LoginRequest) => unwrap(client.POST('/api/auth/login', { body })),
     onSuccess: onSignedIn,
   });
 }
@@ -31,7 +30,7 @@ export function useLogin() {
 export function useRegister() {
   const onSignedIn = useSignedIn();
   return useMutation({
-    mutationFn: (body: RegisterRequest) => api.post<AuthResponse>('/api/auth/register', body),
+    mutationFn: (body: RegisterRequest) => unwrap(client.POST('/api/auth/register', { body })),
     onSuccess: onSignedIn,
   });
 }
@@ -41,7 +40,7 @@ export function useLogout() {
   return useMutation({
     mutationFn: async () => {
       try {
-        await api.post<void>('/api/auth/logout');
+        await unwrap(client.POST('/api/auth/logout'));
       } catch {
         // Signing out locally must work even when the server cannot be reached.
       }
@@ -57,7 +56,7 @@ export function useLogout() {
 export function useChangePassword() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (body: ChangePasswordRequest) => api.post<AuthResponse>('/api/auth/password', body),
+    mutationFn: (body: ChangePasswordRequest) => unwrap(client.POST('/api/auth/password', { body })),
     onSuccess: (response) => {
       tokenStorage.set(response.accessToken);
       queryClient.setQueryData(authKeys.me(), response.user);
@@ -67,14 +66,14 @@ export function useChangePassword() {
 
 export function useRequestPasswordReset() {
   return useMutation({
-    mutationFn: (email: string) => api.post<ServerMessage>('/api/auth/password-reset/request', { email }),
+    mutationFn: (email: string) => unwrap(client.POST('/api/auth/password-reset/request', { body: { email } })),
   });
 }
 
 export function useResetPassword() {
   const onSignedIn = useSignedIn();
   return useMutation({
-    mutationFn: (body: PasswordResetRequest) => api.post<AuthResponse>('/api/auth/password-reset', body),
+    mutationFn: (body: PasswordResetRequest) => unwrap(client.POST('/api/auth/password-reset', { body })),
     onSuccess: onSignedIn,
   });
 }

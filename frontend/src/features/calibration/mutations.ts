@@ -1,14 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api, postForm } from '../../api/client';
-import type {
-  Calibration,
-  FuelRecord,
-  FuelRecordColumnMapping,
-  FuelRecordCsvInspection,
-  FuelRecordInput,
-  FuelRecordsUploadResult,
-  FuelRecordUpdate,
-} from '../../api/types';
+import { client, ifMatch, multipartBody, unwrap } from '../../api/client';
+import type { FuelRecordColumnMapping, FuelRecordInput, FuelRecordUpdate } from '../../api/types';
 import { calibrationKeys, seasonKeys } from '../../api/query-keys';
 
 function fileForm(file: File, fields: Record<string, string> = {}): FormData {
@@ -21,7 +13,8 @@ function fileForm(file: File, fields: Record<string, string> = {}): FormData {
 export function useCreateFuelRecord(farmId: number) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (body: FuelRecordInput) => api.post<FuelRecord>(`/api/farms/${farmId}/fuel-records`, body),
+    mutationFn: (body: FuelRecordInput) =>
+      unwrap(client.POST('/api/farms/{farmId}/fuel-records', { params: { path: { farmId } }, body })),
     onSuccess: () => void queryClient.invalidateQueries({ queryKey: calibrationKeys.records(farmId) }),
   });
 }
@@ -30,7 +23,12 @@ export function useUpdateFuelRecord(farmId: number) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: ({ id, body, version }: { id: number; body: FuelRecordUpdate; version: number }) =>
-      api.patch<FuelRecord>(`/api/fuel-records/${id}`, body, { ifMatch: version }),
+      unwrap(
+        client.PATCH('/api/fuel-records/{recordId}', {
+          params: { path: { recordId: id }, header: ifMatch(version) },
+          body,
+        }),
+      ),
     onSuccess: () => void queryClient.invalidateQueries({ queryKey: calibrationKeys.records(farmId) }),
   });
 }
@@ -38,7 +36,8 @@ export function useUpdateFuelRecord(farmId: number) {
 export function useDeleteFuelRecord(farmId: number) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (id: number) => api.delete(`/api/fuel-records/${id}`),
+    mutationFn: (id: number) =>
+      unwrap(client.DELETE('/api/fuel-records/{recordId}', { params: { path: { recordId: id } } })),
     onSuccess: () => void queryClient.invalidateQueries({ queryKey: calibrationKeys.records(farmId) }),
   });
 }
@@ -46,7 +45,12 @@ export function useDeleteFuelRecord(farmId: number) {
 export function useInspectFuelCsv(farmId: number) {
   return useMutation({
     mutationFn: (file: File) =>
-      postForm<FuelRecordCsvInspection>(`/api/farms/${farmId}/fuel-records/inspect`, fileForm(file)),
+      unwrap(
+        client.POST('/api/farms/{farmId}/fuel-records/inspect', {
+          params: { path: { farmId } },
+          body: multipartBody(fileForm(file)),
+        }),
+      ),
   });
 }
 
@@ -54,9 +58,11 @@ export function useUploadFuelCsv(farmId: number) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: ({ file, mapping }: { file: File; mapping: FuelRecordColumnMapping }) =>
-      postForm<FuelRecordsUploadResult>(
-        `/api/farms/${farmId}/fuel-records/upload`,
-        fileForm(file, { mapping: JSON.stringify(mapping) }),
+      unwrap(
+        client.POST('/api/farms/{farmId}/fuel-records/upload', {
+          params: { path: { farmId } },
+          body: multipartBody(fileForm(file, { mapping: JSON.stringify(mapping) })),
+        }),
       ),
     onSuccess: () => void queryClient.invalidateQueries({ queryKey: calibrationKeys.records(farmId) }),
   });
@@ -66,7 +72,7 @@ export function useUploadFuelCsv(farmId: number) {
 export function useRunCalibration(farmId: number) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: () => api.post<Calibration>(`/api/farms/${farmId}/calibrations`),
+    mutationFn: () => unwrap(client.POST('/api/farms/{farmId}/calibrations', { params: { path: { farmId } } })),
     onSuccess: () => {
       void queryClient.invalidateQueries({ queryKey: calibrationKeys.calibrations(farmId) });
       void queryClient.invalidateQueries({ queryKey: seasonKeys.all });

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../api/client';
-import type { FarmClimate, SiteClimate } from '../../api/types';
+import { client, ifMatch, unwrap } from '../../api/client';
+import type { SiteClimate } from '../../api/types';
 import type { VersionedSave } from '../../components/save-conflict';
 import { climateKeys, estimateKeys, seasonKeys } from '../../api/query-keys';
 
@@ -8,7 +8,9 @@ export function usePutFarmClimate(farmId: number) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: ({ body, version }: VersionedSave<SiteClimate>) =>
-      api.put<FarmClimate>(`/api/farms/${farmId}/climate`, body, { ifMatch: version }),
+      unwrap(
+        client.PUT('/api/farms/{farmId}/climate', { params: { path: { farmId }, header: ifMatch(version) }, body }),
+      ),
     onSuccess: (saved) => {
       queryClient.setQueryData(climateKeys.farm(farmId), saved);
       // Season and estimate results read the farm climate: let them recompute.

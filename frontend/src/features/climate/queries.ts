@@ -1,10 +1,10 @@
 import { queryOptions } from '@tanstack/react-query';
-import { api } from '../../api/client';
-import type { FarmClimate } from '../../api/types';
+import { client, unwrap } from '../../api/client';
 import { climateKeys } from '../../api/query-keys';
 
 export const farmClimateQueryOptions = (farmId: number) =>
   queryOptions({
     queryKey: climateKeys.farm(farmId),
-    queryFn: ({ signal }) => api.get<FarmClimate>(`/api/farms/${farmId}/climate`, { signal }),
+    queryFn: ({ signal }) =>
+      unwrap(client.GET('/api/farms/{farmId}/climate', { params: { path: { farmId } }, signal })),
   });

@@ -1,22 +1,30 @@
 import { queryOptions } from '@tanstack/react-query';
-import { api } from '../../api/client';
-import type { ClimateProposal, LogClimateProposal, WeatherSource, WeatherYearStatus } from '../../api/types';
+import { client, unwrap } from '../../api/client';
 import { weatherKeys } from '../../api/query-keys';
 
 export const weatherSourceQueryOptions = (farmId: number) =>
   queryOptions({
     queryKey: weatherKeys.source(farmId),
-    queryFn: ({ signal }) => api.get<WeatherSource>(`/api/farms/${farmId}/weather`, { signal }),
+    queryFn: ({ signal }) =>
+      unwrap(client.GET('/api/farms/{farmId}/weather', { params: { path: { farmId } }, signal })),
     staleTime: Infinity,
   });
 
 /** One year of hourly history, fetched by the server (or already in its cache). */
 export const fetchWeatherYear = (farmId: number, year: number) =>
-  api.post<WeatherYearStatus>(`/api/farms/${farmId}/weather/years/${year}`);
+  unwrap(client.POST('/api/farms/{farmId}/weather/years/{year}', { params: { path: { farmId, year } } }));
 
 export const fetchClimateProposal = (farmId: number, fromYear: number, toYear: number) =>
-  api.get<ClimateProposal>(`/api/farms/${farmId}/weather/climate-proposal?fromYear=${fromYear}&toYear=${toYear}`);
+  unwrap(
+    client.GET('/api/farms/{farmId}/weather/climate-proposal', {
+      params: { path: { farmId }, query: { fromYear, toYear } },
+    }),
+  );
 
 /** Design values and monthly normals from a year or more of one of the farm's hourly logs. */
 export const fetchLogClimateProposal = (farmId: number, logId: number) =>
-  api.get<LogClimateProposal>(`/api/farms/${farmId}/temperature-logs/${logId}/climate-proposal`);
+  unwrap(
+    client.GET('/api/farms/{farmId}/temperature-logs/{logId}/climate-proposal', {
+      params: { path: { farmId, logId } },
+    }),
+  );

@@ -1,13 +1,6 @@
 import { queryOptions } from '@tanstack/react-query';
-import { api } from '../../api/client';
-import type {
-  CoolingConditions,
-  CoolingEstimate,
-  CoolingSite,
-  HouseCoolingEstimate,
-  HouseSpec,
-  PartialCoolingConditions,
-} from '../../api/types';
+import { client, unwrap } from '../../api/client';
+import type { CoolingConditions, CoolingSite, HouseSpec, PartialCoolingConditions } from '../../api/types';
 import { coolingEstimateKeys } from '../../api/query-keys';
 
 /**
@@ -27,7 +20,9 @@ export const storedCoolingEstimateQueryOptions = (
   queryOptions({
     queryKey: coolingEstimateKeys.stored(houseId, storedVersion, conditions),
     queryFn: ({ signal }) =>
-      api.post<HouseCoolingEstimate>(`/api/houses/${houseId}/cooling`, { conditions }, { signal }),
+      unwrap(
+        client.POST('/api/houses/{houseId}/cooling', { params: { path: { houseId } }, body: { conditions }, signal }),
+      ),
     placeholderData: (previous, previousQuery) => (sameHouse(houseId, previousQuery?.queryKey) ? previous : undefined),
     // The farm's climate may have changed on the farm page: ask again whenever the panel mounts.
     staleTime: 0,
@@ -42,6 +37,6 @@ export const editedCoolingEstimateQueryOptions = (
   queryOptions({
     queryKey: coolingEstimateKeys.edited(houseId, spec, site, conditions),
     queryFn: ({ signal }) =>
-      api.post<CoolingEstimate>('/api/estimates/cooling', { house: spec, site, conditions }, { signal }),
+      unwrap(client.POST('/api/estimates/cooling', { body: { house: spec, site, conditions }, signal })),
     placeholderData: (previous, previousQuery) => (sameHouse(houseId, previousQuery?.queryKey) ? previous : undefined),
   });

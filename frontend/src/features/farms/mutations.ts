@@ -1,13 +1,13 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../api/client';
-import type { Farm, FarmInput } from '../../api/types';
+import { client, ifMatch, unwrap } from '../../api/client';
+import type { FarmInput, FarmUpdate } from '../../api/types';
 import type { VersionedSave } from '../../components/save-conflict';
 import { farmKeys } from '../../api/query-keys';
 
 export function useCreateFarm() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (body: FarmInput) => api.post<Farm>('/api/farms', body),
+    mutationFn: (body: FarmInput) => unwrap(client.POST('/api/farms', { body })),
     onSuccess: (farm) => {
       queryClient.setQueryData(farmKeys.detail(farm.id), farm);
       void queryClient.invalidateQueries({ queryKey: farmKeys.lists() });
@@ -18,8 +18,8 @@ export function useCreateFarm() {
 export function useUpdateFarm(farmId: number) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: ({ body, version }: VersionedSave<Partial<FarmInput>>) =>
-      api.patch<Farm>(`/api/farms/${farmId}`, body, { ifMatch: version }),
+    mutationFn: ({ body, version }: VersionedSave<FarmUpdate>) =>
+      unwrap(client.PATCH('/api/farms/{farmId}', { params: { path: { farmId }, header: ifMatch(version) }, body })),
     onSuccess: (farm) => {
       queryClient.setQueryData(farmKeys.detail(farm.id), farm);
       void queryClient.invalidateQueries({ queryKey: farmKeys.lists() });
@@ -30,7 +30,7 @@ export function useUpdateFarm(farmId: number) {
 export function useDeleteFarm() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (farmId: number) => api.delete(`/api/farms/${farmId}`),
+    mutationFn: (farmId: number) => unwrap(client.DELETE('/api/farms/{farmId}', { params: { path: { farmId } } })),
     onSuccess: (_result, farmId) => {
       queryClient.removeQueries({ queryKey: farmKeys.detail(farmId) });
       void queryClient.invalidateQueries({ queryKey: farmKeys.lists() });

@@ -1,16 +1,15 @@
 import { queryOptions } from '@tanstack/react-query';
-import { api } from '../../api/client';
-import type { Farm } from '../../api/types';
+import { client, unwrap } from '../../api/client';
 import { farmKeys } from '../../api/query-keys';
 
 export const farmsListQueryOptions = () =>
   queryOptions({
     queryKey: farmKeys.lists(),
-    queryFn: ({ signal }) => api.get<Farm[]>('/api/farms', { signal }),
+    queryFn: ({ signal }) => unwrap(client.GET('/api/farms', { signal })),
   });
 
 export const farmDetailQueryOptions = (farmId: number) =>
   queryOptions({
     queryKey: farmKeys.detail(farmId),
-    queryFn: ({ signal }) => api.get<Farm>(`/api/farms/${farmId}`, { signal }),
+    queryFn: ({ signal }) => unwrap(client.GET('/api/farms/{farmId}', { params: { path: { farmId } }, signal })),
   });

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../api/client';
-import type { FarmFuelPrices, FuelPricesInput } from '../../api/types';
+import { client, ifMatch, unwrap } from '../../api/client';
+import type { FuelPricesInput } from '../../api/types';
 import type { VersionedSave } from '../../components/save-conflict';
 import { fuelPriceKeys, seasonKeys } from '../../api/query-keys';
 
@@ -10,7 +10,9 @@ export function usePutFuelPrices(farmId: number) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: ({ body, version }: VersionedSave<FuelPricesInput>) =>
-      api.put<FarmFuelPrices>(`/api/farms/${farmId}/fuel-prices`, body, { ifMatch: version }),
+      unwrap(
+        client.PUT('/api/farms/{farmId}/fuel-prices', { params: { path: { farmId }, header: ifMatch(version) }, body }),
+      ),
     onSuccess: (saved) => {
       queryClient.setQueryData(fuelPriceKeys.farm(farmId), saved);
       void queryClient.invalidateQueries({ queryKey: seasonKeys.all });

@@ -1,10 +1,10 @@
 import { queryOptions } from '@tanstack/react-query';
-import { api } from '../../api/client';
-import type { FarmFuelPrices } from '../../api/types';
+import { client, unwrap } from '../../api/client';
 import { fuelPriceKeys } from '../../api/query-keys';
 
 export const farmFuelPricesQueryOptions = (farmId: number) =>
   queryOptions({
     queryKey: fuelPriceKeys.farm(farmId),
-    queryFn: ({ signal }) => api.get<FarmFuelPrices>(`/api/farms/${farmId}/fuel-prices`, { signal }),
+    queryFn: ({ signal }) =>
+      unwrap(client.GET('/api/farms/{farmId}/fuel-prices', { params: { path: { farmId } }, signal })),
   });

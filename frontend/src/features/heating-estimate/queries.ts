@@ -1,12 +1,6 @@
 import { queryOptions } from '@tanstack/react-query';
-import { api } from '../../api/client';
-import type {
-  HeatingConditions,
-  HeatingEstimate,
-  HouseHeatingEstimate,
-  HouseSpec,
-  PartialHeatingConditions,
-} from '../../api/types';
+import { client, unwrap } from '../../api/client';
+import type { HeatingConditions, HouseHeatingEstimate, HouseSpec, PartialHeatingConditions } from '../../api/types';
 import { heatingEstimateKeys } from '../../api/query-keys';
 
 /**
@@ -27,7 +21,9 @@ export const storedHeatingEstimateQueryOptions = (
   queryOptions({
     queryKey: heatingEstimateKeys.stored(houseId, storedVersion, conditions),
     queryFn: ({ signal }) =>
-      api.post<HouseHeatingEstimate>(`/api/houses/${houseId}/estimate`, { conditions }, { signal }),
+      unwrap(
+        client.POST('/api/houses/{houseId}/estimate', { params: { path: { houseId } }, body: { conditions }, signal }),
+      ),
     placeholderData: (previous, previousQuery) => (sameHouse(houseId, previousQuery?.queryKey) ? previous : undefined),
     // The farm's climate may have changed on the farm page: ask again whenever the panel mounts.
     staleTime: 0,
@@ -36,7 +32,7 @@ export const storedHeatingEstimateQueryOptions = (
 export const editedHeatingEstimateQueryOptions = (houseId: number, spec: HouseSpec, conditions: HeatingConditions) =>
   queryOptions({
     queryKey: heatingEstimateKeys.edited(houseId, spec, conditions),
-    queryFn: ({ signal }) => api.post<HeatingEstimate>('/api/estimates', { house: spec, conditions }, { signal }),
+    queryFn: ({ signal }) => unwrap(client.POST('/api/estimates', { body: { house: spec, conditions }, signal })),
     placeholderData: (previous, previousQuery) => (sameHouse(houseId, previousQuery?.queryKey) ? previous : undefined),
   });
 

@@ -1,13 +1,14 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../api/client';
-import type { House, HouseInput } from '../../api/types';
+import { client, ifMatch, unwrap } from '../../api/client';
+import type { House, HouseInput, HouseUpdate } from '../../api/types';
 import type { VersionedSave } from '../../components/save-conflict';
 import { houseKeys } from '../../api/query-keys';
 
 export function useCreateHouse(farmId: number) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (body: HouseInput) => api.post<House>(`/api/farms/${farmId}/houses`, body),
+    mutationFn: (body: HouseInput) =>
+      unwrap(client.POST('/api/farms/{farmId}/houses', { params: { path: { farmId } }, body })),
     onSuccess: (house) => {
       queryClient.setQueryData(houseKeys.detail(house.id), house);
       void queryClient.invalidateQueries({ queryKey: houseKeys.list(farmId) });
@@ -18,8 +19,8 @@ export function useCreateHouse(farmId: number) {
 export function useUpdateHouse(houseId: number) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: ({ body, version }: VersionedSave<Partial<HouseInput>>) =>
-      api.patch<House>(`/api/houses/${houseId}`, body, { ifMatch: version }),
+    mutationFn: ({ body, version }: VersionedSave<HouseUpdate>) =>
+      unwrap(client.PATCH('/api/houses/{houseId}', { params: { path: { houseId }, header: ifMatch(version) }, body })),
     onSuccess: (house) => {
       queryClient.setQueryData(houseKeys.detail(house.id), house);
       void queryClient.invalidateQueries({ queryKey: houseKeys.list(house.farmId) });
@@ -30,7 +31,8 @@ export function useUpdateHouse(houseId: number) {
 export function useDeleteHouse() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (house: Pick<House, 'id' | 'farmId'>) => api.delete(`/api/houses/${house.id}`),
+    mutationFn: (house: Pick<House, 'id' | 'farmId'>) =>
+      unwrap(client.DELETE('/api/houses/{houseId}', { params: { path: { houseId: house.id } } })),
     onSuccess: (_result, house) => {
       queryClient.removeQueries({ queryKey: houseKeys.detail(house.id) });
       void queryClient.invalidateQueries({ queryKey: houseKeys.list(house.farmId) });
@@ -42,7 +44,8 @@ export function useDeleteHouse() {
 export function useDuplicateHouse(houseId: number) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (body: { name?: string }) => api.post<House>(`/api/houses/${houseId}/duplicate`, body),
+    mutationFn: (body: { name?: string }) =>
+      unwrap(client.POST('/api/houses/{houseId}/duplicate', { params: { path: { houseId } }, body })),
     onSuccess: (house) => {
       queryClient.setQueryData(houseKeys.detail(house.id), house);
       void queryClient.invalidateQueries({ queryKey: houseKeys.list(house.farmId) });

@@ -1,16 +1,15 @@
 import { queryOptions } from '@tanstack/react-query';
-import { api } from '../../api/client';
-import type { House } from '../../api/types';
+import { client, unwrap } from '../../api/client';
 import { houseKeys } from '../../api/query-keys';
 
 export const farmHousesQueryOptions = (farmId: number) =>
   queryOptions({
     queryKey: houseKeys.list(farmId),
-    queryFn: ({ signal }) => api.get<House[]>(`/api/farms/${farmId}/houses`, { signal }),
+    queryFn: ({ signal }) => unwrap(client.GET('/api/farms/{farmId}/houses', { params: { path: { farmId } }, signal })),
   });
 
 export const houseDetailQueryOptions = (houseId: number) =>
   queryOptions({
     queryKey: houseKeys.detail(houseId),
-    queryFn: ({ signal }) => api.get<House>(`/api/houses/${houseId}`, { signal }),
+    queryFn: ({ signal }) => unwrap(client.GET('/api/houses/{houseId}', { params: { path: { houseId } }, signal })),
   });

@@ -1,19 +1,25 @@
 import { queryOptions } from '@tanstack/react-query';
-import { api } from '../../api/client';
-import type { Outbox, ReceivedMail } from '../../api/types';
+import { client, downloadFile, unwrap } from '../../api/client';
 import { mailKeys } from '../../api/query-keys';
 
 export const outboxQueryOptions = () =>
   queryOptions({
     queryKey: mailKeys.outbox(),
-    queryFn: ({ signal }) => api.get<Outbox>('/api/mail/outbox', { signal }),
+    queryFn: ({ signal }) => unwrap(client.GET('/api/mail/outbox', { signal })),
   });
 
 export const inboxQueryOptions = () =>
   queryOptions({
     queryKey: mailKeys.inbox(),
-    queryFn: ({ signal }) => api.get<ReceivedMail[]>('/api/mail/inbox', { signal }),
+    queryFn: ({ signal }) => unwrap(client.GET('/api/mail/inbox', { signal })),
   });
 
-export const attachmentPath = (mailId: number, attachmentId: number) =>
-  `/api/mail/messages/${mailId}/attachments/${attachmentId}`;
+/** An attachment as a file, through the client (token, errors as ApiError). */
+export const downloadAttachment = (mailId: number, attachmentId: number, fallbackFileName: string) =>
+  downloadFile(
+    client.GET('/api/mail/messages/{mailId}/attachments/{attachmentId}', {
+      params: { path: { mailId, attachmentId } },
+      parseAs: 'blob',
+    }),
+    fallbackFileName,
+  );

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../api/client';
-import type { CreateInvitationRequest, FarmMember, FarmRole, InvitationSent } from '../../api/types';
+import { client, unwrap } from '../../api/client';
+import type { CreateInvitationRequest, FarmRole } from '../../api/types';
 import { farmKeys, memberKeys } from '../../api/query-keys';
 
 function useRefreshMembers(farmId: number) {
@@ -15,7 +15,8 @@ function useRefreshMembers(farmId: number) {
 export function useInvite(farmId: number) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (body: CreateInvitationRequest) => api.post<InvitationSent>(`/api/farms/${farmId}/invitations`, body),
+    mutationFn: (body: CreateInvitationRequest) =>
+      unwrap(client.POST('/api/farms/{farmId}/invitations', { params: { path: { farmId } }, body })),
     onSuccess: () => void queryClient.invalidateQueries({ queryKey: memberKeys.invitations(farmId) }),
   });
 }
@@ -24,7 +25,11 @@ export function useResendInvitation(farmId: number) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (invitationId: number) =>
-      api.post<InvitationSent>(`/api/farms/${farmId}/invitations/${invitationId}/resend`),
+      unwrap(
+        client.POST('/api/farms/{farmId}/invitations/{invitationId}/resend', {
+          params: { path: { farmId, invitationId } },
+        }),
+      ),
     onSuccess: () => void queryClient.invalidateQueries({ queryKey: memberKeys.invitations(farmId) }),
   });
 }
@@ -32,7 +37,10 @@ export function useResendInvitation(farmId: number) {
 export function useRevokeInvitation(farmId: number) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (invitationId: number) => api.delete(`/api/farms/${farmId}/invitations/${invitationId}`),
+    mutationFn: (invitationId: number) =>
+      unwrap(
+        client.DELETE('/api/farms/{farmId}/invitations/{invitationId}', { params: { path: { farmId, invitationId } } }),
+      ),
     onSuccess: () => void queryClient.invalidateQueries({ queryKey: memberKeys.invitations(farmId) }),
   });
 }
@@ -41,7 +49,9 @@ export function useChangeMemberRole(farmId: number) {
   const refresh = useRefreshMembers(farmId);
   return useMutation({
     mutationFn: ({ userId, role }: { userId: number; role: FarmRole }) =>
-      api.patch<FarmMember>(`/api/farms/${farmId}/members/${userId}`, { role }),
+      unwrap(
+        client.PATCH('/api/farms/{farmId}/members/{userId}', { params: { path: { farmId, userId } }, body: { role } }),
+      ),
     onSuccess: refresh,
   });
 }
@@ -49,7 +59,8 @@ export function useChangeMemberRole(farmId: number) {
 export function useRemoveMember(farmId: number) {
   const refresh = useRefreshMembers(farmId);
   return useMutation({
-    mutationFn: (userId: number) => api.delete(`/api/farms/${farmId}/members/${userId}`),
+    mutationFn: (userId: number) =>
+      unwrap(client.DELETE('/api/farms/{farmId}/members/{userId}', { params: { path: { farmId, userId } } })),
     onSuccess: refresh,
   });
 }

@@ -1,16 +1,17 @@
 import { queryOptions } from '@tanstack/react-query';
-import { api } from '../../api/client';
-import type { FarmMember, Invitation } from '../../api/types';
+import { client, unwrap } from '../../api/client';
 import { memberKeys } from '../../api/query-keys';
 
 export const farmMembersQueryOptions = (farmId: number) =>
   queryOptions({
     queryKey: memberKeys.farm(farmId),
-    queryFn: ({ signal }) => api.get<FarmMember[]>(`/api/farms/${farmId}/members`, { signal }),
+    queryFn: ({ signal }) =>
+      unwrap(client.GET('/api/farms/{farmId}/members', { params: { path: { farmId } }, signal })),
   });
 
 export const pendingInvitationsQueryOptions = (farmId: number) =>
   queryOptions({
     queryKey: memberKeys.invitations(farmId),
-    queryFn: ({ signal }) => api.get<Invitation[]>(`/api/farms/${farmId}/invitations`, { signal }),
+    queryFn: ({ signal }) =>
+      unwrap(client.GET('/api/farms/{farmId}/invitations', { params: { path: { farmId } }, signal })),
   });

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../api/client';
-import type { CreateReportRequest, Report, ReportSent, SendReportRequest, UpdateReportRequest } from '../../api/types';
+import { client, unwrap } from '../../api/client';
+import type { CreateReportRequest, SendReportRequest, UpdateReportRequest } from '../../api/types';
 import { reportKeys } from '../../api/query-keys';
 
 function useRefreshReports() {
@@ -11,7 +11,8 @@ function useRefreshReports() {
 export function useCreateReport(houseId: number) {
   const refresh = useRefreshReports();
   return useMutation({
-    mutationFn: (body: CreateReportRequest) => api.post<Report>(`/api/houses/${houseId}/reports`, body),
+    mutationFn: (body: CreateReportRequest) =>
+      unwrap(client.POST('/api/houses/{houseId}/reports', { params: { path: { houseId } }, body })),
     onSuccess: refresh,
   });
 }
@@ -19,7 +20,8 @@ export function useCreateReport(houseId: number) {
 export function useUpdateReport(reportId: number) {
   const refresh = useRefreshReports();
   return useMutation({
-    mutationFn: (body: UpdateReportRequest) => api.patch<Report>(`/api/reports/${reportId}`, body),
+    mutationFn: (body: UpdateReportRequest) =>
+      unwrap(client.PATCH('/api/reports/{reportId}', { params: { path: { reportId } }, body })),
     onSuccess: refresh,
   });
 }
@@ -27,7 +29,7 @@ export function useUpdateReport(reportId: number) {
 export function useIssueReport(reportId: number) {
   const refresh = useRefreshReports();
   return useMutation({
-    mutationFn: () => api.post<Report>(`/api/reports/${reportId}/issue`),
+    mutationFn: () => unwrap(client.POST('/api/reports/{reportId}/issue', { params: { path: { reportId } } })),
     onSuccess: refresh,
   });
 }
@@ -35,13 +37,14 @@ export function useIssueReport(reportId: number) {
 export function useReviseReport(reportId: number) {
   const refresh = useRefreshReports();
   return useMutation({
-    mutationFn: () => api.post<Report>(`/api/reports/${reportId}/revisions`),
+    mutationFn: () => unwrap(client.POST('/api/reports/{reportId}/revisions', { params: { path: { reportId } } })),
     onSuccess: refresh,
   });
 }
 
 export function useSendReport(reportId: number) {
   return useMutation({
-    mutationFn: (body: SendReportRequest) => api.post<ReportSent>(`/api/reports/${reportId}/send`, body),
+    mutationFn: (body: SendReportRequest) =>
+      unwrap(client.POST('/api/reports/{reportId}/send', { params: { path: { reportId } }, body })),
   });
 }

@@ -1,30 +1,37 @@
 import { queryOptions } from '@tanstack/react-query';
-import { api } from '../../api/client';
-import type { ClientFarm, Report, ReportSummary, UnitSystem } from '../../api/types';
+import { client, downloadFile, unwrap } from '../../api/client';
+import type { UnitSystem } from '../../api/types';
 import { reportKeys } from '../../api/query-keys';
 
 export const houseReportsQueryOptions = (houseId: number) =>
   queryOptions({
     queryKey: reportKeys.house(houseId),
-    queryFn: ({ signal }) => api.get<ReportSummary[]>(`/api/houses/${houseId}/reports`, { signal }),
+    queryFn: ({ signal }) =>
+      unwrap(client.GET('/api/houses/{houseId}/reports', { params: { path: { houseId } }, signal })),
   });
 
 export const farmReportsQueryOptions = (farmId: number) =>
   queryOptions({
     queryKey: reportKeys.farm(farmId),
-    queryFn: ({ signal }) => api.get<ReportSummary[]>(`/api/farms/${farmId}/reports`, { signal }),
+    queryFn: ({ signal }) =>
+      unwrap(client.GET('/api/farms/{farmId}/reports', { params: { path: { farmId } }, signal })),
   });
 
 export const reportQueryOptions = (reportId: number, unitSystem: UnitSystem | undefined) =>
   queryOptions({
     queryKey: reportKeys.detail(reportId, unitSystem),
-    queryFn: ({ signal }) => api.get<Report>(`/api/reports/${reportId}`, { signal }),
+    queryFn: ({ signal }) => unwrap(client.GET('/api/reports/{reportId}', { params: { path: { reportId } }, signal })),
   });
 
 export const clientFarmsQueryOptions = () =>
   queryOptions({
     queryKey: reportKeys.advising(),
-    queryFn: ({ signal }) => api.get<ClientFarm[]>('/api/advising', { signal }),
+    queryFn: ({ signal }) => unwrap(client.GET('/api/advising', { signal })),
   });
 
-export const reportPdfPath = (reportId: number) => `/api/reports/${reportId}.pdf`;
+/** The report's PDF as a file, through the client (token, errors as ApiError). */
+export const downloadReportPdf = (reportId: number) =>
+  downloadFile(
+    client.GET('/api/reports/{reportId}.pdf', { params: { path: { reportId } }, parseAs: 'blob' }),
+    `report-${reportId}.pdf`,
+  );

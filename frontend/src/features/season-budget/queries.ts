@@ -1,6 +1,6 @@
 import { queryOptions } from '@tanstack/react-query';
-import { api } from '../../api/client';
-import type { SeasonBudget, SeasonBudgetRequest } from '../../api/types';
+import { client, downloadFile, unwrap } from '../../api/client';
+import type { HeatLossBasis, SeasonBudgetRequest, UnitSystem } from '../../api/types';
 import { seasonBudgetKeys } from '../../api/query-keys';
 
 /** Under 'season' so that a change of prices, climate or calendar refreshes every season result. */
@@ -9,6 +9,23 @@ import { seasonBudgetKeys } from '../../api/query-keys';
 export const seasonBudgetQueryOptions = (farmId: number, request: SeasonBudgetRequest = {}) =>
   queryOptions({
     queryKey: seasonBudgetKeys.farm(farmId, request),
-    queryFn: ({ signal }) => api.post<SeasonBudget>(`/api/farms/${farmId}/season-budget`, request, { signal }),
+    queryFn: ({ signal }) =>
+      unwrap(client.POST('/api/farms/{farmId}/season-budget', { params: { path: { farmId } }, body: request, signal })),
     staleTime: 0, // the house, climate, prices or calendar may change elsewhere; a rerun is quick
   });
+
+/**
+ * The budget as CSV in the reader's units, through the client (token, errors as ApiError); on the
+ * calibrated heat loss when the page shows that basis.
+ */
+export const downloadSeasonBudgetCsv = (farmId: number, units: UnitSystem, heatLossBasis?: HeatLossBasis) =>
+  downloadFile(
+    client.GET('/api/farms/{farmId}/season-budget.csv', {
+      params: {
+        path: { farmId },
+        query: heatLossBasis === 'calibrated' ? { units, heatLossBasis } : { units },
+      },
+      parseAs: 'blob',
+    }),
+    `season-budget-farm-${farmId}-${units}.csv`,
+  );

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../api/client';
-import type { Measure, MeasurePlan, ProductionCalendar, ProductionCalendarInput } from '../../api/types';
+import { client, ifMatch, unwrap } from '../../api/client';
+import type { Measure, ProductionCalendarInput } from '../../api/types';
 import type { VersionedSave } from '../../components/save-conflict';
 import { measurePlanKeys, seasonKeys } from '../../api/query-keys';
 
@@ -8,7 +8,9 @@ export function usePutProductionCalendar(houseId: number) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: ({ body, version }: VersionedSave<ProductionCalendarInput>) =>
-      api.put<ProductionCalendar>(`/api/houses/${houseId}/calendar`, body, { ifMatch: version }),
+      unwrap(
+        client.PUT('/api/houses/{houseId}/calendar', { params: { path: { houseId }, header: ifMatch(version) }, body }),
+      ),
     onSuccess: (saved) => {
       queryClient.setQueryData(seasonKeys.calendar(houseId), saved);
       // The house's season and the farm's budget depend on the calendar.
@@ -25,7 +27,12 @@ export function usePutMeasurePlan(houseId: number) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: ({ body, version }: VersionedSave<{ measures: Measure[] }>) =>
-      api.put<MeasurePlan>(`/api/houses/${houseId}/measure-plan`, body, { ifMatch: version }),
+      unwrap(
+        client.PUT('/api/houses/{houseId}/measure-plan', {
+          params: { path: { houseId }, header: ifMatch(version) },
+          body,
+        }),
+      ),
     onSuccess: (saved) => queryClient.setQueryData(measurePlanKeys.house(houseId), saved),
   });
 }

@@ -1,15 +1,6 @@
 import { queryOptions } from '@tanstack/react-query';
-import { api } from '../../api/client';
-import type {
-  MeasureComparison,
-  MeasurePlan,
-  MeasuresRequest,
-  HouseNightDemand,
-  HouseSeasonEstimate,
-  NightDemandRequest,
-  ProductionCalendar,
-  SeasonRequest,
-} from '../../api/types';
+import { client, unwrap } from '../../api/client';
+import type { MeasuresRequest, NightDemandRequest, SeasonRequest } from '../../api/types';
 import { measurePlanKeys, seasonKeys } from '../../api/query-keys';
 
 /**
@@ -20,28 +11,34 @@ import { measurePlanKeys, seasonKeys } from '../../api/query-keys';
 export const houseSeasonQueryOptions = (houseId: number, request: SeasonRequest) =>
   queryOptions({
     queryKey: seasonKeys.estimate(houseId, request),
-    queryFn: ({ signal }) => api.post<HouseSeasonEstimate>(`/api/houses/${houseId}/season`, request, { signal }),
+    queryFn: ({ signal }) =>
+      unwrap(client.POST('/api/houses/{houseId}/season', { params: { path: { houseId } }, body: request, signal })),
     staleTime: 0, // the house, climate, prices or calendar may change elsewhere; a rerun is quick
   });
 
 export const nightDemandQueryOptions = (houseId: number, request: NightDemandRequest) =>
   queryOptions({
     queryKey: seasonKeys.night(houseId, request),
-    queryFn: ({ signal }) => api.post<HouseNightDemand>(`/api/houses/${houseId}/night-demand`, request, { signal }),
+    queryFn: ({ signal }) =>
+      unwrap(
+        client.POST('/api/houses/{houseId}/night-demand', { params: { path: { houseId } }, body: request, signal }),
+      ),
     staleTime: 0, // the house, climate, prices or calendar may change elsewhere; a rerun is quick
   });
 
 export const productionCalendarQueryOptions = (houseId: number) =>
   queryOptions({
     queryKey: seasonKeys.calendar(houseId),
-    queryFn: ({ signal }) => api.get<ProductionCalendar>(`/api/houses/${houseId}/calendar`, { signal }),
+    queryFn: ({ signal }) =>
+      unwrap(client.GET('/api/houses/{houseId}/calendar', { params: { path: { houseId } }, signal })),
   });
 
 /** Each measure re-runs the season, so the comparison is cached per list of measures and costs. */
 export const measuresQueryOptions = (houseId: number, request: MeasuresRequest) =>
   queryOptions({
     queryKey: seasonKeys.measures(houseId, request),
-    queryFn: ({ signal }) => api.post<MeasureComparison>(`/api/houses/${houseId}/measures`, request, { signal }),
+    queryFn: ({ signal }) =>
+      unwrap(client.POST('/api/houses/{houseId}/measures', { params: { path: { houseId } }, body: request, signal })),
     staleTime: 0, // the house, climate, prices or calendar may change elsewhere; a rerun is quick
   });
 
@@ -49,5 +46,6 @@ export const measuresQueryOptions = (houseId: number, request: MeasuresRequest) 
 export const measurePlanQueryOptions = (houseId: number) =>
   queryOptions({
     queryKey: measurePlanKeys.house(houseId),
-    queryFn: ({ signal }) => api.get<MeasurePlan>(`/api/houses/${houseId}/measure-plan`, { signal }),
+    queryFn: ({ signal }) =>
+      unwrap(client.GET('/api/houses/{houseId}/measure-plan', { params: { path: { houseId } }, signal })),
   });

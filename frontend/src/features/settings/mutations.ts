@@ -1,5 +1,5 @@
 import { useMutation } from '@tanstack/react-query';
-import { api } from '../../api/client';
+import { client, unwrap } from '../../api/client';
 import type { UpdateMeRequest, User } from '../../api/types';
 
 /**
@@ -8,7 +8,7 @@ import type { UpdateMeRequest, User } from '../../api/types';
  */
 export function useUpdateMe(options: { onSuccess?: (user: User) => void } = {}) {
   return useMutation({
-    mutationFn: (body: UpdateMeRequest) => api.patch<User>('/api/users/me', body),
+    mutationFn: (body: UpdateMeRequest) => unwrap(client.PATCH('/api/users/me', { body })),
     onSuccess: (user) => options.onSuccess?.(user),
   });
 }

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api, postForm, uploadWithProgress, type UploadProgress } from '../../api/client';
-import type { TemperatureColumnMapping, TemperatureCsvInspection, TemperatureLog } from '../../api/types';
+import { client, multipartBody, unwrap, uploadWithProgress, type UploadProgress } from '../../api/client';
+import type { TemperatureColumnMapping, TemperatureLog } from '../../api/types';
 import { temperatureLogKeys } from '../../api/query-keys';
 
 function fileForm(file: File, fields: Record<string, string> = {}): FormData {
@@ -15,7 +15,12 @@ function fileForm(file: File, fields: Record<string, string> = {}): FormData {
 export function useInspectTemperatureCsv(farmId: number) {
   return useMutation({
     mutationFn: (file: File) =>
-      postForm<TemperatureCsvInspection>(`/api/farms/${farmId}/temperature-logs/inspect`, fileForm(file)),
+      unwrap(
+        client.POST('/api/farms/{farmId}/temperature-logs/inspect', {
+          params: { path: { farmId } },
+          body: multipartBody(fileForm(file)),
+        }),
+      ),
   });
 }
 
@@ -43,7 +48,8 @@ export function useUploadTemperatureLog(farmId: number) {
 export function useDeleteTemperatureLog(farmId: number) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (logId: number) => api.delete(`/api/temperature-logs/${logId}`),
+    mutationFn: (logId: number) =>
+      unwrap(client.DELETE('/api/temperature-logs/{logId}', { params: { path: { logId } } })),
     onSuccess: (_result, logId) => {
       queryClient.removeQueries({ queryKey: temperatureLogKeys.detail(logId) });
       void queryClient.invalidateQueries({ queryKey: temperatureLogKeys.farm(farmId) });
@@ -56,7 +62,9 @@ export function useKeepWeatherYearAsLog(farmId: number) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (year: number) =>
-      api.post<TemperatureLog>(`/api/farms/${farmId}/weather/years/${year}/temperature-log`),
+      unwrap(
+        client.POST('/api/farms/{farmId}/weather/years/{year}/temperature-log', { params: { path: { farmId, year } } }),
+      ),
     onSuccess: () => void queryClient.invalidateQueries({ queryKey: temperatureLogKeys.farm(farmId) }),
   });
 }

@@ -1,16 +1,17 @@
 import { queryOptions } from '@tanstack/react-query';
-import { api } from '../../api/client';
-import type { TemperatureLog, TemperatureLogDetail } from '../../api/types';
+import { client, unwrap } from '../../api/client';
 import { temperatureLogKeys } from '../../api/query-keys';
 
 export const farmTemperatureLogsQueryOptions = (farmId: number) =>
   queryOptions({
     queryKey: temperatureLogKeys.farm(farmId),
-    queryFn: ({ signal }) => api.get<TemperatureLog[]>(`/api/farms/${farmId}/temperature-logs`, { signal }),
+    queryFn: ({ signal }) =>
+      unwrap(client.GET('/api/farms/{farmId}/temperature-logs', { params: { path: { farmId } }, signal })),
   });
 
 export const temperatureLogDetailQueryOptions = (logId: number) =>
   queryOptions({
     queryKey: temperatureLogKeys.detail(logId),
-    queryFn: ({ signal }) => api.get<TemperatureLogDetail>(`/api/temperature-logs/${logId}`, { signal }),
+    queryFn: ({ signal }) =>
+      unwrap(client.GET('/api/temperature-logs/{logId}', { params: { path: { logId } }, signal })),
   });

@@ -1,10 +1,9 @@
 import { queryOptions } from '@tanstack/react-query';
-import { api } from '../../api/client';
-import type { User } from '../../api/types';
+import { client, unwrap } from '../../api/client';
 import { userKeys } from '../../api/query-keys';
 
 export const usersListQueryOptions = () =>
   queryOptions({
     queryKey: userKeys.lists(),
-    queryFn: ({ signal }) => api.get<User[]>('/api/users', { signal }),
+    queryFn: ({ signal }) => unwrap(client.GET('/api/users', { signal })),
   });

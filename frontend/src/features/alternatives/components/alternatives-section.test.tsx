@@ -3,6 +3,7 @@ import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import type { AdoptAlternativeResult, Alternative } from '../../../api/types';
 import { demoHouseB } from '../../../test/estimate-fixtures';
+import { requestPath } from '../../../test/fake-api';
 import { renderWithProviders } from '../../../test/render-with-providers';
 import { AlternativesSection } from './alternatives-section';
 
@@ -49,8 +50,9 @@ function stubApi(initial: Alternative[]) {
   const adopted: AdoptAlternativeResult = { house: { ...demoHouseB, version: 2 }, previous: doublePoly };
   vi.stubGlobal(
     'fetch',
-    vi.fn(async (url: string, init: RequestInit) => {
-      const method = init.method ?? 'GET';
+    vi.fn(async (request: Request) => {
+      const { method } = request;
+      const url = requestPath(request);
       calls.push({ method, url });
       const json = (body: unknown) =>
         new Response(JSON.stringify(body), { status: 200, headers: { 'Content-Type': 'application/json' } });

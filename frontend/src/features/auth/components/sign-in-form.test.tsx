@@ -2,6 +2,7 @@ import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { render, screen, waitFor } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
+import { requestPath } from '../../../test/fake-api';
 import { SignInForm } from './sign-in-form';
 
 function renderSignIn() {
@@ -23,7 +24,8 @@ afterEach(() => vi.unstubAllGlobals());
 
 describe('SignInForm', () => {
   it('lists the demo accounts from the API and fills the form from one', async () => {
-    const fetchMock = vi.fn(async (url: string) => {
+    const fetchMock = vi.fn(async (request: Request) => {
+      const url = requestPath(request);
       if (url === '/api/auth/demo-accounts') {
         return json({
           enabled: true,
@@ -51,7 +53,8 @@ describe('SignInForm', () => {
   });
 
   it('shows no demo section when demo accounts are disabled, and signs in', async () => {
-    vi.stubGlobal('fetch', async (url: string) => {
+    vi.stubGlobal('fetch', async (request: Request) => {
+      const url = requestPath(request);
       if (url === '/api/auth/demo-accounts') return json({ enabled: false, password: null, accounts: [] });
       if (url === '/api/auth/login') {
         return json({

@@ -2,6 +2,7 @@ import { screen, waitFor } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import type { LogClimateProposal, SiteClimate } from '../../../api/types';
+import { requestPath } from '../../../test/fake-api';
 import { renderWithProviders } from '../../../test/render-with-providers';
 import { proposalMonthly } from '../../../test/weather-fixtures';
 import { LogClimateDialog } from './log-climate-dialog';
@@ -70,7 +71,7 @@ describe('LogClimateDialog', () => {
   });
 
   it('shows the proposal beside the current values and, for a farm with no climate, asks for the wet bulb before saving', async () => {
-    const fetchMock = vi.fn(async (_url: string) => json(LOG_PROPOSAL));
+    const fetchMock = vi.fn(async (_request: Request) => json(LOG_PROPOSAL));
     vi.stubGlobal('fetch', fetchMock);
     const saved: SiteClimate[] = [];
     renderWithProviders(
@@ -88,7 +89,7 @@ describe('LogClimateDialog', () => {
     const user = userEvent.setup();
     await user.click(screen.getByRole('button', { name: 'Work out the climate' }));
     await screen.findByTestId('log-climate-proposal');
-    expect(fetchMock.mock.calls[0]![0]).toBe('/api/farms/3/temperature-logs/8/climate-proposal');
+    expect(requestPath(fetchMock.mock.calls[0]![0])).toBe('/api/farms/3/temperature-logs/8/climate-proposal');
     expect(screen.getByText('From the log')).toBeTruthy();
     const save = screen.getByRole('button', { name: 'Save these values' });
     expect(save).toHaveProperty('disabled', true);

@@ -2,6 +2,7 @@ import { screen, waitFor } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import type { SiteClimate } from '../../../api/types';
+import { requestPath } from '../../../test/fake-api';
 import { renderWithProviders } from '../../../test/render-with-providers';
 import { PROPOSAL } from '../../../test/weather-fixtures';
 import { WeatherFillDialog } from './weather-fill-dialog';
@@ -12,7 +13,8 @@ const json = (body: unknown, status = 200) =>
 afterEach(() => vi.unstubAllGlobals());
 
 function stubApi(failYear?: number) {
-  const fetchMock = vi.fn(async (url: string) => {
+  const fetchMock = vi.fn(async (request: Request) => {
+    const url = requestPath(request);
     if (url === '/api/farms/3/weather') return json(PROPOSAL.source);
     const year = /\/weather\/years\/(\d+)$/.exec(url);
     if (year) {
@@ -40,7 +42,9 @@ describe('WeatherFillDialog', () => {
     expect((await screen.findByTestId('weather-source-note')).textContent).toMatch(/INVENTED/);
     await user.click(screen.getByRole('button', { name: 'Read the history' }));
     await screen.findByTestId('weather-proposal');
-    const yearCalls = fetchMock.mock.calls.map(([url]) => url).filter((url) => url.includes('/weather/years/'));
+    const yearCalls = fetchMock.mock.calls
+      .map(([request]) => requestPath(request))
+      .filter((url) => url.includes('/weather/years/'));
     expect(yearCalls).toHaveLength(10);
     expect(yearCalls[0]).toBe('/api/farms/3/weather/years/2016');
     // −29.5 °C = −21.1 °F, in the user's units (hand arithmetic: −29.5 × 9/5 + 32)

@@ -1,19 +1,15 @@
 import { screen, waitFor } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
-import { beforeEach, describe, expect, it, vi } from 'vitest';
-import { api } from '../../../api/client';
+import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import type { FarmFuelPrices, FuelPricesInput, ReferenceData } from '../../../api/types';
 import { referenceDataFixture } from '../../../test/fixtures';
+import { fakeApi } from '../../../test/fake-api';
 import { renderWithProviders } from '../../../test/render-with-providers';
 import { FuelPricesEditor } from './fuel-prices-editor';
 
-vi.mock('../../../api/client', async (importOriginal) => {
-  const actual = await importOriginal<typeof import('../../../api/client')>();
-  return { ...actual, api: { get: vi.fn(), post: vi.fn(), put: vi.fn(), patch: vi.fn(), delete: vi.fn() } };
-});
-
-const get = vi.mocked(api.get);
-const put = vi.mocked(api.put);
+const api = fakeApi();
+const get = api.get;
+const put = api.put;
 const FARM_ID = 3;
 
 const referenceData: ReferenceData = {
@@ -30,6 +26,7 @@ const referenceData: ReferenceData = {
 
 const stored = {
   farmId: FARM_ID,
+  version: 2,
   prices: [
     {
       fuelId: 'propane',
@@ -42,7 +39,12 @@ const stored = {
   ],
 } as unknown as FarmFuelPrices;
 
+afterEach(() => {
+  vi.unstubAllGlobals();
+});
+
 beforeEach(() => {
+  api.install();
   get.mockReset();
   put.mockReset();
   get.mockImplementation(async (path: string) => {
@@ -77,6 +79,8 @@ describe('FuelPricesEditor', () => {
 
     await waitFor(() => expect(put).toHaveBeenCalledTimes(1));
     expect(put.mock.calls[0]![0]).toBe(`/api/farms/${FARM_ID}/fuel-prices`);
+    // the save names the version of the prices it was based on
+    expect(put.mock.calls[0]![2].headers.get('If-Match')).toBe('2');
     const body = put.mock.calls[0]![1] as FuelPricesInput;
     // a blank price (electricity) is no price: it is left out
     expect(body).toEqual({

@@ -27,13 +27,12 @@ const json = (status: number, body: unknown) =>
 /** A stand-in server: GET answers `stored`; each PUT takes the next answer from `putAnswers`. */
 function stubServer(stored: FarmFuelPrices, putAnswers: Array<(body: unknown) => Response>) {
   const puts: Array<{ ifMatch: string | undefined; body: unknown }> = [];
-  const fetchMock = vi.fn(async (url: string, init?: RequestInit) => {
-    if (init?.method === 'PUT') {
-      const headers = init.headers as Record<string, string>;
-      const body = JSON.parse(String(init.body)) as unknown;
-      puts.push({ ifMatch: headers['If-Match'], body });
+  const fetchMock = vi.fn(async (request: Request) => {
+    if (request.method === 'PUT') {
+      const body = (await request.json()) as unknown;
+      puts.push({ ifMatch: request.headers.get('If-Match') ?? undefined, body });
       const answer = putAnswers.shift();
-      if (!answer) throw new Error(`unexpected PUT ${url}`);
+      if (!answer) throw new Error(`unexpected PUT ${request.url}`);
       return answer(body);
     }
     return json(200, stored);

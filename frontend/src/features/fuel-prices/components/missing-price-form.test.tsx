@@ -2,6 +2,7 @@ import { screen, waitFor } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import type { FarmFuelPrices } from '../../../api/types';
+import { requestPath } from '../../../test/fake-api';
 import { renderWithProviders } from '../../../test/render-with-providers';
 import { parsePrice, withPrice } from '../fuel-price-values';
 import { MissingPriceForm } from './missing-price-form';
@@ -29,12 +30,12 @@ function stubServer(stored: FarmFuelPrices, putAnswers: Array<(body: unknown) =>
   const puts: Array<{ ifMatch: string | undefined; body: { prices: Array<Record<string, unknown>> } }> = [];
   vi.stubGlobal(
     'fetch',
-    vi.fn(async (url: string, init?: RequestInit) => {
-      if (init?.method === 'PUT') {
-        const body = JSON.parse(String(init.body)) as (typeof puts)[number]['body'];
-        puts.push({ ifMatch: (init.headers as Record<string, string>)['If-Match'], body });
+    vi.fn(async (request: Request) => {
+      if (request.method === 'PUT') {
+        const body = (await request.json()) as (typeof puts)[number]['body'];
+        puts.push({ ifMatch: request.headers.get('If-Match') ?? undefined, body });
         const answer = putAnswers.shift();
-        if (!answer) throw new Error(`unexpected PUT ${url}`);
+        if (!answer) throw new Error(`unexpected PUT ${requestPath(request)}`);
         return answer(body);
       }
       return json(200, stored);

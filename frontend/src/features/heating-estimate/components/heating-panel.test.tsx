@@ -1,22 +1,19 @@
 import { act, screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
-import { api, ApiError } from '../../../api/client';
+import { ApiError } from '../../../api/client';
 import type { HouseSpec } from '../../../api/types';
 import { houseSpecOf } from '../../../lib/house-spec';
 import type { UnitSystem } from '../../../lib/units';
 import { demoHouseB, demoHouseBHeating } from '../../../test/estimate-fixtures';
 import { referenceDataFixture } from '../../../test/fixtures';
+import { fakeApi } from '../../../test/fake-api';
 import { renderWithProviders } from '../../../test/render-with-providers';
 import { HeatingPanel, type HeatingPanelProps } from './heating-panel';
 
-vi.mock('../../../api/client', async (importOriginal) => {
-  const actual = await importOriginal<typeof import('../../../api/client')>();
-  return { ...actual, api: { get: vi.fn(), post: vi.fn(), patch: vi.fn(), delete: vi.fn() } };
-});
-
-const post = vi.mocked(api.post);
-const get = vi.mocked(api.get);
+const api = fakeApi();
+const post = api.post;
+const get = api.get;
 
 const referenceData = {
   ...referenceDataFixture,
@@ -31,6 +28,7 @@ function renderPanel(props: Partial<HeatingPanelProps> = {}, system: UnitSystem 
 }
 
 beforeEach(() => {
+  api.install();
   get.mockImplementation(async (path: string) => {
     if (path === '/api/reference-data') return referenceData as never;
     throw new Error(`unexpected GET ${path}`);
@@ -43,6 +41,7 @@ beforeEach(() => {
 
 afterEach(() => {
   vi.clearAllMocks();
+  vi.unstubAllGlobals();
 });
 
 describe('HeatingPanel', () => {

@@ -1,11 +1,10 @@
 import AttachFileIcon from '@mui/icons-material/AttachFile';
 import { Alert, Box, Button, Card, CardContent, Stack, Typography } from '@mui/material';
 import { useState } from 'react';
-import { downloadFile } from '../../../api/client';
 import type { MailSend, ReceivedAttachment, ReceivedMail } from '../../../api/types';
 import { errorMessage } from '../../../components/feedback';
 import { saveBlob } from '../../../lib/save-blob';
-import { attachmentPath } from '../queries';
+import { downloadAttachment } from '../queries';
 
 function formatSize(bytes: number): string {
   if (bytes < 1024) return `${bytes} B`;
@@ -18,7 +17,7 @@ function AttachmentButton({ mailId, attachment }: { mailId: number; attachment: 
   const download = async () => {
     setProblem(null);
     try {
-      const file = await downloadFile(attachmentPath(mailId, attachment.id), attachment.fileName);
+      const file = await downloadAttachment(mailId, attachment.id, attachment.fileName);
       saveBlob(file.blob, file.fileName);
     } catch (error) {
       setProblem(errorMessage(error));

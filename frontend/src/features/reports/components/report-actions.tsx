@@ -13,12 +13,11 @@ import {
   Typography,
 } from '@mui/material';
 import { useState } from 'react';
-import { downloadFile } from '../../../api/client';
 import type { Report, ReportSent } from '../../../api/types';
 import { ErrorAlert, errorMessage } from '../../../components/feedback';
 import { saveBlob } from '../../../lib/save-blob';
 import { useIssueReport, useReviseReport, useSendReport, useUpdateReport } from '../mutations';
-import { reportPdfPath } from '../queries';
+import { downloadReportPdf } from '../queries';
 
 export interface MemberChoice {
   userId: number;
@@ -129,7 +128,7 @@ export function ReportActions({
   const download = async () => {
     setDownloadProblem(null);
     try {
-      const file = await downloadFile(reportPdfPath(report.id), `report-${report.id}.pdf`);
+      const file = await downloadReportPdf(report.id);
       saveBlob(file.blob, file.fileName);
     } catch (error) {
       setDownloadProblem(errorMessage(error));

@@ -19,14 +19,13 @@ import { useTheme } from '@mui/material/styles';
 import { useMutation, useQuery } from '@tanstack/react-query';
 import type { ReactNode } from 'react';
 import { Bar } from 'react-chartjs-2';
-import { downloadFile } from '../../../api/client';
 import type { HeatLossBasis, SeasonBudget } from '../../../api/types';
 import { ErrorAlert, LoadingState } from '../../../components/feedback';
 import '../../../lib/chart';
 import { saveBlob } from '../../../lib/save-blob';
 import { useUnits, type Units } from '../../../lib/units';
 import { budgetChartSeries } from '../budget-chart-data';
-import { seasonBudgetQueryOptions } from '../queries';
+import { downloadSeasonBudgetCsv, seasonBudgetQueryOptions } from '../queries';
 
 const SEASON_FROM: Record<SeasonBudget['seasonFrom'], string> = {
   request: 'the dates asked for',
@@ -199,10 +198,7 @@ export function SeasonBudgetSection({
   const budget = useQuery(seasonBudgetQueryOptions(farmId, heatLossBasis === 'calibrated' ? { heatLossBasis } : {}));
   const exportCsv = useMutation({
     mutationFn: async () => {
-      const file = await downloadFile(
-        `/api/farms/${farmId}/season-budget.csv?units=${units.system}${heatLossBasis === 'calibrated' ? '&heatLossBasis=calibrated' : ''}`,
-        `season-budget-farm-${farmId}-${units.system}.csv`,
-      );
+      const file = await downloadSeasonBudgetCsv(farmId, units.system, heatLossBasis);
       saveBlob(file.blob, file.fileName);
     },
   });

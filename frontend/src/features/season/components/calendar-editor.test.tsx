@@ -1,18 +1,14 @@
 import { screen, waitFor } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
-import { beforeEach, describe, expect, it, vi } from 'vitest';
-import { api } from '../../../api/client';
+import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import type { ProductionCalendar, ProductionCalendarInput } from '../../../api/types';
+import { fakeApi } from '../../../test/fake-api';
 import { renderWithProviders } from '../../../test/render-with-providers';
 import { CalendarEditor } from './calendar-editor';
 
-vi.mock('../../../api/client', async (importOriginal) => {
-  const actual = await importOriginal<typeof import('../../../api/client')>();
-  return { ...actual, api: { get: vi.fn(), post: vi.fn(), put: vi.fn(), patch: vi.fn(), delete: vi.fn() } };
-});
-
-const get = vi.mocked(api.get);
-const put = vi.mocked(api.put);
+const api = fakeApi();
+const get = api.get;
+const put = api.put;
 const HOUSE_ID = 5;
 const stored: ProductionCalendar = {
   houseId: HOUSE_ID,
@@ -22,7 +18,12 @@ const stored: ProductionCalendar = {
   ],
 };
 
+afterEach(() => {
+  vi.unstubAllGlobals();
+});
+
 beforeEach(() => {
+  api.install();
   get.mockReset();
   put.mockReset();
   get.mockImplementation(async (path: string) => {
@@ -54,6 +55,8 @@ describe('CalendarEditor', () => {
     await user.type(night, '50');
     await user.click(screen.getByRole('button', { name: 'Save calendar' }));
     await waitFor(() => expect(put).toHaveBeenCalledTimes(1));
+    // the save names the version it was based on
+    expect(put.mock.calls[0]![2].headers.get('If-Match')).toBe('3');
     // 50 °F = (50 − 32) × 5/9 = 10 °C
     expect(sentBodies()).toEqual([
       {

@@ -2,6 +2,7 @@ import { screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import type { MeasureComparison, MeasureResult } from '../../../api/types';
+import { requestPath } from '../../../test/fake-api';
 import { renderWithProviders } from '../../../test/render-with-providers';
 import { MeasuresPanel } from './measures-panel';
 
@@ -75,8 +76,9 @@ function stubApi(
   const puts: Array<{ body: unknown; ifMatch: string | null }> = [];
   vi.stubGlobal(
     'fetch',
-    vi.fn(async (url: string, init: RequestInit = {}) => {
-      if (String(url).endsWith('/api/reference-data')) {
+    vi.fn(async (request: Request) => {
+      const url = requestPath(request);
+      if (url.endsWith('/api/reference-data')) {
         // the two heater types the picker names here, labels as in reference-data/heater-types.json
         const rows = [
           { id: 'unit-heater-condensing', label: 'Condensing unit heater', heaterType: 'condensing' },
@@ -88,13 +90,13 @@ function stubApi(
         ];
         return json({ 'heater-types': { title: 'Heater types', rows } });
       }
-      if (String(url).endsWith('/measure-plan')) {
-        if ((init.method ?? 'GET') === 'GET') return json(plan);
-        const body = JSON.parse(String(init.body)) as { measures: unknown[] };
-        puts.push({ body, ifMatch: new Headers(init.headers).get('If-Match') });
+      if (url.endsWith('/measure-plan')) {
+        if (request.method === 'GET') return json(plan);
+        const body = (await request.json()) as { measures: unknown[] };
+        puts.push({ body, ifMatch: request.headers.get('If-Match') });
         return json({ houseId: 7, measures: body.measures, version: plan.version + 1 });
       }
-      return json(measures(JSON.parse(String(init.body)) as { measures: unknown[] }));
+      return json(measures((await request.json()) as { measures: unknown[] }));
     }),
   );
   return puts;
