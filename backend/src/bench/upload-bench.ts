@@ -109,7 +109,7 @@ async function main(): Promise<void> {
   });
   const { AppModule } = await import('../app.module');
   const { configureApp } = await import('../app.setup');
-  const app = await NestFactory.create(AppModule, { logger: ['error'] });
+  const app = await NestFactory.create(AppModule.forRoot(), { logger: ['error'] });
   configureApp(app);
   await app.listen(0, '127.0.0.1');
   const base = (await app.getUrl()).replace('[::1]', '127.0.0.1');
