@@ -55,7 +55,9 @@ describe('estimateCooling', () => {
         'capacity',
         'cautions',
         'designDay',
+        'interiorLight',
         'pads',
+        'shadeCloth',
         'staging',
         'winterVentilation',
       ].sort(),
@@ -97,7 +99,11 @@ describe('estimateCooling', () => {
   });
 
   it('pads: area needed = design flow / face velocity; leaving air from the design dry and wet bulb', () => {
-    const result = run({ conditions: { evaporativePad: { padTypeId: 'cellulose-100mm', areaM2: 20 } } });
+    // the base rate's own light is entered (5,000 fc = 53,819.55 lx), so F_light = 1
+    const baseLight = { peakInteriorLightLux: 5000 * 10.76391 };
+    const result = run({
+      conditions: { ...baseLight, evaporativePad: { padTypeId: 'cellulose-100mm', areaM2: 20 } },
+    });
     const pads = result.pads!;
     const designFlow = Math.max(result.capacity.requiredFlowM3PerS, result.capacity.installedFlowM3PerS);
     expect(pads.areaNeededM2).toBeCloseTo(designFlow / pads.faceVelocityMPerS, 10);
@@ -105,7 +111,8 @@ describe('estimateCooling', () => {
     // = 10.9728 × 1.03937 = 11.405 m³/s (more than the 10 m³/s installed); ÷ 1.27 m/s (250 fpm) = 8.98 m²
     expect(pads.areaNeededM2).toBeCloseTo(8.98, 2);
     expect(pads.verdict).toBe('adequate');
-    const small = run({ conditions: { evaporativePad: { padTypeId: 'cellulose-100mm', areaM2: 8.9 } } }).pads!;
+    const small = run({ conditions: { ...baseLight, evaporativePad: { padTypeId: 'cellulose-100mm', areaM2: 8.9 } } })
+      .pads!;
     expect(small.verdict).toBe('short');
     expect(pads.leavingAirAtPeakC).toBeCloseTo(34 - pads.saturationEfficiency * (34 - 23.5), 1);
     expect(result.designDay.peakIndoorWithPadsC!).toBeLessThan(result.designDay.peakIndoorWithFansC);

@@ -15,17 +15,31 @@ import {
 import { airSpecificHeat, ventilationValue } from './cooling/cooling-reference';
 import { designDayBalance, type DesignDayHour } from './cooling/design-day';
 import { padSizing, type PadSizing } from './cooling/pads';
-import { designFlowM3PerS, requiredCapacity, type CapacityResult } from './cooling/required-capacity';
+import {
+  designFlowM3PerS,
+  interiorLight,
+  requiredCapacity,
+  type CapacityResult,
+  type InteriorLight,
+} from './cooling/required-capacity';
 import { thermostatStaging, type StagingResult } from './cooling/staging';
 import { winterVentilation, type WinterVentilation } from './cooling/winter-ventilation';
 import { computeHouseGeometry, opaqueEnvelopeShare } from './geometry/house-geometry';
 import { heatLossCoefficients } from './heating/heat-loss';
-import type { HouseSpec } from './house.types';
+import type { HouseSpec, ShadeCloth } from './house.types';
 import { dryAirDensityKgPerM3, standardAtmosphericPressurePa } from './psychrometrics';
 import type { ReferenceData } from './reference-data.types';
+import { shadeTransmittanceInMonth, validateShadeCloth } from './solar/shade-cloth';
 
 export type { CoolingAssumption } from './cooling/cooling-assumptions';
 export type { CoolingConditions, CoolingSite } from './cooling/cooling-inputs';
+export type { InteriorLight } from './cooling/required-capacity';
+
+/** The house's shade cloth as the cooling estimate used it. */
+export interface CoolingShadeCloth extends ShadeCloth {
+  /** whether the design date falls in one of the cloth's months (only then does it shade the day) */
+  inPlaceOnDesignDate: boolean;
+}
 
 export interface CoolingInput {
   house: HouseSpec;
@@ -36,6 +50,10 @@ export interface CoolingInput {
 export interface CoolingEstimate {
   airExchange: AirExchange;
   capacity: CapacityResult;
+  /** the peak interior light the light factor read: the design day's own, or the entered one, times any shade */
+  interiorLight: InteriorLight;
+  /** the house's shade cloth, or null without one */
+  shadeCloth: CoolingShadeCloth | null;
   designDay: {
     date: string;
     hours: DesignDayHour[];
@@ -60,32 +78,22 @@ export function estimateCooling(input: CoolingInput, ref: ReferenceData): Coolin
   const { house, site, conditions } = input;
   validateCoolingSite(site);
   validateHouseCoolingFields(house);
+  const cloth = validateShadeCloth(house);
   const geometry = computeHouseGeometry(house);
   const { year, month } = validateDesignDate(conditions.designDate);
   validateCoolingConditions(conditions);
+  // the cloth shades the design day only in the months it is in place
+  const shadeTransmittance = shadeTransmittanceInMonth(house, month);
 
   const roofCovering = roofCoveringRow(house, ref);
   const padType = resolvePadType(conditions, ref);
 
   // --- inputs with reference defaults
   const inputs = coolingInputsWithDefaults(conditions, house, ref);
-  const { peakInteriorLightLux, allowedTemperatureRiseK, transpirationFraction, padToFanDistanceM, winterDesignC } =
-    inputs;
+  const { allowedTemperatureRiseK, transpirationFraction, padToFanDistanceM, winterDesignC } = inputs;
 
-  // --- air exchange and required capacity
+  // --- air exchange
   const exchange = airExchange(house.exhaustFans, geometry);
-  const { elevationBeyondTable, ...capacity } = requiredCapacity(
-    {
-      floorAreaM2: geometry.floorAreaM2,
-      elevationM: site.elevationM,
-      peakInteriorLightLux,
-      allowedTemperatureRiseK,
-      padToFanDistanceM,
-      fans: house.exhaustFans,
-      inletAreaM2: house.inletAreaM2,
-    },
-    ref,
-  );
 
   // --- design day
   const pressurePa = standardAtmosphericPressurePa(site.elevationM);
@@ -93,6 +101,8 @@ export function estimateCooling(input: CoolingInput, ref: ReferenceData): Coolin
     curtainClosed: false,
     airDensityKgPerM3: dryAirDensityKgPerM3(conditions.summerDesignC, pressurePa),
   }).totalWPerK;
+  // the opaque kneewall's share of the envelope passes no light
+  const roofLightTransmittance = roofCovering.lightTransmittance * (1 - opaqueEnvelopeShare(geometry));
   const designDay = designDayBalance(
     {
       date: conditions.designDate,
@@ -103,13 +113,36 @@ export function estimateCooling(input: CoolingInput, ref: ReferenceData): Coolin
       dailyRangeK: conditions.dailyRangeK,
       summerDesignWetBulbC: conditions.summerDesignWetBulbC,
       floorAreaM2: geometry.floorAreaM2,
-      // the opaque kneewall's share of the envelope passes no light
-      roofLightTransmittance: roofCovering.lightTransmittance * (1 - opaqueEnvelopeShare(geometry)),
+      roofLightTransmittance,
+      shadeTransmittance,
       transpirationFraction,
       conductanceWPerK,
       installedFlowM3PerS: exchange.installedFlowM3PerS,
       coolingSetpointC: house.setpoints.coolingC,
       padSaturationEfficiency: padType ? padType.saturationEfficiency : null,
+    },
+    ref,
+  );
+
+  // --- required capacity, its light factor read from the design day's own light (and shade)
+  const light = interiorLight(
+    {
+      enteredUnshadedLux: inputs.enteredPeakInteriorLightLux,
+      peakGlobalHorizontalWPerM2: designDay.peakGlobalHorizontalWPerM2,
+      roofLightTransmittance,
+      shadeTransmittance,
+    },
+    ref,
+  );
+  const { elevationBeyondTable, ...capacity } = requiredCapacity(
+    {
+      floorAreaM2: geometry.floorAreaM2,
+      elevationM: site.elevationM,
+      peakInteriorLightLux: light.lux,
+      allowedTemperatureRiseK,
+      padToFanDistanceM,
+      fans: house.exhaustFans,
+      inletAreaM2: house.inletAreaM2,
     },
     ref,
   );
@@ -159,6 +192,10 @@ export function estimateCooling(input: CoolingInput, ref: ReferenceData): Coolin
       roofCovering,
       conductanceWPerK,
       designHumidityRatioKgPerKg: designDay.humidityRatioKgPerKg,
+      interiorLight: light,
+      roofLightTransmittance,
+      peakGlobalHorizontalWPerM2: designDay.peakGlobalHorizontalWPerM2,
+      shadeCloth: cloth,
       airSpecificHeat: cp,
       padType,
       staging,
@@ -167,13 +204,35 @@ export function estimateCooling(input: CoolingInput, ref: ReferenceData): Coolin
     ref,
   );
   const cautions = coolingCautions(
-    { capacity, elevationBeyondTable, designDay, padType, pads, padToFanDistanceM, staging, winter },
+    {
+      capacity,
+      elevationBeyondTable,
+      designDay,
+      padType,
+      pads,
+      padToFanDistanceM,
+      staging,
+      winter,
+      interiorLight: light,
+      allowedTemperatureRiseK,
+      coolingSetpointC: house.setpoints.coolingC,
+      transpirationFraction,
+    },
     ref,
   );
 
   return {
     airExchange: exchange,
     capacity,
+    interiorLight: light,
+    shadeCloth:
+      cloth === null
+        ? null
+        : {
+            solarTransmittance: cloth.solarTransmittance,
+            months: [...cloth.months].sort((a, b) => a - b),
+            inPlaceOnDesignDate: cloth.months.includes(month),
+          },
     designDay: {
       date: designDay.date,
       hours: designDay.hours,

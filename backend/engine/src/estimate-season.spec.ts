@@ -444,3 +444,38 @@ describe('estimateSeason: efficiency on the higher-heating-value basis', () => {
     );
   });
 });
+
+describe('estimateSeason with a shade cloth', () => {
+  it('takes the sun away only in the months the cloth is in place, and says so in the assumptions', () => {
+    const base = demoSeasonInput({ season: { startDate: '2026-01-01', endDate: '2026-12-31' } });
+    const open = estimateSeason(base, ref, sunCache);
+    const shaded = estimateSeason(
+      { ...base, house: { ...base.house, shadeCloth: { solarTransmittance: 0.5, months: [5, 6, 7, 8, 9] } } },
+      ref,
+      sunCache,
+    );
+    open.monthly.forEach((month, index) => {
+      const withCloth = shaded.monthly[index];
+      if ([5, 6, 7, 8, 9].includes(month.month)) {
+        // less free sun by day: never less heat
+        expect(withCloth.energyKWh).toBeGreaterThanOrEqual(month.energyKWh);
+      } else {
+        expect(withCloth.energyKWh).toBe(month.energyKWh);
+      }
+    });
+    expect(shaded.solarOffsetKWh).toBeLessThan(open.solarOffsetKWh);
+    expect(shaded.assumptions.find((a) => a.key === 'shade-cloth')?.value).toBe(
+      'a shade cloth passing 50 % of the sun, in place May–September',
+    );
+    expect(open.assumptions.some((a) => a.key === 'shade-cloth')).toBe(false);
+  });
+
+  it('refuses a cloth with a month outside 1–12, naming it', () => {
+    const base = demoSeasonInput();
+    expect(
+      fieldOf(() =>
+        estimateSeason({ ...base, house: { ...base.house, shadeCloth: { solarTransmittance: 0.5, months: [0] } } }, ref, sunCache),
+      ),
+    ).toBe('house.shadeCloth.months[0]');
+  });
+});

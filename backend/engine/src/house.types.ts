@@ -32,6 +32,17 @@ export interface Setpoints {
   coolingC: number;
 }
 
+/**
+ * A shade cloth (or screen) over the crop: the share of the sun it passes and the months it is in
+ * place. Typical cloths are in reference-data/shade-cloths.json; the house keeps the figure itself.
+ */
+export interface ShadeCloth {
+  /** share of the sun's radiation (heat and light alike) that passes the cloth, 0–1; a "50 % shade" cloth ≈ 0.5 */
+  solarTransmittance: number;
+  /** calendar months (1 = January … 12 = December) in which the cloth is in place, each once */
+  months: number[];
+}
+
 export interface HouseSpec {
   shape: HouseShape;
   /** 1 for a freestanding house; more for a gutter-connected range */
@@ -61,6 +72,8 @@ export interface HouseSpec {
   kneewallId?: string | null;
   /** reference-data/curtains.json id of a thermal curtain drawn at night, or null for none */
   curtainId?: string | null;
+  /** a shade cloth in place in some months, or null / absent for none */
+  shadeCloth?: ShadeCloth | null;
   heaters: HeaterGroup[];
   exhaustFans: ExhaustFans;
   /** free area of the intake louvres or inlets, m² */

@@ -180,7 +180,7 @@ export class EstimatesService {
       dailyRangeK: stated('dailyRangeK') ? 'request' : 'farm climate',
       summerDesignWetBulbC: stated('summerDesignWetBulbC') ? 'request' : 'farm climate',
       allowedTemperatureRiseK: stated('allowedTemperatureRiseK') ? 'request' : 'reference data',
-      peakInteriorLightLux: stated('peakInteriorLightLux') ? 'request' : 'reference data',
+      peakInteriorLightLux: stated('peakInteriorLightLux') ? 'request' : 'design day',
       padToFanDistanceM: stated('padToFanDistanceM') ? 'request' : 'house length',
       transpirationFraction: stated('transpirationFraction') ? 'request' : 'reference data',
       evaporativePad: given.evaporativePad ? 'request' : 'none',

@@ -17,6 +17,9 @@ export function houseToSpec(house: House | HouseDto): HouseSpec {
     airChangesPerHourOverride: house.airChangesPerHourOverride ?? null,
     perimeterInsulated: house.perimeterInsulated,
     curtainId: house.curtainId ?? null,
+    shadeCloth: house.shadeCloth
+      ? { solarTransmittance: house.shadeCloth.solarTransmittance, months: [...house.shadeCloth.months] }
+      : null,
     kneewallHeightM: house.kneewallHeightM ?? null,
     kneewallId: house.kneewallId ?? null,
     heaters: house.heaters.map((h) => ({ ...h })),
@@ -36,6 +39,9 @@ export function houseToDto(house: House): HouseDto {
     coveringUOverridesWPerM2K: house.coveringUOverridesWPerM2K ?? {},
     airChangesPerHourOverride: house.airChangesPerHourOverride ?? null,
     curtainId: house.curtainId ?? null,
+    shadeCloth: house.shadeCloth
+      ? { solarTransmittance: house.shadeCloth.solarTransmittance, months: [...house.shadeCloth.months] }
+      : null,
     version: house.version,
     kneewallHeightM: house.kneewallHeightM ?? null,
     kneewallId: house.kneewallId ?? null,

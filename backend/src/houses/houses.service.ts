@@ -11,6 +11,7 @@ import type { Permission } from '../common/permissions';
 import { assertVersion, changesNothing, expectedVersion } from '../common/versioning';
 import { EngineInputError } from '@thermbay/engine/errors';
 import { validateHouseDimensions } from '@thermbay/engine/geometry/house-geometry';
+import { validateShadeCloth } from '@thermbay/engine/solar/shade-cloth';
 import { FarmAccessService } from '../farms/farm-access.service';
 import { ReferenceDataService } from '../reference-data/reference-data.service';
 import { CreateHouseDto, type HouseDto, type UpdateHouseDto } from './dto/house.dto';
@@ -40,7 +41,10 @@ export class HousesService {
 
   async create(user: AuthenticatedUser, farmId: number, body: CreateHouseDto): Promise<HouseDto> {
     await this.access.require(user, farmId, 'house:write');
-    const candidate = { ...body, coveringUOverridesWPerM2K: body.coveringUOverridesWPerM2K ?? {} };
+    const candidate = withSortedShadeMonths({
+      ...body,
+      coveringUOverridesWPerM2K: body.coveringUOverridesWPerM2K ?? {},
+    });
     this.assertComputable(candidate);
     const house = await this.houses.create({ ...candidate, farmId });
     return houseToDto(house);
@@ -61,11 +65,12 @@ export class HousesService {
       const house = await this.houses.findByPk(houseId, { transaction, lock: transaction.LOCK.UPDATE });
       if (!house) throw new NotFoundException('No such house');
       const current = houseToDto(house);
-      if (changesNothing(current as unknown as Record<string, unknown>, { ...body })) return current;
+      const changes = withSortedShadeMonths({ ...body });
+      if (changesNothing(current as unknown as Record<string, unknown>, changes)) return current;
       assertVersion(house.version, expected, () => current);
-      const merged = { ...current, ...body };
+      const merged = { ...current, ...changes };
       this.assertComputable(merged);
-      await house.update({ ...body, version: house.version + 1 }, { transaction });
+      await house.update({ ...changes, version: house.version + 1 }, { transaction });
       return houseToDto(house);
     });
   }
@@ -110,11 +115,12 @@ export class HousesService {
     return null;
   }
 
-  /** A house is saved only if the engine can compute with it (ridge above eave, known ids …). */
+  /** A house is saved only if the engine can compute with it (ridge above eave, known ids, a valid cloth …). */
   private assertComputable(house: CreateHouseDto | HouseDto): void {
     this.reference.assertHouseReferences(house);
     try {
       validateHouseDimensions(houseToSpec(house as HouseDto), 'house');
+      validateShadeCloth(house);
     } catch (error) {
       if (error instanceof EngineInputError) {
         const field = error.field.replace(/^house\./, '');
@@ -123,4 +129,13 @@ export class HousesService {
       throw error;
     }
   }
+}
+
+/** The cloth's months in calendar order, so the same months always store (and compare) the same. */
+function withSortedShadeMonths<T extends { shadeCloth?: { solarTransmittance: number; months: number[] } | null }>(
+  body: T,
+): T {
+  const cloth = body.shadeCloth;
+  if (!cloth || !Array.isArray(cloth.months)) return body;
+  return { ...body, shadeCloth: { ...cloth, months: [...cloth.months].sort((a, b) => a - b) } };
 }

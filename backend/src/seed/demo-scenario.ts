@@ -93,6 +93,11 @@ export interface DemoHouse extends HouseSpec {
   notes: string;
 }
 
+/**
+ * No demo house carries a shade cloth (shadeCloth left out, stored as null): the invented farm has
+ * a central-Minnesota summer (31 °C design day), and none of the three houses is described as a
+ * shaded crop, so none plainly would use one. Add one in the house form to see its effect.
+ */
 export const DEMO_HOUSES: DemoHouse[] = [
   {
     name: 'House A – tomatoes',

@@ -36,6 +36,13 @@ const houseArb: fc.Arbitrary<HouseSpec & { id: number; name: string }> = fc.reco
   airChangesPerHourOverride: fc.option(fc.double({ min: 0.2, max: 4, noNaN: true }), { nil: null }),
   perimeterInsulated: fc.boolean(),
   curtainId: fc.option(fc.constantFrom('energy-curtain-50', 'blackout'), { nil: null }),
+  shadeCloth: fc.option(
+    fc.record({
+      solarTransmittance: fc.double({ min: 0, max: 1, noNaN: true }),
+      months: fc.uniqueArray(fc.integer({ min: 1, max: 12 }), { maxLength: 12 }),
+    }),
+    { nil: null },
+  ),
   heaters: fc.array(
     fc.record({
       count: fc.integer({ min: 1, max: 6 }),
@@ -76,6 +83,17 @@ const patchArb: fc.Arbitrary<HousePatch> = fc.record(
       { requiredKeys: [] },
     ),
     curtainId: fc.option(fc.constantFrom('energy-curtain-50', 'blackout'), { nil: null }),
+    // add, change or remove the shade cloth: its share, its months, or both
+    shadeCloth: fc.option(
+      fc.record(
+        {
+          solarTransmittance: fc.double({ min: 0, max: 1, noNaN: true }),
+          months: fc.uniqueArray(fc.integer({ min: 1, max: 12 }), { maxLength: 12 }),
+        },
+        { requiredKeys: [] },
+      ),
+      { nil: null },
+    ),
     airLeakageClassId: fc.constantFrom('new-film-double', 'old-glass-poor'),
     airChangesPerHourOverride: fc.option(fc.double({ min: 0.2, max: 4, noNaN: true }), { nil: null }),
     perimeterInsulated: fc.boolean(),
@@ -204,7 +222,35 @@ describe('house patches (examples)', () => {
     expect(() => assertPatchFields(stored, { curtainId: null })).not.toThrow();
   });
 
+  it('adds, changes and removes a shade cloth, and reverts each', () => {
+    const bare = { ...house, shadeCloth: null };
+    const cloth = { solarTransmittance: 0.5, months: [5, 6, 7, 8, 9] };
+    // add
+    const added = applyHousePatch(bare, { shadeCloth: cloth });
+    expect(added.shadeCloth).toEqual(cloth);
+    expect(applyHousePatch(added, reverseHousePatch(bare, { shadeCloth: cloth }))).toEqual(bare);
+    expect(housePatchBetween(bare, added)).toEqual({ shadeCloth: cloth });
+    // change: a denser cloth over the same months; the months alone replace the list
+    const denser = applyHousePatch(added, { shadeCloth: { solarTransmittance: 0.3 } });
+    expect(denser.shadeCloth).toEqual({ solarTransmittance: 0.3, months: [5, 6, 7, 8, 9] });
+    const longer = applyHousePatch(added, { shadeCloth: { months: [4, 5, 6, 7, 8, 9, 10] } });
+    expect(longer.shadeCloth).toEqual({ solarTransmittance: 0.5, months: [4, 5, 6, 7, 8, 9, 10] });
+    expect(housePatchBetween(added, denser)).toEqual({ shadeCloth: { solarTransmittance: 0.3 } });
+    expect(reverseHousePatch(added, { shadeCloth: { solarTransmittance: 0.3 } })).toEqual({
+      shadeCloth: { solarTransmittance: 0.5 },
+    });
+    // remove
+    const removed = applyHousePatch(added, { shadeCloth: null });
+    expect(removed.shadeCloth).toBeNull();
+    expect(reverseHousePatch(added, { shadeCloth: null })).toEqual({ shadeCloth: cloth });
+    expect(housePatchBetween(added, removed)).toEqual({ shadeCloth: null });
+    // a stored house always carries the field (null without a cloth), so a patch may name it
+    expect(() => assertPatchFields({ ...bare, id: 1 }, { shadeCloth: cloth })).not.toThrow();
+  });
+
   it('lists the paths it changes', () => {
+    expect(patchedPaths({ shadeCloth: { solarTransmittance: 0.3 } })).toEqual(['shadeCloth.solarTransmittance']);
+    expect(patchedPaths({ shadeCloth: null })).toEqual(['shadeCloth']);
     expect(patchedPaths({ coverings: { roof: 'glass-single' }, heaters: [], curtainId: null })).toEqual([
       'coverings.roof',
       'heaters',

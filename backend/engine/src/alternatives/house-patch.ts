@@ -4,11 +4,14 @@
  * house flows into every alternative that does not change that field.
  *
  * Merge rules (JSON Merge Patch, RFC 7386, with one difference at the top level):
- *  - a top-level key is a house field and replaces it (null included: `curtainId: null` = no curtain);
+ *  - a top-level key is a house field and replaces it (null included: `curtainId: null` = no curtain,
+ *    `shadeCloth: null` = no shade cloth; a cloth object where the house has none adds one);
  *  - where both the house field and the patch value are plain objects (coverings, setpoints,
- *    fans, U-value overrides …), the patch is merged key by key, recursively;
+ *    fans, U-value overrides, a shade cloth …), the patch is merged key by key, recursively
+ *    (`shadeCloth: { solarTransmittance: 0.3 }` changes the cloth and keeps its months);
  *  - inside such an object, null removes the key (e.g. drops one U-value override);
- *  - anything else (numbers, strings, arrays such as the heater groups) replaces the whole value.
+ *  - anything else (numbers, strings, arrays such as the heater groups or the cloth's months)
+ *    replaces the whole value.
  */
 import { EngineInputError } from '../errors';
 

@@ -9,7 +9,9 @@ import {
   type SourcedValue,
 } from './cooling-reference';
 import type { CoolingConditions, CoolingInputsWithDefaults, RoofCoveringRow } from './cooling-inputs';
-import type { CapacityResult } from './required-capacity';
+import type { ShadeCloth } from '../house.types';
+import { MONTH_NAMES, shadeClothInWords } from '../solar/shade-cloth';
+import type { CapacityResult, InteriorLight } from './required-capacity';
 import type { StagingResult } from './staging';
 
 export interface CoolingAssumption {
@@ -33,6 +35,13 @@ export interface CoolingAssumptionSources {
   conductanceWPerK: number;
   /** outdoor humidity ratio held through the design day, kg/kg */
   designHumidityRatioKgPerKg: number;
+  /** the peak interior light the light factor read */
+  interiorLight: InteriorLight;
+  /** the roof covering's light transmittance less the opaque kneewall's share */
+  roofLightTransmittance: number;
+  /** the design day's highest clear-sky global horizontal irradiance, W/m² */
+  peakGlobalHorizontalWPerM2: number;
+  shadeCloth: ShadeCloth | null;
   airSpecificHeat: SourcedValue;
   padType: PadTypeRow | null;
   staging: StagingResult;
@@ -49,6 +58,10 @@ export function coolingAssumptions(
     roofCovering,
     conductanceWPerK,
     designHumidityRatioKgPerKg,
+    interiorLight: light,
+    roofLightTransmittance,
+    peakGlobalHorizontalWPerM2,
+    shadeCloth,
     airSpecificHeat: cp,
     padType,
     staging,
@@ -75,13 +88,71 @@ export function coolingAssumptions(
     '–',
     requireRow(ref, 'ventilation', 'elevation-factor'),
   );
+  const shadeWords =
+    shadeCloth === null
+      ? 'none'
+      : shadeCloth.months.includes(month)
+        ? `${shadeClothInWords(shadeCloth)}: in place on the design date`
+        : `${shadeClothInWords(shadeCloth)}: not in place in ${MONTH_NAMES[month - 1]}, so it shades nothing on the design date`;
+  assumptions.push({
+    key: 'shadeCloth',
+    label:
+      'Shade cloth: multiplies the sun through the roof on the design day, both its solar heat and the interior light of the light factor',
+    value: shadeWords,
+    unit: '',
+    source:
+      shadeCloth === null
+        ? 'The house has no shade cloth'
+        : 'The house as entered (typical cloths in reference-data/shade-cloths.json); the cloth counts only what it passes, not heat it absorbs itself',
+    confidence: shadeCloth === null ? 'derived' : 'common-practice',
+    overridden: false,
+  });
+  assumptions.push({
+    key: 'shadeTransmittance',
+    label: 'Share of the sun the shade cloth passes on the design date (1 = no shade)',
+    value: light.shadeTransmittance,
+    unit: '–',
+    source: shadeCloth === null ? 'No shade cloth' : 'The house as entered',
+    confidence: 'derived',
+    overridden: false,
+  });
+  if (light.from === 'entered') {
+    assumptions.push({
+      key: 'peakInteriorLightLux',
+      label:
+        'Peak interior light at plant height for the light factor: the entered light under the roof × the shade cloth. The design day itself still uses the clear-sky sun through the roof, so the two can differ',
+      value: light.lux,
+      unit: 'lx',
+      source: `Entered in the request (${Math.round(light.unshadedLux)} lx before shade) × shade ${light.shadeTransmittance}`,
+      confidence: 'derived',
+      overridden: true,
+    });
+  } else {
+    assumptions.push({
+      key: 'peakInteriorLightLux',
+      label:
+        "Peak interior light at plant height for the light factor: the design day's own light (peak clear-sky global irradiance × roof light transmittance × shade cloth × luminous efficacy), the same sun as the hour-by-hour balance",
+      value: light.lux,
+      unit: 'lx',
+      source: `${Math.round(peakGlobalHorizontalWPerM2)} W/m² × ${roofLightTransmittance.toFixed(3)} × ${light.shadeTransmittance} × ${inputs.luminousEfficacy.value} lm/W (design-day clear-sky model, roof covering, shade cloth and luminous efficacy as listed)`,
+      confidence: 'derived',
+      overridden: false,
+    });
+  }
   sourced(
-    'peakInteriorLightLux',
-    'Peak interior light at plant height',
-    inputs.peakInteriorLightLux,
+    'luminousEfficacy',
+    'Luminous efficacy of clear-sky daylight (turns W/m² into lux)',
+    inputs.luminousEfficacy.value,
+    'lm/W',
+    inputs.luminousEfficacy.row,
+  );
+  const lightRef = ventilationValue(ref, 'light-factor', 'referenceLux');
+  sourced(
+    'lightFactorReferenceLux',
+    'Reference light of the base rate (F_light = peak interior light ÷ reference)',
+    lightRef.value,
     'lx',
-    inputs.lightDefault.row,
-    conditions.peakInteriorLightLux !== undefined,
+    lightRef.row,
   );
   sourced(
     'allowedTemperatureRiseK',
@@ -170,7 +241,7 @@ export function coolingAssumptions(
     key: 'designDayModel',
     label: 'Design-day method',
     value:
-      'hours are local apparent solar time (hour 12 = solar noon); clear sky; steady state each hour with no heat storage in floor, benches or crop; no shade cloth; heaters not modelled (night temperatures free-floating); fans staged continuously; fan fraction and "setpoint held" describe the house with its pads when pads are entered',
+      'hours are local apparent solar time (hour 12 = solar noon); clear sky; steady state each hour with no heat storage in floor, benches or crop; a shade cloth only when it is in place in the design month; heaters not modelled (night temperatures free-floating); fans staged continuously; fan fraction and "setpoint held" describe the house with its pads when pads are entered',
     unit: '',
     source: 'Thermbay method; sun positions from suncalc 2.0.2, irradiance and temperature profile as listed',
     confidence: 'derived',

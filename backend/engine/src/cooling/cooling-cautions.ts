@@ -1,9 +1,10 @@
+import { maxOf } from '../numbers';
 import type { ReferenceData } from '../reference-data.types';
 import { quantityToken } from '../vocabulary';
 import { requireRow, ventilationValue, type PadTypeRow } from './cooling-reference';
 import type { DesignDayResult } from './design-day';
 import type { PadSizing } from './pads';
-import { METRES_PER_FOOT, type CapacityResult } from './required-capacity';
+import { METRES_PER_FOOT, type CapacityResult, type InteriorLight } from './required-capacity';
 import type { StagingResult } from './staging';
 import type { WinterVentilation } from './winter-ventilation';
 
@@ -23,6 +24,69 @@ export interface CoolingCautionSources {
   padToFanDistanceM: number;
   staging: StagingResult;
   winter: WinterVentilation;
+  /** the peak interior light the light factor read */
+  interiorLight: InteriorLight;
+  /** the allowed inlet-to-fan rise the floor-area rate was sized for, K */
+  allowedTemperatureRiseK: number;
+  coolingSetpointC: number;
+  /** share of the transmitted sun the crop takes up (design day) */
+  transpirationFraction: number;
+}
+
+/**
+ * Why "fans adequate" (the floor-area rate) and "setpoint not held" (the hour-by-hour design day)
+ * can both be true although both read the same sun: the floor-area rate keeps the air within the
+ * allowed rise above the air coming in and never looks at the cooling setpoint; the design day
+ * asks for the setpoint itself. Hours are split into those where the incoming air plus that rise
+ * is already above the setpoint and those where the sun of the design day outruns the rate. An
+ * entered peak light (not the design day's) is named as a further cause. Empty unless the two
+ * disagree.
+ */
+export function adequateButNotHeldExplanation(sources: {
+  capacity: CapacityResult;
+  designDay: Pick<DesignDayResult, 'hoursNotHeld' | 'supplyAirByHourC'>;
+  padType: PadTypeRow | null;
+  interiorLight: InteriorLight;
+  allowedTemperatureRiseK: number;
+  coolingSetpointC: number;
+  transpirationFraction: number;
+}): string | null {
+  const { capacity, designDay, padType, interiorLight: light, allowedTemperatureRiseK, coolingSetpointC } = sources;
+  if (capacity.verdict !== 'adequate' || designDay.hoursNotHeld.length === 0) return null;
+  const incoming = padType ? 'air leaving the pads' : 'outdoor air';
+  const supply = (hour: number) => designDay.supplyAirByHourC[hour];
+  // the incoming air alone is at or above the setpoint: no fan rate holds it
+  const hotHours = designDay.hoursNotHeld.filter((hour) => supply(hour) >= coolingSetpointC - 1e-9);
+  // the incoming air plus the allowed rise is above the setpoint: the rate was sized for too large a rise
+  const warmHours = designDay.hoursNotHeld.filter(
+    (hour) => !hotHours.includes(hour) && supply(hour) + allowedTemperatureRiseK > coolingSetpointC + 1e-9,
+  );
+  const sunnyHours = designDay.hoursNotHeld.filter((hour) => !hotHours.includes(hour) && !warmHours.includes(hour));
+  const parts = [
+    `Why the fans are adequate yet the setpoint is not held: the floor-area rate sizes the fans to keep the house air within ${quantityToken('temperatureDifference', allowedTemperatureRiseK)} of the ${incoming} coming in, and does not look at the ${quantityToken('temperature', coolingSetpointC)} cooling setpoint; the design day asks for the setpoint itself.`,
+  ];
+  if (hotHours.length > 0) {
+    const hottest = maxOf(hotHours.map(supply));
+    parts.push(
+      `At solar hours ${hotHours.join(', ')} the ${incoming} itself (up to ${quantityToken('temperature', hottest)}) is at or above the setpoint, so no fan rate can hold it${padType ? '' : '; only cooler incoming air, as evaporative pads give, can'}.`,
+    );
+  }
+  if (warmHours.length > 0) {
+    parts.push(
+      `At solar hours ${warmHours.join(', ')} the ${incoming} plus that rise is above the setpoint: holding it takes more air than the rate, as a smaller allowed rise would ask for.`,
+    );
+  }
+  if (sunnyHours.length > 0) {
+    parts.push(
+      `At solar hours ${sunnyHours.join(', ')} the clear-sky sun of the design day (${Math.round(light.shadeTransmittance * 100)} % of it passing the shade, the crop taking up ${Math.round(sources.transpirationFraction * 100)} %) warms the air more than the handbook rate per floor area allows for.`,
+    );
+  }
+  if (light.from === 'entered') {
+    parts.push(
+      `The light factor also read the entered peak light (${quantityToken('illuminance', light.lux)} after shade), not the design day's own: leave it out to have both read the same sun.`,
+    );
+  }
+  return parts.join(' ');
 }
 
 /**
@@ -40,6 +104,10 @@ export function coolingCautions(
     padToFanDistanceM,
     staging,
     winter,
+    interiorLight,
+    allowedTemperatureRiseK,
+    coolingSetpointC,
+    transpirationFraction,
   }: CoolingCautionSources,
   ref: ReferenceData,
 ): string[] {
@@ -63,6 +131,16 @@ export function coolingCautions(
       `On the design day the cooling setpoint is not held at solar hours ${designDay.hoursNotHeld.join(', ')}; peak indoor ${quantityToken('temperature', padType ? (designDay.peakIndoorWithPadsC as number) : designDay.peakIndoorWithFansC)}.`,
     );
   }
+  const explanation = adequateButNotHeldExplanation({
+    capacity,
+    designDay,
+    padType,
+    interiorLight,
+    allowedTemperatureRiseK,
+    coolingSetpointC,
+    transpirationFraction,
+  });
+  if (explanation !== null) cautions.push(explanation);
   if (pads && pads.verdict === 'short') {
     cautions.push(
       `Pad area ${quantityToken('area', pads.areaM2)} is below the ${quantityToken('area', pads.areaNeededM2)} needed at the design face velocity: air will pass faster, cool less than the stated efficiency and may carry water droplets.`,

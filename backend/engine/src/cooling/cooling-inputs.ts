@@ -23,7 +23,10 @@ export interface CoolingConditions {
   summerDesignWetBulbC: number;
   /** allowed inlet-to-fan temperature rise, K */
   allowedTemperatureRiseK?: number;
-  /** peak light at plant height inside the house, lux */
+  /**
+   * peak light at plant height under the roof before any shade cloth, lux; when left out the design
+   * day's own clear-sky light through the roof is used. A shade cloth in place multiplies either.
+   */
   peakInteriorLightLux?: number;
   /** distance from inlet (pad) wall to the exhaust fans, m; defaults to the house length */
   padToFanDistanceM?: number;
@@ -36,8 +39,10 @@ export interface CoolingConditions {
 
 /** The optional conditions as used: entered, or the reference default (with the row it came from). */
 export interface CoolingInputsWithDefaults {
-  peakInteriorLightLux: number;
-  lightDefault: SourcedValue;
+  /** an entered peak interior light (before shade), or undefined for the design day's own */
+  enteredPeakInteriorLightLux: number | undefined;
+  /** lumens per watt of daylight, to turn the design day's irradiance into light */
+  luminousEfficacy: SourcedValue;
   allowedTemperatureRiseK: number;
   riseDefault: SourcedValue;
   transpirationFraction: number;
@@ -53,8 +58,7 @@ export function coolingInputsWithDefaults(
   house: HouseSpec,
   ref: ReferenceData,
 ): CoolingInputsWithDefaults {
-  const lightDefault = ventilationValue(ref, 'light-factor', 'defaultPeakInteriorLux');
-  const peakInteriorLightLux = conditions.peakInteriorLightLux ?? lightDefault.value;
+  const luminousEfficacy = ventilationValue(ref, 'daylight-luminous-efficacy', 'lumensPerWatt');
   const riseDefault = ventilationValue(ref, 'temperature-rise-factor', 'defaultAllowedRiseK');
   const allowedTemperatureRiseK = conditions.allowedTemperatureRiseK ?? riseDefault.value;
   const transpirationDefault = ventilationValue(ref, 'transpiration-share', 'fraction');
@@ -63,8 +67,8 @@ export function coolingInputsWithDefaults(
   const winterDefault = ventilationValue(ref, 'winter-ventilation-default-outdoor', 'outdoorC');
   const winterDesignC = conditions.winterDesignC ?? winterDefault.value;
   return {
-    peakInteriorLightLux,
-    lightDefault,
+    enteredPeakInteriorLightLux: conditions.peakInteriorLightLux,
+    luminousEfficacy,
     allowedTemperatureRiseK,
     riseDefault,
     transpirationFraction,

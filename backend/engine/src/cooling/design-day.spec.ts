@@ -70,6 +70,7 @@ describe('designDayBalance', () => {
     summerDesignWetBulbC: 23.5,
     floorAreaM2: 270,
     roofLightTransmittance: 0.78,
+    shadeTransmittance: 1,
     transpirationFraction: 0.5,
     conductanceWPerK: 2_300,
     installedFlowM3PerS: 15,
@@ -116,5 +117,32 @@ describe('designDayBalance', () => {
     );
     expect(fansOnly.hoursNotHeld).toContain(13);
     expect(fansOnly.hoursNotHeld).not.toContain(3);
+  });
+
+  it('a 50 % shade cloth halves the solar term every hour: G_h × 0.78 × 0.5 × (1 − 0.5) × 270', () => {
+    const open = designDayBalance(input, ref);
+    const shaded = designDayBalance({ ...input, shadeTransmittance: 0.5 }, ref);
+    shaded.hours.forEach((hour, index) => {
+      // the sun outside is the same; only what reaches the crop changes
+      expect(hour.globalHorizontalWPerM2).toBe(open.hours[index].globalHorizontalWPerM2);
+      expect(hour.solarGainW).toBeCloseTo(hour.globalHorizontalWPerM2 * 0.78 * 0.5 * (1 - 0.5) * 270, 6);
+      expect(hour.solarGainW).toBeCloseTo(open.hours[index].solarGainW / 2, 6);
+    });
+    // the light under roof and cloth is the peak outdoor irradiance × 0.78 × 0.5
+    expect(shaded.peakGlobalHorizontalWPerM2).toBe(Math.max(...open.hours.map((h) => h.globalHorizontalWPerM2)));
+    expect(shaded.peakInteriorIrradianceWPerM2).toBeCloseTo(shaded.peakGlobalHorizontalWPerM2 * 0.78 * 0.5, 9);
+    expect(open.peakInteriorIrradianceWPerM2).toBeCloseTo(open.peakGlobalHorizontalWPerM2 * 0.78, 9);
+    // less sun never warms the house
+    expect(shaded.peakIndoorWithFansC).toBeLessThan(open.peakIndoorWithFansC);
+    expect(shaded.hoursNotHeld.length).toBeLessThanOrEqual(open.hoursNotHeld.length);
+  });
+
+  it('names the air each hour draws in: the pad leaving air with pads, the outdoor air without', () => {
+    const withPads = designDayBalance(input, ref);
+    const fansOnly = designDayBalance({ ...input, padSaturationEfficiency: null }, ref);
+    expect(fansOnly.supplyAirByHourC).toEqual(fansOnly.hours.map((h) => h.outdoorC));
+    // at the 15:00 outdoor peak: 34 − 0.8 × (34 − 23.5) = 25.6 °C
+    expect(withPads.supplyAirByHourC[15]).toBeCloseTo(25.6, 1);
+    expect(withPads.supplyAirByHourC[15]).toBe(withPads.padLeavingAirAtPeakC);
   });
 });

@@ -26,7 +26,10 @@ import {
  * capped at saturation on cool hours.
  *
  * Indoor: steady state each hour (no storage in floor, benches or crop):
- *   solar gain to air = G_h × τ_roof × (1 − transpiration share) × floor area
+ *   solar gain to air = G_h × τ_roof × τ_shade × (1 − transpiration share) × floor area
+ * with τ_shade the share a shade cloth in place that month passes (1 without one). The light under
+ * the roof, G_h × τ_roof × τ_shade, is the one the exhaust rate's light factor reads too
+ * (`designDayInteriorLightLux`), so the two never see different suns.
  *   loss = UA (T_i − T_o) + ρ c_p V̇ (T_i − T_supply)
  * with T_supply = T_o for fans alone, or the pad leaving-air temperature with pads. Fans are
  * staged continuously: they stay off while the unventilated house is at or below the cooling
@@ -94,6 +97,8 @@ export interface DesignDayInput {
   summerDesignWetBulbC: number;
   floorAreaM2: number;
   roofLightTransmittance: number;
+  /** share of the sun a shade cloth in place on the design date passes; 1 without one */
+  shadeTransmittance: number;
   transpirationFraction: number;
   conductanceWPerK: number;
   installedFlowM3PerS: number;
@@ -123,6 +128,12 @@ export interface DesignDayResult {
   /** pad leaving-air temperature at the hour of the outdoor maximum, °C (null without pads) */
   padLeavingAirAtPeakC: number | null;
   humidityRatioKgPerKg: number;
+  /** highest clear-sky global horizontal irradiance outdoors in the day, W/m² */
+  peakGlobalHorizontalWPerM2: number;
+  /** the same under the roof and any shade cloth: peak × τ_roof × τ_shade, W/m² */
+  peakInteriorIrradianceWPerM2: number;
+  /** temperature of the air the installed cooling draws in each hour (outdoor, or pad leaving air), °C */
+  supplyAirByHourC: number[];
 }
 
 export function designDayBalance(input: DesignDayInput, ref: ReferenceData): DesignDayResult {
@@ -133,7 +144,9 @@ export function designDayBalance(input: DesignDayInput, ref: ReferenceData): Des
   const cpJPerKgK = airSpecificHeat(ref).value;
   const outdoor = outdoorTemperatureProfileC(input.summerDesignC, input.dailyRangeK, ref);
   const hourOfOutdoorPeak = outdoor.indexOf(maxOf(outdoor));
-  const absorbedShare = input.roofLightTransmittance * (1 - input.transpirationFraction);
+  const interiorShare = input.roofLightTransmittance * input.shadeTransmittance;
+  const absorbedShare = interiorShare * (1 - input.transpirationFraction);
+  const supplyAirByHourC: number[] = [];
 
   let padLeavingAirAtPeakC: number | null = null;
   const hours: DesignDayHour[] = outdoor.map((outdoorC, hour) => {
@@ -157,9 +170,10 @@ export function designDayBalance(input: DesignDayInput, ref: ReferenceData): Des
     });
 
     let withPads: HourlyBalance | null = null;
+    let padAirC: number | null = null;
     if (input.padSaturationEfficiency !== null) {
       const wetBulbC = wetBulbFromHumidityRatioC(outdoorC, humidityRatio, pressurePa);
-      const padAirC = padLeavingAirC(outdoorC, wetBulbC, input.padSaturationEfficiency);
+      padAirC = padLeavingAirC(outdoorC, wetBulbC, input.padSaturationEfficiency);
       if (hour === hourOfOutdoorPeak) padLeavingAirAtPeakC = padAirC;
       withPads = hourlyIndoorBalance({
         solarGainW,
@@ -172,6 +186,7 @@ export function designDayBalance(input: DesignDayInput, ref: ReferenceData): Des
     }
     // fan staging and "held" describe the cooling the house has: pads when it has them
     const installed = withPads ?? withFans;
+    supplyAirByHourC.push(padAirC ?? outdoorC);
 
     return {
       hour,
@@ -186,6 +201,7 @@ export function designDayBalance(input: DesignDayInput, ref: ReferenceData): Des
     };
   });
 
+  const peakGlobalHorizontalWPerM2 = maxOf(hours.map((h) => h.globalHorizontalWPerM2));
   return {
     date: input.date,
     hours,
@@ -195,5 +211,8 @@ export function designDayBalance(input: DesignDayInput, ref: ReferenceData): Des
     hoursNotHeld: hours.filter((h) => !h.setpointHeld).map((h) => h.hour),
     padLeavingAirAtPeakC,
     humidityRatioKgPerKg: humidityRatio,
+    peakGlobalHorizontalWPerM2,
+    peakInteriorIrradianceWPerM2: peakGlobalHorizontalWPerM2 * interiorShare,
+    supplyAirByHourC,
   };
 }

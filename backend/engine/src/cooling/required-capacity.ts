@@ -66,8 +66,52 @@ export function velocityFactor(padToFanDistanceM: number, ref: ReferenceData): n
   return Math.max(1, Math.sqrt(referenceDistanceM / padToFanDistanceM));
 }
 
+/** F_light = peak interior light / the reference light of the base rate (5,000 fc). */
 export function lightFactor(peakInteriorLightLux: number, ref: ReferenceData): number {
   return peakInteriorLightLux / ventilationValue(ref, 'light-factor', 'referenceLux').value;
+}
+
+/** The peak interior light the light factor reads, and where it came from. */
+export interface InteriorLight {
+  /** 'design day': the design day's clear-sky sun through the roof; 'entered': a figure in the request */
+  from: 'design day' | 'entered';
+  /** peak light at plant height under the roof, before any shade cloth, lux */
+  unshadedLux: number;
+  /** share a shade cloth in place on the design date passes; 1 without one */
+  shadeTransmittance: number;
+  /** unshadedLux × shadeTransmittance: what the light factor reads, lux */
+  lux: number;
+}
+
+/**
+ * Peak interior light for the light factor. Without an entered figure it is the design day's own
+ * light: the day's highest clear-sky global irradiance × the roof's light transmittance (less the
+ * opaque kneewall's share) × the luminous efficacy of daylight, so the exhaust rate and the
+ * hour-by-hour balance see the same sun. An entered figure is the light under the roof before
+ * any shade cloth. A shade cloth in place multiplies either; shade never adds light.
+ */
+export function interiorLight(
+  input: {
+    enteredUnshadedLux?: number;
+    peakGlobalHorizontalWPerM2: number;
+    roofLightTransmittance: number;
+    shadeTransmittance: number;
+  },
+  ref: ReferenceData,
+): InteriorLight {
+  const entered = input.enteredUnshadedLux !== undefined;
+  const unshadedLux = entered
+    ? (input.enteredUnshadedLux as number)
+    : input.peakGlobalHorizontalWPerM2 *
+      input.roofLightTransmittance *
+      ventilationValue(ref, 'daylight-luminous-efficacy', 'lumensPerWatt').value;
+  const shade = Math.min(1, Math.max(0, input.shadeTransmittance));
+  return {
+    from: entered ? 'entered' : 'design day',
+    unshadedLux,
+    shadeTransmittance: shade,
+    lux: unshadedLux * shade,
+  };
 }
 
 export function temperatureRiseFactor(allowedTemperatureRiseK: number, ref: ReferenceData): number {

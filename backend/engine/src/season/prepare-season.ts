@@ -10,6 +10,7 @@ import { dailySetpoints, validateCalendar } from './production-calendar';
 import { buildSeasonHours, isLoggedTemperatures, type LoggedTemperatures, type SeasonRange } from './season-hours';
 import { simulateSeason, type SeasonHours, type SimulationParameters } from './season-simulation';
 import { SunCache, type SunSite } from './sun-hours';
+import { shadeTransmittanceByMonth, validateShadeCloth } from '../solar/shade-cloth';
 import type {
   EstimateSeasonInput,
   FuelAmount,
@@ -90,6 +91,7 @@ export function prepareSeason(
   if (!input || typeof input !== 'object') throw new EngineInputError('input', 'input is required');
   const site = validateSite(input.site);
   validateHouseSetpoints(input.house);
+  validateShadeCloth(input.house);
   const fuel = validateFuelPrice(input.fuel, ref);
   validateHeaterEfficiency(input.heaterEfficiency);
   requireHhvEfficiency('heaterEfficiency', input.heaterEfficiency, fuel);
@@ -206,6 +208,8 @@ export function variantParameters(
           thermal.envelopeLightFactor *
           thermal.geometry.floorAreaM2 *
           prepared.solarUsefulFraction,
+      // a shade cloth takes its share of the sun in the months it is in place
+      solarShadeByMonth: shadeTransmittanceByMonth(variant.house),
       daySetpointC: options.nightSetpointAllDay ? nightSetpointC : daySetpointC,
       nightSetpointC,
       heaterOutputW: options.uncapped ? Infinity : variant.heaterOutputW,

@@ -2,6 +2,7 @@ import type { Confidence } from '../vocabulary';
 import { referenceRow, type ReferenceData, type ReferenceRow } from '../reference-data.types';
 import { PEAK_ROW_ID, peakHoursAfterSolarNoon } from '../climate/daily-temperature-curve';
 import { DEFAULT_CLEARNESS_ROW_ID, type SiteClimate } from '../climate/site-climate';
+import { shadeClothInWords } from '../solar/shade-cloth';
 import { priceUnitLabel } from './fuel';
 import type { HouseThermal } from './house-heat-loss';
 import { isLoggedTemperatures, type LoggedTemperatures } from './season-hours';
@@ -86,6 +87,17 @@ export function seasonAssumptions(
     confidence: roof.lightConfidence ?? roof.confidence,
     overridden: false,
   });
+  if (variant.house.shadeCloth) {
+    list.push({
+      key: 'shade-cloth',
+      label: 'Shade cloth: the daytime solar gain is multiplied by the share it passes in the months it is in place',
+      value: shadeClothInWords(variant.house.shadeCloth),
+      unit: '',
+      source: 'The house as entered (typical cloths in reference-data/shade-cloths.json)',
+      confidence: 'user-entered',
+      overridden: false,
+    });
+  }
   list.push(
     rowAssumption(
       'solar-useful-fraction',

@@ -67,6 +67,69 @@ describe('hourly season simulation', () => {
   });
 });
 
+describe('hourly season simulation with a shade cloth', () => {
+  /** Two hand-made days, one in June (slot 0) and one in July (slot 1), the same hours as `oneDay`. */
+  function juneAndJuly(irradianceWPerM2: number): SeasonHours {
+    const day = oneDay(irradianceWPerM2);
+    const twice = (a: Float64Array) => {
+      const both = new Float64Array(a.length * 2);
+      both.set(a);
+      both.set(a, a.length);
+      return both;
+    };
+    return {
+      ...day,
+      dayCount: 2,
+      hourCount: 48,
+      outdoorC: twice(day.outdoorC),
+      dayFraction: twice(day.dayFraction),
+      clearSkyGlobalHorizontalWPerM2: twice(day.clearSkyGlobalHorizontalWPerM2),
+      clearnessOfDay: new Float64Array([0.5, 0.5]),
+      monthSlotOfDay: new Uint8Array([0, 1]),
+      months: [
+        { year: 2026, month: 6 },
+        { year: 2026, month: 7 },
+      ],
+      dailyMinC: new Float64Array([0, 0]),
+      dailyMaxC: new Float64Array([0, 0]),
+    };
+  }
+  const twoDays = { daySetpointC: new Float64Array([20, 20]), nightSetpointC: new Float64Array([10, 10]) };
+
+  it('a 50 % cloth in July only halves the July gain: 1000 W/m² × 0.5 clearness × 2 m² × 0.5 = 500 W', () => {
+    const shade = new Array(12).fill(1);
+    shade[6] = 0.5; // July
+    const hours = juneAndJuly(1000);
+    const result = simulateSeason(hours, parameters({ ...twoDays, solarGainAreaM2: 2, solarShadeByMonth: shade }));
+    // June: gain 1000 W against a 2000 W loss → 1000 W of heat for 8 h; July: 500 W → 1500 W for 8 h;
+    // both days: 0.5 h × 2000 W at the sunrise hour (no sun yet) and 15.5 h × 600 W at night
+    const night = 0.5 * 2000 + 15.5 * 600;
+    expect(result.monthlyHeatWh[0]).toBeCloseTo(8 * 1000 + night, 9);
+    expect(result.monthlyHeatWh[1]).toBeCloseTo(8 * 1500 + night, 9);
+    expect(result.solarOffsetWh).toBeCloseTo(8 * 1000 + 8 * 500, 9);
+    // without shade both days are June's
+    const open = simulateSeason(hours, parameters({ ...twoDays, solarGainAreaM2: 2 }));
+    expect(open.monthlyHeatWh[1]).toBeCloseTo(8 * 1000 + night, 9);
+  });
+
+  it('shade never adds heat from the sun, whatever share it is given (fast-check, seeded)', () => {
+    fc.assert(
+      fc.property(
+        fc.array(fc.double({ min: -1, max: 2, noNaN: true }), { minLength: 12, maxLength: 12 }),
+        fc.double({ min: 0, max: 2000, noNaN: true }),
+        (shade, irradiance) => {
+          const hours = juneAndJuly(irradiance);
+          const open = simulateSeason(hours, parameters({ ...twoDays, solarGainAreaM2: 3 }));
+          const shaded = simulateSeason(hours, parameters({ ...twoDays, solarGainAreaM2: 3, solarShadeByMonth: shade }));
+          expect(shaded.solarOffsetWh).toBeLessThanOrEqual(open.solarOffsetWh + 1e-9);
+          expect(shaded.totalHeatWh).toBeGreaterThanOrEqual(open.totalHeatWh - 1e-9);
+        },
+      ),
+      { seed: 20261202, numRuns: 100 },
+    );
+  });
+});
+
 describe('hourly season simulation with the heaters’ output as a limit', () => {
   it('delivers at most the installed output in each part of the hour; the rest is unmet', () => {
     // demand: 8.5 h at 2000 W by day, 15.5 h at 600 W by night; heaters give 500 W

@@ -4,7 +4,8 @@
  * Per hour (local standard time, values at mid-hour):
  *   by day   (share f of the hour between sunrise and sunset):
  *            q_day   = max(0, UA_open · (T_day − T_out) − G),
- *            G = clear-sky global horizontal × clearness × roof transmittance × floor area × useful fraction
+ *            G = clear-sky global horizontal × clearness × roof transmittance × shade × floor area × useful fraction
+ *            (shade: the share a shade cloth passes in the months it is in place, 1 in the others)
  *   by night (share 1 − f):
  *            q_night = max(0, UA_curtain · (T_night − T_out))
  *   heat = f · q_day + (1 − f) · q_night (W, average over the hour)
@@ -54,6 +55,11 @@ export interface SimulationParameters {
   uaNightWPerK: number;
   /** W of useful solar gain per W/m² of horizontal irradiance (transmittance × floor area × useful fraction), m² */
   solarGainAreaM2: number;
+  /**
+   * share of the sun a shade cloth passes, by calendar month (index 0 = January); 1 where no cloth
+   * is in place. Absent: no shade in any month.
+   */
+  solarShadeByMonth?: ArrayLike<number>;
   /** per day; NaN on unheated days, °C */
   daySetpointC: Float64Array;
   nightSetpointC: Float64Array;
@@ -99,6 +105,11 @@ export function simulateSeason(hours: SeasonHours, parameters: SimulationParamet
   const irradiance = hours.clearSkyGlobalHorizontalWPerM2;
   const { uaDayWPerK, uaNightWPerK, solarGainAreaM2, daySetpointC, nightSetpointC } = parameters;
   const capW = Number.isNaN(parameters.heaterOutputW) ? Infinity : Math.max(0, parameters.heaterOutputW);
+  // the shade of each month slot, looked up once (a cloth never adds sun: clamped to [0, 1])
+  const shadeOfSlot = hours.months.map(({ month }) => {
+    const shade = parameters.solarShadeByMonth?.[month - 1] ?? 1;
+    return Math.min(1, Math.max(0, shade));
+  });
 
   let totalHeatWh = 0;
   let unmetHeatWh = 0;
@@ -113,8 +124,8 @@ export function simulateSeason(hours: SeasonHours, parameters: SimulationParamet
     const dayC = daySetpointC[day];
     if (dayC !== dayC) continue; // NaN: unheated day
     const nightC = nightSetpointC[day];
-    const gainPerIrradiance = solarGainAreaM2 * hours.clearnessOfDay[day];
     const slot = hours.monthSlotOfDay[day];
+    const gainPerIrradiance = solarGainAreaM2 * hours.clearnessOfDay[day] * shadeOfSlot[slot];
     let monthWh = 0;
     let monthUnmetWh = 0;
     let monthHoursBelow = 0;

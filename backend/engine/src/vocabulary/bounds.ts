@@ -30,6 +30,10 @@ export const BOUNDS = {
   longitudeDeg: { min: -180, max: 180 },
   relativeHumidityPct: { min: 5, max: 100 },
   designWindSpeedMPerS: { min: 0, max: 25 },
+  /** share of the sun a shade cloth passes (0 blocks all, 1 is no shade) */
+  shadeClothTransmittance: { min: 0, max: 1 },
+  /** calendar months a shade cloth may be in place: 1 = January … 12 = December */
+  shadeClothMonth: { min: 1, max: 12 },
 } as const;
 
 export type BoundName = keyof typeof BOUNDS;

@@ -82,7 +82,8 @@ export class CoolingConditionsDto {
 
   @ApiPropertyOptional({
     ...range(COOLING_BOUNDS.peakInteriorLightLux),
-    description: 'peak light at plant height, lux; default from reference data',
+    description:
+      "peak light at plant height under the roof before any shade cloth, lux (a cloth in place multiplies it); when left out, the design day's own clear-sky light through the roof, the same sun the hour-by-hour balance uses",
   })
   @Omittable()
   @IsNumber()

@@ -44,6 +44,29 @@ export class CoolingCapacityDto {
   @ApiProperty({ enum: ['adequate', 'short'] }) inletVerdict: 'adequate' | 'short';
 }
 
+export class InteriorLightDto {
+  @ApiProperty({
+    enum: ['design day', 'entered'],
+    description:
+      "'design day': the design day's own clear-sky sun through the roof (the same sun as the hour-by-hour balance); 'entered': the request's peakInteriorLightLux",
+  })
+  from: 'design day' | 'entered';
+  @ApiProperty({ description: 'peak light at plant height under the roof before any shade cloth, lx' })
+  unshadedLux: number;
+  @ApiProperty({ minimum: 0, maximum: 1, description: 'share a shade cloth in place on the design date passes; 1 without' })
+  shadeTransmittance: number;
+  @ApiProperty({ description: 'unshadedLux × shadeTransmittance: the light the light factor reads, lx' })
+  lux: number;
+}
+
+export class CoolingShadeClothDto {
+  @ApiProperty({ minimum: 0, maximum: 1 }) solarTransmittance: number;
+  @ApiProperty({ type: Number, isArray: true, description: 'months the cloth is in place, 1–12, in calendar order' })
+  months: number[];
+  @ApiProperty({ description: 'the design date falls in one of its months: only then does it shade the design day' })
+  inPlaceOnDesignDate: boolean;
+}
+
 export class DesignDayHourDto {
   @ApiProperty({ minimum: 0, maximum: 23, description: 'local apparent solar hour' }) hour: number;
   @ApiProperty({ description: '°C' }) outdoorC: number;
@@ -119,6 +142,10 @@ export class CoolingAssumptionDto {
 export class CoolingEstimateDto {
   @ApiProperty({ type: AirExchangeDto }) airExchange: AirExchangeDto;
   @ApiProperty({ type: CoolingCapacityDto }) capacity: CoolingCapacityDto;
+  @ApiProperty({ type: InteriorLightDto, description: 'the peak interior light the light factor read' })
+  interiorLight: InteriorLightDto;
+  @ApiProperty({ type: CoolingShadeClothDto, nullable: true, description: "the house's shade cloth; null without one" })
+  shadeCloth: CoolingShadeClothDto | null;
   @ApiProperty({ type: DesignDayDto }) designDay: DesignDayDto;
   @ApiProperty({ type: PadSizingDto, nullable: true, description: 'null without evaporative pads' })
   pads: PadSizingDto | null;
@@ -140,7 +167,11 @@ export class CoolingConditionsSourceDto {
   @ApiProperty({ enum: ['farm climate', 'request'] }) dailyRangeK: 'farm climate' | 'request';
   @ApiProperty({ enum: ['farm climate', 'request'] }) summerDesignWetBulbC: 'farm climate' | 'request';
   @ApiProperty({ enum: ['reference data', 'request'] }) allowedTemperatureRiseK: 'reference data' | 'request';
-  @ApiProperty({ enum: ['reference data', 'request'] }) peakInteriorLightLux: 'reference data' | 'request';
+  @ApiProperty({
+    enum: ['design day', 'request'],
+    description: "'design day': the design day's own clear-sky light through the roof",
+  })
+  peakInteriorLightLux: 'design day' | 'request';
   @ApiProperty({ enum: ['house length', 'request'] }) padToFanDistanceM: 'house length' | 'request';
   @ApiProperty({ enum: ['reference data', 'request'] }) transpirationFraction: 'reference data' | 'request';
   @ApiProperty({ enum: ['none', 'request'] }) evaporativePad: 'none' | 'request';

@@ -3,6 +3,7 @@ import { ApiProperty, ApiPropertyOptional, PartialType } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
 import {
   ArrayMaxSize,
+  ArrayUnique,
   IsArray,
   IsBoolean,
   IsIn,
@@ -52,6 +53,37 @@ export class CoveringOverridesDto {
   @Min(BOUNDS.uValueWPerM2K.min)
   @Max(BOUNDS.uValueWPerM2K.max)
   endwalls?: number;
+}
+
+export class ShadeClothDto {
+  @ApiProperty({
+    ...range('shadeClothTransmittance'),
+    description:
+      'share of the sun (heat and light alike) the cloth passes, 0–1: a "50 % shade" cloth passes about 0.5 (typical cloths in reference-data shade-cloths)',
+    example: 0.5,
+  })
+  @IsNumber()
+  @Min(BOUNDS.shadeClothTransmittance.min)
+  @Max(BOUNDS.shadeClothTransmittance.max)
+  solarTransmittance: number;
+
+  @ApiProperty({
+    type: Number,
+    isArray: true,
+    minimum: BOUNDS.shadeClothMonth.min,
+    maximum: BOUNDS.shadeClothMonth.max,
+    maxItems: 12,
+    uniqueItems: true,
+    description: 'calendar months the cloth is in place, 1 = January … 12 = December, each once',
+    example: [5, 6, 7, 8, 9],
+  })
+  @IsArray()
+  @ArrayMaxSize(12)
+  @ArrayUnique()
+  @IsInt({ each: true })
+  @Min(BOUNDS.shadeClothMonth.min, { each: true })
+  @Max(BOUNDS.shadeClothMonth.max, { each: true })
+  months: number[];
 }
 
 export class HeaterGroupDto {
@@ -192,6 +224,18 @@ export class HouseSpecDto {
   @Length(1, 80)
   curtainId?: string | null;
 
+  @ApiPropertyOptional({
+    type: ShadeClothDto,
+    nullable: true,
+    description:
+      'a shade cloth in place in some months: on the cooling design day it takes its share of the solar heat and of the light the exhaust rate reads, and in the season of the daytime solar gain; null for none',
+  })
+  @IsOptional()
+  @IsObject()
+  @ValidateNested()
+  @Type(() => ShadeClothDto)
+  shadeCloth?: ShadeClothDto | null;
+
   @ApiProperty({ type: HeaterGroupDto, isArray: true, maxItems: BOUNDS.heaterGroups.max })
   @IsArray()
   @ArrayMaxSize(BOUNDS.heaterGroups.max)
@@ -236,6 +280,8 @@ export class HouseDto extends CreateHouseDto {
   @ApiProperty({ type: CoveringOverridesDto }) declare coveringUOverridesWPerM2K: CoveringOverridesDto;
   @ApiProperty({ nullable: true, type: Number }) declare airChangesPerHourOverride: number | null;
   @ApiProperty({ nullable: true, type: String }) declare curtainId: string | null;
+  @ApiProperty({ nullable: true, type: ShadeClothDto, description: 'the shade cloth, or null for none' })
+  declare shadeCloth: ShadeClothDto | null;
   @ApiProperty({ description: 'raised by one on every save; send it back in If-Match to update' }) version: number;
   @ApiProperty({ nullable: true, type: Number }) declare kneewallHeightM: number | null;
   @ApiProperty({ nullable: true, type: String }) declare kneewallId: string | null;

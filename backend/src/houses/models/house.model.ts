@@ -1,6 +1,6 @@
 import { BelongsTo, Column, DataType, ForeignKey, Model, Table } from 'sequelize-typescript';
 import type { HouseShape, SurfaceGroup } from '@thermbay/engine/vocabulary';
-import type { ExhaustFans, HeaterGroup, Setpoints } from '@thermbay/engine/house.types';
+import type { ExhaustFans, HeaterGroup, Setpoints, ShadeCloth } from '@thermbay/engine/house.types';
 import { Farm } from '../../farms/models/farm.model';
 
 /** A stored house. Every number is SI; nested groups are JSON columns mapped 1:1 onto HouseSpec. */
@@ -60,6 +60,10 @@ export class House extends Model {
 
   @Column({ type: DataType.STRING, allowNull: true })
   declare kneewallId: string | null;
+
+  /** { solarTransmittance, months }, or null for no shade cloth (migration 0014) */
+  @Column({ type: DataType.JSON, allowNull: true, defaultValue: null })
+  declare shadeCloth: ShadeCloth | null;
 
   @Column({ type: DataType.JSON, allowNull: false, defaultValue: [] })
   declare heaters: HeaterGroup[];
