@@ -111,13 +111,14 @@ describe('a house’s shade cloth (e2e)', () => {
       expect(hour.solarGainW).toBeCloseTo(openResult.designDay.hours[index].solarGainW / 2, 6);
     });
     const words = shadedResult.assumptions.find((a: { key: string }) => a.key === 'shadeCloth');
-    expect(words.value).toBe('a shade cloth passing 50 % of the sun, in place May–September: in place on the design date');
+    expect(words.value).toBe(
+      'a shade cloth passing 50 % of the sun, in place May–September: in place on the design date',
+    );
 
     // in January the same cloth is not in place and shades nothing
     const january = { conditions: { designDate: '2026-01-21' } };
-    const winter = (
-      await t.http.post(`/api/houses/${shaded.id}/cooling`).set(bearer(grower)).send(january).expect(200)
-    ).body;
+    const winter = (await t.http.post(`/api/houses/${shaded.id}/cooling`).set(bearer(grower)).send(january).expect(200))
+      .body;
     expect(winter.shadeCloth.inPlaceOnDesignDate).toBe(false);
     expect(winter.interiorLight.shadeTransmittance).toBe(1);
   });

@@ -111,8 +111,9 @@ describe('estimateCooling', () => {
     // = 10.9728 × 1.03937 = 11.405 m³/s (more than the 10 m³/s installed); ÷ 1.27 m/s (250 fpm) = 8.98 m²
     expect(pads.areaNeededM2).toBeCloseTo(8.98, 2);
     expect(pads.verdict).toBe('adequate');
-    const small = run({ conditions: { ...baseLight, evaporativePad: { padTypeId: 'cellulose-100mm', areaM2: 8.9 } } })
-      .pads!;
+    const small = run({
+      conditions: { ...baseLight, evaporativePad: { padTypeId: 'cellulose-100mm', areaM2: 8.9 } },
+    }).pads!;
     expect(small.verdict).toBe('short');
     expect(pads.leavingAirAtPeakC).toBeCloseTo(34 - pads.saturationEfficiency * (34 - 23.5), 1);
     expect(result.designDay.peakIndoorWithPadsC!).toBeLessThan(result.designDay.peakIndoorWithFansC);

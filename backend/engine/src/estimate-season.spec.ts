@@ -474,7 +474,11 @@ describe('estimateSeason with a shade cloth', () => {
     const base = demoSeasonInput();
     expect(
       fieldOf(() =>
-        estimateSeason({ ...base, house: { ...base.house, shadeCloth: { solarTransmittance: 0.5, months: [0] } } }, ref, sunCache),
+        estimateSeason(
+          { ...base, house: { ...base.house, shadeCloth: { solarTransmittance: 0.5, months: [0] } } },
+          ref,
+          sunCache,
+        ),
       ),
     ).toBe('house.shadeCloth.months[0]');
   });

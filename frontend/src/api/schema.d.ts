@@ -1443,6 +1443,24 @@ export interface components {
             /** @description W/(m²·K) */
             endwalls?: number;
         };
+        ShadeClothDto: {
+            /**
+             * @description share of the sun (heat and light alike) the cloth passes, 0–1: a "50 % shade" cloth passes about 0.5 (typical cloths in reference-data shade-cloths)
+             * @example 0.5
+             */
+            solarTransmittance: number;
+            /**
+             * @description calendar months the cloth is in place, 1 = January … 12 = December, each once
+             * @example [
+             *       5,
+             *       6,
+             *       7,
+             *       8,
+             *       9
+             *     ]
+             */
+            months: number[];
+        };
         HeaterGroupDto: {
             count: number;
             /** @description rated input of one unit, W */
@@ -1494,6 +1512,8 @@ export interface components {
             kneewallId?: string | null;
             /** @description reference-data curtains id, drawn at night */
             curtainId?: string | null;
+            /** @description the shade cloth, or null for none */
+            shadeCloth?: components["schemas"]["ShadeClothDto"] | null;
             heaters: components["schemas"]["HeaterGroupDto"][];
             exhaustFans: components["schemas"]["ExhaustFansDto"];
             /** @description free louvre or inlet area, m² */
@@ -1533,6 +1553,8 @@ export interface components {
             kneewallId?: string | null;
             /** @description reference-data curtains id, drawn at night */
             curtainId?: string | null;
+            /** @description a shade cloth in place in some months: on the cooling design day it takes its share of the solar heat and of the light the exhaust rate reads, and in the season of the daytime solar gain; null for none */
+            shadeCloth?: components["schemas"]["ShadeClothDto"] | null;
             heaters: components["schemas"]["HeaterGroupDto"][];
             exhaustFans: components["schemas"]["ExhaustFansDto"];
             /** @description free louvre or inlet area, m² */
@@ -1566,6 +1588,8 @@ export interface components {
             kneewallId?: string | null;
             /** @description reference-data curtains id, drawn at night */
             curtainId?: string | null;
+            /** @description a shade cloth in place in some months: on the cooling design day it takes its share of the solar heat and of the light the exhaust rate reads, and in the season of the daytime solar gain; null for none */
+            shadeCloth?: components["schemas"]["ShadeClothDto"] | null;
             heaters?: components["schemas"]["HeaterGroupDto"][];
             exhaustFans?: components["schemas"]["ExhaustFansDto"];
             /** @description free louvre or inlet area, m² */
@@ -1631,6 +1655,8 @@ export interface components {
             kneewallId?: string | null;
             /** @description reference-data curtains id, drawn at night */
             curtainId?: string | null;
+            /** @description a shade cloth in place in some months: on the cooling design day it takes its share of the solar heat and of the light the exhaust rate reads, and in the season of the daytime solar gain; null for none */
+            shadeCloth?: components["schemas"]["ShadeClothDto"] | null;
             heaters: components["schemas"]["HeaterGroupDto"][];
             exhaustFans: components["schemas"]["ExhaustFansDto"];
             /** @description free louvre or inlet area, m² */
@@ -1832,7 +1858,7 @@ export interface components {
             summerDesignWetBulbC: number;
             /** @description allowed inlet-to-fan rise, K; default from reference data */
             allowedTemperatureRiseK?: number;
-            /** @description peak light at plant height, lux; default from reference data */
+            /** @description peak light at plant height under the roof before any shade cloth, lux (a cloth in place multiplies it); when left out, the design day's own clear-sky light through the roof, the same sun the hour-by-hour balance uses */
             peakInteriorLightLux?: number;
             /** @description inlet (pad) wall to fans, m; default the house length */
             padToFanDistanceM?: number;
@@ -1888,6 +1914,26 @@ export interface components {
             inletAreaM2: number;
             /** @enum {string} */
             inletVerdict: "adequate" | "short";
+        };
+        InteriorLightDto: {
+            /**
+             * @description 'design day': the design day's own clear-sky sun through the roof (the same sun as the hour-by-hour balance); 'entered': the request's peakInteriorLightLux
+             * @enum {string}
+             */
+            from: "design day" | "entered";
+            /** @description peak light at plant height under the roof before any shade cloth, lx */
+            unshadedLux: number;
+            /** @description share a shade cloth in place on the design date passes; 1 without */
+            shadeTransmittance: number;
+            /** @description unshadedLux × shadeTransmittance: the light the light factor reads, lx */
+            lux: number;
+        };
+        CoolingShadeClothDto: {
+            solarTransmittance: number;
+            /** @description months the cloth is in place, 1–12, in calendar order */
+            months: number[];
+            /** @description the design date falls in one of its months: only then does it shade the design day */
+            inPlaceOnDesignDate: boolean;
         };
         DesignDayHourDto: {
             /** @description local apparent solar hour */
@@ -1979,6 +2025,10 @@ export interface components {
         CoolingEstimateDto: {
             airExchange: components["schemas"]["AirExchangeDto"];
             capacity: components["schemas"]["CoolingCapacityDto"];
+            /** @description the peak interior light the light factor read */
+            interiorLight: components["schemas"]["InteriorLightDto"];
+            /** @description the house's shade cloth; null without one */
+            shadeCloth: components["schemas"]["CoolingShadeClothDto"] | null;
             designDay: components["schemas"]["DesignDayDto"];
             /** @description null without evaporative pads */
             pads: components["schemas"]["PadSizingDto"] | null;
@@ -2065,7 +2115,7 @@ export interface components {
             summerDesignWetBulbC?: number;
             /** @description allowed inlet-to-fan rise, K; default from reference data */
             allowedTemperatureRiseK?: number;
-            /** @description peak light at plant height, lux; default from reference data */
+            /** @description peak light at plant height under the roof before any shade cloth, lux (a cloth in place multiplies it); when left out, the design day's own clear-sky light through the roof, the same sun the hour-by-hour balance uses */
             peakInteriorLightLux?: number;
             /** @description inlet (pad) wall to fans, m; default the house length */
             padToFanDistanceM?: number;
@@ -2090,8 +2140,11 @@ export interface components {
             summerDesignWetBulbC: "farm climate" | "request";
             /** @enum {string} */
             allowedTemperatureRiseK: "reference data" | "request";
-            /** @enum {string} */
-            peakInteriorLightLux: "reference data" | "request";
+            /**
+             * @description 'design day': the design day's own clear-sky light through the roof
+             * @enum {string}
+             */
+            peakInteriorLightLux: "design day" | "request";
             /** @enum {string} */
             padToFanDistanceM: "house length" | "request";
             /** @enum {string} */
@@ -2104,6 +2157,10 @@ export interface components {
         HouseCoolingEstimateDto: {
             airExchange: components["schemas"]["AirExchangeDto"];
             capacity: components["schemas"]["CoolingCapacityDto"];
+            /** @description the peak interior light the light factor read */
+            interiorLight: components["schemas"]["InteriorLightDto"];
+            /** @description the house's shade cloth; null without one */
+            shadeCloth: components["schemas"]["CoolingShadeClothDto"] | null;
             designDay: components["schemas"]["DesignDayDto"];
             /** @description null without evaporative pads */
             pads: components["schemas"]["PadSizingDto"] | null;

@@ -34,6 +34,14 @@ export const referenceDataFixture: ReferenceData = {
     description: 'test rows',
     rows: [{ id: 'energy-screen', label: 'Energy screen', source: 'test', confidence: 'memory' }],
   },
+  'shade-cloths': {
+    title: 'Shade cloths',
+    description: 'test rows',
+    rows: [
+      { id: 'shade-30', label: '30 % shade cloth', solarTransmittance: 0.7, source: 'test', confidence: 'memory' },
+      { id: 'shade-50', label: '50 % shade cloth', solarTransmittance: 0.5, source: 'test', confidence: 'memory' },
+    ],
+  },
   fuels: {
     title: 'Fuels',
     description: 'test rows',
@@ -60,6 +68,7 @@ export const houseFixture: House = {
   curtainId: null,
   kneewallHeightM: null,
   kneewallId: null,
+  shadeCloth: null,
   heaters: [{ count: 2, ratedInputW: 73_267.77, efficiency: 0.8, fuelId: 'natural-gas', heaterType: null }],
   exhaustFans: { count: 2, capacityEachM3PerS: 4.719474432 },
   inletAreaM2: 2.4,

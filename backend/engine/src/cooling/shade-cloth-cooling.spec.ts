@@ -57,7 +57,9 @@ describe('the light factor and the design day read the same sun', () => {
   it('the design-day solar gain at the brightest hour is the light factor’s light ÷ 110 lm/W × (1 − transpiration) × floor', () => {
     for (const shadeCloth of [null, fiftyPercent]) {
       const result = run({ shadeCloth });
-      const brightest = result.designDay.hours.reduce((a, b) => (b.globalHorizontalWPerM2 > a.globalHorizontalWPerM2 ? b : a));
+      const brightest = result.designDay.hours.reduce((a, b) =>
+        b.globalHorizontalWPerM2 > a.globalHorizontalWPerM2 ? b : a,
+      );
       // 270 m² floor, transpiration share 0.5 (reference default)
       expect(brightest.solarGainW).toBeCloseTo((result.interiorLight.lux / 110) * 0.5 * 270, 6);
     }
@@ -158,7 +160,9 @@ describe('when "fans adequate" and "setpoint not held" can still both stand', ()
     // time the outdoor air is the 34 °C design maximum, itself above the 27 °C setpoint
     expect(explanation).toContain('within 3.9 K of the outdoor air coming in');
     expect(explanation).toContain('27.0 °C cooling setpoint');
-    expect(explanation).toMatch(/At solar hours [\d, ]*15[\d, ]* the outdoor air itself \(up to 34\.0 °C\) is at or above/);
+    expect(explanation).toMatch(
+      /At solar hours [\d, ]*15[\d, ]* the outdoor air itself \(up to 34\.0 °C\) is at or above/,
+    );
     // the hours in the list are exactly the design day's hours not held
     const listed = [...(explanation ?? '').matchAll(/At solar hours ([\d, ]+) the/g)].flatMap((m) =>
       m[1].split(', ').map(Number),

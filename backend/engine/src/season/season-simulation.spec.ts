@@ -120,7 +120,10 @@ describe('hourly season simulation with a shade cloth', () => {
         (shade, irradiance) => {
           const hours = juneAndJuly(irradiance);
           const open = simulateSeason(hours, parameters({ ...twoDays, solarGainAreaM2: 3 }));
-          const shaded = simulateSeason(hours, parameters({ ...twoDays, solarGainAreaM2: 3, solarShadeByMonth: shade }));
+          const shaded = simulateSeason(
+            hours,
+            parameters({ ...twoDays, solarGainAreaM2: 3, solarShadeByMonth: shade }),
+          );
           expect(shaded.solarOffsetWh).toBeLessThanOrEqual(open.solarOffsetWh + 1e-9);
           expect(shaded.totalHeatWh).toBeGreaterThanOrEqual(open.totalHeatWh - 1e-9);
         },

@@ -1,27 +1,14 @@
 import { EngineInputError, requireInRange } from '../errors';
 import type { HouseSpec, ShadeCloth } from '../house.types';
-import { BOUNDS } from '../vocabulary';
+import { BOUNDS, monthsInWords } from '../vocabulary';
+
+export { MONTH_NAMES, monthsInWords } from '../vocabulary';
 
 /**
  * A house's shade cloth: in the months it is in place it passes `solarTransmittance` of the sun
  * that comes through the roof, heat and light alike; in the other months it passes everything.
  * Shade only ever takes light away: every factor here lies in [0, 1].
  */
-
-export const MONTH_NAMES = [
-  'January',
-  'February',
-  'March',
-  'April',
-  'May',
-  'June',
-  'July',
-  'August',
-  'September',
-  'October',
-  'November',
-  'December',
-] as const;
 
 /** The house's cloth checked (EngineInputError naming `house.shadeCloth.…`), or null for none. */
 export function validateShadeCloth(house: Pick<HouseSpec, 'shadeCloth'>): ShadeCloth | null {
@@ -55,31 +42,6 @@ export function shadeTransmittanceInMonth(house: Pick<HouseSpec, 'shadeCloth'>, 
 /** The same for January … December, index 0 = January. */
 export function shadeTransmittanceByMonth(house: Pick<HouseSpec, 'shadeCloth'>): number[] {
   return Array.from({ length: 12 }, (_, index) => shadeTransmittanceInMonth(house, index + 1));
-}
-
-/** "May–September", "June, August", "no month": the months in calendar order, runs joined by a dash. */
-export function monthsInWords(months: readonly number[]): string {
-  const sorted = [...new Set(months)].filter((m) => m >= 1 && m <= 12).sort((a, b) => a - b);
-  if (sorted.length === 0) return 'no month';
-  if (sorted.length === 12) return 'all year';
-  const runs: Array<[number, number]> = [];
-  for (const month of sorted) {
-    const last = runs[runs.length - 1];
-    if (last && month === last[1] + 1) last[1] = month;
-    else runs.push([month, month]);
-  }
-  // a run through December that January continues reads as one (November–February)
-  if (runs.length > 1 && runs[0][0] === 1 && runs[runs.length - 1][1] === 12) {
-    const first = runs.shift() as [number, number];
-    runs[runs.length - 1] = [runs[runs.length - 1][0], first[1]];
-  }
-  return runs
-    .map(([from, to]) => {
-      if (from === to) return MONTH_NAMES[from - 1];
-      const next = from === 12 ? 1 : from + 1;
-      return `${MONTH_NAMES[from - 1]}${to === next ? ', ' : '–'}${MONTH_NAMES[to - 1]}`;
-    })
-    .join(', ');
 }
 
 /** "a shade cloth passing 50 % of the sun, in place May–September" (or "no shade cloth"). */

@@ -10,3 +10,4 @@ export * from './display-units';
 export * from './assumption';
 export * from './passwords';
 export * from './currency';
+export * from './months';

@@ -53,7 +53,11 @@ export class InteriorLightDto {
   from: 'design day' | 'entered';
   @ApiProperty({ description: 'peak light at plant height under the roof before any shade cloth, lx' })
   unshadedLux: number;
-  @ApiProperty({ minimum: 0, maximum: 1, description: 'share a shade cloth in place on the design date passes; 1 without' })
+  @ApiProperty({
+    minimum: 0,
+    maximum: 1,
+    description: 'share a shade cloth in place on the design date passes; 1 without',
+  })
   shadeTransmittance: number;
   @ApiProperty({ description: 'unshadedLux × shadeTransmittance: the light the light factor reads, lx' })
   lux: number;

@@ -24,6 +24,9 @@ const FIELD_WORDS: Record<string, string> = {
   kneewallHeightM: 'kneewall height',
   kneewallId: 'kneewall',
   curtainId: 'curtain',
+  shadeCloth: 'shade cloth',
+  'shadeCloth.solarTransmittance': 'shade cloth',
+  'shadeCloth.months': 'months the shade cloth is up',
   heaters: 'heaters',
   exhaustFans: 'exhaust fans',
   'exhaustFans.count': 'number of fans',
@@ -48,8 +51,13 @@ export function changedFieldWords(path: string): string {
     .toLowerCase();
 }
 
+/** Words that say less than another word in the same sentence: the cloth's months when the cloth itself changes. */
+const COVERED_BY: Record<string, string> = { 'months the shade cloth is up': 'shade cloth' };
+
 /** "Changes roof covering, sidewall covering", each field once. */
 export function changesSentence(paths: string[]): string {
   if (paths.length === 0) return 'No field changes';
-  return `Changes ${[...new Set(paths.map(changedFieldWords))].join(', ')}`;
+  const words = new Set(paths.map(changedFieldWords));
+  for (const [narrow, wide] of Object.entries(COVERED_BY)) if (words.has(wide)) words.delete(narrow);
+  return `Changes ${[...words].join(', ')}`;
 }

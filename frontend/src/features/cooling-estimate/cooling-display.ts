@@ -7,6 +7,7 @@ const SOURCE_WORDS: Record<CoolingConditionsSource[keyof CoolingConditionsSource
   request: 'typed here',
   'calendar default': 'mid-summer default',
   'reference data': 'default',
+  'design day': "the design day's sun",
   'house length': 'house length',
   none: 'none',
 };

@@ -40,3 +40,20 @@ export function newHeaterRow(referenceData: ReferenceData, units: Units): Heater
     heaterType: '',
   };
 }
+
+/** A typical shade cloth (reference-data/shade-cloths.json) and the percent of the sun it lets through. */
+export interface ShadeClothChoice {
+  id: string;
+  label: string;
+  percent: number;
+}
+
+export function shadeClothChoices(referenceData: ReferenceData): ShadeClothChoice[] {
+  return referenceRows(referenceData, 'shade-cloths')
+    .filter((row) => typeof row.solarTransmittance === 'number')
+    .map((row) => ({
+      id: row.id,
+      label: String(row.label ?? row.id),
+      percent: Math.round((row.solarTransmittance as number) * 1000) / 10,
+    }));
+}

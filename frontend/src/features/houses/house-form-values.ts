@@ -1,6 +1,8 @@
 import type { ApiError } from '../../api/client';
 import type { House, HouseInput, HouseShape, ReferenceData, SurfaceGroup } from '../../api/types';
-import type { HeaterType } from '@thermbay/engine/vocabulary';
+import { MONTH_NAMES, type HeaterType } from '@thermbay/engine/vocabulary';
+
+export { MONTH_NAMES };
 import type { Quantity, Units } from '../../lib/units';
 
 export const HOUSE_SHAPES: readonly HouseShape[] = ['gable', 'gothic-arch', 'quonset'];
@@ -32,6 +34,16 @@ export interface HeaterFormValues {
   heaterType: string;
 }
 
+/** The shade cloth part of the form (field paths match the API's `shadeCloth.…`). */
+export interface ShadeClothFormValues {
+  /** false: no cloth (the rest is kept while the box is unticked, and not sent) */
+  present: boolean;
+  /** percent of the sun the cloth lets through, as typed */
+  solarTransmittance: string;
+  /** calendar months ticked, 1 = January, in order */
+  months: number[];
+}
+
 export interface HouseFormValues {
   name: string;
   notes: string;
@@ -52,6 +64,7 @@ export interface HouseFormValues {
   kneewallHeightM: string;
   /** '' = glazing to the ground */
   kneewallId: string;
+  shadeCloth: ShadeClothFormValues;
   heaters: HeaterFormValues[];
   exhaustFans: { count: string; capacityEachM3PerS: string };
   inletAreaM2: string;
@@ -86,6 +99,7 @@ export function newHouseDefaults(referenceData: ReferenceData): HouseInput {
     curtainId: null,
     kneewallHeightM: null,
     kneewallId: null,
+    shadeCloth: null,
     heaters: [
       { count: 2, ratedInputW: 73_000, efficiency: 0.8, fuelId: firstRowId(referenceData, 'fuels', 'natural-gas') },
     ],
@@ -123,6 +137,13 @@ export function houseToFormValues(house: HouseInput, units: Units): HouseFormVal
     curtainId: house.curtainId ?? '',
     kneewallHeightM: t('length', house.kneewallHeightM),
     kneewallId: house.kneewallId ?? '',
+    shadeCloth: house.shadeCloth
+      ? {
+          present: true,
+          solarTransmittance: pct(house.shadeCloth.solarTransmittance),
+          months: [...house.shadeCloth.months].sort((a, b) => a - b),
+        }
+      : { present: false, solarTransmittance: '', months: [] },
     heaters: house.heaters.map((heater) => ({
       count: String(heater.count),
       ratedInputW: t('power', heater.ratedInputW),
@@ -199,6 +220,18 @@ export function formValuesToHouseInput(
         original.kneewallHeightM ?? undefined,
       ) ?? null,
     kneewallId: values.kneewallId === '' ? null : values.kneewallId,
+    shadeCloth: values.shadeCloth.present
+      ? {
+          // an untouched share goes back as stored, not as a rounded round trip through percent
+          solarTransmittance:
+            original.shadeCloth &&
+            initialValues.shadeCloth.present &&
+            values.shadeCloth.solarTransmittance === initialValues.shadeCloth.solarTransmittance
+              ? original.shadeCloth.solarTransmittance
+              : Number(values.shadeCloth.solarTransmittance) / 100,
+          months: [...new Set(values.shadeCloth.months)].sort((a, b) => a - b),
+        }
+      : null,
     heaters: values.heaters.map((heater, index) => {
       const initialHeater = initialValues.heaters[index];
       const originalHeater = original.heaters[index];

@@ -37,6 +37,11 @@ export function houseFormSchema(units: Units) {
     max: Math.round(BOUNDS.heaterEfficiency.max * 100),
   };
   const optionalU = (label: string) => measured(label, 'uValue', BOUNDS.uValueWPerM2K).optional();
+  const shadePct = {
+    min: Math.round(BOUNDS.shadeClothTransmittance.min * 100),
+    max: Math.round(BOUNDS.shadeClothTransmittance.max * 100),
+  };
+  const monthRange = BOUNDS.shadeClothMonth;
 
   return yup.object({
     name: yup
@@ -85,6 +90,31 @@ export function houseFormSchema(units: Units) {
         return height === undefined || !Number.isFinite(eave) || height <= eave;
       }),
     kneewallId: yup.string(),
+    shadeCloth: yup.object({
+      present: yup.boolean(),
+      solarTransmittance: numeric('Sun it lets through').when('present', {
+        is: true,
+        then: (schema) =>
+          schema
+            .min(shadePct.min, rangeMessage('Sun it lets through', shadePct, '%'))
+            .max(shadePct.max, rangeMessage('Sun it lets through', shadePct, '%'))
+            .required('Enter the share of the sun the cloth lets through'),
+        otherwise: (schema) => schema.notRequired(),
+      }),
+      months: yup
+        .array(
+          yup
+            .number()
+            .integer('Months are whole numbers')
+            .min(monthRange.min, `Months run from ${monthRange.min} to ${monthRange.max}`)
+            .max(monthRange.max, `Months run from ${monthRange.min} to ${monthRange.max}`)
+            .required(),
+        )
+        .when('present', {
+          is: true,
+          then: (schema) => schema.min(1, 'Tick at least one month the cloth is in place'),
+        }),
+    }),
     heaters: yup
       .array(
         yup.object({

@@ -50,10 +50,14 @@ describe('CoolingPanel', () => {
     renderPanel();
     const verdict = await screen.findByTestId('fan-verdict');
     expect(verdict.textContent).toContain('Fans are short');
-    expect(verdict.textContent).toContain('3.78 m³/s installed against 7.55 m³/s required');
-    expect(verdict.textContent).toContain('2 fans of this size are needed in all (add 1)');
+    expect(verdict.textContent).toContain('3.78 m³/s installed against 12.60 m³/s required');
+    expect(verdict.textContent).toContain('4 fans of this size are needed in all (add 3)');
     expect(screen.getByText('27.5 per hour · 0.46 per minute')).toBeTruthy();
-    expect(screen.getByText(/1.2 m² entered, 3.7 m² needed/)).toBeTruthy();
+    expect(screen.getByText(/1.2 m² entered, 6.2 m² needed/)).toBeTruthy();
+    // the light factor's light is named with where it came from: the design day's own sun
+    expect(screen.getByTestId('light-source').textContent).toBe(
+      "Light at the crop 89,835 lx: the design day's clear-sky sun through the roof, the same sun as the hour-by-hour day, with no shade cloth.",
+    );
     expect(screen.getByTestId('hours-not-held').textContent).toBe('15 (solar 7–21 h)');
   });
 

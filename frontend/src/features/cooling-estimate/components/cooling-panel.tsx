@@ -141,7 +141,7 @@ export function CoolingPanel({ house, canRunEstimates, editedHouse = null, edits
               <Typography variant="body2" sx={{ mb: 1 }}>
                 Base rate {units.format('airFlowPerFloorArea', estimate.capacity.baseRateM3PerSM2)} of floor, times:
               </Typography>
-              <CapacityFactors estimate={estimate} />
+              <CapacityFactors estimate={estimate} units={units} />
             </AccordionDetails>
           </Accordion>
 

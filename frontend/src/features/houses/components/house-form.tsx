@@ -28,6 +28,7 @@ import {
 import { houseFormSchema } from '../schemas';
 import { coveringOptions, newHeaterRow, optionsFrom, typicalEfficiencyOf } from '../house-form-options';
 import { FollowUnitSystem, InvalidSubmitNote, ReportValues, Section } from './house-form-parts';
+import { ShadeClothFields } from './shade-cloth-fields';
 
 export interface HouseFormProps {
   /** the stored house (or the defaults of a new one), SI */
@@ -329,6 +330,10 @@ export function HouseForm({
                     </Stack>
                   )}
                 </FieldArray>
+              </Section>
+
+              <Section id="house-section-shade" title="Shade cloth">
+                <ShadeClothFields referenceData={referenceData} />
               </Section>
 
               <Section id="house-section-ventilation" title="Exhaust fans and inlets">
