@@ -37,8 +37,9 @@ export interface CoolingCautionSources {
  * Why "fans adequate" (the floor-area rate) and "setpoint not held" (the hour-by-hour design day)
  * can both be true although both read the same sun: the floor-area rate keeps the air within the
  * allowed rise above the air coming in and never looks at the cooling setpoint; the design day
- * asks for the setpoint itself. Hours are split into those where the incoming air plus that rise
- * is already above the setpoint and those where the sun of the design day outruns the rate. An
+ * asks for the setpoint itself. Hours are split into those where the incoming air alone, or the
+ * incoming air plus that rise, is above the setpoint and those where the sun of the design day
+ * outruns the rate. An
  * entered peak light (not the design day's) is named as a further cause. Empty unless the two
  * disagree.
  */
@@ -78,7 +79,7 @@ export function adequateButNotHeldExplanation(sources: {
   }
   if (sunnyHours.length > 0) {
     parts.push(
-      `At solar hours ${sunnyHours.join(', ')} the clear-sky sun of the design day (${Math.round(light.shadeTransmittance * 100)} % of it passing the shade, the crop taking up ${Math.round(sources.transpirationFraction * 100)} %) warms the air more than the handbook rate per floor area allows for.`,
+      `At solar hours ${sunnyHours.join(', ')} the clear-sky sun of the design day (${light.shadeTransmittance < 1 ? `${Math.round(light.shadeTransmittance * 100)} % of it passing the shade cloth` : 'no shade cloth'}, the crop taking up ${Math.round(sources.transpirationFraction * 100)} % of what comes in) warms the air by more than that rise at the rate: the handbook rate per floor area allows for less sun than this day brings.`,
     );
   }
   if (light.from === 'entered') {

@@ -171,6 +171,22 @@ describe('when "fans adequate" and "setpoint not held" can still both stand', ()
     expect(explanation).not.toContain('entered peak light');
   });
 
+  it('names the hours where the design day’s sun outruns the rate although the incoming air plus the rise is below the setpoint', () => {
+    // a 30 °C day, no transpiration (all the sun heats the air), a 35 °C setpoint, and just the fans the rate asks for
+    const hot = { summerDesignC: 30, summerDesignWetBulbC: 20, transpirationFraction: 0 };
+    const setpoints = { dayHeatingC: 20, nightHeatingC: 16, coolingC: 35 };
+    const sized = run({ setpoints, inletAreaM2: 60 }, hot).capacity.fansNeeded as number;
+    const result = run({ setpoints, inletAreaM2: 60, exhaustFans: { count: sized, capacityEachM3PerS: 5 } }, hot);
+    expect(result.capacity.verdict).toBe('adequate');
+    expect(result.designDay.hoursNotHeld).toContain(12);
+    const explanation = result.cautions.map(proseToPlainSi).find((c) => c.startsWith('Why the fans are adequate'));
+    // at noon the outdoor air is 30 − 10 × 0.23 = 27.7 °C (daily-range profile): 27.7 + 3.9 < 35
+    expect(explanation).toMatch(
+      /At solar hours [\d, ]*\b12\b[\d, ]* the clear-sky sun of the design day \(no shade cloth, the crop taking up 0 %/,
+    );
+    expect(explanation).not.toContain('is at or above the setpoint');
+  });
+
   it('also names an entered light, which the design day does not use', () => {
     const result = run(
       {
