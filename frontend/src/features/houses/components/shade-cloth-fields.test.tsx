@@ -55,7 +55,7 @@ const monthGroup = () => within(shadeSection()).getByRole('group', { name: 'Mont
 const submitted = (onSubmit: ReturnType<typeof vi.fn>) => (onSubmit.mock.calls[0] as unknown as [HouseInput])[0];
 
 describe('HouseForm: the shade cloth section', () => {
-  it('adds a cloth: a typical cloth fills in its share, months are ticked by name, and the API gets a fraction', async () => {
+  it('adds a cloth: it starts at 50 %, months are ticked by name, and the API gets a fraction', async () => {
     const user = userEvent.setup();
     const onSubmit = vi.fn(async (_input: HouseInput) => {});
     renderSection(houseInputOf(houseFixture), onSubmit);
@@ -76,14 +76,24 @@ describe('HouseForm: the shade cloth section', () => {
     }
     expect((within(monthGroup()).getByRole('checkbox', { name: 'July' }) as HTMLInputElement).checked).toBe(true);
 
-    await user.click(within(shadeSection()).getByRole('combobox', { name: 'Typical cloth' }));
-    await user.click(await screen.findByRole('option', { name: /30 % shade cloth — lets 70 % through/ }));
-    expect((share as HTMLInputElement).value).toBe('70');
-
     await user.click(screen.getByRole('button', { name: 'Save house' }));
     await waitFor(() => expect(onSubmit).toHaveBeenCalledTimes(1));
-    // 70 % → 0.7; months in calendar order whatever order they were ticked in
-    expect(submitted(onSubmit).shadeCloth).toEqual({ solarTransmittance: 0.7, months: [6, 7, 8] });
+    // 50 % → 0.5; months in calendar order whatever order they were ticked in
+    expect(submitted(onSubmit).shadeCloth).toEqual({ solarTransmittance: 0.5, months: [6, 7, 8] });
+  });
+
+  it('a typical cloth fills in the share it lets through, sent as a fraction', async () => {
+    const user = userEvent.setup();
+    const onSubmit = vi.fn(async (_input: HouseInput) => {});
+    renderSection({ ...houseInputOf(houseFixture), shadeCloth: { solarTransmittance: 0.5, months: [7] } }, onSubmit);
+    const share = within(shadeSection()).getByRole('textbox', { name: /sun it lets through/i });
+    await user.click(within(shadeSection()).getByRole('combobox', { name: 'Typical cloth' }));
+    await user.click(await screen.findByRole('option', { name: '30 % shade cloth' }));
+    expect((share as HTMLInputElement).value).toBe('70');
+    await user.click(screen.getByRole('button', { name: 'Save house' }));
+    await waitFor(() => expect(onSubmit).toHaveBeenCalledTimes(1));
+    // 70 % → 0.7 (reference row: a 30 % shade cloth passes 0.7)
+    expect(submitted(onSubmit).shadeCloth).toEqual({ solarTransmittance: 0.7, months: [7] });
   });
 
   it('refuses a share outside 0–100 % and a cloth without months, on the fields, and sends nothing', async () => {

@@ -90,7 +90,7 @@ export function ShadeClothFields({ referenceData }: { referenceData: ReferenceDa
               <MenuItem value="">Another cloth (type its figure)</MenuItem>
               {choices.map((choice) => (
                 <MenuItem key={choice.id} value={choice.id}>
-                  {choice.label} — lets {choice.percent} % through
+                  {choice.label}
                 </MenuItem>
               ))}
             </TextField>
