@@ -3240,6 +3240,8 @@ export interface components {
             bars?: components["schemas"]["ReportBarDto"][];
             /** @description unit of the bar values */
             unit?: string;
+            /** @description table: a comparison, whose first cell in each row names the row and whose other columns share the width equally */
+            comparison?: boolean;
         };
         ReportSectionDto: {
             heading: string;
