@@ -110,7 +110,7 @@ export function alternativesSection(
       blocks: [
         {
           kind: 'paragraph',
-          text: `The house had ${alternatives.savedCount} saved alternative${alternatives.savedCount === 1 ? '' : 's'}, but they could not be compared when this report was taken: ${prose(alternatives.reason, system)}`,
+          text: `The house had ${alternatives.savedCount} saved alternative${alternatives.savedCount === 1 ? '' : 's'}, but ${alternatives.savedCount === 1 ? 'it' : 'they'} could not be compared when this report was taken: ${prose(alternatives.reason, system)}`,
         },
       ],
     };
