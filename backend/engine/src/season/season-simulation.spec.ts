@@ -23,6 +23,8 @@ function oneDay(irradianceWPerM2: number): SeasonHours {
     months: [{ year: 1970, month: 1 }],
     dailyMinC: new Float64Array([0]),
     dailyMaxC: new Float64Array([0]),
+    skyDeficitWPerM2: new Float64Array(24),
+    cloudCoverTenthsOfDay: new Float64Array([10]),
   };
 }
 
@@ -30,6 +32,7 @@ function parameters(overrides: Partial<SimulationParameters> = {}): SimulationPa
   return {
     uaDayWPerK: 100,
     uaNightWPerK: 60,
+    skyNightM2: 0,
     solarGainAreaM2: 0,
     daySetpointC: new Float64Array([20]),
     nightSetpointC: new Float64Array([10]),
