@@ -482,3 +482,130 @@ describe('estimateSeason: efficiency on the higher-heating-value basis', () => {
     );
   });
 });
+
+describe('estimateSeason: the night sky', () => {
+  const singlePoly = (overrides: Partial<EstimateSeasonInput['house']> = {}) => ({
+    ...demoSeasonInput().house,
+    coverings: { roof: 'poly-single', sidewalls: 'poly-single', endwalls: 'poly-single' },
+    ...overrides,
+  });
+
+  it('breaks the season down by part: the parts less the sun and the unmet heat are the heat delivered', () => {
+    const estimate = estimateSeason(demoSeasonInput(), ref, sunCache);
+    const breakdown = estimate.lossBreakdown;
+    expect(breakdown.parts.map((part) => part.key)).toEqual([
+      'roof',
+      'sidewalls',
+      'endwalls',
+      'perimeter',
+      'infiltration',
+      'sky',
+    ]);
+    const sum = (values: number[]) => values.reduce((a, b) => a + b, 0);
+    expectRelativelyClose(sum(breakdown.parts.map((part) => part.energyKWh)), breakdown.lostKWh, 1e-12);
+    expectRelativelyClose(
+      breakdown.lostKWh - breakdown.solarOffsetKWh - breakdown.unmetHeatKWh,
+      estimate.total.energyKWh,
+      1e-9,
+    );
+    expect(breakdown.deliveredKWh).toBe(estimate.total.energyKWh);
+    expect(breakdown.solarOffsetKWh).toBe(estimate.solarOffsetKWh);
+    expect(sum(breakdown.parts.map((part) => part.share))).toBeCloseTo(1, 12);
+    const sky = breakdown.parts.find((part) => part.key === 'sky')!;
+    expect(sky.energyKWh).toBe(breakdown.skyKWh);
+    expect(sky.energyKWh).toBeGreaterThan(0);
+    // the roof (double poly, U 3.97 on 295.5 m²) loses more than the endwalls (twin-wall, U 3.49 on 61.2 m²)
+    const part = (key: string) => breakdown.parts.find((p) => p.key === key)!.energyKWh;
+    expectRelativelyClose(part('roof') / part('endwalls'), 1172.999 / 213.588, 1e-6);
+  });
+
+  it('an IR-blocking inner film, glass or polycarbonate loses less to the sky than single poly', () => {
+    // coverings.json: τ_IR single poly 0.55, IR double 0.19, glass 0.04, twin-wall 0.04; outer emissivities 0.4, 0.4, 0.84, 0.9
+    const skyOf = (coveringId: string) =>
+      estimateSeason(
+        demoSeasonInput({
+          house: singlePoly({ coverings: { roof: coveringId, sidewalls: coveringId, endwalls: coveringId } }),
+        }),
+        ref,
+        sunCache,
+      ).lossBreakdown.skyKWh;
+    const poly = skyOf('poly-single');
+    for (const other of ['poly-double-inflated', 'poly-double-ir-inner', 'glass-single', 'polycarbonate-twin-8mm']) {
+      expect(skyOf(other)).toBeLessThan(poly);
+    }
+    expect(skyOf('poly-double-ir-inner')).toBeLessThan(skyOf('poly-double-inflated'));
+    expect(skyOf('foam-board-50mm')).toBeLessThan(skyOf('glass-single'));
+  });
+
+  const SEED = 20_261_203;
+  it(`a clearer sky never lowers the sky loss or the night heat of an IR-transparent film (property, fast-check seed ${SEED})`, () => {
+    fc.assert(
+      fc.property(
+        fc.array(fc.double({ min: 0, max: 1, noNaN: true }), { minLength: 12, maxLength: 12 }),
+        fc.array(fc.double({ min: 0, max: 1, noNaN: true }), { minLength: 12, maxLength: 12 }),
+        fc.double({ min: -30, max: 10, noNaN: true }),
+        fc.double({ min: 0, max: 15, noNaN: true }),
+        (a, b, minC, rangeK) => {
+          const climate = (clearness: number[]): SiteClimate => ({
+            ...demoClimate(),
+            monthly: clearness.map((value, index) => ({
+              month: index + 1,
+              meanDailyMinC: minC,
+              meanDailyMaxC: minC + rangeK,
+              clearness: value,
+            })),
+          });
+          const run = (clearness: number[]) =>
+            estimateSeason(
+              demoSeasonInput({
+                house: singlePoly(),
+                climate: climate(clearness),
+                season: { startDate: '2026-01-01', endDate: '2026-02-28' },
+              }),
+              ref,
+              sunCache,
+            );
+          const clearer = run(a.map((value, index) => Math.max(value, b[index])));
+          const cloudier = run(a.map((value, index) => Math.min(value, b[index])));
+          const nightHeat = (estimate: ReturnType<typeof run>) => estimate.nightShareOfHeat * estimate.total.energyKWh;
+          expect(clearer.lossBreakdown.skyKWh).toBeGreaterThanOrEqual(cloudier.lossBreakdown.skyKWh * (1 - 1e-12));
+          expect(nightHeat(clearer)).toBeGreaterThanOrEqual(nightHeat(cloudier) * (1 - 1e-12));
+        },
+      ),
+      { seed: SEED, numRuns: 40 },
+    );
+  });
+
+  it('a heat-loss factor scales the sky loss with the rest, and a monthly dew point from the climate is used and said', () => {
+    // constant −2 °C, no sun: every hour loses heat, so the whole season scales with the factor
+    const input = demoSeasonInput({ climate: constantClimate(-2), season: { startDate: '2026-01-01', endDate: '2026-01-31' } });
+    const handbook = estimateSeason(input, ref, sunCache);
+    const fitted = estimateSeason({ ...input, heatLossFactor: 1.5 }, ref, sunCache);
+    expectRelativelyClose(fitted.lossBreakdown.skyKWh, 1.5 * handbook.lossBreakdown.skyKWh, 1e-9);
+    expectRelativelyClose(fitted.total.energyKWh, 1.5 * handbook.total.energyKWh, 1e-9);
+
+    // the climate's dew point −12 °C in January (drier than the −2 °C daily minimum): a colder sky, more loss.
+    // Overcast (clearness 0): deficit ratio (1 − 1.154 ε(−12)) / (1 − 1.154 ε(−2)) with ε(−12) = 0.654312 and
+    // ε(−2) = 0.711 − 0.0112 + 0.000292 = 0.700092: (1 − 0.755076) / (1 − 0.807906) = 0.244924 / 0.192094 = 1.27502
+    const dry = constantClimate(-2);
+    dry.monthly[0].meanDewPointC = -12;
+    const withDewPoint = estimateSeason({ ...input, climate: dry }, ref, sunCache);
+    expectRelativelyClose(withDewPoint.lossBreakdown.skyKWh / handbook.lossBreakdown.skyKWh, 1.27502, 1e-5);
+    const said = (estimate: typeof handbook) => estimate.assumptions.find((a) => a.key === 'sky-dew-point')!;
+    expect(said(withDewPoint)).toMatchObject({ source: 'the farm’s climate', overridden: true });
+    expect(said(withDewPoint).value).toMatch(/^-12\.0 – /);
+    expect(said(handbook)).toMatchObject({ value: 0, unit: 'K', confidence: 'memory', overridden: false });
+    expect(said(handbook).source).toMatch(/FAO Irrigation and Drainage Paper 56/);
+    const cloud = handbook.assumptions.find((a) => a.key === 'sky-cloud-cover')!;
+    expect(cloud.value).toBe(new Array(12).fill('10.0').join(' '));
+    expect(cloud.source).toMatch(/Kasten/);
+    expect(handbook.assumptions.find((a) => a.key === 'sky-roof-ir-transmittance')).toMatchObject({ value: 0.3 });
+
+    // a dew point above the month's mean daily maximum is refused, naming the field
+    const wrong = constantClimate(-2);
+    wrong.monthly[3].meanDewPointC = 5;
+    expect(fieldOf(() => estimateSeason({ ...input, climate: wrong }, ref, sunCache))).toBe(
+      'climate.monthly[3].meanDewPointC',
+    );
+  });
+});
