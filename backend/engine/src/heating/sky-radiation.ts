@@ -109,11 +109,16 @@ export function clearSkyEmissivity(dewPointC: number, constants: SkyConstants): 
   return Math.min(1, Math.max(0, a + b * t + c * t * t));
 }
 
-/** ε_sky = ε_clear × (1 + c1 N + c2 N² + c3 N³), N opaque cloud cover in tenths, at most 1 (Clark & Allen 1978). */
-export function skyEmissivity(clearEmissivity: number, cloudCoverTenths: number, constants: SkyConstants): number {
+/** The cloud factor 1 + c1 N + c2 N² + c3 N³, N opaque cloud cover in tenths, 0–10 (Clark & Allen 1978). */
+export function cloudFactor(cloudCoverTenths: number, constants: SkyConstants): number {
   const n = Math.min(10, Math.max(0, cloudCoverTenths));
   const { c1, c2, c3 } = constants.cloud;
-  return Math.min(1, clearEmissivity * (1 + c1 * n + c2 * n * n + c3 * n * n * n));
+  return 1 + c1 * n + c2 * n * n + c3 * n * n * n;
+}
+
+/** ε_sky = ε_clear × the cloud factor, at most 1 (Clark & Allen 1978). */
+export function skyEmissivity(clearEmissivity: number, cloudCoverTenths: number, constants: SkyConstants): number {
+  return Math.min(1, clearEmissivity * cloudFactor(cloudCoverTenths, constants));
 }
 
 /**

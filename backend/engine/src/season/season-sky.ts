@@ -1,7 +1,8 @@
 import {
+  clearSkyEmissivity,
   cloudCoverTenthsFromClearness,
+  cloudFactor,
   skyDeficitWPerM2,
-  skyEmissivityAt,
   type SkyConstants,
 } from '../heating/sky-radiation';
 
@@ -38,15 +39,21 @@ export function nightSky(input: NightSkyInput, constants: SkyConstants): NightSk
   const deficitWPerM2 = new Float64Array(dayCount * 24);
   const cloudCoverTenthsOfDay = new Float64Array(dayCount);
   const depressionK = constants.nightDewPointBelowDailyMinimumK;
+  const { outdoorC, dayFraction } = input;
   for (let day = 0; day < dayCount; day++) {
     const cloud = cloudCoverTenthsFromClearness(input.clearnessOfDay[day], constants);
     cloudCoverTenthsOfDay[day] = cloud;
+    const factor = cloudFactor(cloud, constants);
     const fromClimate = input.dewPointCByMonth?.[input.monthOfDay[day] - 1];
     const dewPointC = typeof fromClimate === 'number' ? fromClimate : input.dailyMinC[day] - depressionK;
+    // the same as skyEmissivityAt hour by hour, with the day's parts worked out once
+    const clearAtDewPoint = clearSkyEmissivity(dewPointC, constants);
     for (let hour = day * 24; hour < day * 24 + 24; hour++) {
-      if (input.dayFraction[hour] >= 1) continue;
-      const airC = input.outdoorC[hour];
-      deficitWPerM2[hour] = skyDeficitWPerM2(airC, skyEmissivityAt(airC, dewPointC, cloud, constants), constants);
+      if (dayFraction[hour] >= 1) continue;
+      const airC = outdoorC[hour];
+      const clear = airC < dewPointC ? clearSkyEmissivity(airC, constants) : clearAtDewPoint;
+      const emissivity = Math.min(1, clear * factor);
+      deficitWPerM2[hour] = skyDeficitWPerM2(airC, emissivity, constants);
     }
   }
   return { deficitWPerM2, cloudCoverTenthsOfDay };
