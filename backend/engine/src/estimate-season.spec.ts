@@ -578,7 +578,10 @@ describe('estimateSeason: the night sky', () => {
 
   it('a heat-loss factor scales the sky loss with the rest, and a monthly dew point from the climate is used and said', () => {
     // constant −2 °C, no sun: every hour loses heat, so the whole season scales with the factor
-    const input = demoSeasonInput({ climate: constantClimate(-2), season: { startDate: '2026-01-01', endDate: '2026-01-31' } });
+    const input = demoSeasonInput({
+      climate: constantClimate(-2),
+      season: { startDate: '2026-01-01', endDate: '2026-01-31' },
+    });
     const handbook = estimateSeason(input, ref, sunCache);
     const fitted = estimateSeason({ ...input, heatLossFactor: 1.5 }, ref, sunCache);
     expectRelativelyClose(fitted.lossBreakdown.skyKWh, 1.5 * handbook.lossBreakdown.skyKWh, 1e-9);

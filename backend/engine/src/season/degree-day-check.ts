@@ -44,7 +44,12 @@ export function degreeDayCrossCheck(
     uncapped: true,
     withoutSky: true,
   });
-  const withCurtain = runVariant(prepared, variant, ref, { thermal, withoutSun: true, uncapped: true, withoutSky: true });
+  const withCurtain = runVariant(prepared, variant, ref, {
+    thermal,
+    withoutSun: true,
+    uncapped: true,
+    withoutSky: true,
+  });
   const withSky = runVariant(prepared, variant, ref, { thermal, withoutSun: true, uncapped: true });
   const short = result.unmetHeatWh > 0;
   const uncappedKWh = short

@@ -94,4 +94,3 @@ export function houseThermal(house: HouseSpec, elevationM: number, ref: Referenc
     envelopeLightFactor: 1 - opaqueEnvelopeShare(geometry),
   };
 }
-

@@ -233,7 +233,8 @@ function skyAssumptions(prepared: PreparedSeason, thermal: HouseThermal, ref: Re
   if (fromClimate) {
     list.push({
       key: 'sky-dew-point',
-      label: 'Dew point of the night air, January to December (the climate’s; the day’s minimum where a month has none)',
+      label:
+        'Dew point of the night air, January to December (the climate’s; the day’s minimum where a month has none)',
       value: fromClimate.map((value) => (value === null ? '–' : value.toFixed(1))).join(' '),
       unit: '°C',
       source: 'the farm’s climate',
@@ -252,7 +253,13 @@ function skyAssumptions(prepared: PreparedSeason, thermal: HouseThermal, ref: Re
     );
   }
   list.push(
-    rowAssumption('sky-clear-emissivity', 'Clear-sky emissivity from the dew point', 'Berdahl & Martin', '', rows.clearSky),
+    rowAssumption(
+      'sky-clear-emissivity',
+      'Clear-sky emissivity from the dew point',
+      'Berdahl & Martin',
+      '',
+      rows.clearSky,
+    ),
     rowAssumption('sky-cloud-factor', 'Clouds raise the sky’s emissivity', 'Clark & Allen', '', rows.cloud),
   );
   const roof = thermal.roofCovering;
