@@ -47,8 +47,9 @@ export interface EstimateSeasonInput {
   /** replaces the reference share of transmitted sunlight that offsets heating, 0–1 */
   solarUsefulFraction?: number;
   /**
-   * multiplies the house's heat-loss coefficients (coverings, perimeter and air leakage), e.g. a
-   * factor fitted to the farm's fuel bills; 1 (the handbook values) when absent
+   * multiplies the house's heat-loss coefficients (coverings, perimeter and air leakage) and its
+   * coupling to the night sky, e.g. a factor fitted to the farm's fuel bills; 1 (the handbook
+   * values) when absent
    */
   heatLossFactor?: number;
 }
