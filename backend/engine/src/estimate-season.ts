@@ -5,6 +5,7 @@ import { fuelCautions, priceUnitLabel } from './season/fuel';
 import { capacityCaution, degreeDayCrossCheck } from './season/degree-day-check';
 import { baseVariant, fuelAmount, prepareSeason, runVariant } from './season/prepare-season';
 import { seasonAssumptions } from './season/season-assumptions';
+import { seasonLossBreakdown } from './season/loss-breakdown';
 import type {
   EstimateSeasonInput,
   PreparedSeason,
@@ -121,6 +122,7 @@ function describeSeason(
     peak,
     nightShareOfHeat: result.totalHeatWh > 0 ? result.nightHeatWh / result.totalHeatWh : 0,
     solarOffsetKWh: result.solarOffsetWh / 1000,
+    lossBreakdown: seasonLossBreakdown(thermal, result),
     degreeDays: degreeDayCrossCheck(prepared, variant, run, degreeDays.total, ref),
     assumptions: seasonAssumptions(prepared, variant, thermal, ref),
     cautions: fuelCautions(variant.fuelRow),
