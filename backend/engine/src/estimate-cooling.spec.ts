@@ -55,6 +55,7 @@ describe('estimateCooling', () => {
         'capacity',
         'cautions',
         'designDay',
+        'lamps',
         'pads',
         'staging',
         'winterVentilation',

@@ -11,6 +11,7 @@ import type { Permission } from '../common/permissions';
 import { assertVersion, changesNothing, expectedVersion } from '../common/versioning';
 import { EngineInputError } from '@thermbay/engine/errors';
 import { validateHouseDimensions } from '@thermbay/engine/geometry/house-geometry';
+import { validateLamps } from '@thermbay/engine/lamps/lamps';
 import { FarmAccessService } from '../farms/farm-access.service';
 import { ReferenceDataService } from '../reference-data/reference-data.service';
 import { CreateHouseDto, type HouseDto, type UpdateHouseDto } from './dto/house.dto';
@@ -114,7 +115,9 @@ export class HousesService {
   private assertComputable(house: CreateHouseDto | HouseDto): void {
     this.reference.assertHouseReferences(house);
     try {
-      validateHouseDimensions(houseToSpec(house as HouseDto), 'house');
+      const spec = houseToSpec(house as HouseDto);
+      validateHouseDimensions(spec, 'house');
+      validateLamps(spec.lamps, 'house.lamps');
     } catch (error) {
       if (error instanceof EngineInputError) {
         const field = error.field.replace(/^house\./, '');

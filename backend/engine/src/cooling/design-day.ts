@@ -27,6 +27,7 @@ import {
  *
  * Indoor: steady state each hour (no storage in floor, benches or crop):
  *   solar gain to air = G_h × τ_roof × (1 − transpiration share) × floor area
+ *   gain = solar gain + the lamps' heat in the hours they run (cooling/design-day-lamps.ts)
  *   loss = UA (T_i − T_o) + ρ c_p V̇ (T_i − T_supply)
  * with T_supply = T_o for fans alone, or the pad leaving-air temperature with pads. Fans are
  * staged continuously: they stay off while the unventilated house is at or below the cooling
@@ -38,6 +39,8 @@ import {
 
 export interface HourlyBalanceInput {
   solarGainW: number;
+  /** heat of supplemental lamps running this hour, W (0 or absent when off) */
+  lampHeatW?: number;
   /** UA of the cover, perimeter and leakage, W/K */
   conductanceWPerK: number;
   outdoorC: number;
@@ -55,7 +58,8 @@ export interface HourlyBalance {
 }
 
 export function hourlyIndoorBalance(input: HourlyBalanceInput): HourlyBalance {
-  const { solarGainW, conductanceWPerK, outdoorC, supplyAirC, maxVentilationWPerK, coolingSetpointC } = input;
+  const { conductanceWPerK, outdoorC, supplyAirC, maxVentilationWPerK, coolingSetpointC } = input;
+  const solarGainW = input.solarGainW + (input.lampHeatW ?? 0);
   const unventilatedC = outdoorC + solarGainW / conductanceWPerK;
   if (unventilatedC <= coolingSetpointC) {
     return { indoorC: unventilatedC, fanFraction: 0, setpointHeld: true };
@@ -100,6 +104,8 @@ export interface DesignDayInput {
   coolingSetpointC: number;
   /** saturation efficiency of the pads, or null without pads */
   padSaturationEfficiency: number | null;
+  /** heat of supplemental lamps in each of the 24 solar hours, W; null or absent without lamps */
+  lampHeatByHourW?: number[] | null;
 }
 
 export interface DesignDayHour {
@@ -108,6 +114,8 @@ export interface DesignDayHour {
   sunAltitudeDeg: number;
   globalHorizontalWPerM2: number;
   solarGainW: number;
+  /** heat of supplemental lamps running this hour, W (0 when they are off) */
+  lampHeatW: number;
   indoorWithFansC: number;
   fanFraction: number;
   indoorWithPadsC: number | null;
@@ -141,6 +149,7 @@ export function designDayBalance(input: DesignDayInput, ref: ReferenceData): Des
     const sunAltitudeDeg = sunPosition(at, input.latitudeDeg, input.longitudeDeg).altitudeDeg;
     const globalHorizontalWPerM2 = clearSkyIrradiance(sunAltitudeDeg, month, ref).globalHorizontalWPerM2;
     const solarGainW = globalHorizontalWPerM2 * absorbedShare * input.floorAreaM2;
+    const lampHeatW = input.lampHeatByHourW ? input.lampHeatByHourW[hour] : 0;
 
     const ventilation = (supplyAirC: number) =>
       moistAirDensityFromHumidityRatioKgPerM3(supplyAirC, humidityRatio, pressurePa) *
@@ -149,6 +158,7 @@ export function designDayBalance(input: DesignDayInput, ref: ReferenceData): Des
 
     const withFans = hourlyIndoorBalance({
       solarGainW,
+      lampHeatW,
       conductanceWPerK: input.conductanceWPerK,
       outdoorC,
       supplyAirC: outdoorC,
@@ -163,6 +173,7 @@ export function designDayBalance(input: DesignDayInput, ref: ReferenceData): Des
       if (hour === hourOfOutdoorPeak) padLeavingAirAtPeakC = padAirC;
       withPads = hourlyIndoorBalance({
         solarGainW,
+        lampHeatW,
         conductanceWPerK: input.conductanceWPerK,
         outdoorC,
         supplyAirC: padAirC,
@@ -179,6 +190,7 @@ export function designDayBalance(input: DesignDayInput, ref: ReferenceData): Des
       sunAltitudeDeg,
       globalHorizontalWPerM2,
       solarGainW,
+      lampHeatW,
       indoorWithFansC: withFans.indoorC,
       fanFraction: installed.fanFraction,
       indoorWithPadsC: withPads === null ? null : withPads.indoorC,

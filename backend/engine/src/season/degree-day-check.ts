@@ -35,24 +35,36 @@ export function degreeDayCrossCheck(
     nightSetpointAllDay: true,
     curtainOpen: true,
     uncapped: true,
+    withoutLamps: true,
   });
   const withDaySetpoint = runVariant(prepared, variant, ref, {
     thermal,
     withoutSun: true,
     curtainOpen: true,
     uncapped: true,
+    withoutLamps: true,
   });
-  const withCurtain = runVariant(prepared, variant, ref, { thermal, withoutSun: true, uncapped: true });
+  const withCurtain = runVariant(prepared, variant, ref, {
+    thermal,
+    withoutSun: true,
+    uncapped: true,
+    withoutLamps: true,
+  });
+  const hasLamps = run.parameters.lamps !== null && run.parameters.lamps !== undefined;
   const short = result.unmetHeatWh > 0;
-  const uncappedKWh = short
-    ? runVariant(prepared, variant, ref, { thermal, uncapped: true }).result.totalHeatWh / 1000
-    : result.totalHeatWh / 1000;
+  const uncappedKWh =
+    short || hasLamps
+      ? runVariant(prepared, variant, ref, { thermal, uncapped: true }).result.totalHeatWh / 1000
+      : result.totalHeatWh / 1000;
+  const withSunKWh = hasLamps
+    ? runVariant(prepared, variant, ref, { thermal, uncapped: true, withoutLamps: true }).result.totalHeatWh / 1000
+    : uncappedKWh;
   const energies = [
     degreeDayKWh,
     hourlyNoSunNight.result.totalHeatWh / 1000,
     withDaySetpoint.result.totalHeatWh / 1000,
     withCurtain.result.totalHeatWh / 1000,
-    uncappedKWh,
+    withSunKWh,
   ];
   const labels: Array<[DegreeDayStep['key'], string]> = [
     ['degree-day', 'Degree-day method: daily mean temperatures, night setpoint all day, curtain open, no sun'],
@@ -61,6 +73,10 @@ export function degreeDayCrossCheck(
     ['curtain', 'Curtain drawn at night'],
     ['sun', 'Sunlight through the roof offsets heating by day'],
   ];
+  if (hasLamps) {
+    energies.push(uncappedKWh);
+    labels.push(['lamps', 'Heat from the supplemental lamps in the hours they run']);
+  }
   if (short) {
     energies.push(result.totalHeatWh / 1000);
     labels.push(['heater-capacity', 'Heat the installed heaters cannot deliver in the coldest hours']);
@@ -173,6 +189,13 @@ function explainDifference(
   lines.push(
     `Sunlight through the roof covers part of the daytime loss: ${percentOf(sun.changeKWh, base)}. The degree-day method leaves the sun out, which is why it usually reads high for greenhouses.`,
   );
+  const lamps = steps.find((step) => step.key === 'lamps');
+  if (lamps) {
+    lines.push(
+      `Heat from the supplemental lamps, in the hours they run, covers part of the loss: ${percentOf(lamps.changeKWh, base)}. ` +
+        'The degree-day method knows nothing of them.',
+    );
+  }
   if (result.unmetHeatWh > 0) {
     lines.push(
       `The degree-day figure assumes the heaters deliver whatever the house needs. The installed heaters (${quantityToken('power', variant.heaterOutputW)}) ` +

@@ -11,6 +11,7 @@ import * as weatherYears from './0010-weather-years';
 import * as farmCurrency from './0011-farm-currency';
 import * as fuelRecordsCalibrations from './0012-fuel-records-calibrations';
 import * as houseMeasurePlans from './0013-house-measure-plans';
+import * as houseLamps from './0015-house-lamps';
 
 /**
  * Every schema change, in order. Add a file `NNNN-what-it-does.ts` exporting up/down and list it
@@ -30,4 +31,5 @@ export const MIGRATIONS = [
   { name: '0011-farm-currency', ...farmCurrency },
   { name: '0012-fuel-records-calibrations', ...fuelRecordsCalibrations },
   { name: '0013-house-measure-plans', ...houseMeasurePlans },
+  { name: '0015-house-lamps', ...houseLamps },
 ];
