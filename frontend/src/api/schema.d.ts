@@ -1470,6 +1470,19 @@ export interface components {
             nightHeatingC: number;
             coolingC: number;
         };
+        LampsDto: {
+            /**
+             * @description reference-data lamps id of a lamp type (kind 'lamp-type'); null when not stated
+             * @example led-horticultural
+             */
+            lampTypeId?: string | null;
+            /** @description electrical input per m² of floor, W/m² */
+            powerDensityWPerM2: number;
+            /** @description hours the lamps run per day, January to December (12 values, 0–24) */
+            hoursPerDayByMonth: number[];
+            /** @description share of the electrical input that ends as heat inside the house (reference-data lamps offers 0.95) */
+            heatToHouseFraction: number;
+        };
         HouseDto: {
             /** @enum {string} */
             shape: "gable" | "gothic-arch" | "quonset";
@@ -1499,6 +1512,8 @@ export interface components {
             /** @description free louvre or inlet area, m² */
             inletAreaM2: number;
             setpoints: components["schemas"]["SetpointsDto"];
+            /** @description supplemental lamps: their heat lowers the season heating in the hours they run and adds to the summer fan requirement; never credited in heater sizing. null: none */
+            lamps?: components["schemas"]["LampsDto"] | null;
             /** @example House 3 */
             name: string;
             notes?: string | null;
@@ -1538,6 +1553,8 @@ export interface components {
             /** @description free louvre or inlet area, m² */
             inletAreaM2: number;
             setpoints: components["schemas"]["SetpointsDto"];
+            /** @description supplemental lamps: their heat lowers the season heating in the hours they run and adds to the summer fan requirement; never credited in heater sizing. null: none */
+            lamps?: components["schemas"]["LampsDto"] | null;
             /** @example House 3 */
             name: string;
             notes?: string | null;
@@ -1571,6 +1588,8 @@ export interface components {
             /** @description free louvre or inlet area, m² */
             inletAreaM2?: number;
             setpoints?: components["schemas"]["SetpointsDto"];
+            /** @description supplemental lamps: their heat lowers the season heating in the hours they run and adds to the summer fan requirement; never credited in heater sizing. null: none */
+            lamps?: components["schemas"]["LampsDto"] | null;
             /** @example House 3 */
             name?: string;
             notes?: string | null;
@@ -1636,6 +1655,8 @@ export interface components {
             /** @description free louvre or inlet area, m² */
             inletAreaM2: number;
             setpoints: components["schemas"]["SetpointsDto"];
+            /** @description supplemental lamps: their heat lowers the season heating in the hours they run and adds to the summer fan requirement; never credited in heater sizing. null: none */
+            lamps?: components["schemas"]["LampsDto"] | null;
         };
         HeatingConditionsDto: {
             /** @description winter design dry bulb (99 % or 99.6 %), °C */
@@ -1780,6 +1801,19 @@ export interface components {
             anyCondenses: boolean;
             surfaces: components["schemas"]["CondensationSurfaceDto"][];
         };
+        HeatingLampsDto: {
+            /** @description electrical input of all the lamps while they run, W */
+            electricW: number;
+            /** @description heat they give the house while they run, W */
+            heatW: number;
+            /**
+             * @description heat credited against the design heat loss and heater sizing: always 0 (lamps may be off that night)
+             * @enum {number}
+             */
+            creditedW: 0;
+            /** @description lamp heat ÷ design heat loss, for the reader */
+            shareOfDesignLoss: number;
+        };
         HeatingAssumptionDto: {
             key: string;
             /** @description may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
@@ -1797,6 +1831,8 @@ export interface components {
             heatLoss: components["schemas"]["HeatLossBreakdownDto"];
             heater: components["schemas"]["HeaterSizingDto"];
             condensation: components["schemas"]["CondensationDto"];
+            /** @description the supplemental lamps, shown but never credited on the design night; null without lamps */
+            lamps: components["schemas"]["HeatingLampsDto"] | null;
             assumptions: components["schemas"]["HeatingAssumptionDto"][];
             /** @description safety and planning cautions, to show with the result; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
             cautions: string[];
@@ -1872,7 +1908,13 @@ export interface components {
             /** @description m³/s per m² of floor */
             baseRateM3PerSM2: number;
             factors: components["schemas"]["CapacityFactorsDto"];
-            /** @description m³/s */
+            /** @description base rate × applied factor × floor area: the floor-area method alone, m³/s */
+            floorAreaMethodFlowM3PerS: number;
+            /** @description flow the lamps’ heat adds over the floor-area method, m³/s */
+            lampFlowM3PerS: number;
+            /** @description the design-day solar hour that sets the requirement with the lamps; null when the floor-area method does */
+            lampGoverningHour: number | null;
+            /** @description the larger of the floor-area method and the lit hours’ need, m³/s */
             requiredFlowM3PerS: number;
             /** @description m³/s */
             installedFlowM3PerS: number;
@@ -1900,6 +1942,8 @@ export interface components {
             globalHorizontalWPerM2: number;
             /** @description W */
             solarGainW: number;
+            /** @description heat of supplemental lamps running this hour, W (0 when off) */
+            lampHeatW: number;
             /** @description °C */
             indoorWithFansC: number;
             fanFraction: number;
@@ -1964,6 +2008,20 @@ export interface components {
             /** @description W lost by the house itself (cover, perimeter, leaks) at the same temperatures, for comparison */
             houseHeatLossW: number;
         };
+        CoolingLampsDto: {
+            /** @description electrical input of all the lamps while they run, W */
+            electricW: number;
+            /** @description heat they give the house while they run, W */
+            heatW: number;
+            /** @description hours they run on the design day (the design month's value) */
+            hoursOn: number;
+            /** @description sunrise in solar hours, where the block of lamp hours ends */
+            sunriseSolarHour: number;
+            /** @description fan flow the lamps add to the requirement, m³/s */
+            addedFlowM3PerS: number;
+            /** @description the solar hour that sets the requirement with the lamps; null when the floor-area method does */
+            governingHour: number | null;
+        };
         CoolingAssumptionDto: {
             key: string;
             /** @description may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
@@ -1971,8 +2029,11 @@ export interface components {
             value: number | string;
             unit: string;
             source: string;
-            /** @enum {string} */
-            confidence: "verified" | "verified-secondary" | "derived" | "memory" | "common-practice";
+            /**
+             * @description 'user-entered' for what the house itself states
+             * @enum {string}
+             */
+            confidence: "verified" | "verified-secondary" | "derived" | "memory" | "common-practice" | "user-entered";
             /** @description true when the request replaced the default */
             overridden: boolean;
         };
@@ -1984,6 +2045,8 @@ export interface components {
             pads: components["schemas"]["PadSizingDto"] | null;
             staging: components["schemas"]["StagingDto"];
             winterVentilation: components["schemas"]["WinterVentilationDto"];
+            /** @description the supplemental lamps on the design day; null without lamps or when they do not run that month */
+            lamps: components["schemas"]["CoolingLampsDto"] | null;
             assumptions: components["schemas"]["CoolingAssumptionDto"][];
             /** @description safety and planning cautions, to show with the result; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
             cautions: string[];
@@ -2044,6 +2107,8 @@ export interface components {
             heatLoss: components["schemas"]["HeatLossBreakdownDto"];
             heater: components["schemas"]["HeaterSizingDto"];
             condensation: components["schemas"]["CondensationDto"];
+            /** @description the supplemental lamps, shown but never credited on the design night; null without lamps */
+            lamps: components["schemas"]["HeatingLampsDto"] | null;
             assumptions: components["schemas"]["HeatingAssumptionDto"][];
             /** @description safety and planning cautions, to show with the result; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
             cautions: string[];
@@ -2109,6 +2174,8 @@ export interface components {
             pads: components["schemas"]["PadSizingDto"] | null;
             staging: components["schemas"]["StagingDto"];
             winterVentilation: components["schemas"]["WinterVentilationDto"];
+            /** @description the supplemental lamps on the design day; null without lamps or when they do not run that month */
+            lamps: components["schemas"]["CoolingLampsDto"] | null;
             assumptions: components["schemas"]["CoolingAssumptionDto"][];
             /** @description safety and planning cautions, to show with the result; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
             cautions: string[];
@@ -2211,6 +2278,12 @@ export interface components {
             unmetHeatKWh: number;
             /** @description hours in which the heaters could not hold the setpoint */
             hoursBelowSetpoint: number;
+            /** @description electricity the supplemental lamps use in the month, kWh (0 without) */
+            lampElectricityKWh: number;
+            /** @description the part of it that ends as heat inside the house, kWh */
+            lampHeatKWh: number;
+            /** @description heat the heaters did not have to deliver because the lamps gave it, kWh */
+            lampHeatSavedKWh: number;
         };
         SeasonTotalDto: {
             /** @description heat delivered to the house, kWh */
@@ -2245,9 +2318,46 @@ export interface components {
             /** @description °C */
             outdoorC: number;
         };
+        SeasonFuelAmountDto: {
+            /** @description heat delivered to the house, kWh */
+            energyKWh: number;
+            /** @description heat content of the fuel burnt (energy ÷ efficiency), kWh */
+            fuelInputKWh: number;
+            /** @description fuel in its SI purchase unit (the fuel's unitSi) */
+            fuelQuantitySi: number;
+            /** @description fuel in its US purchase unit (the fuel's unitUs) */
+            fuelQuantityUs: number;
+            /** @description money, in the farm's currency; null when no fuel price is known (heat and fuel are still given) */
+            cost: number | null;
+        };
+        SeasonLampsDto: {
+            /** @description reference-data lamps id */
+            lampTypeId: string | null;
+            lampTypeLabel: string | null;
+            /** @description W/m² of floor */
+            powerDensityWPerM2: number;
+            /** @description January to December, h */
+            hoursPerDayByMonth: number[];
+            /** @description share of the input that heats the house, 0–1 */
+            heatToHouseFraction: number;
+            /** @description electrical input of all the lamps while they run, W */
+            electricW: number;
+            /** @description heat they give the house while they run, W */
+            heatW: number;
+            /** @description electricity the lamps add over the season (heated days only), kWh */
+            electricityKWh: number;
+            /** @description the part of it that ends as heat inside the house, kWh */
+            heatToHouseKWh: number;
+            /** @description heat the heaters did not deliver because the lamps gave it, kWh */
+            heatSavedKWh: number;
+            /** @description the fuel (and money, with a price) that heat would have taken */
+            fuelSaved: components["schemas"]["SeasonFuelAmountDto"];
+            /** @description heat saved ÷ heat into the house: the rest came when the house needed no heat */
+            usefulShareOfHeat: number;
+        };
         DegreeDayStepDto: {
             /** @enum {string} */
-            key: "degree-day" | "hourly-curve" | "day-setpoint" | "curtain" | "sun" | "heater-capacity";
+            key: "degree-day" | "hourly-curve" | "day-setpoint" | "curtain" | "sun" | "lamps" | "heater-capacity";
             label: string;
             /** @description kWh */
             energyKWh: number;
@@ -2384,6 +2494,8 @@ export interface components {
             nightShareOfHeat: number;
             /** @description heat the sun supplied in place of the heater, kWh */
             solarOffsetKWh: number;
+            /** @description the supplemental lamps' electricity, heat and the fuel their heat saves; null without lamps */
+            lamps: components["schemas"]["SeasonLampsDto"] | null;
             degreeDays: components["schemas"]["DegreeDayCrossCheckDto"];
             assumptions: components["schemas"]["SeasonAssumptionDto"][];
             /** @description combustion / electrical safety cautions; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
@@ -3370,6 +3482,8 @@ export interface components {
             nightShareOfHeat: number;
             /** @description heat the sun supplied in place of the heater, kWh */
             solarOffsetKWh: number;
+            /** @description the supplemental lamps' electricity, heat and the fuel their heat saves; null without lamps */
+            lamps: components["schemas"]["SeasonLampsDto"] | null;
             degreeDays: components["schemas"]["DegreeDayCrossCheckDto"];
             assumptions: components["schemas"]["SeasonAssumptionDto"][];
             /** @description combustion / electrical safety cautions; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */

@@ -6,7 +6,8 @@
  * Merge rules (JSON Merge Patch, RFC 7386, with one difference at the top level):
  *  - a top-level key is a house field and replaces it (null included: `curtainId: null` = no curtain);
  *  - where both the house field and the patch value are plain objects (coverings, setpoints,
- *    fans, U-value overrides …), the patch is merged key by key, recursively;
+ *    fans, U-value overrides, lamps …), the patch is merged key by key, recursively; a house
+ *    without lamps (null) takes the patch's lamps whole, and `lamps: null` takes them away;
  *  - inside such an object, null removes the key (e.g. drops one U-value override);
  *  - anything else (numbers, strings, arrays such as the heater groups) replaces the whole value.
  */

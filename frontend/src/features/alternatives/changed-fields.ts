@@ -34,7 +34,15 @@ const FIELD_WORDS: Record<string, string> = {
   'setpoints.nightHeatingC': 'night heating setpoint',
   'setpoints.coolingC': 'cooling setpoint',
   calendar: 'production calendar',
+  lamps: 'supplemental lamps',
+  'lamps.lampTypeId': 'lamp type',
+  'lamps.powerDensityWPerM2': 'lamp power',
+  'lamps.hoursPerDayByMonth': 'lamp hours',
+  'lamps.heatToHouseFraction': 'share of lamp heat kept in the house',
 };
+
+/** The lamp values an added set of lamps always states: all of them changed reads "supplemental lamps". */
+const LAMP_VALUE_PATHS = ['lamps.powerDensityWPerM2', 'lamps.hoursPerDayByMonth', 'lamps.heatToHouseFraction'];
 
 /** "coverings.roof" → "roof covering"; an unknown path is spelt out word by word, units dropped. */
 export function changedFieldWords(path: string): string {
@@ -48,8 +56,13 @@ export function changedFieldWords(path: string): string {
     .toLowerCase();
 }
 
-/** "Changes roof covering, sidewall covering", each field once. */
+/**
+ * "Changes roof covering, sidewall covering", each field once. Lamps added (or replaced whole)
+ * read as "supplemental lamps" rather than each of their values.
+ */
 export function changesSentence(paths: string[]): string {
   if (paths.length === 0) return 'No field changes';
-  return `Changes ${[...new Set(paths.map(changedFieldWords))].join(', ')}`;
+  const wholeLamps = LAMP_VALUE_PATHS.every((path) => paths.includes(path));
+  const named = wholeLamps ? paths.map((path) => (path.startsWith('lamps.') ? 'lamps' : path)) : paths;
+  return `Changes ${[...new Set(named.map(changedFieldWords))].join(', ')}`;
 }
