@@ -57,9 +57,7 @@ describe('supplemental lamps of a house (e2e)', () => {
     expect(tooMuch.body.details.map((d: { field: string }) => d.field)).toEqual(
       expect.arrayContaining(['lamps.powerDensityWPerM2', 'lamps.heatToHouseFraction']),
     );
-    const elevenMonths = await patch(house, { lamps: { ...LAMPS, hoursPerDayByMonth: Array(11).fill(8) } }).expect(
-      400,
-    );
+    const elevenMonths = await patch(house, { lamps: { ...LAMPS, hoursPerDayByMonth: Array(11).fill(8) } }).expect(400);
     expect(elevenMonths.body.details.map((d: { field: string }) => d.field)).toContain('lamps.hoursPerDayByMonth');
     const thirteenMonths = await create({
       ...houseBody('Thirteen'),

@@ -129,7 +129,9 @@ function describeSeason(
     lamps: seasonLamps(variant, run, ref),
     degreeDays: degreeDayCrossCheck(prepared, variant, run, degreeDays.total, ref),
     assumptions: seasonAssumptions(prepared, variant, thermal, ref),
-    cautions: run.lamps ? [...fuelCautions(variant.fuelRow), lampElectricalCaution(run.lamps)] : fuelCautions(variant.fuelRow),
+    cautions: run.lamps
+      ? [...fuelCautions(variant.fuelRow), lampElectricalCaution(run.lamps)]
+      : fuelCautions(variant.fuelRow),
   };
 }
 

@@ -31,7 +31,11 @@ export class ReferenceDataService {
     check('kneewalls', 'kneewallId', house.kneewallId);
     house.heaters?.forEach((heater, index) => check('fuels', `heaters.${index}.fuelId`, heater.fuelId));
     const lampTypeId = house.lamps?.lampTypeId;
-    if (lampTypeId !== undefined && lampTypeId !== null && !lampTypeRows(this.data).some((row) => row.id === lampTypeId)) {
+    if (
+      lampTypeId !== undefined &&
+      lampTypeId !== null &&
+      !lampTypeRows(this.data).some((row) => row.id === lampTypeId)
+    ) {
       throw new EngineInputError(
         `${prefix}lamps.lampTypeId`,
         `${prefix}lamps.lampTypeId: "${lampTypeId}" is not a lamp type in reference-data/lamps.json`,

@@ -154,7 +154,10 @@ describe('lamps in the estimates', () => {
     const input = demoSeasonInput({ season: { startDate: '2026-01-01', endDate: '2026-01-31' } });
     const withLamps = estimateSeason(
       // 6 h before a January sunrise near 07:15 stays within each day (no block reaches before 1 January)
-      { ...input, house: { ...input.house, lamps: lamps({ hoursPerDayByMonth: Array(12).fill(6), heatToHouseFraction: 1 }) } },
+      {
+        ...input,
+        house: { ...input.house, lamps: lamps({ hoursPerDayByMonth: Array(12).fill(6), heatToHouseFraction: 1 }) },
+      },
       ref,
       sunCache,
     );
@@ -212,7 +215,9 @@ describe('lamps: properties', () => {
         const heaters = smallHeaters
           ? input.house.heaters.map((group) => ({ ...group, ratedInputW: group.ratedInputW / 4 }))
           : input.house.heaters;
-        const base = smallHeaters ? estimateSeason({ ...input, house: { ...input.house, heaters } }, ref, sunCache) : without;
+        const base = smallHeaters
+          ? estimateSeason({ ...input, house: { ...input.house, heaters } }, ref, sunCache)
+          : without;
         const lit = estimateSeason({ ...input, house: { ...input.house, heaters, lamps: lampSpec } }, ref, sunCache);
         expect(lit.total.fuelInputKWh).toBeLessThanOrEqual(base.total.fuelInputKWh + 1e-6);
         expect(lit.lamps!.heatSavedKWh).toBeLessThanOrEqual(lit.lamps!.heatToHouseKWh + 1e-6);
@@ -224,20 +229,16 @@ describe('lamps: properties', () => {
 
   it('adding lamps never lowers the summer required fan flow', () => {
     fc.assert(
-      fc.property(
-        lampArbitrary,
-        fc.constantFrom('2026-06-21', '2026-07-21', '2026-08-15'),
-        (lampSpec, designDate) => {
-          const without = estimateCooling(coolingInput(houseWith(null), designDate), ref);
-          const lit = estimateCooling(coolingInput(houseWith(lampSpec), designDate), ref);
-          expect(lit.capacity.requiredFlowM3PerS).toBeGreaterThanOrEqual(without.capacity.requiredFlowM3PerS - 1e-12);
-          for (let hour = 0; hour < 24; hour++) {
-            expect(lit.designDay.hours[hour].indoorWithFansC).toBeGreaterThanOrEqual(
-              without.designDay.hours[hour].indoorWithFansC - 1e-9,
-            );
-          }
-        },
-      ),
+      fc.property(lampArbitrary, fc.constantFrom('2026-06-21', '2026-07-21', '2026-08-15'), (lampSpec, designDate) => {
+        const without = estimateCooling(coolingInput(houseWith(null), designDate), ref);
+        const lit = estimateCooling(coolingInput(houseWith(lampSpec), designDate), ref);
+        expect(lit.capacity.requiredFlowM3PerS).toBeGreaterThanOrEqual(without.capacity.requiredFlowM3PerS - 1e-12);
+        for (let hour = 0; hour < 24; hour++) {
+          expect(lit.designDay.hours[hour].indoorWithFansC).toBeGreaterThanOrEqual(
+            without.designDay.hours[hour].indoorWithFansC - 1e-9,
+          );
+        }
+      }),
       { numRuns: 60 },
     );
   });

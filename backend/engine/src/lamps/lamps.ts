@@ -42,7 +42,11 @@ export function lampMethodRow(ref: ReferenceData, id: string): ReferenceRow {
  * Checks a house's lamps (EngineInputError naming `field.…`); null or absent is "no lamps".
  * With `ref`, a named lamp type must be a lamp-type row.
  */
-export function validateLamps(lamps: Lamps | null | undefined, field = 'house.lamps', ref?: ReferenceData): Lamps | null {
+export function validateLamps(
+  lamps: Lamps | null | undefined,
+  field = 'house.lamps',
+  ref?: ReferenceData,
+): Lamps | null {
   if (lamps === null || lamps === undefined) return null;
   if (typeof lamps !== 'object' || Array.isArray(lamps)) {
     throw new EngineInputError(field, `${field} must be an object or null`);

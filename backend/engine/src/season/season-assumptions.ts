@@ -243,7 +243,9 @@ function lampAssumptions(variant: SeasonVariant, thermal: HouseThermal, ref: Ref
   const list: Assumption[] = [
     user(
       'lamps.power-density',
-      type ? `Supplemental lamps (${type.label ?? type.id}): electrical input per floor area` : 'Supplemental lamps: electrical input per floor area',
+      type
+        ? `Supplemental lamps (${type.label ?? type.id}): electrical input per floor area`
+        : 'Supplemental lamps: electrical input per floor area',
       lamps.powerDensityWPerM2,
       'W/m²',
     ),

@@ -110,7 +110,10 @@ describe('lamps in the hourly heat balance', () => {
   it('all ten lit hours count when both days are heated: 10 h × 100 kW = 1000 kWh saved', () => {
     const hours = twoDays();
     const lamps = seasonLampSchedule(hours, lampsOf(10), FLOOR_M2, onlyDayOne)!;
-    const bothDays = parameters({ daySetpointC: new Float64Array([15, 15]), nightSetpointC: new Float64Array([15, 15]) });
+    const bothDays = parameters({
+      daySetpointC: new Float64Array([15, 15]),
+      nightSetpointC: new Float64Array([15, 15]),
+    });
     const without = simulateSeason(hours, bothDays);
     const withLamps = simulateSeason(hours, { ...bothDays, lamps });
     // by hand: 48 h × 150 kW = 7200 kWh; 10 lit hours at 50 kW instead of 150 kW

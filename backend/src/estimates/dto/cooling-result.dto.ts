@@ -35,7 +35,8 @@ export class CoolingCapacityDto {
   @ApiProperty({
     type: Number,
     nullable: true,
-    description: 'the design-day solar hour that sets the requirement with the lamps; null when the floor-area method does',
+    description:
+      'the design-day solar hour that sets the requirement with the lamps; null when the floor-area method does',
   })
   lampGoverningHour: number | null;
   @ApiProperty({ description: 'the larger of the floor-area method and the lit hours’ need, m³/s' })

@@ -120,7 +120,10 @@ export class SeasonLampsDto {
   heatToHouseKWh: number;
   @ApiProperty({ minimum: 0, description: 'heat the heaters did not deliver because the lamps gave it, kWh' })
   heatSavedKWh: number;
-  @ApiProperty({ type: SeasonFuelAmountDto, description: 'the fuel (and money, with a price) that heat would have taken' })
+  @ApiProperty({
+    type: SeasonFuelAmountDto,
+    description: 'the fuel (and money, with a price) that heat would have taken',
+  })
   fuelSaved: SeasonFuelAmountDto;
   @ApiProperty({
     minimum: 0,

@@ -257,7 +257,9 @@ export function formValuesToHouseInput(
       ),
     },
     inletAreaM2: si('area', values.inletAreaM2, initialValues.inletAreaM2, original.inletAreaM2),
-    lamps: values.lampsOn ? lampsInput(values.lamps, initialValues.lampsOn ? initialValues.lamps : null, original.lamps ?? null, units) : null,
+    lamps: values.lampsOn
+      ? lampsInput(values.lamps, initialValues.lampsOn ? initialValues.lamps : null, original.lamps ?? null, units)
+      : null,
     setpoints: {
       dayHeatingC: si(
         'temperature',

@@ -37,7 +37,10 @@ const monthField = (month: string) =>
 describe('HouseForm: supplemental lamps', () => {
   it('adds lamps starting from the reference tables: LED power and heat share, the starting schedule', async () => {
     const user = userEvent.setup();
-    renderForm(vi.fn(async () => {}), 'si');
+    renderForm(
+      vi.fn(async () => {}),
+      'si',
+    );
 
     expect(screen.getByText('No supplemental lamps.')).toBeTruthy();
     await user.click(screen.getByRole('button', { name: 'Add lamps' }));

@@ -33,7 +33,8 @@ export function LampsSection({ referenceData, units }: { referenceData: Referenc
                 helperText="Sets the usual share of the lamps' power that heats the house"
                 onValueChange={(type) => {
                   const share = typicalLampHeatShareOf(referenceData, type);
-                  if (share !== null) void setFieldValue('lamps.heatToHouseFraction', String(Math.round(share * 1000) / 10));
+                  if (share !== null)
+                    void setFieldValue('lamps.heatToHouseFraction', String(Math.round(share * 1000) / 10));
                 }}
               />
             </Grid>
@@ -68,8 +69,8 @@ export function LampsSection({ referenceData, units }: { referenceData: Referenc
           </Grid>
           <Typography variant="body2" color="text.secondary">
             Lamp heat lowers the season&apos;s heating in the hours they run and adds to the summer fan requirement;
-            heaters are still sized without it, since lamps may be off on the coldest night. Lamps are electrical
-            loads: circuits, wiring and fixtures must be designed and installed by a licensed electrician to the local
+            heaters are still sized without it, since lamps may be off on the coldest night. Lamps are electrical loads:
+            circuits, wiring and fixtures must be designed and installed by a licensed electrician to the local
             electrical code.
           </Typography>
           {readOnly ? null : (
@@ -94,7 +95,8 @@ export function LampsSection({ referenceData, units }: { referenceData: Referenc
                 startIcon={<AddIcon />}
                 onClick={() => {
                   // lamps removed in this edit come back as they were; otherwise start from the tables
-                  if (values.lamps.powerDensityWPerM2 === '') void setFieldValue('lamps', startingLamps(referenceData, units));
+                  if (values.lamps.powerDensityWPerM2 === '')
+                    void setFieldValue('lamps', startingLamps(referenceData, units));
                   void setFieldValue('lampsOn', true);
                 }}
               >

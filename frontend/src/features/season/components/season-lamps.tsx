@@ -40,10 +40,10 @@ export function SeasonLampsSummary({ season }: { season: HouseSeasonEstimate }) 
       <Typography variant="body2" color="text.secondary">
         {units.format('powerPerFloorArea', lamps.powerDensityWPerM2)} ({units.format('power', lamps.electricW)} while
         they run), {units.format('fraction', lamps.heatToHouseFraction)} of it as heat in the house. They run before
-        sunrise for the hours set for each month, on heated days only; their heat counts only up to what the house
-        loses in that hour, so {units.format('fraction', lamps.usefulShareOfHeat)} of it replaces heater heat. The
-        electricity is not in the fuel cost. Heaters are sized without the lamps, which may be off on the coldest
-        night; the lamps' electrical work is in the safety notes.
+        sunrise for the hours set for each month, on heated days only; their heat counts only up to what the house loses
+        in that hour, so {units.format('fraction', lamps.usefulShareOfHeat)} of it replaces heater heat. The electricity
+        is not in the fuel cost. Heaters are sized without the lamps, which may be off on the coldest night; the lamps'
+        electrical work is in the safety notes.
       </Typography>
     </Stack>
   );
