@@ -185,6 +185,24 @@ describe('season, calendars, fuel prices and the farm budget (e2e)', () => {
       // Range C's six heaters hold it all year
       expect(body.total).toMatchObject({ unmetHeatKWh: 0, hoursBelowSetpoint: 0 });
       expect(body.heaterCapacity.caution).toBeNull();
+      // where the heat goes: the parts less the sun are the heat delivered, the night sky its own part
+      const breakdown = body.lossBreakdown;
+      expect(breakdown.parts.map((part: { key: string }) => part.key)).toEqual([
+        'roof',
+        'sidewalls',
+        'endwalls',
+        'kneewall',
+        'perimeter',
+        'infiltration',
+        'sky',
+      ]);
+      expect(
+        sum(breakdown.parts.map((part: { energyKWh: number }) => part.energyKWh)) - breakdown.solarOffsetKWh,
+      ).toBeCloseTo(body.total.energyKWh, 3);
+      expect(breakdown.skyKWh).toBeGreaterThan(0);
+      expect(body.assumptions.map((a: { key: string }) => a.key)).toEqual(
+        expect.arrayContaining(['sky-cloud-cover', 'sky-dew-point', 'sky-roof-ir-transmittance', 'sky-night-only']),
+      );
     });
 
     it("flags House B's hours below the setpoint: one unit heater gives less than its coldest hours need", async () => {
@@ -239,9 +257,10 @@ describe('season, calendars, fuel prices and the farm budget (e2e)', () => {
         'hourly-curve',
         'day-setpoint',
         'curtain',
+        'sky',
         'sun',
       ]);
-      expect(dd.steps[4].energyKWh).toBeCloseTo(body.total.energyKWh, 3);
+      expect(dd.steps[5].energyKWh).toBeCloseTo(body.total.energyKWh, 3);
       expect(dd.hourlyDifferenceFraction).toBeCloseTo(body.total.energyKWh / dd.energyKWh - 1, 6);
     });
 
@@ -413,6 +432,12 @@ describe('season, calendars, fuel prices and the farm budget (e2e)', () => {
       expect(
         sum(body.hourly.map((h: { nightShare: number; heatW: number }) => (h.nightShare * h.heatW) / 1000)),
       ).toBeCloseTo(body.energyKWh, 6);
+      // part of each hour's heat goes to the night sky through House A's IR film and from its coverings
+      expect(
+        sum(body.hourly.map((h: { nightShare: number; skyW: number }) => (h.nightShare * h.skyW) / 1000)),
+      ).toBeCloseTo(body.skyKWh, 6);
+      for (const hour of body.hourly) expect(hour.skyW).toBeGreaterThan(0);
+      for (const hour of body.hourly) expect(hour.skyW).toBeLessThan(hour.heatW);
       expect(body.inputsUsed).toMatchObject({ fuelId: 'propane', priceFrom: 'farm-fuel-prices' });
     });
 

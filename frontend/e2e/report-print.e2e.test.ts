@@ -13,6 +13,13 @@ afterAll(async () => {
   await browser?.close();
 });
 
+const ALTERNATIVES: Array<[string, Record<string, unknown>]> = [
+  ['Aluminised energy screen drawn every night of the season', { curtainId: 'energy-screen-aluminised' }],
+  ['Twin-wall polycarbonate endwalls', { coverings: { endwalls: 'polycarbonate-twin-8mm' } }],
+  ['Night setpoint lowered to 13 °C', { setpoints: { nightHeatingC: 13 } }],
+  ['Insulated perimeter and a tighter house', { perimeterInsulated: true }],
+];
+
 /** Each caution the report must carry on paper (the standing list in backend report-document.ts). */
 const CAUTIONS = [/^Combustion air:/, /^Venting:/, /^Carbon monoxide:/, /^Ethylene injury:/, /^Installation:/];
 
@@ -49,6 +56,19 @@ describe('the printed report', () => {
     await page.waitForURL(/\/farms\/\d+$/);
     await page.getByRole('grid', { name: 'Houses' }).getByRole('link').first().click();
     await page.waitForURL(/\/houses\/\d+$/);
+    // four saved alternatives with long names: the widest comparison a report prints
+    const houseId = Number(/\/houses\/(\d+)$/.exec(page.url())?.[1]);
+    const login = await page.request.post('/api/auth/login', {
+      data: { email: 'adviser@example.com', password: DEMO_PASSWORD },
+    });
+    const headers = { Authorization: `Bearer ${(await login.json()).accessToken}` };
+    for (const [name, patch] of ALTERNATIVES) {
+      const created = await page.request.post(`/api/houses/${houseId}/alternatives`, {
+        headers,
+        data: { name, patch, costAmount: 12_500 },
+      });
+      expect(created.status()).toBe(201);
+    }
     await page.getByRole('textbox', { name: 'Report title' }).fill('Print check (browser test)');
     await page.getByRole('button', { name: 'Create report' }).click();
     await page.waitForURL(/\/reports\/\d+$/);
@@ -83,6 +103,19 @@ describe('the printed report', () => {
     const printed = await tableLayout(page);
     expect(printed.map((t) => t.rows)).toEqual(onScreen.map((t) => t.rows));
     for (const table of printed) expect(table).toEqual({ rows: table.rows, rowsDrawn: table.rows, cutOff: false });
+
+    // the house and its four alternatives: one table, every column on the sheet
+    const comparison = report.getByRole('region', { name: 'Alternatives compared' }).getByRole('table');
+    expect(await comparison.getByRole('columnheader').allTextContents()).toEqual([
+      '',
+      expect.stringMatching(/ as it is$/),
+      ...ALTERNATIVES.map(([name]) => name),
+    ]);
+    const edges = await comparison.evaluate((table) => {
+      const right = Math.max(...[...table.querySelectorAll('th, td')].map((c) => c.getBoundingClientRect().right));
+      return { right, page: document.documentElement.clientWidth };
+    });
+    expect(edges.right).toBeLessThanOrEqual(edges.page);
 
     const safety = report.getByRole('region', { name: 'Safety' });
     const cautions = (await safety.getByRole('listitem').allTextContents()).map((text) => text.trim());

@@ -253,6 +253,9 @@ describe('farm climate, temperature logs and the season', () => {
     // the default list holds only measures that apply to the house
     expect(await measures.textContent()).not.toContain('Does not apply');
     await page.getByRole('columnheader', { name: 'Hours below setpoint' }).waitFor();
+    // the season's heat by part, the night sky its own row (the demo house's roof film passes long-wave radiation)
+    const byPart = page.getByRole('table', { name: 'Season heat by part' });
+    expect(await byPart.textContent()).toMatch(/Radiation to the night sky[^%]*\d[\d,.]* (kWh|MMBtu)\d+ %/);
     await page.getByRole('heading', { name: 'Production calendar' }).waitFor();
     // The API's prose carries quantities as {{kind:value}} tokens: none may reach the reader.
     expect(await page.evaluate(() => document.body.innerText)).not.toContain('{{');

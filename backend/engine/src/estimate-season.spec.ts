@@ -10,6 +10,7 @@ import type { SiteClimate } from './climate/site-climate';
 import { demoClimate, demoSeasonInput } from './season/demo-season';
 import { SunCache } from './season/sun-hours';
 import { proseToPlainSi } from './vocabulary';
+import { sunTimes } from './solar';
 
 const ref = loadReferenceData();
 const sunCache = new SunCache();
@@ -38,7 +39,7 @@ function fieldOf(run: () => unknown): string {
 }
 
 describe('estimateSeason', () => {
-  it('agrees with the degree-day method at a constant outdoor temperature with no sun and one setpoint', () => {
+  it('agrees with the degree-day method at a constant outdoor temperature with no sun and one setpoint, then adds the night sky', () => {
     const input = demoSeasonInput({
       climate: constantClimate(2),
       season: { startDate: '2026-01-01', endDate: '2026-03-31' },
@@ -46,11 +47,13 @@ describe('estimateSeason', () => {
     });
     const estimate = estimateSeason(input, ref, sunCache);
     expect(estimate.total.energyKWh).toBeGreaterThan(0);
-    expect(Math.abs(estimate.total.energyKWh / estimate.degreeDays.energyKWh - 1)).toBeLessThan(1e-9);
+    const step = (key: string) => estimate.degreeDays.steps.find((s) => s.key === key)!;
+    // up to the sky step the hourly walk is the degree-day figure exactly
+    expect(Math.abs(step('curtain').energyKWh / estimate.degreeDays.energyKWh - 1)).toBeLessThan(1e-9);
     expect(estimate.degreeDays.degreeDaysKDay).toBeCloseTo(13 * 90, 6);
     expect(estimate.solarOffsetKWh).toBe(0);
 
-    // and both equal UA × ΔT × hours with UA computed directly by the heating engine
+    // and it equals UA × ΔT × hours with UA computed directly by the heating engine
     const house = input.house;
     const ua = heatLossCoefficients(house, computeHouseGeometry(house), ref, {
       curtainClosed: false,
@@ -60,9 +63,29 @@ describe('estimateSeason', () => {
     }).totalWPerK;
     expect(input.site.elevationM).toBe(60);
     expect(dryAirDensityByHand(15, 60)).toBeCloseTo(1.21636, 5);
-    expectRelativelyClose(estimate.total.energyKWh, (ua * 13 * 90 * 24) / 1000, 1e-6);
+    expectRelativelyClose(step('curtain').energyKWh, (ua * 13 * 90 * 24) / 1000, 1e-6);
     expect(estimate.total.heatingHours).toBe(90 * 24);
-    expectRelativelyClose(estimate.peak!.heatW, ua * 13, 1e-6);
+
+    // The night sky, by hand (reference-data/sky-radiation.json, coverings.json, surface-coefficients.json):
+    //   clearness 0 → cloud cover 10 tenths (Kasten & Czeplak inverted: ((1 − 0)/0.75)^(1/3.4) > 1, held at 1)
+    //   dew point = the day's minimum, 2 °C (FAO-56 with 0 K depression)
+    //   ε_clear = 0.711 + 0.56 × 0.02 + 0.73 × 0.02² = 0.722492; overcast × 1.154 (Clark & Allen) = 0.833756
+    //   deficit = σ T⁴ (1 − ε) = 5.670374e−8 × 275.15⁴ × 0.166244 = 325.0048 × 0.166244 = 54.0302 W/m²
+    //   coupling: crop 0.30 × 0.95 × 270 m² = 76.95 m²; coverings (1172.999 + 571.68 W/K) × 0.4 / 33.4
+    //     + 213.588 W/K × 0.9 / 33.4 = 20.8944 + 5.7554 = 26.6497 m² (U·A from heating/heat-loss.spec.ts); 103.5997 m²
+    //   sky loss = 103.5997 × 54.0302 = 5597.51 W in every night share of an hour
+    // Night hours: 90 × 24 h less the day lengths from sunrise to sunset (solar/sunTimes at the demo site).
+    let dayHours = 0;
+    for (let day = 0; day < 90; day++) {
+      const { sunrise, sunset } = sunTimes(new Date(Date.UTC(2026, 0, 1 + day, 17)), 42, -72.5);
+      dayHours += (sunset!.getTime() - sunrise!.getTime()) / 3_600_000;
+    }
+    const nightHours = 90 * 24 - dayHours;
+    expect(nightHours).toBeGreaterThan(90 * 12); // winter nights are longer than days
+    expectRelativelyClose(estimate.lossBreakdown.skyKWh, (5597.51 * nightHours) / 1000, 1e-5);
+    expectRelativelyClose(estimate.total.energyKWh, (ua * 13 * 2160 + 5597.51 * nightHours) / 1000, 1e-5);
+    expectRelativelyClose(step('sky').changeKWh, estimate.lossBreakdown.skyKWh, 1e-9);
+    expectRelativelyClose(estimate.peak!.heatW, ua * 13 + 5597.51, 1e-6);
   });
 
   it('sets the conventional 65 °F base beside the setpoint base, saying why the setpoint base suits a greenhouse', () => {
@@ -118,13 +141,27 @@ describe('estimateSeason', () => {
     const estimate = estimateSeason(demoSeasonInput(), ref, sunCache);
     expect(estimate.solarOffsetKWh).toBeGreaterThan(0);
     const { steps, explanation } = estimate.degreeDays;
-    expect(steps.map((step) => step.key)).toEqual(['degree-day', 'hourly-curve', 'day-setpoint', 'curtain', 'sun']);
+    expect(steps.map((step) => step.key)).toEqual([
+      'degree-day',
+      'hourly-curve',
+      'day-setpoint',
+      'curtain',
+      'sky',
+      'sun',
+    ]);
     expect(steps[0].energyKWh).toBeCloseTo(estimate.degreeDays.energyKWh, 9);
-    expect(steps[4].energyKWh).toBeCloseTo(estimate.total.energyKWh, 9);
+    expect(steps[5].energyKWh).toBeCloseTo(estimate.total.energyKWh, 9);
     expect(steps[2].changeKWh).toBeGreaterThan(0); // day setpoint 18 °C above night 15 °C
     expect(steps[3].changeKWh).toBe(0); // the demo house has no curtain
-    expect(steps[4].changeKWh).toBeCloseTo(-estimate.solarOffsetKWh, 6);
+    // double poly passes 30 % of the crop's long-wave radiation: the night sky adds heat
+    expect(steps[4].changeKWh).toBeGreaterThan(0);
+    // the step is what the sky adds; the breakdown's sky part is larger where the sky makes a warm
+    // night (outdoors above the setpoint) need heat: the sky's whole part counts there, and the
+    // envelope's part is a gain
+    expect(steps[4].changeKWh).toBeLessThanOrEqual(estimate.lossBreakdown.skyKWh + 1e-6);
+    expect(steps[5].changeKWh).toBeCloseTo(-estimate.solarOffsetKWh, 6);
     expect(explanation.join(' ')).toMatch(/sun/i);
+    expect(explanation.join(' ')).toMatch(/sky is colder than the air/);
     expect(estimate.degreeDays.baseTemperatureC).toBe(15);
     // quantities are tokens (energy in joules, temperature in °C); the reader's units show them
     expect(estimate.degreeDays.baseDescription).toBe('the night setpoint, {{temperature:15}}');
@@ -408,11 +445,12 @@ describe('estimateSeason with the installed heaters as a limit', () => {
       'hourly-curve',
       'day-setpoint',
       'curtain',
+      'sky',
       'sun',
       'heater-capacity',
     ]);
-    expect(steps[4].energyKWh).toBeCloseTo(ample.total.energyKWh, 3);
-    expect(steps[5].changeKWh).toBeCloseTo(-tiny.total.unmetHeatKWh, 3);
+    expect(steps[5].energyKWh).toBeCloseTo(ample.total.energyKWh, 3);
+    expect(steps[6].changeKWh).toBeCloseTo(-tiny.total.unmetHeatKWh, 3);
     expect(tiny.degreeDays.energyKWh).toBeCloseTo(ample.degreeDays.energyKWh, 9);
     expect(tiny.degreeDays.explanation.join(' ')).toMatch(/assumes the heaters deliver whatever the house needs/);
   });
@@ -425,7 +463,7 @@ describe('estimateSeason with the installed heaters as a limit', () => {
     expect(ample.total.hoursBelowSetpoint).toBe(0);
     expect(ample.total.unmetHeatKWh).toBe(0);
     expect(ample.heaterCapacity.caution).toBeNull();
-    expect(ample.degreeDays.steps).toHaveLength(5);
+    expect(ample.degreeDays.steps).toHaveLength(6);
   });
 
   it('without heaters nothing is delivered, no fuel is burnt and every heating hour is below the setpoint', () => {
@@ -441,6 +479,136 @@ describe('estimateSeason: efficiency on the higher-heating-value basis', () => {
   it('refuses a fuel-fired efficiency above 1.0, naming heaterEfficiency', () => {
     expect(() => estimateSeason(demoSeasonInput({ heaterEfficiency: 1.03 }), ref)).toThrow(
       expect.objectContaining({ field: 'heaterEfficiency' }),
+    );
+  });
+});
+
+describe('estimateSeason: the night sky', () => {
+  const singlePoly = (overrides: Partial<EstimateSeasonInput['house']> = {}) => ({
+    ...demoSeasonInput().house,
+    coverings: { roof: 'poly-single', sidewalls: 'poly-single', endwalls: 'poly-single' },
+    ...overrides,
+  });
+
+  it('breaks the season down by part: the parts less the sun and the unmet heat are the heat delivered', () => {
+    const estimate = estimateSeason(demoSeasonInput(), ref, sunCache);
+    const breakdown = estimate.lossBreakdown;
+    expect(breakdown.parts.map((part) => part.key)).toEqual([
+      'roof',
+      'sidewalls',
+      'endwalls',
+      'perimeter',
+      'infiltration',
+      'sky',
+    ]);
+    const sum = (values: number[]) => values.reduce((a, b) => a + b, 0);
+    expectRelativelyClose(sum(breakdown.parts.map((part) => part.energyKWh)), breakdown.lostKWh, 1e-12);
+    expectRelativelyClose(
+      breakdown.lostKWh - breakdown.solarOffsetKWh - breakdown.unmetHeatKWh,
+      estimate.total.energyKWh,
+      1e-9,
+    );
+    expect(breakdown.deliveredKWh).toBe(estimate.total.energyKWh);
+    expect(breakdown.solarOffsetKWh).toBe(estimate.solarOffsetKWh);
+    expect(sum(breakdown.parts.map((part) => part.share))).toBeCloseTo(1, 12);
+    const sky = breakdown.parts.find((part) => part.key === 'sky')!;
+    expect(sky.energyKWh).toBe(breakdown.skyKWh);
+    expect(sky.energyKWh).toBeGreaterThan(0);
+    // the roof (double poly, U 3.97 on 295.5 m²) loses more than the endwalls (twin-wall, U 3.49 on 61.2 m²)
+    const part = (key: string) => breakdown.parts.find((p) => p.key === key)!.energyKWh;
+    expectRelativelyClose(part('roof') / part('endwalls'), 1172.999 / 213.588, 1e-6);
+  });
+
+  it('an IR-blocking inner film, glass or polycarbonate loses less to the sky than single poly', () => {
+    // coverings.json: τ_IR single poly 0.55, IR double 0.19, glass 0.04, twin-wall 0.04; outer emissivities 0.4, 0.4, 0.84, 0.9
+    const skyOf = (coveringId: string) =>
+      estimateSeason(
+        demoSeasonInput({
+          house: singlePoly({ coverings: { roof: coveringId, sidewalls: coveringId, endwalls: coveringId } }),
+        }),
+        ref,
+        sunCache,
+      ).lossBreakdown.skyKWh;
+    const poly = skyOf('poly-single');
+    for (const other of ['poly-double-inflated', 'poly-double-ir-inner', 'glass-single', 'polycarbonate-twin-8mm']) {
+      expect(skyOf(other)).toBeLessThan(poly);
+    }
+    expect(skyOf('poly-double-ir-inner')).toBeLessThan(skyOf('poly-double-inflated'));
+    expect(skyOf('foam-board-50mm')).toBeLessThan(skyOf('glass-single'));
+  });
+
+  const SEED = 20_261_203;
+  it(`a clearer sky never lowers the sky loss or the night heat of an IR-transparent film (property, fast-check seed ${SEED})`, () => {
+    fc.assert(
+      fc.property(
+        fc.array(fc.double({ min: 0, max: 1, noNaN: true }), { minLength: 12, maxLength: 12 }),
+        fc.array(fc.double({ min: 0, max: 1, noNaN: true }), { minLength: 12, maxLength: 12 }),
+        fc.double({ min: -30, max: 10, noNaN: true }),
+        fc.double({ min: 0, max: 15, noNaN: true }),
+        (a, b, minC, rangeK) => {
+          const climate = (clearness: number[]): SiteClimate => ({
+            ...demoClimate(),
+            monthly: clearness.map((value, index) => ({
+              month: index + 1,
+              meanDailyMinC: minC,
+              meanDailyMaxC: minC + rangeK,
+              clearness: value,
+            })),
+          });
+          const run = (clearness: number[]) =>
+            estimateSeason(
+              demoSeasonInput({
+                house: singlePoly(),
+                climate: climate(clearness),
+                season: { startDate: '2026-01-01', endDate: '2026-02-28' },
+              }),
+              ref,
+              sunCache,
+            );
+          const clearer = run(a.map((value, index) => Math.max(value, b[index])));
+          const cloudier = run(a.map((value, index) => Math.min(value, b[index])));
+          const nightHeat = (estimate: ReturnType<typeof run>) => estimate.nightShareOfHeat * estimate.total.energyKWh;
+          expect(clearer.lossBreakdown.skyKWh).toBeGreaterThanOrEqual(cloudier.lossBreakdown.skyKWh * (1 - 1e-12));
+          expect(nightHeat(clearer)).toBeGreaterThanOrEqual(nightHeat(cloudier) * (1 - 1e-12));
+        },
+      ),
+      { seed: SEED, numRuns: 40 },
+    );
+  });
+
+  it('a heat-loss factor scales the sky loss with the rest, and a monthly dew point from the climate is used and said', () => {
+    // constant −2 °C, no sun: every hour loses heat, so the whole season scales with the factor
+    const input = demoSeasonInput({
+      climate: constantClimate(-2),
+      season: { startDate: '2026-01-01', endDate: '2026-01-31' },
+    });
+    const handbook = estimateSeason(input, ref, sunCache);
+    const fitted = estimateSeason({ ...input, heatLossFactor: 1.5 }, ref, sunCache);
+    expectRelativelyClose(fitted.lossBreakdown.skyKWh, 1.5 * handbook.lossBreakdown.skyKWh, 1e-9);
+    expectRelativelyClose(fitted.total.energyKWh, 1.5 * handbook.total.energyKWh, 1e-9);
+
+    // the climate's dew point −12 °C in January (drier than the −2 °C daily minimum): a colder sky, more loss.
+    // Overcast (clearness 0): deficit ratio (1 − 1.154 ε(−12)) / (1 − 1.154 ε(−2)) with ε(−12) = 0.654312 and
+    // ε(−2) = 0.711 − 0.0112 + 0.000292 = 0.700092: (1 − 0.755076) / (1 − 0.807906) = 0.244924 / 0.192094 = 1.27502
+    const dry = constantClimate(-2);
+    dry.monthly[0].meanDewPointC = -12;
+    const withDewPoint = estimateSeason({ ...input, climate: dry }, ref, sunCache);
+    expectRelativelyClose(withDewPoint.lossBreakdown.skyKWh / handbook.lossBreakdown.skyKWh, 1.27502, 1e-5);
+    const said = (estimate: typeof handbook) => estimate.assumptions.find((a) => a.key === 'sky-dew-point')!;
+    expect(said(withDewPoint)).toMatchObject({ source: 'the farm’s climate', overridden: true });
+    expect(said(withDewPoint).value).toMatch(/^-12\.0 – /);
+    expect(said(handbook)).toMatchObject({ value: 0, unit: 'K', confidence: 'memory', overridden: false });
+    expect(said(handbook).source).toMatch(/FAO Irrigation and Drainage Paper 56/);
+    const cloud = handbook.assumptions.find((a) => a.key === 'sky-cloud-cover')!;
+    expect(cloud.value).toBe(new Array(12).fill('10.0').join(' '));
+    expect(cloud.source).toMatch(/Kasten/);
+    expect(handbook.assumptions.find((a) => a.key === 'sky-roof-ir-transmittance')).toMatchObject({ value: 0.3 });
+
+    // a dew point above the month's mean daily maximum is refused, naming the field
+    const wrong = constantClimate(-2);
+    wrong.monthly[3].meanDewPointC = 5;
+    expect(fieldOf(() => estimateSeason({ ...input, climate: wrong }, ref, sunCache))).toBe(
+      'climate.monthly[3].meanDewPointC',
     );
   });
 });

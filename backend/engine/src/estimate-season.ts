@@ -5,6 +5,7 @@ import { fuelCautions, priceUnitLabel } from './season/fuel';
 import { capacityCaution, degreeDayCrossCheck } from './season/degree-day-check';
 import { baseVariant, fuelAmount, prepareSeason, runVariant } from './season/prepare-season';
 import { seasonAssumptions } from './season/season-assumptions';
+import { seasonLossBreakdown } from './season/loss-breakdown';
 import type {
   EstimateSeasonInput,
   PreparedSeason,
@@ -127,6 +128,7 @@ function describeSeason(
     nightShareOfHeat: result.totalHeatWh > 0 ? result.nightHeatWh / result.totalHeatWh : 0,
     solarOffsetKWh: result.solarOffsetWh / 1000,
     lamps: seasonLamps(variant, run, ref),
+    lossBreakdown: seasonLossBreakdown(thermal, result),
     degreeDays: degreeDayCrossCheck(prepared, variant, run, degreeDays.total, ref),
     assumptions: seasonAssumptions(prepared, variant, thermal, ref),
     cautions: run.lamps

@@ -50,6 +50,12 @@ function cleanPeriods(periods: StoredProductionPeriod[]): StoredProductionPeriod
   });
 }
 
+/** The order alternatives are listed in: oldest first (the id breaks ties of one instant). */
+const LIST_ORDER: Array<[string, 'ASC']> = [
+  ['createdAt', 'ASC'],
+  ['id', 'ASC'],
+];
+
 /** An alternative resolved against its house as the house is now. */
 export interface ResolvedAlternative {
   row: HouseAlternative;
@@ -78,12 +84,15 @@ export class AlternativesService {
     const rows = await this.alternatives.findAll({
       where: { houseId },
       include: [{ model: User, attributes: ['id', 'name'] }],
-      order: [
-        ['createdAt', 'ASC'],
-        ['id', 'ASC'],
-      ],
+      order: LIST_ORDER,
     });
     return rows.map((row) => this.toDto(this.resolve(house, row)));
+  }
+
+  /** The ids of a house's alternatives in the order the list shows them (oldest first). */
+  async idsInListOrder(houseId: number): Promise<number[]> {
+    const rows = await this.alternatives.findAll({ where: { houseId }, attributes: ['id'], order: LIST_ORDER });
+    return rows.map((row) => row.id);
   }
 
   async get(user: AuthenticatedUser, alternativeId: number): Promise<AlternativeDto> {

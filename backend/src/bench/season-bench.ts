@@ -1,7 +1,8 @@
 /**
  * Speed of the season engine (run: npm run bench -w @thermbay/backend). Prints medians; no assertions.
  *  1. one hourly-year simulation of a demo-like house (the loop measures and comparisons re-run),
- *  2. a bare loop doing the same per-hour arithmetic over 8,760 precomputed hours, and the ratio 1 ÷ 2,
+ *  2. a bare loop doing the same per-hour arithmetic (the night sky's term included) over 8,760
+ *     precomputed hours, and the ratio 1 ÷ 2,
  *  3. computing a site's sun positions and clear-sky irradiance for a year (done once per site-year),
  *  4. a whole estimateSeason call with the sun already cached (heat loss, climate curve, the
  *     simulation and the four extra runs of the degree-day comparison),
@@ -59,13 +60,15 @@ function main(): void {
   }
   const uaDay = parameters.uaDayWPerK;
   const uaNight = parameters.uaNightWPerK;
+  const skyNight = parameters.skyNightM2;
+  const skyDeficit = hours.skyDeficitWPerM2;
   const bareLoop = (): number => {
     let totalWh = 0;
     for (let hour = 0; hour < hourCount; hour++) {
       const t = outdoorC[hour];
       const f = share[hour];
       const dayW = uaDay * (daySetpointC[hour] - t) - gainW[hour];
-      const nightW = uaNight * (nightSetpointC[hour] - t);
+      const nightW = uaNight * (nightSetpointC[hour] - t) + skyNight * skyDeficit[hour];
       if (dayW > 0) totalWh += f * dayW;
       if (nightW > 0) totalWh += (1 - f) * nightW;
     }

@@ -80,13 +80,21 @@ export class HousesService {
   async loadFor(user: AuthenticatedUser, houseId: number, permission: Permission): Promise<House> {
     const house = await this.houses.findByPk(houseId);
     if (!house) throw new NotFoundException('No such house');
+    await this.requireOn(user, house, permission);
+    return house;
+  }
+
+  /**
+   * The check `loadFor` makes, for a house the caller has loaded already: not a member of its farm
+   * → 404 "No such house", a role without the permission → 403.
+   */
+  async requireOn(user: AuthenticatedUser, house: House, permission: Permission): Promise<void> {
     try {
       await this.access.require(user, house.farmId, permission);
     } catch (error) {
       if (error instanceof NotFoundException) throw new NotFoundException('No such house');
       throw error;
     }
-    return house;
   }
 
   /**

@@ -3,6 +3,7 @@ import { DEFAULT_CURRENCY } from '@thermbay/engine/vocabulary';
 import { formatMoney } from '../common/money';
 import { format, formatNumber, prose, unitLabel, convert, type ReportQuantity, type UnitSystem } from './report-units';
 import { quantityOfSiUnit } from '@thermbay/engine/vocabulary';
+import { alternativeCautions, alternativesSection } from './report-alternatives';
 
 /**
  * The report as a document in the reader's units: headed sections of paragraphs, fact lists,
@@ -20,6 +21,11 @@ export interface ReportBlock {
   /** bars: values in `unit` */
   bars?: Array<{ label: string; value: number }>;
   unit?: string;
+  /**
+   * table: a comparison, whose first cell in each row names the row and whose other columns share
+   * the width equally (drawn whole at the page's width, in print too)
+   */
+  comparison?: boolean;
 }
 
 export interface ReportSection {
@@ -310,6 +316,9 @@ export function buildReportDocument(snapshot: ReportSnapshot, meta: ReportMeta, 
     });
   }
 
+  const alternatives = alternativesSection(snapshot.alternatives, system, currency);
+  if (alternatives) sections.push(alternatives);
+
   const assumptions = [
     ...heating.assumptions,
     ...(snapshot.season.status === 'estimated' ? snapshot.season.estimate.assumptions : []),
@@ -338,7 +347,14 @@ export function buildReportDocument(snapshot: ReportSnapshot, meta: ReportMeta, 
   ].map((text) => prose(text, system));
   sections.push({
     heading: 'Safety',
-    blocks: [{ kind: 'list', items: [...new Set([...engineCautions, ...STANDING_CAUTIONS])] }],
+    blocks: [
+      {
+        kind: 'list',
+        items: [
+          ...new Set([...engineCautions, ...STANDING_CAUTIONS, ...alternativeCautions(snapshot.alternatives, system)]),
+        ],
+      },
+    ],
   });
 
   sections.push({

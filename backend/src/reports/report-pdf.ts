@@ -85,12 +85,28 @@ function columnWidths(doc: Doc, columns: string[], rows: string[][]): number[] {
   return weights.map((w) => (w / sum) * total);
 }
 
-function drawTable(doc: Doc, columns: string[], rows: string[][]): void {
-  const widths = columnWidths(doc, columns, rows);
+/**
+ * A comparison: the row names take what they need up to a fifth of the width (at least 70 pt), the
+ * compared columns share the rest equally, so no column is favoured and every one fits the page.
+ */
+function comparisonWidths(doc: Doc, columns: string[], rows: string[][]): number[] {
+  const total = contentWidth(doc);
+  doc.font('bold').fontSize(8.5);
+  const longestName = Math.max(...rows.map((row) => doc.widthOfString(row[0] ?? '')), 0) + 6;
+  const first = Math.min(Math.max(longestName, 70), total / 5);
+  const others = columns.length - 1;
+  return [first, ...Array.from({ length: others }, () => (total - first) / Math.max(others, 1))];
+}
+
+function drawTable(doc: Doc, columns: string[], rows: string[][], comparison = false): void {
+  const widths = comparison ? comparisonWidths(doc, columns, rows) : columnWidths(doc, columns, rows);
   const pad = 3;
   const drawRow = (cells: string[], header: boolean) => {
-    doc.font(header ? 'bold' : 'body').fontSize(header ? 8.5 : 8.5);
-    const heights = cells.map((cell, i) => doc.heightOfString(cell || ' ', { width: widths[i]! - 2 * pad }));
+    const fontOf = (i: number) => (header || (comparison && i === 0) ? 'bold' : 'body');
+    doc.fontSize(8.5);
+    const heights = cells.map((cell, i) =>
+      doc.font(fontOf(i)).heightOfString(cell || ' ', { width: widths[i]! - 2 * pad }),
+    );
     const height = Math.max(...heights) + 2 * pad;
     if (doc.y + height > bottom(doc)) {
       doc.addPage();
@@ -100,7 +116,10 @@ function drawTable(doc: Doc, columns: string[], rows: string[][]): void {
     let x = MARGIN;
     if (header) doc.rect(MARGIN, y, contentWidth(doc), height).fill('#eef3f0');
     cells.forEach((cell, i) => {
-      doc.fillColor(header ? MUTED : TEXT).text(cell, x + pad, y + pad, { width: widths[i]! - 2 * pad });
+      doc
+        .font(fontOf(i))
+        .fillColor(header ? MUTED : TEXT)
+        .text(cell, x + pad, y + pad, { width: widths[i]! - 2 * pad });
       x += widths[i]!;
     });
     doc
@@ -173,7 +192,7 @@ function drawBlock(doc: Doc, block: ReportBlock): void {
       drawFacts(doc, block.facts ?? []);
       break;
     case 'table':
-      drawTable(doc, block.columns ?? [], block.rows ?? []);
+      drawTable(doc, block.columns ?? [], block.rows ?? [], block.comparison === true);
       break;
     case 'list':
       drawList(doc, block.items ?? []);

@@ -6,6 +6,7 @@ import { FarmsModule } from '../farms/farms.module';
 import { HousesModule } from '../houses/houses.module';
 import { MailModule } from '../mail/mail.module';
 import { SeasonModule } from '../season/season.module';
+import { SideBySideModule } from '../side-by-side/side-by-side.module';
 import { UsersModule } from '../users/users.module';
 import { Report } from './models/report.model';
 import { ReportsController } from './reports.controller';
@@ -18,6 +19,7 @@ import { ReportsService } from './reports.service';
     HousesModule,
     EstimatesModule,
     SeasonModule,
+    SideBySideModule,
     ClimateModule,
     UsersModule,
     MailModule,

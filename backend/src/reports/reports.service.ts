@@ -1,5 +1,6 @@
 import { BadRequestException, ConflictException, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
+import { EngineInputError } from '@thermbay/engine/errors';
 import { Op } from 'sequelize';
 import { ClimateService } from '../climate/climate.service';
 import type { AuthenticatedUser } from '../common/decorators/current-user.decorator';
@@ -13,6 +14,8 @@ import { HousesService } from '../houses/houses.service';
 import { House } from '../houses/models/house.model';
 import { MailService } from '../mail/mail.service';
 import { SeasonService } from '../season/season.service';
+import type { SideBySideColumnDto } from '../side-by-side/dto/side-by-side.dto';
+import { SideBySideService } from '../side-by-side/side-by-side.service';
 import { User } from '../users/models/user.model';
 import { normaliseEmail, UsersService } from '../users/users.service';
 import type {
@@ -27,7 +30,7 @@ import type {
 import { Report } from './models/report.model';
 import { buildReportDocument, type ReportDocument } from './report-document';
 import { renderReportPdf } from './report-pdf';
-import type { ReportSnapshot } from './report-snapshot';
+import type { ReportAlternativeColumn, ReportAlternatives, ReportSnapshot } from './report-snapshot';
 
 function toSummary(row: Report): ReportSummaryDto {
   return {
@@ -50,6 +53,32 @@ function errorText(error: unknown): string {
   return typeof error === 'object' && error !== null && typeof (error as Error).message === 'string'
     ? (error as Error).message
     : 'the season could not be estimated';
+}
+
+/** A side-by-side column with only what a report keeps of it. */
+function reportColumn(column: SideBySideColumnDto): ReportAlternativeColumn {
+  return {
+    key: column.key,
+    alternativeId: column.alternativeId,
+    name: column.name,
+    changedFields: column.changedFields,
+    ownCalendar: column.ownCalendar,
+    costAmount: column.costAmount,
+    invalid: column.invalid,
+    versusHouse: column.versusHouse,
+    heating: column.heating
+      ? { heatLoss: column.heating.heatLoss, heater: column.heating.heater, cautions: column.heating.cautions }
+      : null,
+    cooling: column.cooling ? { capacity: column.cooling.capacity } : null,
+    season: column.season
+      ? {
+          period: column.season.period,
+          fuel: column.season.fuel,
+          total: column.season.total,
+          cautions: column.season.cautions,
+        }
+      : null,
+  };
 }
 
 /** A file name safe everywhere: "north-house-heater-sizing-r2.pdf". */
@@ -75,6 +104,7 @@ export class ReportsService {
     private readonly housesService: HousesService,
     private readonly estimates: EstimatesService,
     private readonly season: SeasonService,
+    private readonly sideBySide: SideBySideService,
     private readonly climate: ClimateService,
     private readonly users: UsersService,
     private readonly mail: MailService,
@@ -258,6 +288,7 @@ export class ReportsService {
     } catch (error) {
       season = { status: 'not-available', reason: errorText(error) };
     }
+    const alternatives = await this.alternativesOf(user, house);
     // JSON round trip: the snapshot is plain data, detached from any row or cache
     return JSON.parse(
       JSON.stringify({
@@ -276,8 +307,33 @@ export class ReportsService {
         climate: await this.climate.findForFarm(house.farmId),
         heating,
         season,
+        alternatives,
       } satisfies ReportSnapshot),
     ) as ReportSnapshot;
+  }
+
+  /**
+   * The house beside its newest saved alternatives (as many as the side-by-side takes), through
+   * the side-by-side itself with the same request a report's own estimates use (defaults only).
+   * When the house's own column cannot be computed (no summer design conditions, say), the
+   * section says why instead; any other error fails the report as it would the side-by-side.
+   */
+  private async alternativesOf(user: AuthenticatedUser, house: House): Promise<ReportAlternatives> {
+    const { ids, savedCount } = await this.sideBySide.newestAlternativeIds(house);
+    if (savedCount === 0) return { status: 'none' };
+    try {
+      const compared = await this.sideBySide.compareLoaded(user, house, { alternativeIds: ids });
+      return {
+        status: 'compared',
+        savedCount,
+        columns: compared.columns.map(reportColumn),
+        heatingConditionsUsed: compared.heatingConditionsUsed,
+        seasonInputsUsed: compared.seasonInputsUsed,
+      };
+    } catch (error) {
+      if (!(error instanceof EngineInputError)) throw error;
+      return { status: 'not-available', savedCount, reason: error.message };
+    }
   }
 
   private async loadFor(user: AuthenticatedUser, reportId: number, permission: Permission): Promise<Report> {

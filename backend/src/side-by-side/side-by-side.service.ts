@@ -16,7 +16,12 @@ import type { FarmFuelPrice } from '../season/models/farm-fuel-price.model';
 import { SeasonInputsService, withRequestFields, type FarmSeasonContext } from '../season/season-inputs.service';
 import { SeasonService, type PreparedSeasonRun } from '../season/season.service';
 import { SunCacheService } from '../season/sun-cache.service';
-import type { SideBySideColumnDto, SideBySideDto, SideBySideRequestDto } from './dto/side-by-side.dto';
+import {
+  MAX_COMPARED_ALTERNATIVES,
+  type SideBySideColumnDto,
+  type SideBySideDto,
+  type SideBySideRequestDto,
+} from './dto/side-by-side.dto';
 
 interface ColumnSetup {
   input: SideBySideColumnInput;
@@ -43,6 +48,31 @@ export class SideBySideService {
 
   async compare(user: AuthenticatedUser, houseId: number, body: SideBySideRequestDto): Promise<SideBySideDto> {
     const stored = await this.houses.loadFor(user, houseId, 'estimate:run');
+    return this.compareStored(stored, body);
+  }
+
+  /**
+   * `compare` for a house the caller has loaded already (a report being taken): the same
+   * estimate:run check on the house's farm, then the same columns from the same code.
+   */
+  async compareLoaded(user: AuthenticatedUser, stored: House, body: SideBySideRequestDto): Promise<SideBySideDto> {
+    await this.houses.requireOn(user, stored, 'estimate:run');
+    return this.compareStored(stored, body);
+  }
+
+  /**
+   * The alternatives set beside the house when nobody chose them: the newest
+   * MAX_COMPARED_ALTERNATIVES, in the order the alternatives list shows them (oldest first), as the
+   * list's "Compare side by side" link picks them; and how many the house has. The caller has
+   * checked access to the house.
+   */
+  async newestAlternativeIds(house: House): Promise<{ ids: number[]; savedCount: number }> {
+    const all = await this.alternatives.idsInListOrder(house.id);
+    return { ids: all.slice(-MAX_COMPARED_ALTERNATIVES), savedCount: all.length };
+  }
+
+  private async compareStored(stored: House, body: SideBySideRequestDto): Promise<SideBySideDto> {
+    const houseId = stored.id;
     const resolved = await this.alternatives.resolveMany(stored, body.alternativeIds ?? []);
     const now = new Date();
     const farm = await this.inputs.farm(stored.farmId);

@@ -2355,9 +2355,35 @@ export interface components {
             /** @description heat saved ÷ heat into the house: the rest came when the house needed no heat */
             usefulShareOfHeat: number;
         };
+        SeasonLossPartDto: {
+            /**
+             * @description the design night's component keys
+             * @enum {string}
+             */
+            key: "roof" | "sidewalls" | "endwalls" | "kneewall" | "perimeter" | "infiltration" | "sky";
+            label: string;
+            /** @description heat lost through this part over the heated hours that lose heat, kWh */
+            energyKWh: number;
+            /** @description share of all the heat lost, 0–1 */
+            share: number;
+        };
+        SeasonLossBreakdownDto: {
+            /** @description the night sky is the part with key sky */
+            parts: components["schemas"]["SeasonLossPartDto"][];
+            /** @description Σ parts, kWh */
+            lostKWh: number;
+            /** @description the sky's part (long-wave radiation to the night sky), kWh */
+            skyKWh: number;
+            /** @description heat the sun supplied in place of the heaters, kWh */
+            solarOffsetKWh: number;
+            /** @description heat the heaters could not deliver, kWh */
+            unmetHeatKWh: number;
+            /** @description lostKWh − solarOffsetKWh − unmetHeatKWh: the heat delivered, kWh */
+            deliveredKWh: number;
+        };
         DegreeDayStepDto: {
             /** @enum {string} */
-            key: "degree-day" | "hourly-curve" | "day-setpoint" | "curtain" | "sun" | "lamps" | "heater-capacity";
+            key: "degree-day" | "hourly-curve" | "day-setpoint" | "curtain" | "sky" | "sun" | "lamps" | "heater-capacity";
             label: string;
             /** @description kWh */
             energyKWh: number;
@@ -2496,6 +2522,8 @@ export interface components {
             solarOffsetKWh: number;
             /** @description the supplemental lamps' electricity, heat and the fuel their heat saves; null without lamps */
             lamps: components["schemas"]["SeasonLampsDto"] | null;
+            /** @description the season's heat by part of the house, with the night sky as its own part */
+            lossBreakdown: components["schemas"]["SeasonLossBreakdownDto"];
             degreeDays: components["schemas"]["DegreeDayCrossCheckDto"];
             assumptions: components["schemas"]["SeasonAssumptionDto"][];
             /** @description combustion / electrical safety cautions; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
@@ -2534,6 +2562,8 @@ export interface components {
             nightShare: number;
             /** @description average heat demand over the hour's night share, W */
             heatW: number;
+            /** @description the part of heatW lost to the night sky, W */
+            skyW: number;
             /** @description heat the heaters deliver (at most their installed output), W */
             deliveredW: number;
             /** @description true when the heaters cannot hold the night setpoint this hour */
@@ -2601,6 +2631,8 @@ export interface components {
             installedOutputW: number;
             /** @description heat the heaters could not deliver, kWh */
             unmetHeatKWh: number;
+            /** @description heat lost to the night sky over the night (part of the need), kWh */
+            skyKWh: number;
             /** @description night hours in which the heaters cannot hold the setpoint */
             hoursBelowSetpoint: number;
             /** @description set when some hour cannot be held; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
@@ -3352,6 +3384,8 @@ export interface components {
             bars?: components["schemas"]["ReportBarDto"][];
             /** @description unit of the bar values */
             unit?: string;
+            /** @description table: a comparison, whose first cell in each row names the row and whose other columns share the width equally */
+            comparison?: boolean;
         };
         ReportSectionDto: {
             heading: string;
@@ -3484,6 +3518,8 @@ export interface components {
             solarOffsetKWh: number;
             /** @description the supplemental lamps' electricity, heat and the fuel their heat saves; null without lamps */
             lamps: components["schemas"]["SeasonLampsDto"] | null;
+            /** @description the season's heat by part of the house, with the night sky as its own part */
+            lossBreakdown: components["schemas"]["SeasonLossBreakdownDto"];
             degreeDays: components["schemas"]["DegreeDayCrossCheckDto"];
             assumptions: components["schemas"]["SeasonAssumptionDto"][];
             /** @description combustion / electrical safety cautions; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */

@@ -252,7 +252,7 @@ function efficiencyFor(house: CalibrationHouseInput, fuel: FuelRow): number {
   return heater.efficiency;
 }
 
-/** Modelled heating fuel of a period with the heat-loss coefficients × k, kWh (non-heating use excluded). */
+/** Modelled heating fuel of a period with the heat-loss coefficients and the coupling to the night sky × k, kWh (non-heating use excluded). */
 function heatingFuelKWh(period: PreparedPeriod, k: number): number {
   let total = 0;
   for (const run of period.runs) {
@@ -260,6 +260,7 @@ function heatingFuelKWh(period: PreparedPeriod, k: number): number {
       ...run.parameters,
       uaDayWPerK: run.parameters.uaDayWPerK * k,
       uaNightWPerK: run.parameters.uaNightWPerK * k,
+      skyNightM2: run.parameters.skyNightM2 * k,
     });
     total += result.totalHeatWh / 1000 / run.efficiency;
   }

@@ -12,6 +12,11 @@ export interface MonthlyClimate {
   meanDailyMaxC: number;
   /** actual ÷ clear-sky global horizontal irradiance over the month, 0–1; default from reference data */
   clearness?: number;
+  /**
+   * mean dew point of the month, °C; the season's night sky uses it where given, else the day's
+   * minimum temperature (reference-data/sky-radiation.json night-dew-point-from-daily-minimum)
+   */
+  meanDewPointC?: number | null;
 }
 
 /** The climate of a farm: design temperatures and 12 months of normals. */
@@ -81,6 +86,9 @@ export function validateSiteClimate(climate: SiteClimate, fieldPrefix = 'climate
       );
     }
     if (row.clearness !== undefined && row.clearness !== null) requireInRange(`${at}.clearness`, row.clearness, 0, 1);
+    if (row.meanDewPointC !== undefined && row.meanDewPointC !== null) {
+      requireInRange(`${at}.meanDewPointC`, row.meanDewPointC, min, row.meanDailyMaxC);
+    }
   });
   return climate;
 }

@@ -1,11 +1,10 @@
 import type { HouseGeometry } from '../geometry/house-geometry';
-import type { ReferenceData, ReferenceRow } from '../reference-data.types';
+import type { ReferenceData } from '../reference-data.types';
 import { SURFACE_GROUPS, quantityToken, type SurfaceGroup } from '../vocabulary';
 import type { HeatLossCoefficients } from './heat-loss';
 import { assumptionFromRow, type HeatingAssumption } from './heating-assumptions';
 import type { HeatingConditions } from './heating-conditions';
-import { requiredRow } from './heating-reference';
-import { coverSkyCoolingK, skyConstants, skyRadiationLoss, type SkyLoss } from './sky-radiation';
+import { skyConstants, skyCoupling, skyRadiationLoss, type SkyLoss } from './sky-radiation';
 
 /** Share of long-wave radiation above which a covering's clear-night loss earns a caution. */
 const IR_TRANSPARENT_FROM = 0.2;
@@ -28,8 +27,9 @@ export interface ClearNightSky {
 /**
  * The design night under a clear sky (heating/sky-radiation.ts): the crop radiates through the roof
  * covering to the sky, and every covering's outer surface, seeing the sky instead of the air, loses
- * as if the air were colder by `coverCoolingK` (more loss through U; a colder inside surface). A drawn curtain is treated as opaque to long-wave radiation (common
- * practice, no source: aluminised and most woven curtain fabrics pass little of it).
+ * as if the air were colder by `coverCoolingK` (more loss through U; a colder inside surface). Both
+ * paths come from `skyCoupling` (a drawn curtain is opaque to long-wave radiation there), the same
+ * coupling the season applies hour by hour.
  */
 export function clearNightSkyLoss(
   input: {
@@ -42,7 +42,8 @@ export function clearNightSkyLoss(
 ): ClearNightSky {
   const constants = skyConstants(ref);
   const roof = input.coefficients.rows.coverings.roof;
-  const thermalIrTransmittance = input.curtainClosed ? 0 : (roof.thermalIrTransmittance ?? 0);
+  const coupling = skyCoupling(input.coefficients, input.geometry.floorAreaM2, constants);
+  const { thermalIrTransmittance } = coupling;
   const loss = skyRadiationLoss(
     {
       outdoorC: input.conditions.designOutdoorC,
@@ -53,21 +54,10 @@ export function clearNightSkyLoss(
     },
     constants,
   );
-  const outsideFilm = requiredRow<ReferenceRow & { hWPerM2K: number }>(ref, 'surface-coefficients', 'outside-winter');
   const coverCoolingK = {} as Record<SurfaceGroup, number>;
-  let coverW = 0;
-  for (const group of SURFACE_GROUPS) {
-    const covering = input.coefficients.rows.coverings[group];
-    coverCoolingK[group] = coverSkyCoolingK(
-      covering.outerLongWaveEmissivity ?? 0,
-      input.conditions.designOutdoorC,
-      loss.skyTemperatureC,
-      outsideFilm.hWPerM2K,
-      constants,
-    );
-    coverW += input.coefficients.coveringWPerK[group] * coverCoolingK[group];
-  }
-  const [, clearRow, , cropRow, depressionRow] = constants.rows;
+  for (const group of SURFACE_GROUPS) coverCoolingK[group] = coupling.coverKPerWPerM2[group] * loss.deficitWPerM2;
+  const coverW = coupling.coverM2 * loss.deficitWPerM2;
+  const { clearSky: clearRow, crop: cropRow, depression: depressionRow, outsideFilm } = constants.rows;
   const assumptions: HeatingAssumption[] = [
     assumptionFromRow(
       { id: 'ir', source: String(roof.irSource ?? roof.source), confidence: roof.irConfidence ?? roof.confidence },
@@ -79,7 +69,7 @@ export function clearNightSkyLoss(
       'fraction',
     ),
     input.conditions.outdoorDewPointC === undefined || input.conditions.outdoorDewPointC === null
-      ? assumptionFromRow(depressionRow!, 'sky.dewPointC', 'Outdoor dew point on the clear night', loss.dewPointC, '°C')
+      ? assumptionFromRow(depressionRow, 'sky.dewPointC', 'Outdoor dew point on the clear night', loss.dewPointC, '°C')
       : {
           key: 'sky.dewPointC',
           label: 'Outdoor dew point on the clear night',
@@ -89,10 +79,10 @@ export function clearNightSkyLoss(
           confidence: 'user-entered',
           overridden: true,
         },
-    assumptionFromRow(clearRow!, 'sky.emissivity', 'Clear-sky emissivity', loss.skyEmissivity, 'fraction'),
-    assumptionFromRow(clearRow!, 'sky.temperatureC', 'Sky temperature', loss.skyTemperatureC, '°C'),
+    assumptionFromRow(clearRow, 'sky.emissivity', 'Clear-sky emissivity', loss.skyEmissivity, 'fraction'),
+    assumptionFromRow(clearRow, 'sky.temperatureC', 'Sky temperature', loss.skyTemperatureC, '°C'),
     assumptionFromRow(
-      cropRow!,
+      cropRow,
       'sky.cropEmissivity',
       'Long-wave emissivity of the crop',
       constants.cropEmissivity,

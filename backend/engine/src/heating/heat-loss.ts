@@ -238,6 +238,21 @@ export interface HeatLossBreakdown {
 
 const GROUP_LABELS: Record<SurfaceGroup, string> = { roof: 'Roof', sidewalls: 'Sidewalls', endwalls: 'Endwalls' };
 
+/** The label of each part of the house's heat loss (the kneewall's only where it has one). */
+export function heatLossComponentLabels(
+  coefficients: HeatLossCoefficients,
+): Partial<Record<Exclude<HeatLossComponentKey, 'sky'>, string>> & Record<SurfaceGroup, string> {
+  const { coverings, kneewall, perimeter } = coefficients.rows;
+  return {
+    roof: `${GROUP_LABELS.roof} (${coverings.roof.label})`,
+    sidewalls: `${GROUP_LABELS.sidewalls} (${coverings.sidewalls.label})`,
+    endwalls: `${GROUP_LABELS.endwalls} (${coverings.endwalls.label})`,
+    ...(kneewall ? { kneewall: `Kneewall (${kneewall.label})` } : {}),
+    perimeter: perimeter.label ?? 'Perimeter',
+    infiltration: 'Air leakage (infiltration)',
+  };
+}
+
 /**
  * Heat the house loses at the given inside and outside temperatures. When it is as warm outside
  * as inside, nothing is lost (the result is 0 W, not negative: this is a heating figure). Shares
@@ -270,11 +285,12 @@ export function designHeatLoss(
     share: share(conductanceWPerK),
   });
 
+  const labels = heatLossComponentLabels(coefficients);
   const components: HeatLossComponent[] = [
     ...SURFACE_GROUPS.map((group) =>
       component(
         group,
-        `${GROUP_LABELS[group]} (${coefficients.rows.coverings[group].label})`,
+        labels[group],
         coefficients.areasM2[group],
         'm2',
         coefficients.effectiveUWPerM2K[group],
@@ -285,7 +301,7 @@ export function designHeatLoss(
       ? [
           component(
             'kneewall',
-            `Kneewall (${coefficients.rows.kneewall.label})`,
+            labels.kneewall ?? 'Kneewall',
             geometry.kneewallAreaM2,
             'm2',
             coefficients.rows.kneewall.uWPerM2K,
@@ -295,7 +311,7 @@ export function designHeatLoss(
       : []),
     component(
       'perimeter',
-      coefficients.rows.perimeter.label ?? 'Perimeter',
+      labels.perimeter ?? 'Perimeter',
       geometry.perimeterM,
       'm',
       coefficients.perimeterFactorWPerMK,
@@ -303,7 +319,7 @@ export function designHeatLoss(
     ),
     component(
       'infiltration',
-      'Air leakage (infiltration)',
+      labels.infiltration ?? 'Air leakage (infiltration)',
       geometry.volumeM3,
       'm3',
       coefficients.airChangesPerHour,

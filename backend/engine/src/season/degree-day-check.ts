@@ -36,6 +36,7 @@ export function degreeDayCrossCheck(
     curtainOpen: true,
     uncapped: true,
     withoutLamps: true,
+    withoutSky: true,
   });
   const withDaySetpoint = runVariant(prepared, variant, ref, {
     thermal,
@@ -43,14 +44,17 @@ export function degreeDayCrossCheck(
     curtainOpen: true,
     uncapped: true,
     withoutLamps: true,
+    withoutSky: true,
   });
   const withCurtain = runVariant(prepared, variant, ref, {
     thermal,
     withoutSun: true,
     uncapped: true,
     withoutLamps: true,
+    withoutSky: true,
   });
   const hasLamps = run.parameters.lamps !== null && run.parameters.lamps !== undefined;
+  const withSky = runVariant(prepared, variant, ref, { thermal, withoutSun: true, uncapped: true, withoutLamps: true });
   const short = result.unmetHeatWh > 0;
   const uncappedKWh =
     short || hasLamps
@@ -64,6 +68,7 @@ export function degreeDayCrossCheck(
     hourlyNoSunNight.result.totalHeatWh / 1000,
     withDaySetpoint.result.totalHeatWh / 1000,
     withCurtain.result.totalHeatWh / 1000,
+    withSky.result.totalHeatWh / 1000,
     withSunKWh,
   ];
   const labels: Array<[DegreeDayStep['key'], string]> = [
@@ -71,6 +76,7 @@ export function degreeDayCrossCheck(
     ['hourly-curve', 'Hour by hour through the daily temperature curve (same setpoint, curtain open, no sun)'],
     ['day-setpoint', 'Day setpoint between sunrise and sunset'],
     ['curtain', 'Curtain drawn at night'],
+    ['sky', 'Long-wave radiation to the night sky (through the roof and from the coverings)'],
     ['sun', 'Sunlight through the roof offsets heating by day'],
   ];
   if (hasLamps) {
@@ -172,7 +178,7 @@ function explainDifference(
       'as if the house were held at the night setpoint all day with the curtain open and no sun. ' +
       `It gives ${energyToken(degreeDayKWh)} of heat; the hour-by-hour estimate gives ${energyToken(hourlyKWh)}.`,
   );
-  const [, curve, daySetpoint, curtain, sun] = steps;
+  const [, curve, daySetpoint, curtain, sky, sun] = steps;
   lines.push(
     `Hour by hour: cold nights still need heat on days whose mean is above the base, and warm afternoons need none; this changes the figure by ${percentOf(curve.changeKWh, base)}.`,
   );
@@ -186,6 +192,10 @@ function explainDifference(
   } else {
     lines.push('The house has no curtain.');
   }
+  lines.push(
+    `At night the sky is colder than the air: the crop radiates to it through a roof that passes long-wave radiation, ` +
+      `and the coverings' outer surfaces lose to it as if the air were colder. The degree-day method leaves this out; it adds ${percentOf(sky.changeKWh, base)}.`,
+  );
   lines.push(
     `Sunlight through the roof covers part of the daytime loss: ${percentOf(sun.changeKWh, base)}. The degree-day method leaves the sun out, which is why it usually reads high for greenhouses.`,
   );

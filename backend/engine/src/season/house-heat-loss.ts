@@ -2,13 +2,31 @@ import { EngineInputError } from '../errors';
 import type { HouseSpec } from '../house.types';
 import { referenceRow, type ReferenceData, type ReferenceRow } from '../reference-data.types';
 import { computeHouseGeometry, opaqueEnvelopeShare, type HouseGeometry } from '../geometry/house-geometry';
-import { heatLossCoefficients } from '../heating/heat-loss';
+import { heatLossCoefficients, heatLossComponentLabels, type HeatLossCoefficients } from '../heating/heat-loss';
+import { skyConstants, skyCoupling, type SkyCoupling } from '../heating/sky-radiation';
+import type { SurfaceGroup } from '../vocabulary';
 import { dryAirDensityKgPerM3, standardAtmosphericPressurePa } from '../psychrometrics';
 
 export interface CoveringLightRow extends ReferenceRow {
   lightTransmittance: number;
   lightSource?: string;
   lightConfidence?: ReferenceRow['confidence'];
+  irSource?: string;
+  irConfidence?: ReferenceRow['confidence'];
+}
+
+/** The parts of a house's heat-loss coefficient (the design night's components but the sky), W/K. */
+export type EnvelopePartKey = SurfaceGroup | 'kneewall' | 'perimeter' | 'infiltration';
+export type EnvelopeParts = Record<EnvelopePartKey, number>;
+
+/** The parts of UA from the heat-loss coefficients; they add up to `totalWPerK`. */
+export function envelopeParts(coefficients: HeatLossCoefficients): EnvelopeParts {
+  return {
+    ...coefficients.coveringWPerK,
+    kneewall: coefficients.kneewallWPerK,
+    perimeter: coefficients.perimeterWPerK,
+    infiltration: coefficients.infiltrationWPerK,
+  };
 }
 
 /** What the season needs from a house: its heat-loss coefficients by day and night and its roof's light. */
@@ -18,6 +36,14 @@ export interface HouseThermal {
   uaOpenWPerK: number;
   /** UA with the curtain drawn (equal to uaOpenWPerK without a curtain), W/K */
   uaClosedWPerK: number;
+  /** the parts of uaOpenWPerK and of uaClosedWPerK, W/K */
+  partsOpenWPerK: EnvelopeParts;
+  partsClosedWPerK: EnvelopeParts;
+  /** coupling to the night sky, curtain open and drawn (heating/sky-radiation.ts) */
+  skyOpen: SkyCoupling;
+  skyClosed: SkyCoupling;
+  /** labels of the parts, e.g. 'Roof (Inflated double polyethylene)' */
+  partLabels: Partial<Record<EnvelopePartKey, string>>;
   /** air density used for infiltration, kg/m³ */
   airDensityKgPerM3: number;
   roofCovering: CoveringLightRow;
@@ -52,10 +78,17 @@ export function houseThermal(house: HouseSpec, elevationM: number, ref: Referenc
   const closed = house.curtainId
     ? heatLossCoefficients(house, geometry, ref, { curtainClosed: true, airDensityKgPerM3 })
     : open;
+  const sky = skyConstants(ref);
+  const skyOpen = skyCoupling(open, geometry.floorAreaM2, sky);
   return {
     geometry,
     uaOpenWPerK: open.totalWPerK,
     uaClosedWPerK: closed.totalWPerK,
+    partsOpenWPerK: envelopeParts(open),
+    partsClosedWPerK: envelopeParts(closed),
+    skyOpen,
+    skyClosed: closed === open ? skyOpen : skyCoupling(closed, geometry.floorAreaM2, sky),
+    partLabels: heatLossComponentLabels(open),
     airDensityKgPerM3,
     roofCovering: coveringLightRow(ref, house.coverings.roof, 'house.coverings.roof'),
     envelopeLightFactor: 1 - opaqueEnvelopeShare(geometry),

@@ -17,7 +17,8 @@ import { SunCache } from './sun-hours';
 /**
  * Heat and fuel for one night: from sunset on `date` to sunrise the next morning, the curtain
  * drawn (if the house has one), the house held at the night setpoint:
- *   E = Σ_hours (night share of the hour) × min(P, max(0, UA_curtain · (T_night − T_out))) × 1 h,
+ *   E = Σ_hours (night share of the hour) × min(P, max(0, UA_curtain · (T_night − T_out) + S · D)) × 1 h,
+ * S · D the loss to the night sky as in the season (season-simulation.ts),
  * P the installed heater output: an hour that needs more than P is one the heaters cannot hold.
  * Outdoor temperature comes from the climate's daily curve (or logged readings) at mid-hour.
  * Supplemental lamps are left out, as on the design night: the figure is the heat the heaters must
@@ -38,6 +39,8 @@ export interface NightHour {
   nightShare: number;
   /** average heat demand over the hour's night share, W */
   heatW: number;
+  /** the part of heatW lost to the night sky, W */
+  skyW: number;
   /** heat the heaters deliver (at most their installed output), W */
   deliveredW: number;
   /** true when the heaters cannot hold the night setpoint this hour */
@@ -58,6 +61,8 @@ export interface NightDemand extends FuelAmount {
   installedOutputW: number;
   /** heat needed but not delivered (heaters too small), kWh */
   unmetHeatKWh: number;
+  /** heat lost to the night sky over the night (part of the need), kWh */
+  skyKWh: number;
   /** night hours in which the heaters cannot hold the setpoint */
   hoursBelowSetpoint: number;
   /** set when some hour cannot be held; may hold {{kind:valueSI}} tokens */
@@ -88,6 +93,7 @@ export function nightHeatingDemand(
   const hourly: NightHour[] = [];
   let heatWh = 0;
   let unmetHeatWh = 0;
+  let skyWh = 0;
   let hoursBelowSetpoint = 0;
   let nightHours = 0;
   let peakW = 0;
@@ -98,11 +104,13 @@ export function nightHeatingDemand(
     if (nightShare <= 0) continue;
     const outdoorC = hours.outdoorC[hour];
     const setpointC = parameters.nightSetpointC[Math.floor(hour / 24)];
-    const lossW = Math.max(0, parameters.uaNightWPerK * (setpointC - outdoorC));
+    const skyW = parameters.skyNightM2 * hours.skyDeficitWPerM2[hour];
+    const lossW = Math.max(0, parameters.uaNightWPerK * (setpointC - outdoorC) + skyW);
     const deliveredW = Math.min(lossW, parameters.heaterOutputW);
     const belowSetpoint = lossW > deliveredW;
     heatWh += nightShare * deliveredW;
     unmetHeatWh += nightShare * (lossW - deliveredW);
+    if (lossW > 0) skyWh += nightShare * skyW;
     if (belowSetpoint) hoursBelowSetpoint++;
     nightHours += nightShare;
     if (lossW > peakW) peakW = lossW;
@@ -112,6 +120,7 @@ export function nightHeatingDemand(
       outdoorC,
       nightShare,
       heatW: lossW,
+      skyW: lossW > 0 ? skyW : 0,
       deliveredW,
       belowSetpoint,
     });
@@ -139,6 +148,7 @@ export function nightHeatingDemand(
     minOutdoorC: Number.isFinite(minOutdoorC) ? minOutdoorC : NaN,
     installedOutputW: variant.heaterOutputW,
     unmetHeatKWh: unmetHeatWh / 1000,
+    skyKWh: skyWh / 1000,
     hoursBelowSetpoint,
     capacityCaution: capacityCaution(variant.heaterOutputW, { unmetHeatWh, hoursBelowSetpoint, peakW }, 'night'),
     hourly,

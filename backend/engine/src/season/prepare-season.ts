@@ -5,7 +5,8 @@ import { referenceRow, type ReferenceData } from '../reference-data.types';
 import { clearnessByMonth, validateSiteClimate, type SiteClimate } from '../climate/site-climate';
 import { requireHhvEfficiency, validateHeaterGroups } from '../heating/heater-sizing';
 import { fuelCost, fuelForHeat, validateFuelPrice, validateHeaterEfficiency } from './fuel';
-import { houseThermal, type HouseThermal } from './house-heat-loss';
+import type { SkyCoupling } from '../heating/sky-radiation';
+import { houseThermal, type EnvelopeParts, type HouseThermal } from './house-heat-loss';
 import { dailySetpoints, validateCalendar } from './production-calendar';
 import { buildSeasonHours, isLoggedTemperatures, type LoggedTemperatures, type SeasonRange } from './season-hours';
 import { simulateSeason, type SeasonHours, type SimulationParameters } from './season-simulation';
@@ -33,10 +34,29 @@ export const SOLAR_USEFUL_FRACTION_ROW_ID = 'solar-useful-fraction';
 /** Range a heat-loss factor (calibrated against fuel bills) may take. */
 export const HEAT_LOSS_FACTOR_LIMITS = { min: 0.2, max: 5 } as const;
 
-/** A house's heat-loss coefficients multiplied by `factor`. */
+/**
+ * A house's heat-loss coefficients multiplied by `factor`: every part of UA and the coupling to the
+ * night sky alike, so the factor stands for measured ÷ modelled loss as a whole.
+ */
 export function scaledThermal(thermal: HouseThermal, factor: number): HouseThermal {
   if (factor === 1) return thermal;
-  return { ...thermal, uaOpenWPerK: thermal.uaOpenWPerK * factor, uaClosedWPerK: thermal.uaClosedWPerK * factor };
+  const scaleParts = (parts: EnvelopeParts): EnvelopeParts =>
+    Object.fromEntries(Object.entries(parts).map(([key, value]) => [key, value * factor])) as EnvelopeParts;
+  const scaleSky = (sky: SkyCoupling): SkyCoupling => ({
+    ...sky,
+    cropM2: sky.cropM2 * factor,
+    coverM2: sky.coverM2 * factor,
+    totalM2: sky.totalM2 * factor,
+  });
+  return {
+    ...thermal,
+    uaOpenWPerK: thermal.uaOpenWPerK * factor,
+    uaClosedWPerK: thermal.uaClosedWPerK * factor,
+    partsOpenWPerK: scaleParts(thermal.partsOpenWPerK),
+    partsClosedWPerK: scaleParts(thermal.partsClosedWPerK),
+    skyOpen: scaleSky(thermal.skyOpen),
+    skyClosed: scaleSky(thermal.skyClosed),
+  };
 }
 
 function validateSite(site: SeasonSite): SunSite {
@@ -102,6 +122,7 @@ export function prepareSeason(
   let climate: SiteClimate | LoggedTemperatures;
   let clearness: number[];
   let clearnessFromUser: boolean;
+  let dewPointCByMonth: Array<number | null> | null = null;
   if (isLoggedTemperatures(input.climate as SiteClimate | LoggedTemperatures)) {
     const logged = input.climate as LoggedClimateInput;
     climate = validateLoggedClimate(logged);
@@ -113,6 +134,7 @@ export function prepareSeason(
     const byMonth = clearnessByMonth(climate, ref);
     clearness = byMonth.clearness;
     clearnessFromUser = byMonth.fromUser.some(Boolean);
+    dewPointCByMonth = dewPointsByMonth(climate);
   }
 
   const usefulRow = referenceRow<UsefulFractionRow>(ref, 'climate-defaults', SOLAR_USEFUL_FRACTION_ROW_ID);
@@ -129,18 +151,32 @@ export function prepareSeason(
   }
 
   const heaters = installedHeaterOutput(input.house, ref);
-  const hours = buildSeasonHours({ site, range: input.season, climate, clearnessByMonth: clearness }, ref, sunCache);
+  const hours = buildSeasonHours(
+    { site, range: input.season, climate, clearnessByMonth: clearness, dewPointCByMonth },
+    ref,
+    sunCache,
+  );
   return {
     input,
     hours,
     fuel,
     clearness,
     clearnessFromUser,
+    dewPointCByMonth,
     solarUsefulFraction,
     solarUsefulFractionRow: usefulRow,
     heaterOutputW: heaters.outputW,
     heaterCount: heaters.heaterCount,
   };
+}
+
+/** The climate's dew point by month (index 0 = January), or null when it gives none for any month. */
+function dewPointsByMonth(climate: SiteClimate): Array<number | null> | null {
+  const byMonth: Array<number | null> = new Array<number | null>(12).fill(null);
+  for (const row of climate.monthly) {
+    if (typeof row.meanDewPointC === 'number') byMonth[row.month - 1] = row.meanDewPointC;
+  }
+  return byMonth.some((value) => value !== null) ? byMonth : null;
 }
 
 /** Installed output of a house's heaters: Σ count × rated input × efficiency, W. */
@@ -180,6 +216,8 @@ export interface VariantOptions {
   uncapped?: boolean;
   /** leave the lamps' heat out (degree-day comparison steps) */
   withoutLamps?: boolean;
+  /** leave out the radiation to the night sky (degree-day comparison steps) */
+  withoutSky?: boolean;
 }
 
 /** Simulation parameters for a variant of the house on the prepared season. */
@@ -212,6 +250,7 @@ export function variantParameters(
     parameters: {
       uaDayWPerK: thermal.uaOpenWPerK,
       uaNightWPerK: options.curtainOpen ? thermal.uaOpenWPerK : thermal.uaClosedWPerK,
+      skyNightM2: options.withoutSky ? 0 : (options.curtainOpen ? thermal.skyOpen : thermal.skyClosed).totalM2,
       solarGainAreaM2: options.withoutSun
         ? 0
         : thermal.roofCovering.lightTransmittance *

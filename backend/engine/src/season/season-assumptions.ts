@@ -2,6 +2,7 @@ import { quantityToken, type Confidence } from '../vocabulary';
 import { referenceRow, type ReferenceData, type ReferenceRow } from '../reference-data.types';
 import { PEAK_ROW_ID, peakHoursAfterSolarNoon } from '../climate/daily-temperature-curve';
 import { DEFAULT_CLEARNESS_ROW_ID, type SiteClimate } from '../climate/site-climate';
+import { cloudCoverTenthsFromClearness, skyConstants } from '../heating/sky-radiation';
 import { priceUnitLabel } from './fuel';
 import type { HouseThermal } from './house-heat-loss';
 import { isLoggedTemperatures, type LoggedTemperatures } from './season-hours';
@@ -115,6 +116,7 @@ export function seasonAssumptions(
       prepared.clearnessFromUser,
     ),
   );
+  list.push(...skyAssumptions(prepared, thermal, ref));
   list.push({
     key: 'clear-sky-model',
     label: 'Clear-sky sunlight on a horizontal surface, by month',
@@ -283,6 +285,78 @@ function lampAssumptions(variant: SeasonVariant, thermal: HouseThermal, ref: Ref
     confidence: 'common-practice',
     overridden: false,
   });
+  return list;
+}
+
+/** The night sky: cloud cover, dew point, emissivities, and the house's coupling to it. */
+function skyAssumptions(prepared: PreparedSeason, thermal: HouseThermal, ref: ReferenceData): Assumption[] {
+  const sky = skyConstants(ref);
+  const rows = sky.rows;
+  const list: Assumption[] = [
+    rowAssumption(
+      'sky-cloud-cover',
+      'Cloud cover of the night sky, January to December, from the month’s clearness (Kasten & Czeplak, inverted)',
+      prepared.clearness.map((value) => cloudCoverTenthsFromClearness(value, sky).toFixed(1)).join(' '),
+      'tenths',
+      rows.cloudFromClearness,
+    ),
+  ];
+  const fromClimate = prepared.dewPointCByMonth;
+  if (fromClimate) {
+    list.push({
+      key: 'sky-dew-point',
+      label:
+        'Dew point of the night air, January to December (the climate’s; the day’s minimum where a month has none)',
+      value: fromClimate.map((value) => (value === null ? '–' : value.toFixed(1))).join(' '),
+      unit: '°C',
+      source: 'the farm’s climate',
+      confidence: 'user-entered',
+      overridden: true,
+    });
+  } else {
+    list.push(
+      rowAssumption(
+        'sky-dew-point',
+        'Dew point of the night air: the day’s minimum temperature less this (the climate gives no dew point)',
+        sky.nightDewPointBelowDailyMinimumK,
+        'K',
+        rows.nightDewPoint,
+      ),
+    );
+  }
+  list.push(
+    rowAssumption(
+      'sky-clear-emissivity',
+      'Clear-sky emissivity from the dew point',
+      'Berdahl & Martin',
+      '',
+      rows.clearSky,
+    ),
+    rowAssumption('sky-cloud-factor', 'Clouds raise the sky’s emissivity', 'Clark & Allen', '', rows.cloud),
+  );
+  const roof = thermal.roofCovering;
+  list.push({
+    key: 'sky-roof-ir-transmittance',
+    label: `Long-wave share the roof passes to the sky (${roof.label ?? roof.id}); none while a curtain is drawn`,
+    value: thermal.skyOpen.thermalIrTransmittance,
+    unit: '–',
+    source: roof.irSource ?? roof.source,
+    confidence: roof.irConfidence ?? roof.confidence,
+    overridden: false,
+  });
+  list.push(
+    rowAssumption('sky-crop-emissivity', 'Long-wave emissivity of the crop', sky.cropEmissivity, '–', rows.crop),
+    {
+      key: 'sky-night-only',
+      label:
+        'The sky loss is counted from sunset to sunrise; by day the net share of sunlight that offsets heating stands for the whole radiation balance',
+      value: 'night',
+      unit: '',
+      source: 'method (common practice, no source)',
+      confidence: 'common-practice',
+      overridden: false,
+    },
+  );
   return list;
 }
 

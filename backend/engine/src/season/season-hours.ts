@@ -8,7 +8,9 @@ import {
   type DailyCurveDays,
 } from '../climate/daily-temperature-curve';
 import type { SiteClimate } from '../climate/site-climate';
+import { skyConstants } from '../heating/sky-radiation';
 import type { MonthSlot, SeasonHours } from './season-simulation';
+import { nightSky } from './season-sky';
 import { type SunCache, type SunHours, type SunSite } from './sun-hours';
 
 /** One logged outdoor temperature (the shape the temperature-log parser returns). */
@@ -114,13 +116,15 @@ export interface BuildSeasonHoursInput {
   climate: SiteClimate | LoggedTemperatures;
   /** clearness by month, index 0 = January */
   clearnessByMonth: number[];
+  /** the climate's dew point by month, index 0 = January (null where it gives none); absent: none */
+  dewPointCByMonth?: ReadonlyArray<number | null> | null;
 }
 
 export function isLoggedTemperatures(climate: SiteClimate | LoggedTemperatures): climate is LoggedTemperatures {
   return Array.isArray((climate as LoggedTemperatures).readings);
 }
 
-/** Lays out the hours of a range: outdoor temperature, sun, clearness and month of each hour. */
+/** Lays out the hours of a range: outdoor temperature, sun, clearness, night sky and month of each hour. */
 export function buildSeasonHours(input: BuildSeasonHoursInput, ref: ReferenceData, cache: SunCache): SeasonHours {
   const { firstDayNumber, dayCount } = validateSeasonRange(input.range);
   const hourCount = dayCount * 24;
@@ -136,6 +140,7 @@ export function buildSeasonHours(input: BuildSeasonHoursInput, ref: ReferenceDat
     sunriseHourOfDay[k] = sun.sunriseHour[index];
     sunsetHourOfDay[k] = sun.sunsetHour[index];
   });
+  const monthOfDay = new Uint8Array(dayCount);
   const months: MonthSlot[] = [];
   for (let day = 0; day < dayCount; day++) {
     const { sun, index } = lookups[day + 1];
@@ -143,6 +148,7 @@ export function buildSeasonHours(input: BuildSeasonHoursInput, ref: ReferenceDat
     dayFraction.set(sun.dayFraction.subarray(sourceHour, sourceHour + 24), day * 24);
     irradiance.set(sun.clearSkyGlobalHorizontalWPerM2.subarray(sourceHour, sourceHour + 24), day * 24);
     const month = sun.monthOfDay[index - 1];
+    monthOfDay[day] = month;
     clearnessOfDay[day] = input.clearnessByMonth[month - 1];
     const last = months[months.length - 1];
     if (!last || last.month !== month || last.year !== sun.year) months.push({ year: sun.year, month });
@@ -172,6 +178,11 @@ export function buildSeasonHours(input: BuildSeasonHoursInput, ref: ReferenceDat
     dailyMaxC = maxC.slice(1, dayCount + 1);
   }
 
+  const sky = nightSky(
+    { outdoorC, dayFraction, dailyMinC, clearnessOfDay, monthOfDay, dewPointCByMonth: input.dewPointCByMonth ?? null },
+    skyConstants(ref),
+  );
+
   return {
     firstDayNumber,
     dayCount,
@@ -186,6 +197,8 @@ export function buildSeasonHours(input: BuildSeasonHoursInput, ref: ReferenceDat
     months,
     dailyMinC,
     dailyMaxC,
+    skyDeficitWPerM2: sky.deficitWPerM2,
+    cloudCoverTenthsOfDay: sky.cloudCoverTenthsOfDay,
   };
 }
 

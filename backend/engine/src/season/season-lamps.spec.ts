@@ -18,6 +18,9 @@ function twoDays(): SeasonHours {
     sunriseHourOfDay: new Float64Array([8, 8, 8, 8]),
     sunsetHourOfDay: new Float64Array([16, 16, 16, 16]),
     clearSkyGlobalHorizontalWPerM2: new Float64Array(48),
+    // an overcast sky as warm as the air: no long-wave loss to the night sky
+    skyDeficitWPerM2: new Float64Array(48),
+    cloudCoverTenthsOfDay: new Float64Array([10, 10]),
     clearnessOfDay: new Float64Array([0, 0]),
     monthSlotOfDay: new Uint8Array([0, 0]),
     months: [{ year: 1970, month: 1 }],
@@ -44,6 +47,7 @@ function parameters(overrides: Partial<SimulationParameters> = {}): SimulationPa
     // 5000 W/K × (15 − (−15)) K = 150 kW of loss in every hour, day (curtain open) or night
     uaDayWPerK: 5000,
     uaNightWPerK: 5000,
+    skyNightM2: 0,
     solarGainAreaM2: 0,
     daySetpointC: new Float64Array([NaN, 15]),
     nightSetpointC: new Float64Array([NaN, 15]),

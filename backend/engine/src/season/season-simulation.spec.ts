@@ -25,6 +25,8 @@ function oneDay(irradianceWPerM2: number): SeasonHours {
     months: [{ year: 1970, month: 1 }],
     dailyMinC: new Float64Array([0]),
     dailyMaxC: new Float64Array([0]),
+    skyDeficitWPerM2: new Float64Array(24),
+    cloudCoverTenthsOfDay: new Float64Array([10]),
   };
 }
 
@@ -32,6 +34,7 @@ function parameters(overrides: Partial<SimulationParameters> = {}): SimulationPa
   return {
     uaDayWPerK: 100,
     uaNightWPerK: 60,
+    skyNightM2: 0,
     solarGainAreaM2: 0,
     daySetpointC: new Float64Array([20]),
     nightSetpointC: new Float64Array([10]),
@@ -66,6 +69,40 @@ describe('hourly season simulation', () => {
     );
     expect(result.totalHeatWh).toBe(0);
     expect(result.peakHourIndex).toBe(-1);
+  });
+});
+
+describe('hourly season simulation with the night sky', () => {
+  it('adds coupling × sky deficit to each night share, and sums the parts for the breakdown', () => {
+    const hours = oneDay(0);
+    hours.skyDeficitWPerM2.fill(50); // W/m² in every hour; only night shares may use it
+    const result = simulateSeason(hours, parameters({ skyNightM2: 2 }));
+    // by night 60 W/K × 10 K + 2 m² × 50 W/m² = 700 W over 15.5 night-share hours; by day 100 W/K × 20 K over 8.5 h
+    expect(result.totalHeatWh).toBeCloseTo(8.5 * 2000 + 15.5 * 700, 9);
+    expect(result.nightHeatWh).toBeCloseTo(15.5 * 700, 9);
+    expect(result.skyWh).toBeCloseTo(15.5 * 100, 9);
+    expect(result.dayDegreeHoursKh).toBeCloseTo(8.5 * 20, 9);
+    expect(result.nightDegreeHoursKh).toBeCloseTo(15.5 * 10, 9);
+    // delivered = UA_day × day degree-hours + UA_night × night degree-hours + sky − sun − unmet
+    expect(100 * result.dayDegreeHoursKh + 60 * result.nightDegreeHoursKh + result.skyWh).toBeCloseTo(
+      result.totalHeatWh,
+      9,
+    );
+  });
+
+  it('a clear sky can make a night above the setpoint need heat; the envelope then gains', () => {
+    const hours = oneDay(0);
+    hours.outdoorC.fill(12); // 2 K above the 10 °C night setpoint
+    // 60 W/K × (10 − 12) K = −120 W; a 50 W/m² deficit on 2 m² adds only 100 W: no heat
+    hours.skyDeficitWPerM2.fill(50);
+    const calm = simulateSeason(hours, parameters({ skyNightM2: 2, daySetpointC: new Float64Array([10]) }));
+    expect(calm.nightHeatWh).toBe(0);
+    // 100 W/m² on 2 m² = 200 W: 80 W in each of the 15.5 night-share hours
+    hours.skyDeficitWPerM2.fill(100);
+    const clear = simulateSeason(hours, parameters({ skyNightM2: 2, daySetpointC: new Float64Array([10]) }));
+    expect(clear.nightHeatWh).toBeCloseTo(15.5 * 80, 9);
+    expect(clear.skyWh).toBeCloseTo(15.5 * 200, 9);
+    expect(clear.nightDegreeHoursKh).toBeCloseTo(15.5 * -2, 9);
   });
 });
 

@@ -6,7 +6,10 @@
  *            q_day   = max(0, UA_open · (T_day − T_out) − G),
  *            G = clear-sky global horizontal × clearness × roof transmittance × floor area × useful fraction
  *   by night (share 1 − f):
- *            q_night = max(0, UA_curtain · (T_night − T_out))
+ *            q_night = max(0, UA_curtain · (T_night − T_out) + S_night · D),
+ *            D the sky deficit σ (T_out⁴ − T_sky⁴) of the hour (season-sky.ts) and S_night the house's
+ *            coupling to it, m² (heating/sky-radiation.ts skyCoupling: crop through the roof, curtain
+ *            drawn if the house has one, and the coverings' outer surfaces)
  *   heat = f · q_day + (1 − f) · q_night (W, average over the hour)
  * Lamps (when the house has them) add their heat P_lamp in the share of each part of the hour they
  * run (season-lamps.ts): there q_lit = max(0, q − P_lamp), never below zero; lamp heat beyond the
@@ -18,6 +21,10 @@
  * delivered heat. P = Infinity leaves the demand uncapped.
  * Unheated (empty) days contribute nothing. Heat stored in the structure, soil and crop is not
  * modelled: each hour balances on its own.
+ * For the breakdown of the season's heat by part the loop also sums, over the hours in which each
+ * part of the hour loses heat, the degree-hours by day Σ f·(T_day − T_out) and by night
+ * Σ (1 − f)·(T_night − T_out) and the sky's share Σ (1 − f)·S_night·D, so that
+ *   delivered = UA_open·(day degree-hours) + UA_curtain·(night degree-hours) + sky − solar offset − unmet.
  *
  * Everything that does not change between variants of a house (temperatures, sun, month of each
  * day) is laid out once in `SeasonHours`; `simulateSeason` is then a tight loop over flat arrays.
@@ -54,6 +61,10 @@ export interface SeasonHours {
   /** daily minimum and maximum outdoor temperature per day, °C (for degree-days) */
   dailyMinC: Float64Array;
   dailyMaxC: Float64Array;
+  /** σ (T_out⁴ − T_sky⁴) per hour with a night share, W/m² (0 in hours wholly by day) */
+  skyDeficitWPerM2: Float64Array;
+  /** opaque cloud cover of each day, tenths */
+  cloudCoverTenthsOfDay: Float64Array;
 }
 
 /** What a variant of the house brings to the loop. */
@@ -62,6 +73,8 @@ export interface SimulationParameters {
   uaDayWPerK: number;
   /** heat-loss coefficient by night (curtain drawn if the house has one), W/K */
   uaNightWPerK: number;
+  /** by night: W lost to the sky per W/m² of sky deficit (heating/sky-radiation.ts skyCoupling), m² */
+  skyNightM2: number;
   /** W of useful solar gain per W/m² of horizontal irradiance (transmittance × floor area × useful fraction), m² */
   solarGainAreaM2: number;
   /** per day; NaN on unheated days, °C */
@@ -98,6 +111,12 @@ export interface SimulationResult {
   hoursBelowSetpoint: number;
   /** heat delivered in the night share of hours, Wh */
   nightHeatWh: number;
+  /** Σ f·(T_day − T_out) over the day shares of heated hours that lose heat, K·h */
+  dayDegreeHoursKh: number;
+  /** Σ (1 − f)·(T_night − T_out) over the night shares of heated hours that lose heat, K·h */
+  nightDegreeHoursKh: number;
+  /** heat lost to the night sky in those night shares, Wh (part of the demand) */
+  skyWh: number;
   /** heat the sun supplied that the heater would otherwise have had to, Wh */
   solarOffsetWh: number;
   /** heat the heaters did not deliver because the lamps gave it, Wh (0 without lamps) */
@@ -122,7 +141,8 @@ export function simulateSeason(hours: SeasonHours, parameters: SimulationParamet
   const outdoorC = hours.outdoorC;
   const dayFraction = hours.dayFraction;
   const irradiance = hours.clearSkyGlobalHorizontalWPerM2;
-  const { uaDayWPerK, uaNightWPerK, solarGainAreaM2, daySetpointC, nightSetpointC } = parameters;
+  const skyDeficit = hours.skyDeficitWPerM2;
+  const { uaDayWPerK, uaNightWPerK, skyNightM2, solarGainAreaM2, daySetpointC, nightSetpointC } = parameters;
   const capW = Number.isNaN(parameters.heaterOutputW) ? Infinity : Math.max(0, parameters.heaterOutputW);
   const lamps = parameters.lamps && parameters.lamps.heatW > 0 ? parameters.lamps : null;
   const lampW = lamps ? lamps.heatW : 0;
@@ -131,6 +151,9 @@ export function simulateSeason(hours: SeasonHours, parameters: SimulationParamet
   let unmetHeatWh = 0;
   let hoursBelowSetpoint = 0;
   let nightHeatWh = 0;
+  let dayDegreeHoursKh = 0;
+  let nightDegreeHoursKh = 0;
+  let skyWh = 0;
   let solarOffsetWh = 0;
   let lampSavedHeatWh = 0;
   let heatingHours = 0;
@@ -161,6 +184,7 @@ export function simulateSeason(hours: SeasonHours, parameters: SimulationParamet
       if (share > 0) {
         const lossW = uaDayWPerK * (dayC - tOut);
         if (lossW > 0) {
+          dayDegreeHoursKh += share * (dayC - tOut);
           const gainW = gainPerIrradiance * irradiance[hour];
           if (lossW > gainW) {
             const needW = lossW - gainW;
@@ -189,8 +213,11 @@ export function simulateSeason(hours: SeasonHours, parameters: SimulationParamet
         }
       }
       if (share < 1) {
-        const lossW = uaNightWPerK * (nightC - tOut);
+        const skyW = skyNightM2 * skyDeficit[hour];
+        const lossW = uaNightWPerK * (nightC - tOut) + skyW;
         if (lossW > 0) {
+          nightDegreeHoursKh += (1 - share) * (nightC - tOut);
+          skyWh += (1 - share) * skyW;
           const lit = lamps ? lamps.onWhileSunDown[hour] : 0;
           const dark = 1 - share - lit;
           let nightDemandW = dark * lossW;
@@ -249,6 +276,9 @@ export function simulateSeason(hours: SeasonHours, parameters: SimulationParamet
     unmetHeatWh,
     hoursBelowSetpoint,
     nightHeatWh,
+    dayDegreeHoursKh,
+    nightDegreeHoursKh,
+    skyWh,
     solarOffsetWh,
     lampSavedHeatWh,
     monthlyLampSavedHeatWh,

@@ -1,4 +1,5 @@
 import type { HouseSpec } from '../house.types';
+import type { HeatLossComponentKey } from '../heating/heat-loss';
 import type { Confidence } from '../vocabulary';
 import type { ReferenceRow } from '../reference-data.types';
 import type { SiteClimate } from '../climate/site-climate';
@@ -47,8 +48,9 @@ export interface EstimateSeasonInput {
   /** replaces the reference share of transmitted sunlight that offsets heating, 0–1 */
   solarUsefulFraction?: number;
   /**
-   * multiplies the house's heat-loss coefficients (coverings, perimeter and air leakage), e.g. a
-   * factor fitted to the farm's fuel bills; 1 (the handbook values) when absent
+   * multiplies the house's heat-loss coefficients (coverings, perimeter and air leakage) and its
+   * coupling to the night sky, e.g. a factor fitted to the farm's fuel bills; 1 (the handbook
+   * values) when absent
    */
   heatLossFactor?: number;
 }
@@ -130,7 +132,7 @@ export interface SeasonLamps {
 }
 
 export interface DegreeDayStep {
-  key: 'degree-day' | 'hourly-curve' | 'day-setpoint' | 'curtain' | 'sun' | 'lamps' | 'heater-capacity';
+  key: 'degree-day' | 'hourly-curve' | 'day-setpoint' | 'curtain' | 'sky' | 'sun' | 'lamps' | 'heater-capacity';
   label: string;
   energyKWh: number;
   /** change from the previous step, kWh */
@@ -174,6 +176,31 @@ export interface HeaterCapacity {
   caution: string | null;
 }
 
+export interface SeasonLossPart {
+  /** the design night's component keys: roof, sidewalls, endwalls, kneewall, perimeter, infiltration, sky */
+  key: HeatLossComponentKey;
+  label: string;
+  /** heat lost through this part over the heated hours that lose heat, kWh */
+  energyKWh: number;
+  /** share of all the heat lost, 0–1 */
+  share: number;
+}
+
+/** Where the season's heat goes: Σ parts − solarOffsetKWh − unmetHeatKWh = deliveredKWh. */
+export interface SeasonLossBreakdown {
+  parts: SeasonLossPart[];
+  /** Σ parts, kWh */
+  lostKWh: number;
+  /** the sky's part (also among the parts), kWh */
+  skyKWh: number;
+  /** heat the sun supplied in place of the heaters, kWh */
+  solarOffsetKWh: number;
+  /** heat the heaters could not deliver, kWh */
+  unmetHeatKWh: number;
+  /** heat delivered, kWh (the season's total) */
+  deliveredKWh: number;
+}
+
 export interface SeasonEstimate {
   period: { startDate: string; endDate: string; days: number; heatedDays: number };
   fuel: {
@@ -201,6 +228,8 @@ export interface SeasonEstimate {
   solarOffsetKWh: number;
   /** the supplemental lamps' electricity, heat and the fuel their heat saves; null without lamps */
   lamps: SeasonLamps | null;
+  /** the season's heat by part of the house, the night sky as its own part */
+  lossBreakdown: SeasonLossBreakdown;
   degreeDays: DegreeDayCrossCheck;
   assumptions: Assumption[];
   cautions: string[];
@@ -220,6 +249,8 @@ export interface PreparedSeason {
   fuel: FuelRow;
   clearness: number[];
   clearnessFromUser: boolean;
+  /** the climate's dew point by month (index 0 = January), null when the climate gives none */
+  dewPointCByMonth: Array<number | null> | null;
   solarUsefulFraction: number;
   solarUsefulFractionRow: UsefulFractionRow;
   /** installed output of the house's heaters, W */

@@ -81,6 +81,11 @@ export class ReportBlockDto {
   @ApiPropertyOptional() caption?: string;
   @ApiPropertyOptional({ type: ReportBarDto, isArray: true }) bars?: ReportBarDto[];
   @ApiPropertyOptional({ description: 'unit of the bar values' }) unit?: string;
+  @ApiPropertyOptional({
+    description:
+      'table: a comparison, whose first cell in each row names the row and whose other columns share the width equally',
+  })
+  comparison?: boolean;
 }
 
 export class ReportSectionDto {

@@ -11,6 +11,8 @@ import {
 import { ASSUMPTION_CONFIDENCES } from '@thermbay/engine/vocabulary';
 import { PRICE_UNITS } from './season-request.dto';
 import { PROSE_TOKENS_NOTE } from '@thermbay/engine/vocabulary';
+import type { HeatLossComponentKey } from '@thermbay/engine/heating/heat-loss';
+import { HEAT_LOSS_COMPONENT_KEYS } from '../../estimates/dto/heating-result.dto';
 
 /*
  * The engine's SeasonEstimate, NightDemand and MeasureComparison described class by class for the
@@ -24,6 +26,7 @@ export const DEGREE_DAY_STEP_KEYS: ReadonlyArray<DegreeDayStep['key']> = [
   'hourly-curve',
   'day-setpoint',
   'curtain',
+  'sky',
   'sun',
   'lamps',
   'heater-capacity',
@@ -191,6 +194,26 @@ export class SeasonAssumptionDto {
   @ApiProperty({ description: "true where the user's own value replaced the reference value" }) overridden: boolean;
 }
 
+export class SeasonLossPartDto {
+  @ApiProperty({ enum: HEAT_LOSS_COMPONENT_KEYS, description: "the design night's component keys" })
+  key: HeatLossComponentKey;
+  @ApiProperty() label: string;
+  @ApiProperty({ description: 'heat lost through this part over the heated hours that lose heat, kWh' })
+  energyKWh: number;
+  @ApiProperty({ description: 'share of all the heat lost, 0–1' }) share: number;
+}
+
+export class SeasonLossBreakdownDto {
+  @ApiProperty({ type: SeasonLossPartDto, isArray: true, description: 'the night sky is the part with key sky' })
+  parts: SeasonLossPartDto[];
+  @ApiProperty({ description: 'Σ parts, kWh' }) lostKWh: number;
+  @ApiProperty({ description: "the sky's part (long-wave radiation to the night sky), kWh" }) skyKWh: number;
+  @ApiProperty({ description: 'heat the sun supplied in place of the heaters, kWh' }) solarOffsetKWh: number;
+  @ApiProperty({ description: 'heat the heaters could not deliver, kWh' }) unmetHeatKWh: number;
+  @ApiProperty({ description: 'lostKWh − solarOffsetKWh − unmetHeatKWh: the heat delivered, kWh' })
+  deliveredKWh: number;
+}
+
 export class SeasonEstimateDto {
   @ApiProperty({ type: SeasonPeriodDto }) period: SeasonPeriodDto;
   @ApiProperty({ type: SeasonFuelDto }) fuel: SeasonFuelDto;
@@ -218,6 +241,11 @@ export class SeasonEstimateDto {
     description: "the supplemental lamps' electricity, heat and the fuel their heat saves; null without lamps",
   })
   lamps: SeasonLampsDto | null;
+  @ApiProperty({
+    type: SeasonLossBreakdownDto,
+    description: "the season's heat by part of the house, with the night sky as its own part",
+  })
+  lossBreakdown: SeasonLossBreakdownDto;
   @ApiProperty({ type: DegreeDayCrossCheckDto }) degreeDays: DegreeDayCrossCheckDto;
   @ApiProperty({ type: SeasonAssumptionDto, isArray: true }) assumptions: SeasonAssumptionDto[];
   @ApiProperty({
@@ -282,6 +310,7 @@ export class NightHourDto {
   @ApiProperty({ minimum: 0, maximum: 1, description: 'share of the hour after sunset / before sunrise' })
   nightShare: number;
   @ApiProperty({ description: "average heat demand over the hour's night share, W" }) heatW: number;
+  @ApiProperty({ description: 'the part of heatW lost to the night sky, W' }) skyW: number;
   @ApiProperty({ description: 'heat the heaters deliver (at most their installed output), W' }) deliveredW: number;
   @ApiProperty({ description: 'true when the heaters cannot hold the night setpoint this hour' })
   belowSetpoint: boolean;
@@ -305,6 +334,8 @@ export class HouseNightDemandDto extends SeasonFuelAmountDto {
   @ApiProperty({ type: Number, nullable: true, description: 'coldest night hour, °C' }) minOutdoorC: number | null;
   @ApiProperty({ description: 'installed heater output, W' }) installedOutputW: number;
   @ApiProperty({ minimum: 0, description: 'heat the heaters could not deliver, kWh' }) unmetHeatKWh: number;
+  @ApiProperty({ minimum: 0, description: 'heat lost to the night sky over the night (part of the need), kWh' })
+  skyKWh: number;
   @ApiProperty({ minimum: 0, description: 'night hours in which the heaters cannot hold the setpoint' })
   hoursBelowSetpoint: number;
   @ApiProperty({ type: String, nullable: true, description: `set when some hour cannot be held; ${PROSE_TOKENS_NOTE}` })

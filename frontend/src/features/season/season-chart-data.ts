@@ -29,6 +29,49 @@ export function seasonChartSeries(
   };
 }
 
+export interface SeasonLossRow {
+  key: string;
+  label: string;
+  /** heat in the user's energy unit, with the unit */
+  heat: string;
+  /** share of all the heat lost, or '' for the lines taken off it */
+  share: string;
+}
+
+/**
+ * Where the season's heat goes, in the user's units: each part of the house (the night sky its own
+ * row), then the sun's offset and any heat the heaters could not deliver taken off, then the heat
+ * delivered. The rows add up: parts − sun − unmet = delivered.
+ */
+export function seasonLossRows(
+  breakdown: HouseSeasonEstimate['lossBreakdown'],
+  units: Pick<Units, 'format'>,
+): SeasonLossRow[] {
+  const energy = (kWh: number) => units.format('energyKWh', kWh);
+  const rows: SeasonLossRow[] = breakdown.parts.map((part) => ({
+    key: part.key,
+    label: part.label,
+    heat: energy(part.energyKWh),
+    share: units.format('fraction', part.share),
+  }));
+  rows.push({
+    key: 'sun',
+    label: 'Less: sunlight that offsets heating by day',
+    heat: `−${energy(breakdown.solarOffsetKWh)}`,
+    share: '',
+  });
+  if (breakdown.unmetHeatKWh > 0) {
+    rows.push({
+      key: 'unmet',
+      label: 'Less: heat the heaters cannot deliver',
+      heat: `−${energy(breakdown.unmetHeatKWh)}`,
+      share: '',
+    });
+  }
+  rows.push({ key: 'delivered', label: 'Heat delivered', heat: energy(breakdown.deliveredKWh), share: '' });
+  return rows;
+}
+
 /** "12 % lower", "3 % higher", "the same" — the hourly result beside the degree-day one. */
 export function hourlyVersusDegreeDayText(degreeDays: Pick<DegreeDayCrossCheck, 'hourlyDifferenceFraction'>): string {
   const fraction = degreeDays.hourlyDifferenceFraction;

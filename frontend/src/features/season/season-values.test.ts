@@ -3,7 +3,7 @@ import type { HouseSeasonEstimate, MeasureComparison, MeasureResult } from '../.
 import { unitsFor } from '../../lib/units';
 import { calendarFormSchema, calendarFormValues, isMonthDay, toCalendarInput } from './calendar-values';
 import { lightChangeText, measuresRequestBody, paybackText, rowsFromComparison } from './measures-values';
-import { hourlyVersusDegreeDayText, nightStartDate, seasonChartSeries } from './season-chart-data';
+import { hourlyVersusDegreeDayText, nightStartDate, seasonChartSeries, seasonLossRows } from './season-chart-data';
 
 const month = (
   year: number,
@@ -63,6 +63,39 @@ describe('season chart data', () => {
     expect(hourlyVersusDegreeDayText({ hourlyDifferenceFraction: 0.05 })).toContain('5 % higher');
     expect(hourlyVersusDegreeDayText({ hourlyDifferenceFraction: 0.001 })).toContain('agree to within 1 %');
     expect(hourlyVersusDegreeDayText({ hourlyDifferenceFraction: null })).toContain('no heat needed');
+  });
+});
+
+describe('where the season’s heat goes', () => {
+  // hand-made breakdown: 12,000 + 3,000 + 5,000 = 20,000 kWh lost; 4,000 kWh from the sun and
+  // 1,000 kWh the heaters cannot give are taken off: 15,000 kWh delivered
+  const breakdown = {
+    parts: [
+      { key: 'roof', label: 'Roof (Single polyethylene film)', energyKWh: 12_000, share: 0.6 },
+      { key: 'infiltration', label: 'Air leakage (infiltration)', energyKWh: 3_000, share: 0.15 },
+      { key: 'sky', label: 'Radiation to the night sky', energyKWh: 5_000, share: 0.25 },
+    ],
+    lostKWh: 20_000,
+    skyKWh: 5_000,
+    solarOffsetKWh: 4_000,
+    unmetHeatKWh: 1_000,
+    deliveredKWh: 15_000,
+  } as HouseSeasonEstimate['lossBreakdown'];
+
+  it('lists each part with its share, the sky its own row, then what is taken off and the heat delivered', () => {
+    const rows = seasonLossRows(breakdown, unitsFor('si'));
+    expect(rows.map((row) => row.key)).toEqual(['roof', 'infiltration', 'sky', 'sun', 'unmet', 'delivered']);
+    expect(rows[2]).toEqual({ key: 'sky', label: 'Radiation to the night sky', heat: '5,000 kWh', share: '25 %' });
+    expect(rows[3].heat).toBe('−4,000 kWh');
+    expect(rows[3].share).toBe('');
+    expect(rows[5].heat).toBe('15,000 kWh');
+  });
+
+  it('shows US energy units and leaves out the unmet row when the heaters hold the house', () => {
+    const rows = seasonLossRows({ ...breakdown, unmetHeatKWh: 0, deliveredKWh: 16_000 }, unitsFor('us'));
+    expect(rows.map((row) => row.key)).not.toContain('unmet');
+    // 5,000 kWh × 3.6 MJ/kWh ÷ 1055.056 MJ/MMBtu = 17.06 MMBtu
+    expect(rows.find((row) => row.key === 'sky')!.heat).toBe('17.06 MMBtu');
   });
 });
 

@@ -23,7 +23,7 @@ import '../../../lib/chart';
 import { saveBlob } from '../../../lib/save-blob';
 import { useUnits } from '../../../lib/units';
 import { sideBySideChartData, sideBySideCsv, sideBySideRows } from '../side-by-side-rows';
-import { changesSentence } from '../changed-fields';
+import { alternativeChangesSentence } from '../changed-fields';
 
 /** The first column stays in view while the table scrolls sideways inside its card. */
 const STICKY_FIRST = {
@@ -96,10 +96,7 @@ export function SideBySideView({ data, fileName }: { data: SideBySide; fileName:
                       {index === 0
                         ? 'the house as it is'
                         : column.changedFields.length > 0 || column.ownCalendar
-                          ? changesSentence([
-                              ...column.changedFields,
-                              ...(column.ownCalendar ? ['calendar'] : []),
-                            ]).toLowerCase()
+                          ? alternativeChangesSentence(column.changedFields, column.ownCalendar).toLowerCase()
                           : 'no changes'}
                     </Typography>
                   </TableCell>

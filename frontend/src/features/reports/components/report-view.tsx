@@ -36,6 +36,97 @@ function Bars({ block }: { block: ReportBlock }) {
   );
 }
 
+function PlainTable({ block }: { block: ReportBlock }) {
+  return (
+    <Box sx={{ overflowX: 'auto', my: 1 }}>
+      <Table size="small">
+        <TableHead>
+          <TableRow>
+            {(block.columns ?? []).map((column, index) => (
+              <TableCell key={index} sx={{ fontWeight: 600 }}>
+                {column}
+              </TableCell>
+            ))}
+          </TableRow>
+        </TableHead>
+        <TableBody>
+          {(block.rows ?? []).map((row, index) => (
+            <TableRow key={index}>
+              {row.map((cell, cellIndex) => (
+                <TableCell key={cellIndex}>{cell}</TableCell>
+              ))}
+            </TableRow>
+          ))}
+        </TableBody>
+      </Table>
+    </Box>
+  );
+}
+
+/** Share of the width the row names take in a comparison; the compared columns split the rest. */
+const ROW_NAME_SHARE = 18;
+
+/**
+ * A comparison (the house beside its alternatives): the first cell of each row names it, the
+ * compared columns share the width equally. On screen it scrolls sideways below a readable width;
+ * in print it takes exactly the sheet's width and its words wrap, so the whole table is on paper.
+ */
+function ComparisonTable({ block }: { block: ReportBlock }) {
+  const columns = block.columns ?? [];
+  const compared = Math.max(columns.length - 1, 1);
+  const cell = { verticalAlign: 'top', overflowWrap: 'anywhere', hyphens: 'auto' } as const;
+  return (
+    <Box sx={{ overflowX: 'auto', my: 1, '@media print': { overflowX: 'visible' } }}>
+      <Table
+        size="small"
+        sx={{
+          tableLayout: 'fixed',
+          width: '100%',
+          minWidth: 120 + compared * 130,
+          '@media print': {
+            minWidth: 0,
+            '& th, & td': { fontSize: '0.72rem', px: 0.5, py: 0.25 },
+            '& tr': { breakInside: 'avoid' },
+          },
+        }}
+      >
+        <colgroup>
+          <col style={{ width: `${ROW_NAME_SHARE}%` }} />
+          {columns.slice(1).map((_, index) => (
+            <col key={index} style={{ width: `${(100 - ROW_NAME_SHARE) / compared}%` }} />
+          ))}
+        </colgroup>
+        <TableHead>
+          <TableRow>
+            {columns.map((column, index) => (
+              <TableCell key={index} component="th" scope="col" sx={{ ...cell, fontWeight: 600 }}>
+                {column}
+              </TableCell>
+            ))}
+          </TableRow>
+        </TableHead>
+        <TableBody>
+          {(block.rows ?? []).map((row, index) => (
+            <TableRow key={index}>
+              {row.map((text, cellIndex) =>
+                cellIndex === 0 ? (
+                  <TableCell key={cellIndex} component="th" scope="row" sx={{ ...cell, fontWeight: 600 }}>
+                    {text}
+                  </TableCell>
+                ) : (
+                  <TableCell key={cellIndex} sx={cell}>
+                    {text}
+                  </TableCell>
+                ),
+              )}
+            </TableRow>
+          ))}
+        </TableBody>
+      </Table>
+    </Box>
+  );
+}
+
 function Block({ block }: { block: ReportBlock }) {
   switch (block.kind) {
     case 'paragraph':
@@ -56,30 +147,7 @@ function Block({ block }: { block: ReportBlock }) {
         </Box>
       );
     case 'table':
-      return (
-        <Box sx={{ overflowX: 'auto', my: 1 }}>
-          <Table size="small">
-            <TableHead>
-              <TableRow>
-                {(block.columns ?? []).map((column) => (
-                  <TableCell key={column} sx={{ fontWeight: 600 }}>
-                    {column}
-                  </TableCell>
-                ))}
-              </TableRow>
-            </TableHead>
-            <TableBody>
-              {(block.rows ?? []).map((row, index) => (
-                <TableRow key={index}>
-                  {row.map((cell, cellIndex) => (
-                    <TableCell key={cellIndex}>{cell}</TableCell>
-                  ))}
-                </TableRow>
-              ))}
-            </TableBody>
-          </Table>
-        </Box>
-      );
+      return block.comparison ? <ComparisonTable block={block} /> : <PlainTable block={block} />;
     case 'list':
       return (
         <Box component="ul" sx={{ my: 1, pl: 3 }}>

@@ -63,8 +63,9 @@ export function NightDemandPanel({
             </Stack>
             <Typography variant="body2" color="text.secondary">
               Held at {units.format('temperature', result.nightSetpointC)}; the coldest hour is{' '}
-              {units.format('temperature', result.minOutdoorC)} and needs {units.format('power', result.peakW)}. Times
-              are local standard time.
+              {units.format('temperature', result.minOutdoorC)} and needs {units.format('power', result.peakW)}. Of the
+              heat, {units.format('energyKWh', result.skyKWh)} is radiated to the night sky. Times are local standard
+              time.
             </Typography>
             {result.capacityCaution ? <Alert severity="warning">{units.prose(result.capacityCaution)}</Alert> : null}
             <FuelCautions cautions={result.cautions} />

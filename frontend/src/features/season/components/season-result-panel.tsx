@@ -16,7 +16,7 @@ import { Bar } from 'react-chartjs-2';
 import type { HouseSeasonEstimate } from '../../../api/types';
 import '../../../lib/chart';
 import { useUnits } from '../../../lib/units';
-import { hourlyVersusDegreeDayText, seasonChartSeries } from '../season-chart-data';
+import { hourlyVersusDegreeDayText, seasonChartSeries, seasonLossRows } from '../season-chart-data';
 import { Fact } from './fuel-cautions';
 import { SeasonLampsSummary } from './season-lamps';
 
@@ -118,6 +118,7 @@ export function SeasonResultPanel({ season }: { season: HouseSeasonEstimate }) {
             }}
           />
         </Box>
+        <SeasonLossTable season={season} />
         <Table size="small" aria-label="Season by month">
           <TableHead>
             <TableRow>
@@ -163,6 +164,36 @@ export function SeasonResultPanel({ season }: { season: HouseSeasonEstimate }) {
         </Table>
       </Stack>
     </Paper>
+  );
+}
+
+/** Where the season's heat goes, part by part, the night sky its own row, like the design night's breakdown. */
+function SeasonLossTable({ season }: { season: HouseSeasonEstimate }) {
+  const units = useUnits();
+  const rows = seasonLossRows(season.lossBreakdown, units);
+  return (
+    <Table size="small" aria-label="Season heat by part" data-testid="season-loss-breakdown">
+      <TableHead>
+        <TableRow>
+          <TableCell>Where the heat goes</TableCell>
+          <TableCell align="right">Heat</TableCell>
+          <TableCell align="right">Share of the loss</TableCell>
+        </TableRow>
+      </TableHead>
+      <TableBody>
+        {rows.map((row) => (
+          <TableRow key={row.key} sx={row.key === 'delivered' ? { '& td, & th': { fontWeight: 500 } } : undefined}>
+            <TableCell component="th" scope="row">
+              {row.label}
+            </TableCell>
+            <TableCell align="right" sx={{ whiteSpace: 'nowrap' }}>
+              {row.heat}
+            </TableCell>
+            <TableCell align="right">{row.share}</TableCell>
+          </TableRow>
+        ))}
+      </TableBody>
+    </Table>
   );
 }
 
