@@ -56,6 +56,7 @@ describe('estimateCooling', () => {
         'cautions',
         'designDay',
         'interiorLight',
+        'lamps',
         'pads',
         'shadeCloth',
         'staging',

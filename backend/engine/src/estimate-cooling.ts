@@ -25,6 +25,10 @@ import {
 import { thermostatStaging, type StagingResult } from './cooling/staging';
 import { winterVentilation, type WinterVentilation } from './cooling/winter-ventilation';
 import { computeHouseGeometry, opaqueEnvelopeShare } from './geometry/house-geometry';
+import { designDayLamps, type DesignDayLamps } from './cooling/design-day-lamps';
+import { lampElectricalCaution, lampPower, validateLamps } from './lamps/lamps';
+import { maxOf } from './numbers';
+import { solarNoonUtc } from './solar';
 import { heatLossCoefficients } from './heating/heat-loss';
 import type { HouseSpec, ShadeCloth } from './house.types';
 import { dryAirDensityKgPerM3, standardAtmosphericPressurePa } from './psychrometrics';
@@ -64,9 +68,38 @@ export interface CoolingEstimate {
   pads: PadSizing | null;
   staging: StagingResult;
   winterVentilation: WinterVentilation;
+  /** the supplemental lamps on the design day; null without lamps or when they do not run that month */
+  lamps: CoolingLamps | null;
   assumptions: CoolingAssumption[];
   /** may hold {{kind:valueSI}} quantity tokens (see prose.ts) */
   cautions: string[];
+}
+
+export interface CoolingLamps {
+  /** electrical input while on, W */
+  electricW: number;
+  /** heat into the house while on, W */
+  heatW: number;
+  /** hours they run on the design day (the design month's value) */
+  hoursOn: number;
+  /** sunrise in solar hours, where the block ends */
+  sunriseSolarHour: number;
+  /** fan flow the lamps add to the requirement, m³/s (0 when the sunniest hour still governs) */
+  addedFlowM3PerS: number;
+  /** the solar hour that sets the requirement with the lamps, null when the floor-area method does */
+  governingHour: number | null;
+}
+
+function coolingLamps(lamps: DesignDayLamps | null, capacity: CapacityResult): CoolingLamps | null {
+  if (!lamps) return null;
+  return {
+    electricW: lamps.electricW,
+    heatW: lamps.heatW,
+    hoursOn: lamps.hoursOn,
+    sunriseSolarHour: lamps.sunriseSolarHour,
+    addedFlowM3PerS: capacity.lampFlowM3PerS,
+    governingHour: capacity.lampGoverningHour,
+  };
 }
 
 /**
@@ -94,12 +127,24 @@ export function estimateCooling(input: CoolingInput, ref: ReferenceData): Coolin
 
   // --- air exchange
   const exchange = airExchange(house.exhaustFans, geometry);
+  // --- supplemental lamps on the design day (never credited in winter, added in summer)
+  validateLamps(house.lamps, 'house.lamps', ref);
+  const [, , dayOfMonth] = conditions.designDate.split('-').map(Number);
+  const lamps = designDayLamps(
+    house.lamps,
+    geometry.floorAreaM2,
+    month,
+    solarNoonUtc(year, month, dayOfMonth, site.latitudeDeg, site.longitudeDeg),
+    site.latitudeDeg,
+    site.longitudeDeg,
+  );
 
   // --- design day
   const pressurePa = standardAtmosphericPressurePa(site.elevationM);
+  const summerAirDensityKgPerM3 = dryAirDensityKgPerM3(conditions.summerDesignC, pressurePa);
   const conductanceWPerK = heatLossCoefficients(house, geometry, ref, {
     curtainClosed: false,
-    airDensityKgPerM3: dryAirDensityKgPerM3(conditions.summerDesignC, pressurePa),
+    airDensityKgPerM3: summerAirDensityKgPerM3,
   }).totalWPerK;
   // the opaque kneewall's share of the envelope passes no light
   const roofLightTransmittance = roofCovering.lightTransmittance * (1 - opaqueEnvelopeShare(geometry));
@@ -120,6 +165,7 @@ export function estimateCooling(input: CoolingInput, ref: ReferenceData): Coolin
       installedFlowM3PerS: exchange.installedFlowM3PerS,
       coolingSetpointC: house.setpoints.coolingC,
       padSaturationEfficiency: padType ? padType.saturationEfficiency : null,
+      lampHeatByHourW: lamps?.heatByHourW ?? null,
     },
     ref,
   );
@@ -134,6 +180,9 @@ export function estimateCooling(input: CoolingInput, ref: ReferenceData): Coolin
     },
     ref,
   );
+  // --- required capacity: the lamps' heat adds to the hours they run
+  const cp = airSpecificHeat(ref);
+  const brightestWPerM2 = maxOf(designDay.hours.map((hour) => hour.globalHorizontalWPerM2));
   const { elevationBeyondTable, ...capacity } = requiredCapacity(
     {
       floorAreaM2: geometry.floorAreaM2,
@@ -143,6 +192,15 @@ export function estimateCooling(input: CoolingInput, ref: ReferenceData): Coolin
       padToFanDistanceM,
       fans: house.exhaustFans,
       inletAreaM2: house.inletAreaM2,
+      lamps: lamps
+        ? {
+            heatByHourW: lamps.heatByHourW,
+            sunShareByHour: designDay.hours.map((hour) =>
+              brightestWPerM2 > 0 ? hour.globalHorizontalWPerM2 / brightestWPerM2 : 0,
+            ),
+            airHeatCapacityJPerM3K: summerAirDensityKgPerM3 * cp.value,
+          }
+        : null,
     },
     ref,
   );
@@ -167,7 +225,6 @@ export function estimateCooling(input: CoolingInput, ref: ReferenceData): Coolin
   });
 
   // --- winter humidity ventilation
-  const cp = airSpecificHeat(ref);
   const winterFraction = ventilationValue(ref, 'winter-ventilation', 'fraction');
   const winter = winterVentilation({
     fractionOfSummerRate: winterFraction.value,
@@ -200,6 +257,7 @@ export function estimateCooling(input: CoolingInput, ref: ReferenceData): Coolin
       padType,
       staging,
       winterFraction,
+      lamps: house.lamps ? { spec: house.lamps, onDesignDay: lamps } : null,
     },
     ref,
   );
@@ -220,6 +278,7 @@ export function estimateCooling(input: CoolingInput, ref: ReferenceData): Coolin
     },
     ref,
   );
+  if (house.lamps) cautions.push(lampElectricalCaution(lamps ?? lampPower(house.lamps, geometry.floorAreaM2)));
 
   return {
     airExchange: exchange,
@@ -243,6 +302,7 @@ export function estimateCooling(input: CoolingInput, ref: ReferenceData): Coolin
     pads,
     staging,
     winterVentilation: winter,
+    lamps: coolingLamps(lamps, capacity),
     assumptions,
     cautions,
   };

@@ -34,7 +34,7 @@ describe('estimateHeating', () => {
 
   it('returns exactly the agreed shape', () => {
     expect(Object.keys(estimate).sort()).toEqual(
-      ['assumptions', 'cautions', 'condensation', 'geometry', 'heatLoss', 'heater'].sort(),
+      ['assumptions', 'cautions', 'condensation', 'geometry', 'heatLoss', 'heater', 'lamps'].sort(),
     );
     expect(Object.keys(estimate.geometry).sort()).toEqual(
       [

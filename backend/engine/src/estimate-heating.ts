@@ -11,7 +11,8 @@ import { validateHeatingConditions, type HeatingConditions } from './heating/hea
 import { type HouseSpec } from './house.types';
 import { insideAirDensityKgPerM3 } from './psychrometrics/psychrometrics';
 import type { ReferenceData } from './reference-data.types';
-import { SURFACE_GROUPS } from './vocabulary';
+import { SURFACE_GROUPS, quantityToken } from './vocabulary';
+import { LAMP_SIZING_ROW_ID, lampElectricalCaution, lampMethodRow, lampPower, validateLamps } from './lamps/lamps';
 
 export type { HeatingAssumption } from './heating/heating-assumptions';
 export type { HeatingConditions } from './heating/heating-conditions';
@@ -36,9 +37,22 @@ export interface HeatingEstimate {
   heatLoss: HeatLossBreakdown;
   heater: HeaterSizingResult;
   condensation: CondensationResult;
+  /** the house's supplemental lamps on the design night: shown, never credited; null without lamps */
+  lamps: HeatingLamps | null;
   assumptions: HeatingAssumption[];
   /** may hold {{kind:valueSI}} quantity tokens (see prose.ts), as may assumption labels */
   cautions: string[];
+}
+
+export interface HeatingLamps {
+  /** electrical input of all the lamps while they run, W */
+  electricW: number;
+  /** heat they give the house while they run, W */
+  heatW: number;
+  /** heat credited against the design heat loss and the heater sizing: always 0, W */
+  creditedW: 0;
+  /** the share of the design heat loss the lamps would cover while they run (for the reader), 0–… */
+  shareOfDesignLoss: number;
 }
 
 /**
@@ -50,6 +64,7 @@ export function estimateHeating(input: HeatingEstimateInput, ref: ReferenceData)
   const { house, conditions } = input;
   const geometry = computeHouseGeometry(house);
   const insideC = validateHeatingConditions(conditions, house);
+  const lamps = validateLamps(house.lamps, 'house.lamps', ref);
   const outsideC = conditions.designOutdoorC;
   const curtainClosed = conditions.curtainClosed ?? false;
 
@@ -98,6 +113,25 @@ export function estimateHeating(input: HeatingEstimateInput, ref: ReferenceData)
       assumptionFromRow(row, `safety.${row.id}`, row.label, value, unit),
     ),
   ];
+  let lampResult: HeatingLamps | null = null;
+  if (lamps) {
+    const power = lampPower(lamps, geometry.floorAreaM2);
+    lampResult = {
+      ...power,
+      creditedW: 0,
+      shareOfDesignLoss: heatLoss.totalW > 0 ? power.heatW / heatLoss.totalW : 0,
+    };
+    const sizingRow = lampMethodRow(ref, LAMP_SIZING_ROW_ID);
+    assumptions.push(
+      assumptionFromRow(
+        sizingRow,
+        'lamps.notCredited',
+        `${sizingRow.label ?? LAMP_SIZING_ROW_ID}: the lamps' ${quantityToken('power', power.heatW)} of heat while they run is left out`,
+        0,
+        'W',
+      ),
+    );
+  }
   const cautions = heatingCautions(
     {
       house,
@@ -112,7 +146,7 @@ export function estimateHeating(input: HeatingEstimateInput, ref: ReferenceData)
       combustionCautions: combustion.cautions,
     },
     ref,
-  ).concat(clearNight?.cautions ?? []);
+  ).concat(clearNight?.cautions ?? [], lampResult ? [lampElectricalCaution(lampResult)] : []);
 
   return {
     geometry: {
@@ -128,6 +162,7 @@ export function estimateHeating(input: HeatingEstimateInput, ref: ReferenceData)
     heatLoss,
     heater: sizing.result,
     condensation: condensation.result,
+    lamps: lampResult,
     assumptions,
     cautions,
   };

@@ -10,11 +10,13 @@ import type {
   EstimateSeasonInput,
   PreparedSeason,
   SeasonEstimate,
+  SeasonLamps,
   SeasonMonth,
   SeasonVariant,
   VariantRun,
 } from './season/season-types';
 import { SunCache } from './season/sun-hours';
+import { lampElectricalCaution, lampPower, namedLampType } from './lamps/lamps';
 
 // The season estimate's parts live in season/: its types (season-types.ts), validation and the
 // prepared hours (prepare-season.ts), the degree-day cross-check (degree-day-check.ts) and the
@@ -70,6 +72,9 @@ function describeSeason(
     degreeDaysKDay: degreeDays.byMonthSlot[index],
     unmetHeatKWh: result.monthlyUnmetHeatWh[index] / 1000,
     hoursBelowSetpoint: result.monthlyHoursBelowSetpoint[index],
+    lampElectricityKWh: run.lamps ? run.lamps.monthlyElectricWh[index] / 1000 : 0,
+    lampHeatKWh: run.lamps ? run.lamps.monthlyHeatWh[index] / 1000 : 0,
+    lampHeatSavedKWh: result.monthlyLampSavedHeatWh[index] / 1000,
   }));
 
   let heatedDays = 0;
@@ -122,9 +127,35 @@ function describeSeason(
     peak,
     nightShareOfHeat: result.totalHeatWh > 0 ? result.nightHeatWh / result.totalHeatWh : 0,
     solarOffsetKWh: result.solarOffsetWh / 1000,
+    lamps: seasonLamps(variant, run, ref),
     lossBreakdown: seasonLossBreakdown(thermal, result),
     degreeDays: degreeDayCrossCheck(prepared, variant, run, degreeDays.total, ref),
     assumptions: seasonAssumptions(prepared, variant, thermal, ref),
-    cautions: fuelCautions(variant.fuelRow),
+    cautions: run.lamps
+      ? [...fuelCautions(variant.fuelRow), lampElectricalCaution(run.lamps)]
+      : fuelCautions(variant.fuelRow),
+  };
+}
+
+function seasonLamps(variant: SeasonVariant, run: VariantRun, ref: ReferenceData): SeasonLamps | null {
+  const lamps = variant.house.lamps;
+  if (!lamps) return null;
+  const type = namedLampType(lamps, ref);
+  const power = run.lamps ?? lampPower(lamps, run.thermal.geometry.floorAreaM2);
+  const heatToHouseKWh = run.lamps ? run.lamps.heatWh / 1000 : 0;
+  const heatSavedKWh = run.result.lampSavedHeatWh / 1000;
+  return {
+    lampTypeId: lamps.lampTypeId ?? null,
+    lampTypeLabel: type ? (type.label ?? type.id) : null,
+    powerDensityWPerM2: lamps.powerDensityWPerM2,
+    hoursPerDayByMonth: [...lamps.hoursPerDayByMonth],
+    heatToHouseFraction: lamps.heatToHouseFraction,
+    electricW: power.electricW,
+    heatW: power.heatW,
+    electricityKWh: run.lamps ? run.lamps.electricWh / 1000 : 0,
+    heatToHouseKWh,
+    heatSavedKWh,
+    fuelSaved: fuelAmount(heatSavedKWh, variant),
+    usefulShareOfHeat: heatToHouseKWh > 0 ? heatSavedKWh / heatToHouseKWh : 0,
   };
 }

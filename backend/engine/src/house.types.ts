@@ -43,6 +43,21 @@ export interface ShadeCloth {
   months: number[];
 }
 
+/**
+ * Supplemental lamps: electrical input per m² of floor, hours per day by month, and the share of
+ * the input that ends as heat inside the house (reference-data/lamps.json).
+ */
+export interface Lamps {
+  /** reference-data/lamps.json id of a lamp-type row, or null when not stated */
+  lampTypeId?: string | null;
+  /** installed electrical input per m² of floor, W/m² */
+  powerDensityWPerM2: number;
+  /** hours the lamps run per day, January to December: 12 values, 0–24 */
+  hoursPerDayByMonth: number[];
+  /** share of the electrical input that ends as heat inside the house, 0–1 */
+  heatToHouseFraction: number;
+}
+
 export interface HouseSpec {
   shape: HouseShape;
   /** 1 for a freestanding house; more for a gutter-connected range */
@@ -79,6 +94,8 @@ export interface HouseSpec {
   /** free area of the intake louvres or inlets, m² */
   inletAreaM2: number;
   setpoints: Setpoints;
+  /** supplemental lamps, or null / absent for none */
+  lamps?: Lamps | null;
 }
 
 /** Where the house stands; used for air density and the sun's path. */

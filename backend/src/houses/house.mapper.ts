@@ -1,9 +1,9 @@
-import type { HouseSpec } from '@thermbay/engine/house.types';
+import type { HouseSpec, Lamps } from '@thermbay/engine/house.types';
 import type { HouseDto } from './dto/house.dto';
 import type { House } from './models/house.model';
 
 /** A stored house as the engine takes it: plain data, SI, nothing from the ORM. */
-export function houseToSpec(house: House | HouseDto): HouseSpec {
+export function houseToSpec(house: House | HouseDto): HouseSpec & { lamps: Lamps | null } {
   return {
     shape: house.shape,
     spans: house.spans,
@@ -26,6 +26,14 @@ export function houseToSpec(house: House | HouseDto): HouseSpec {
     exhaustFans: { ...house.exhaustFans },
     inletAreaM2: house.inletAreaM2,
     setpoints: { ...house.setpoints },
+    lamps: house.lamps
+      ? {
+          lampTypeId: house.lamps.lampTypeId ?? null,
+          powerDensityWPerM2: house.lamps.powerDensityWPerM2,
+          hoursPerDayByMonth: [...house.lamps.hoursPerDayByMonth],
+          heatToHouseFraction: house.lamps.heatToHouseFraction,
+        }
+      : null,
   };
 }
 

@@ -12,6 +12,7 @@ import { assertVersion, changesNothing, expectedVersion } from '../common/versio
 import { EngineInputError } from '@thermbay/engine/errors';
 import { validateHouseDimensions } from '@thermbay/engine/geometry/house-geometry';
 import { validateShadeCloth } from '@thermbay/engine/solar/shade-cloth';
+import { validateLamps } from '@thermbay/engine/lamps/lamps';
 import { FarmAccessService } from '../farms/farm-access.service';
 import { ReferenceDataService } from '../reference-data/reference-data.service';
 import { CreateHouseDto, type HouseDto, type UpdateHouseDto } from './dto/house.dto';
@@ -127,8 +128,10 @@ export class HousesService {
   private assertComputable(house: CreateHouseDto | HouseDto): void {
     this.reference.assertHouseReferences(house);
     try {
-      validateHouseDimensions(houseToSpec(house as HouseDto), 'house');
+      const spec = houseToSpec(house as HouseDto);
+      validateHouseDimensions(spec, 'house');
       validateShadeCloth(house);
+      validateLamps(spec.lamps, 'house.lamps');
     } catch (error) {
       if (error instanceof EngineInputError) {
         const field = error.field.replace(/^house\./, '');

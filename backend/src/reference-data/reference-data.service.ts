@@ -2,6 +2,7 @@ import { Injectable } from '@nestjs/common';
 import { EngineInputError } from '@thermbay/engine/errors';
 import type { HouseSpec } from '@thermbay/engine/house.types';
 import { referenceRow, type ReferenceData } from '@thermbay/engine/reference-data.types';
+import { lampTypeRows } from '@thermbay/engine/lamps/lamps';
 import { loadReferenceData } from './load-reference-data';
 
 /** The handbook tables, read once at boot (a table without provenance stops the app). */
@@ -29,5 +30,16 @@ export class ReferenceDataService {
     check('curtains', 'curtainId', house.curtainId);
     check('kneewalls', 'kneewallId', house.kneewallId);
     house.heaters?.forEach((heater, index) => check('fuels', `heaters.${index}.fuelId`, heater.fuelId));
+    const lampTypeId = house.lamps?.lampTypeId;
+    if (
+      lampTypeId !== undefined &&
+      lampTypeId !== null &&
+      !lampTypeRows(this.data).some((row) => row.id === lampTypeId)
+    ) {
+      throw new EngineInputError(
+        `${prefix}lamps.lampTypeId`,
+        `${prefix}lamps.lampTypeId: "${lampTypeId}" is not a lamp type in reference-data/lamps.json`,
+      );
+    }
   }
 }

@@ -12,6 +12,7 @@ import {
 } from './house-patch';
 
 const COVERING_IDS = ['poly-single', 'poly-double-inflated', 'poly-double-ir-inner', 'glass-single'];
+const lampHoursArb = fc.array(fc.integer({ min: 0, max: 24 }), { minLength: 12, maxLength: 12 });
 
 /** Random stored-like houses: every field present, no null inside object-valued fields. */
 const houseArb: fc.Arbitrary<HouseSpec & { id: number; name: string }> = fc.record({
@@ -62,6 +63,18 @@ const houseArb: fc.Arbitrary<HouseSpec & { id: number; name: string }> = fc.reco
     nightHeatingC: fc.double({ min: 5, max: 30, noNaN: true }),
     coolingC: fc.double({ min: 15, max: 35, noNaN: true }),
   }),
+  lamps: fc.option(
+    fc.record(
+      {
+        lampTypeId: fc.constantFrom('hps-double-ended', 'led-horticultural'),
+        powerDensityWPerM2: fc.double({ min: 1, max: 200, noNaN: true }),
+        hoursPerDayByMonth: lampHoursArb,
+        heatToHouseFraction: fc.double({ min: 0.5, max: 1, noNaN: true }),
+      },
+      { requiredKeys: ['powerDensityWPerM2', 'hoursPerDayByMonth', 'heatToHouseFraction'] },
+    ),
+    { nil: null },
+  ),
 });
 
 /** A random patch over the fields the issue lists (and a few others), each a plausible change. */
@@ -119,6 +132,18 @@ const patchArb: fc.Arbitrary<HousePatch> = fc.record(
       { requiredKeys: [] },
     ),
     ridgeHeightM: fc.double({ min: 5.1, max: 8, noNaN: true }),
+    lamps: fc.option(
+      fc.record(
+        {
+          lampTypeId: fc.constantFrom('hps-double-ended', 'led-horticultural'),
+          powerDensityWPerM2: fc.double({ min: 1, max: 200, noNaN: true }),
+          hoursPerDayByMonth: lampHoursArb,
+          heatToHouseFraction: fc.double({ min: 0.5, max: 1, noNaN: true }),
+        },
+        { requiredKeys: [] },
+      ),
+      { nil: null },
+    ),
   },
   { requiredKeys: [] },
 ) as fc.Arbitrary<HousePatch>;
@@ -246,6 +271,28 @@ describe('house patches (examples)', () => {
     expect(housePatchBetween(added, removed)).toEqual({ shadeCloth: null });
     // a stored house always carries the field (null without a cloth), so a patch may name it
     expect(() => assertPatchFields({ ...bare, id: 1 }, { shadeCloth: cloth })).not.toThrow();
+  });
+
+  it('adds lamps to a house without them, changes one lamp value, and takes them away', () => {
+    const stored: HouseSpec = { ...house, lamps: null };
+    const lamps = {
+      lampTypeId: 'led-horticultural',
+      powerDensityWPerM2: 45,
+      hoursPerDayByMonth: [12, 12, 10, 8, 4, 0, 0, 0, 4, 8, 10, 12],
+      heatToHouseFraction: 0.95,
+    };
+    const added = applyHousePatch(stored, { lamps });
+    expect(added.lamps).toEqual(lamps);
+    expect(stored.lamps).toBeNull();
+    // an alternative of a lit house that only doubles the power keeps the house's hours
+    const brighter = applyHousePatch(added, { lamps: { powerDensityWPerM2: 90 } });
+    expect(brighter.lamps).toEqual({ ...lamps, powerDensityWPerM2: 90 });
+    expect(housePatchBetween(added, brighter)).toEqual({ lamps: { powerDensityWPerM2: 90 } });
+    expect(applyHousePatch(added, { lamps: null }).lamps).toBeNull();
+    expect(housePatchBetween(stored, added)).toEqual({ lamps });
+    expect(reverseHousePatch(stored, { lamps })).toEqual({ lamps: null });
+    expect(() => assertPatchFields({ ...stored, id: 1 }, { lamps })).not.toThrow();
+    expect(patchedPaths({ lamps: { hoursPerDayByMonth: Array(12).fill(6) } })).toEqual(['lamps.hoursPerDayByMonth']);
   });
 
   it('lists the paths it changes', () => {

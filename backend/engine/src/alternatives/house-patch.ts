@@ -7,8 +7,9 @@
  *  - a top-level key is a house field and replaces it (null included: `curtainId: null` = no curtain,
  *    `shadeCloth: null` = no shade cloth; a cloth object where the house has none adds one);
  *  - where both the house field and the patch value are plain objects (coverings, setpoints,
- *    fans, U-value overrides, a shade cloth …), the patch is merged key by key, recursively
- *    (`shadeCloth: { solarTransmittance: 0.3 }` changes the cloth and keeps its months);
+ *    fans, U-value overrides, a shade cloth, lamps …), the patch is merged key by key, recursively
+ *    (`shadeCloth: { solarTransmittance: 0.3 }` changes the cloth and keeps its months); a house
+ *    without lamps or a cloth (null) takes the patch's whole, and `lamps: null` takes them away;
  *  - inside such an object, null removes the key (e.g. drops one U-value override);
  *  - anything else (numbers, strings, arrays such as the heater groups or the cloth's months)
  *    replaces the whole value.

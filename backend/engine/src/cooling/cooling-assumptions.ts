@@ -1,6 +1,6 @@
 import type { ReferenceData, ReferenceRow } from '../reference-data.types';
 import { clearSkyMonthRow } from '../solar/clear-sky';
-import type { Confidence } from '../vocabulary';
+import type { AssumptionConfidence } from '../vocabulary';
 import {
   dailyRangeProfileRow,
   requireRow,
@@ -13,6 +13,9 @@ import type { ShadeCloth } from '../house.types';
 import { MONTH_NAMES, shadeClothInWords } from '../solar/shade-cloth';
 import type { CapacityResult, InteriorLight } from './required-capacity';
 import type { StagingResult } from './staging';
+import type { Lamps } from '../house.types';
+import { LAMP_SCHEDULE_ROW_ID, LAMP_SUMMER_ROW_ID, lampMethodRow } from '../lamps/lamps';
+import type { DesignDayLamps } from './design-day-lamps';
 
 export interface CoolingAssumption {
   key: string;
@@ -20,7 +23,8 @@ export interface CoolingAssumption {
   value: number | string;
   unit: string;
   source: string;
-  confidence: Confidence;
+  /** 'user-entered' for values the house states (its lamps) */
+  confidence: AssumptionConfidence;
   overridden: boolean;
 }
 
@@ -46,6 +50,8 @@ export interface CoolingAssumptionSources {
   padType: PadTypeRow | null;
   staging: StagingResult;
   winterFraction: SourcedValue;
+  /** the house's lamps and what they do on the design day (null there when they do not run that month) */
+  lamps?: { spec: Lamps; onDesignDay: DesignDayLamps | null } | null;
 }
 
 /** Every reference value the cooling estimate used, with its source, and where the user replaced one. */
@@ -66,6 +72,7 @@ export function coolingAssumptions(
     padType,
     staging,
     winterFraction,
+    lamps,
   }: CoolingAssumptionSources,
   ref: ReferenceData,
 ): CoolingAssumption[] {
@@ -287,6 +294,39 @@ export function coolingAssumptions(
     '–',
     winterFraction.row,
   );
+  if (lamps) {
+    assumptions.push({
+      key: 'lamps.powerDensityWPerM2',
+      label: 'Supplemental lamps: electrical input per floor area',
+      value: lamps.spec.powerDensityWPerM2,
+      unit: 'W/m²',
+      source: 'entered for this house',
+      confidence: 'user-entered',
+      overridden: true,
+    });
+    assumptions.push({
+      key: 'lamps.hoursOnDesignDay',
+      label: `Hours the lamps run on the design day (month ${month})`,
+      value: lamps.onDesignDay?.hoursOn ?? 0,
+      unit: 'h',
+      source: 'entered for this house',
+      confidence: 'user-entered',
+      overridden: true,
+    });
+    assumptions.push({
+      key: 'lamps.heatToHouseFraction',
+      label: "Share of the lamps' input that heats the house",
+      value: lamps.spec.heatToHouseFraction,
+      unit: '–',
+      source: 'entered for this house (reference-data/lamps.json offers the default)',
+      confidence: 'user-entered',
+      overridden: true,
+    });
+    const schedule = lampMethodRow(ref, LAMP_SCHEDULE_ROW_ID);
+    sourced('lamps.schedule', schedule.label ?? LAMP_SCHEDULE_ROW_ID, 'ends at sunrise', '', schedule);
+    const summer = lampMethodRow(ref, LAMP_SUMMER_ROW_ID);
+    sourced('lamps.summerFlow', summer.label ?? LAMP_SUMMER_ROW_ID, 'V̇ = Q ÷ (ρ·c_p·ΔT)', '', summer);
+  }
   sourced(
     'winterDesignC',
     'Outdoor temperature for the winter ventilation heat cost (house air at the night heating setpoint)',

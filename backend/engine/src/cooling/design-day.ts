@@ -27,6 +27,7 @@ import {
  *
  * Indoor: steady state each hour (no storage in floor, benches or crop):
  *   solar gain to air = G_h × τ_roof × τ_shade × (1 − transpiration share) × floor area
+ *   gain = solar gain + the lamps' heat in the hours they run (cooling/design-day-lamps.ts)
  * with τ_shade the share a shade cloth in place that month passes (1 without one). The light under
  * the roof, G_h × τ_roof × τ_shade, is the one the exhaust rate's light factor reads too
  * (`designDayInteriorLightLux`), so the two never see different suns.
@@ -41,6 +42,8 @@ import {
 
 export interface HourlyBalanceInput {
   solarGainW: number;
+  /** heat of supplemental lamps running this hour, W (0 or absent when off) */
+  lampHeatW?: number;
   /** UA of the cover, perimeter and leakage, W/K */
   conductanceWPerK: number;
   outdoorC: number;
@@ -58,7 +61,8 @@ export interface HourlyBalance {
 }
 
 export function hourlyIndoorBalance(input: HourlyBalanceInput): HourlyBalance {
-  const { solarGainW, conductanceWPerK, outdoorC, supplyAirC, maxVentilationWPerK, coolingSetpointC } = input;
+  const { conductanceWPerK, outdoorC, supplyAirC, maxVentilationWPerK, coolingSetpointC } = input;
+  const solarGainW = input.solarGainW + (input.lampHeatW ?? 0);
   const unventilatedC = outdoorC + solarGainW / conductanceWPerK;
   if (unventilatedC <= coolingSetpointC) {
     return { indoorC: unventilatedC, fanFraction: 0, setpointHeld: true };
@@ -105,6 +109,8 @@ export interface DesignDayInput {
   coolingSetpointC: number;
   /** saturation efficiency of the pads, or null without pads */
   padSaturationEfficiency: number | null;
+  /** heat of supplemental lamps in each of the 24 solar hours, W; null or absent without lamps */
+  lampHeatByHourW?: number[] | null;
 }
 
 export interface DesignDayHour {
@@ -113,6 +119,8 @@ export interface DesignDayHour {
   sunAltitudeDeg: number;
   globalHorizontalWPerM2: number;
   solarGainW: number;
+  /** heat of supplemental lamps running this hour, W (0 when they are off) */
+  lampHeatW: number;
   indoorWithFansC: number;
   fanFraction: number;
   indoorWithPadsC: number | null;
@@ -154,6 +162,7 @@ export function designDayBalance(input: DesignDayInput, ref: ReferenceData): Des
     const sunAltitudeDeg = sunPosition(at, input.latitudeDeg, input.longitudeDeg).altitudeDeg;
     const globalHorizontalWPerM2 = clearSkyIrradiance(sunAltitudeDeg, month, ref).globalHorizontalWPerM2;
     const solarGainW = globalHorizontalWPerM2 * absorbedShare * input.floorAreaM2;
+    const lampHeatW = input.lampHeatByHourW ? input.lampHeatByHourW[hour] : 0;
 
     const ventilation = (supplyAirC: number) =>
       moistAirDensityFromHumidityRatioKgPerM3(supplyAirC, humidityRatio, pressurePa) *
@@ -162,6 +171,7 @@ export function designDayBalance(input: DesignDayInput, ref: ReferenceData): Des
 
     const withFans = hourlyIndoorBalance({
       solarGainW,
+      lampHeatW,
       conductanceWPerK: input.conductanceWPerK,
       outdoorC,
       supplyAirC: outdoorC,
@@ -177,6 +187,7 @@ export function designDayBalance(input: DesignDayInput, ref: ReferenceData): Des
       if (hour === hourOfOutdoorPeak) padLeavingAirAtPeakC = padAirC;
       withPads = hourlyIndoorBalance({
         solarGainW,
+        lampHeatW,
         conductanceWPerK: input.conductanceWPerK,
         outdoorC,
         supplyAirC: padAirC,
@@ -194,6 +205,7 @@ export function designDayBalance(input: DesignDayInput, ref: ReferenceData): Des
       sunAltitudeDeg,
       globalHorizontalWPerM2,
       solarGainW,
+      lampHeatW,
       indoorWithFansC: withFans.indoorC,
       fanFraction: installed.fanFraction,
       indoorWithPadsC: withPads === null ? null : withPads.indoorC,

@@ -19,6 +19,13 @@ export interface CapacityFactors {
 export interface CapacityResult {
   baseRateM3PerSM2: number;
   factors: CapacityFactors;
+  /** base rate × applied factor × floor area: the floor-area method alone, m³/s */
+  floorAreaMethodFlowM3PerS: number;
+  /** flow the lamps' heat adds over the floor-area method, m³/s (0 without lamps or when they run in a dim hour) */
+  lampFlowM3PerS: number;
+  /** the design-day solar hour that sets the requirement with the lamps, null when the floor-area method does */
+  lampGoverningHour: number | null;
+  /** the larger of the floor-area method and the lit hours' need, m³/s */
   requiredFlowM3PerS: number;
   installedFlowM3PerS: number;
   verdict: 'adequate' | 'short' | 'no-fans';
@@ -118,7 +125,19 @@ export function temperatureRiseFactor(allowedTemperatureRiseK: number, ref: Refe
   return ventilationValue(ref, 'temperature-rise-factor', 'referenceRiseK').value / allowedTemperatureRiseK;
 }
 
+/** The lamps' heat on the design day, for the fan requirement. */
+export interface CapacityLamps {
+  /** lamp heat in each of the 24 design-day hours, W */
+  heatByHourW: number[];
+  /** each hour's clear-sky sunlight ÷ the design day's highest, 0–1 */
+  sunShareByHour: number[];
+  /** ρ·c_p of the air the fans move, J/(m³·K) */
+  airHeatCapacityJPerM3K: number;
+}
+
 export interface CapacityInput {
+  /** supplemental lamps on the design day; null or absent without lamps */
+  lamps?: CapacityLamps | null;
   floorAreaM2: number;
   elevationM: number;
   peakInteriorLightLux: number;
@@ -137,6 +156,12 @@ export function designFlowM3PerS(capacity: Pick<CapacityResult, 'requiredFlowM3P
  * Summer exhaust capacity by the floor-area method: base rate × max(F_elev·F_light·F_temp, F_vel)
  * × floor area, compared with the installed fans; inlet area for the design flow at the maximum
  * inlet velocity.
+ *
+ * With lamps (reference-data/lamps.json 'lamp-heat-in-summer'): every design-day hour h needs
+ *   V̇(h) = base rate × F_elev·F_light·F_temp × floor area × sun(h) ÷ sun(max) + Q_lamp(h) ÷ (ρ·c_p·ΔT_allowed),
+ * the floor-area method scaled to that hour's sunlight plus the flow that carries the lamps' heat
+ * away at the allowed rise; the requirement is the larger of the floor-area method and every V̇(h).
+ * Without lamps V̇(h) never exceeds the floor-area method, so lamps can only raise the requirement.
  */
 export function requiredCapacity(
   input: CapacityInput,
@@ -150,7 +175,21 @@ export function requiredCapacity(
   const house = elevation.factor * light * temperatureRise;
   const applied = Math.max(house, velocity);
 
-  const requiredFlowM3PerS = baseRateM3PerSM2 * applied * input.floorAreaM2;
+  const floorAreaMethodFlowM3PerS = baseRateM3PerSM2 * applied * input.floorAreaM2;
+  let requiredFlowM3PerS = floorAreaMethodFlowM3PerS;
+  let lampGoverningHour: number | null = null;
+  if (input.lamps) {
+    const sunlitFlowM3PerS = baseRateM3PerSM2 * house * input.floorAreaM2;
+    const perWatt = 1 / (input.lamps.airHeatCapacityJPerM3K * input.allowedTemperatureRiseK);
+    input.lamps.heatByHourW.forEach((heatW, hour) => {
+      if (!(heatW > 0)) return;
+      const flow = sunlitFlowM3PerS * (input.lamps!.sunShareByHour[hour] ?? 0) + heatW * perWatt;
+      if (flow > requiredFlowM3PerS) {
+        requiredFlowM3PerS = flow;
+        lampGoverningHour = hour;
+      }
+    });
+  }
   const installedFlowM3PerS = input.fans.count * input.fans.capacityEachM3PerS;
   const verdict: CapacityResult['verdict'] =
     input.fans.count === 0 || installedFlowM3PerS <= 0
@@ -172,6 +211,9 @@ export function requiredCapacity(
   return {
     baseRateM3PerSM2,
     factors: { elevation: elevation.factor, light, temperatureRise, velocity, house, applied },
+    floorAreaMethodFlowM3PerS,
+    lampFlowM3PerS: requiredFlowM3PerS - floorAreaMethodFlowM3PerS,
+    lampGoverningHour,
     requiredFlowM3PerS,
     installedFlowM3PerS,
     verdict,

@@ -35,6 +35,7 @@ export function degreeDayCrossCheck(
     nightSetpointAllDay: true,
     curtainOpen: true,
     uncapped: true,
+    withoutLamps: true,
     withoutSky: true,
   });
   const withDaySetpoint = runVariant(prepared, variant, ref, {
@@ -42,26 +43,33 @@ export function degreeDayCrossCheck(
     withoutSun: true,
     curtainOpen: true,
     uncapped: true,
+    withoutLamps: true,
     withoutSky: true,
   });
   const withCurtain = runVariant(prepared, variant, ref, {
     thermal,
     withoutSun: true,
     uncapped: true,
+    withoutLamps: true,
     withoutSky: true,
   });
-  const withSky = runVariant(prepared, variant, ref, { thermal, withoutSun: true, uncapped: true });
+  const hasLamps = run.parameters.lamps !== null && run.parameters.lamps !== undefined;
+  const withSky = runVariant(prepared, variant, ref, { thermal, withoutSun: true, uncapped: true, withoutLamps: true });
   const short = result.unmetHeatWh > 0;
-  const uncappedKWh = short
-    ? runVariant(prepared, variant, ref, { thermal, uncapped: true }).result.totalHeatWh / 1000
-    : result.totalHeatWh / 1000;
+  const uncappedKWh =
+    short || hasLamps
+      ? runVariant(prepared, variant, ref, { thermal, uncapped: true }).result.totalHeatWh / 1000
+      : result.totalHeatWh / 1000;
+  const withSunKWh = hasLamps
+    ? runVariant(prepared, variant, ref, { thermal, uncapped: true, withoutLamps: true }).result.totalHeatWh / 1000
+    : uncappedKWh;
   const energies = [
     degreeDayKWh,
     hourlyNoSunNight.result.totalHeatWh / 1000,
     withDaySetpoint.result.totalHeatWh / 1000,
     withCurtain.result.totalHeatWh / 1000,
     withSky.result.totalHeatWh / 1000,
-    uncappedKWh,
+    withSunKWh,
   ];
   const labels: Array<[DegreeDayStep['key'], string]> = [
     ['degree-day', 'Degree-day method: daily mean temperatures, night setpoint all day, curtain open, no sun'],
@@ -71,6 +79,10 @@ export function degreeDayCrossCheck(
     ['sky', 'Long-wave radiation to the night sky (through the roof and from the coverings)'],
     ['sun', 'Sunlight through the roof offsets heating by day'],
   ];
+  if (hasLamps) {
+    energies.push(uncappedKWh);
+    labels.push(['lamps', 'Heat from the supplemental lamps in the hours they run']);
+  }
   if (short) {
     energies.push(result.totalHeatWh / 1000);
     labels.push(['heater-capacity', 'Heat the installed heaters cannot deliver in the coldest hours']);
@@ -187,6 +199,13 @@ function explainDifference(
   lines.push(
     `Sunlight through the roof covers part of the daytime loss: ${percentOf(sun.changeKWh, base)}. The degree-day method leaves the sun out, which is why it usually reads high for greenhouses.`,
   );
+  const lamps = steps.find((step) => step.key === 'lamps');
+  if (lamps) {
+    lines.push(
+      `Heat from the supplemental lamps, in the hours they run, covers part of the loss: ${percentOf(lamps.changeKWh, base)}. ` +
+        'The degree-day method knows nothing of them.',
+    );
+  }
   if (result.unmetHeatWh > 0) {
     lines.push(
       `The degree-day figure assumes the heaters deliver whatever the house needs. The installed heaters (${quantityToken('power', variant.heaterOutputW)}) ` +

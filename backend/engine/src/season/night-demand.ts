@@ -21,6 +21,8 @@ import { SunCache } from './sun-hours';
  * S · D the loss to the night sky as in the season (season-simulation.ts),
  * P the installed heater output: an hour that needs more than P is one the heaters cannot hold.
  * Outdoor temperature comes from the climate's daily curve (or logged readings) at mid-hour.
+ * Supplemental lamps are left out, as on the design night: the figure is the heat the heaters must
+ * be able to give that night if the lamps are off.
  */
 export interface NightDemandInput extends Omit<EstimateSeasonInput, 'season' | 'calendar'> {
   /** 'YYYY-MM-DD' of the evening the night begins */

@@ -12,6 +12,8 @@ import { buildSeasonHours, isLoggedTemperatures, type LoggedTemperatures, type S
 import { simulateSeason, type SeasonHours, type SimulationParameters } from './season-simulation';
 import { SunCache, type SunSite } from './sun-hours';
 import { shadeTransmittanceByMonth, validateShadeCloth } from '../solar/shade-cloth';
+import { validateLamps } from '../lamps/lamps';
+import { seasonLampSchedule, type SeasonLampSchedule } from './season-lamps';
 import type {
   EstimateSeasonInput,
   FuelAmount,
@@ -112,6 +114,7 @@ export function prepareSeason(
   const site = validateSite(input.site);
   validateHouseSetpoints(input.house);
   validateShadeCloth(input.house);
+  validateLamps(input.house.lamps, 'house.lamps', ref);
   const fuel = validateFuelPrice(input.fuel, ref);
   validateHeaterEfficiency(input.heaterEfficiency);
   requireHhvEfficiency('heaterEfficiency', input.heaterEfficiency, fuel);
@@ -213,6 +216,8 @@ export interface VariantOptions {
   thermal?: HouseThermal;
   /** deliver whatever the house needs, ignoring the heaters' output (degree-day comparison steps) */
   uncapped?: boolean;
+  /** leave the lamps' heat out (degree-day comparison steps) */
+  withoutLamps?: boolean;
   /** leave out the radiation to the night sky (degree-day comparison steps) */
   withoutSky?: boolean;
 }
@@ -223,7 +228,7 @@ export function variantParameters(
   variant: SeasonVariant,
   ref: ReferenceData,
   options: VariantOptions = {},
-): { thermal: HouseThermal; parameters: SimulationParameters } {
+): { thermal: HouseThermal; parameters: SimulationParameters; lamps: SeasonLampSchedule | null } {
   const thermal =
     options.thermal ??
     scaledThermal(houseThermal(variant.house, prepared.input.site.elevationM, ref), prepared.input.heatLossFactor ?? 1);
@@ -235,8 +240,15 @@ export function variantParameters(
     options.nightSetpointLowerK ?? 0,
   );
   restrictToSeason(prepared.hours, variant.season, daySetpointC, nightSetpointC);
+  const lamps = seasonLampSchedule(
+    prepared.hours,
+    variant.house.lamps,
+    thermal.geometry.floorAreaM2,
+    (day) => daySetpointC[day] === daySetpointC[day],
+  );
   return {
     thermal,
+    lamps,
     parameters: {
       uaDayWPerK: thermal.uaOpenWPerK,
       uaNightWPerK: options.curtainOpen ? thermal.uaOpenWPerK : thermal.uaClosedWPerK,
@@ -252,6 +264,7 @@ export function variantParameters(
       daySetpointC: options.nightSetpointAllDay ? nightSetpointC : daySetpointC,
       nightSetpointC,
       heaterOutputW: options.uncapped ? Infinity : variant.heaterOutputW,
+      lamps: lamps && !options.withoutLamps ? lamps : null,
     },
   };
 }
@@ -280,8 +293,8 @@ export function runVariant(
   ref: ReferenceData,
   options: VariantOptions = {},
 ): VariantRun {
-  const { thermal, parameters } = variantParameters(prepared, variant, ref, options);
-  return { thermal, parameters, result: simulateSeason(prepared.hours, parameters) };
+  const { thermal, parameters, lamps } = variantParameters(prepared, variant, ref, options);
+  return { thermal, parameters, lamps, result: simulateSeason(prepared.hours, parameters) };
 }
 
 export function fuelAmount(heatKWh: number, variant: SeasonVariant): FuelAmount {

@@ -1,4 +1,4 @@
-import type { Confidence } from '../vocabulary';
+import { quantityToken, type Confidence } from '../vocabulary';
 import { referenceRow, type ReferenceData, type ReferenceRow } from '../reference-data.types';
 import { PEAK_ROW_ID, peakHoursAfterSolarNoon } from '../climate/daily-temperature-curve';
 import { DEFAULT_CLEARNESS_ROW_ID, type SiteClimate } from '../climate/site-climate';
@@ -8,6 +8,14 @@ import { priceUnitLabel } from './fuel';
 import type { HouseThermal } from './house-heat-loss';
 import { isLoggedTemperatures, type LoggedTemperatures } from './season-hours';
 import type { Assumption, PreparedSeason, SeasonVariant } from './season-types';
+import {
+  LAMP_HEAT_DEFAULT_ROW_ID,
+  LAMP_SCHEDULE_ROW_ID,
+  lampMethodRow,
+  lampPower,
+  lampsInUse,
+  namedLampType,
+} from '../lamps/lamps';
 
 /** The assumptions behind a season estimate, each with its source and confidence. */
 
@@ -204,6 +212,7 @@ export function seasonAssumptions(
     confidence: 'user-entered',
     overridden: true,
   });
+  list.push(...lampAssumptions(variant, thermal, ref));
   const baseRow = referenceRow(ref, 'degree-days', 'greenhouse-base-night-setpoint');
   if (baseRow)
     list.push(rowAssumption('degree-day-base', 'Degree-day base: the night setpoint', 'night setpoint', '°C', baseRow));
@@ -219,6 +228,69 @@ export function seasonAssumptions(
   list.push({
     key: 'no-heat-storage',
     label: 'Each hour balances on its own: heat stored in soil, structure and crop is not modelled',
+    value: 1,
+    unit: 'h time step',
+    source: 'method',
+    confidence: 'common-practice',
+    overridden: false,
+  });
+  return list;
+}
+
+/** The lamps' input, their heat share and when they run, each with where it came from. */
+function lampAssumptions(variant: SeasonVariant, thermal: HouseThermal, ref: ReferenceData): Assumption[] {
+  const lamps = variant.house.lamps;
+  if (!lamps) return [];
+  const user = (key: string, label: string, value: number | string, unit: string): Assumption => ({
+    key,
+    label,
+    value,
+    unit,
+    source: 'entered for this house',
+    confidence: 'user-entered',
+    overridden: true,
+  });
+  const type = namedLampType(lamps, ref);
+  const defaultRow = type ?? lampMethodRow(ref, LAMP_HEAT_DEFAULT_ROW_ID);
+  const defaultShare = typeof defaultRow.heatToHouseFraction === 'number' ? defaultRow.heatToHouseFraction : null;
+  const power = lampPower(lamps, thermal.geometry.floorAreaM2);
+  const list: Assumption[] = [
+    user(
+      'lamps.power-density',
+      type
+        ? `Supplemental lamps (${type.label ?? type.id}): electrical input per floor area`
+        : 'Supplemental lamps: electrical input per floor area',
+      lamps.powerDensityWPerM2,
+      'W/m²',
+    ),
+    user(
+      'lamps.hours-per-day',
+      'Hours the lamps run per day, January to December (heated days only)',
+      lamps.hoursPerDayByMonth.join(' '),
+      'h',
+    ),
+    defaultShare !== null && Math.abs(defaultShare - lamps.heatToHouseFraction) < 1e-9
+      ? rowAssumption(
+          'lamps.heat-to-house',
+          `Share of the lamps' input that heats the house (${quantityToken('power', power.heatW)} of ${quantityToken('power', power.electricW)} while they run)`,
+          lamps.heatToHouseFraction,
+          '–',
+          defaultRow,
+        )
+      : user(
+          'lamps.heat-to-house',
+          `Share of the lamps' input that heats the house (${quantityToken('power', power.heatW)} of ${quantityToken('power', power.electricW)} while they run)`,
+          lamps.heatToHouseFraction,
+          '–',
+        ),
+  ];
+  if (lampsInUse(lamps)) {
+    const schedule = lampMethodRow(ref, LAMP_SCHEDULE_ROW_ID);
+    list.push(rowAssumption('lamps.schedule', schedule.label ?? LAMP_SCHEDULE_ROW_ID, 'ends at sunrise', '', schedule));
+  }
+  list.push({
+    key: 'lamps.surplus',
+    label: "Lamp heat counts only up to the hour's heat loss; what is left over is vented, not stored",
     value: 1,
     unit: 'h time step',
     source: 'method',

@@ -134,6 +134,12 @@ export function buildSeasonHours(input: BuildSeasonHoursInput, ref: ReferenceDat
   const irradiance = new Float64Array(hourCount);
   const clearnessOfDay = new Float64Array(dayCount);
   const monthSlotOfDay = new Uint8Array(dayCount);
+  const sunriseHourOfDay = new Float64Array(dayCount + 2);
+  const sunsetHourOfDay = new Float64Array(dayCount + 2);
+  lookups.forEach(({ sun, index }, k) => {
+    sunriseHourOfDay[k] = sun.sunriseHour[index];
+    sunsetHourOfDay[k] = sun.sunsetHour[index];
+  });
   const monthOfDay = new Uint8Array(dayCount);
   const months: MonthSlot[] = [];
   for (let day = 0; day < dayCount; day++) {
@@ -183,6 +189,8 @@ export function buildSeasonHours(input: BuildSeasonHoursInput, ref: ReferenceDat
     hourCount,
     outdoorC,
     dayFraction,
+    sunriseHourOfDay,
+    sunsetHourOfDay,
     clearSkyGlobalHorizontalWPerM2: irradiance,
     clearnessOfDay,
     monthSlotOfDay,

@@ -17,6 +17,8 @@ function oneDay(irradianceWPerM2: number): SeasonHours {
     hourCount: 24,
     outdoorC: new Float64Array(24).fill(0),
     dayFraction,
+    sunriseHourOfDay: new Float64Array([7.5, 7.5, 7.5]),
+    sunsetHourOfDay: new Float64Array([16, 16, 16]),
     clearSkyGlobalHorizontalWPerM2: irradiance,
     clearnessOfDay: new Float64Array([0.5]),
     monthSlotOfDay: new Uint8Array([0]),

@@ -12,6 +12,10 @@
  *            coupling to it, m² (heating/sky-radiation.ts skyCoupling: crop through the roof, curtain
  *            drawn if the house has one, and the coverings' outer surfaces)
  *   heat = f · q_day + (1 − f) · q_night (W, average over the hour)
+ * Lamps (when the house has them) add their heat P_lamp in the share of each part of the hour they
+ * run (season-lamps.ts): there q_lit = max(0, q − P_lamp), never below zero; lamp heat beyond the
+ * hour's loss is vented, not stored. What the lamps save is the heat the heaters then do not
+ * deliver: Σ lit share × (min(q, P) − min(q_lit, P)).
  * The heaters deliver at most their installed output P: each part of the hour gets min(q, P);
  * what they cannot deliver is unmet heat (the house falls below its setpoint), and an hour in
  * which either part needs more than P counts as an hour below the setpoint. Fuel follows the
@@ -42,6 +46,12 @@ export interface SeasonHours {
   outdoorC: Float64Array;
   /** share of each hour between sunrise and sunset, 0–1 */
   dayFraction: Float64Array;
+  /**
+   * sunrise and sunset of each day and its two neighbours, hours after that day's local midnight
+   * (index k + 1 for day k, k = −1 … dayCount; sunset may pass 24)
+   */
+  sunriseHourOfDay: Float64Array;
+  sunsetHourOfDay: Float64Array;
   /** clear-sky global horizontal irradiance per hour, W/m² */
   clearSkyGlobalHorizontalWPerM2: Float64Array;
   /** sky clearness of each day (its month's value), 0–1 */
@@ -78,6 +88,16 @@ export interface SimulationParameters {
   nightSetpointC: Float64Array;
   /** installed heater output, W; Infinity = uncapped (deliver whatever the house needs) */
   heaterOutputW: number;
+  /** the lamps' heat and when they run; null or absent without lamps */
+  lamps?: SimulationLamps | null;
+}
+
+export interface SimulationLamps {
+  /** heat the lamps give the house while they run, W */
+  heatW: number;
+  /** per hour, share of the hour they run while the sun is up / down */
+  onWhileSunUp: Float64Array;
+  onWhileSunDown: Float64Array;
 }
 
 export interface SimulationResult {
@@ -105,6 +125,10 @@ export interface SimulationResult {
   skyWh: number;
   /** heat the sun supplied that the heater would otherwise have had to, Wh */
   solarOffsetWh: number;
+  /** heat the heaters did not deliver because the lamps gave it, Wh (0 without lamps) */
+  lampSavedHeatWh: number;
+  /** the same per month slot, Wh */
+  monthlyLampSavedHeatWh: Float64Array;
   heatingHours: number;
   /** highest hourly-average heat demand (before any heater limit), W */
   peakW: number;
@@ -119,6 +143,7 @@ export function simulateSeason(hours: SeasonHours, parameters: SimulationParamet
   const monthlyPeakW = new Float64Array(monthCount);
   const monthlyUnmetHeatWh = new Float64Array(monthCount);
   const monthlyHoursBelowSetpoint = new Uint32Array(monthCount);
+  const monthlyLampSavedHeatWh = new Float64Array(monthCount);
   const outdoorC = hours.outdoorC;
   const dayFraction = hours.dayFraction;
   const irradiance = hours.clearSkyGlobalHorizontalWPerM2;
@@ -130,6 +155,8 @@ export function simulateSeason(hours: SeasonHours, parameters: SimulationParamet
     const shade = parameters.solarShadeByMonth?.[month - 1] ?? 1;
     return Math.min(1, Math.max(0, shade));
   });
+  const lamps = parameters.lamps && parameters.lamps.heatW > 0 ? parameters.lamps : null;
+  const lampW = lamps ? lamps.heatW : 0;
 
   let totalHeatWh = 0;
   let unmetHeatWh = 0;
@@ -139,6 +166,7 @@ export function simulateSeason(hours: SeasonHours, parameters: SimulationParamet
   let nightDegreeHoursKh = 0;
   let skyWh = 0;
   let solarOffsetWh = 0;
+  let lampSavedHeatWh = 0;
   let heatingHours = 0;
   let peakW = 0;
   let peakHourIndex = -1;
@@ -153,6 +181,7 @@ export function simulateSeason(hours: SeasonHours, parameters: SimulationParamet
     let monthUnmetWh = 0;
     let monthHoursBelow = 0;
     let monthHours = 0;
+    let monthLampSavedWh = 0;
     let monthPeak = monthlyPeakW[slot];
     const firstHour = day * 24;
     const lastHour = firstHour + 24;
@@ -170,12 +199,23 @@ export function simulateSeason(hours: SeasonHours, parameters: SimulationParamet
           const gainW = gainPerIrradiance * irradiance[hour];
           if (lossW > gainW) {
             const needW = lossW - gainW;
-            demandW = share * needW;
+            // the lit part of the day share needs what the lamps leave
+            const lit = lamps ? lamps.onWhileSunUp[hour] : 0;
+            const dark = share - lit;
+            demandW += dark * needW;
             if (needW > capW) {
-              deliveredW = share * capW;
-              short = true;
+              deliveredW += dark * capW;
+              if (dark > 0) short = true;
             } else {
-              deliveredW = demandW;
+              deliveredW += dark * needW;
+            }
+            if (lit > 0) {
+              const litNeedW = needW > lampW ? needW - lampW : 0;
+              const litDeliveredW = litNeedW > capW ? capW : litNeedW;
+              if (litNeedW > capW) short = true;
+              demandW += lit * litNeedW;
+              deliveredW += lit * litDeliveredW;
+              monthLampSavedWh += lit * ((needW > capW ? capW : needW) - litDeliveredW);
             }
             solarOffsetWh += share * gainW;
           } else {
@@ -189,13 +229,23 @@ export function simulateSeason(hours: SeasonHours, parameters: SimulationParamet
         if (lossW > 0) {
           nightDegreeHoursKh += (1 - share) * (nightC - tOut);
           skyWh += (1 - share) * skyW;
-          const nightDemandW = (1 - share) * lossW;
-          demandW += nightDemandW;
+          const lit = lamps ? lamps.onWhileSunDown[hour] : 0;
+          const dark = 1 - share - lit;
+          let nightDemandW = dark * lossW;
           let nightW = nightDemandW;
           if (lossW > capW) {
-            nightW = (1 - share) * capW;
-            short = true;
+            nightW = dark * capW;
+            if (dark > 0) short = true;
           }
+          if (lit > 0) {
+            const litNeedW = lossW > lampW ? lossW - lampW : 0;
+            const litDeliveredW = litNeedW > capW ? capW : litNeedW;
+            if (litNeedW > capW) short = true;
+            nightDemandW += lit * litNeedW;
+            nightW += lit * litDeliveredW;
+            monthLampSavedWh += lit * ((lossW > capW ? capW : lossW) - litDeliveredW);
+          }
+          demandW += nightDemandW;
           deliveredW += nightW;
           nightHeatWh += nightW;
         }
@@ -219,10 +269,12 @@ export function simulateSeason(hours: SeasonHours, parameters: SimulationParamet
     monthlyPeakW[slot] = monthPeak;
     monthlyUnmetHeatWh[slot] += monthUnmetWh;
     monthlyHoursBelowSetpoint[slot] += monthHoursBelow;
+    monthlyLampSavedHeatWh[slot] += monthLampSavedWh;
     totalHeatWh += monthWh;
     unmetHeatWh += monthUnmetWh;
     hoursBelowSetpoint += monthHoursBelow;
     heatingHours += monthHours;
+    lampSavedHeatWh += monthLampSavedWh;
   }
 
   return {
@@ -239,6 +291,8 @@ export function simulateSeason(hours: SeasonHours, parameters: SimulationParamet
     nightDegreeHoursKh,
     skyWh,
     solarOffsetWh,
+    lampSavedHeatWh,
+    monthlyLampSavedHeatWh,
     heatingHours,
     peakW,
     peakHourIndex,

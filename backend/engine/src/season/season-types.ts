@@ -8,6 +8,7 @@ import type { HouseThermal } from './house-heat-loss';
 import type { ProductionCalendar } from './production-calendar';
 import type { SeasonRange, TemperatureReading } from './season-hours';
 import type { SeasonHours, SimulationParameters, SimulationResult } from './season-simulation';
+import type { SeasonLampSchedule } from './season-lamps';
 
 /** The season estimate's input, its result, and the prepared season the measures share. */
 // ---------------------------------------------------------------------------------------------
@@ -97,10 +98,41 @@ export interface SeasonMonth extends FuelAmount {
   unmetHeatKWh: number;
   /** hours in which the heaters could not hold the setpoint */
   hoursBelowSetpoint: number;
+  /** electricity the lamps use in the month, kWh (0 without lamps) */
+  lampElectricityKWh: number;
+  /** the part of it that ends as heat inside the house, kWh */
+  lampHeatKWh: number;
+  /** heat the heaters did not have to deliver because the lamps gave it, kWh */
+  lampHeatSavedKWh: number;
+}
+
+/** What the house's supplemental lamps do over the season. */
+export interface SeasonLamps {
+  lampTypeId: string | null;
+  /** the named lamp type's label, null when none is named */
+  lampTypeLabel: string | null;
+  powerDensityWPerM2: number;
+  /** January to December */
+  hoursPerDayByMonth: number[];
+  heatToHouseFraction: number;
+  /** electrical input of all the lamps while they run, W */
+  electricW: number;
+  /** heat they give the house while they run, W */
+  heatW: number;
+  /** electricity the lamps add over the season (heated days only), kWh */
+  electricityKWh: number;
+  /** the part of it that ends as heat inside the house, kWh */
+  heatToHouseKWh: number;
+  /** heat the heaters did not deliver because the lamps gave it, kWh (≤ heatToHouseKWh) */
+  heatSavedKWh: number;
+  /** the fuel (and money, with a price) that heat would have taken */
+  fuelSaved: FuelAmount;
+  /** heatSavedKWh ÷ heatToHouseKWh: the rest came when the house needed no heat (0 when the lamps never ran) */
+  usefulShareOfHeat: number;
 }
 
 export interface DegreeDayStep {
-  key: 'degree-day' | 'hourly-curve' | 'day-setpoint' | 'curtain' | 'sky' | 'sun' | 'heater-capacity';
+  key: 'degree-day' | 'hourly-curve' | 'day-setpoint' | 'curtain' | 'sky' | 'sun' | 'lamps' | 'heater-capacity';
   label: string;
   energyKWh: number;
   /** change from the previous step, kWh */
@@ -194,6 +226,8 @@ export interface SeasonEstimate {
   nightShareOfHeat: number;
   /** heat the sun supplied in place of the heater, kWh */
   solarOffsetKWh: number;
+  /** the supplemental lamps' electricity, heat and the fuel their heat saves; null without lamps */
+  lamps: SeasonLamps | null;
   /** the season's heat by part of the house, the night sky as its own part */
   lossBreakdown: SeasonLossBreakdown;
   degreeDays: DegreeDayCrossCheck;
@@ -238,5 +272,7 @@ export interface SeasonVariant {
 export interface VariantRun {
   thermal: HouseThermal;
   parameters: SimulationParameters;
+  /** when the lamps run and what they use (null without lamps), even where the run left their heat out */
+  lamps: SeasonLampSchedule | null;
   result: SimulationResult;
 }

@@ -34,7 +34,16 @@ export const BOUNDS = {
   shadeClothTransmittance: { min: 0, max: 1 },
   /** calendar months a shade cloth may be in place: 1 = January … 12 = December */
   shadeClothMonth: { min: 1, max: 12 },
+  /** electrical input of supplemental lamps per m² of floor (HPS about 70, LED about 45 for 100 µmol/(m²·s)) */
+  lampPowerDensityWPerM2: { min: 1, max: 200 },
+  /** each of the 12 monthly values */
+  lampHoursPerDay: { min: 0, max: 24 },
+  /** share of the lamps' input that heats the house; below one half would mean most of the light left the house */
+  lampHeatToHouseFraction: { min: 0.5, max: 1 },
 } as const;
+
+/** Lamp hours are given for each month, January to December. */
+export const LAMP_MONTHS = 12;
 
 export type BoundName = keyof typeof BOUNDS;
 

@@ -15,6 +15,19 @@ describe('what an alternative changes, in words', () => {
     expect(alternativeChangesSentence([], false)).toBe('No field changes');
   });
 
+  it('names lamps: a whole set added reads "supplemental lamps", one changed value is named', () => {
+    const added = [
+      'lamps.lampTypeId',
+      'lamps.powerDensityWPerM2',
+      'lamps.hoursPerDayByMonth',
+      'lamps.heatToHouseFraction',
+    ];
+    expect(changesSentence(added)).toBe('Changes supplemental lamps');
+    expect(alternativeChangesSentence(['lamps'], false)).toBe('Changes supplemental lamps');
+    expect(changesSentence(['lamps.powerDensityWPerM2', 'curtainId'])).toBe('Changes lamp power, curtain');
+    expect(changesSentence(['lamps.hoursPerDayByMonth'])).toBe('Changes lamp hours');
+  });
+
   it('spells out a field it has no words for, without its unit suffix', () => {
     expect(changedFieldWords('someNewLengthM')).toBe('some new length');
   });

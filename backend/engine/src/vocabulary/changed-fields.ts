@@ -38,7 +38,15 @@ const FIELD_WORDS: Record<string, string> = {
   'setpoints.nightHeatingC': 'night heating setpoint',
   'setpoints.coolingC': 'cooling setpoint',
   calendar: 'production calendar',
+  lamps: 'supplemental lamps',
+  'lamps.lampTypeId': 'lamp type',
+  'lamps.powerDensityWPerM2': 'lamp power',
+  'lamps.hoursPerDayByMonth': 'lamp hours',
+  'lamps.heatToHouseFraction': 'share of lamp heat kept in the house',
 };
+
+/** The lamp values an added set of lamps always states: all of them changed reads "supplemental lamps". */
+const LAMP_VALUE_PATHS = ['lamps.powerDensityWPerM2', 'lamps.hoursPerDayByMonth', 'lamps.heatToHouseFraction'];
 
 /** "coverings.roof" → "roof covering"; an unknown path is spelt out word by word, units dropped. */
 export function changedFieldWords(path: string): string {
@@ -55,10 +63,16 @@ export function changedFieldWords(path: string): string {
 /** Words that say less than another word in the same sentence: the cloth's months when the cloth itself changes. */
 const COVERED_BY: Record<string, string> = { 'months the shade cloth is up': 'shade cloth' };
 
-/** "Changes roof covering, sidewall covering", each field once. */
+/**
+ * "Changes roof covering, sidewall covering", each field once. Lamps added (or replaced whole)
+ * read as "supplemental lamps" rather than each of their values; the cloth's months are not named
+ * beside the cloth itself.
+ */
 export function changesSentence(paths: string[]): string {
   if (paths.length === 0) return 'No field changes';
-  const words = new Set(paths.map(changedFieldWords));
+  const wholeLamps = LAMP_VALUE_PATHS.every((path) => paths.includes(path));
+  const named = wholeLamps ? paths.map((path) => (path.startsWith('lamps.') ? 'lamps' : path)) : paths;
+  const words = new Set(named.map(changedFieldWords));
   for (const [narrow, wide] of Object.entries(COVERED_BY)) if (words.has(wide)) words.delete(narrow);
   return `Changes ${[...words].join(', ')}`;
 }

@@ -72,6 +72,8 @@ export const DISPLAY_UNITS = {
   airFlowPerFloorArea: { si: unit('m³/(s·m²)', 1, 4), us: unit('cfm/ft²', M3_PER_S_M2_PER_CFM_PER_FT2, 1) },
   energy: { si: unit('kWh', JOULES_PER_KWH, 0), us: unit('MMBtu', JOULES_PER_MMBTU, 2) },
   irradiance: { si: unit('W/m²', 1, 0), us: unit('W/m²', 1, 0) },
+  // electrical input of lamps per floor area: W/m² / W/ft² (1 W/ft² = 10.764 W/m²)
+  powerPerFloorArea: { si: unit('W/m²', 1, 1), us: unit('W/ft²', 1 / SQUARE_METRES_PER_SQUARE_FOOT, 2) },
   heatContentPerVolume: {
     si: unit('MJ/m³', 1e6, 1),
     us: unit('Btu/ft³', JOULES_PER_BTU / CUBIC_METRES_PER_CUBIC_FOOT, 0),

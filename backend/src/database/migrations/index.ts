@@ -12,6 +12,7 @@ import * as farmCurrency from './0011-farm-currency';
 import * as fuelRecordsCalibrations from './0012-fuel-records-calibrations';
 import * as houseMeasurePlans from './0013-house-measure-plans';
 import * as houseShadeCloth from './0014-house-shade-cloth';
+import * as houseLamps from './0015-house-lamps';
 
 /**
  * Every schema change, in order. Add a file `NNNN-what-it-does.ts` exporting up/down and list it
@@ -32,4 +33,5 @@ export const MIGRATIONS = [
   { name: '0012-fuel-records-calibrations', ...fuelRecordsCalibrations },
   { name: '0013-house-measure-plans', ...houseMeasurePlans },
   { name: '0014-house-shade-cloth', ...houseShadeCloth },
+  { name: '0015-house-lamps', ...houseLamps },
 ];

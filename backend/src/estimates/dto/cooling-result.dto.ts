@@ -1,6 +1,6 @@
 import { ApiProperty } from '@nestjs/swagger';
-import type { Confidence } from '@thermbay/engine/vocabulary';
-import { CONFIDENCE_LEVELS } from '@thermbay/engine/vocabulary';
+import type { AssumptionConfidence } from '@thermbay/engine/vocabulary';
+import { ASSUMPTION_CONFIDENCES } from '@thermbay/engine/vocabulary';
 import { CoolingConditionsDto, CoolingSiteDto } from './cooling-request.dto';
 import { PROSE_TOKENS_NOTE } from '@thermbay/engine/vocabulary';
 
@@ -28,7 +28,19 @@ export class CapacityFactorsDto {
 export class CoolingCapacityDto {
   @ApiProperty({ description: 'm³/s per m² of floor' }) baseRateM3PerSM2: number;
   @ApiProperty({ type: CapacityFactorsDto }) factors: CapacityFactorsDto;
-  @ApiProperty({ description: 'm³/s' }) requiredFlowM3PerS: number;
+  @ApiProperty({ description: 'base rate × applied factor × floor area: the floor-area method alone, m³/s' })
+  floorAreaMethodFlowM3PerS: number;
+  @ApiProperty({ minimum: 0, description: 'flow the lamps’ heat adds over the floor-area method, m³/s' })
+  lampFlowM3PerS: number;
+  @ApiProperty({
+    type: Number,
+    nullable: true,
+    description:
+      'the design-day solar hour that sets the requirement with the lamps; null when the floor-area method does',
+  })
+  lampGoverningHour: number | null;
+  @ApiProperty({ description: 'the larger of the floor-area method and the lit hours’ need, m³/s' })
+  requiredFlowM3PerS: number;
   @ApiProperty({ description: 'm³/s' }) installedFlowM3PerS: number;
   @ApiProperty({ enum: ['adequate', 'short', 'no-fans'] }) verdict: 'adequate' | 'short' | 'no-fans';
   @ApiProperty({
@@ -77,6 +89,7 @@ export class DesignDayHourDto {
   @ApiProperty({ description: 'degrees above the horizon (negative at night)' }) sunAltitudeDeg: number;
   @ApiProperty({ description: 'W/m²' }) globalHorizontalWPerM2: number;
   @ApiProperty({ description: 'W' }) solarGainW: number;
+  @ApiProperty({ description: 'heat of supplemental lamps running this hour, W (0 when off)' }) lampHeatW: number;
   @ApiProperty({ description: '°C' }) indoorWithFansC: number;
   @ApiProperty({ minimum: 0, maximum: 1 }) fanFraction: number;
   @ApiProperty({ type: Number, nullable: true, description: '°C; null without pads' }) indoorWithPadsC: number | null;
@@ -133,13 +146,28 @@ export class WinterVentilationDto {
   houseHeatLossW: number;
 }
 
+export class CoolingLampsDto {
+  @ApiProperty({ description: 'electrical input of all the lamps while they run, W' }) electricW: number;
+  @ApiProperty({ description: 'heat they give the house while they run, W' }) heatW: number;
+  @ApiProperty({ description: "hours they run on the design day (the design month's value)" }) hoursOn: number;
+  @ApiProperty({ description: 'sunrise in solar hours, where the block of lamp hours ends' }) sunriseSolarHour: number;
+  @ApiProperty({ minimum: 0, description: 'fan flow the lamps add to the requirement, m³/s' }) addedFlowM3PerS: number;
+  @ApiProperty({
+    type: Number,
+    nullable: true,
+    description: 'the solar hour that sets the requirement with the lamps; null when the floor-area method does',
+  })
+  governingHour: number | null;
+}
+
 export class CoolingAssumptionDto {
   @ApiProperty() key: string;
   @ApiProperty({ description: PROSE_TOKENS_NOTE }) label: string;
   @ApiProperty({ oneOf: [{ type: 'number' }, { type: 'string' }] }) value: number | string;
   @ApiProperty() unit: string;
   @ApiProperty() source: string;
-  @ApiProperty({ enum: CONFIDENCE_LEVELS }) confidence: Confidence;
+  @ApiProperty({ enum: ASSUMPTION_CONFIDENCES, description: "'user-entered' for what the house itself states" })
+  confidence: AssumptionConfidence;
   @ApiProperty({ description: 'true when the request replaced the default' }) overridden: boolean;
 }
 
@@ -155,6 +183,12 @@ export class CoolingEstimateDto {
   pads: PadSizingDto | null;
   @ApiProperty({ type: StagingDto }) staging: StagingDto;
   @ApiProperty({ type: WinterVentilationDto }) winterVentilation: WinterVentilationDto;
+  @ApiProperty({
+    type: CoolingLampsDto,
+    nullable: true,
+    description: 'the supplemental lamps on the design day; null without lamps or when they do not run that month',
+  })
+  lamps: CoolingLampsDto | null;
   @ApiProperty({ type: CoolingAssumptionDto, isArray: true }) assumptions: CoolingAssumptionDto[];
   @ApiProperty({
     type: String,

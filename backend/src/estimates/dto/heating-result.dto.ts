@@ -123,6 +123,17 @@ export class CondensationDto {
   @ApiProperty({ type: CondensationSurfaceDto, isArray: true }) surfaces: CondensationSurfaceDto[];
 }
 
+export class HeatingLampsDto {
+  @ApiProperty({ description: 'electrical input of all the lamps while they run, W' }) electricW: number;
+  @ApiProperty({ description: 'heat they give the house while they run, W' }) heatW: number;
+  @ApiProperty({
+    enum: [0],
+    description: 'heat credited against the design heat loss and heater sizing: always 0 (lamps may be off that night)',
+  })
+  creditedW: 0;
+  @ApiProperty({ minimum: 0, description: 'lamp heat ÷ design heat loss, for the reader' }) shareOfDesignLoss: number;
+}
+
 export class HeatingAssumptionDto {
   @ApiProperty() key: string;
   @ApiProperty({ description: PROSE_TOKENS_NOTE }) label: string;
@@ -139,6 +150,12 @@ export class HeatingEstimateDto {
   @ApiProperty({ type: HeatLossBreakdownDto }) heatLoss: HeatLossBreakdownDto;
   @ApiProperty({ type: HeaterSizingDto }) heater: HeaterSizingDto;
   @ApiProperty({ type: CondensationDto }) condensation: CondensationDto;
+  @ApiProperty({
+    type: HeatingLampsDto,
+    nullable: true,
+    description: 'the supplemental lamps, shown but never credited on the design night; null without lamps',
+  })
+  lamps: HeatingLampsDto | null;
   @ApiProperty({ type: HeatingAssumptionDto, isArray: true }) assumptions: HeatingAssumptionDto[];
   @ApiProperty({
     type: String,

@@ -4,6 +4,7 @@ import { Type } from 'class-transformer';
 import {
   ArrayMaxSize,
   ArrayUnique,
+  ArrayMinSize,
   IsArray,
   IsBoolean,
   IsIn,
@@ -18,7 +19,7 @@ import {
   Min,
   ValidateNested,
 } from 'class-validator';
-import { BOUNDS } from '@thermbay/engine/vocabulary';
+import { BOUNDS, LAMP_MONTHS } from '@thermbay/engine/vocabulary';
 import { HEATER_TYPES, HOUSE_SHAPES, type HeaterType, type HouseShape } from '@thermbay/engine/vocabulary';
 
 const range = (name: keyof typeof BOUNDS) => ({ minimum: BOUNDS[name].min, maximum: BOUNDS[name].max });
@@ -149,6 +150,49 @@ export class SetpointsDto {
   coolingC: number;
 }
 
+export class LampsDto {
+  @ApiPropertyOptional({
+    nullable: true,
+    type: String,
+    description: "reference-data lamps id of a lamp type (kind 'lamp-type'); null when not stated",
+    example: 'led-horticultural',
+  })
+  @IsOptional()
+  @IsString()
+  @Length(1, 80)
+  lampTypeId?: string | null;
+
+  @ApiProperty({ ...range('lampPowerDensityWPerM2'), description: 'electrical input per m² of floor, W/m²' })
+  @IsNumber()
+  @Min(BOUNDS.lampPowerDensityWPerM2.min)
+  @Max(BOUNDS.lampPowerDensityWPerM2.max)
+  powerDensityWPerM2: number;
+
+  @ApiProperty({
+    type: Number,
+    isArray: true,
+    minItems: LAMP_MONTHS,
+    maxItems: LAMP_MONTHS,
+    description: `hours the lamps run per day, January to December (${LAMP_MONTHS} values, ${BOUNDS.lampHoursPerDay.min}–${BOUNDS.lampHoursPerDay.max})`,
+  })
+  @IsArray()
+  @ArrayMinSize(LAMP_MONTHS)
+  @ArrayMaxSize(LAMP_MONTHS)
+  @IsNumber({}, { each: true })
+  @Min(BOUNDS.lampHoursPerDay.min, { each: true })
+  @Max(BOUNDS.lampHoursPerDay.max, { each: true })
+  hoursPerDayByMonth: number[];
+
+  @ApiProperty({
+    ...range('lampHeatToHouseFraction'),
+    description: 'share of the electrical input that ends as heat inside the house (reference-data lamps offers 0.95)',
+  })
+  @IsNumber()
+  @Min(BOUNDS.lampHeatToHouseFraction.min)
+  @Max(BOUNDS.lampHeatToHouseFraction.max)
+  heatToHouseFraction: number;
+}
+
 /** The physical description of a house, shared by stored houses and the stateless estimate. */
 export class HouseSpecDto {
   @ApiProperty({ enum: HOUSE_SHAPES }) @IsIn(HOUSE_SHAPES) shape: HouseShape;
@@ -257,6 +301,18 @@ export class HouseSpecDto {
   inletAreaM2: number;
 
   @ApiProperty({ type: SetpointsDto }) @IsObject() @ValidateNested() @Type(() => SetpointsDto) setpoints: SetpointsDto;
+
+  @ApiPropertyOptional({
+    type: LampsDto,
+    nullable: true,
+    description:
+      'supplemental lamps: their heat lowers the season heating in the hours they run and adds to the summer fan requirement; never credited in heater sizing. null: none',
+  })
+  @IsOptional()
+  @IsObject()
+  @ValidateNested()
+  @Type(() => LampsDto)
+  lamps?: LampsDto | null;
 }
 
 export class CreateHouseDto extends HouseSpecDto {
@@ -285,6 +341,7 @@ export class HouseDto extends CreateHouseDto {
   @ApiProperty({ description: 'raised by one on every save; send it back in If-Match to update' }) version: number;
   @ApiProperty({ nullable: true, type: Number }) declare kneewallHeightM: number | null;
   @ApiProperty({ nullable: true, type: String }) declare kneewallId: string | null;
+  @ApiProperty({ nullable: true, type: LampsDto }) declare lamps: LampsDto | null;
   @ApiProperty() createdAt: string;
   @ApiProperty() updatedAt: string;
 }

@@ -1,6 +1,6 @@
 import { BelongsTo, Column, DataType, ForeignKey, Model, Table } from 'sequelize-typescript';
 import type { HouseShape, SurfaceGroup } from '@thermbay/engine/vocabulary';
-import type { ExhaustFans, HeaterGroup, Setpoints, ShadeCloth } from '@thermbay/engine/house.types';
+import type { ExhaustFans, HeaterGroup, Lamps, Setpoints, ShadeCloth } from '@thermbay/engine/house.types';
 import { Farm } from '../../farms/models/farm.model';
 
 /** A stored house. Every number is SI; nested groups are JSON columns mapped 1:1 onto HouseSpec. */
@@ -76,6 +76,10 @@ export class House extends Model {
 
   @Column({ type: DataType.JSON, allowNull: false })
   declare setpoints: Setpoints;
+
+  /** supplemental lamps, or null for none (migration 0015) */
+  @Column({ type: DataType.JSON, allowNull: true })
+  declare lamps: Lamps | null;
 
   /** raised by one on every save; a write names the version it was based on (If-Match) */
   @Column({ type: DataType.INTEGER, allowNull: false, defaultValue: 1 })

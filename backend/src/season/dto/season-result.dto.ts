@@ -28,6 +28,7 @@ export const DEGREE_DAY_STEP_KEYS: ReadonlyArray<DegreeDayStep['key']> = [
   'curtain',
   'sky',
   'sun',
+  'lamps',
   'heater-capacity',
 ];
 
@@ -78,6 +79,12 @@ export class SeasonMonthDto extends SeasonFuelAmountDto {
   @ApiProperty({ minimum: 0, description: 'heat the installed heaters could not deliver, kWh' }) unmetHeatKWh: number;
   @ApiProperty({ minimum: 0, description: 'hours in which the heaters could not hold the setpoint' })
   hoursBelowSetpoint: number;
+  @ApiProperty({ minimum: 0, description: 'electricity the supplemental lamps use in the month, kWh (0 without)' })
+  lampElectricityKWh: number;
+  @ApiProperty({ minimum: 0, description: 'the part of it that ends as heat inside the house, kWh' })
+  lampHeatKWh: number;
+  @ApiProperty({ minimum: 0, description: 'heat the heaters did not have to deliver because the lamps gave it, kWh' })
+  lampHeatSavedKWh: number;
 }
 
 export class SeasonTotalDto extends SeasonFuelAmountDto {
@@ -100,6 +107,33 @@ export class SeasonHeaterCapacityDto {
     description: `set when the heaters cannot hold the setpoint in some hour; ${PROSE_TOKENS_NOTE}`,
   })
   caution: string | null;
+}
+
+export class SeasonLampsDto {
+  @ApiProperty({ type: String, nullable: true, description: 'reference-data lamps id' }) lampTypeId: string | null;
+  @ApiProperty({ type: String, nullable: true }) lampTypeLabel: string | null;
+  @ApiProperty({ description: 'W/m² of floor' }) powerDensityWPerM2: number;
+  @ApiProperty({ type: Number, isArray: true, description: 'January to December, h' }) hoursPerDayByMonth: number[];
+  @ApiProperty({ description: 'share of the input that heats the house, 0–1' }) heatToHouseFraction: number;
+  @ApiProperty({ description: 'electrical input of all the lamps while they run, W' }) electricW: number;
+  @ApiProperty({ description: 'heat they give the house while they run, W' }) heatW: number;
+  @ApiProperty({ minimum: 0, description: 'electricity the lamps add over the season (heated days only), kWh' })
+  electricityKWh: number;
+  @ApiProperty({ minimum: 0, description: 'the part of it that ends as heat inside the house, kWh' })
+  heatToHouseKWh: number;
+  @ApiProperty({ minimum: 0, description: 'heat the heaters did not deliver because the lamps gave it, kWh' })
+  heatSavedKWh: number;
+  @ApiProperty({
+    type: SeasonFuelAmountDto,
+    description: 'the fuel (and money, with a price) that heat would have taken',
+  })
+  fuelSaved: SeasonFuelAmountDto;
+  @ApiProperty({
+    minimum: 0,
+    maximum: 1,
+    description: 'heat saved ÷ heat into the house: the rest came when the house needed no heat',
+  })
+  usefulShareOfHeat: number;
 }
 
 export class SeasonPeakDto {
@@ -201,6 +235,12 @@ export class SeasonEstimateDto {
   })
   nightShareOfHeat: number;
   @ApiProperty({ description: 'heat the sun supplied in place of the heater, kWh' }) solarOffsetKWh: number;
+  @ApiProperty({
+    type: SeasonLampsDto,
+    nullable: true,
+    description: "the supplemental lamps' electricity, heat and the fuel their heat saves; null without lamps",
+  })
+  lamps: SeasonLampsDto | null;
   @ApiProperty({
     type: SeasonLossBreakdownDto,
     description: "the season's heat by part of the house, with the night sky as its own part",

@@ -23,6 +23,20 @@ describe('what an alternative changes, in words', () => {
     }
   });
 
+  it('names lamps in plain words: added whole they are "supplemental lamps", one value changed is named', () => {
+    expect(
+      changesSentence([
+        'lamps.lampTypeId',
+        'lamps.powerDensityWPerM2',
+        'lamps.hoursPerDayByMonth',
+        'lamps.heatToHouseFraction',
+      ]),
+    ).toBe('Changes supplemental lamps');
+    expect(changesSentence(['lamps'])).toBe('Changes supplemental lamps');
+    expect(changesSentence(['lamps.powerDensityWPerM2', 'curtainId'])).toBe('Changes lamp power, curtain');
+    expect(changesSentence(['lamps.hoursPerDayByMonth'])).toBe('Changes lamp hours');
+  });
+
   it('spells out a field it has no words for, without its unit suffix, and says when nothing changes', () => {
     expect(changedFieldWords('someNewLengthM')).toBe('some new length');
     expect(changesSentence([])).toBe('No field changes');

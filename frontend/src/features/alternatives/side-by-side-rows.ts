@@ -104,6 +104,8 @@ export function sideBySideRows(data: SideBySide, units: Units): SideBySideRow[] 
   const power = { quantity: 'power', difference: 'power' } as const;
   const temperature = { quantity: 'temperature', difference: 'temperatureDifference' } as const;
   const money = { currency: data.seasonInputsUsed.currency };
+  // lamps bring their electricity and summer heat into the comparison
+  const anyLamps = columns.some((column) => Boolean(column.season?.lamps));
 
   rows.push(
     numericRow('cost', 'Cost', 'Installed cost', columns, (c) => (c.alternativeId ? c.costAmount : null), units, money),
@@ -212,6 +214,19 @@ export function sideBySideRows(data: SideBySide, units: Units): SideBySideRow[] 
         };
       }),
     },
+    ...(anyLamps
+      ? [
+          numericRow(
+            'fan-flow',
+            'Summer',
+            'Required fan flow (lamps included)',
+            columns,
+            (c) => c.cooling?.capacity.requiredFlowM3PerS,
+            units,
+            { quantity: 'airFlow', difference: 'airFlow' },
+          ),
+        ]
+      : []),
     textRow('cooling', 'Summer', 'Fans for summer cooling', columns, (c) =>
       c.cooling
         ? {
@@ -250,6 +265,19 @@ export function sideBySideRows(data: SideBySide, units: Units): SideBySideRow[] 
       }),
     },
     numericRow('season-cost', 'Season', 'Season fuel cost', columns, (c) => c.season?.total.cost, units, money),
+    ...(anyLamps
+      ? [
+          numericRow(
+            'lamp-electricity',
+            'Season',
+            'Lamp electricity (not in the fuel cost)',
+            columns,
+            (c) => (c.season ? (c.season.lamps?.electricityKWh ?? 0) : null),
+            units,
+            { quantity: 'energyKWh', difference: 'energyKWh' },
+          ),
+        ]
+      : []),
     numericRow('saving', 'Season', 'Yearly saving', columns, (c) => c.versusHouse?.yearlySaving, units, money),
     textRow('payback', 'Season', 'Simple payback', columns, (c) => {
       const versus = c.versusHouse;

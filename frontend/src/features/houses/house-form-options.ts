@@ -2,7 +2,7 @@ import type { ReferenceData } from '../../api/types';
 import type { SelectOption } from '../../components/form-fields';
 import { referenceRows } from '../../lib/reference-data';
 import type { Units } from '../../lib/units';
-import type { HeaterFormValues } from './house-form-values';
+import type { HeaterFormValues, LampFormValues } from './house-form-values';
 
 /** The house form's choices, read from the reference tables. */
 
@@ -56,4 +56,39 @@ export function shadeClothChoices(referenceData: ReferenceData): ShadeClothChoic
       label: String(row.label ?? row.id),
       percent: Math.round((row.solarTransmittance as number) * 1000) / 10,
     }));
+}
+
+/** Lamp types (reference-data lamps.json rows of kind 'lamp-type'), with 'Not stated' first. */
+export function lampTypeOptions(referenceData: ReferenceData): SelectOption[] {
+  return [
+    { value: '', label: 'Not stated' },
+    ...referenceRows(referenceData, 'lamps')
+      .filter((row) => row.kind === 'lamp-type')
+      .map((row) => ({ value: row.id, label: row.label ?? row.id })),
+  ];
+}
+
+function lampRow(referenceData: ReferenceData, id: string): Record<string, unknown> | undefined {
+  return referenceRows(referenceData, 'lamps').find((row) => row.id === id);
+}
+
+/** The usual share of a lamp type's input that heats the house (lamps.json), or null. */
+export function typicalLampHeatShareOf(referenceData: ReferenceData, lampTypeId: string): number | null {
+  const row = lampTypeId === '' ? lampRow(referenceData, 'heat-to-house-default') : lampRow(referenceData, lampTypeId);
+  return row && typeof row.heatToHouseFraction === 'number' ? row.heatToHouseFraction : null;
+}
+
+/** What "Add lamps" starts from: the LED row's typical power and heat share, and the starting schedule. */
+export function startingLamps(referenceData: ReferenceData, units: Units): LampFormValues {
+  const led = lampRow(referenceData, 'led-horticultural');
+  const schedule = lampRow(referenceData, 'starting-schedule')?.hoursPerDayByMonth;
+  const hours = Array.isArray(schedule) && schedule.length === 12 ? schedule.map(String) : Array(12).fill('0');
+  const density = typeof led?.typicalPowerDensityWPerM2 === 'number' ? led.typicalPowerDensityWPerM2 : null;
+  const share = typicalLampHeatShareOf(referenceData, led ? 'led-horticultural' : '');
+  return {
+    lampTypeId: led ? 'led-horticultural' : '',
+    powerDensityWPerM2: density === null ? '' : units.toInput('powerPerFloorArea', density),
+    hoursPerDayByMonth: hours,
+    heatToHouseFraction: share === null ? '' : String(Math.round(share * 1000) / 10),
+  };
 }

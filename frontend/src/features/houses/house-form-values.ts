@@ -44,6 +44,27 @@ export interface ShadeClothFormValues {
   months: number[];
 }
 
+/** Supplemental lamps as typed: density in the user's unit, hours per month, heat share in percent. */
+export interface LampFormValues {
+  /** '' = not stated */
+  lampTypeId: string;
+  /** W/m² (SI) or W/ft² (US) */
+  powerDensityWPerM2: string;
+  /** January to December, h */
+  hoursPerDayByMonth: string[];
+  /** percent */
+  heatToHouseFraction: string;
+}
+
+export const MONTH_LABELS = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'];
+
+export const NO_LAMPS: LampFormValues = {
+  lampTypeId: '',
+  powerDensityWPerM2: '',
+  hoursPerDayByMonth: Array.from({ length: 12 }, () => ''),
+  heatToHouseFraction: '',
+};
+
 export interface HouseFormValues {
   name: string;
   notes: string;
@@ -69,6 +90,9 @@ export interface HouseFormValues {
   exhaustFans: { count: string; capacityEachM3PerS: string };
   inletAreaM2: string;
   setpoints: { dayHeatingC: string; nightHeatingC: string; coolingC: string };
+  /** whether the house has supplemental lamps; `lamps` is checked and sent only then */
+  lampsOn: boolean;
+  lamps: LampFormValues;
 }
 
 function firstRowId(referenceData: ReferenceData, table: string, preferredId?: string): string {
@@ -106,6 +130,7 @@ export function newHouseDefaults(referenceData: ReferenceData): HouseInput {
     exhaustFans: { count: 2, capacityEachM3PerS: 4.7 },
     inletAreaM2: 2.4,
     setpoints: { dayHeatingC: 18, nightHeatingC: 15.5, coolingC: 26 },
+    lamps: null,
   };
 }
 
@@ -161,6 +186,15 @@ export function houseToFormValues(house: HouseInput, units: Units): HouseFormVal
       nightHeatingC: t('temperature', house.setpoints.nightHeatingC),
       coolingC: t('temperature', house.setpoints.coolingC),
     },
+    lampsOn: Boolean(house.lamps),
+    lamps: house.lamps
+      ? {
+          lampTypeId: house.lamps.lampTypeId ?? '',
+          powerDensityWPerM2: t('powerPerFloorArea', house.lamps.powerDensityWPerM2),
+          hoursPerDayByMonth: house.lamps.hoursPerDayByMonth.map(String),
+          heatToHouseFraction: pct(house.lamps.heatToHouseFraction),
+        }
+      : NO_LAMPS,
   };
 }
 
@@ -256,6 +290,9 @@ export function formValuesToHouseInput(
       ),
     },
     inletAreaM2: si('area', values.inletAreaM2, initialValues.inletAreaM2, original.inletAreaM2),
+    lamps: values.lampsOn
+      ? lampsInput(values.lamps, initialValues.lampsOn ? initialValues.lamps : null, original.lamps ?? null, units)
+      : null,
     setpoints: {
       dayHeatingC: si(
         'temperature',
@@ -276,6 +313,27 @@ export function formValuesToHouseInput(
         original.setpoints.coolingC,
       ),
     },
+  };
+}
+
+/** The lamps as the API takes them; a number still showing its stored value keeps that exact SI value. */
+function lampsInput(
+  typed: LampFormValues,
+  initial: LampFormValues | null,
+  original: NonNullable<HouseInput['lamps']> | null,
+  units: Units,
+): NonNullable<HouseInput['lamps']> {
+  const untouched = (key: 'powerDensityWPerM2' | 'heatToHouseFraction') =>
+    original !== null && initial !== null && typed[key] === initial[key];
+  return {
+    lampTypeId: typed.lampTypeId === '' ? null : typed.lampTypeId,
+    powerDensityWPerM2: untouched('powerDensityWPerM2')
+      ? original!.powerDensityWPerM2
+      : units.fromDisplay('powerPerFloorArea', Number(typed.powerDensityWPerM2)),
+    hoursPerDayByMonth: typed.hoursPerDayByMonth.map(Number),
+    heatToHouseFraction: untouched('heatToHouseFraction')
+      ? original!.heatToHouseFraction
+      : Number(typed.heatToHouseFraction) / 100,
   };
 }
 
@@ -380,5 +438,14 @@ export function convertFormValues(
     },
     inletAreaM2: convert('area', values.inletAreaM2, previousInitial.inletAreaM2, nextInitial.inletAreaM2),
     setpoints: group('temperature', values.setpoints, previousInitial.setpoints, nextInitial.setpoints),
+    lamps: {
+      ...values.lamps,
+      powerDensityWPerM2: convert(
+        'powerPerFloorArea',
+        values.lamps.powerDensityWPerM2,
+        previousInitial.lamps.powerDensityWPerM2,
+        nextInitial.lamps.powerDensityWPerM2,
+      ),
+    },
   };
 }

@@ -1,4 +1,4 @@
-import { BOUNDS } from '@thermbay/engine/vocabulary';
+import { BOUNDS, LAMP_MONTHS } from '@thermbay/engine/vocabulary';
 import * as yup from 'yup';
 import type { Quantity, Units } from '../../lib/units';
 import { HOUSE_SHAPES } from './house-form-values';
@@ -42,6 +42,29 @@ export function houseFormSchema(units: Units) {
     max: Math.round(BOUNDS.shadeClothTransmittance.max * 100),
   };
   const monthRange = BOUNDS.shadeClothMonth;
+  const lampSharePct = {
+    min: Math.round(BOUNDS.lampHeatToHouseFraction.min * 100),
+    max: Math.round(BOUNDS.lampHeatToHouseFraction.max * 100),
+  };
+  const hoursMessage = rangeMessage('Lamp hours', BOUNDS.lampHoursPerDay, 'h');
+  const lampsSchema = yup.object({
+    lampTypeId: yup.string(),
+    powerDensityWPerM2: measured('Lamp power', 'powerPerFloorArea', BOUNDS.lampPowerDensityWPerM2).required(
+      'Enter the lamps’ power per floor area',
+    ),
+    hoursPerDayByMonth: yup
+      .array(
+        numeric('Lamp hours')
+          .min(BOUNDS.lampHoursPerDay.min, hoursMessage)
+          .max(BOUNDS.lampHoursPerDay.max, hoursMessage)
+          .required('Enter the hours (0 for none)'),
+      )
+      .length(LAMP_MONTHS, `Enter ${LAMP_MONTHS} months of hours`),
+    heatToHouseFraction: numeric('Heat share')
+      .min(lampSharePct.min, rangeMessage('Heat share', lampSharePct, '%'))
+      .max(lampSharePct.max, rangeMessage('Heat share', lampSharePct, '%'))
+      .required('Enter the share of the lamps’ power that heats the house'),
+  });
 
   return yup.object({
     name: yup
@@ -140,6 +163,13 @@ export function houseFormSchema(units: Units) {
       dayHeatingC: measured('Day heating setpoint', 'temperature', BOUNDS.setpointC).required('Enter a setpoint'),
       nightHeatingC: measured('Night heating setpoint', 'temperature', BOUNDS.setpointC).required('Enter a setpoint'),
       coolingC: measured('Cooling setpoint', 'temperature', BOUNDS.setpointC).required('Enter a setpoint'),
+    }),
+    lampsOn: yup.boolean(),
+    // checked only while the house has lamps
+    lamps: yup.object().when('lampsOn', {
+      is: true,
+      then: () => lampsSchema,
+      otherwise: (schema) => schema,
     }),
   });
 }

@@ -61,6 +61,28 @@ describe('CoolingPanel', () => {
     expect(screen.getByTestId('hours-not-held').textContent).toBe('15 (solar 7–21 h)');
   });
 
+  it('says what the supplemental lamps add to the fan requirement', async () => {
+    post.mockImplementation(async (path: string) => {
+      if (path === `/api/houses/${demoHouseB.id}/cooling`)
+        return {
+          ...demoHouseBCooling,
+          lamps: {
+            electricW: 20_000,
+            heatW: 19_000,
+            hoursOn: 6,
+            sunriseSolarHour: 4.6,
+            addedFlowM3PerS: 1.25,
+            governingHour: 2,
+          },
+        } as never;
+      throw new Error(`unexpected POST ${path}`);
+    });
+    renderPanel();
+    const verdict = await screen.findByTestId('fan-verdict');
+    expect(verdict.textContent).toContain('19.0 kW of heat while they run');
+    expect(verdict.textContent).toContain('set at solar hour 2: they add 1.25 m³/s');
+  });
+
   it('carries the electrical and backdraft cautions', async () => {
     renderPanel();
     await screen.findByTestId('fan-verdict');

@@ -76,6 +76,13 @@ export function HeaterVerdict({ estimate, units }: { estimate: HeatingEstimate; 
           {failureNote}
         </Typography>
       ) : null}
+      {estimate.lamps ? (
+        <Typography variant="body2" color="text.secondary" data-testid="heater-lamps-note">
+          The supplemental lamps give {units.format('power', estimate.lamps.heatW)} of heat while they run (
+          {units.format('fraction', estimate.lamps.shareOfDesignLoss)} of the design loss), but the heaters are sized
+          without it: lamps may be off on the coldest night.
+        </Typography>
+      ) : null}
     </Stack>
   );
 }

@@ -59,6 +59,21 @@ describe('HeatingPanel', () => {
     expect(screen.getByText(/A single unit is all the heat/).textContent).toContain('at least 2 units');
   });
 
+  it('shows the lamps’ heat beside the heaters but never credits it', async () => {
+    post.mockImplementation(async (path: string) => {
+      if (path === `/api/houses/${demoHouseB.id}/estimate`)
+        return {
+          ...demoHouseBHeating,
+          lamps: { electricW: 20_000, heatW: 19_000, creditedW: 0, shareOfDesignLoss: 0.25 },
+        } as never;
+      throw new Error(`unexpected POST ${path}`);
+    });
+    renderPanel();
+    const note = await screen.findByTestId('heater-lamps-note');
+    expect(note.textContent).toContain('19.0 kW of heat while they run (25 % of the design loss)');
+    expect(note.textContent).toContain('sized without it');
+  });
+
   it('reads single poly clearly in the condensation verdict and marks weak sources', async () => {
     renderPanel();
     await screen.findByTestId('heating-total');

@@ -29,6 +29,7 @@ import { houseFormSchema } from '../schemas';
 import { coveringOptions, newHeaterRow, optionsFrom, typicalEfficiencyOf } from '../house-form-options';
 import { FollowUnitSystem, InvalidSubmitNote, ReportValues, Section } from './house-form-parts';
 import { ShadeClothFields } from './shade-cloth-fields';
+import { LampsSection } from './house-form-lamps';
 
 export interface HouseFormProps {
   /** the stored house (or the defaults of a new one), SI */
@@ -384,6 +385,8 @@ export function HouseForm({
                   </Grid>
                 </Grid>
               </Section>
+
+              <LampsSection referenceData={referenceData} units={units} />
 
               {readOnly ? null : (
                 <Stack direction="row" sx={{ justifyContent: 'flex-end', flexWrap: 'wrap', gap: 2 }}>

@@ -18,6 +18,7 @@ import '../../../lib/chart';
 import { useUnits } from '../../../lib/units';
 import { hourlyVersusDegreeDayText, seasonChartSeries, seasonLossRows } from '../season-chart-data';
 import { Fact } from './fuel-cautions';
+import { SeasonLampsSummary } from './season-lamps';
 
 /** "2027-01-16T08:00" → "2027-01-16 08:00" */
 const readableTime = (localTime: string) => localTime.replace('T', ' ');
@@ -72,6 +73,7 @@ export function SeasonResultPanel({ season }: { season: HouseSeasonEstimate }) {
             saves {units.format('energyKWh', season.solarOffsetKWh)}.
           </Typography>
         ) : null}
+        <SeasonLampsSummary season={season} />
         <Box sx={{ height: 280 }} role="img" aria-label="Monthly chart of fuel and heat for the season">
           <Bar
             // The frame around the canvas carries the chart's name and description.
@@ -126,6 +128,12 @@ export function SeasonResultPanel({ season }: { season: HouseSeasonEstimate }) {
               <TableCell align="right">Heating hours</TableCell>
               <TableCell align="right">Peak</TableCell>
               <TableCell align="right">Hours below setpoint</TableCell>
+              {season.lamps ? (
+                <>
+                  <TableCell align="right">Lamp electricity</TableCell>
+                  <TableCell align="right">Heat saved by lamps</TableCell>
+                </>
+              ) : null}
             </TableRow>
           </TableHead>
           <TableBody>
@@ -144,6 +152,12 @@ export function SeasonResultPanel({ season }: { season: HouseSeasonEstimate }) {
                 >
                   {month.hoursBelowSetpoint}
                 </TableCell>
+                {season.lamps ? (
+                  <>
+                    <TableCell align="right">{units.format('energyKWh', month.lampElectricityKWh)}</TableCell>
+                    <TableCell align="right">{units.format('energyKWh', month.lampHeatSavedKWh)}</TableCell>
+                  </>
+                ) : null}
               </TableRow>
             ))}
           </TableBody>
