@@ -5,9 +5,11 @@ import {
   ValidateIf,
   type MetadataStorage,
   type ValidationOptions,
+  type ValidatorOptions,
 } from 'class-validator';
 import { FieldProblem, RequestValidationException } from './filters/all-exceptions.filter';
 import { nulCharacterProblems } from './nul-characters';
+import { passesEveryRule } from './validation-fast-path';
 
 /** Class-validator's errors as one problem per field, with dotted paths. */
 export function flatten(errors: ValidationError[], parent = ''): FieldProblem[] {
@@ -33,6 +35,14 @@ class ThermbayValidationPipe extends ValidationPipe {
       if (problems.length > 0) throw new RequestValidationException(problems);
     }
     return super.transform(value, metadata);
+  }
+
+  /** A body that passes every rule is let through without class-validator's error records (see passesEveryRule). */
+  protected override validate(
+    object: object,
+    validatorOptions?: ValidatorOptions,
+  ): Promise<ValidationError[]> | ValidationError[] {
+    return passesEveryRule(object, validatorOptions) ? [] : super.validate(object, validatorOptions);
   }
 
   protected transformPrimitive(value: unknown, metadata: ArgumentMetadata): unknown {
