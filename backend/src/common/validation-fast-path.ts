@@ -3,6 +3,7 @@ import {
   ValidationTypes,
   type MetadataStorage,
   type ValidationArguments,
+  type ValidatorConstraintInterface,
   type ValidatorOptions,
 } from 'class-validator';
 
@@ -47,19 +48,29 @@ export function passesEveryRule(
   return new FastPath(storage, whitelist, forbidUnknownValues).objectPasses(object, undefined);
 }
 
-/** A property's rules sorted as ValidationExecutor sorts them on every call; null when one is of a kind not handled. */
+/** A rule with the objects that check it (class-validator finds them in its container on every call). */
+interface Check {
+  rule: Rule;
+  validators: ValidatorConstraintInterface[];
+}
+
+/** A property's rules sorted as ValidationExecutor sorts them on every call. */
 interface PropertyPlan {
   property: string;
-  defined: Rule[];
+  defined: Check[];
   conditions: Rule[];
-  custom: Rule[];
+  custom: Check[];
   nested: Rule[];
 }
 
-/** Plans per grouped-rules object (class-validator's groupByPropertyName result), kept while that object lives. */
+/**
+ * Plans per grouped-rules object (class-validator's groupByPropertyName result), kept while that
+ * object lives; null when a rule is of a kind not handled. A constraint's checking object is taken
+ * from class-validator's container once (the API sets no container of its own).
+ */
 const plans = new WeakMap<object, PropertyPlan[] | null>();
 
-function planFor(byProperty: Record<string, Rule[]>): PropertyPlan[] | null {
+function planFor(byProperty: Record<string, Rule[]>, storage: MetadataStorage): PropertyPlan[] | null {
   let plan = plans.get(byProperty);
   if (plan !== undefined) return plan;
   plan = [];
@@ -69,11 +80,16 @@ function planFor(byProperty: Record<string, Rule[]>): PropertyPlan[] | null {
       break;
     }
     const ofType = (type: string) => rules.filter((rule) => rule.type === type);
+    const checks = (type: string) =>
+      ofType(type).map((rule) => ({
+        rule,
+        validators: storage.getTargetValidatorConstraints(rule.constraintCls).map((constraint) => constraint.instance),
+      }));
     plan.push({
       property,
-      defined: ofType(ValidationTypes.IS_DEFINED),
+      defined: checks(ValidationTypes.IS_DEFINED),
       conditions: ofType(ValidationTypes.CONDITIONAL_VALIDATION),
-      custom: ofType(ValidationTypes.CUSTOM_VALIDATION),
+      custom: checks(ValidationTypes.CUSTOM_VALIDATION),
       nested: ofType(ValidationTypes.NESTED_VALIDATION),
     });
   }
@@ -98,8 +114,10 @@ class FastPath {
         if (Object.hasOwn(object, key) && !(byProperty[key]?.length > 0)) return false;
       }
     }
-    const plan = planFor(byProperty);
+    const plan = planFor(byProperty, this.storage);
     if (!plan) return false;
+    // as class-validator names it to the constraints (undefined for an object without a constructor)
+    const targetName = (object.constructor ? object.constructor.name : undefined) as string;
     for (const { property, defined, conditions, custom, nested } of plan) {
       const value = (object as Record<string, unknown>)[property];
       // every condition is asked, as class-validator asks them, before the answer is read
@@ -108,36 +126,9 @@ class FastPath {
         if (!(rule.constraints[0] as (o: object, v: unknown) => boolean)(object, value)) validated = false;
       }
       if (!validated) continue;
-      if (!this.customPasses(object, value, defined)) return false;
-      if (!this.customPasses(object, value, custom)) return false;
+      if (!customPasses(object, targetName, value, defined)) return false;
+      if (!customPasses(object, targetName, value, custom)) return false;
       if (!this.nestedPasses(value, nested)) return false;
-    }
-    return true;
-  }
-
-  private customPasses(object: object, value: unknown, rules: Rule[]): boolean {
-    for (const rule of rules) {
-      if (rule.validateIf && !rule.validateIf(object, value)) continue;
-      for (const constraint of this.storage.getTargetValidatorConstraints(rule.constraintCls)) {
-        // as class-validator builds them (targetName is undefined for an object without a constructor)
-        const args = {
-          targetName: (object.constructor ? object.constructor.name : undefined) as string,
-          property: rule.propertyName,
-          object,
-          value,
-          constraints: rule.constraints,
-        } satisfies ValidationArguments;
-        if (!rule.each || !(Array.isArray(value) || value instanceof Set || value instanceof Map)) {
-          const valid = constraint.instance.validate(value, args);
-          if (isPromise(valid) || !valid) return false;
-        } else {
-          if (!Array.isArray(value)) return false;
-          for (const item of value) {
-            const valid = constraint.instance.validate(item, args);
-            if (isPromise(valid) || !valid) return false;
-          }
-        }
-      }
     }
     return true;
   }
@@ -159,4 +150,30 @@ class FastPath {
     }
     return true;
   }
+}
+
+function customPasses(object: object, targetName: string, value: unknown, checks: Check[]): boolean {
+  for (const { rule, validators } of checks) {
+    if (rule.validateIf && !rule.validateIf(object, value)) continue;
+    for (const validator of validators) {
+      const args: ValidationArguments = {
+        targetName,
+        property: rule.propertyName,
+        object,
+        value,
+        constraints: rule.constraints,
+      };
+      if (!rule.each || !(Array.isArray(value) || value instanceof Set || value instanceof Map)) {
+        const valid = validator.validate(value, args);
+        if (isPromise(valid) || !valid) return false;
+      } else {
+        if (!Array.isArray(value)) return false;
+        for (const item of value) {
+          const valid = validator.validate(item, args);
+          if (isPromise(valid) || !valid) return false;
+        }
+      }
+    }
+  }
+  return true;
 }
