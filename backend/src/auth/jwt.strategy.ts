@@ -31,7 +31,7 @@ export class JwtStrategy extends PassportStrategy(Strategy) {
   }
 
   async validate(payload: TokenPayload): Promise<AuthenticatedUser> {
-    const user = await this.users.findById(payload.sub).catch(() => null);
+    const user = await this.users.findSession(payload.sub).catch(() => null);
     if (!user || user.tokenVersion !== payload.tv) {
       throw new UnauthorizedException('Your session has ended; please sign in again');
     }

@@ -10,6 +10,7 @@
  * one request at a time, since its aim is the time of one budget. The whole run is bounded
  * (BENCH_DEADLINE_SECONDS, default 300): past it, the server is stopped and the script exits non-zero.
  *
+ * The server runs with the node flags of package.json's start:prod, as `npm start` serves it.
  * BENCH_CPU_PROF=<folder> starts the server under `node --cpu-prof` and writes its profile there on exit.
  */
 import { spawn, type ChildProcess } from 'node:child_process';
@@ -179,10 +180,22 @@ async function load(
   };
 }
 
+/** The node flags of package.json's start:prod (`node --flag … dist/main.js`). */
+function productionNodeFlags(): string[] {
+  const manifest = JSON.parse(readFileSync(resolve(__dirname, '..', '..', 'package.json'), 'utf8')) as {
+    scripts: Record<string, string>;
+  };
+  const words = manifest.scripts['start:prod'].trim().split(/\s+/);
+  return words.slice(words.indexOf('node') + 1).filter((word) => word.startsWith('--'));
+}
+
 async function main(): Promise<void> {
   const main = resolve(__dirname, '..', 'main.js');
   const profileDir = process.env.BENCH_CPU_PROF;
-  const nodeArgs = profileDir ? ['--cpu-prof', `--cpu-prof-dir=${resolve(profileDir)}`] : [];
+  const nodeArgs = [
+    ...productionNodeFlags(),
+    ...(profileDir ? ['--cpu-prof', `--cpu-prof-dir=${resolve(profileDir)}`] : []),
+  ];
   server = spawn(process.execPath, [...nodeArgs, main], {
     env: {
       ...process.env,
@@ -199,8 +212,8 @@ async function main(): Promise<void> {
   const bootMs = await waitForHealth(server);
   const idle = memoryMb(pid);
   console.log(
-    `server pid ${pid} up in ${bootMs} ms on port ${PORT}; RSS at rest ${idle.rssMb.toFixed(0)} MB; ` +
-      `${CONNECTIONS} connections × ${SECONDS} s per route`,
+    `server pid ${pid} (node ${nodeArgs.join(' ') || 'without flags'}) up in ${bootMs} ms on port ${PORT}; ` +
+      `RSS at rest ${idle.rssMb.toFixed(0)} MB; ${CONNECTIONS} connections × ${SECONDS} s per route`,
   );
 
   const session = await api<{ accessToken: string }>('POST', '/api/auth/login', null, {

@@ -1,6 +1,7 @@
 import { Sequelize } from 'sequelize-typescript';
 import { SequelizeStorage, Umzug } from 'umzug';
 import { MIGRATIONS } from './migrations';
+import { installSqliteReader } from './select-one';
 import { installSqliteWriter, SQLITE_BUSY_TIMEOUT_MS } from './sqlite-writer';
 
 export function createMigrator(sequelize: Sequelize) {
@@ -14,10 +15,12 @@ export function createMigrator(sequelize: Sequelize) {
 
 /**
  * SQLite settings for a file shared by a web server: one writer at a time and the busy timeout on
- * every connection (see sqlite-writer.ts), and the write-ahead log so readers never wait.
+ * every connection (see sqlite-writer.ts), the write-ahead log so readers never wait, and a
+ * read-only connection for the reads made on every request (select-one.ts).
  */
 export async function prepareSqlite(sequelize: Sequelize): Promise<void> {
   installSqliteWriter(sequelize);
+  installSqliteReader(sequelize);
   await sequelize.query('PRAGMA journal_mode = WAL');
   await sequelize.query(`PRAGMA busy_timeout = ${SQLITE_BUSY_TIMEOUT_MS}`);
   await sequelize.query('PRAGMA foreign_keys = ON');

@@ -1,5 +1,4 @@
 import { Logger } from '@nestjs/common';
-import { simpleParser } from 'mailparser';
 import type { AddressInfo } from 'node:net';
 import type { Readable } from 'node:stream';
 import { SMTPServer, type SMTPServerSession } from 'smtp-server';
@@ -31,8 +30,12 @@ function readAll(stream: Readable): Promise<Buffer> {
   });
 }
 
-/** Reads raw MIME into the fields the outbox shows. */
+/**
+ * Reads raw MIME into the fields the outbox shows. The MIME parser is loaded with the first
+ * message, not at start (about 4 MB of memory a server that sends no mail never uses).
+ */
 export async function parseIncomingMail(raw: Buffer, session: Pick<SMTPServerSession, 'envelope'>) {
+  const { simpleParser } = await import('mailparser');
   const parsed = await simpleParser(raw);
   const addressText = (value: typeof parsed.to): string | null => {
     if (!value) return null;

@@ -1,6 +1,5 @@
 import { existsSync } from 'node:fs';
 import { resolve } from 'node:path';
-import PDFDocument from 'pdfkit';
 import type { ReportBlock, ReportDocument } from './report-document';
 
 /**
@@ -203,9 +202,14 @@ function drawBlock(doc: Doc, block: ReportBlock): void {
   }
 }
 
-/** The whole PDF in memory (a report is tens of kilobytes). */
-export function renderReportPdf(report: ReportDocument, producedAt: Date = new Date()): Promise<Buffer> {
+/**
+ * The whole PDF in memory (a report is tens of kilobytes). pdfkit and its font engine are loaded
+ * with the first report, not at start: they hold about 4 MB of a server's memory that most
+ * processes would never use.
+ */
+export async function renderReportPdf(report: ReportDocument, producedAt: Date = new Date()): Promise<Buffer> {
   const fonts = fontDir();
+  const { default: PDFDocument } = await import('pdfkit');
   const doc = new PDFDocument({
     size: report.pageSize,
     margins: { top: MARGIN + HEADER_SPACE, bottom: MARGIN, left: MARGIN, right: MARGIN },
