@@ -50,6 +50,34 @@ describe('selectOne on SQLite', () => {
     expect(rows.map((row) => row?.tokenVersion)).toEqual(ids.map((id) => (id === 1 ? 0 : 5)));
   });
 
+  it('never answers a read begun after a commit with what was there before, under a steady stream of reads', async () => {
+    // Statements overlapping on one SQLite connection share one read transaction: under a steady
+    // stream it never ends, and reads go on seeing the rows as they were (a sign-out unseen).
+    let committed = 0;
+    let stop = false;
+    let reads = 0;
+    const stale: string[] = [];
+    const reader = async () => {
+      while (!stop) {
+        const before = committed;
+        const row = await selectOne<Row>(sequelize, SQL, [1]);
+        reads += 1;
+        if (row!.tokenVersion < before) stale.push(`saw ${row!.tokenVersion} after ${before} was committed`);
+      }
+    };
+    const readers = Array.from({ length: 50 }, reader);
+    for (let version = 1; version <= 10; version++) {
+      await new Promise((done) => setTimeout(done, 30));
+      await sequelize.query(`UPDATE "people" SET "tokenVersion" = ${version} WHERE "id" = 1`);
+      committed = version;
+    }
+    await new Promise((done) => setTimeout(done, 30));
+    stop = true;
+    await Promise.all(readers);
+    expect(reads).toBeGreaterThan(500);
+    expect(stale).toEqual([]);
+  });
+
   it('refuses reads once Sequelize has closed', async () => {
     await selectOne<Row>(sequelize, SQL, [1]);
     await sequelize.close();
