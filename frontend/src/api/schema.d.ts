@@ -4,7000 +4,6925 @@
  */
 
 export interface paths {
-  '/api/health': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    get: operations['HealthController_health'];
-    put?: never;
-    post?: never;
-    delete?: never;
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
-  '/api/reference-data': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    get: operations['ReferenceDataController_all'];
-    put?: never;
-    post?: never;
-    delete?: never;
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
-  '/api/mail/outbox': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    /** Every message the local SMTP server kept, and every send that failed (site admin) */
-    get: operations['MailController_all'];
-    put?: never;
-    post?: never;
-    delete?: never;
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
-  '/api/mail/inbox': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    /** Messages the local SMTP server kept for the signed-in user */
-    get: operations['MailController_mine'];
-    put?: never;
-    post?: never;
-    delete?: never;
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
-  '/api/mail/messages/{mailId}/attachments/{attachmentId}': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    /** Download an attachment (site admin, or a recipient of the message) */
-    get: operations['MailController_download'];
-    put?: never;
-    post?: never;
-    delete?: never;
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
-  '/api/users/me': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    get?: never;
-    put?: never;
-    post?: never;
-    delete: operations['UsersController_removeMe'];
-    options?: never;
-    head?: never;
-    patch: operations['UsersController_updateMe'];
-    trace?: never;
-  };
-  '/api/users': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    get: operations['UsersController_list'];
-    put?: never;
-    post?: never;
-    delete?: never;
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
-  '/api/users/{id}': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    get?: never;
-    put?: never;
-    post?: never;
-    delete: operations['UsersController_remove'];
-    options?: never;
-    head?: never;
-    patch: operations['UsersController_update'];
-    trace?: never;
-  };
-  '/api/auth/register': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    get?: never;
-    put?: never;
-    post: operations['AuthController_register'];
-    delete?: never;
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
-  '/api/auth/login': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    get?: never;
-    put?: never;
-    post: operations['AuthController_login'];
-    delete?: never;
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
-  '/api/auth/logout': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    get?: never;
-    put?: never;
-    post: operations['AuthController_logout'];
-    delete?: never;
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
-  '/api/auth/password': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    get?: never;
-    put?: never;
-    /** Change the password, knowing the current one; every other session is signed out */
-    post: operations['AuthController_changePassword'];
-    delete?: never;
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
-  '/api/auth/password-reset/request': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    get?: never;
-    put?: never;
-    /** E-mail a one-hour, single-use reset link; the same answer whether or not the account exists */
-    post: operations['AuthController_requestPasswordReset'];
-    delete?: never;
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
-  '/api/auth/password-reset': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    get?: never;
-    put?: never;
-    /** Set a new password with a reset token; every session of the account is signed out */
-    post: operations['AuthController_resetPassword'];
-    delete?: never;
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
-  '/api/auth/me': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    get: operations['AuthController_me'];
-    put?: never;
-    post?: never;
-    delete?: never;
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
-  '/api/auth/demo-accounts': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    get: operations['AuthController_demoAccounts'];
-    put?: never;
-    post?: never;
-    delete?: never;
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
-  '/api/permissions': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    get: operations['FarmsController_permissions'];
-    put?: never;
-    post?: never;
-    delete?: never;
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
-  '/api/farms': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    get: operations['FarmsController_list'];
-    put?: never;
-    post: operations['FarmsController_create'];
-    delete?: never;
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
-  '/api/farms/{farmId}': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    get: operations['FarmsController_get'];
-    put?: never;
-    post?: never;
-    delete: operations['FarmsController_remove'];
-    options?: never;
-    head?: never;
-    patch: operations['FarmsController_update'];
-    trace?: never;
-  };
-  '/api/farms/{farmId}/members': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    get: operations['FarmsController_members'];
-    put?: never;
-    post?: never;
-    delete?: never;
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
-  '/api/farms/{farmId}/members/{userId}': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    get?: never;
-    put?: never;
-    post?: never;
-    delete: operations['FarmsController_removeMember'];
-    options?: never;
-    head?: never;
-    patch: operations['FarmsController_updateMember'];
-    trace?: never;
-  };
-  '/api/farms/{farmId}/invitations': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    /** Pending invitations of the farm (owners) */
-    get: operations['InvitationsController_pending'];
-    put?: never;
-    /** Invite an e-mail address to the farm; the answer says whether the e-mail went */
-    post: operations['InvitationsController_invite'];
-    delete?: never;
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
-  '/api/farms/{farmId}/invitations/{invitationId}': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    get?: never;
-    put?: never;
-    post?: never;
-    delete: operations['InvitationsController_revoke'];
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
-  '/api/farms/{farmId}/invitations/{invitationId}/resend': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    get?: never;
-    put?: never;
-    /** Send a new link (the old one stops working), valid 7 more days */
-    post: operations['InvitationsController_resend'];
-    delete?: never;
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
-  '/api/invitations/{token}': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    /** What an invitation link offers */
-    get: operations['InvitationsController_preview'];
-    put?: never;
-    post?: never;
-    delete?: never;
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
-  '/api/invitations/{token}/sign-up': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    get?: never;
-    put?: never;
-    /** Create an account with the invited address and join the farm */
-    post: operations['InvitationsController_signUp'];
-    delete?: never;
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
-  '/api/invitations/{token}/accept': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    get?: never;
-    put?: never;
-    /** Join the farm with the signed-in account (its address must be the invited one) */
-    post: operations['InvitationsController_accept'];
-    delete?: never;
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
-  '/api/farms/{farmId}/houses': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    get: operations['HousesController_list'];
-    put?: never;
-    post: operations['HousesController_create'];
-    delete?: never;
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
-  '/api/houses/{houseId}': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    get: operations['HousesController_get'];
-    put?: never;
-    post?: never;
-    delete: operations['HousesController_remove'];
-    options?: never;
-    head?: never;
-    patch: operations['HousesController_update'];
-    trace?: never;
-  };
-  '/api/farms/{farmId}/climate': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    get: operations['ClimateController_get'];
-    put: operations['ClimateController_put'];
-    post?: never;
-    delete?: never;
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
-  '/api/estimates': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    get?: never;
-    put?: never;
-    /** Design-night heating estimate for a house described in the body */
-    post: operations['EstimatesController_heating'];
-    delete?: never;
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
-  '/api/estimates/cooling': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    get?: never;
-    put?: never;
-    /** Summer ventilation and cooling estimate for a house and site described in the body */
-    post: operations['EstimatesController_cooling'];
-    delete?: never;
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
-  '/api/houses/{houseId}/estimate': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    get?: never;
-    put?: never;
-    /** Heating estimate for a stored house; unstated conditions come from the farm's climate, the farm, the house and reference data */
-    post: operations['EstimatesController_heatingForHouse'];
-    delete?: never;
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
-  '/api/houses/{houseId}/cooling': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    get?: never;
-    put?: never;
-    /** Cooling estimate for a stored house; unstated conditions come from the farm, its climate and reference data */
-    post: operations['EstimatesController_coolingForHouse'];
-    delete?: never;
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
-  '/api/houses/{houseId}/season': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    get?: never;
-    put?: never;
-    /** A house's heating season hour by hour: energy, fuel and cost by month, with a degree-day cross-check (estimate:run) */
-    post: operations['SeasonController_seasonOfHouse'];
-    delete?: never;
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
-  '/api/houses/{houseId}/night-demand': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    get?: never;
-    put?: never;
-    /** Heat, fuel and cost of one night, sunset to sunrise, hour by hour (estimate:run) */
-    post: operations['SeasonController_nightDemand'];
-    delete?: never;
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
-  '/api/houses/{houseId}/measures': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    get?: never;
-    put?: never;
-    /** Energy measures ranked by simple payback, each re-running the season (estimate:run); an empty list compares the defaults */
-    post: operations['SeasonController_measures'];
-    delete?: never;
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
-  '/api/houses/{houseId}/calendar': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    /** The house's production calendar (house:read); no periods = heated all season at the house setpoints */
-    get: operations['SeasonController_getCalendar'];
-    /** Replace the house's production calendar (house:write) */
-    put: operations['SeasonController_putCalendar'];
-    post?: never;
-    delete?: never;
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
-  '/api/farms/{farmId}/fuel-prices': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    /** The farm's fuel prices, one per fuel (farm:read) */
-    get: operations['SeasonController_getFuelPrices'];
-    /** Replace the farm's fuel prices (house:write: owners and growers, who hold the fuel bills) */
-    put: operations['SeasonController_putFuelPrices'];
-    post?: never;
-    delete?: never;
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
-  '/api/farms/{farmId}/season-budget': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    get?: never;
-    put?: never;
-    /** The farm's season fuel budget: every house, totals per fuel and per month (farm:read) */
-    post: operations['SeasonController_budget'];
-    delete?: never;
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
-  '/api/farms/{farmId}/season-budget.csv': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    /** The season budget as CSV: one row per house per month, totals, units named in the header (farm:read) */
-    get: operations['SeasonController_budgetCsv'];
-    put?: never;
-    post?: never;
-    delete?: never;
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
-  '/api/houses/{houseId}/measure-plan': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    /** The measures kept with the house, with their costs (house:read) */
-    get: operations['MeasurePlanController_get'];
-    /** Keep these measures and costs with the house (house:write) */
-    put: operations['MeasurePlanController_put'];
-    post?: never;
-    delete?: never;
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
-  '/api/houses/{houseId}/alternatives': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    /** A house's alternatives, each read against the house as it is now (house:read); one that no longer makes a valid house is listed with `invalid` */
-    get: operations['AlternativesController_list'];
-    put?: never;
-    /** Save an alternative of the house: a patch, or the edited house from which the patch is taken (alternative:write: owners, growers and advisers) */
-    post: operations['AlternativesController_create'];
-    delete?: never;
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
-  '/api/alternatives/{alternativeId}': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    /** One alternative, read against its house as it is now (house:read) */
-    get: operations['AlternativesController_get'];
-    put?: never;
-    post?: never;
-    /** Delete an alternative (alternative:write) */
-    delete: operations['AlternativesController_remove'];
-    options?: never;
-    head?: never;
-    /** Rename, re-cost or change an alternative (alternative:write) */
-    patch: operations['AlternativesController_update'];
-    trace?: never;
-  };
-  '/api/alternatives/{alternativeId}/adopt': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    get?: never;
-    put?: never;
-    /** Make this alternative the house, in one step (house:write: owners and growers); the house as it was is kept as an alternative */
-    post: operations['AlternativesController_adopt'];
-    delete?: never;
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
-  '/api/houses/{houseId}/duplicate': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    get?: never;
-    put?: never;
-    /** A copy of the house with its production calendar and alternatives (house:write on its farm) */
-    post: operations['AlternativesController_duplicate'];
-    delete?: never;
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
-  '/api/farms/{farmId}/temperature-logs/inspect': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    get?: never;
-    put?: never;
-    /** Read the start of a temperature CSV and propose which columns hold what; stores nothing (house:write) */
-    post: operations['TemperatureLogsController_inspect'];
-    delete?: never;
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
-  '/api/farms/{farmId}/temperature-logs': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    /** The farm's temperature logs, newest first, without readings (farm:read) */
-    get: operations['TemperatureLogsController_list'];
-    put?: never;
-    /** Store a temperature log read with the confirmed column mapping; nothing is stored when any row is bad (house:write) */
-    post: operations['TemperatureLogsController_upload'];
-    delete?: never;
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
-  '/api/temperature-logs/{logId}': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    /** A temperature log with one row per day (hourly readings reduced to min/mean/max) (farm:read) */
-    get: operations['TemperatureLogsController_get'];
-    put?: never;
-    post?: never;
-    /** Delete a temperature log (house:write) */
-    delete: operations['TemperatureLogsController_remove'];
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
-  '/api/farms/{farmId}/weather': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    get: operations['WeatherController_source'];
-    put?: never;
-    post?: never;
-    delete?: never;
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
-  '/api/farms/{farmId}/weather/years/{year}': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    get?: never;
-    put?: never;
-    post: operations['WeatherController_fetchYear'];
-    delete?: never;
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
-  '/api/farms/{farmId}/weather/years/{year}/temperature-log': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    get?: never;
-    put?: never;
-    post: operations['WeatherController_keepAsLog'];
-    delete?: never;
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
-  '/api/farms/{farmId}/weather/climate-proposal': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    get: operations['WeatherController_proposal'];
-    put?: never;
-    post?: never;
-    delete?: never;
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
-  '/api/farms/{farmId}/temperature-logs/{logId}/climate-proposal': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    get: operations['LogClimateController_proposal'];
-    put?: never;
-    post?: never;
-    delete?: never;
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
-  '/api/houses/{houseId}/reports': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    get: operations['ReportsController_listForHouse'];
-    put?: never;
-    /** Create a heater-sizing report: saves a snapshot of the inputs and results (report:write) */
-    post: operations['ReportsController_create'];
-    delete?: never;
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
-  '/api/farms/{farmId}/reports': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    get: operations['ReportsController_listForFarm'];
-    put?: never;
-    post?: never;
-    delete?: never;
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
-  '/api/advising': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    /** The signed-in adviser's client farms, each with its newest report */
-    get: operations['ReportsController_clientFarms'];
-    put?: never;
-    post?: never;
-    delete?: never;
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
-  '/api/reports/{reportId}.pdf': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    /** The report as PDF, in the reader's units (A4 for SI, US Letter for US) */
-    get: operations['ReportsController_pdf'];
-    put?: never;
-    post?: never;
-    delete?: never;
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
-  '/api/reports/{reportId}': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    get: operations['ReportsController_get'];
-    put?: never;
-    post?: never;
-    delete?: never;
-    options?: never;
-    head?: never;
-    /** Edit a draft report (an issued one is read-only) */
-    patch: operations['ReportsController_update'];
-    trace?: never;
-  };
-  '/api/reports/{reportId}/issue': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    get?: never;
-    put?: never;
-    post: operations['ReportsController_issue'];
-    delete?: never;
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
-  '/api/reports/{reportId}/revisions': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    get?: never;
-    put?: never;
-    /** Start a new revision: a draft copy of the report */
-    post: operations['ReportsController_revise'];
-    delete?: never;
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
-  '/api/reports/{reportId}/send': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    get?: never;
-    put?: never;
-    /** E-mail the PDF to chosen farm members or addresses; says whether the send failed */
-    post: operations['ReportsController_send'];
-    delete?: never;
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
-  '/api/houses/{houseId}/side-by-side': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    get?: never;
-    put?: never;
-    /** The house and up to four of its alternatives, each with its design night, summer cooling, season, light and (for an alternative) saving and payback against the house (estimate:run) */
-    post: operations['SideBySideController_compare'];
-    delete?: never;
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
-  '/api/farms/{farmId}/fuel-records': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    /** The farm's fuel bills and tank deliveries, oldest first (farm:read) */
-    get: operations['FuelRecordsController_list'];
-    put?: never;
-    /** Add a fuel bill or tank delivery (house:write) */
-    post: operations['FuelRecordsController_create'];
-    delete?: never;
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
-  '/api/fuel-records/{recordId}': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    get?: never;
-    put?: never;
-    post?: never;
-    /** Delete a fuel record (house:write) */
-    delete: operations['FuelRecordsController_remove'];
-    options?: never;
-    head?: never;
-    /** Change a fuel record (house:write) */
-    patch: operations['FuelRecordsController_update'];
-    trace?: never;
-  };
-  '/api/farms/{farmId}/fuel-records/inspect': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    get?: never;
-    put?: never;
-    /** Read a fuel-record CSV and propose which columns hold what; stores nothing (house:write) */
-    post: operations['FuelRecordsController_inspect'];
-    delete?: never;
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
-  '/api/farms/{farmId}/fuel-records/upload': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    get?: never;
-    put?: never;
-    /** Store every row of a fuel-record CSV read with the confirmed columns; nothing is stored when any row is bad (house:write) */
-    post: operations['FuelRecordsController_upload'];
-    delete?: never;
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
-  '/api/farms/{farmId}/calibrations': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    /** The farm's saved calibrations, newest first (the first is the one estimates use) (farm:read) */
-    get: operations['CalibrationController_list'];
-    put?: never;
-    /** Fit each meter's heat-loss factor to the farm's fuel records and save it with its inputs (house:write); run again when new bills arrive */
-    post: operations['CalibrationController_run'];
-    delete?: never;
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
-  '/api/calibrations/{calibrationId}': {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    /** One saved calibration (farm:read) */
-    get: operations['CalibrationController_get'];
-    put?: never;
-    post?: never;
-    delete?: never;
-    options?: never;
-    head?: never;
-    patch?: never;
-    trace?: never;
-  };
+    "/api/health": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["HealthController_health"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/reference-data": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["ReferenceDataController_all"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/mail/outbox": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** Every message the local SMTP server kept, and every send that failed (site admin) */
+        get: operations["MailController_all"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/mail/inbox": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** Messages the local SMTP server kept for the signed-in user */
+        get: operations["MailController_mine"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/mail/messages/{mailId}/attachments/{attachmentId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** Download an attachment (site admin, or a recipient of the message) */
+        get: operations["MailController_download"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/users/me": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post?: never;
+        delete: operations["UsersController_removeMe"];
+        options?: never;
+        head?: never;
+        patch: operations["UsersController_updateMe"];
+        trace?: never;
+    };
+    "/api/users": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["UsersController_list"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/users/{id}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post?: never;
+        delete: operations["UsersController_remove"];
+        options?: never;
+        head?: never;
+        patch: operations["UsersController_update"];
+        trace?: never;
+    };
+    "/api/auth/register": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["AuthController_register"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/auth/login": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["AuthController_login"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/auth/logout": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["AuthController_logout"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/auth/password": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Change the password, knowing the current one; every other session is signed out */
+        post: operations["AuthController_changePassword"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/auth/password-reset/request": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** E-mail a one-hour, single-use reset link; the same answer whether or not the account exists */
+        post: operations["AuthController_requestPasswordReset"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/auth/password-reset": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Set a new password with a reset token; every session of the account is signed out */
+        post: operations["AuthController_resetPassword"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/auth/me": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["AuthController_me"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/auth/demo-accounts": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["AuthController_demoAccounts"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/permissions": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["FarmsController_permissions"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/farms": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["FarmsController_list"];
+        put?: never;
+        post: operations["FarmsController_create"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/farms/{farmId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["FarmsController_get"];
+        put?: never;
+        post?: never;
+        delete: operations["FarmsController_remove"];
+        options?: never;
+        head?: never;
+        patch: operations["FarmsController_update"];
+        trace?: never;
+    };
+    "/api/farms/{farmId}/members": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["FarmsController_members"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/farms/{farmId}/members/{userId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post?: never;
+        delete: operations["FarmsController_removeMember"];
+        options?: never;
+        head?: never;
+        patch: operations["FarmsController_updateMember"];
+        trace?: never;
+    };
+    "/api/farms/{farmId}/invitations": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** Pending invitations of the farm (owners) */
+        get: operations["InvitationsController_pending"];
+        put?: never;
+        /** Invite an e-mail address to the farm; the answer says whether the e-mail went */
+        post: operations["InvitationsController_invite"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/farms/{farmId}/invitations/{invitationId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post?: never;
+        delete: operations["InvitationsController_revoke"];
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/farms/{farmId}/invitations/{invitationId}/resend": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Send a new link (the old one stops working), valid 7 more days */
+        post: operations["InvitationsController_resend"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/invitations/{token}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** What an invitation link offers */
+        get: operations["InvitationsController_preview"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/invitations/{token}/sign-up": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Create an account with the invited address and join the farm */
+        post: operations["InvitationsController_signUp"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/invitations/{token}/accept": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Join the farm with the signed-in account (its address must be the invited one) */
+        post: operations["InvitationsController_accept"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/farms/{farmId}/houses": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["HousesController_list"];
+        put?: never;
+        post: operations["HousesController_create"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/houses/{houseId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["HousesController_get"];
+        put?: never;
+        post?: never;
+        delete: operations["HousesController_remove"];
+        options?: never;
+        head?: never;
+        patch: operations["HousesController_update"];
+        trace?: never;
+    };
+    "/api/farms/{farmId}/climate": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["ClimateController_get"];
+        put: operations["ClimateController_put"];
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/estimates": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Design-night heating estimate for a house described in the body */
+        post: operations["EstimatesController_heating"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/estimates/cooling": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Summer ventilation and cooling estimate for a house and site described in the body */
+        post: operations["EstimatesController_cooling"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/houses/{houseId}/estimate": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Heating estimate for a stored house; unstated conditions come from the farm's climate, the farm, the house and reference data */
+        post: operations["EstimatesController_heatingForHouse"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/houses/{houseId}/cooling": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Cooling estimate for a stored house; unstated conditions come from the farm, its climate and reference data */
+        post: operations["EstimatesController_coolingForHouse"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/houses/{houseId}/season": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** A house's heating season hour by hour: energy, fuel and cost by month, with a degree-day cross-check (estimate:run) */
+        post: operations["SeasonController_seasonOfHouse"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/houses/{houseId}/night-demand": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Heat, fuel and cost of one night, sunset to sunrise, hour by hour (estimate:run) */
+        post: operations["SeasonController_nightDemand"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/houses/{houseId}/measures": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Energy measures ranked by simple payback, each re-running the season (estimate:run); an empty list compares the defaults */
+        post: operations["SeasonController_measures"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/houses/{houseId}/calendar": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** The house's production calendar (house:read); no periods = heated all season at the house setpoints */
+        get: operations["SeasonController_getCalendar"];
+        /** Replace the house's production calendar (house:write) */
+        put: operations["SeasonController_putCalendar"];
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/farms/{farmId}/fuel-prices": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** The farm's fuel prices, one per fuel (farm:read) */
+        get: operations["SeasonController_getFuelPrices"];
+        /** Replace the farm's fuel prices (house:write: owners and growers, who hold the fuel bills) */
+        put: operations["SeasonController_putFuelPrices"];
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/farms/{farmId}/season-budget": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** The farm's season fuel budget: every house, totals per fuel and per month (farm:read) */
+        post: operations["SeasonController_budget"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/farms/{farmId}/season-budget.csv": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** The season budget as CSV: one row per house per month, totals, units named in the header (farm:read) */
+        get: operations["SeasonController_budgetCsv"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/houses/{houseId}/measure-plan": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** The measures kept with the house, with their costs (house:read) */
+        get: operations["MeasurePlanController_get"];
+        /** Keep these measures and costs with the house (house:write) */
+        put: operations["MeasurePlanController_put"];
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/houses/{houseId}/alternatives": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** A house's alternatives, each read against the house as it is now (house:read); one that no longer makes a valid house is listed with `invalid` */
+        get: operations["AlternativesController_list"];
+        put?: never;
+        /** Save an alternative of the house: a patch, or the edited house from which the patch is taken (alternative:write: owners, growers and advisers) */
+        post: operations["AlternativesController_create"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/alternatives/{alternativeId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** One alternative, read against its house as it is now (house:read) */
+        get: operations["AlternativesController_get"];
+        put?: never;
+        post?: never;
+        /** Delete an alternative (alternative:write) */
+        delete: operations["AlternativesController_remove"];
+        options?: never;
+        head?: never;
+        /** Rename, re-cost or change an alternative (alternative:write) */
+        patch: operations["AlternativesController_update"];
+        trace?: never;
+    };
+    "/api/alternatives/{alternativeId}/adopt": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Make this alternative the house, in one step (house:write: owners and growers); the house as it was is kept as an alternative */
+        post: operations["AlternativesController_adopt"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/houses/{houseId}/duplicate": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** A copy of the house with its production calendar and alternatives (house:write on its farm) */
+        post: operations["AlternativesController_duplicate"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/farms/{farmId}/temperature-logs/inspect": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Read the start of a temperature CSV and propose which columns hold what; stores nothing (house:write) */
+        post: operations["TemperatureLogsController_inspect"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/farms/{farmId}/temperature-logs": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** The farm's temperature logs, newest first, without readings (farm:read) */
+        get: operations["TemperatureLogsController_list"];
+        put?: never;
+        /** Store a temperature log read with the confirmed column mapping; nothing is stored when any row is bad (house:write) */
+        post: operations["TemperatureLogsController_upload"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/temperature-logs/{logId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** A temperature log with one row per day (hourly readings reduced to min/mean/max) (farm:read) */
+        get: operations["TemperatureLogsController_get"];
+        put?: never;
+        post?: never;
+        /** Delete a temperature log (house:write) */
+        delete: operations["TemperatureLogsController_remove"];
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/farms/{farmId}/weather": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["WeatherController_source"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/farms/{farmId}/weather/years/{year}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["WeatherController_fetchYear"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/farms/{farmId}/weather/years/{year}/temperature-log": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["WeatherController_keepAsLog"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/farms/{farmId}/weather/climate-proposal": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["WeatherController_proposal"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/farms/{farmId}/temperature-logs/{logId}/climate-proposal": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["LogClimateController_proposal"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/houses/{houseId}/reports": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["ReportsController_listForHouse"];
+        put?: never;
+        /** Create a heater-sizing report: saves a snapshot of the inputs and results (report:write) */
+        post: operations["ReportsController_create"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/farms/{farmId}/reports": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["ReportsController_listForFarm"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/advising": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** The signed-in adviser's client farms, each with its newest report */
+        get: operations["ReportsController_clientFarms"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/reports/{reportId}.pdf": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** The report as PDF, in the reader's units (A4 for SI, US Letter for US) */
+        get: operations["ReportsController_pdf"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/reports/{reportId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get: operations["ReportsController_get"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        /** Edit a draft report (an issued one is read-only) */
+        patch: operations["ReportsController_update"];
+        trace?: never;
+    };
+    "/api/reports/{reportId}/issue": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post: operations["ReportsController_issue"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/reports/{reportId}/revisions": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Start a new revision: a draft copy of the report */
+        post: operations["ReportsController_revise"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/reports/{reportId}/send": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** E-mail the PDF to chosen farm members or addresses; says whether the send failed */
+        post: operations["ReportsController_send"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/houses/{houseId}/side-by-side": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** The house and up to four of its alternatives, each with its design night, summer cooling, season, light and (for an alternative) saving and payback against the house (estimate:run) */
+        post: operations["SideBySideController_compare"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/farms/{farmId}/fuel-records": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** The farm's fuel bills and tank deliveries, oldest first (farm:read) */
+        get: operations["FuelRecordsController_list"];
+        put?: never;
+        /** Add a fuel bill or tank delivery (house:write) */
+        post: operations["FuelRecordsController_create"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/fuel-records/{recordId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        post?: never;
+        /** Delete a fuel record (house:write) */
+        delete: operations["FuelRecordsController_remove"];
+        options?: never;
+        head?: never;
+        /** Change a fuel record (house:write) */
+        patch: operations["FuelRecordsController_update"];
+        trace?: never;
+    };
+    "/api/farms/{farmId}/fuel-records/inspect": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Read a fuel-record CSV and propose which columns hold what; stores nothing (house:write) */
+        post: operations["FuelRecordsController_inspect"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/farms/{farmId}/fuel-records/upload": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Store every row of a fuel-record CSV read with the confirmed columns; nothing is stored when any row is bad (house:write) */
+        post: operations["FuelRecordsController_upload"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/farms/{farmId}/calibrations": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** The farm's saved calibrations, newest first (the first is the one estimates use) (farm:read) */
+        get: operations["CalibrationController_list"];
+        put?: never;
+        /** Fit each meter's heat-loss factor to the farm's fuel records and save it with its inputs (house:write); run again when new bills arrive */
+        post: operations["CalibrationController_run"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/calibrations/{calibrationId}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** One saved calibration (farm:read) */
+        get: operations["CalibrationController_get"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
 }
 export type webhooks = Record<string, never>;
 export interface components {
-  schemas: {
-    DatabaseHealthDto: {
-      /**
-       * @description which database this instance runs on
-       * @enum {string}
-       */
-      dialect: 'sqlite' | 'postgres';
-      /** @description whether a trivial query answered just now */
-      reachable: boolean;
-    };
-    HealthDto: {
-      /**
-       * @example ok
-       * @enum {string}
-       */
-      status: 'ok' | 'unavailable';
-      version: string;
-      database: components['schemas']['DatabaseHealthDto'];
-    };
-    ReceivedAttachmentDto: {
-      id: number;
-      fileName: string;
-      contentType: string;
-      sizeBytes: number;
-    };
-    ReceivedMailDto: {
-      id: number;
-      /** @description when the local server received it (ISO 8601) */
-      receivedAt: string;
-      from: string | null;
-      /** @description the To header */
-      to: string | null;
-      /** @description envelope recipients: who it was delivered to */
-      recipients: string[];
-      subject: string | null;
-      /** @description plain-text body */
-      text: string | null;
-      attachments: components['schemas']['ReceivedAttachmentDto'][];
-    };
-    MailSendDto: {
-      id: number;
-      kind: string;
-      sentAt: string;
-      recipients: string[];
-      subject: string;
-      text: string;
-      attachmentNames: string[];
-      /** @enum {string} */
-      status: 'sent' | 'failed';
-      /** @description why it failed */
-      error: string | null;
-    };
-    OutboxDto: {
-      /** @description false when SMTP_URL sends through a real server (then nothing is kept here) */
-      localServer: boolean;
-      messages: components['schemas']['ReceivedMailDto'][];
-      /** @description sends the SMTP server did not take, newest first */
-      failedSends: components['schemas']['MailSendDto'][];
-    };
-    UpdateMeDto: {
-      name?: string;
-      /** @enum {string} */
-      unitSystem?: 'si' | 'us';
-    };
-    UserDto: {
-      id: number;
-      email: string;
-      name: string;
-      /** @enum {string} */
-      siteRole: 'admin' | 'user';
-      /**
-       * @description How numbers are shown: SI or US customary
-       * @enum {string}
-       */
-      unitSystem: 'si' | 'us';
-    };
-    DeleteMeDto: {
-      /** @description your current password, to confirm */
-      password: string;
-    };
-    AdminUpdateUserDto: {
-      name?: string;
-      /** @enum {string} */
-      siteRole?: 'admin' | 'user';
-    };
-    RegisterDto: {
-      email: string;
-      /** @description at least 10 characters, at most 72 bytes, not the e-mail address, not a commonly used password */
-      password: string;
-      name: string;
-    };
-    SessionDto: {
-      accessToken: string;
-      user: components['schemas']['UserDto'];
-    };
-    LoginDto: {
-      /** @example grower@example.com */
-      email: string;
-      /** @example thermbay-demo */
-      password: string;
-    };
-    ChangePasswordDto: {
-      currentPassword: string;
-      /** @description at least 10 characters, at most 72 bytes, not the e-mail address, not a commonly used password */
-      newPassword: string;
-    };
-    PasswordResetRequestDto: {
-      email: string;
-    };
-    MessageDto: {
-      message: string;
-    };
-    PasswordResetDto: {
-      /** @description the token from the reset link */
-      token: string;
-      /** @description at least 10 characters, at most 72 bytes, not the e-mail address, not a commonly used password */
-      newPassword: string;
-    };
-    DemoAccountDto: {
-      email: string;
-      name: string;
-      description: string;
-    };
-    DemoAccountsDto: {
-      enabled: boolean;
-      password: string | null;
-      accounts: components['schemas']['DemoAccountDto'][];
-    };
-    RolePermissionsDto: {
-      owner: (
-        | 'farm:read'
-        | 'farm:update'
-        | 'farm:delete'
-        | 'members:manage'
-        | 'house:read'
-        | 'house:write'
-        | 'alternative:write'
-        | 'estimate:run'
-        | 'report:write'
-      )[];
-      grower: (
-        | 'farm:read'
-        | 'farm:update'
-        | 'farm:delete'
-        | 'members:manage'
-        | 'house:read'
-        | 'house:write'
-        | 'alternative:write'
-        | 'estimate:run'
-        | 'report:write'
-      )[];
-      adviser: (
-        | 'farm:read'
-        | 'farm:update'
-        | 'farm:delete'
-        | 'members:manage'
-        | 'house:read'
-        | 'house:write'
-        | 'alternative:write'
-        | 'estimate:run'
-        | 'report:write'
-      )[];
-      viewer: (
-        | 'farm:read'
-        | 'farm:update'
-        | 'farm:delete'
-        | 'members:manage'
-        | 'house:read'
-        | 'house:write'
-        | 'alternative:write'
-        | 'estimate:run'
-        | 'report:write'
-      )[];
-    };
-    PermissionsDto: {
-      roles: components['schemas']['RolePermissionsDto'];
-    };
-    FarmDto: {
-      id: number;
-      name: string;
-      latitudeDeg: number;
-      longitudeDeg: number;
-      elevationM: number;
-      timeZone: string;
-      /**
-       * @description ISO 4217 code every amount of the farm is written in
-       * @example USD
-       */
-      currency: string;
-      /** @enum {string} */
-      myRole: 'owner' | 'grower' | 'adviser' | 'viewer';
-      permissions: (
-        | 'farm:read'
-        | 'farm:update'
-        | 'farm:delete'
-        | 'members:manage'
-        | 'house:read'
-        | 'house:write'
-        | 'alternative:write'
-        | 'estimate:run'
-        | 'report:write'
-      )[];
-      houseCount: number;
-      /** @description raised by one on every save; send it back in If-Match to update */
-      version: number;
-      createdAt: string;
-      updatedAt: string;
-    };
-    CreateFarmDto: {
-      /** @example North Ridge Produce */
-      name: string;
-      /** @description degrees, north positive */
-      latitudeDeg: number;
-      /** @description degrees, east positive */
-      longitudeDeg: number;
-      /** @description m above sea level */
-      elevationM: number;
-      /** @example America/Chicago */
-      timeZone: string;
-      /**
-       * @description ISO 4217 code every amount of the farm is written in (default USD)
-       * @example EUR
-       */
-      currency?: string;
-    };
-    UpdateFarmDto: {
-      /** @example North Ridge Produce */
-      name?: string;
-      /** @description degrees, north positive */
-      latitudeDeg?: number;
-      /** @description degrees, east positive */
-      longitudeDeg?: number;
-      /** @description m above sea level */
-      elevationM?: number;
-      /** @example America/Chicago */
-      timeZone?: string;
-      /**
-       * @description ISO 4217 code every amount of the farm is written in (default USD)
-       * @example EUR
-       */
-      currency?: string;
-    };
-    MemberDto: {
-      userId: number;
-      email: string;
-      name: string;
-      /** @enum {string} */
-      role: 'owner' | 'grower' | 'adviser' | 'viewer';
-    };
-    UpdateMemberDto: {
-      /** @enum {string} */
-      role: 'owner' | 'grower' | 'adviser' | 'viewer';
-    };
-    CreateInvitationDto: {
-      email: string;
-      /** @enum {string} */
-      role: 'grower' | 'adviser' | 'viewer';
-    };
-    MailOutcomeDto: {
-      /** @enum {string} */
-      status: 'sent' | 'failed';
-      /** @description why the message did not go; kept in the send log */
-      error: string | null;
-    };
-    InvitationSentDto: {
-      id: number;
-      farmId: number;
-      email: string;
-      /** @enum {string} */
-      role: 'owner' | 'grower' | 'adviser' | 'viewer';
-      invitedByName: string | null;
-      createdAt: string;
-      expiresAt: string;
-      /** @description the link no longer works (7 days passed); resend to renew it */
-      expired: boolean;
-      mail: components['schemas']['MailOutcomeDto'];
-    };
-    InvitationDto: {
-      id: number;
-      farmId: number;
-      email: string;
-      /** @enum {string} */
-      role: 'owner' | 'grower' | 'adviser' | 'viewer';
-      invitedByName: string | null;
-      createdAt: string;
-      expiresAt: string;
-      /** @description the link no longer works (7 days passed); resend to renew it */
-      expired: boolean;
-    };
-    InvitationPreviewDto: {
-      farmName: string;
-      /** @enum {string} */
-      role: 'owner' | 'grower' | 'adviser' | 'viewer';
-      email: string;
-      invitedByName: string | null;
-      expiresAt: string;
-      /** @description an account already uses the address: sign in to accept */
-      accountExists: boolean;
-    };
-    InvitedSignUpDto: {
-      name: string;
-      password: string;
-    };
-    AcceptedInvitationDto: {
-      farmId: number;
-      /** @enum {string} */
-      role: 'owner' | 'grower' | 'adviser' | 'viewer';
-    };
-    CoveringsDto: {
-      /**
-       * @description reference-data coverings id
-       * @example poly-double-inflated
-       */
-      roof: string;
-      /** @description reference-data coverings id */
-      sidewalls: string;
-      /** @description reference-data coverings id */
-      endwalls: string;
-    };
-    CoveringOverridesDto: {
-      /** @description W/(m²·K) */
-      roof?: number;
-      /** @description W/(m²·K) */
-      sidewalls?: number;
-      /** @description W/(m²·K) */
-      endwalls?: number;
-    };
-    ShadeClothDto: {
-      /**
-       * @description share of the sun (heat and light alike) the cloth passes, 0–1: a "50 % shade" cloth passes about 0.5 (typical cloths in reference-data shade-cloths)
-       * @example 0.5
-       */
-      solarTransmittance: number;
-      /**
-       * @description calendar months the cloth is in place, 1 = January … 12 = December, each once
-       * @example [
-       *       5,
-       *       6,
-       *       7,
-       *       8,
-       *       9
-       *     ]
-       */
-      months: number[];
-    };
-    HeaterGroupDto: {
-      count: number;
-      /** @description rated input of one unit, W */
-      ratedInputW: number;
-      /** @description output ÷ input, 0–1 */
-      efficiency: number;
-      /**
-       * @description reference-data fuels id
-       * @example propane
-       */
-      fuelId: string;
-      /**
-       * @description what kind of heater (reference-data heater-types): its typical efficiency is offered as the default and an unvented fuel-fired type brings the strong cautions; null when not stated
-       * @enum {string|null}
-       */
-      heaterType?:
-        | 'gravity-vented'
-        | 'power-vented'
-        | 'separated-combustion'
-        | 'condensing'
-        | 'unvented'
-        | 'boiler'
-        | 'electric'
-        | null;
-    };
-    ExhaustFansDto: {
-      count: number;
-      /** @description m³/s moved by one fan at working static pressure */
-      capacityEachM3PerS: number;
-    };
-    SetpointsDto: {
-      dayHeatingC: number;
-      nightHeatingC: number;
-      coolingC: number;
-    };
-    LampsDto: {
-      /**
-       * @description reference-data lamps id of a lamp type (kind 'lamp-type'); null when not stated
-       * @example led-horticultural
-       */
-      lampTypeId?: string | null;
-      /** @description electrical input per m² of floor, W/m² */
-      powerDensityWPerM2: number;
-      /** @description hours the lamps run per day, January to December (12 values, 0–24) */
-      hoursPerDayByMonth: number[];
-      /** @description share of the electrical input that ends as heat inside the house (reference-data lamps offers 0.95) */
-      heatToHouseFraction: number;
-    };
-    HouseDto: {
-      /** @enum {string} */
-      shape: 'gable' | 'gothic-arch' | 'quonset';
-      spans: number;
-      /** @description width of one span, m */
-      widthM: number;
-      lengthM: number;
-      /** @description sidewall or gutter height, m */
-      eaveHeightM: number;
-      ridgeHeightM: number;
-      coverings: components['schemas']['CoveringsDto'];
-      /** @description a maker's U-value replacing the reference value */
-      coveringUOverridesWPerM2K?: components['schemas']['CoveringOverridesDto'];
-      /** @description reference-data air-leakage id */
-      airLeakageClassId: string;
-      /** @description measured air changes per hour */
-      airChangesPerHourOverride?: number | null;
-      perimeterInsulated: boolean;
-      /** @description height of the band at the foot of the sidewalls and endwalls, m (at most the eave height); opaque when kneewallId names a construction, glazing otherwise */
-      kneewallHeightM?: number | null;
-      /** @description reference-data kneewalls id of the kneewall construction; null: glazing to the ground */
-      kneewallId?: string | null;
-      /** @description reference-data curtains id, drawn at night */
-      curtainId?: string | null;
-      /** @description the shade cloth, or null for none */
-      shadeCloth?: components['schemas']['ShadeClothDto'] | null;
-      heaters: components['schemas']['HeaterGroupDto'][];
-      exhaustFans: components['schemas']['ExhaustFansDto'];
-      /** @description free louvre or inlet area, m² */
-      inletAreaM2: number;
-      setpoints: components['schemas']['SetpointsDto'];
-      /** @description supplemental lamps: their heat lowers the season heating in the hours they run and adds to the summer fan requirement; never credited in heater sizing. null: none */
-      lamps?: components['schemas']['LampsDto'] | null;
-      /** @example House 3 */
-      name: string;
-      notes?: string | null;
-      id: number;
-      farmId: number;
-      /** @description raised by one on every save; send it back in If-Match to update */
-      version: number;
-      createdAt: string;
-      updatedAt: string;
-    };
-    CreateHouseDto: {
-      /** @enum {string} */
-      shape: 'gable' | 'gothic-arch' | 'quonset';
-      spans: number;
-      /** @description width of one span, m */
-      widthM: number;
-      lengthM: number;
-      /** @description sidewall or gutter height, m */
-      eaveHeightM: number;
-      ridgeHeightM: number;
-      coverings: components['schemas']['CoveringsDto'];
-      /** @description a maker's U-value replacing the reference value */
-      coveringUOverridesWPerM2K?: components['schemas']['CoveringOverridesDto'];
-      /** @description reference-data air-leakage id */
-      airLeakageClassId: string;
-      /** @description measured air changes per hour */
-      airChangesPerHourOverride?: number | null;
-      perimeterInsulated: boolean;
-      /** @description height of the band at the foot of the sidewalls and endwalls, m (at most the eave height); opaque when kneewallId names a construction, glazing otherwise */
-      kneewallHeightM?: number | null;
-      /** @description reference-data kneewalls id of the kneewall construction; null: glazing to the ground */
-      kneewallId?: string | null;
-      /** @description reference-data curtains id, drawn at night */
-      curtainId?: string | null;
-      /** @description a shade cloth in place in some months: on the cooling design day it takes its share of the solar heat and of the light the exhaust rate reads, and in the season of the daytime solar gain; null for none */
-      shadeCloth?: components['schemas']['ShadeClothDto'] | null;
-      heaters: components['schemas']['HeaterGroupDto'][];
-      exhaustFans: components['schemas']['ExhaustFansDto'];
-      /** @description free louvre or inlet area, m² */
-      inletAreaM2: number;
-      setpoints: components['schemas']['SetpointsDto'];
-      /** @description supplemental lamps: their heat lowers the season heating in the hours they run and adds to the summer fan requirement; never credited in heater sizing. null: none */
-      lamps?: components['schemas']['LampsDto'] | null;
-      /** @example House 3 */
-      name: string;
-      notes?: string | null;
-    };
-    UpdateHouseDto: {
-      /** @enum {string} */
-      shape?: 'gable' | 'gothic-arch' | 'quonset';
-      spans?: number;
-      /** @description width of one span, m */
-      widthM?: number;
-      lengthM?: number;
-      /** @description sidewall or gutter height, m */
-      eaveHeightM?: number;
-      ridgeHeightM?: number;
-      coverings?: components['schemas']['CoveringsDto'];
-      /** @description a maker's U-value replacing the reference value */
-      coveringUOverridesWPerM2K?: components['schemas']['CoveringOverridesDto'];
-      /** @description reference-data air-leakage id */
-      airLeakageClassId?: string;
-      /** @description measured air changes per hour */
-      airChangesPerHourOverride?: number | null;
-      perimeterInsulated?: boolean;
-      /** @description height of the band at the foot of the sidewalls and endwalls, m (at most the eave height); opaque when kneewallId names a construction, glazing otherwise */
-      kneewallHeightM?: number | null;
-      /** @description reference-data kneewalls id of the kneewall construction; null: glazing to the ground */
-      kneewallId?: string | null;
-      /** @description reference-data curtains id, drawn at night */
-      curtainId?: string | null;
-      /** @description a shade cloth in place in some months: on the cooling design day it takes its share of the solar heat and of the light the exhaust rate reads, and in the season of the daytime solar gain; null for none */
-      shadeCloth?: components['schemas']['ShadeClothDto'] | null;
-      heaters?: components['schemas']['HeaterGroupDto'][];
-      exhaustFans?: components['schemas']['ExhaustFansDto'];
-      /** @description free louvre or inlet area, m² */
-      inletAreaM2?: number;
-      setpoints?: components['schemas']['SetpointsDto'];
-      /** @description supplemental lamps: their heat lowers the season heating in the hours they run and adds to the summer fan requirement; never credited in heater sizing. null: none */
-      lamps?: components['schemas']['LampsDto'] | null;
-      /** @example House 3 */
-      name?: string;
-      notes?: string | null;
-    };
-    MonthlyClimateDto: {
-      month: number;
-      /** @description mean of the daily minimum temperatures, °C */
-      meanDailyMinC: number;
-      /** @description mean of the daily maximum temperatures, °C */
-      meanDailyMaxC: number;
-      /** @description actual ÷ clear-sky solar over the month; default from reference data */
-      clearness?: number | null;
-    };
-    SiteClimateDto: {
-      /** @description heating design dry bulb (99 % or 99.6 %), °C */
-      winterDesignC: number;
-      /** @description cooling design dry bulb (1 %), °C */
-      summerDesignC: number;
-      /** @description wet bulb coincident with the summer design dry bulb, °C */
-      summerDesignWetBulbC: number;
-      /** @description mean daily range on the summer design day, K */
-      summerDailyRangeK: number;
-      /** @description exactly 12 rows, one per month */
-      monthly: components['schemas']['MonthlyClimateDto'][];
-      /** @description where the numbers came from (e.g. national climate normals, station name) */
-      sourceNote?: string | null;
-      /** @description winter design wind speed, m/s; null: the 6.7 m/s (15 mph) the U tables assume (reference-data/wind.json) */
-      designWindSpeedMPerS?: number | null;
-    };
-    FarmClimateDto: {
-      farmId: number;
-      /** @description null until someone enters the climate */
-      climate: components['schemas']['SiteClimateDto'] | null;
-      /** @description 0 until the first save, then raised by one on every save; send it in If-Match */
-      version: number;
-    };
-    HouseSpecDto: {
-      /** @enum {string} */
-      shape: 'gable' | 'gothic-arch' | 'quonset';
-      spans: number;
-      /** @description width of one span, m */
-      widthM: number;
-      lengthM: number;
-      /** @description sidewall or gutter height, m */
-      eaveHeightM: number;
-      ridgeHeightM: number;
-      coverings: components['schemas']['CoveringsDto'];
-      /** @description a maker's U-value replacing the reference value */
-      coveringUOverridesWPerM2K?: components['schemas']['CoveringOverridesDto'];
-      /** @description reference-data air-leakage id */
-      airLeakageClassId: string;
-      /** @description measured air changes per hour */
-      airChangesPerHourOverride?: number | null;
-      perimeterInsulated: boolean;
-      /** @description height of the band at the foot of the sidewalls and endwalls, m (at most the eave height); opaque when kneewallId names a construction, glazing otherwise */
-      kneewallHeightM?: number | null;
-      /** @description reference-data kneewalls id of the kneewall construction; null: glazing to the ground */
-      kneewallId?: string | null;
-      /** @description reference-data curtains id, drawn at night */
-      curtainId?: string | null;
-      /** @description a shade cloth in place in some months: on the cooling design day it takes its share of the solar heat and of the light the exhaust rate reads, and in the season of the daytime solar gain; null for none */
-      shadeCloth?: components['schemas']['ShadeClothDto'] | null;
-      heaters: components['schemas']['HeaterGroupDto'][];
-      exhaustFans: components['schemas']['ExhaustFansDto'];
-      /** @description free louvre or inlet area, m² */
-      inletAreaM2: number;
-      setpoints: components['schemas']['SetpointsDto'];
-      /** @description supplemental lamps: their heat lowers the season heating in the hours they run and adds to the summer fan requirement; never credited in heater sizing. null: none */
-      lamps?: components['schemas']['LampsDto'] | null;
-    };
-    HeatingConditionsDto: {
-      /** @description winter design dry bulb (99 % or 99.6 %), °C */
-      designOutdoorC: number;
-      /** @description site elevation, m (sets air density) */
-      elevationM: number;
-      /** @description inside relative humidity on the design night, % */
-      insideRelativeHumidityPct: number;
-      /** @description inside temperature to hold, °C; default the house night heating setpoint */
-      insideC?: number;
-      /** @description credit a drawn curtain in the design loss; default false (heaters sized with the curtain open) */
-      curtainClosed?: boolean;
-      /** @description design wind speed, m/s; default the farm climate's, else the 6.7 m/s (15 mph) the U tables assume */
-      designWindSpeedMPerS?: number;
-      /** @description size for a clear night: add the long-wave loss to a sky colder than the air through a covering that passes thermal infrared; default false (the tabulated U-values, surroundings at the outdoor air temperature) */
-      clearSky?: boolean;
-      /** @description outdoor dew point on a clear design night, °C (at most the design temperature); default 3 K below it */
-      outdoorDewPointC?: number;
-    };
-    HeatingEstimateRequestDto: {
-      house: components['schemas']['HouseSpecDto'];
-      conditions: components['schemas']['HeatingConditionsDto'];
-    };
-    HouseGeometrySummaryDto: {
-      /** @description m² */
-      floorAreaM2: number;
-      /** @description m² */
-      roofAreaM2: number;
-      /** @description m² */
-      sidewallAreaM2: number;
-      /** @description glazed endwall area, m² */
-      endwallAreaM2: number;
-      /** @description opaque kneewall on the sidewalls and endwalls, m² (0 without one) */
-      kneewallAreaM2: number;
-      /** @description roof + sidewalls + endwalls + kneewall, m² */
-      coverAreaM2: number;
-      /** @description outside perimeter of the house at the ground, m */
-      perimeterM: number;
-      /** @description m³ */
-      volumeM3: number;
-    };
-    WindFactorsDto: {
-      roof: number;
-      sidewalls: number;
-      endwalls: number;
-    };
-    WindSummaryDto: {
-      /** @description design wind speed, m/s */
-      windSpeedMPerS: number;
-      /** @description the wind the U tables assume, m/s */
-      tableWindSpeedMPerS: number;
-      /** @description U at the design wind ÷ tabulated U, per covering group */
-      uFactor: components['schemas']['WindFactorsDto'];
-      /** @description air changes at the design wind ÷ tabulated air changes */
-      infiltrationFactor: number;
-    };
-    HeatLossComponentDto: {
-      /** @enum {string} */
-      key: 'roof' | 'sidewalls' | 'endwalls' | 'kneewall' | 'perimeter' | 'infiltration' | 'sky';
-      label: string;
-      /** @description area (m²), perimeter (m) or volume (m³), see quantityUnit */
-      quantity: number;
-      /** @enum {string} */
-      quantityUnit: 'm2' | 'm' | 'm3';
-      /** @description U in W/(m²·K) for surfaces, F in W/(m·K) for the perimeter, air changes per hour for infiltration */
-      coefficient: number;
-      /** @description W/K */
-      conductanceWPerK: number;
-      /** @description loss at the design ΔT, W */
-      watts: number;
-      /** @description share of the total, 0–1 */
-      share: number;
-    };
-    HeatLossBreakdownDto: {
-      /** @description °C */
-      insideC: number;
-      /** @description °C */
-      outsideC: number;
-      /** @description inside − outside, K (may be ≤ 0: then no heat is needed) */
-      deltaTK: number;
-      /** @description W */
-      totalW: number;
-      /** @description through the coverings, W */
-      coveringW: number;
-      /** @description through the opaque kneewall, W (0 without one) */
-      kneewallW: number;
-      /** @description through the perimeter, W */
-      perimeterW: number;
-      /** @description air leakage, W */
-      infiltrationW: number;
-      /** @description long-wave loss to a clear night sky, W (0 unless a clear night was asked for) */
-      skyW: number;
-      curtainApplied: boolean;
-      wind: components['schemas']['WindSummaryDto'];
-      components: components['schemas']['HeatLossComponentDto'][];
-    };
-    HeaterSizingDto: {
-      /** @description fraction added to the design loss */
-      safetyMargin: number;
-      /** @description W */
-      requiredOutputW: number;
-      /** @description W */
-      requiredInputW: number;
-      /** @description W */
-      installedInputW: number;
-      /** @description W */
-      installedOutputW: number;
-      /** @enum {string} */
-      verdict: 'adequate' | 'short' | 'none-installed';
-      /** @description W (0 when adequate) */
-      shortfallW: number;
-      /** @description outdoor temperature at which the installed output just holds the inside temperature, °C */
-      lowestHeldOutdoorC: number | null;
-      unitCount: number;
-      /** @description W */
-      largestUnitOutputW: number;
-      /** @description same with the largest unit out of service, °C; null without a second unit */
-      holdsWithLargestUnitOutC: number | null;
-      /** @description how the output is split over units; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
-      splitAdvice: string;
-      fuelFired: boolean;
-    };
-    CondensationSurfaceDto: {
-      /** @enum {string} */
-      group: 'roof' | 'sidewalls' | 'endwalls';
-      coveringId: string;
-      /** @description W/(m²·K) */
-      uWPerM2K: number;
-      /** @description °C */
-      insideSurfaceC: number;
-      condenses: boolean;
-      /** @description outdoor temperature below which water condenses on this surface, °C */
-      condensationBelowOutdoorC: number;
-    };
-    CondensationDto: {
-      /** @description °C */
-      insideC: number;
-      /** @description % */
-      insideRelativeHumidityPct: number;
-      /** @description °C */
-      dewPointC: number;
-      anyCondenses: boolean;
-      surfaces: components['schemas']['CondensationSurfaceDto'][];
-    };
-    HeatingLampsDto: {
-      /** @description electrical input of all the lamps while they run, W */
-      electricW: number;
-      /** @description heat they give the house while they run, W */
-      heatW: number;
-      /**
-       * @description heat credited against the design heat loss and heater sizing: always 0 (lamps may be off that night)
-       * @enum {number}
-       */
-      creditedW: 0;
-      /** @description lamp heat ÷ design heat loss, for the reader */
-      shareOfDesignLoss: number;
-    };
-    HeatingAssumptionDto: {
-      key: string;
-      /** @description may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
-      label: string;
-      value: number | string;
-      unit: string;
-      source: string;
-      /** @enum {string} */
-      confidence: 'verified' | 'verified-secondary' | 'derived' | 'memory' | 'common-practice' | 'user-entered';
-      /** @description true when a value entered for the house replaced the reference value */
-      overridden: boolean;
-    };
-    HeatingEstimateDto: {
-      geometry: components['schemas']['HouseGeometrySummaryDto'];
-      heatLoss: components['schemas']['HeatLossBreakdownDto'];
-      heater: components['schemas']['HeaterSizingDto'];
-      condensation: components['schemas']['CondensationDto'];
-      /** @description the supplemental lamps, shown but never credited on the design night; null without lamps */
-      lamps: components['schemas']['HeatingLampsDto'] | null;
-      assumptions: components['schemas']['HeatingAssumptionDto'][];
-      /** @description safety and planning cautions, to show with the result; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
-      cautions: string[];
-    };
-    CoolingSiteDto: {
-      /** @description degrees, north positive */
-      latitudeDeg: number;
-      /** @description degrees, east positive */
-      longitudeDeg: number;
-      /** @description m */
-      elevationM: number;
-    };
-    EvaporativePadDto: {
-      /**
-       * @description reference-data evaporative-pads id
-       * @example cellulose-150mm
-       */
-      padTypeId: string;
-      /** @description face area of the pads, m² */
-      areaM2: number;
-    };
-    CoolingConditionsDto: {
-      /**
-       * @description YYYY-MM-DD; hours of the result are local apparent solar time
-       * @example 2026-07-21
-       */
-      designDate: string;
-      /** @description summer design dry bulb (the day’s maximum), °C */
-      summerDesignC: number;
-      /** @description day’s maximum − minimum, K */
-      dailyRangeK: number;
-      /** @description wet bulb coincident with the design dry bulb (not above it), °C */
-      summerDesignWetBulbC: number;
-      /** @description allowed inlet-to-fan rise, K; default from reference data */
-      allowedTemperatureRiseK?: number;
-      /** @description peak light at plant height under the roof before any shade cloth, lux (a cloth in place multiplies it); when left out, the design day's own clear-sky light through the roof, the same sun the hour-by-hour balance uses */
-      peakInteriorLightLux?: number;
-      /** @description inlet (pad) wall to fans, m; default the house length */
-      padToFanDistanceM?: number;
-      /** @description share of transmitted solar heat taken up by transpiration; default from reference data */
-      transpirationFraction?: number;
-      /** @description evaporative pads on the inlet wall, or null for none */
-      evaporativePad?: components['schemas']['EvaporativePadDto'] | null;
-      /** @description winter design temperature for the humidity-ventilation heat cost, °C */
-      winterDesignC?: number;
-    };
-    CoolingEstimateRequestDto: {
-      house: components['schemas']['HouseSpecDto'];
-      site: components['schemas']['CoolingSiteDto'];
-      conditions: components['schemas']['CoolingConditionsDto'];
-    };
-    AirExchangeDto: {
-      /** @description all installed fans together, m³/s */
-      installedFlowM3PerS: number;
-      /** @description 1/h */
-      airChangesPerHour: number;
-      /** @description 1/min */
-      airChangesPerMinute: number;
-      /** @description m³/s per m² of floor */
-      flowPerFloorAreaM3PerSM2: number;
-    };
-    CapacityFactorsDto: {
-      elevation: number;
-      light: number;
-      temperatureRise: number;
-      velocity: number;
-      /** @description elevation × light × temperatureRise */
-      house: number;
-      /** @description the larger of house and velocity */
-      applied: number;
-    };
-    CoolingCapacityDto: {
-      /** @description m³/s per m² of floor */
-      baseRateM3PerSM2: number;
-      factors: components['schemas']['CapacityFactorsDto'];
-      /** @description base rate × applied factor × floor area: the floor-area method alone, m³/s */
-      floorAreaMethodFlowM3PerS: number;
-      /** @description flow the lamps’ heat adds over the floor-area method, m³/s */
-      lampFlowM3PerS: number;
-      /** @description the design-day solar hour that sets the requirement with the lamps; null when the floor-area method does */
-      lampGoverningHour: number | null;
-      /** @description the larger of the floor-area method and the lit hours’ need, m³/s */
-      requiredFlowM3PerS: number;
-      /** @description m³/s */
-      installedFlowM3PerS: number;
-      /** @enum {string} */
-      verdict: 'adequate' | 'short' | 'no-fans';
-      /** @description fans of the installed size needed in all; null without fans */
-      fansNeeded: number | null;
-      /** @description fans to add; null without fans */
-      additionalFansNeeded: number | null;
-      /** @description m² */
-      inletAreaNeededM2: number;
-      /** @description m² */
-      inletAreaM2: number;
-      /** @enum {string} */
-      inletVerdict: 'adequate' | 'short';
-    };
-    InteriorLightDto: {
-      /**
-       * @description 'design day': the design day's own clear-sky sun through the roof (the same sun as the hour-by-hour balance); 'entered': the request's peakInteriorLightLux
-       * @enum {string}
-       */
-      from: 'design day' | 'entered';
-      /** @description peak light at plant height under the roof before any shade cloth, lx */
-      unshadedLux: number;
-      /** @description share a shade cloth in place on the design date passes; 1 without */
-      shadeTransmittance: number;
-      /** @description unshadedLux × shadeTransmittance: the light the light factor reads, lx */
-      lux: number;
-    };
-    CoolingShadeClothDto: {
-      solarTransmittance: number;
-      /** @description months the cloth is in place, 1–12, in calendar order */
-      months: number[];
-      /** @description the design date falls in one of its months: only then does it shade the design day */
-      inPlaceOnDesignDate: boolean;
-    };
-    DesignDayHourDto: {
-      /** @description local apparent solar hour */
-      hour: number;
-      /** @description °C */
-      outdoorC: number;
-      /** @description degrees above the horizon (negative at night) */
-      sunAltitudeDeg: number;
-      /** @description W/m² */
-      globalHorizontalWPerM2: number;
-      /** @description W */
-      solarGainW: number;
-      /** @description heat of supplemental lamps running this hour, W (0 when off) */
-      lampHeatW: number;
-      /** @description °C */
-      indoorWithFansC: number;
-      fanFraction: number;
-      /** @description °C; null without pads */
-      indoorWithPadsC: number | null;
-      setpointHeld: boolean;
-    };
-    DesignDayDto: {
-      /** @description YYYY-MM-DD */
-      date: string;
-      hours: components['schemas']['DesignDayHourDto'][];
-      /** @description °C */
-      peakIndoorWithFansC: number;
-      /** @description °C; null without pads */
-      peakIndoorWithPadsC: number | null;
-      /** @description solar hours at which the cooling setpoint is not held */
-      hoursNotHeld: number[];
-    };
-    PadSizingDto: {
-      padTypeId: string;
-      /** @description m/s */
-      faceVelocityMPerS: number;
-      saturationEfficiency: number;
-      /** @description m² */
-      areaNeededM2: number;
-      /** @description m² */
-      areaM2: number;
-      /** @enum {string} */
-      verdict: 'adequate' | 'short';
-      /** @description °C */
-      leavingAirAtPeakC: number;
-    };
-    FanStageDto: {
-      stage: number;
-      /** @description indoor temperature at which this stage switches on, °C */
-      onAtC: number;
-      /** @description fans switched on at this stage (not cumulative) */
-      fans: number;
-    };
-    StagingDto: {
-      /** @description K */
-      deadbandK: number;
-      /** @description K */
-      requiredDeadbandK: number;
-      ok: boolean;
-      /** @description may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
-      warnings: string[];
-      stages: components['schemas']['FanStageDto'][];
-    };
-    WinterVentilationDto: {
-      fractionOfSummerRate: number;
-      /** @description m³/s: the summer rate the fraction is taken of (base rate × floor area × elevation factor only) */
-      summerBaseFlowM3PerS: number;
-      /** @description m³/s */
-      flowM3PerS: number;
-      /** @description 1/h */
-      airChangesPerHour: number;
-      /** @description W to warm the ventilation air to the night setpoint */
-      heatCostW: number;
-      /** @description °C */
-      atOutdoorC: number;
-      /** @description W lost by the house itself (cover, perimeter, leaks) at the same temperatures, for comparison */
-      houseHeatLossW: number;
-    };
-    CoolingLampsDto: {
-      /** @description electrical input of all the lamps while they run, W */
-      electricW: number;
-      /** @description heat they give the house while they run, W */
-      heatW: number;
-      /** @description hours they run on the design day (the design month's value) */
-      hoursOn: number;
-      /** @description sunrise in solar hours, where the block of lamp hours ends */
-      sunriseSolarHour: number;
-      /** @description fan flow the lamps add to the requirement, m³/s */
-      addedFlowM3PerS: number;
-      /** @description the solar hour that sets the requirement with the lamps; null when the floor-area method does */
-      governingHour: number | null;
-    };
-    CoolingAssumptionDto: {
-      key: string;
-      /** @description may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
-      label: string;
-      value: number | string;
-      unit: string;
-      source: string;
-      /**
-       * @description 'user-entered' for what the house itself states
-       * @enum {string}
-       */
-      confidence: 'verified' | 'verified-secondary' | 'derived' | 'memory' | 'common-practice' | 'user-entered';
-      /** @description true when the request replaced the default */
-      overridden: boolean;
-    };
-    CoolingEstimateDto: {
-      airExchange: components['schemas']['AirExchangeDto'];
-      capacity: components['schemas']['CoolingCapacityDto'];
-      /** @description the peak interior light the light factor read */
-      interiorLight: components['schemas']['InteriorLightDto'];
-      /** @description the house's shade cloth; null without one */
-      shadeCloth: components['schemas']['CoolingShadeClothDto'] | null;
-      designDay: components['schemas']['DesignDayDto'];
-      /** @description null without evaporative pads */
-      pads: components['schemas']['PadSizingDto'] | null;
-      staging: components['schemas']['StagingDto'];
-      winterVentilation: components['schemas']['WinterVentilationDto'];
-      /** @description the supplemental lamps on the design day; null without lamps or when they do not run that month */
-      lamps: components['schemas']['CoolingLampsDto'] | null;
-      assumptions: components['schemas']['CoolingAssumptionDto'][];
-      /** @description safety and planning cautions, to show with the result; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
-      cautions: string[];
-    };
-    PartialHeatingConditionsDto: {
-      /** @description winter design dry bulb (99 % or 99.6 %), °C */
-      designOutdoorC?: number;
-      /** @description site elevation, m (sets air density) */
-      elevationM?: number;
-      /** @description inside relative humidity on the design night, % */
-      insideRelativeHumidityPct?: number;
-      /** @description inside temperature to hold, °C; default the house night heating setpoint */
-      insideC?: number;
-      /** @description credit a drawn curtain in the design loss; default false (heaters sized with the curtain open) */
-      curtainClosed?: boolean;
-      /** @description design wind speed, m/s; default the farm climate's, else the 6.7 m/s (15 mph) the U tables assume */
-      designWindSpeedMPerS?: number;
-      /** @description size for a clear night: add the long-wave loss to a sky colder than the air through a covering that passes thermal infrared; default false (the tabulated U-values, surroundings at the outdoor air temperature) */
-      clearSky?: boolean;
-      /** @description outdoor dew point on a clear design night, °C (at most the design temperature); default 3 K below it */
-      outdoorDewPointC?: number;
-    };
-    HouseHeatingEstimateRequestDto: {
-      conditions?: components['schemas']['PartialHeatingConditionsDto'];
-    };
-    HeatingConditionsUsedDto: {
-      /** @description °C */
-      designOutdoorC: number;
-      /** @description m */
-      elevationM: number;
-      /** @description % */
-      insideRelativeHumidityPct: number;
-      /** @description °C */
-      insideC: number;
-      curtainClosed: boolean;
-      /** @description m/s */
-      designWindSpeedMPerS: number;
-      clearSky: boolean;
-    };
-    HeatingConditionsSourceDto: {
-      /** @enum {string} */
-      designOutdoorC: 'farm climate' | 'request';
-      /** @enum {string} */
-      elevationM: 'farm' | 'request';
-      /** @enum {string} */
-      insideRelativeHumidityPct: 'reference data' | 'request';
-      /** @enum {string} */
-      insideC: 'house night setpoint' | 'request';
-      /** @enum {string} */
-      curtainClosed: 'default' | 'request';
-      /** @enum {string} */
-      designWindSpeedMPerS: 'farm climate' | 'reference data' | 'request';
-      /** @enum {string} */
-      clearSky: 'default' | 'request';
-    };
-    HouseHeatingEstimateDto: {
-      geometry: components['schemas']['HouseGeometrySummaryDto'];
-      heatLoss: components['schemas']['HeatLossBreakdownDto'];
-      heater: components['schemas']['HeaterSizingDto'];
-      condensation: components['schemas']['CondensationDto'];
-      /** @description the supplemental lamps, shown but never credited on the design night; null without lamps */
-      lamps: components['schemas']['HeatingLampsDto'] | null;
-      assumptions: components['schemas']['HeatingAssumptionDto'][];
-      /** @description safety and planning cautions, to show with the result; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
-      cautions: string[];
-      houseId: number;
-      conditionsUsed: components['schemas']['HeatingConditionsUsedDto'];
-      conditionsSource: components['schemas']['HeatingConditionsSourceDto'];
-    };
-    PartialCoolingConditionsDto: {
-      /**
-       * @description YYYY-MM-DD; hours of the result are local apparent solar time
-       * @example 2026-07-21
-       */
-      designDate?: string;
-      /** @description summer design dry bulb (the day’s maximum), °C */
-      summerDesignC?: number;
-      /** @description day’s maximum − minimum, K */
-      dailyRangeK?: number;
-      /** @description wet bulb coincident with the design dry bulb (not above it), °C */
-      summerDesignWetBulbC?: number;
-      /** @description allowed inlet-to-fan rise, K; default from reference data */
-      allowedTemperatureRiseK?: number;
-      /** @description peak light at plant height under the roof before any shade cloth, lux (a cloth in place multiplies it); when left out, the design day's own clear-sky light through the roof, the same sun the hour-by-hour balance uses */
-      peakInteriorLightLux?: number;
-      /** @description inlet (pad) wall to fans, m; default the house length */
-      padToFanDistanceM?: number;
-      /** @description share of transmitted solar heat taken up by transpiration; default from reference data */
-      transpirationFraction?: number;
-      /** @description evaporative pads on the inlet wall, or null for none */
-      evaporativePad?: components['schemas']['EvaporativePadDto'] | null;
-      /** @description winter design temperature for the humidity-ventilation heat cost, °C */
-      winterDesignC?: number;
-    };
-    HouseCoolingEstimateRequestDto: {
-      conditions?: components['schemas']['PartialCoolingConditionsDto'];
-    };
-    CoolingConditionsSourceDto: {
-      /** @enum {string} */
-      designDate: 'calendar default' | 'request';
-      /** @enum {string} */
-      summerDesignC: 'farm climate' | 'request';
-      /** @enum {string} */
-      dailyRangeK: 'farm climate' | 'request';
-      /** @enum {string} */
-      summerDesignWetBulbC: 'farm climate' | 'request';
-      /** @enum {string} */
-      allowedTemperatureRiseK: 'reference data' | 'request';
-      /**
-       * @description 'design day': the design day's own clear-sky light through the roof
-       * @enum {string}
-       */
-      peakInteriorLightLux: 'design day' | 'request';
-      /** @enum {string} */
-      padToFanDistanceM: 'house length' | 'request';
-      /** @enum {string} */
-      transpirationFraction: 'reference data' | 'request';
-      /** @enum {string} */
-      evaporativePad: 'none' | 'request';
-      /** @enum {string} */
-      winterDesignC: 'farm climate' | 'reference data' | 'request';
-    };
-    HouseCoolingEstimateDto: {
-      airExchange: components['schemas']['AirExchangeDto'];
-      capacity: components['schemas']['CoolingCapacityDto'];
-      /** @description the peak interior light the light factor read */
-      interiorLight: components['schemas']['InteriorLightDto'];
-      /** @description the house's shade cloth; null without one */
-      shadeCloth: components['schemas']['CoolingShadeClothDto'] | null;
-      designDay: components['schemas']['DesignDayDto'];
-      /** @description null without evaporative pads */
-      pads: components['schemas']['PadSizingDto'] | null;
-      staging: components['schemas']['StagingDto'];
-      winterVentilation: components['schemas']['WinterVentilationDto'];
-      /** @description the supplemental lamps on the design day; null without lamps or when they do not run that month */
-      lamps: components['schemas']['CoolingLampsDto'] | null;
-      assumptions: components['schemas']['CoolingAssumptionDto'][];
-      /** @description safety and planning cautions, to show with the result; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
-      cautions: string[];
-      houseId: number;
-      /** @description the farm’s position and elevation */
-      siteUsed: components['schemas']['CoolingSiteDto'];
-      /** @description what the engine ran with; optional values left out took the defaults listed in assumptions */
-      conditionsUsed: components['schemas']['CoolingConditionsDto'];
-      conditionsSource: components['schemas']['CoolingConditionsSourceDto'];
-    };
-    TemperatureLogClimateSourceDto: {
-      /** @description id of one of the farm’s temperature logs */
-      temperatureLogId: number;
-    };
-    SeasonRequestDto: {
-      /** @description 'normals' (default: the farm's monthly climate normals) or { temperatureLogId } to use a logged year instead */
-      climateSource?: 'normals' | components['schemas']['TemperatureLogClimateSourceDto'];
-      /** @description reference-data fuels id; default: the fuel of the house's first heater */
-      fuelId?: string;
-      /** @description money per purchase unit; default: the farm's price for the fuel */
-      pricePerUnit?: number;
-      /**
-       * @description unit the given pricePerUnit is per: 'si' (the fuel's unitSi, default) or 'us' (its unitUs)
-       * @enum {string}
-       */
-      priceUnit?: 'si' | 'us';
-      /** @description output ÷ input; default: the efficiency of the house's first heater burning the fuel */
-      heaterEfficiency?: number;
-      /** @description run for one of the house's alternatives instead of the house (its fields merged onto the house, and its calendar if it has one) */
-      alternativeId?: number;
-      /**
-       * @description first day, YYYY-MM-DD; give both dates or neither. Default: the heating season in progress or, between seasons, the next one (1 Sep – 31 May north of the equator, 1 Mar – 30 Nov south); with a temperature log, the whole days the log covers (at most 366)
-       * @example 2026-09-01
-       */
-      startDate?: string;
-      /**
-       * @description last day (inclusive), YYYY-MM-DD; at most 366 days from startDate
-       * @example 2027-05-31
-       */
-      endDate?: string;
-      /**
-       * @description 'handbook' (default) or 'calibrated': each house's heat-loss coefficient × the factor of the farm's newest calibration against its fuel bills (a house without one stays on the handbook, and the answer says so)
-       * @enum {string}
-       */
-      heatLossBasis?: 'handbook' | 'calibrated';
-    };
-    SeasonPeriodDto: {
-      /** @description YYYY-MM-DD */
-      startDate: string;
-      /** @description YYYY-MM-DD, inclusive */
-      endDate: string;
-      days: number;
-      /** @description days the production calendar heats */
-      heatedDays: number;
-    };
-    SeasonFuelDto: {
-      fuelId: string;
-      label: string;
-      /** @example L */
-      unitSi: string;
-      /** @example US gal */
-      unitUs: string;
-      /** @description null when no price is known */
-      pricePerUnit: number | null;
-      /** @enum {string} */
-      priceUnit: 'si' | 'us';
-      /** @description the unit the price is per, e.g. 'US gal' */
-      priceUnitLabel: string;
-      /** @description output ÷ input */
-      heaterEfficiency: number;
-    };
-    SeasonHeatLossDto: {
-      /** @description W/K */
-      uaCurtainOpenWPerK: number;
-      /** @description W/K (equals the open value without a curtain) */
-      uaCurtainClosedWPerK: number;
-      /** @description m² */
-      floorAreaM2: number;
-    };
-    SeasonMonthDto: {
-      /** @description heat delivered to the house, kWh */
-      energyKWh: number;
-      /** @description heat content of the fuel burnt (energy ÷ efficiency), kWh */
-      fuelInputKWh: number;
-      /** @description fuel in its SI purchase unit (the fuel's unitSi) */
-      fuelQuantitySi: number;
-      /** @description fuel in its US purchase unit (the fuel's unitUs) */
-      fuelQuantityUs: number;
-      /** @description money, in the farm's currency; null when no fuel price is known (heat and fuel are still given) */
-      cost: number | null;
-      year: number;
-      month: number;
-      /** @description heated hours with any heat demand */
-      heatingHours: number;
-      /** @description highest hourly-average heat demand of the month, W */
-      peakW: number;
-      /** @description degree-days to the night setpoint, K·day */
-      degreeDaysKDay: number;
-      /** @description heat the installed heaters could not deliver, kWh */
-      unmetHeatKWh: number;
-      /** @description hours in which the heaters could not hold the setpoint */
-      hoursBelowSetpoint: number;
-      /** @description electricity the supplemental lamps use in the month, kWh (0 without) */
-      lampElectricityKWh: number;
-      /** @description the part of it that ends as heat inside the house, kWh */
-      lampHeatKWh: number;
-      /** @description heat the heaters did not have to deliver because the lamps gave it, kWh */
-      lampHeatSavedKWh: number;
-    };
-    SeasonTotalDto: {
-      /** @description heat delivered to the house, kWh */
-      energyKWh: number;
-      /** @description heat content of the fuel burnt (energy ÷ efficiency), kWh */
-      fuelInputKWh: number;
-      /** @description fuel in its SI purchase unit (the fuel's unitSi) */
-      fuelQuantitySi: number;
-      /** @description fuel in its US purchase unit (the fuel's unitUs) */
-      fuelQuantityUs: number;
-      /** @description money, in the farm's currency; null when no fuel price is known (heat and fuel are still given) */
-      cost: number | null;
-      heatingHours: number;
-      /** @description heat the installed heaters could not deliver, kWh */
-      unmetHeatKWh: number;
-      /** @description hours in which the heaters could not hold the setpoint */
-      hoursBelowSetpoint: number;
-    };
-    SeasonHeaterCapacityDto: {
-      /** @description Σ count × rated input × efficiency of the house’s heaters, W; heat delivered in an hour is capped at it */
-      installedOutputW: number;
-      /** @description heater units installed */
-      heaterCount: number;
-      /** @description set when the heaters cannot hold the setpoint in some hour; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
-      caution: string | null;
-    };
-    SeasonPeakDto: {
-      /** @description W */
-      heatW: number;
-      /** @description local standard time, YYYY-MM-DDTHH:MM */
-      at: string;
-      /** @description °C */
-      outdoorC: number;
-    };
-    SeasonFuelAmountDto: {
-      /** @description heat delivered to the house, kWh */
-      energyKWh: number;
-      /** @description heat content of the fuel burnt (energy ÷ efficiency), kWh */
-      fuelInputKWh: number;
-      /** @description fuel in its SI purchase unit (the fuel's unitSi) */
-      fuelQuantitySi: number;
-      /** @description fuel in its US purchase unit (the fuel's unitUs) */
-      fuelQuantityUs: number;
-      /** @description money, in the farm's currency; null when no fuel price is known (heat and fuel are still given) */
-      cost: number | null;
-    };
-    SeasonLampsDto: {
-      /** @description reference-data lamps id */
-      lampTypeId: string | null;
-      lampTypeLabel: string | null;
-      /** @description W/m² of floor */
-      powerDensityWPerM2: number;
-      /** @description January to December, h */
-      hoursPerDayByMonth: number[];
-      /** @description share of the input that heats the house, 0–1 */
-      heatToHouseFraction: number;
-      /** @description electrical input of all the lamps while they run, W */
-      electricW: number;
-      /** @description heat they give the house while they run, W */
-      heatW: number;
-      /** @description electricity the lamps add over the season (heated days only), kWh */
-      electricityKWh: number;
-      /** @description the part of it that ends as heat inside the house, kWh */
-      heatToHouseKWh: number;
-      /** @description heat the heaters did not deliver because the lamps gave it, kWh */
-      heatSavedKWh: number;
-      /** @description the fuel (and money, with a price) that heat would have taken */
-      fuelSaved: components['schemas']['SeasonFuelAmountDto'];
-      /** @description heat saved ÷ heat into the house: the rest came when the house needed no heat */
-      usefulShareOfHeat: number;
-    };
-    SeasonLossPartDto: {
-      /**
-       * @description the design night's component keys
-       * @enum {string}
-       */
-      key: 'roof' | 'sidewalls' | 'endwalls' | 'kneewall' | 'perimeter' | 'infiltration' | 'sky';
-      label: string;
-      /** @description heat lost through this part over the heated hours that lose heat, kWh */
-      energyKWh: number;
-      /** @description share of all the heat lost, 0–1 */
-      share: number;
-    };
-    SeasonLossBreakdownDto: {
-      /** @description the night sky is the part with key sky */
-      parts: components['schemas']['SeasonLossPartDto'][];
-      /** @description Σ parts, kWh */
-      lostKWh: number;
-      /** @description the sky's part (long-wave radiation to the night sky), kWh */
-      skyKWh: number;
-      /** @description heat the sun supplied in place of the heaters, kWh */
-      solarOffsetKWh: number;
-      /** @description heat the heaters could not deliver, kWh */
-      unmetHeatKWh: number;
-      /** @description lostKWh − solarOffsetKWh − unmetHeatKWh: the heat delivered, kWh */
-      deliveredKWh: number;
-    };
-    DegreeDayStepDto: {
-      /** @enum {string} */
-      key: 'degree-day' | 'hourly-curve' | 'day-setpoint' | 'curtain' | 'sky' | 'sun' | 'lamps' | 'heater-capacity';
-      label: string;
-      /** @description kWh */
-      energyKWh: number;
-      /** @description change from the previous step, kWh */
-      changeKWh: number;
-    };
-    ConventionalBaseCheckDto: {
-      /** @description heat delivered to the house, kWh */
-      energyKWh: number;
-      /** @description heat content of the fuel burnt (energy ÷ efficiency), kWh */
-      fuelInputKWh: number;
-      /** @description fuel in its SI purchase unit (the fuel's unitSi) */
-      fuelQuantitySi: number;
-      /** @description fuel in its US purchase unit (the fuel's unitUs) */
-      fuelQuantityUs: number;
-      /** @description money, in the farm's currency; null when no fuel price is known (heat and fuel are still given) */
-      cost: number | null;
-      /** @description 18.333 °C (65 °F) */
-      baseTemperatureC: number;
-      /** @description degree-days of the heated days to that base, K·day */
-      degreeDaysKDay: number;
-      /** @description °F·day */
-      degreeDaysFDay: number;
-      /** @description why the setpoint base is the one for a greenhouse; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
-      note: string;
-      source: string;
-    };
-    DegreeDayCrossCheckDto: {
-      /** @description heat delivered to the house, kWh */
-      energyKWh: number;
-      /** @description heat content of the fuel burnt (energy ÷ efficiency), kWh */
-      fuelInputKWh: number;
-      /** @description fuel in its SI purchase unit (the fuel's unitSi) */
-      fuelQuantitySi: number;
-      /** @description fuel in its US purchase unit (the fuel's unitUs) */
-      fuelQuantityUs: number;
-      /** @description money, in the farm's currency; null when no fuel price is known (heat and fuel are still given) */
-      cost: number | null;
-      /** @description the base each heated day is counted to; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
-      baseDescription: string;
-      /** @description the base when it is the same all season, else null, °C */
-      baseTemperatureC: number | null;
-      /** @description UA used (curtain open), W/K */
-      uaWPerK: number;
-      /** @description K·day */
-      degreeDaysKDay: number;
-      /** @description °F·day */
-      degreeDaysFDay: number;
-      /** @description hourly result ÷ degree-day result − 1 (null when the degree-day result is 0) */
-      hourlyDifferenceFraction: number | null;
-      /** @description from the degree-day figure to the hourly one, one effect at a time */
-      steps: components['schemas']['DegreeDayStepDto'][];
-      /** @description may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
-      explanation: string[];
-      /** @description the same method to the conventional 65 °F (18.3 °C) base, beside the setpoint base */
-      conventionalBase: components['schemas']['ConventionalBaseCheckDto'];
-    };
-    SeasonAssumptionDto: {
-      key: string;
-      /** @description may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
-      label: string;
-      value: number | string;
-      unit: string;
-      source: string;
-      /** @enum {string} */
-      confidence: 'verified' | 'verified-secondary' | 'derived' | 'memory' | 'common-practice' | 'user-entered';
-      /** @description true where the user's own value replaced the reference value */
-      overridden: boolean;
-    };
-    SeasonInputsUsedDto: {
-      /** @enum {string} */
-      climateSource: 'normals' | 'temperature-log';
-      temperatureLogId: number | null;
-      temperatureLogName: string | null;
-      fuelId: string;
-      /** @enum {string} */
-      fuelFrom: 'request' | 'house-heater';
-      /** @description null when the farm has no price for the fuel and the request gave none */
-      pricePerUnit: number | null;
-      /** @enum {string} */
-      priceUnit: 'si' | 'us';
-      /**
-       * @description 'none': no price yet, so heat and fuel are given and every cost is null
-       * @enum {string}
-       */
-      priceFrom: 'request' | 'farm-fuel-prices' | 'none';
-      /**
-       * @description the farm's currency (ISO 4217) every amount is in
-       * @example USD
-       */
-      currency: string;
-      heaterEfficiency: number;
-      /** @enum {string} */
-      heaterEfficiencyFrom: 'request' | 'house-heater';
-      /** @description the farm's IANA zone */
-      timeZone: string;
-      /** @description the zone's standard-time offset from UTC (daylight saving ignored), h */
-      utcOffsetHours: number;
-      /**
-       * @description the basis asked for
-       * @enum {string}
-       */
-      heatLossBasisRequested: 'handbook' | 'calibrated';
-      /**
-       * @description the basis used (handbook when the house has no calibration)
-       * @enum {string}
-       */
-      heatLossBasis: 'handbook' | 'calibrated';
-      /** @description multiplier applied to the heat-loss coefficient (1 on the handbook basis) */
-      heatLossFactor: number;
-      calibrationId: number | null;
-      /** @description when the calibration used was run, ISO 8601 */
-      calibratedAt: string | null;
-      /** @description why the handbook was used although calibrated was asked for, or that the house changed after its calibration */
-      heatLossBasisNote: string | null;
-      startDate: string;
-      endDate: string;
-      /** @enum {string} */
-      seasonFrom: 'request' | 'default-heating-season' | 'temperature-log';
-      /** @description periods of the house's production calendar (0 = heated all season at the house setpoints) */
-      calendarPeriodCount: number;
-    };
-    HouseSeasonEstimateDto: {
-      period: components['schemas']['SeasonPeriodDto'];
-      fuel: components['schemas']['SeasonFuelDto'];
-      heatLoss: components['schemas']['SeasonHeatLossDto'];
-      /** @description one row per calendar month the season touches */
-      monthly: components['schemas']['SeasonMonthDto'][];
-      total: components['schemas']['SeasonTotalDto'];
-      heaterCapacity: components['schemas']['SeasonHeaterCapacityDto'];
-      /** @description the hour of highest heat demand; null if no heat was needed */
-      peak: components['schemas']['SeasonPeakDto'] | null;
-      /** @description share of the season's heat delivered at night (sunset to sunrise) */
-      nightShareOfHeat: number;
-      /** @description heat the sun supplied in place of the heater, kWh */
-      solarOffsetKWh: number;
-      /** @description the supplemental lamps' electricity, heat and the fuel their heat saves; null without lamps */
-      lamps: components['schemas']['SeasonLampsDto'] | null;
-      /** @description the season's heat by part of the house, with the night sky as its own part */
-      lossBreakdown: components['schemas']['SeasonLossBreakdownDto'];
-      degreeDays: components['schemas']['DegreeDayCrossCheckDto'];
-      assumptions: components['schemas']['SeasonAssumptionDto'][];
-      /** @description combustion / electrical safety cautions; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
-      cautions: string[];
-      houseId: number;
-      inputsUsed: components['schemas']['SeasonInputsUsedDto'];
-    };
-    NightDemandRequestDto: {
-      /** @description 'normals' (default: the farm's monthly climate normals) or { temperatureLogId } to use a logged year instead */
-      climateSource?: 'normals' | components['schemas']['TemperatureLogClimateSourceDto'];
-      /** @description reference-data fuels id; default: the fuel of the house's first heater */
-      fuelId?: string;
-      /** @description money per purchase unit; default: the farm's price for the fuel */
-      pricePerUnit?: number;
-      /**
-       * @description unit the given pricePerUnit is per: 'si' (the fuel's unitSi, default) or 'us' (its unitUs)
-       * @enum {string}
-       */
-      priceUnit?: 'si' | 'us';
-      /** @description output ÷ input; default: the efficiency of the house's first heater burning the fuel */
-      heaterEfficiency?: number;
-      /**
-       * @description the evening the night begins, YYYY-MM-DD
-       * @example 2027-01-15
-       */
-      date: string;
-      /** @description °C; default: the house's night setpoint */
-      nightSetpointC?: number;
-    };
-    NightHourDto: {
-      /** @description start of the hour, local standard time */
-      at: string;
-      /** @description °C */
-      outdoorC: number;
-      /** @description share of the hour after sunset / before sunrise */
-      nightShare: number;
-      /** @description average heat demand over the hour's night share, W */
-      heatW: number;
-      /** @description the part of heatW lost to the night sky, W */
-      skyW: number;
-      /** @description heat the heaters deliver (at most their installed output), W */
-      deliveredW: number;
-      /** @description true when the heaters cannot hold the night setpoint this hour */
-      belowSetpoint: boolean;
-    };
-    SeasonRunInputsDto: {
-      /** @enum {string} */
-      climateSource: 'normals' | 'temperature-log';
-      temperatureLogId: number | null;
-      temperatureLogName: string | null;
-      fuelId: string;
-      /** @enum {string} */
-      fuelFrom: 'request' | 'house-heater';
-      /** @description null when the farm has no price for the fuel and the request gave none */
-      pricePerUnit: number | null;
-      /** @enum {string} */
-      priceUnit: 'si' | 'us';
-      /**
-       * @description 'none': no price yet, so heat and fuel are given and every cost is null
-       * @enum {string}
-       */
-      priceFrom: 'request' | 'farm-fuel-prices' | 'none';
-      /**
-       * @description the farm's currency (ISO 4217) every amount is in
-       * @example USD
-       */
-      currency: string;
-      heaterEfficiency: number;
-      /** @enum {string} */
-      heaterEfficiencyFrom: 'request' | 'house-heater';
-      /** @description the farm's IANA zone */
-      timeZone: string;
-      /** @description the zone's standard-time offset from UTC (daylight saving ignored), h */
-      utcOffsetHours: number;
-    };
-    HouseNightDemandDto: {
-      /** @description heat delivered to the house, kWh */
-      energyKWh: number;
-      /** @description heat content of the fuel burnt (energy ÷ efficiency), kWh */
-      fuelInputKWh: number;
-      /** @description fuel in its SI purchase unit (the fuel's unitSi) */
-      fuelQuantitySi: number;
-      /** @description fuel in its US purchase unit (the fuel's unitUs) */
-      fuelQuantityUs: number;
-      /** @description money, in the farm's currency; null when no fuel price is known (heat and fuel are still given) */
-      cost: number | null;
-      houseId: number;
-      /** @description the evening the night begins, YYYY-MM-DD */
-      date: string;
-      /** @description local standard time; null where the sun does not set */
-      sunset: string | null;
-      /** @description next morning, local standard time; null where the sun does not rise */
-      sunrise: string | null;
-      /** @description h */
-      nightHours: number;
-      /** @description °C */
-      nightSetpointC: number;
-      /** @description UA with the curtain drawn (if any), W/K */
-      uaWPerK: number;
-      /** @description highest hourly heat demand, W */
-      peakW: number;
-      /** @description coldest night hour, °C */
-      minOutdoorC: number | null;
-      /** @description installed heater output, W */
-      installedOutputW: number;
-      /** @description heat the heaters could not deliver, kWh */
-      unmetHeatKWh: number;
-      /** @description heat lost to the night sky over the night (part of the need), kWh */
-      skyKWh: number;
-      /** @description night hours in which the heaters cannot hold the setpoint */
-      hoursBelowSetpoint: number;
-      /** @description set when some hour cannot be held; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
-      capacityCaution: string | null;
-      hourly: components['schemas']['NightHourDto'][];
-      /** @description may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
-      cautions: string[];
-      inputsUsed: components['schemas']['SeasonRunInputsDto'];
-    };
-    MeasureFuelPriceDto: {
-      /** @description reference-data fuels id */
-      fuelId: string;
-      /** @description without a price the fuel switch is reported as not applicable */
-      pricePerUnit?: number;
-      /**
-       * @description needed with a price
-       * @enum {string}
-       */
-      priceUnit?: 'si' | 'us';
-    };
-    MeasureDto: {
-      /** @enum {string} */
-      kind:
-        | 'second-poly-layer'
-        | 'thermal-curtain'
-        | 'perimeter-insulation'
-        | 'sealing'
-        | 'night-setpoint-lower'
-        | 'later-start'
-        | 'heater-efficiency'
-        | 'fuel-switch';
-      /** @description what the measure costs, same currency as the fuel price; omit (or null) when not known yet: the payback then asks for it */
-      costAmount?: number | null;
-      label?: string;
-      /** @description second-poly-layer: surfaces to cover */
-      surfaces?: ('roof' | 'sidewalls')[];
-      /** @description second-poly-layer: the coverings id the surfaces become */
-      coveringId?: string;
-      /** @description perimeter-insulation: kneewalls id the kneewall is built of (default 2 in foam board) */
-      kneewallId?: string;
-      /** @description perimeter-insulation: kneewall height, m, where the house gives none (default 0.91 m) */
-      kneewallHeightM?: number;
-      /** @description thermal-curtain: curtains id */
-      curtainId?: string;
-      /** @description sealing: air-leakage class to reach */
-      airLeakageClassId?: string;
-      /** @description sealing: measured air changes per hour after sealing */
-      airChangesPerHour?: number;
-      /** @description night-setpoint-lower: K (0 is accepted and reported as not applicable) */
-      lowerByK?: number;
-      /** @description later-start: days */
-      delayDays?: number;
-      /**
-       * @description heater-efficiency: the kind of heater the units are replaced by (default: condensing); its typical efficiency applies unless `efficiency` is given
-       * @enum {string}
-       */
-      heaterType?:
-        'gravity-vented' | 'power-vented' | 'separated-combustion' | 'condensing' | 'unvented' | 'boiler' | 'electric';
-      /** @description heater-efficiency / fuel-switch: efficiency of the new heaters */
-      efficiency?: number;
-      /** @description fuel-switch: the new fuel and its price (without it the measure is reported as not applicable) */
-      fuel?: components['schemas']['MeasureFuelPriceDto'];
-    };
-    MeasuresRequestDto: {
-      /** @description 'normals' (default: the farm's monthly climate normals) or { temperatureLogId } to use a logged year instead */
-      climateSource?: 'normals' | components['schemas']['TemperatureLogClimateSourceDto'];
-      /** @description reference-data fuels id; default: the fuel of the house's first heater */
-      fuelId?: string;
-      /** @description money per purchase unit; default: the farm's price for the fuel */
-      pricePerUnit?: number;
-      /**
-       * @description unit the given pricePerUnit is per: 'si' (the fuel's unitSi, default) or 'us' (its unitUs)
-       * @enum {string}
-       */
-      priceUnit?: 'si' | 'us';
-      /** @description output ÷ input; default: the efficiency of the house's first heater burning the fuel */
-      heaterEfficiency?: number;
-      /** @description run for one of the house's alternatives instead of the house (its fields merged onto the house, and its calendar if it has one) */
-      alternativeId?: number;
-      /**
-       * @description first day, YYYY-MM-DD; give both dates or neither. Default: the heating season in progress or, between seasons, the next one (1 Sep – 31 May north of the equator, 1 Mar – 30 Nov south); with a temperature log, the whole days the log covers (at most 366)
-       * @example 2026-09-01
-       */
-      startDate?: string;
-      /**
-       * @description last day (inclusive), YYYY-MM-DD; at most 366 days from startDate
-       * @example 2027-05-31
-       */
-      endDate?: string;
-      /**
-       * @description 'handbook' (default) or 'calibrated': each house's heat-loss coefficient × the factor of the farm's newest calibration against its fuel bills (a house without one stays on the handbook, and the answer says so)
-       * @enum {string}
-       */
-      heatLossBasis?: 'handbook' | 'calibrated';
-      /** @description measures to compare; an empty list compares the default measures (reference-data/measures.json) that apply to the house, without costs, so a ranking shows at once */
-      measures: components['schemas']['MeasureDto'][];
-    };
-    MeasureSeasonDto: {
-      /** @description heat delivered to the house, kWh */
-      energyKWh: number;
-      /** @description heat content of the fuel burnt (energy ÷ efficiency), kWh */
-      fuelInputKWh: number;
-      /** @description fuel in its SI purchase unit (the fuel's unitSi) */
-      fuelQuantitySi: number;
-      /** @description fuel in its US purchase unit (the fuel's unitUs) */
-      fuelQuantityUs: number;
-      /** @description money, in the farm's currency; null when no fuel price is known (heat and fuel are still given) */
-      cost: number | null;
-      fuelId: string;
-      unitSi: string;
-      unitUs: string;
-    };
-    MeasureLightChangeDto: {
-      /**
-       * @description 'kneewall': light through the whole envelope, an opaque kneewall passing none
-       * @enum {string}
-       */
-      surface: 'roof' | 'sidewalls' | 'kneewall';
-      /** @description light transmittance before, 0–1 */
-      before: number;
-      /** @description light transmittance after, 0–1 */
-      after: number;
-      /** @description relative change of light reaching the crop, e.g. −0.11 for 11 % less */
-      relativeChange: number;
-      source: string;
-    };
-    MeasureResultDto: {
-      /** @description position in the request list (or in the default list) */
-      index: number;
-      /** @enum {string} */
-      kind:
-        | 'second-poly-layer'
-        | 'thermal-curtain'
-        | 'perimeter-insulation'
-        | 'sealing'
-        | 'night-setpoint-lower'
-        | 'later-start'
-        | 'heater-efficiency'
-        | 'fuel-switch';
-      label: string;
-      /** @description what changed, in words; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
-      description: string;
-      /** @description null when no cost was entered */
-      costAmount: number | null;
-      /** @description false when the measure changes nothing for this house (already done, or no better than what it has) */
-      applicable: boolean;
-      /** @description why the measure does not apply, in plain words; null when it applies; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
-      notApplicableReason: string | null;
-      /** @description the season with the measure (the house as it is when the measure does not apply) */
-      season: components['schemas']['MeasureSeasonDto'];
-      /** @description heat the house no longer needs, kWh per season (0 for heater or fuel changes) */
-      heatSavedKWh: number;
-      /** @description fuel energy no longer bought, kWh per season */
-      fuelInputSavedKWh: number;
-      /** @description in the baseline fuel's unitSi; null when the measure burns another fuel */
-      fuelSavedSi: number | null;
-      /** @description in the baseline fuel's unitUs */
-      fuelSavedUs: number | null;
-      /** @description money saved per season (= per year with one season a year); negative when it costs more to run; null without a fuel price */
-      yearlyMoneySaved: number | null;
-      /**
-       * @description 'years': cost ÷ saving; 'immediate': cost 0 and a saving; 'enter-cost': a saving but no cost entered; 'enter-price': fuel saved but no fuel price known; 'never': no money saved; 'not-applicable': changes nothing for this house
-       * @enum {string}
-       */
-      paybackStatus: 'years' | 'immediate' | 'enter-cost' | 'enter-price' | 'never' | 'not-applicable';
-      /** @description cost ÷ yearly money saved, years (0 when 'immediate'); null for the other statuses */
-      paybackYears: number | null;
-      /**
-       * @description '2.4 years', 'immediately', 'enter a cost', 'enter the fuel price', 'never' or 'not applicable'
-       * @example 2.4 years
-       */
-      paybackText: string;
-      /** @description light change for measures that add a layer or a screen */
-      lightChange: components['schemas']['MeasureLightChangeDto'] | null;
-      /** @description may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
-      notes: string[];
-    };
-    MeasureComparisonDto: {
-      houseId: number;
-      /** @description the season of the house as it is */
-      baseline: components['schemas']['MeasureSeasonDto'];
-      /** @description shortest payback first (equal paybacks: larger saving first), then measures without a cost, then those that never pay back, then those that do not apply */
-      measures: components['schemas']['MeasureResultDto'][];
-      /** @description true when the request listed no measures and the default measures that apply to the house were compared without costs */
-      defaultsUsed: boolean;
-      /** @description may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
-      notes: string[];
-      inputsUsed: components['schemas']['SeasonInputsUsedDto'];
-    };
-    ProductionPeriodDto: {
-      /**
-       * @description first day, 'MM-DD'
-       * @example 11-15
-       */
-      startMonthDay: string;
-      /**
-       * @description last day (inclusive), 'MM-DD'; may wrap the year end
-       * @example 03-31
-       */
-      endMonthDay: string;
-      /** @enum {string} */
-      mode: 'heated' | 'empty';
-      /** @description replaces the house's day heating setpoint in this period, °C */
-      dayHeatingC?: number;
-      /** @description replaces the house's night heating setpoint in this period, °C */
-      nightHeatingC?: number;
-      /** @example Spring bedding crop */
-      label?: string;
-    };
-    ProductionCalendarDto: {
-      /** @description empty list = heated all season at the house setpoints; otherwise days no period covers are unheated, and where periods overlap the later one wins */
-      periods: components['schemas']['ProductionPeriodDto'][];
-      houseId: number;
-      /** @description 0 until the first save, then raised by one on every save; send it in If-Match */
-      version: number;
-    };
-    PutProductionCalendarDto: {
-      /** @description empty list = heated all season at the house setpoints; otherwise days no period covers are unheated, and where periods overlap the later one wins */
-      periods: components['schemas']['ProductionPeriodDto'][];
-    };
-    FuelPriceDto: {
-      /** @description reference-data fuels id (one price per fuel) */
-      fuelId: string;
-      /** @description money per purchase unit */
-      pricePerUnit: number;
-      /**
-       * @description 'si': per the fuel's unitSi (m³, L, kg, kWh); 'us': per its unitUs (therm, US gal, short ton, kWh)
-       * @enum {string}
-       */
-      priceUnit: 'si' | 'us';
-      /** @description where the price came from (supplier, contract, date) */
-      note?: string | null;
-      /** @example Propane */
-      fuelLabel: string;
-      /**
-       * @description the unit the price is per
-       * @example US gal
-       */
-      priceUnitLabel: string;
-    };
-    FarmFuelPricesDto: {
-      farmId: number;
-      prices: components['schemas']['FuelPriceDto'][];
-      /** @description version of the set, raised by one on every save; send it in If-Match */
-      version: number;
-    };
-    FuelPriceInputDto: {
-      /** @description reference-data fuels id (one price per fuel) */
-      fuelId: string;
-      /** @description money per purchase unit */
-      pricePerUnit: number;
-      /**
-       * @description 'si': per the fuel's unitSi (m³, L, kg, kWh); 'us': per its unitUs (therm, US gal, short ton, kWh)
-       * @enum {string}
-       */
-      priceUnit: 'si' | 'us';
-      /** @description where the price came from (supplier, contract, date) */
-      note?: string | null;
-    };
-    PutFuelPricesDto: {
-      /** @description replaces every price of the farm */
-      prices: components['schemas']['FuelPriceInputDto'][];
-    };
-    SeasonBudgetRequestDto: {
-      /**
-       * @description first day, YYYY-MM-DD (default as for a house season)
-       * @example 2026-09-01
-       */
-      startDate?: string;
-      /**
-       * @description last day (inclusive), YYYY-MM-DD
-       * @example 2027-05-31
-       */
-      endDate?: string;
-      /** @description 'normals' (default: the farm's monthly climate normals) or { temperatureLogId } to use a logged year instead */
-      climateSource?: 'normals' | components['schemas']['TemperatureLogClimateSourceDto'];
-      /**
-       * @description 'handbook' (default) or 'calibrated': each house's heat-loss coefficient × the factor of the farm's newest calibration against its fuel bills (a house without one stays on the handbook, and the answer says so)
-       * @enum {string}
-       */
-      heatLossBasis?: 'handbook' | 'calibrated';
-    };
-    BudgetMonthOfHouseDto: {
-      year: number;
-      month: number;
-      /** @description heat delivered, kWh */
-      energyKWh: number;
-      /** @description fuel burnt, kWh */
-      fuelInputKWh: number;
-      fuelQuantitySi: number;
-      fuelQuantityUs: number;
-      /** @description null when the farm has no price for the fuel */
-      cost: number | null;
-      /** @description heat the heaters could not deliver, kWh */
-      unmetHeatKWh: number;
-      /** @description hours in which the heaters could not hold the setpoint */
-      hoursBelowSetpoint: number;
-    };
-    BudgetHouseDto: {
-      /**
-       * @description the heat-loss basis this house was estimated on
-       * @enum {string}
-       */
-      heatLossBasis: 'handbook' | 'calibrated';
-      /** @description multiplier applied to its heat-loss coefficient (1 on the handbook basis) */
-      heatLossFactor: number;
-      houseId: number;
-      name: string;
-      /** @description fuel of the first heater; null when the house has no heaters */
-      fuelId: string | null;
-      fuelLabel: string | null;
-      unitSi: string | null;
-      unitUs: string | null;
-      heaterEfficiency: number | null;
-      pricePerUnit: number | null;
-      /** @enum {string|null} */
-      priceUnit: 'si' | 'us' | null;
-      /** @description heat delivered, kWh */
-      energyKWh: number;
-      /** @description fuel burnt, kWh */
-      fuelInputKWh: number;
-      /** @description in the fuel's unitSi */
-      fuelQuantitySi: number;
-      /** @description in the fuel's unitUs */
-      fuelQuantityUs: number;
-      /** @description null when the farm has no price for the fuel */
-      cost: number | null;
-      heatedDays: number;
-      /** @description periods of the house's production calendar (0 = heated all season) */
-      calendarPeriodCount: number;
-      /** @description heat the house's heaters could not deliver, kWh */
-      unmetHeatKWh: number;
-      /** @description hours in which the heaters could not hold the setpoint */
-      hoursBelowSetpoint: number;
-      /** @description set when the heaters cannot hold the setpoint in some hour; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
-      capacityCaution: string | null;
-      monthly: components['schemas']['BudgetMonthOfHouseDto'][];
-      /** @description why the house is not (fully) budgeted, e.g. no heaters or no price */
-      problem: string | null;
-    };
-    BudgetFuelTotalDto: {
-      fuelId: string;
-      label: string;
-      unitSi: string;
-      unitUs: string;
-      houseCount: number;
-      /** @description kWh */
-      energyKWh: number;
-      /** @description kWh */
-      fuelInputKWh: number;
-      fuelQuantitySi: number;
-      fuelQuantityUs: number;
-      /** @description null when the farm has no price for the fuel */
-      cost: number | null;
-    };
-    BudgetMonthFuelDto: {
-      fuelId: string;
-      fuelQuantitySi: number;
-      fuelQuantityUs: number;
-    };
-    BudgetMonthDto: {
-      year: number;
-      month: number;
-      /** @description heat delivered to all houses, kWh */
-      energyKWh: number;
-      /** @description kWh */
-      fuelInputKWh: number;
-      /** @description cost of the houses with a price; null when no house of the month has one */
-      cost: number | null;
-      byFuel: components['schemas']['BudgetMonthFuelDto'][];
-    };
-    SeasonBudgetDto: {
-      /** @enum {string} */
-      heatLossBasisRequested: 'handbook' | 'calibrated';
-      /**
-       * @description mixed: some houses calibrated, the others on the handbook values
-       * @enum {string}
-       */
-      heatLossBasis: 'handbook' | 'calibrated' | 'mixed';
-      calibrationId: number | null;
-      calibratedAt: string | null;
-      /** @description the basis in words, for the page and the report */
-      heatLossBasisStatement: string;
-      farmId: number;
-      startDate: string;
-      endDate: string;
-      /** @enum {string} */
-      seasonFrom: 'request' | 'default-heating-season' | 'temperature-log';
-      /** @enum {string} */
-      climateSource: 'normals' | 'temperature-log';
-      temperatureLogId: number | null;
-      houses: components['schemas']['BudgetHouseDto'][];
-      byFuel: components['schemas']['BudgetFuelTotalDto'][];
-      /** @description heat delivered to all houses, kWh */
-      totalEnergyKWh: number;
-      /** @description sum of the priced houses; null when no house has a price */
-      totalCost: number | null;
-      /**
-       * @description the farm's currency (ISO 4217) every amount is in
-       * @example USD
-       */
-      currency: string;
-      /** @description false when some house has no price (or no heaters) and is left out of totalCost */
-      costComplete: boolean;
-      monthly: components['schemas']['BudgetMonthDto'][];
-      /** @description may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
-      notes: string[];
-      /** @description may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
-      cautions: string[];
-    };
-    MeasurePlanDto: {
-      houseId: number;
-      /** @description empty until the first save */
-      measures: components['schemas']['MeasureDto'][];
-      /** @description raised on every save; 0 before the first */
-      version: number;
-    };
-    PutMeasurePlanDto: {
-      /** @description the measures to keep with the house, each with its settings and cost (null cost = not known yet) */
-      measures: components['schemas']['MeasureDto'][];
-    };
-    FieldProblemDto: {
-      /**
-       * @description the house field at fault
-       * @example ridgeHeightM
-       */
-      field: string;
-      message: string;
-    };
-    AlternativeDto: {
-      id: number;
-      houseId: number;
-      name: string;
-      notes: string | null;
-      /** @description the house fields this alternative changes, merged onto the house as it is when read (JSON Merge Patch: objects such as coverings merge key by key, null inside them removes a key; other values replace the house's). Fields not named follow every later edit of the house. Example: { coverings: { roof: 'poly-double-inflated' } } */
-      patch: {
-        [key: string]: unknown;
-      };
-      /**
-       * @description the fields the patch sets
-       * @example [
-       *       "coverings.roof"
-       *     ]
-       */
-      changedFields: string[];
-      calendar: components['schemas']['ProductionPeriodDto'][] | null;
-      costAmount: number | null;
-      createdById: number | null;
-      createdByName: string | null;
-      /** @description set when the house as it is now, with this patch, is not a valid house (e.g. ridge under eave) */
-      invalid: components['schemas']['FieldProblemDto'] | null;
-      /** @description the house with the patch applied; null when invalid */
-      house: components['schemas']['HouseDto'] | null;
-      createdAt: string;
-      updatedAt: string;
-    };
-    CreateAlternativeDto: {
-      /** @example Inflated double poly */
-      name: string;
-      notes?: string | null;
-      /** @description the house fields this alternative changes, merged onto the house as it is when read (JSON Merge Patch: objects such as coverings merge key by key, null inside them removes a key; other values replace the house's). Fields not named follow every later edit of the house. Example: { coverings: { roof: 'poly-double-inflated' } } */
-      patch?: {
-        [key: string]: unknown;
-      };
-      /** @description instead of patch: the house as the user edited it (all or some of its fields); the patch is what differs from the stored house */
-      house?: {
-        [key: string]: unknown;
-      };
-      /** @description production periods in place of the house's calendar; null or absent = the house's own calendar */
-      calendar?: components['schemas']['ProductionPeriodDto'][] | null;
-      /** @description installed cost, money in the currency of the farm’s fuel prices; null = not entered */
-      costAmount?: number | null;
-    };
-    UpdateAlternativeDto: {
-      /** @example Inflated double poly */
-      name?: string;
-      notes?: string | null;
-      /** @description the house fields this alternative changes, merged onto the house as it is when read (JSON Merge Patch: objects such as coverings merge key by key, null inside them removes a key; other values replace the house's). Fields not named follow every later edit of the house. Example: { coverings: { roof: 'poly-double-inflated' } } */
-      patch?: {
-        [key: string]: unknown;
-      };
-      /** @description instead of patch: the house as the user edited it (all or some of its fields); the patch is what differs from the stored house */
-      house?: {
-        [key: string]: unknown;
-      };
-      /** @description production periods in place of the house's calendar; null or absent = the house's own calendar */
-      calendar?: components['schemas']['ProductionPeriodDto'][] | null;
-      /** @description installed cost, money in the currency of the farm’s fuel prices; null = not entered */
-      costAmount?: number | null;
-    };
-    AdoptAlternativeResultDto: {
-      house: components['schemas']['HouseDto'];
-      /** @description the house as it was, kept as an alternative */
-      previous: components['schemas']['AlternativeDto'];
-    };
-    DuplicateHouseDto: {
-      /** @description default: the house’s name + " (copy)" */
-      name?: string;
-    };
-    ColumnProposalDto: {
-      /** @description one column holding date and time (or the date alone in a daily file) */
-      timestampColumn: string | null;
-      /** @description separate date column, when the file splits date and time */
-      dateColumn: string | null;
-      /** @description separate time-of-day column */
-      timeColumn: string | null;
-      /** @description the (mean) temperature; null when a daily file has only minimum and maximum */
-      temperatureColumn: string | null;
-      minColumn: string | null;
-      maxColumn: string | null;
-      /** @enum {string} */
-      unit: 'C' | 'F';
-      /** @description why the unit was guessed, in words */
-      unitReason: string;
-      /** @enum {string} */
-      resolution: 'hourly' | 'daily';
-      /**
-       * @description order of day, month and year in dates with the year last
-       * @enum {string}
-       */
-      dateOrder: 'YMD' | 'MDY' | 'DMY';
-      /** @description true when day-first and month-first both fit the dates seen; the user should confirm */
-      dateOrderAmbiguous: boolean;
-      /** @description numbers are written with a decimal comma */
-      decimalComma: boolean;
-    };
-    TemperatureCsvInspectionDto: {
-      /**
-       * @description ',' ';' or a tab
-       * @enum {string}
-       */
-      delimiter: ',' | ';' | '\t';
-      hasHeader: boolean;
-      /** @description column names (from the header, or 'Column 1', 'Column 2' … without one) */
-      headers: string[];
-      /** @description the first data rows as they appear */
-      sampleRows: string[][];
-      /** @description data rows in the file */
-      dataRowCount: number;
-      proposal: components['schemas']['ColumnProposalDto'];
-      notes: string[];
-    };
-    TemperatureLogDto: {
-      id: number;
-      farmId: number;
-      name: string;
-      /** @enum {string} */
-      resolution: 'hourly' | 'daily';
-      /** @description first reading's date, YYYY-MM-DD */
-      startDate: string;
-      /** @description last reading's date, YYYY-MM-DD */
-      endDate: string;
-      /** @description data rows in the file */
-      rowCount: number;
-      /** @description readings kept (rows without any temperature are skipped) */
-      readingCount: number;
-      /** Format: date-time */
-      createdAt: string;
-    };
-    TemperatureColumnMappingDto: {
-      timestampColumn?: string | null;
-      dateColumn?: string | null;
-      timeColumn?: string | null;
-      temperatureColumn?: string | null;
-      minColumn?: string | null;
-      maxColumn?: string | null;
-      /** @enum {string} */
-      unit: 'C' | 'F';
-      /**
-       * @description inferred from the times when absent
-       * @enum {string}
-       */
-      resolution?: 'hourly' | 'daily';
-      /** @enum {string} */
-      dateOrder?: 'YMD' | 'MDY' | 'DMY';
-      decimalComma?: boolean;
-      /**
-       * @description detected when absent
-       * @enum {string}
-       */
-      delimiter?: ',' | ';' | '\t';
-      /** @description detected when absent */
-      hasHeader?: boolean;
-    };
-    TemperatureLogDayDto: {
-      /** @description YYYY-MM-DD (as logged) */
-      date: string;
-      /** @description lowest reading (hourly) or the logged minimum (daily), °C; null for a daily log with means only */
-      minC: number | null;
-      /** @description mean of the readings (hourly) or the logged temperature (daily), °C */
-      meanC: number;
-      /** @description °C */
-      maxC: number | null;
-      /** @description readings that day */
-      readingCount: number;
-    };
-    TemperatureLogDetailDto: {
-      id: number;
-      farmId: number;
-      name: string;
-      /** @enum {string} */
-      resolution: 'hourly' | 'daily';
-      /** @description first reading's date, YYYY-MM-DD */
-      startDate: string;
-      /** @description last reading's date, YYYY-MM-DD */
-      endDate: string;
-      /** @description data rows in the file */
-      rowCount: number;
-      /** @description readings kept (rows without any temperature are skipped) */
-      readingCount: number;
-      /** Format: date-time */
-      createdAt: string;
-      /** @description how the file was read */
-      mapping: components['schemas']['TemperatureColumnMappingDto'];
-      days: components['schemas']['TemperatureLogDayDto'][];
-    };
-    WeatherSourceDto: {
-      /** @description true when the weather is invented by the local stand-in, not measured */
-      standIn: boolean;
-      /** @description the real service in use (WEATHER_API_URL), or null */
-      serviceUrl: string | null;
-      /** @description what a reader must know about where the hours come from */
-      note: string;
-      defaultFromYear: number;
-      defaultToYear: number;
-      /** @description the last complete calendar year the service can be asked for */
-      lastCompleteYear: number;
-    };
-    WeatherYearStatusDto: {
-      year: number;
-      /** @description true when the year was already cached and the service was not asked */
-      fromCache: boolean;
-      hourCount: number;
-      missingHourCount: number;
-    };
-    WeatherYearUsageDto: {
-      year: number;
-      hourCount: number;
-      missingHourCount: number;
-      /** @description missing hours ÷ hours, 0–1 */
-      missingShare: number;
-    };
-    WeatherYearLeftOutDto: {
-      year: number;
-      hourCount: number;
-      missingHourCount: number;
-      /** @description missing hours ÷ hours, 0–1 */
-      missingShare: number;
-      reason: string;
-    };
-    MonthlyFromWeatherDto: {
-      month: number;
-      /** @description °C */
-      meanDailyMinC: number;
-      /** @description °C */
-      meanDailyMaxC: number;
-      /** @description measured ÷ clear-sky global horizontal, 0–1 */
-      clearness: number | null;
-      dayCount: number;
-    };
-    ClimateProposalDto: {
-      farmId: number;
-      fromYear: number;
-      toYear: number;
-      source: components['schemas']['WeatherSourceDto'];
-      /** @description the grid point the hours belong to (0.1°) */
-      gridLatitudeDeg: number;
-      gridLongitudeDeg: number;
-      yearsUsed: components['schemas']['WeatherYearUsageDto'][];
-      yearsLeftOut: components['schemas']['WeatherYearLeftOutDto'][];
-      hoursUsed: number;
-      /** @description dry bulb that 99.6 % of the hours are at or above, °C */
-      winterDesign996C: number;
-      /** @description dry bulb that 99 % of the hours are at or above, °C */
-      winterDesign99C: number;
-      /** @description dry bulb that 0.4 % of the hours are at or above, °C */
-      summerDesign04C: number;
-      /** @description dry bulb that 1 % of the hours are at or above, °C */
-      summerDesign1C: number;
-      /** @description mean coincident wet bulb at the 0.4 % dry bulb, °C */
-      summerCoincidentWetBulb04C: number | null;
-      /** @description mean coincident wet bulb at the 1 % dry bulb, °C */
-      summerCoincidentWetBulb1C: number | null;
-      /** @description mean daily range of the warmest month, K */
-      summerDailyRangeK: number;
-      monthly: components['schemas']['MonthlyFromWeatherDto'][];
-      /** @description what would be saved: 99.6 % heating and 1 % cooling design values, monthly normals */
-      proposedClimate: components['schemas']['SiteClimateDto'];
-      currentClimate: components['schemas']['SiteClimateDto'] | null;
-    };
-    LogProposedClimateDto: {
-      /** @description heating design dry bulb (99 % or 99.6 %), °C */
-      winterDesignC: number;
-      /** @description cooling design dry bulb (1 %), °C */
-      summerDesignC: number;
-      /** @description mean daily range on the summer design day, K */
-      summerDailyRangeK: number;
-      /** @description exactly 12 rows, one per month */
-      monthly: components['schemas']['MonthlyClimateDto'][];
-      /** @description where the numbers came from (e.g. national climate normals, station name) */
-      sourceNote?: string | null;
-      /** @description winter design wind speed, m/s; null: the 6.7 m/s (15 mph) the U tables assume (reference-data/wind.json) */
-      designWindSpeedMPerS?: number | null;
-      /** @description the farm's current coincident wet bulb (a temperature log has no humidity); null when it has none */
-      summerDesignWetBulbC: number | null;
-    };
-    LogClimateProposalDto: {
-      farmId: number;
-      temperatureLogId: number;
-      temperatureLogName: string;
-      /** @description first hour of the log, local standard time 'YYYY-MM-DDTHH:00' */
-      firstHour: string;
-      /** @description last hour of the log, local standard time */
-      lastHour: string;
-      /** @description hours from the first to the last */
-      hourCount: number;
-      /** @description hours with a reading (the percentiles are over these) */
-      hoursUsed: number;
-      /** @description dry bulb that 99.6 % of the hours are at or above, °C */
-      winterDesign996C: number;
-      /** @description dry bulb that 99 % of the hours are at or above, °C */
-      winterDesign99C: number;
-      /** @description dry bulb that 0.4 % of the hours are at or above, °C */
-      summerDesign04C: number;
-      /** @description dry bulb that 1 % of the hours are at or above, °C */
-      summerDesign1C: number;
-      /** @description always null: a temperature log has no humidity */
-      summerCoincidentWetBulb04C: number | null;
-      /** @description always null: a temperature log has no humidity */
-      summerCoincidentWetBulb1C: number | null;
-      /** @description mean daily range of the warmest month, K */
-      summerDailyRangeK: number;
-      /** @description clearness is null (no sunshine logged) */
-      monthly: components['schemas']['MonthlyFromWeatherDto'][];
-      /** @description what would be saved (99.6 % heating, 1 % cooling) */
-      proposedClimate: components['schemas']['LogProposedClimateDto'];
-      currentClimate: components['schemas']['SiteClimateDto'] | null;
-      /** @description how the values were worked out, in words */
-      notes: string[];
-    };
-    CreateReportDto: {
-      /** @example Heater sizing, north house */
-      title: string;
-      /** @description plain text */
-      notes?: string;
-      /** @description plain text */
-      recommendations?: string;
-    };
-    ReportFactDto: {
-      label: string;
-      value: string;
-    };
-    ReportBarDto: {
-      label: string;
-      value: number;
-    };
-    ReportBlockDto: {
-      /** @enum {string} */
-      kind: 'paragraph' | 'facts' | 'table' | 'list' | 'bars';
-      text?: string;
-      facts?: components['schemas']['ReportFactDto'][];
-      columns?: string[];
-      rows?: string[][];
-      items?: string[];
-      caption?: string;
-      bars?: components['schemas']['ReportBarDto'][];
-      /** @description unit of the bar values */
-      unit?: string;
-      /** @description table: a comparison, whose first cell in each row names the row and whose other columns share the width equally */
-      comparison?: boolean;
-    };
-    ReportSectionDto: {
-      heading: string;
-      blocks: components['schemas']['ReportBlockDto'][];
-    };
-    ReportDocumentDto: {
-      /** @enum {string} */
-      unitSystem: 'si' | 'us';
-      /** @enum {string} */
-      pageSize: 'A4' | 'LETTER';
-      farmName: string;
-      houseName: string;
-      title: string;
-      subtitle: string;
-      sections: components['schemas']['ReportSectionDto'][];
-      footer: string;
-    };
-    ReportDto: {
-      id: number;
-      farmId: number;
-      /** @description null once the house was deleted */
-      houseId: number | null;
-      houseName: string;
-      title: string;
-      /** @enum {string} */
-      status: 'draft' | 'issued';
-      revision: number;
-      previousReportId: number | null;
-      authorName: string;
-      createdAt: string;
-      updatedAt: string;
-      issuedAt: string | null;
-      notes: string;
-      recommendations: string;
-      /** @description the viewer may edit, issue and revise it (report:write) */
-      canWrite: boolean;
-      document: components['schemas']['ReportDocumentDto'];
-      /** @description the saved inputs and results (SI), exactly as taken when the report was created */
-      snapshot: {
-        [key: string]: unknown;
-      };
-    };
-    ReportSummaryDto: {
-      id: number;
-      farmId: number;
-      /** @description null once the house was deleted */
-      houseId: number | null;
-      houseName: string;
-      title: string;
-      /** @enum {string} */
-      status: 'draft' | 'issued';
-      revision: number;
-      previousReportId: number | null;
-      authorName: string;
-      createdAt: string;
-      updatedAt: string;
-      issuedAt: string | null;
-    };
-    ClientFarmDto: {
-      farmId: number;
-      farmName: string;
-      houseCount: number;
-      latestReport: components['schemas']['ReportSummaryDto'] | null;
-    };
-    UpdateReportDto: {
-      title?: string;
-      notes?: string;
-      recommendations?: string;
-    };
-    SendReportDto: {
-      /** @description farm members, by user id */
-      memberUserIds?: number[];
-      /** @description any other addresses */
-      emails?: string[];
-      /** @description a short message above the report */
-      message?: string;
-    };
-    ReportSentDto: {
-      /** @enum {string} */
-      status: 'sent' | 'failed';
-      /** @description why the message did not go; kept in the send log */
-      error: string | null;
-      recipients: string[];
-    };
-    SideBySideRequestDto: {
-      /** @description 'normals' (default: the farm's monthly climate normals) or { temperatureLogId } to use a logged year instead */
-      climateSource?: 'normals' | components['schemas']['TemperatureLogClimateSourceDto'];
-      /** @description reference-data fuels id; default: the fuel of the house's first heater */
-      fuelId?: string;
-      /** @description money per purchase unit; default: the farm's price for the fuel */
-      pricePerUnit?: number;
-      /**
-       * @description unit the given pricePerUnit is per: 'si' (the fuel's unitSi, default) or 'us' (its unitUs)
-       * @enum {string}
-       */
-      priceUnit?: 'si' | 'us';
-      /** @description output ÷ input; default: the efficiency of the house's first heater burning the fuel */
-      heaterEfficiency?: number;
-      /**
-       * @description first day, YYYY-MM-DD; give both dates or neither. Default: the heating season in progress or, between seasons, the next one (1 Sep – 31 May north of the equator, 1 Mar – 30 Nov south); with a temperature log, the whole days the log covers (at most 366)
-       * @example 2026-09-01
-       */
-      startDate?: string;
-      /**
-       * @description last day (inclusive), YYYY-MM-DD; at most 366 days from startDate
-       * @example 2027-05-31
-       */
-      endDate?: string;
-      /**
-       * @description 'handbook' (default) or 'calibrated': each house's heat-loss coefficient × the factor of the farm's newest calibration against its fuel bills (a house without one stays on the handbook, and the answer says so)
-       * @enum {string}
-       */
-      heatLossBasis?: 'handbook' | 'calibrated';
-      /** @description ids of the house's alternatives to set beside it, in column order (at most 4) */
-      alternativeIds?: number[];
-    };
-    SeasonEstimateDto: {
-      period: components['schemas']['SeasonPeriodDto'];
-      fuel: components['schemas']['SeasonFuelDto'];
-      heatLoss: components['schemas']['SeasonHeatLossDto'];
-      /** @description one row per calendar month the season touches */
-      monthly: components['schemas']['SeasonMonthDto'][];
-      total: components['schemas']['SeasonTotalDto'];
-      heaterCapacity: components['schemas']['SeasonHeaterCapacityDto'];
-      /** @description the hour of highest heat demand; null if no heat was needed */
-      peak: components['schemas']['SeasonPeakDto'] | null;
-      /** @description share of the season's heat delivered at night (sunset to sunrise) */
-      nightShareOfHeat: number;
-      /** @description heat the sun supplied in place of the heater, kWh */
-      solarOffsetKWh: number;
-      /** @description the supplemental lamps' electricity, heat and the fuel their heat saves; null without lamps */
-      lamps: components['schemas']['SeasonLampsDto'] | null;
-      /** @description the season's heat by part of the house, with the night sky as its own part */
-      lossBreakdown: components['schemas']['SeasonLossBreakdownDto'];
-      degreeDays: components['schemas']['DegreeDayCrossCheckDto'];
-      assumptions: components['schemas']['SeasonAssumptionDto'][];
-      /** @description combustion / electrical safety cautions; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
-      cautions: string[];
-    };
-    SurfaceLightDto: {
-      /** @enum {string} */
-      group: 'roof' | 'sidewalls' | 'endwalls';
-      coveringId: string;
-      coveringLabel: string;
-      /** @description share of daylight the covering lets through (reference value) */
-      lightTransmittance: number;
-      /** @description transmittance ÷ the house's − 1 for the same surface (negative = light lost) */
-      changeFromHouse: number;
-    };
-    VersusHouseDto: {
-      /** @description the house's season cost − this column's, money a year (positive = saves); null without a fuel price */
-      yearlySaving: number | null;
-      /** @description heat delivered, house − this column, kWh a season */
-      heatSavedKWh: number;
-      /** @description heat content of the fuel burnt, house − this column, kWh a season */
-      fuelInputSavedKWh: number;
-      /** @description design-night heat loss, this column − house, W */
-      designHeatLossChangeW: number;
-      /** @description cost ÷ yearly saving, years */
-      paybackYears: number | null;
-      /**
-       * @description 'enter-cost' when no cost is entered; 'enter-price' when the farm has no price for the fuel; 'never' when it saves nothing
-       * @enum {string}
-       */
-      paybackStatus: 'years' | 'immediate' | 'enter-cost' | 'enter-price' | 'never';
-    };
-    SideBySideColumnDto: {
-      /**
-       * @description 'house' or 'alternative-<id>'
-       * @example alternative-12
-       */
-      key: string;
-      alternativeId: number | null;
-      name: string;
-      /** @description the house fields the alternative sets (none for the house) */
-      changedFields: string[];
-      /** @description true when the alternative brings its own production calendar */
-      ownCalendar: boolean;
-      /** @description installed cost; null = not entered */
-      costAmount: number | null;
-      /** @description set when this alternative cannot be computed now (e.g. ridge under eave after a house edit) */
-      invalid: components['schemas']['FieldProblemDto'] | null;
-      heating: components['schemas']['HeatingEstimateDto'] | null;
-      cooling: components['schemas']['CoolingEstimateDto'] | null;
-      season: components['schemas']['SeasonEstimateDto'] | null;
-      light: components['schemas']['SurfaceLightDto'][] | null;
-      /** @description null for the house */
-      versusHouse: components['schemas']['VersusHouseDto'] | null;
-    };
-    SideBySideDto: {
-      houseId: number;
-      houseName: string;
-      /** @description the house first, then each alternative */
-      columns: components['schemas']['SideBySideColumnDto'][];
-      /** @description the design night of the house's column */
-      heatingConditionsUsed: components['schemas']['HeatingConditionsUsedDto'];
-      /** @description the season inputs of the house's column */
-      seasonInputsUsed: components['schemas']['SeasonInputsUsedDto'];
-    };
-    FuelRecordDto: {
-      id: number;
-      farmId: number;
-      fuelId: string;
-      fuelLabel: string;
-      quantity: number;
-      quantityUnit: string;
-      /** @description the energy the quantity holds (higher heat content), kWh */
-      fuelEnergyKWh: number;
-      cost: number | null;
-      startDate: string;
-      endDate: string;
-      days: number;
-      houseIds: number[];
-      nonHeatingPerDay: number | null;
-      note: string | null;
-      version: number;
-    };
-    CreateFuelRecordDto: {
-      /**
-       * @description reference-data fuels id
-       * @example propane
-       */
-      fuelId: string;
-      /** @example 1200 */
-      quantity: number;
-      /**
-       * @description one of the fuel's purchase units: its unitSi or unitUs in reference-data/fuels.json (therm, m³, US gal, L, kWh, short ton, kg)
-       * @example US gal
-       */
-      quantityUnit: string;
-      /** @description money, the farm's currency; null = not entered */
-      cost?: number | null;
-      /**
-       * @description first day the bill covers (for a tank delivery: the day after the previous fill), YYYY-MM-DD
-       * @example 2025-11-01
-       */
-      startDate: string;
-      /**
-       * @description last day the bill covers (inclusive), YYYY-MM-DD; at most 366 days after the start
-       * @example 2025-11-30
-       */
-      endDate: string;
-      /** @description houses the meter or tank serves (houses of this farm) */
-      houseIds: number[];
-      /** @description fuel used for other things than heating the houses (a dryer, washing water), in quantityUnit per day; null = none */
-      nonHeatingPerDay?: number | null;
-      note?: string | null;
-    };
-    UpdateFuelRecordDto: {
-      /**
-       * @description reference-data fuels id
-       * @example propane
-       */
-      fuelId?: string;
-      /** @example 1200 */
-      quantity?: number;
-      /**
-       * @description one of the fuel's purchase units: its unitSi or unitUs in reference-data/fuels.json (therm, m³, US gal, L, kWh, short ton, kg)
-       * @example US gal
-       */
-      quantityUnit?: string;
-      /** @description money, the farm's currency; null = not entered */
-      cost?: number | null;
-      /**
-       * @description first day the bill covers (for a tank delivery: the day after the previous fill), YYYY-MM-DD
-       * @example 2025-11-01
-       */
-      startDate?: string;
-      /**
-       * @description last day the bill covers (inclusive), YYYY-MM-DD; at most 366 days after the start
-       * @example 2025-11-30
-       */
-      endDate?: string;
-      /** @description houses the meter or tank serves (houses of this farm) */
-      houseIds?: number[];
-      /** @description fuel used for other things than heating the houses (a dryer, washing water), in quantityUnit per day; null = none */
-      nonHeatingPerDay?: number | null;
-      note?: string | null;
-    };
-    FuelRecordColumnMappingDto: {
-      /** @description column holding the fuel (id or name); or give fuelId for every row */
-      fuelColumn?: string;
-      /** @description the fuel of every row, when the file has no fuel column */
-      fuelId?: string;
-      quantityColumn: string;
-      /** @description column holding the unit; or give unit for every row */
-      unitColumn?: string;
-      /** @description the unit of every row, when the file has no unit column */
-      unit?: string;
-      costColumn?: string;
-      startColumn: string;
-      endColumn: string;
-      /** @description column holding house names separated by ; or |; or give houseIds for every row */
-      housesColumn?: string;
-      /** @description the houses of every row, when the file has no house column */
-      houseIds?: number[];
-      nonHeatingColumn?: string;
-    };
-    FuelRecordCsvInspectionDto: {
-      columns: string[];
-      /** @description the first rows as read, at most 5 */
-      preview: string[][];
-      /** @description data rows in the file */
-      rowCount: number;
-      /** @description columns guessed from the header; the user confirms or changes them */
-      proposed: components['schemas']['FuelRecordColumnMappingDto'];
-    };
-    FuelRecordsUploadResultDto: {
-      created: number;
-      records: components['schemas']['FuelRecordDto'][];
-    };
-    CalibrationPeriodDto: {
-      /** @description the fuel record this period is */
-      recordId: number;
-      startDate: string;
-      endDate: string;
-      days: number;
-      /**
-       * @description where the outdoor temperatures came from
-       * @enum {string}
-       */
-      climateFrom: 'temperature-log' | 'normals';
-      temperatureLogName: string | null;
-      quantityUnit: string;
-      /** @description billed, in quantityUnit */
-      billedQuantity: number;
-      /** @description modelled with the handbook heat loss, non-heating use included, in quantityUnit */
-      handbookQuantity: number;
-      /** @description modelled with the fitted factor, in quantityUnit */
-      fittedQuantity: number | null;
-      /** @description kWh of fuel energy */
-      billedFuelKWh: number;
-      handbookFuelKWh: number;
-      fittedFuelKWh: number | null;
-      nonHeatingFuelKWh: number;
-      usedInFit: boolean;
-      note: string | null;
-    };
-    CalibrationMeterDto: {
-      /** @description one fuel and one set of houses, e.g. 'propane:3,4' */
-      key: string;
-      fuelId: string;
-      fuelLabel: string;
-      houseIds: number[];
-      houseNames: string[];
-      fitted: boolean;
-      /** @description why no factor was fitted */
-      refusal: string | null;
-      /** @description multiplier on the heat-loss coefficient */
-      factor: number | null;
-      /** @description lower end of the 90 % interval */
-      factorLow90: number | null;
-      factorHigh90: number | null;
-      standardError: number | null;
-      degreesOfFreedom: number | null;
-      /** @description ASHRAE Guideline 14 NMBE, % */
-      nmbePercent: number | null;
-      /** @description ASHRAE Guideline 14 CV(RMSE), % */
-      cvRmsePercent: number | null;
-      /** @description |NMBE| ≤ 5 % and CV(RMSE) ≤ 15 % (monthly limits) */
-      meetsGuideline14: boolean | null;
-      verdict: string;
-      meaning: string;
-      periods: components['schemas']['CalibrationPeriodDto'][];
-    };
-    CalibrationHouseFactorDto: {
-      houseId: number;
-      name: string;
-      factor: number | null;
-      meterKey: string | null;
-    };
-    CalibrationDto: {
-      id: number;
-      farmId: number;
-      /** @description when the calibration was run, ISO 8601 */
-      createdAt: string;
-      /** @description fuel records the fit ran on */
-      recordCount: number;
-      meters: components['schemas']['CalibrationMeterDto'][];
-      houses: components['schemas']['CalibrationHouseFactorDto'][];
-      notes: string[];
-    };
-  };
-  responses: never;
-  parameters: never;
-  requestBodies: never;
-  headers: never;
-  pathItems: never;
+    schemas: {
+        DatabaseHealthDto: {
+            /**
+             * @description which database this instance runs on
+             * @enum {string}
+             */
+            dialect: "sqlite" | "postgres";
+            /** @description whether a trivial query answered just now */
+            reachable: boolean;
+        };
+        HealthDto: {
+            /**
+             * @example ok
+             * @enum {string}
+             */
+            status: "ok" | "unavailable";
+            version: string;
+            database: components["schemas"]["DatabaseHealthDto"];
+        };
+        ReceivedAttachmentDto: {
+            id: number;
+            fileName: string;
+            contentType: string;
+            sizeBytes: number;
+        };
+        ReceivedMailDto: {
+            id: number;
+            /** @description when the local server received it (ISO 8601) */
+            receivedAt: string;
+            from: string | null;
+            /** @description the To header */
+            to: string | null;
+            /** @description envelope recipients: who it was delivered to */
+            recipients: string[];
+            subject: string | null;
+            /** @description plain-text body */
+            text: string | null;
+            attachments: components["schemas"]["ReceivedAttachmentDto"][];
+        };
+        MailSendDto: {
+            id: number;
+            kind: string;
+            sentAt: string;
+            recipients: string[];
+            subject: string;
+            text: string;
+            attachmentNames: string[];
+            /** @enum {string} */
+            status: "sent" | "failed";
+            /** @description why it failed */
+            error: string | null;
+        };
+        OutboxDto: {
+            /** @description false when SMTP_URL sends through a real server (then nothing is kept here) */
+            localServer: boolean;
+            messages: components["schemas"]["ReceivedMailDto"][];
+            /** @description sends the SMTP server did not take, newest first */
+            failedSends: components["schemas"]["MailSendDto"][];
+        };
+        UpdateMeDto: {
+            name?: string;
+            /** @enum {string} */
+            unitSystem?: "si" | "us";
+        };
+        UserDto: {
+            id: number;
+            email: string;
+            name: string;
+            /** @enum {string} */
+            siteRole: "admin" | "user";
+            /**
+             * @description How numbers are shown: SI or US customary
+             * @enum {string}
+             */
+            unitSystem: "si" | "us";
+        };
+        DeleteMeDto: {
+            /** @description your current password, to confirm */
+            password: string;
+        };
+        AdminUpdateUserDto: {
+            name?: string;
+            /** @enum {string} */
+            siteRole?: "admin" | "user";
+        };
+        RegisterDto: {
+            email: string;
+            /** @description at least 10 characters, at most 72 bytes, not the e-mail address, not a commonly used password */
+            password: string;
+            name: string;
+        };
+        SessionDto: {
+            accessToken: string;
+            user: components["schemas"]["UserDto"];
+        };
+        LoginDto: {
+            /** @example grower@example.com */
+            email: string;
+            /** @example thermbay-demo */
+            password: string;
+        };
+        ChangePasswordDto: {
+            currentPassword: string;
+            /** @description at least 10 characters, at most 72 bytes, not the e-mail address, not a commonly used password */
+            newPassword: string;
+        };
+        PasswordResetRequestDto: {
+            email: string;
+        };
+        MessageDto: {
+            message: string;
+        };
+        PasswordResetDto: {
+            /** @description the token from the reset link */
+            token: string;
+            /** @description at least 10 characters, at most 72 bytes, not the e-mail address, not a commonly used password */
+            newPassword: string;
+        };
+        DemoAccountDto: {
+            email: string;
+            name: string;
+            description: string;
+        };
+        DemoAccountsDto: {
+            enabled: boolean;
+            password: string | null;
+            accounts: components["schemas"]["DemoAccountDto"][];
+        };
+        RolePermissionsDto: {
+            owner: ("farm:read" | "farm:update" | "farm:delete" | "members:manage" | "house:read" | "house:write" | "alternative:write" | "estimate:run" | "report:write")[];
+            grower: ("farm:read" | "farm:update" | "farm:delete" | "members:manage" | "house:read" | "house:write" | "alternative:write" | "estimate:run" | "report:write")[];
+            adviser: ("farm:read" | "farm:update" | "farm:delete" | "members:manage" | "house:read" | "house:write" | "alternative:write" | "estimate:run" | "report:write")[];
+            viewer: ("farm:read" | "farm:update" | "farm:delete" | "members:manage" | "house:read" | "house:write" | "alternative:write" | "estimate:run" | "report:write")[];
+        };
+        PermissionsDto: {
+            roles: components["schemas"]["RolePermissionsDto"];
+        };
+        FarmDto: {
+            id: number;
+            name: string;
+            latitudeDeg: number;
+            longitudeDeg: number;
+            elevationM: number;
+            timeZone: string;
+            /**
+             * @description ISO 4217 code every amount of the farm is written in
+             * @example USD
+             */
+            currency: string;
+            /** @enum {string} */
+            myRole: "owner" | "grower" | "adviser" | "viewer";
+            permissions: ("farm:read" | "farm:update" | "farm:delete" | "members:manage" | "house:read" | "house:write" | "alternative:write" | "estimate:run" | "report:write")[];
+            houseCount: number;
+            /** @description raised by one on every save; send it back in If-Match to update */
+            version: number;
+            createdAt: string;
+            updatedAt: string;
+        };
+        CreateFarmDto: {
+            /** @example North Ridge Produce */
+            name: string;
+            /** @description degrees, north positive */
+            latitudeDeg: number;
+            /** @description degrees, east positive */
+            longitudeDeg: number;
+            /** @description m above sea level */
+            elevationM: number;
+            /** @example America/Chicago */
+            timeZone: string;
+            /**
+             * @description ISO 4217 code every amount of the farm is written in (default USD)
+             * @example EUR
+             */
+            currency?: string;
+        };
+        UpdateFarmDto: {
+            /** @example North Ridge Produce */
+            name?: string;
+            /** @description degrees, north positive */
+            latitudeDeg?: number;
+            /** @description degrees, east positive */
+            longitudeDeg?: number;
+            /** @description m above sea level */
+            elevationM?: number;
+            /** @example America/Chicago */
+            timeZone?: string;
+            /**
+             * @description ISO 4217 code every amount of the farm is written in (default USD)
+             * @example EUR
+             */
+            currency?: string;
+        };
+        MemberDto: {
+            userId: number;
+            email: string;
+            name: string;
+            /** @enum {string} */
+            role: "owner" | "grower" | "adviser" | "viewer";
+        };
+        UpdateMemberDto: {
+            /** @enum {string} */
+            role: "owner" | "grower" | "adviser" | "viewer";
+        };
+        CreateInvitationDto: {
+            email: string;
+            /** @enum {string} */
+            role: "grower" | "adviser" | "viewer";
+        };
+        MailOutcomeDto: {
+            /** @enum {string} */
+            status: "sent" | "failed";
+            /** @description why the message did not go; kept in the send log */
+            error: string | null;
+        };
+        InvitationSentDto: {
+            id: number;
+            farmId: number;
+            email: string;
+            /** @enum {string} */
+            role: "owner" | "grower" | "adviser" | "viewer";
+            invitedByName: string | null;
+            createdAt: string;
+            expiresAt: string;
+            /** @description the link no longer works (7 days passed); resend to renew it */
+            expired: boolean;
+            mail: components["schemas"]["MailOutcomeDto"];
+        };
+        InvitationDto: {
+            id: number;
+            farmId: number;
+            email: string;
+            /** @enum {string} */
+            role: "owner" | "grower" | "adviser" | "viewer";
+            invitedByName: string | null;
+            createdAt: string;
+            expiresAt: string;
+            /** @description the link no longer works (7 days passed); resend to renew it */
+            expired: boolean;
+        };
+        InvitationPreviewDto: {
+            farmName: string;
+            /** @enum {string} */
+            role: "owner" | "grower" | "adviser" | "viewer";
+            email: string;
+            invitedByName: string | null;
+            expiresAt: string;
+            /** @description an account already uses the address: sign in to accept */
+            accountExists: boolean;
+        };
+        InvitedSignUpDto: {
+            name: string;
+            password: string;
+        };
+        AcceptedInvitationDto: {
+            farmId: number;
+            /** @enum {string} */
+            role: "owner" | "grower" | "adviser" | "viewer";
+        };
+        CoveringsDto: {
+            /**
+             * @description reference-data coverings id
+             * @example poly-double-inflated
+             */
+            roof: string;
+            /** @description reference-data coverings id */
+            sidewalls: string;
+            /** @description reference-data coverings id */
+            endwalls: string;
+        };
+        CoveringOverridesDto: {
+            /** @description W/(m²·K) */
+            roof?: number;
+            /** @description W/(m²·K) */
+            sidewalls?: number;
+            /** @description W/(m²·K) */
+            endwalls?: number;
+        };
+        ShadeClothDto: {
+            /**
+             * @description share of the sun (heat and light alike) the cloth passes, 0–1: a "50 % shade" cloth passes about 0.5 (typical cloths in reference-data shade-cloths)
+             * @example 0.5
+             */
+            solarTransmittance: number;
+            /**
+             * @description calendar months the cloth is in place, 1 = January … 12 = December, each once
+             * @example [
+             *       5,
+             *       6,
+             *       7,
+             *       8,
+             *       9
+             *     ]
+             */
+            months: number[];
+        };
+        HeaterGroupDto: {
+            count: number;
+            /** @description rated input of one unit, W */
+            ratedInputW: number;
+            /** @description output ÷ input, 0–1 */
+            efficiency: number;
+            /**
+             * @description reference-data fuels id
+             * @example propane
+             */
+            fuelId: string;
+            /**
+             * @description what kind of heater (reference-data heater-types): its typical efficiency is offered as the default and an unvented fuel-fired type brings the strong cautions; null when not stated
+             * @enum {string|null}
+             */
+            heaterType?: "gravity-vented" | "power-vented" | "separated-combustion" | "condensing" | "unvented" | "boiler" | "electric" | null;
+        };
+        ExhaustFansDto: {
+            count: number;
+            /** @description m³/s moved by one fan at working static pressure */
+            capacityEachM3PerS: number;
+        };
+        SetpointsDto: {
+            dayHeatingC: number;
+            nightHeatingC: number;
+            coolingC: number;
+        };
+        LampsDto: {
+            /**
+             * @description reference-data lamps id of a lamp type (kind 'lamp-type'); null when not stated
+             * @example led-horticultural
+             */
+            lampTypeId?: string | null;
+            /** @description electrical input per m² of floor, W/m² */
+            powerDensityWPerM2: number;
+            /** @description hours the lamps run per day, January to December (12 values, 0–24) */
+            hoursPerDayByMonth: number[];
+            /** @description share of the electrical input that ends as heat inside the house (reference-data lamps offers 0.95) */
+            heatToHouseFraction: number;
+        };
+        HouseDto: {
+            /** @enum {string} */
+            shape: "gable" | "gothic-arch" | "quonset";
+            spans: number;
+            /** @description width of one span, m */
+            widthM: number;
+            lengthM: number;
+            /** @description sidewall or gutter height, m */
+            eaveHeightM: number;
+            ridgeHeightM: number;
+            coverings: components["schemas"]["CoveringsDto"];
+            /** @description a maker's U-value replacing the reference value */
+            coveringUOverridesWPerM2K?: components["schemas"]["CoveringOverridesDto"];
+            /** @description reference-data air-leakage id */
+            airLeakageClassId: string;
+            /** @description measured air changes per hour */
+            airChangesPerHourOverride?: number | null;
+            perimeterInsulated: boolean;
+            /** @description height of the band at the foot of the sidewalls and endwalls, m (at most the eave height); opaque when kneewallId names a construction, glazing otherwise */
+            kneewallHeightM?: number | null;
+            /** @description reference-data kneewalls id of the kneewall construction; null: glazing to the ground */
+            kneewallId?: string | null;
+            /** @description reference-data curtains id, drawn at night */
+            curtainId?: string | null;
+            /** @description the shade cloth, or null for none */
+            shadeCloth?: components["schemas"]["ShadeClothDto"] | null;
+            heaters: components["schemas"]["HeaterGroupDto"][];
+            exhaustFans: components["schemas"]["ExhaustFansDto"];
+            /** @description free louvre or inlet area, m² */
+            inletAreaM2: number;
+            setpoints: components["schemas"]["SetpointsDto"];
+            /** @description supplemental lamps: their heat lowers the season heating in the hours they run and adds to the summer fan requirement; never credited in heater sizing. null: none */
+            lamps?: components["schemas"]["LampsDto"] | null;
+            /** @example House 3 */
+            name: string;
+            notes?: string | null;
+            id: number;
+            farmId: number;
+            /** @description raised by one on every save; send it back in If-Match to update */
+            version: number;
+            createdAt: string;
+            updatedAt: string;
+        };
+        CreateHouseDto: {
+            /** @enum {string} */
+            shape: "gable" | "gothic-arch" | "quonset";
+            spans: number;
+            /** @description width of one span, m */
+            widthM: number;
+            lengthM: number;
+            /** @description sidewall or gutter height, m */
+            eaveHeightM: number;
+            ridgeHeightM: number;
+            coverings: components["schemas"]["CoveringsDto"];
+            /** @description a maker's U-value replacing the reference value */
+            coveringUOverridesWPerM2K?: components["schemas"]["CoveringOverridesDto"];
+            /** @description reference-data air-leakage id */
+            airLeakageClassId: string;
+            /** @description measured air changes per hour */
+            airChangesPerHourOverride?: number | null;
+            perimeterInsulated: boolean;
+            /** @description height of the band at the foot of the sidewalls and endwalls, m (at most the eave height); opaque when kneewallId names a construction, glazing otherwise */
+            kneewallHeightM?: number | null;
+            /** @description reference-data kneewalls id of the kneewall construction; null: glazing to the ground */
+            kneewallId?: string | null;
+            /** @description reference-data curtains id, drawn at night */
+            curtainId?: string | null;
+            /** @description a shade cloth in place in some months: on the cooling design day it takes its share of the solar heat and of the light the exhaust rate reads, and in the season of the daytime solar gain; null for none */
+            shadeCloth?: components["schemas"]["ShadeClothDto"] | null;
+            heaters: components["schemas"]["HeaterGroupDto"][];
+            exhaustFans: components["schemas"]["ExhaustFansDto"];
+            /** @description free louvre or inlet area, m² */
+            inletAreaM2: number;
+            setpoints: components["schemas"]["SetpointsDto"];
+            /** @description supplemental lamps: their heat lowers the season heating in the hours they run and adds to the summer fan requirement; never credited in heater sizing. null: none */
+            lamps?: components["schemas"]["LampsDto"] | null;
+            /** @example House 3 */
+            name: string;
+            notes?: string | null;
+        };
+        UpdateHouseDto: {
+            /** @enum {string} */
+            shape?: "gable" | "gothic-arch" | "quonset";
+            spans?: number;
+            /** @description width of one span, m */
+            widthM?: number;
+            lengthM?: number;
+            /** @description sidewall or gutter height, m */
+            eaveHeightM?: number;
+            ridgeHeightM?: number;
+            coverings?: components["schemas"]["CoveringsDto"];
+            /** @description a maker's U-value replacing the reference value */
+            coveringUOverridesWPerM2K?: components["schemas"]["CoveringOverridesDto"];
+            /** @description reference-data air-leakage id */
+            airLeakageClassId?: string;
+            /** @description measured air changes per hour */
+            airChangesPerHourOverride?: number | null;
+            perimeterInsulated?: boolean;
+            /** @description height of the band at the foot of the sidewalls and endwalls, m (at most the eave height); opaque when kneewallId names a construction, glazing otherwise */
+            kneewallHeightM?: number | null;
+            /** @description reference-data kneewalls id of the kneewall construction; null: glazing to the ground */
+            kneewallId?: string | null;
+            /** @description reference-data curtains id, drawn at night */
+            curtainId?: string | null;
+            /** @description a shade cloth in place in some months: on the cooling design day it takes its share of the solar heat and of the light the exhaust rate reads, and in the season of the daytime solar gain; null for none */
+            shadeCloth?: components["schemas"]["ShadeClothDto"] | null;
+            heaters?: components["schemas"]["HeaterGroupDto"][];
+            exhaustFans?: components["schemas"]["ExhaustFansDto"];
+            /** @description free louvre or inlet area, m² */
+            inletAreaM2?: number;
+            setpoints?: components["schemas"]["SetpointsDto"];
+            /** @description supplemental lamps: their heat lowers the season heating in the hours they run and adds to the summer fan requirement; never credited in heater sizing. null: none */
+            lamps?: components["schemas"]["LampsDto"] | null;
+            /** @example House 3 */
+            name?: string;
+            notes?: string | null;
+        };
+        MonthlyClimateDto: {
+            month: number;
+            /** @description mean of the daily minimum temperatures, °C */
+            meanDailyMinC: number;
+            /** @description mean of the daily maximum temperatures, °C */
+            meanDailyMaxC: number;
+            /** @description actual ÷ clear-sky solar over the month; default from reference data */
+            clearness?: number | null;
+        };
+        SiteClimateDto: {
+            /** @description heating design dry bulb (99 % or 99.6 %), °C */
+            winterDesignC: number;
+            /** @description cooling design dry bulb (1 %), °C */
+            summerDesignC: number;
+            /** @description wet bulb coincident with the summer design dry bulb, °C */
+            summerDesignWetBulbC: number;
+            /** @description mean daily range on the summer design day, K */
+            summerDailyRangeK: number;
+            /** @description exactly 12 rows, one per month */
+            monthly: components["schemas"]["MonthlyClimateDto"][];
+            /** @description where the numbers came from (e.g. national climate normals, station name) */
+            sourceNote?: string | null;
+            /** @description winter design wind speed, m/s; null: the 6.7 m/s (15 mph) the U tables assume (reference-data/wind.json) */
+            designWindSpeedMPerS?: number | null;
+        };
+        FarmClimateDto: {
+            farmId: number;
+            /** @description null until someone enters the climate */
+            climate: components["schemas"]["SiteClimateDto"] | null;
+            /** @description 0 until the first save, then raised by one on every save; send it in If-Match */
+            version: number;
+        };
+        HouseSpecDto: {
+            /** @enum {string} */
+            shape: "gable" | "gothic-arch" | "quonset";
+            spans: number;
+            /** @description width of one span, m */
+            widthM: number;
+            lengthM: number;
+            /** @description sidewall or gutter height, m */
+            eaveHeightM: number;
+            ridgeHeightM: number;
+            coverings: components["schemas"]["CoveringsDto"];
+            /** @description a maker's U-value replacing the reference value */
+            coveringUOverridesWPerM2K?: components["schemas"]["CoveringOverridesDto"];
+            /** @description reference-data air-leakage id */
+            airLeakageClassId: string;
+            /** @description measured air changes per hour */
+            airChangesPerHourOverride?: number | null;
+            perimeterInsulated: boolean;
+            /** @description height of the band at the foot of the sidewalls and endwalls, m (at most the eave height); opaque when kneewallId names a construction, glazing otherwise */
+            kneewallHeightM?: number | null;
+            /** @description reference-data kneewalls id of the kneewall construction; null: glazing to the ground */
+            kneewallId?: string | null;
+            /** @description reference-data curtains id, drawn at night */
+            curtainId?: string | null;
+            /** @description a shade cloth in place in some months: on the cooling design day it takes its share of the solar heat and of the light the exhaust rate reads, and in the season of the daytime solar gain; null for none */
+            shadeCloth?: components["schemas"]["ShadeClothDto"] | null;
+            heaters: components["schemas"]["HeaterGroupDto"][];
+            exhaustFans: components["schemas"]["ExhaustFansDto"];
+            /** @description free louvre or inlet area, m² */
+            inletAreaM2: number;
+            setpoints: components["schemas"]["SetpointsDto"];
+            /** @description supplemental lamps: their heat lowers the season heating in the hours they run and adds to the summer fan requirement; never credited in heater sizing. null: none */
+            lamps?: components["schemas"]["LampsDto"] | null;
+        };
+        HeatingConditionsDto: {
+            /** @description winter design dry bulb (99 % or 99.6 %), °C */
+            designOutdoorC: number;
+            /** @description site elevation, m (sets air density) */
+            elevationM: number;
+            /** @description inside relative humidity on the design night, % */
+            insideRelativeHumidityPct: number;
+            /** @description inside temperature to hold, °C; default the house night heating setpoint */
+            insideC?: number;
+            /** @description credit a drawn curtain in the design loss; default false (heaters sized with the curtain open) */
+            curtainClosed?: boolean;
+            /** @description design wind speed, m/s; default the farm climate's, else the 6.7 m/s (15 mph) the U tables assume */
+            designWindSpeedMPerS?: number;
+            /** @description size for a clear night: add the long-wave loss to a sky colder than the air through a covering that passes thermal infrared; default false (the tabulated U-values, surroundings at the outdoor air temperature) */
+            clearSky?: boolean;
+            /** @description outdoor dew point on a clear design night, °C (at most the design temperature); default 3 K below it */
+            outdoorDewPointC?: number;
+        };
+        HeatingEstimateRequestDto: {
+            house: components["schemas"]["HouseSpecDto"];
+            conditions: components["schemas"]["HeatingConditionsDto"];
+        };
+        HouseGeometrySummaryDto: {
+            /** @description m² */
+            floorAreaM2: number;
+            /** @description m² */
+            roofAreaM2: number;
+            /** @description m² */
+            sidewallAreaM2: number;
+            /** @description glazed endwall area, m² */
+            endwallAreaM2: number;
+            /** @description opaque kneewall on the sidewalls and endwalls, m² (0 without one) */
+            kneewallAreaM2: number;
+            /** @description roof + sidewalls + endwalls + kneewall, m² */
+            coverAreaM2: number;
+            /** @description outside perimeter of the house at the ground, m */
+            perimeterM: number;
+            /** @description m³ */
+            volumeM3: number;
+        };
+        WindFactorsDto: {
+            roof: number;
+            sidewalls: number;
+            endwalls: number;
+        };
+        WindSummaryDto: {
+            /** @description design wind speed, m/s */
+            windSpeedMPerS: number;
+            /** @description the wind the U tables assume, m/s */
+            tableWindSpeedMPerS: number;
+            /** @description U at the design wind ÷ tabulated U, per covering group */
+            uFactor: components["schemas"]["WindFactorsDto"];
+            /** @description air changes at the design wind ÷ tabulated air changes */
+            infiltrationFactor: number;
+        };
+        HeatLossComponentDto: {
+            /** @enum {string} */
+            key: "roof" | "sidewalls" | "endwalls" | "kneewall" | "perimeter" | "infiltration" | "sky";
+            label: string;
+            /** @description area (m²), perimeter (m) or volume (m³), see quantityUnit */
+            quantity: number;
+            /** @enum {string} */
+            quantityUnit: "m2" | "m" | "m3";
+            /** @description U in W/(m²·K) for surfaces, F in W/(m·K) for the perimeter, air changes per hour for infiltration */
+            coefficient: number;
+            /** @description W/K */
+            conductanceWPerK: number;
+            /** @description loss at the design ΔT, W */
+            watts: number;
+            /** @description share of the total, 0–1 */
+            share: number;
+        };
+        HeatLossBreakdownDto: {
+            /** @description °C */
+            insideC: number;
+            /** @description °C */
+            outsideC: number;
+            /** @description inside − outside, K (may be ≤ 0: then no heat is needed) */
+            deltaTK: number;
+            /** @description W */
+            totalW: number;
+            /** @description through the coverings, W */
+            coveringW: number;
+            /** @description through the opaque kneewall, W (0 without one) */
+            kneewallW: number;
+            /** @description through the perimeter, W */
+            perimeterW: number;
+            /** @description air leakage, W */
+            infiltrationW: number;
+            /** @description long-wave loss to a clear night sky, W (0 unless a clear night was asked for) */
+            skyW: number;
+            curtainApplied: boolean;
+            wind: components["schemas"]["WindSummaryDto"];
+            components: components["schemas"]["HeatLossComponentDto"][];
+        };
+        HeaterSizingDto: {
+            /** @description fraction added to the design loss */
+            safetyMargin: number;
+            /** @description W */
+            requiredOutputW: number;
+            /** @description W */
+            requiredInputW: number;
+            /** @description W */
+            installedInputW: number;
+            /** @description W */
+            installedOutputW: number;
+            /** @enum {string} */
+            verdict: "adequate" | "short" | "none-installed";
+            /** @description W (0 when adequate) */
+            shortfallW: number;
+            /** @description outdoor temperature at which the installed output just holds the inside temperature, °C */
+            lowestHeldOutdoorC: number | null;
+            unitCount: number;
+            /** @description W */
+            largestUnitOutputW: number;
+            /** @description same with the largest unit out of service, °C; null without a second unit */
+            holdsWithLargestUnitOutC: number | null;
+            /** @description how the output is split over units; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
+            splitAdvice: string;
+            fuelFired: boolean;
+        };
+        CondensationSurfaceDto: {
+            /** @enum {string} */
+            group: "roof" | "sidewalls" | "endwalls";
+            coveringId: string;
+            /** @description W/(m²·K) */
+            uWPerM2K: number;
+            /** @description °C */
+            insideSurfaceC: number;
+            condenses: boolean;
+            /** @description outdoor temperature below which water condenses on this surface, °C */
+            condensationBelowOutdoorC: number;
+        };
+        CondensationDto: {
+            /** @description °C */
+            insideC: number;
+            /** @description % */
+            insideRelativeHumidityPct: number;
+            /** @description °C */
+            dewPointC: number;
+            anyCondenses: boolean;
+            surfaces: components["schemas"]["CondensationSurfaceDto"][];
+        };
+        HeatingLampsDto: {
+            /** @description electrical input of all the lamps while they run, W */
+            electricW: number;
+            /** @description heat they give the house while they run, W */
+            heatW: number;
+            /**
+             * @description heat credited against the design heat loss and heater sizing: always 0 (lamps may be off that night)
+             * @enum {number}
+             */
+            creditedW: 0;
+            /** @description lamp heat ÷ design heat loss, for the reader */
+            shareOfDesignLoss: number;
+        };
+        HeatingAssumptionDto: {
+            key: string;
+            /** @description may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
+            label: string;
+            value: number | string;
+            unit: string;
+            source: string;
+            /** @enum {string} */
+            confidence: "verified" | "verified-secondary" | "derived" | "memory" | "common-practice" | "user-entered";
+            /** @description true when a value entered for the house replaced the reference value */
+            overridden: boolean;
+        };
+        HeatingEstimateDto: {
+            geometry: components["schemas"]["HouseGeometrySummaryDto"];
+            heatLoss: components["schemas"]["HeatLossBreakdownDto"];
+            heater: components["schemas"]["HeaterSizingDto"];
+            condensation: components["schemas"]["CondensationDto"];
+            /** @description the supplemental lamps, shown but never credited on the design night; null without lamps */
+            lamps: components["schemas"]["HeatingLampsDto"] | null;
+            assumptions: components["schemas"]["HeatingAssumptionDto"][];
+            /** @description safety and planning cautions, to show with the result; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
+            cautions: string[];
+        };
+        CoolingSiteDto: {
+            /** @description degrees, north positive */
+            latitudeDeg: number;
+            /** @description degrees, east positive */
+            longitudeDeg: number;
+            /** @description m */
+            elevationM: number;
+        };
+        EvaporativePadDto: {
+            /**
+             * @description reference-data evaporative-pads id
+             * @example cellulose-150mm
+             */
+            padTypeId: string;
+            /** @description face area of the pads, m² */
+            areaM2: number;
+        };
+        CoolingConditionsDto: {
+            /**
+             * @description YYYY-MM-DD; hours of the result are local apparent solar time
+             * @example 2026-07-21
+             */
+            designDate: string;
+            /** @description summer design dry bulb (the day’s maximum), °C */
+            summerDesignC: number;
+            /** @description day’s maximum − minimum, K */
+            dailyRangeK: number;
+            /** @description wet bulb coincident with the design dry bulb (not above it), °C */
+            summerDesignWetBulbC: number;
+            /** @description allowed inlet-to-fan rise, K; default from reference data */
+            allowedTemperatureRiseK?: number;
+            /** @description peak light at plant height under the roof before any shade cloth, lux (a cloth in place multiplies it); when left out, the design day's own clear-sky light through the roof, the same sun the hour-by-hour balance uses */
+            peakInteriorLightLux?: number;
+            /** @description inlet (pad) wall to fans, m; default the house length */
+            padToFanDistanceM?: number;
+            /** @description share of transmitted solar heat taken up by transpiration; default from reference data */
+            transpirationFraction?: number;
+            /** @description evaporative pads on the inlet wall, or null for none */
+            evaporativePad?: components["schemas"]["EvaporativePadDto"] | null;
+            /** @description winter design temperature for the humidity-ventilation heat cost, °C */
+            winterDesignC?: number;
+        };
+        CoolingEstimateRequestDto: {
+            house: components["schemas"]["HouseSpecDto"];
+            site: components["schemas"]["CoolingSiteDto"];
+            conditions: components["schemas"]["CoolingConditionsDto"];
+        };
+        AirExchangeDto: {
+            /** @description all installed fans together, m³/s */
+            installedFlowM3PerS: number;
+            /** @description 1/h */
+            airChangesPerHour: number;
+            /** @description 1/min */
+            airChangesPerMinute: number;
+            /** @description m³/s per m² of floor */
+            flowPerFloorAreaM3PerSM2: number;
+        };
+        CapacityFactorsDto: {
+            elevation: number;
+            light: number;
+            temperatureRise: number;
+            velocity: number;
+            /** @description elevation × light × temperatureRise */
+            house: number;
+            /** @description the larger of house and velocity */
+            applied: number;
+        };
+        CoolingCapacityDto: {
+            /** @description m³/s per m² of floor */
+            baseRateM3PerSM2: number;
+            factors: components["schemas"]["CapacityFactorsDto"];
+            /** @description base rate × applied factor × floor area: the floor-area method alone, m³/s */
+            floorAreaMethodFlowM3PerS: number;
+            /** @description flow the lamps’ heat adds over the floor-area method, m³/s */
+            lampFlowM3PerS: number;
+            /** @description the design-day solar hour that sets the requirement with the lamps; null when the floor-area method does */
+            lampGoverningHour: number | null;
+            /** @description the larger of the floor-area method and the lit hours’ need, m³/s */
+            requiredFlowM3PerS: number;
+            /** @description m³/s */
+            installedFlowM3PerS: number;
+            /** @enum {string} */
+            verdict: "adequate" | "short" | "no-fans";
+            /** @description fans of the installed size needed in all; null without fans */
+            fansNeeded: number | null;
+            /** @description fans to add; null without fans */
+            additionalFansNeeded: number | null;
+            /** @description m² */
+            inletAreaNeededM2: number;
+            /** @description m² */
+            inletAreaM2: number;
+            /** @enum {string} */
+            inletVerdict: "adequate" | "short";
+        };
+        InteriorLightDto: {
+            /**
+             * @description 'design day': the design day's own clear-sky sun through the roof (the same sun as the hour-by-hour balance); 'entered': the request's peakInteriorLightLux
+             * @enum {string}
+             */
+            from: "design day" | "entered";
+            /** @description peak light at plant height under the roof before any shade cloth, lx */
+            unshadedLux: number;
+            /** @description share a shade cloth in place on the design date passes; 1 without */
+            shadeTransmittance: number;
+            /** @description unshadedLux × shadeTransmittance: the light the light factor reads, lx */
+            lux: number;
+        };
+        CoolingShadeClothDto: {
+            solarTransmittance: number;
+            /** @description months the cloth is in place, 1–12, in calendar order */
+            months: number[];
+            /** @description the design date falls in one of its months: only then does it shade the design day */
+            inPlaceOnDesignDate: boolean;
+        };
+        DesignDayHourDto: {
+            /** @description local apparent solar hour */
+            hour: number;
+            /** @description °C */
+            outdoorC: number;
+            /** @description degrees above the horizon (negative at night) */
+            sunAltitudeDeg: number;
+            /** @description W/m² */
+            globalHorizontalWPerM2: number;
+            /** @description W */
+            solarGainW: number;
+            /** @description heat of supplemental lamps running this hour, W (0 when off) */
+            lampHeatW: number;
+            /** @description °C */
+            indoorWithFansC: number;
+            fanFraction: number;
+            /** @description °C; null without pads */
+            indoorWithPadsC: number | null;
+            setpointHeld: boolean;
+        };
+        DesignDayDto: {
+            /** @description YYYY-MM-DD */
+            date: string;
+            hours: components["schemas"]["DesignDayHourDto"][];
+            /** @description °C */
+            peakIndoorWithFansC: number;
+            /** @description °C; null without pads */
+            peakIndoorWithPadsC: number | null;
+            /** @description solar hours at which the cooling setpoint is not held */
+            hoursNotHeld: number[];
+        };
+        PadSizingDto: {
+            padTypeId: string;
+            /** @description m/s */
+            faceVelocityMPerS: number;
+            saturationEfficiency: number;
+            /** @description m² */
+            areaNeededM2: number;
+            /** @description m² */
+            areaM2: number;
+            /** @enum {string} */
+            verdict: "adequate" | "short";
+            /** @description °C */
+            leavingAirAtPeakC: number;
+        };
+        FanStageDto: {
+            stage: number;
+            /** @description indoor temperature at which this stage switches on, °C */
+            onAtC: number;
+            /** @description fans switched on at this stage (not cumulative) */
+            fans: number;
+        };
+        StagingDto: {
+            /** @description K */
+            deadbandK: number;
+            /** @description K */
+            requiredDeadbandK: number;
+            ok: boolean;
+            /** @description may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
+            warnings: string[];
+            stages: components["schemas"]["FanStageDto"][];
+        };
+        WinterVentilationDto: {
+            fractionOfSummerRate: number;
+            /** @description m³/s: the summer rate the fraction is taken of (base rate × floor area × elevation factor only) */
+            summerBaseFlowM3PerS: number;
+            /** @description m³/s */
+            flowM3PerS: number;
+            /** @description 1/h */
+            airChangesPerHour: number;
+            /** @description W to warm the ventilation air to the night setpoint */
+            heatCostW: number;
+            /** @description °C */
+            atOutdoorC: number;
+            /** @description W lost by the house itself (cover, perimeter, leaks) at the same temperatures, for comparison */
+            houseHeatLossW: number;
+        };
+        CoolingLampsDto: {
+            /** @description electrical input of all the lamps while they run, W */
+            electricW: number;
+            /** @description heat they give the house while they run, W */
+            heatW: number;
+            /** @description hours they run on the design day (the design month's value) */
+            hoursOn: number;
+            /** @description sunrise in solar hours, where the block of lamp hours ends */
+            sunriseSolarHour: number;
+            /** @description fan flow the lamps add to the requirement, m³/s */
+            addedFlowM3PerS: number;
+            /** @description the solar hour that sets the requirement with the lamps; null when the floor-area method does */
+            governingHour: number | null;
+        };
+        CoolingAssumptionDto: {
+            key: string;
+            /** @description may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
+            label: string;
+            value: number | string;
+            unit: string;
+            source: string;
+            /**
+             * @description 'user-entered' for what the house itself states
+             * @enum {string}
+             */
+            confidence: "verified" | "verified-secondary" | "derived" | "memory" | "common-practice" | "user-entered";
+            /** @description true when the request replaced the default */
+            overridden: boolean;
+        };
+        CoolingEstimateDto: {
+            airExchange: components["schemas"]["AirExchangeDto"];
+            capacity: components["schemas"]["CoolingCapacityDto"];
+            /** @description the peak interior light the light factor read */
+            interiorLight: components["schemas"]["InteriorLightDto"];
+            /** @description the house's shade cloth; null without one */
+            shadeCloth: components["schemas"]["CoolingShadeClothDto"] | null;
+            designDay: components["schemas"]["DesignDayDto"];
+            /** @description null without evaporative pads */
+            pads: components["schemas"]["PadSizingDto"] | null;
+            staging: components["schemas"]["StagingDto"];
+            winterVentilation: components["schemas"]["WinterVentilationDto"];
+            /** @description the supplemental lamps on the design day; null without lamps or when they do not run that month */
+            lamps: components["schemas"]["CoolingLampsDto"] | null;
+            assumptions: components["schemas"]["CoolingAssumptionDto"][];
+            /** @description safety and planning cautions, to show with the result; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
+            cautions: string[];
+        };
+        PartialHeatingConditionsDto: {
+            /** @description winter design dry bulb (99 % or 99.6 %), °C */
+            designOutdoorC?: number;
+            /** @description site elevation, m (sets air density) */
+            elevationM?: number;
+            /** @description inside relative humidity on the design night, % */
+            insideRelativeHumidityPct?: number;
+            /** @description inside temperature to hold, °C; default the house night heating setpoint */
+            insideC?: number;
+            /** @description credit a drawn curtain in the design loss; default false (heaters sized with the curtain open) */
+            curtainClosed?: boolean;
+            /** @description design wind speed, m/s; default the farm climate's, else the 6.7 m/s (15 mph) the U tables assume */
+            designWindSpeedMPerS?: number;
+            /** @description size for a clear night: add the long-wave loss to a sky colder than the air through a covering that passes thermal infrared; default false (the tabulated U-values, surroundings at the outdoor air temperature) */
+            clearSky?: boolean;
+            /** @description outdoor dew point on a clear design night, °C (at most the design temperature); default 3 K below it */
+            outdoorDewPointC?: number;
+        };
+        HouseHeatingEstimateRequestDto: {
+            conditions?: components["schemas"]["PartialHeatingConditionsDto"];
+        };
+        HeatingConditionsUsedDto: {
+            /** @description °C */
+            designOutdoorC: number;
+            /** @description m */
+            elevationM: number;
+            /** @description % */
+            insideRelativeHumidityPct: number;
+            /** @description °C */
+            insideC: number;
+            curtainClosed: boolean;
+            /** @description m/s */
+            designWindSpeedMPerS: number;
+            clearSky: boolean;
+        };
+        HeatingConditionsSourceDto: {
+            /** @enum {string} */
+            designOutdoorC: "farm climate" | "request";
+            /** @enum {string} */
+            elevationM: "farm" | "request";
+            /** @enum {string} */
+            insideRelativeHumidityPct: "reference data" | "request";
+            /** @enum {string} */
+            insideC: "house night setpoint" | "request";
+            /** @enum {string} */
+            curtainClosed: "default" | "request";
+            /** @enum {string} */
+            designWindSpeedMPerS: "farm climate" | "reference data" | "request";
+            /** @enum {string} */
+            clearSky: "default" | "request";
+        };
+        HouseHeatingEstimateDto: {
+            geometry: components["schemas"]["HouseGeometrySummaryDto"];
+            heatLoss: components["schemas"]["HeatLossBreakdownDto"];
+            heater: components["schemas"]["HeaterSizingDto"];
+            condensation: components["schemas"]["CondensationDto"];
+            /** @description the supplemental lamps, shown but never credited on the design night; null without lamps */
+            lamps: components["schemas"]["HeatingLampsDto"] | null;
+            assumptions: components["schemas"]["HeatingAssumptionDto"][];
+            /** @description safety and planning cautions, to show with the result; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
+            cautions: string[];
+            houseId: number;
+            conditionsUsed: components["schemas"]["HeatingConditionsUsedDto"];
+            conditionsSource: components["schemas"]["HeatingConditionsSourceDto"];
+        };
+        PartialCoolingConditionsDto: {
+            /**
+             * @description YYYY-MM-DD; hours of the result are local apparent solar time
+             * @example 2026-07-21
+             */
+            designDate?: string;
+            /** @description summer design dry bulb (the day’s maximum), °C */
+            summerDesignC?: number;
+            /** @description day’s maximum − minimum, K */
+            dailyRangeK?: number;
+            /** @description wet bulb coincident with the design dry bulb (not above it), °C */
+            summerDesignWetBulbC?: number;
+            /** @description allowed inlet-to-fan rise, K; default from reference data */
+            allowedTemperatureRiseK?: number;
+            /** @description peak light at plant height under the roof before any shade cloth, lux (a cloth in place multiplies it); when left out, the design day's own clear-sky light through the roof, the same sun the hour-by-hour balance uses */
+            peakInteriorLightLux?: number;
+            /** @description inlet (pad) wall to fans, m; default the house length */
+            padToFanDistanceM?: number;
+            /** @description share of transmitted solar heat taken up by transpiration; default from reference data */
+            transpirationFraction?: number;
+            /** @description evaporative pads on the inlet wall, or null for none */
+            evaporativePad?: components["schemas"]["EvaporativePadDto"] | null;
+            /** @description winter design temperature for the humidity-ventilation heat cost, °C */
+            winterDesignC?: number;
+        };
+        HouseCoolingEstimateRequestDto: {
+            conditions?: components["schemas"]["PartialCoolingConditionsDto"];
+        };
+        CoolingConditionsSourceDto: {
+            /** @enum {string} */
+            designDate: "calendar default" | "request";
+            /** @enum {string} */
+            summerDesignC: "farm climate" | "request";
+            /** @enum {string} */
+            dailyRangeK: "farm climate" | "request";
+            /** @enum {string} */
+            summerDesignWetBulbC: "farm climate" | "request";
+            /** @enum {string} */
+            allowedTemperatureRiseK: "reference data" | "request";
+            /**
+             * @description 'design day': the design day's own clear-sky light through the roof
+             * @enum {string}
+             */
+            peakInteriorLightLux: "design day" | "request";
+            /** @enum {string} */
+            padToFanDistanceM: "house length" | "request";
+            /** @enum {string} */
+            transpirationFraction: "reference data" | "request";
+            /** @enum {string} */
+            evaporativePad: "none" | "request";
+            /** @enum {string} */
+            winterDesignC: "farm climate" | "reference data" | "request";
+        };
+        HouseCoolingEstimateDto: {
+            airExchange: components["schemas"]["AirExchangeDto"];
+            capacity: components["schemas"]["CoolingCapacityDto"];
+            /** @description the peak interior light the light factor read */
+            interiorLight: components["schemas"]["InteriorLightDto"];
+            /** @description the house's shade cloth; null without one */
+            shadeCloth: components["schemas"]["CoolingShadeClothDto"] | null;
+            designDay: components["schemas"]["DesignDayDto"];
+            /** @description null without evaporative pads */
+            pads: components["schemas"]["PadSizingDto"] | null;
+            staging: components["schemas"]["StagingDto"];
+            winterVentilation: components["schemas"]["WinterVentilationDto"];
+            /** @description the supplemental lamps on the design day; null without lamps or when they do not run that month */
+            lamps: components["schemas"]["CoolingLampsDto"] | null;
+            assumptions: components["schemas"]["CoolingAssumptionDto"][];
+            /** @description safety and planning cautions, to show with the result; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
+            cautions: string[];
+            houseId: number;
+            /** @description the farm’s position and elevation */
+            siteUsed: components["schemas"]["CoolingSiteDto"];
+            /** @description what the engine ran with; optional values left out took the defaults listed in assumptions */
+            conditionsUsed: components["schemas"]["CoolingConditionsDto"];
+            conditionsSource: components["schemas"]["CoolingConditionsSourceDto"];
+        };
+        TemperatureLogClimateSourceDto: {
+            /** @description id of one of the farm’s temperature logs */
+            temperatureLogId: number;
+        };
+        SeasonRequestDto: {
+            /** @description 'normals' (default: the farm's monthly climate normals) or { temperatureLogId } to use a logged year instead */
+            climateSource?: "normals" | components["schemas"]["TemperatureLogClimateSourceDto"];
+            /** @description reference-data fuels id; default: the fuel of the house's first heater */
+            fuelId?: string;
+            /** @description money per purchase unit; default: the farm's price for the fuel */
+            pricePerUnit?: number;
+            /**
+             * @description unit the given pricePerUnit is per: 'si' (the fuel's unitSi, default) or 'us' (its unitUs)
+             * @enum {string}
+             */
+            priceUnit?: "si" | "us";
+            /** @description output ÷ input; default: the efficiency of the house's first heater burning the fuel */
+            heaterEfficiency?: number;
+            /** @description run for one of the house's alternatives instead of the house (its fields merged onto the house, and its calendar if it has one) */
+            alternativeId?: number;
+            /**
+             * @description first day, YYYY-MM-DD; give both dates or neither. Default: the heating season in progress or, between seasons, the next one (1 Sep – 31 May north of the equator, 1 Mar – 30 Nov south); with a temperature log, the whole days the log covers (at most 366)
+             * @example 2026-09-01
+             */
+            startDate?: string;
+            /**
+             * @description last day (inclusive), YYYY-MM-DD; at most 366 days from startDate
+             * @example 2027-05-31
+             */
+            endDate?: string;
+            /**
+             * @description 'handbook' (default) or 'calibrated': each house's heat-loss coefficient × the factor of the farm's newest calibration against its fuel bills (a house without one stays on the handbook, and the answer says so)
+             * @enum {string}
+             */
+            heatLossBasis?: "handbook" | "calibrated";
+        };
+        SeasonPeriodDto: {
+            /** @description YYYY-MM-DD */
+            startDate: string;
+            /** @description YYYY-MM-DD, inclusive */
+            endDate: string;
+            days: number;
+            /** @description days the production calendar heats */
+            heatedDays: number;
+        };
+        SeasonFuelDto: {
+            fuelId: string;
+            label: string;
+            /** @example L */
+            unitSi: string;
+            /** @example US gal */
+            unitUs: string;
+            /** @description null when no price is known */
+            pricePerUnit: number | null;
+            /** @enum {string} */
+            priceUnit: "si" | "us";
+            /** @description the unit the price is per, e.g. 'US gal' */
+            priceUnitLabel: string;
+            /** @description output ÷ input */
+            heaterEfficiency: number;
+        };
+        SeasonHeatLossDto: {
+            /** @description W/K */
+            uaCurtainOpenWPerK: number;
+            /** @description W/K (equals the open value without a curtain) */
+            uaCurtainClosedWPerK: number;
+            /** @description m² */
+            floorAreaM2: number;
+        };
+        SeasonMonthDto: {
+            /** @description heat delivered to the house, kWh */
+            energyKWh: number;
+            /** @description heat content of the fuel burnt (energy ÷ efficiency), kWh */
+            fuelInputKWh: number;
+            /** @description fuel in its SI purchase unit (the fuel's unitSi) */
+            fuelQuantitySi: number;
+            /** @description fuel in its US purchase unit (the fuel's unitUs) */
+            fuelQuantityUs: number;
+            /** @description money, in the farm's currency; null when no fuel price is known (heat and fuel are still given) */
+            cost: number | null;
+            year: number;
+            month: number;
+            /** @description heated hours with any heat demand */
+            heatingHours: number;
+            /** @description highest hourly-average heat demand of the month, W */
+            peakW: number;
+            /** @description degree-days to the night setpoint, K·day */
+            degreeDaysKDay: number;
+            /** @description heat the installed heaters could not deliver, kWh */
+            unmetHeatKWh: number;
+            /** @description hours in which the heaters could not hold the setpoint */
+            hoursBelowSetpoint: number;
+            /** @description electricity the supplemental lamps use in the month, kWh (0 without) */
+            lampElectricityKWh: number;
+            /** @description the part of it that ends as heat inside the house, kWh */
+            lampHeatKWh: number;
+            /** @description heat the heaters did not have to deliver because the lamps gave it, kWh */
+            lampHeatSavedKWh: number;
+        };
+        SeasonTotalDto: {
+            /** @description heat delivered to the house, kWh */
+            energyKWh: number;
+            /** @description heat content of the fuel burnt (energy ÷ efficiency), kWh */
+            fuelInputKWh: number;
+            /** @description fuel in its SI purchase unit (the fuel's unitSi) */
+            fuelQuantitySi: number;
+            /** @description fuel in its US purchase unit (the fuel's unitUs) */
+            fuelQuantityUs: number;
+            /** @description money, in the farm's currency; null when no fuel price is known (heat and fuel are still given) */
+            cost: number | null;
+            heatingHours: number;
+            /** @description heat the installed heaters could not deliver, kWh */
+            unmetHeatKWh: number;
+            /** @description hours in which the heaters could not hold the setpoint */
+            hoursBelowSetpoint: number;
+        };
+        SeasonHeaterCapacityDto: {
+            /** @description Σ count × rated input × efficiency of the house’s heaters, W; heat delivered in an hour is capped at it */
+            installedOutputW: number;
+            /** @description heater units installed */
+            heaterCount: number;
+            /** @description set when the heaters cannot hold the setpoint in some hour; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
+            caution: string | null;
+        };
+        SeasonPeakDto: {
+            /** @description W */
+            heatW: number;
+            /** @description local standard time, YYYY-MM-DDTHH:MM */
+            at: string;
+            /** @description °C */
+            outdoorC: number;
+        };
+        SeasonFuelAmountDto: {
+            /** @description heat delivered to the house, kWh */
+            energyKWh: number;
+            /** @description heat content of the fuel burnt (energy ÷ efficiency), kWh */
+            fuelInputKWh: number;
+            /** @description fuel in its SI purchase unit (the fuel's unitSi) */
+            fuelQuantitySi: number;
+            /** @description fuel in its US purchase unit (the fuel's unitUs) */
+            fuelQuantityUs: number;
+            /** @description money, in the farm's currency; null when no fuel price is known (heat and fuel are still given) */
+            cost: number | null;
+        };
+        SeasonLampsDto: {
+            /** @description reference-data lamps id */
+            lampTypeId: string | null;
+            lampTypeLabel: string | null;
+            /** @description W/m² of floor */
+            powerDensityWPerM2: number;
+            /** @description January to December, h */
+            hoursPerDayByMonth: number[];
+            /** @description share of the input that heats the house, 0–1 */
+            heatToHouseFraction: number;
+            /** @description electrical input of all the lamps while they run, W */
+            electricW: number;
+            /** @description heat they give the house while they run, W */
+            heatW: number;
+            /** @description electricity the lamps add over the season (heated days only), kWh */
+            electricityKWh: number;
+            /** @description the part of it that ends as heat inside the house, kWh */
+            heatToHouseKWh: number;
+            /** @description heat the heaters did not deliver because the lamps gave it, kWh */
+            heatSavedKWh: number;
+            /** @description the fuel (and money, with a price) that heat would have taken */
+            fuelSaved: components["schemas"]["SeasonFuelAmountDto"];
+            /** @description heat saved ÷ heat into the house: the rest came when the house needed no heat */
+            usefulShareOfHeat: number;
+        };
+        SeasonLossPartDto: {
+            /**
+             * @description the design night's component keys
+             * @enum {string}
+             */
+            key: "roof" | "sidewalls" | "endwalls" | "kneewall" | "perimeter" | "infiltration" | "sky";
+            label: string;
+            /** @description heat lost through this part over the heated hours that lose heat, kWh */
+            energyKWh: number;
+            /** @description share of all the heat lost, 0–1 */
+            share: number;
+        };
+        SeasonLossBreakdownDto: {
+            /** @description the night sky is the part with key sky */
+            parts: components["schemas"]["SeasonLossPartDto"][];
+            /** @description Σ parts, kWh */
+            lostKWh: number;
+            /** @description the sky's part (long-wave radiation to the night sky), kWh */
+            skyKWh: number;
+            /** @description heat the sun supplied in place of the heaters, kWh */
+            solarOffsetKWh: number;
+            /** @description heat the heaters could not deliver, kWh */
+            unmetHeatKWh: number;
+            /** @description lostKWh − solarOffsetKWh − unmetHeatKWh: the heat delivered, kWh */
+            deliveredKWh: number;
+        };
+        DegreeDayStepDto: {
+            /** @enum {string} */
+            key: "degree-day" | "hourly-curve" | "day-setpoint" | "curtain" | "sky" | "sun" | "lamps" | "heater-capacity";
+            label: string;
+            /** @description kWh */
+            energyKWh: number;
+            /** @description change from the previous step, kWh */
+            changeKWh: number;
+        };
+        ConventionalBaseCheckDto: {
+            /** @description heat delivered to the house, kWh */
+            energyKWh: number;
+            /** @description heat content of the fuel burnt (energy ÷ efficiency), kWh */
+            fuelInputKWh: number;
+            /** @description fuel in its SI purchase unit (the fuel's unitSi) */
+            fuelQuantitySi: number;
+            /** @description fuel in its US purchase unit (the fuel's unitUs) */
+            fuelQuantityUs: number;
+            /** @description money, in the farm's currency; null when no fuel price is known (heat and fuel are still given) */
+            cost: number | null;
+            /** @description 18.333 °C (65 °F) */
+            baseTemperatureC: number;
+            /** @description degree-days of the heated days to that base, K·day */
+            degreeDaysKDay: number;
+            /** @description °F·day */
+            degreeDaysFDay: number;
+            /** @description why the setpoint base is the one for a greenhouse; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
+            note: string;
+            source: string;
+        };
+        DegreeDayCrossCheckDto: {
+            /** @description heat delivered to the house, kWh */
+            energyKWh: number;
+            /** @description heat content of the fuel burnt (energy ÷ efficiency), kWh */
+            fuelInputKWh: number;
+            /** @description fuel in its SI purchase unit (the fuel's unitSi) */
+            fuelQuantitySi: number;
+            /** @description fuel in its US purchase unit (the fuel's unitUs) */
+            fuelQuantityUs: number;
+            /** @description money, in the farm's currency; null when no fuel price is known (heat and fuel are still given) */
+            cost: number | null;
+            /** @description the base each heated day is counted to; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
+            baseDescription: string;
+            /** @description the base when it is the same all season, else null, °C */
+            baseTemperatureC: number | null;
+            /** @description UA used (curtain open), W/K */
+            uaWPerK: number;
+            /** @description K·day */
+            degreeDaysKDay: number;
+            /** @description °F·day */
+            degreeDaysFDay: number;
+            /** @description hourly result ÷ degree-day result − 1 (null when the degree-day result is 0) */
+            hourlyDifferenceFraction: number | null;
+            /** @description from the degree-day figure to the hourly one, one effect at a time */
+            steps: components["schemas"]["DegreeDayStepDto"][];
+            /** @description may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
+            explanation: string[];
+            /** @description the same method to the conventional 65 °F (18.3 °C) base, beside the setpoint base */
+            conventionalBase: components["schemas"]["ConventionalBaseCheckDto"];
+        };
+        SeasonAssumptionDto: {
+            key: string;
+            /** @description may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
+            label: string;
+            value: number | string;
+            unit: string;
+            source: string;
+            /** @enum {string} */
+            confidence: "verified" | "verified-secondary" | "derived" | "memory" | "common-practice" | "user-entered";
+            /** @description true where the user's own value replaced the reference value */
+            overridden: boolean;
+        };
+        SeasonInputsUsedDto: {
+            /** @enum {string} */
+            climateSource: "normals" | "temperature-log";
+            temperatureLogId: number | null;
+            temperatureLogName: string | null;
+            fuelId: string;
+            /** @enum {string} */
+            fuelFrom: "request" | "house-heater";
+            /** @description null when the farm has no price for the fuel and the request gave none */
+            pricePerUnit: number | null;
+            /** @enum {string} */
+            priceUnit: "si" | "us";
+            /**
+             * @description 'none': no price yet, so heat and fuel are given and every cost is null
+             * @enum {string}
+             */
+            priceFrom: "request" | "farm-fuel-prices" | "none";
+            /**
+             * @description the farm's currency (ISO 4217) every amount is in
+             * @example USD
+             */
+            currency: string;
+            heaterEfficiency: number;
+            /** @enum {string} */
+            heaterEfficiencyFrom: "request" | "house-heater";
+            /** @description the farm's IANA zone */
+            timeZone: string;
+            /** @description the zone's standard-time offset from UTC (daylight saving ignored), h */
+            utcOffsetHours: number;
+            /**
+             * @description the basis asked for
+             * @enum {string}
+             */
+            heatLossBasisRequested: "handbook" | "calibrated";
+            /**
+             * @description the basis used (handbook when the house has no calibration)
+             * @enum {string}
+             */
+            heatLossBasis: "handbook" | "calibrated";
+            /** @description multiplier applied to the heat-loss coefficient (1 on the handbook basis) */
+            heatLossFactor: number;
+            calibrationId: number | null;
+            /** @description when the calibration used was run, ISO 8601 */
+            calibratedAt: string | null;
+            /** @description why the handbook was used although calibrated was asked for, or that the house changed after its calibration */
+            heatLossBasisNote: string | null;
+            startDate: string;
+            endDate: string;
+            /** @enum {string} */
+            seasonFrom: "request" | "default-heating-season" | "temperature-log";
+            /** @description periods of the house's production calendar (0 = heated all season at the house setpoints) */
+            calendarPeriodCount: number;
+        };
+        HouseSeasonEstimateDto: {
+            period: components["schemas"]["SeasonPeriodDto"];
+            fuel: components["schemas"]["SeasonFuelDto"];
+            heatLoss: components["schemas"]["SeasonHeatLossDto"];
+            /** @description one row per calendar month the season touches */
+            monthly: components["schemas"]["SeasonMonthDto"][];
+            total: components["schemas"]["SeasonTotalDto"];
+            heaterCapacity: components["schemas"]["SeasonHeaterCapacityDto"];
+            /** @description the hour of highest heat demand; null if no heat was needed */
+            peak: components["schemas"]["SeasonPeakDto"] | null;
+            /** @description share of the season's heat delivered at night (sunset to sunrise) */
+            nightShareOfHeat: number;
+            /** @description heat the sun supplied in place of the heater, kWh */
+            solarOffsetKWh: number;
+            /** @description the supplemental lamps' electricity, heat and the fuel their heat saves; null without lamps */
+            lamps: components["schemas"]["SeasonLampsDto"] | null;
+            /** @description the season's heat by part of the house, with the night sky as its own part */
+            lossBreakdown: components["schemas"]["SeasonLossBreakdownDto"];
+            degreeDays: components["schemas"]["DegreeDayCrossCheckDto"];
+            assumptions: components["schemas"]["SeasonAssumptionDto"][];
+            /** @description combustion / electrical safety cautions; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
+            cautions: string[];
+            houseId: number;
+            inputsUsed: components["schemas"]["SeasonInputsUsedDto"];
+        };
+        NightDemandRequestDto: {
+            /** @description 'normals' (default: the farm's monthly climate normals) or { temperatureLogId } to use a logged year instead */
+            climateSource?: "normals" | components["schemas"]["TemperatureLogClimateSourceDto"];
+            /** @description reference-data fuels id; default: the fuel of the house's first heater */
+            fuelId?: string;
+            /** @description money per purchase unit; default: the farm's price for the fuel */
+            pricePerUnit?: number;
+            /**
+             * @description unit the given pricePerUnit is per: 'si' (the fuel's unitSi, default) or 'us' (its unitUs)
+             * @enum {string}
+             */
+            priceUnit?: "si" | "us";
+            /** @description output ÷ input; default: the efficiency of the house's first heater burning the fuel */
+            heaterEfficiency?: number;
+            /**
+             * @description the evening the night begins, YYYY-MM-DD
+             * @example 2027-01-15
+             */
+            date: string;
+            /** @description °C; default: the house's night setpoint */
+            nightSetpointC?: number;
+        };
+        NightHourDto: {
+            /** @description start of the hour, local standard time */
+            at: string;
+            /** @description °C */
+            outdoorC: number;
+            /** @description share of the hour after sunset / before sunrise */
+            nightShare: number;
+            /** @description average heat demand over the hour's night share, W */
+            heatW: number;
+            /** @description the part of heatW lost to the night sky, W */
+            skyW: number;
+            /** @description heat the heaters deliver (at most their installed output), W */
+            deliveredW: number;
+            /** @description true when the heaters cannot hold the night setpoint this hour */
+            belowSetpoint: boolean;
+        };
+        SeasonRunInputsDto: {
+            /** @enum {string} */
+            climateSource: "normals" | "temperature-log";
+            temperatureLogId: number | null;
+            temperatureLogName: string | null;
+            fuelId: string;
+            /** @enum {string} */
+            fuelFrom: "request" | "house-heater";
+            /** @description null when the farm has no price for the fuel and the request gave none */
+            pricePerUnit: number | null;
+            /** @enum {string} */
+            priceUnit: "si" | "us";
+            /**
+             * @description 'none': no price yet, so heat and fuel are given and every cost is null
+             * @enum {string}
+             */
+            priceFrom: "request" | "farm-fuel-prices" | "none";
+            /**
+             * @description the farm's currency (ISO 4217) every amount is in
+             * @example USD
+             */
+            currency: string;
+            heaterEfficiency: number;
+            /** @enum {string} */
+            heaterEfficiencyFrom: "request" | "house-heater";
+            /** @description the farm's IANA zone */
+            timeZone: string;
+            /** @description the zone's standard-time offset from UTC (daylight saving ignored), h */
+            utcOffsetHours: number;
+        };
+        HouseNightDemandDto: {
+            /** @description heat delivered to the house, kWh */
+            energyKWh: number;
+            /** @description heat content of the fuel burnt (energy ÷ efficiency), kWh */
+            fuelInputKWh: number;
+            /** @description fuel in its SI purchase unit (the fuel's unitSi) */
+            fuelQuantitySi: number;
+            /** @description fuel in its US purchase unit (the fuel's unitUs) */
+            fuelQuantityUs: number;
+            /** @description money, in the farm's currency; null when no fuel price is known (heat and fuel are still given) */
+            cost: number | null;
+            houseId: number;
+            /** @description the evening the night begins, YYYY-MM-DD */
+            date: string;
+            /** @description local standard time; null where the sun does not set */
+            sunset: string | null;
+            /** @description next morning, local standard time; null where the sun does not rise */
+            sunrise: string | null;
+            /** @description h */
+            nightHours: number;
+            /** @description °C */
+            nightSetpointC: number;
+            /** @description UA with the curtain drawn (if any), W/K */
+            uaWPerK: number;
+            /** @description highest hourly heat demand, W */
+            peakW: number;
+            /** @description coldest night hour, °C */
+            minOutdoorC: number | null;
+            /** @description installed heater output, W */
+            installedOutputW: number;
+            /** @description heat the heaters could not deliver, kWh */
+            unmetHeatKWh: number;
+            /** @description heat lost to the night sky over the night (part of the need), kWh */
+            skyKWh: number;
+            /** @description night hours in which the heaters cannot hold the setpoint */
+            hoursBelowSetpoint: number;
+            /** @description set when some hour cannot be held; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
+            capacityCaution: string | null;
+            hourly: components["schemas"]["NightHourDto"][];
+            /** @description may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
+            cautions: string[];
+            inputsUsed: components["schemas"]["SeasonRunInputsDto"];
+        };
+        MeasureFuelPriceDto: {
+            /** @description reference-data fuels id */
+            fuelId: string;
+            /** @description without a price the fuel switch is reported as not applicable */
+            pricePerUnit?: number;
+            /**
+             * @description needed with a price
+             * @enum {string}
+             */
+            priceUnit?: "si" | "us";
+        };
+        MeasureDto: {
+            /** @enum {string} */
+            kind: "second-poly-layer" | "thermal-curtain" | "perimeter-insulation" | "sealing" | "night-setpoint-lower" | "later-start" | "heater-efficiency" | "fuel-switch";
+            /** @description what the measure costs, same currency as the fuel price; omit (or null) when not known yet: the payback then asks for it */
+            costAmount?: number | null;
+            label?: string;
+            /** @description second-poly-layer: surfaces to cover */
+            surfaces?: ("roof" | "sidewalls")[];
+            /** @description second-poly-layer: the coverings id the surfaces become */
+            coveringId?: string;
+            /** @description perimeter-insulation: kneewalls id the kneewall is built of (default 2 in foam board) */
+            kneewallId?: string;
+            /** @description perimeter-insulation: kneewall height, m, where the house gives none (default 0.91 m) */
+            kneewallHeightM?: number;
+            /** @description thermal-curtain: curtains id */
+            curtainId?: string;
+            /** @description sealing: air-leakage class to reach */
+            airLeakageClassId?: string;
+            /** @description sealing: measured air changes per hour after sealing */
+            airChangesPerHour?: number;
+            /** @description night-setpoint-lower: K (0 is accepted and reported as not applicable) */
+            lowerByK?: number;
+            /** @description later-start: days */
+            delayDays?: number;
+            /**
+             * @description heater-efficiency: the kind of heater the units are replaced by (default: condensing); its typical efficiency applies unless `efficiency` is given
+             * @enum {string}
+             */
+            heaterType?: "gravity-vented" | "power-vented" | "separated-combustion" | "condensing" | "unvented" | "boiler" | "electric";
+            /** @description heater-efficiency / fuel-switch: efficiency of the new heaters */
+            efficiency?: number;
+            /** @description fuel-switch: the new fuel and its price (without it the measure is reported as not applicable) */
+            fuel?: components["schemas"]["MeasureFuelPriceDto"];
+        };
+        MeasuresRequestDto: {
+            /** @description 'normals' (default: the farm's monthly climate normals) or { temperatureLogId } to use a logged year instead */
+            climateSource?: "normals" | components["schemas"]["TemperatureLogClimateSourceDto"];
+            /** @description reference-data fuels id; default: the fuel of the house's first heater */
+            fuelId?: string;
+            /** @description money per purchase unit; default: the farm's price for the fuel */
+            pricePerUnit?: number;
+            /**
+             * @description unit the given pricePerUnit is per: 'si' (the fuel's unitSi, default) or 'us' (its unitUs)
+             * @enum {string}
+             */
+            priceUnit?: "si" | "us";
+            /** @description output ÷ input; default: the efficiency of the house's first heater burning the fuel */
+            heaterEfficiency?: number;
+            /** @description run for one of the house's alternatives instead of the house (its fields merged onto the house, and its calendar if it has one) */
+            alternativeId?: number;
+            /**
+             * @description first day, YYYY-MM-DD; give both dates or neither. Default: the heating season in progress or, between seasons, the next one (1 Sep – 31 May north of the equator, 1 Mar – 30 Nov south); with a temperature log, the whole days the log covers (at most 366)
+             * @example 2026-09-01
+             */
+            startDate?: string;
+            /**
+             * @description last day (inclusive), YYYY-MM-DD; at most 366 days from startDate
+             * @example 2027-05-31
+             */
+            endDate?: string;
+            /**
+             * @description 'handbook' (default) or 'calibrated': each house's heat-loss coefficient × the factor of the farm's newest calibration against its fuel bills (a house without one stays on the handbook, and the answer says so)
+             * @enum {string}
+             */
+            heatLossBasis?: "handbook" | "calibrated";
+            /** @description measures to compare; an empty list compares the default measures (reference-data/measures.json) that apply to the house, without costs, so a ranking shows at once */
+            measures: components["schemas"]["MeasureDto"][];
+        };
+        MeasureSeasonDto: {
+            /** @description heat delivered to the house, kWh */
+            energyKWh: number;
+            /** @description heat content of the fuel burnt (energy ÷ efficiency), kWh */
+            fuelInputKWh: number;
+            /** @description fuel in its SI purchase unit (the fuel's unitSi) */
+            fuelQuantitySi: number;
+            /** @description fuel in its US purchase unit (the fuel's unitUs) */
+            fuelQuantityUs: number;
+            /** @description money, in the farm's currency; null when no fuel price is known (heat and fuel are still given) */
+            cost: number | null;
+            fuelId: string;
+            unitSi: string;
+            unitUs: string;
+        };
+        MeasureLightChangeDto: {
+            /**
+             * @description 'kneewall': light through the whole envelope, an opaque kneewall passing none
+             * @enum {string}
+             */
+            surface: "roof" | "sidewalls" | "kneewall";
+            /** @description light transmittance before, 0–1 */
+            before: number;
+            /** @description light transmittance after, 0–1 */
+            after: number;
+            /** @description relative change of light reaching the crop, e.g. −0.11 for 11 % less */
+            relativeChange: number;
+            source: string;
+        };
+        MeasureResultDto: {
+            /** @description position in the request list (or in the default list) */
+            index: number;
+            /** @enum {string} */
+            kind: "second-poly-layer" | "thermal-curtain" | "perimeter-insulation" | "sealing" | "night-setpoint-lower" | "later-start" | "heater-efficiency" | "fuel-switch";
+            label: string;
+            /** @description what changed, in words; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
+            description: string;
+            /** @description null when no cost was entered */
+            costAmount: number | null;
+            /** @description false when the measure changes nothing for this house (already done, or no better than what it has) */
+            applicable: boolean;
+            /** @description why the measure does not apply, in plain words; null when it applies; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
+            notApplicableReason: string | null;
+            /** @description the season with the measure (the house as it is when the measure does not apply) */
+            season: components["schemas"]["MeasureSeasonDto"];
+            /** @description heat the house no longer needs, kWh per season (0 for heater or fuel changes) */
+            heatSavedKWh: number;
+            /** @description fuel energy no longer bought, kWh per season */
+            fuelInputSavedKWh: number;
+            /** @description in the baseline fuel's unitSi; null when the measure burns another fuel */
+            fuelSavedSi: number | null;
+            /** @description in the baseline fuel's unitUs */
+            fuelSavedUs: number | null;
+            /** @description money saved per season (= per year with one season a year); negative when it costs more to run; null without a fuel price */
+            yearlyMoneySaved: number | null;
+            /**
+             * @description 'years': cost ÷ saving; 'immediate': cost 0 and a saving; 'enter-cost': a saving but no cost entered; 'enter-price': fuel saved but no fuel price known; 'never': no money saved; 'not-applicable': changes nothing for this house
+             * @enum {string}
+             */
+            paybackStatus: "years" | "immediate" | "enter-cost" | "enter-price" | "never" | "not-applicable";
+            /** @description cost ÷ yearly money saved, years (0 when 'immediate'); null for the other statuses */
+            paybackYears: number | null;
+            /**
+             * @description '2.4 years', 'immediately', 'enter a cost', 'enter the fuel price', 'never' or 'not applicable'
+             * @example 2.4 years
+             */
+            paybackText: string;
+            /** @description light change for measures that add a layer or a screen */
+            lightChange: components["schemas"]["MeasureLightChangeDto"] | null;
+            /** @description may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
+            notes: string[];
+        };
+        MeasureComparisonDto: {
+            houseId: number;
+            /** @description the season of the house as it is */
+            baseline: components["schemas"]["MeasureSeasonDto"];
+            /** @description shortest payback first (equal paybacks: larger saving first), then measures without a cost, then those that never pay back, then those that do not apply */
+            measures: components["schemas"]["MeasureResultDto"][];
+            /** @description true when the request listed no measures and the default measures that apply to the house were compared without costs */
+            defaultsUsed: boolean;
+            /** @description may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
+            notes: string[];
+            inputsUsed: components["schemas"]["SeasonInputsUsedDto"];
+        };
+        ProductionPeriodDto: {
+            /**
+             * @description first day, 'MM-DD'
+             * @example 11-15
+             */
+            startMonthDay: string;
+            /**
+             * @description last day (inclusive), 'MM-DD'; may wrap the year end
+             * @example 03-31
+             */
+            endMonthDay: string;
+            /** @enum {string} */
+            mode: "heated" | "empty";
+            /** @description replaces the house's day heating setpoint in this period, °C */
+            dayHeatingC?: number;
+            /** @description replaces the house's night heating setpoint in this period, °C */
+            nightHeatingC?: number;
+            /** @example Spring bedding crop */
+            label?: string;
+        };
+        ProductionCalendarDto: {
+            /** @description empty list = heated all season at the house setpoints; otherwise days no period covers are unheated, and where periods overlap the later one wins */
+            periods: components["schemas"]["ProductionPeriodDto"][];
+            houseId: number;
+            /** @description 0 until the first save, then raised by one on every save; send it in If-Match */
+            version: number;
+        };
+        PutProductionCalendarDto: {
+            /** @description empty list = heated all season at the house setpoints; otherwise days no period covers are unheated, and where periods overlap the later one wins */
+            periods: components["schemas"]["ProductionPeriodDto"][];
+        };
+        FuelPriceDto: {
+            /** @description reference-data fuels id (one price per fuel) */
+            fuelId: string;
+            /** @description money per purchase unit */
+            pricePerUnit: number;
+            /**
+             * @description 'si': per the fuel's unitSi (m³, L, kg, kWh); 'us': per its unitUs (therm, US gal, short ton, kWh)
+             * @enum {string}
+             */
+            priceUnit: "si" | "us";
+            /** @description where the price came from (supplier, contract, date) */
+            note?: string | null;
+            /** @example Propane */
+            fuelLabel: string;
+            /**
+             * @description the unit the price is per
+             * @example US gal
+             */
+            priceUnitLabel: string;
+        };
+        FarmFuelPricesDto: {
+            farmId: number;
+            prices: components["schemas"]["FuelPriceDto"][];
+            /** @description version of the set, raised by one on every save; send it in If-Match */
+            version: number;
+        };
+        FuelPriceInputDto: {
+            /** @description reference-data fuels id (one price per fuel) */
+            fuelId: string;
+            /** @description money per purchase unit */
+            pricePerUnit: number;
+            /**
+             * @description 'si': per the fuel's unitSi (m³, L, kg, kWh); 'us': per its unitUs (therm, US gal, short ton, kWh)
+             * @enum {string}
+             */
+            priceUnit: "si" | "us";
+            /** @description where the price came from (supplier, contract, date) */
+            note?: string | null;
+        };
+        PutFuelPricesDto: {
+            /** @description replaces every price of the farm */
+            prices: components["schemas"]["FuelPriceInputDto"][];
+        };
+        SeasonBudgetRequestDto: {
+            /**
+             * @description first day, YYYY-MM-DD (default as for a house season)
+             * @example 2026-09-01
+             */
+            startDate?: string;
+            /**
+             * @description last day (inclusive), YYYY-MM-DD
+             * @example 2027-05-31
+             */
+            endDate?: string;
+            /** @description 'normals' (default: the farm's monthly climate normals) or { temperatureLogId } to use a logged year instead */
+            climateSource?: "normals" | components["schemas"]["TemperatureLogClimateSourceDto"];
+            /**
+             * @description 'handbook' (default) or 'calibrated': each house's heat-loss coefficient × the factor of the farm's newest calibration against its fuel bills (a house without one stays on the handbook, and the answer says so)
+             * @enum {string}
+             */
+            heatLossBasis?: "handbook" | "calibrated";
+        };
+        BudgetMonthOfHouseDto: {
+            year: number;
+            month: number;
+            /** @description heat delivered, kWh */
+            energyKWh: number;
+            /** @description fuel burnt, kWh */
+            fuelInputKWh: number;
+            fuelQuantitySi: number;
+            fuelQuantityUs: number;
+            /** @description null when the farm has no price for the fuel */
+            cost: number | null;
+            /** @description heat the heaters could not deliver, kWh */
+            unmetHeatKWh: number;
+            /** @description hours in which the heaters could not hold the setpoint */
+            hoursBelowSetpoint: number;
+        };
+        BudgetHouseDto: {
+            /**
+             * @description the heat-loss basis this house was estimated on
+             * @enum {string}
+             */
+            heatLossBasis: "handbook" | "calibrated";
+            /** @description multiplier applied to its heat-loss coefficient (1 on the handbook basis) */
+            heatLossFactor: number;
+            houseId: number;
+            name: string;
+            /** @description fuel of the first heater; null when the house has no heaters */
+            fuelId: string | null;
+            fuelLabel: string | null;
+            unitSi: string | null;
+            unitUs: string | null;
+            heaterEfficiency: number | null;
+            pricePerUnit: number | null;
+            /** @enum {string|null} */
+            priceUnit: "si" | "us" | null;
+            /** @description heat delivered, kWh */
+            energyKWh: number;
+            /** @description fuel burnt, kWh */
+            fuelInputKWh: number;
+            /** @description in the fuel's unitSi */
+            fuelQuantitySi: number;
+            /** @description in the fuel's unitUs */
+            fuelQuantityUs: number;
+            /** @description null when the farm has no price for the fuel */
+            cost: number | null;
+            heatedDays: number;
+            /** @description periods of the house's production calendar (0 = heated all season) */
+            calendarPeriodCount: number;
+            /** @description heat the house's heaters could not deliver, kWh */
+            unmetHeatKWh: number;
+            /** @description hours in which the heaters could not hold the setpoint */
+            hoursBelowSetpoint: number;
+            /** @description set when the heaters cannot hold the setpoint in some hour; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
+            capacityCaution: string | null;
+            monthly: components["schemas"]["BudgetMonthOfHouseDto"][];
+            /** @description why the house is not (fully) budgeted, e.g. no heaters or no price */
+            problem: string | null;
+        };
+        BudgetFuelTotalDto: {
+            fuelId: string;
+            label: string;
+            unitSi: string;
+            unitUs: string;
+            houseCount: number;
+            /** @description kWh */
+            energyKWh: number;
+            /** @description kWh */
+            fuelInputKWh: number;
+            fuelQuantitySi: number;
+            fuelQuantityUs: number;
+            /** @description null when the farm has no price for the fuel */
+            cost: number | null;
+        };
+        BudgetMonthFuelDto: {
+            fuelId: string;
+            fuelQuantitySi: number;
+            fuelQuantityUs: number;
+        };
+        BudgetMonthDto: {
+            year: number;
+            month: number;
+            /** @description heat delivered to all houses, kWh */
+            energyKWh: number;
+            /** @description kWh */
+            fuelInputKWh: number;
+            /** @description cost of the houses with a price; null when no house of the month has one */
+            cost: number | null;
+            byFuel: components["schemas"]["BudgetMonthFuelDto"][];
+        };
+        SeasonBudgetDto: {
+            /** @enum {string} */
+            heatLossBasisRequested: "handbook" | "calibrated";
+            /**
+             * @description mixed: some houses calibrated, the others on the handbook values
+             * @enum {string}
+             */
+            heatLossBasis: "handbook" | "calibrated" | "mixed";
+            calibrationId: number | null;
+            calibratedAt: string | null;
+            /** @description the basis in words, for the page and the report */
+            heatLossBasisStatement: string;
+            farmId: number;
+            startDate: string;
+            endDate: string;
+            /** @enum {string} */
+            seasonFrom: "request" | "default-heating-season" | "temperature-log";
+            /** @enum {string} */
+            climateSource: "normals" | "temperature-log";
+            temperatureLogId: number | null;
+            houses: components["schemas"]["BudgetHouseDto"][];
+            byFuel: components["schemas"]["BudgetFuelTotalDto"][];
+            /** @description heat delivered to all houses, kWh */
+            totalEnergyKWh: number;
+            /** @description sum of the priced houses; null when no house has a price */
+            totalCost: number | null;
+            /**
+             * @description the farm's currency (ISO 4217) every amount is in
+             * @example USD
+             */
+            currency: string;
+            /** @description false when some house has no price (or no heaters) and is left out of totalCost */
+            costComplete: boolean;
+            monthly: components["schemas"]["BudgetMonthDto"][];
+            /** @description may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
+            notes: string[];
+            /** @description may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
+            cautions: string[];
+        };
+        MeasurePlanDto: {
+            houseId: number;
+            /** @description empty until the first save */
+            measures: components["schemas"]["MeasureDto"][];
+            /** @description raised on every save; 0 before the first */
+            version: number;
+        };
+        PutMeasurePlanDto: {
+            /** @description the measures to keep with the house, each with its settings and cost (null cost = not known yet) */
+            measures: components["schemas"]["MeasureDto"][];
+        };
+        FieldProblemDto: {
+            /**
+             * @description the house field at fault
+             * @example ridgeHeightM
+             */
+            field: string;
+            message: string;
+        };
+        AlternativeDto: {
+            id: number;
+            houseId: number;
+            name: string;
+            notes: string | null;
+            /** @description the house fields this alternative changes, merged onto the house as it is when read (JSON Merge Patch: objects such as coverings merge key by key, null inside them removes a key; other values replace the house's). Fields not named follow every later edit of the house. Example: { coverings: { roof: 'poly-double-inflated' } } */
+            patch: {
+                [key: string]: unknown;
+            };
+            /**
+             * @description the fields the patch sets
+             * @example [
+             *       "coverings.roof"
+             *     ]
+             */
+            changedFields: string[];
+            calendar: components["schemas"]["ProductionPeriodDto"][] | null;
+            costAmount: number | null;
+            createdById: number | null;
+            createdByName: string | null;
+            /** @description set when the house as it is now, with this patch, is not a valid house (e.g. ridge under eave) */
+            invalid: components["schemas"]["FieldProblemDto"] | null;
+            /** @description the house with the patch applied; null when invalid */
+            house: components["schemas"]["HouseDto"] | null;
+            createdAt: string;
+            updatedAt: string;
+        };
+        CreateAlternativeDto: {
+            /** @example Inflated double poly */
+            name: string;
+            notes?: string | null;
+            /** @description the house fields this alternative changes, merged onto the house as it is when read (JSON Merge Patch: objects such as coverings merge key by key, null inside them removes a key; other values replace the house's). Fields not named follow every later edit of the house. Example: { coverings: { roof: 'poly-double-inflated' } } */
+            patch?: {
+                [key: string]: unknown;
+            };
+            /** @description instead of patch: the house as the user edited it (all or some of its fields); the patch is what differs from the stored house */
+            house?: {
+                [key: string]: unknown;
+            };
+            /** @description production periods in place of the house's calendar; null or absent = the house's own calendar */
+            calendar?: components["schemas"]["ProductionPeriodDto"][] | null;
+            /** @description installed cost, money in the currency of the farm’s fuel prices; null = not entered */
+            costAmount?: number | null;
+        };
+        UpdateAlternativeDto: {
+            /** @example Inflated double poly */
+            name?: string;
+            notes?: string | null;
+            /** @description the house fields this alternative changes, merged onto the house as it is when read (JSON Merge Patch: objects such as coverings merge key by key, null inside them removes a key; other values replace the house's). Fields not named follow every later edit of the house. Example: { coverings: { roof: 'poly-double-inflated' } } */
+            patch?: {
+                [key: string]: unknown;
+            };
+            /** @description instead of patch: the house as the user edited it (all or some of its fields); the patch is what differs from the stored house */
+            house?: {
+                [key: string]: unknown;
+            };
+            /** @description production periods in place of the house's calendar; null or absent = the house's own calendar */
+            calendar?: components["schemas"]["ProductionPeriodDto"][] | null;
+            /** @description installed cost, money in the currency of the farm’s fuel prices; null = not entered */
+            costAmount?: number | null;
+        };
+        AdoptAlternativeResultDto: {
+            house: components["schemas"]["HouseDto"];
+            /** @description the house as it was, kept as an alternative */
+            previous: components["schemas"]["AlternativeDto"];
+        };
+        DuplicateHouseDto: {
+            /** @description default: the house’s name + " (copy)" */
+            name?: string;
+        };
+        ColumnProposalDto: {
+            /** @description one column holding date and time (or the date alone in a daily file) */
+            timestampColumn: string | null;
+            /** @description separate date column, when the file splits date and time */
+            dateColumn: string | null;
+            /** @description separate time-of-day column */
+            timeColumn: string | null;
+            /** @description the (mean) temperature; null when a daily file has only minimum and maximum */
+            temperatureColumn: string | null;
+            minColumn: string | null;
+            maxColumn: string | null;
+            /** @enum {string} */
+            unit: "C" | "F";
+            /** @description why the unit was guessed, in words */
+            unitReason: string;
+            /** @enum {string} */
+            resolution: "hourly" | "daily";
+            /**
+             * @description order of day, month and year in dates with the year last
+             * @enum {string}
+             */
+            dateOrder: "YMD" | "MDY" | "DMY";
+            /** @description true when day-first and month-first both fit the dates seen; the user should confirm */
+            dateOrderAmbiguous: boolean;
+            /** @description numbers are written with a decimal comma */
+            decimalComma: boolean;
+        };
+        TemperatureCsvInspectionDto: {
+            /**
+             * @description ',' ';' or a tab
+             * @enum {string}
+             */
+            delimiter: "," | ";" | "\t";
+            hasHeader: boolean;
+            /** @description column names (from the header, or 'Column 1', 'Column 2' … without one) */
+            headers: string[];
+            /** @description the first data rows as they appear */
+            sampleRows: string[][];
+            /** @description data rows in the file */
+            dataRowCount: number;
+            proposal: components["schemas"]["ColumnProposalDto"];
+            notes: string[];
+        };
+        TemperatureLogDto: {
+            id: number;
+            farmId: number;
+            name: string;
+            /** @enum {string} */
+            resolution: "hourly" | "daily";
+            /** @description first reading's date, YYYY-MM-DD */
+            startDate: string;
+            /** @description last reading's date, YYYY-MM-DD */
+            endDate: string;
+            /** @description data rows in the file */
+            rowCount: number;
+            /** @description readings kept (rows without any temperature are skipped) */
+            readingCount: number;
+            /** Format: date-time */
+            createdAt: string;
+        };
+        TemperatureColumnMappingDto: {
+            timestampColumn?: string | null;
+            dateColumn?: string | null;
+            timeColumn?: string | null;
+            temperatureColumn?: string | null;
+            minColumn?: string | null;
+            maxColumn?: string | null;
+            /** @enum {string} */
+            unit: "C" | "F";
+            /**
+             * @description inferred from the times when absent
+             * @enum {string}
+             */
+            resolution?: "hourly" | "daily";
+            /** @enum {string} */
+            dateOrder?: "YMD" | "MDY" | "DMY";
+            decimalComma?: boolean;
+            /**
+             * @description detected when absent
+             * @enum {string}
+             */
+            delimiter?: "," | ";" | "\t";
+            /** @description detected when absent */
+            hasHeader?: boolean;
+        };
+        TemperatureLogDayDto: {
+            /** @description YYYY-MM-DD (as logged) */
+            date: string;
+            /** @description lowest reading (hourly) or the logged minimum (daily), °C; null for a daily log with means only */
+            minC: number | null;
+            /** @description mean of the readings (hourly) or the logged temperature (daily), °C */
+            meanC: number;
+            /** @description °C */
+            maxC: number | null;
+            /** @description readings that day */
+            readingCount: number;
+        };
+        TemperatureLogDetailDto: {
+            id: number;
+            farmId: number;
+            name: string;
+            /** @enum {string} */
+            resolution: "hourly" | "daily";
+            /** @description first reading's date, YYYY-MM-DD */
+            startDate: string;
+            /** @description last reading's date, YYYY-MM-DD */
+            endDate: string;
+            /** @description data rows in the file */
+            rowCount: number;
+            /** @description readings kept (rows without any temperature are skipped) */
+            readingCount: number;
+            /** Format: date-time */
+            createdAt: string;
+            /** @description how the file was read */
+            mapping: components["schemas"]["TemperatureColumnMappingDto"];
+            days: components["schemas"]["TemperatureLogDayDto"][];
+        };
+        WeatherSourceDto: {
+            /** @description true when the weather is invented by the local stand-in, not measured */
+            standIn: boolean;
+            /** @description the real service in use (WEATHER_API_URL), or null */
+            serviceUrl: string | null;
+            /** @description what a reader must know about where the hours come from */
+            note: string;
+            defaultFromYear: number;
+            defaultToYear: number;
+            /** @description the last complete calendar year the service can be asked for */
+            lastCompleteYear: number;
+        };
+        WeatherYearStatusDto: {
+            year: number;
+            /** @description true when the year was already cached and the service was not asked */
+            fromCache: boolean;
+            hourCount: number;
+            missingHourCount: number;
+        };
+        WeatherYearUsageDto: {
+            year: number;
+            hourCount: number;
+            missingHourCount: number;
+            /** @description missing hours ÷ hours, 0–1 */
+            missingShare: number;
+        };
+        WeatherYearLeftOutDto: {
+            year: number;
+            hourCount: number;
+            missingHourCount: number;
+            /** @description missing hours ÷ hours, 0–1 */
+            missingShare: number;
+            reason: string;
+        };
+        MonthlyFromWeatherDto: {
+            month: number;
+            /** @description °C */
+            meanDailyMinC: number;
+            /** @description °C */
+            meanDailyMaxC: number;
+            /** @description measured ÷ clear-sky global horizontal, 0–1 */
+            clearness: number | null;
+            dayCount: number;
+        };
+        ClimateProposalDto: {
+            farmId: number;
+            fromYear: number;
+            toYear: number;
+            source: components["schemas"]["WeatherSourceDto"];
+            /** @description the grid point the hours belong to (0.1°) */
+            gridLatitudeDeg: number;
+            gridLongitudeDeg: number;
+            yearsUsed: components["schemas"]["WeatherYearUsageDto"][];
+            yearsLeftOut: components["schemas"]["WeatherYearLeftOutDto"][];
+            hoursUsed: number;
+            /** @description dry bulb that 99.6 % of the hours are at or above, °C */
+            winterDesign996C: number;
+            /** @description dry bulb that 99 % of the hours are at or above, °C */
+            winterDesign99C: number;
+            /** @description dry bulb that 0.4 % of the hours are at or above, °C */
+            summerDesign04C: number;
+            /** @description dry bulb that 1 % of the hours are at or above, °C */
+            summerDesign1C: number;
+            /** @description mean coincident wet bulb at the 0.4 % dry bulb, °C */
+            summerCoincidentWetBulb04C: number | null;
+            /** @description mean coincident wet bulb at the 1 % dry bulb, °C */
+            summerCoincidentWetBulb1C: number | null;
+            /** @description mean daily range of the warmest month, K */
+            summerDailyRangeK: number;
+            monthly: components["schemas"]["MonthlyFromWeatherDto"][];
+            /** @description what would be saved: 99.6 % heating and 1 % cooling design values, monthly normals */
+            proposedClimate: components["schemas"]["SiteClimateDto"];
+            currentClimate: components["schemas"]["SiteClimateDto"] | null;
+        };
+        LogProposedClimateDto: {
+            /** @description heating design dry bulb (99 % or 99.6 %), °C */
+            winterDesignC: number;
+            /** @description cooling design dry bulb (1 %), °C */
+            summerDesignC: number;
+            /** @description mean daily range on the summer design day, K */
+            summerDailyRangeK: number;
+            /** @description exactly 12 rows, one per month */
+            monthly: components["schemas"]["MonthlyClimateDto"][];
+            /** @description where the numbers came from (e.g. national climate normals, station name) */
+            sourceNote?: string | null;
+            /** @description winter design wind speed, m/s; null: the 6.7 m/s (15 mph) the U tables assume (reference-data/wind.json) */
+            designWindSpeedMPerS?: number | null;
+            /** @description the farm's current coincident wet bulb (a temperature log has no humidity); null when it has none */
+            summerDesignWetBulbC: number | null;
+        };
+        LogClimateProposalDto: {
+            farmId: number;
+            temperatureLogId: number;
+            temperatureLogName: string;
+            /** @description first hour of the log, local standard time 'YYYY-MM-DDTHH:00' */
+            firstHour: string;
+            /** @description last hour of the log, local standard time */
+            lastHour: string;
+            /** @description hours from the first to the last */
+            hourCount: number;
+            /** @description hours with a reading (the percentiles are over these) */
+            hoursUsed: number;
+            /** @description dry bulb that 99.6 % of the hours are at or above, °C */
+            winterDesign996C: number;
+            /** @description dry bulb that 99 % of the hours are at or above, °C */
+            winterDesign99C: number;
+            /** @description dry bulb that 0.4 % of the hours are at or above, °C */
+            summerDesign04C: number;
+            /** @description dry bulb that 1 % of the hours are at or above, °C */
+            summerDesign1C: number;
+            /** @description always null: a temperature log has no humidity */
+            summerCoincidentWetBulb04C: number | null;
+            /** @description always null: a temperature log has no humidity */
+            summerCoincidentWetBulb1C: number | null;
+            /** @description mean daily range of the warmest month, K */
+            summerDailyRangeK: number;
+            /** @description clearness is null (no sunshine logged) */
+            monthly: components["schemas"]["MonthlyFromWeatherDto"][];
+            /** @description what would be saved (99.6 % heating, 1 % cooling) */
+            proposedClimate: components["schemas"]["LogProposedClimateDto"];
+            currentClimate: components["schemas"]["SiteClimateDto"] | null;
+            /** @description how the values were worked out, in words */
+            notes: string[];
+        };
+        CreateReportDto: {
+            /** @example Heater sizing, north house */
+            title: string;
+            /** @description plain text */
+            notes?: string;
+            /** @description plain text */
+            recommendations?: string;
+        };
+        ReportFactDto: {
+            label: string;
+            value: string;
+        };
+        ReportBarDto: {
+            label: string;
+            value: number;
+        };
+        ReportBlockDto: {
+            /** @enum {string} */
+            kind: "paragraph" | "facts" | "table" | "list" | "bars";
+            text?: string;
+            facts?: components["schemas"]["ReportFactDto"][];
+            columns?: string[];
+            rows?: string[][];
+            items?: string[];
+            caption?: string;
+            bars?: components["schemas"]["ReportBarDto"][];
+            /** @description unit of the bar values */
+            unit?: string;
+            /** @description table: a comparison, whose first cell in each row names the row and whose other columns share the width equally */
+            comparison?: boolean;
+        };
+        ReportSectionDto: {
+            heading: string;
+            blocks: components["schemas"]["ReportBlockDto"][];
+        };
+        ReportDocumentDto: {
+            /** @enum {string} */
+            unitSystem: "si" | "us";
+            /** @enum {string} */
+            pageSize: "A4" | "LETTER";
+            farmName: string;
+            houseName: string;
+            title: string;
+            subtitle: string;
+            sections: components["schemas"]["ReportSectionDto"][];
+            footer: string;
+        };
+        ReportDto: {
+            id: number;
+            farmId: number;
+            /** @description null once the house was deleted */
+            houseId: number | null;
+            houseName: string;
+            title: string;
+            /** @enum {string} */
+            status: "draft" | "issued";
+            revision: number;
+            previousReportId: number | null;
+            authorName: string;
+            createdAt: string;
+            updatedAt: string;
+            issuedAt: string | null;
+            notes: string;
+            recommendations: string;
+            /** @description the viewer may edit, issue and revise it (report:write) */
+            canWrite: boolean;
+            document: components["schemas"]["ReportDocumentDto"];
+            /** @description the saved inputs and results (SI), exactly as taken when the report was created */
+            snapshot: {
+                [key: string]: unknown;
+            };
+        };
+        ReportSummaryDto: {
+            id: number;
+            farmId: number;
+            /** @description null once the house was deleted */
+            houseId: number | null;
+            houseName: string;
+            title: string;
+            /** @enum {string} */
+            status: "draft" | "issued";
+            revision: number;
+            previousReportId: number | null;
+            authorName: string;
+            createdAt: string;
+            updatedAt: string;
+            issuedAt: string | null;
+        };
+        ClientFarmDto: {
+            farmId: number;
+            farmName: string;
+            houseCount: number;
+            latestReport: components["schemas"]["ReportSummaryDto"] | null;
+        };
+        UpdateReportDto: {
+            title?: string;
+            notes?: string;
+            recommendations?: string;
+        };
+        SendReportDto: {
+            /** @description farm members, by user id */
+            memberUserIds?: number[];
+            /** @description any other addresses */
+            emails?: string[];
+            /** @description a short message above the report */
+            message?: string;
+        };
+        ReportSentDto: {
+            /** @enum {string} */
+            status: "sent" | "failed";
+            /** @description why the message did not go; kept in the send log */
+            error: string | null;
+            recipients: string[];
+        };
+        SideBySideRequestDto: {
+            /** @description 'normals' (default: the farm's monthly climate normals) or { temperatureLogId } to use a logged year instead */
+            climateSource?: "normals" | components["schemas"]["TemperatureLogClimateSourceDto"];
+            /** @description reference-data fuels id; default: the fuel of the house's first heater */
+            fuelId?: string;
+            /** @description money per purchase unit; default: the farm's price for the fuel */
+            pricePerUnit?: number;
+            /**
+             * @description unit the given pricePerUnit is per: 'si' (the fuel's unitSi, default) or 'us' (its unitUs)
+             * @enum {string}
+             */
+            priceUnit?: "si" | "us";
+            /** @description output ÷ input; default: the efficiency of the house's first heater burning the fuel */
+            heaterEfficiency?: number;
+            /**
+             * @description first day, YYYY-MM-DD; give both dates or neither. Default: the heating season in progress or, between seasons, the next one (1 Sep – 31 May north of the equator, 1 Mar – 30 Nov south); with a temperature log, the whole days the log covers (at most 366)
+             * @example 2026-09-01
+             */
+            startDate?: string;
+            /**
+             * @description last day (inclusive), YYYY-MM-DD; at most 366 days from startDate
+             * @example 2027-05-31
+             */
+            endDate?: string;
+            /**
+             * @description 'handbook' (default) or 'calibrated': each house's heat-loss coefficient × the factor of the farm's newest calibration against its fuel bills (a house without one stays on the handbook, and the answer says so)
+             * @enum {string}
+             */
+            heatLossBasis?: "handbook" | "calibrated";
+            /** @description ids of the house's alternatives to set beside it, in column order (at most 4) */
+            alternativeIds?: number[];
+        };
+        SeasonEstimateDto: {
+            period: components["schemas"]["SeasonPeriodDto"];
+            fuel: components["schemas"]["SeasonFuelDto"];
+            heatLoss: components["schemas"]["SeasonHeatLossDto"];
+            /** @description one row per calendar month the season touches */
+            monthly: components["schemas"]["SeasonMonthDto"][];
+            total: components["schemas"]["SeasonTotalDto"];
+            heaterCapacity: components["schemas"]["SeasonHeaterCapacityDto"];
+            /** @description the hour of highest heat demand; null if no heat was needed */
+            peak: components["schemas"]["SeasonPeakDto"] | null;
+            /** @description share of the season's heat delivered at night (sunset to sunrise) */
+            nightShareOfHeat: number;
+            /** @description heat the sun supplied in place of the heater, kWh */
+            solarOffsetKWh: number;
+            /** @description the supplemental lamps' electricity, heat and the fuel their heat saves; null without lamps */
+            lamps: components["schemas"]["SeasonLampsDto"] | null;
+            /** @description the season's heat by part of the house, with the night sky as its own part */
+            lossBreakdown: components["schemas"]["SeasonLossBreakdownDto"];
+            degreeDays: components["schemas"]["DegreeDayCrossCheckDto"];
+            assumptions: components["schemas"]["SeasonAssumptionDto"][];
+            /** @description combustion / electrical safety cautions; may contain {{kind:valueSI}} quantity tokens; show them in the reader's units */
+            cautions: string[];
+        };
+        SurfaceLightDto: {
+            /** @enum {string} */
+            group: "roof" | "sidewalls" | "endwalls";
+            coveringId: string;
+            coveringLabel: string;
+            /** @description share of daylight the covering lets through (reference value) */
+            lightTransmittance: number;
+            /** @description transmittance ÷ the house's − 1 for the same surface (negative = light lost) */
+            changeFromHouse: number;
+        };
+        VersusHouseDto: {
+            /** @description the house's season cost − this column's, money a year (positive = saves); null without a fuel price */
+            yearlySaving: number | null;
+            /** @description heat delivered, house − this column, kWh a season */
+            heatSavedKWh: number;
+            /** @description heat content of the fuel burnt, house − this column, kWh a season */
+            fuelInputSavedKWh: number;
+            /** @description design-night heat loss, this column − house, W */
+            designHeatLossChangeW: number;
+            /** @description cost ÷ yearly saving, years */
+            paybackYears: number | null;
+            /**
+             * @description 'enter-cost' when no cost is entered; 'enter-price' when the farm has no price for the fuel; 'never' when it saves nothing
+             * @enum {string}
+             */
+            paybackStatus: "years" | "immediate" | "enter-cost" | "enter-price" | "never";
+        };
+        SideBySideColumnDto: {
+            /**
+             * @description 'house' or 'alternative-<id>'
+             * @example alternative-12
+             */
+            key: string;
+            alternativeId: number | null;
+            name: string;
+            /** @description the house fields the alternative sets (none for the house) */
+            changedFields: string[];
+            /** @description true when the alternative brings its own production calendar */
+            ownCalendar: boolean;
+            /** @description installed cost; null = not entered */
+            costAmount: number | null;
+            /** @description set when this alternative cannot be computed now (e.g. ridge under eave after a house edit) */
+            invalid: components["schemas"]["FieldProblemDto"] | null;
+            heating: components["schemas"]["HeatingEstimateDto"] | null;
+            cooling: components["schemas"]["CoolingEstimateDto"] | null;
+            season: components["schemas"]["SeasonEstimateDto"] | null;
+            light: components["schemas"]["SurfaceLightDto"][] | null;
+            /** @description null for the house */
+            versusHouse: components["schemas"]["VersusHouseDto"] | null;
+        };
+        SideBySideDto: {
+            houseId: number;
+            houseName: string;
+            /** @description the house first, then each alternative */
+            columns: components["schemas"]["SideBySideColumnDto"][];
+            /** @description the design night of the house's column */
+            heatingConditionsUsed: components["schemas"]["HeatingConditionsUsedDto"];
+            /** @description the season inputs of the house's column */
+            seasonInputsUsed: components["schemas"]["SeasonInputsUsedDto"];
+        };
+        FuelRecordDto: {
+            id: number;
+            farmId: number;
+            fuelId: string;
+            fuelLabel: string;
+            quantity: number;
+            quantityUnit: string;
+            /** @description the energy the quantity holds (higher heat content), kWh */
+            fuelEnergyKWh: number;
+            cost: number | null;
+            startDate: string;
+            endDate: string;
+            days: number;
+            houseIds: number[];
+            nonHeatingPerDay: number | null;
+            note: string | null;
+            version: number;
+        };
+        CreateFuelRecordDto: {
+            /**
+             * @description reference-data fuels id
+             * @example propane
+             */
+            fuelId: string;
+            /** @example 1200 */
+            quantity: number;
+            /**
+             * @description one of the fuel's purchase units: its unitSi or unitUs in reference-data/fuels.json (therm, m³, US gal, L, kWh, short ton, kg)
+             * @example US gal
+             */
+            quantityUnit: string;
+            /** @description money, the farm's currency; null = not entered */
+            cost?: number | null;
+            /**
+             * @description first day the bill covers (for a tank delivery: the day after the previous fill), YYYY-MM-DD
+             * @example 2025-11-01
+             */
+            startDate: string;
+            /**
+             * @description last day the bill covers (inclusive), YYYY-MM-DD; at most 366 days after the start
+             * @example 2025-11-30
+             */
+            endDate: string;
+            /** @description houses the meter or tank serves (houses of this farm) */
+            houseIds: number[];
+            /** @description fuel used for other things than heating the houses (a dryer, washing water), in quantityUnit per day; null = none */
+            nonHeatingPerDay?: number | null;
+            note?: string | null;
+        };
+        UpdateFuelRecordDto: {
+            /**
+             * @description reference-data fuels id
+             * @example propane
+             */
+            fuelId?: string;
+            /** @example 1200 */
+            quantity?: number;
+            /**
+             * @description one of the fuel's purchase units: its unitSi or unitUs in reference-data/fuels.json (therm, m³, US gal, L, kWh, short ton, kg)
+             * @example US gal
+             */
+            quantityUnit?: string;
+            /** @description money, the farm's currency; null = not entered */
+            cost?: number | null;
+            /**
+             * @description first day the bill covers (for a tank delivery: the day after the previous fill), YYYY-MM-DD
+             * @example 2025-11-01
+             */
+            startDate?: string;
+            /**
+             * @description last day the bill covers (inclusive), YYYY-MM-DD; at most 366 days after the start
+             * @example 2025-11-30
+             */
+            endDate?: string;
+            /** @description houses the meter or tank serves (houses of this farm) */
+            houseIds?: number[];
+            /** @description fuel used for other things than heating the houses (a dryer, washing water), in quantityUnit per day; null = none */
+            nonHeatingPerDay?: number | null;
+            note?: string | null;
+        };
+        FuelRecordColumnMappingDto: {
+            /** @description column holding the fuel (id or name); or give fuelId for every row */
+            fuelColumn?: string;
+            /** @description the fuel of every row, when the file has no fuel column */
+            fuelId?: string;
+            quantityColumn: string;
+            /** @description column holding the unit; or give unit for every row */
+            unitColumn?: string;
+            /** @description the unit of every row, when the file has no unit column */
+            unit?: string;
+            costColumn?: string;
+            startColumn: string;
+            endColumn: string;
+            /** @description column holding house names separated by ; or |; or give houseIds for every row */
+            housesColumn?: string;
+            /** @description the houses of every row, when the file has no house column */
+            houseIds?: number[];
+            nonHeatingColumn?: string;
+        };
+        FuelRecordCsvInspectionDto: {
+            columns: string[];
+            /** @description the first rows as read, at most 5 */
+            preview: string[][];
+            /** @description data rows in the file */
+            rowCount: number;
+            /** @description columns guessed from the header; the user confirms or changes them */
+            proposed: components["schemas"]["FuelRecordColumnMappingDto"];
+        };
+        FuelRecordsUploadResultDto: {
+            created: number;
+            records: components["schemas"]["FuelRecordDto"][];
+        };
+        CalibrationPeriodDto: {
+            /** @description the fuel record this period is */
+            recordId: number;
+            startDate: string;
+            endDate: string;
+            days: number;
+            /**
+             * @description where the outdoor temperatures came from
+             * @enum {string}
+             */
+            climateFrom: "temperature-log" | "normals";
+            temperatureLogName: string | null;
+            quantityUnit: string;
+            /** @description billed, in quantityUnit */
+            billedQuantity: number;
+            /** @description modelled with the handbook heat loss, non-heating use included, in quantityUnit */
+            handbookQuantity: number;
+            /** @description modelled with the fitted factor, in quantityUnit */
+            fittedQuantity: number | null;
+            /** @description kWh of fuel energy */
+            billedFuelKWh: number;
+            handbookFuelKWh: number;
+            fittedFuelKWh: number | null;
+            nonHeatingFuelKWh: number;
+            usedInFit: boolean;
+            note: string | null;
+        };
+        CalibrationMeterDto: {
+            /** @description one fuel and one set of houses, e.g. 'propane:3,4' */
+            key: string;
+            fuelId: string;
+            fuelLabel: string;
+            houseIds: number[];
+            houseNames: string[];
+            fitted: boolean;
+            /** @description why no factor was fitted */
+            refusal: string | null;
+            /** @description multiplier on the heat-loss coefficient */
+            factor: number | null;
+            /** @description lower end of the 90 % interval */
+            factorLow90: number | null;
+            factorHigh90: number | null;
+            standardError: number | null;
+            degreesOfFreedom: number | null;
+            /** @description ASHRAE Guideline 14 NMBE, % */
+            nmbePercent: number | null;
+            /** @description ASHRAE Guideline 14 CV(RMSE), % */
+            cvRmsePercent: number | null;
+            /** @description |NMBE| ≤ 5 % and CV(RMSE) ≤ 15 % (monthly limits) */
+            meetsGuideline14: boolean | null;
+            verdict: string;
+            meaning: string;
+            periods: components["schemas"]["CalibrationPeriodDto"][];
+        };
+        CalibrationHouseFactorDto: {
+            houseId: number;
+            name: string;
+            factor: number | null;
+            meterKey: string | null;
+        };
+        CalibrationDto: {
+            id: number;
+            farmId: number;
+            /** @description when the calibration was run, ISO 8601 */
+            createdAt: string;
+            /** @description fuel records the fit ran on */
+            recordCount: number;
+            meters: components["schemas"]["CalibrationMeterDto"][];
+            houses: components["schemas"]["CalibrationHouseFactorDto"][];
+            notes: string[];
+        };
+    };
+    responses: never;
+    parameters: never;
+    requestBodies: never;
+    headers: never;
+    pathItems: never;
 }
 export type $defs = Record<string, never>;
 export interface operations {
-  HealthController_health: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    requestBody?: never;
-    responses: {
-      200: {
-        headers: {
-          [name: string]: unknown;
+    HealthController_health: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
         };
-        content: {
-          'application/json': components['schemas']['HealthDto'];
-        };
-      };
-      /** @description The database is not reachable */
-      503: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['HealthDto'];
-        };
-      };
-    };
-  };
-  ReferenceDataController_all: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    requestBody?: never;
-    responses: {
-      /** @description Every handbook table by name: { title, description, rows: [{ id, label, source, confidence, ...values }] } */
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': {
-            [key: string]: {
-              title: string;
-              description?: string;
-              rows: ({
-                id: string;
-                label?: string;
-                source: string;
-                /** @enum {string} */
-                confidence: 'verified' | 'verified-secondary' | 'derived' | 'memory' | 'common-practice';
-                notes?: string;
-              } & {
-                [key: string]: unknown;
-              })[];
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["HealthDto"];
+                };
             };
-          };
-        };
-      };
-    };
-  };
-  MailController_all: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    requestBody?: never;
-    responses: {
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['OutboxDto'];
-        };
-      };
-    };
-  };
-  MailController_mine: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    requestBody?: never;
-    responses: {
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['ReceivedMailDto'][];
-        };
-      };
-    };
-  };
-  MailController_download: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        mailId: number;
-        attachmentId: number;
-      };
-      cookie?: never;
-    };
-    requestBody?: never;
-    responses: {
-      /** @description the attachment as received */
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description no such message or attachment, or not yours */
-      404: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  UsersController_removeMe: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    requestBody: {
-      content: {
-        'application/json': components['schemas']['DeleteMeDto'];
-      };
-    };
-    responses: {
-      /** @description the account and its memberships are gone */
-      204: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description the password is not right */
-      403: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description the account is the only owner of a farm; the farms are named in details */
-      409: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  UsersController_updateMe: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    requestBody: {
-      content: {
-        'application/json': components['schemas']['UpdateMeDto'];
-      };
-    };
-    responses: {
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['UserDto'];
-        };
-      };
-    };
-  };
-  UsersController_list: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    requestBody?: never;
-    responses: {
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['UserDto'][];
-        };
-      };
-    };
-  };
-  UsersController_remove: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        id: number;
-      };
-      cookie?: never;
-    };
-    requestBody?: never;
-    responses: {
-      204: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description the account is the only owner of a farm; the farms are named in details */
-      409: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  UsersController_update: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        id: number;
-      };
-      cookie?: never;
-    };
-    requestBody: {
-      content: {
-        'application/json': components['schemas']['AdminUpdateUserDto'];
-      };
-    };
-    responses: {
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['UserDto'];
-        };
-      };
-    };
-  };
-  AuthController_register: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    requestBody: {
-      content: {
-        'application/json': components['schemas']['RegisterDto'];
-      };
-    };
-    responses: {
-      201: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['SessionDto'];
-        };
-      };
-      /** @description Too many attempts from this address */
-      429: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  AuthController_login: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    requestBody: {
-      content: {
-        'application/json': components['schemas']['LoginDto'];
-      };
-    };
-    responses: {
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['SessionDto'];
-        };
-      };
-      /** @description Too many sign-in attempts from this address or on this account */
-      429: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  AuthController_logout: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    requestBody?: never;
-    responses: {
-      204: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  AuthController_changePassword: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    requestBody: {
-      content: {
-        'application/json': components['schemas']['ChangePasswordDto'];
-      };
-    };
-    responses: {
-      /** @description a new session for this browser */
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['SessionDto'];
-        };
-      };
-      /** @description current password wrong, or the new one refused (the reason is given) */
-      400: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description Too many attempts from this address or on this account */
-      429: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  AuthController_requestPasswordReset: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    requestBody: {
-      content: {
-        'application/json': components['schemas']['PasswordResetRequestDto'];
-      };
-    };
-    responses: {
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['MessageDto'];
-        };
-      };
-      /** @description Too many requests from this address or for this e-mail address */
-      429: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  AuthController_resetPassword: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    requestBody: {
-      content: {
-        'application/json': components['schemas']['PasswordResetDto'];
-      };
-    };
-    responses: {
-      /** @description signed in with the new password */
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['SessionDto'];
-        };
-      };
-      /** @description link used, expired or unknown; or the new password refused */
-      400: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description Too many attempts from this address */
-      429: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  AuthController_me: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    requestBody?: never;
-    responses: {
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['UserDto'];
-        };
-      };
-    };
-  };
-  AuthController_demoAccounts: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    requestBody?: never;
-    responses: {
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['DemoAccountsDto'];
-        };
-      };
-    };
-  };
-  FarmsController_permissions: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    requestBody?: never;
-    responses: {
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['PermissionsDto'];
-        };
-      };
-    };
-  };
-  FarmsController_list: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    requestBody?: never;
-    responses: {
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['FarmDto'][];
-        };
-      };
-    };
-  };
-  FarmsController_create: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    requestBody: {
-      content: {
-        'application/json': components['schemas']['CreateFarmDto'];
-      };
-    };
-    responses: {
-      201: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['FarmDto'];
-        };
-      };
-    };
-  };
-  FarmsController_get: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        farmId: number;
-      };
-      cookie?: never;
-    };
-    requestBody?: never;
-    responses: {
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['FarmDto'];
-        };
-      };
-    };
-  };
-  FarmsController_remove: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        farmId: number;
-      };
-      cookie?: never;
-    };
-    requestBody?: never;
-    responses: {
-      204: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  FarmsController_update: {
-    parameters: {
-      query?: never;
-      header: {
-        /** @description the `version` of the farm you loaded (0 if it has never been saved); every save raises it by one */
-        'if-match': string;
-      };
-      path: {
-        farmId: number;
-      };
-      cookie?: never;
-    };
-    requestBody: {
-      content: {
-        'application/json': components['schemas']['UpdateFarmDto'];
-      };
-    };
-    responses: {
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['FarmDto'];
-        };
-      };
-      /** @description someone else saved the farm first; `current` holds what is stored now (the same shape as the answer to GET) */
-      409: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description If-Match missing */
-      428: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  FarmsController_members: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        farmId: number;
-      };
-      cookie?: never;
-    };
-    requestBody?: never;
-    responses: {
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['MemberDto'][];
-        };
-      };
-    };
-  };
-  FarmsController_removeMember: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        farmId: number;
-        userId: number;
-      };
-      cookie?: never;
-    };
-    requestBody?: never;
-    responses: {
-      204: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description the member is the farm’s last owner */
-      409: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  FarmsController_updateMember: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        farmId: number;
-        userId: number;
-      };
-      cookie?: never;
-    };
-    requestBody: {
-      content: {
-        'application/json': components['schemas']['UpdateMemberDto'];
-      };
-    };
-    responses: {
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['MemberDto'];
-        };
-      };
-      /** @description the member is the farm’s last owner */
-      409: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  InvitationsController_pending: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        farmId: number;
-      };
-      cookie?: never;
-    };
-    requestBody?: never;
-    responses: {
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['InvitationDto'][];
-        };
-      };
-    };
-  };
-  InvitationsController_invite: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        farmId: number;
-      };
-      cookie?: never;
-    };
-    requestBody: {
-      content: {
-        'application/json': components['schemas']['CreateInvitationDto'];
-      };
-    };
-    responses: {
-      201: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['InvitationSentDto'];
-        };
-      };
-    };
-  };
-  InvitationsController_revoke: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        farmId: number;
-        invitationId: number;
-      };
-      cookie?: never;
-    };
-    requestBody?: never;
-    responses: {
-      204: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  InvitationsController_resend: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        farmId: number;
-        invitationId: number;
-      };
-      cookie?: never;
-    };
-    requestBody?: never;
-    responses: {
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['InvitationSentDto'];
-        };
-      };
-    };
-  };
-  InvitationsController_preview: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        token: string;
-      };
-      cookie?: never;
-    };
-    requestBody?: never;
-    responses: {
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['InvitationPreviewDto'];
-        };
-      };
-      /** @description unknown, used, revoked or expired link */
-      404: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  InvitationsController_signUp: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        token: string;
-      };
-      cookie?: never;
-    };
-    requestBody: {
-      content: {
-        'application/json': components['schemas']['InvitedSignUpDto'];
-      };
-    };
-    responses: {
-      201: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['SessionDto'];
-        };
-      };
-      /** @description unknown, used, revoked or expired link */
-      404: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description Too many attempts from this address */
-      429: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  InvitationsController_accept: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        token: string;
-      };
-      cookie?: never;
-    };
-    requestBody?: never;
-    responses: {
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['AcceptedInvitationDto'];
-        };
-      };
-      /** @description unknown, used, revoked or expired link */
-      404: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  HousesController_list: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        farmId: number;
-      };
-      cookie?: never;
-    };
-    requestBody?: never;
-    responses: {
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['HouseDto'][];
-        };
-      };
-    };
-  };
-  HousesController_create: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        farmId: number;
-      };
-      cookie?: never;
-    };
-    requestBody: {
-      content: {
-        'application/json': components['schemas']['CreateHouseDto'];
-      };
-    };
-    responses: {
-      201: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['HouseDto'];
-        };
-      };
-      /** @description dimensions the engine cannot compute with, or an unknown reference id */
-      422: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  HousesController_get: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        houseId: number;
-      };
-      cookie?: never;
-    };
-    requestBody?: never;
-    responses: {
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['HouseDto'];
-        };
-      };
-    };
-  };
-  HousesController_remove: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        houseId: number;
-      };
-      cookie?: never;
-    };
-    requestBody?: never;
-    responses: {
-      204: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  HousesController_update: {
-    parameters: {
-      query?: never;
-      header: {
-        /** @description the `version` of the house you loaded (0 if it has never been saved); every save raises it by one */
-        'if-match': string;
-      };
-      path: {
-        houseId: number;
-      };
-      cookie?: never;
-    };
-    requestBody: {
-      content: {
-        'application/json': components['schemas']['UpdateHouseDto'];
-      };
-    };
-    responses: {
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['HouseDto'];
-        };
-      };
-      /** @description someone else saved the house first; `current` holds what is stored now (the same shape as the answer to GET) */
-      409: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description the house as it would be after the change is one the engine cannot compute with */
-      422: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description If-Match missing */
-      428: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  ClimateController_get: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        farmId: number;
-      };
-      cookie?: never;
-    };
-    requestBody?: never;
-    responses: {
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['FarmClimateDto'];
-        };
-      };
-    };
-  };
-  ClimateController_put: {
-    parameters: {
-      query?: never;
-      header: {
-        /** @description the `version` of the climate you loaded (0 if it has never been saved); every save raises it by one */
-        'if-match': string;
-      };
-      path: {
-        farmId: number;
-      };
-      cookie?: never;
-    };
-    requestBody: {
-      content: {
-        'application/json': components['schemas']['SiteClimateDto'];
-      };
-    };
-    responses: {
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['FarmClimateDto'];
-        };
-      };
-      /** @description someone else saved the climate first; `current` holds what is stored now (the same shape as the answer to GET) */
-      409: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description physically impossible climate (e.g. minimum above maximum), field named */
-      422: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description If-Match missing */
-      428: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  EstimatesController_heating: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    requestBody: {
-      content: {
-        'application/json': components['schemas']['HeatingEstimateRequestDto'];
-      };
-    };
-    responses: {
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['HeatingEstimateDto'];
-        };
-      };
-      /** @description body fails validation; details per field */
-      400: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description the engine cannot compute with the input (e.g. ridge below eave, unknown reference id); field named */
-      422: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  EstimatesController_cooling: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    requestBody: {
-      content: {
-        'application/json': components['schemas']['CoolingEstimateRequestDto'];
-      };
-    };
-    responses: {
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['CoolingEstimateDto'];
-        };
-      };
-      /** @description body fails validation; details per field */
-      400: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description the engine cannot compute with the input (e.g. ridge below eave, unknown reference id); field named */
-      422: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  EstimatesController_heatingForHouse: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        houseId: number;
-      };
-      cookie?: never;
-    };
-    requestBody: {
-      content: {
-        'application/json': components['schemas']['HouseHeatingEstimateRequestDto'];
-      };
-    };
-    responses: {
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['HouseHeatingEstimateDto'];
-        };
-      };
-      /** @description role lacks estimate:run */
-      403: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description no such house, or not a member of its farm */
-      404: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description the engine cannot compute with the input (e.g. ridge below eave, unknown reference id); field named; also when the farm has no climate and no designOutdoorC is given */
-      422: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  EstimatesController_coolingForHouse: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        houseId: number;
-      };
-      cookie?: never;
-    };
-    requestBody: {
-      content: {
-        'application/json': components['schemas']['HouseCoolingEstimateRequestDto'];
-      };
-    };
-    responses: {
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['HouseCoolingEstimateDto'];
-        };
-      };
-      /** @description role lacks estimate:run */
-      403: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description no such house, or not a member of its farm */
-      404: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description the engine cannot compute with the input (e.g. ridge below eave, unknown reference id); field named; also when the farm has no climate and the summer design values are not given */
-      422: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  SeasonController_seasonOfHouse: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        houseId: number;
-      };
-      cookie?: never;
-    };
-    requestBody: {
-      content: {
-        'application/json': components['schemas']['SeasonRequestDto'];
-      };
-    };
-    responses: {
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['HouseSeasonEstimateDto'];
-        };
-      };
-      /** @description body fails validation; details per field */
-      400: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description role lacks estimate:run */
-      403: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description no such house, or not a member of its farm */
-      404: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description the engine cannot compute with the input, field named: no climate and no log (climateSource), a house without heaters (fuelId), a log that does not cover the dates (climateSource), a season over 366 days (endDate) …; a missing fuel price is no error (heat and fuel, costs null) */
-      422: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  SeasonController_nightDemand: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        houseId: number;
-      };
-      cookie?: never;
-    };
-    requestBody: {
-      content: {
-        'application/json': components['schemas']['NightDemandRequestDto'];
-      };
-    };
-    responses: {
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['HouseNightDemandDto'];
-        };
-      };
-      /** @description body fails validation; details per field */
-      400: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description role lacks estimate:run */
-      403: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description no such house, or not a member of its farm */
-      404: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description the engine cannot compute with the input, field named: no climate and no log (climateSource), a house without heaters (fuelId), a log that does not cover the dates (climateSource), a season over 366 days (endDate) …; a missing fuel price is no error (heat and fuel, costs null) */
-      422: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  SeasonController_measures: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        houseId: number;
-      };
-      cookie?: never;
-    };
-    requestBody: {
-      content: {
-        'application/json': components['schemas']['MeasuresRequestDto'];
-      };
-    };
-    responses: {
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['MeasureComparisonDto'];
-        };
-      };
-      /** @description body fails validation; details per field */
-      400: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description role lacks estimate:run */
-      403: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description no such house, or not a member of its farm */
-      404: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description the engine cannot compute with the input, field named: no climate and no log (climateSource), a house without heaters (fuelId), a log that does not cover the dates (climateSource), a season over 366 days (endDate) …; a missing fuel price is no error (heat and fuel, costs null); measures[i].field for a measure's settings */
-      422: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  SeasonController_getCalendar: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        houseId: number;
-      };
-      cookie?: never;
-    };
-    requestBody?: never;
-    responses: {
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['ProductionCalendarDto'];
-        };
-      };
-      /** @description no such house, or not a member of its farm */
-      404: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  SeasonController_putCalendar: {
-    parameters: {
-      query?: never;
-      header: {
-        /** @description the `version` of the calendar you loaded (0 if it has never been saved); every save raises it by one */
-        'if-match': string;
-      };
-      path: {
-        houseId: number;
-      };
-      cookie?: never;
-    };
-    requestBody: {
-      content: {
-        'application/json': components['schemas']['PutProductionCalendarDto'];
-      };
-    };
-    responses: {
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['ProductionCalendarDto'];
-        };
-      };
-      /** @description body fails validation; details per field */
-      400: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description role lacks house:write */
-      403: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description no such house, or not a member of its farm */
-      404: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description someone else saved the calendar first; `current` holds what is stored now (the same shape as the answer to GET) */
-      409: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description an impossible date such as 02-30, field named (periods[i].startMonthDay) */
-      422: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description If-Match missing */
-      428: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  SeasonController_getFuelPrices: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        farmId: number;
-      };
-      cookie?: never;
-    };
-    requestBody?: never;
-    responses: {
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['FarmFuelPricesDto'];
-        };
-      };
-      /** @description no such farm, or not a member */
-      404: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  SeasonController_putFuelPrices: {
-    parameters: {
-      query?: never;
-      header: {
-        /** @description the `version` of the fuel prices you loaded (0 if it has never been saved); every save raises it by one */
-        'if-match': string;
-      };
-      path: {
-        farmId: number;
-      };
-      cookie?: never;
-    };
-    requestBody: {
-      content: {
-        'application/json': components['schemas']['PutFuelPricesDto'];
-      };
-    };
-    responses: {
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['FarmFuelPricesDto'];
-        };
-      };
-      /** @description body fails validation; details per field */
-      400: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description role lacks house:write */
-      403: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description no such farm, or not a member */
-      404: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description someone else saved the fuel prices first; `current` holds what is stored now (the same shape as the answer to GET) */
-      409: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description unknown fuel or a fuel listed twice (prices.i.fuelId) */
-      422: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description If-Match missing */
-      428: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  SeasonController_budget: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        farmId: number;
-      };
-      cookie?: never;
-    };
-    requestBody: {
-      content: {
-        'application/json': components['schemas']['SeasonBudgetRequestDto'];
-      };
-    };
-    responses: {
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['SeasonBudgetDto'];
-        };
-      };
-      /** @description body fails validation; details per field */
-      400: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description no such farm, or not a member */
-      404: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description the engine cannot compute with the input, field named: no climate and no log (climateSource), a house without heaters (fuelId), a log that does not cover the dates (climateSource), a season over 366 days (endDate) …; a missing fuel price is no error (heat and fuel, costs null) */
-      422: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  SeasonController_budgetCsv: {
-    parameters: {
-      query?: {
-        /** @description si (default): kWh and each fuel’s SI unit; us: MMBtu and each fuel’s US unit */
-        units?: 'si' | 'us';
-        startDate?: string;
-        endDate?: string;
-        /** @description use this temperature log instead of the climate normals */
-        temperatureLogId?: number;
-        /** @description 'handbook' (default) or 'calibrated' (see the budget's heatLossBasis); the file name says which */
-        heatLossBasis?: 'handbook' | 'calibrated';
-      };
-      header?: never;
-      path: {
-        farmId: number;
-      };
-      cookie?: never;
-    };
-    requestBody?: never;
-    responses: {
-      /** @description CSV file (attachment) */
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'text/csv': string;
-        };
-      };
-      /** @description no such farm, or not a member */
-      404: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description the engine cannot compute with the input, field named: no climate and no log (climateSource), a house without heaters (fuelId), a log that does not cover the dates (climateSource), a season over 366 days (endDate) …; a missing fuel price is no error (heat and fuel, costs null) */
-      422: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  MeasurePlanController_get: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        houseId: number;
-      };
-      cookie?: never;
-    };
-    requestBody?: never;
-    responses: {
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['MeasurePlanDto'];
-        };
-      };
-      /** @description no such house, or not a member of its farm */
-      404: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  MeasurePlanController_put: {
-    parameters: {
-      query?: never;
-      header: {
-        /** @description the `version` of the measure plan you loaded (0 if it has never been saved); every save raises it by one */
-        'if-match': string;
-      };
-      path: {
-        houseId: number;
-      };
-      cookie?: never;
-    };
-    requestBody: {
-      content: {
-        'application/json': components['schemas']['PutMeasurePlanDto'];
-      };
-    };
-    responses: {
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['MeasurePlanDto'];
-        };
-      };
-      /** @description body fails validation; details per field */
-      400: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description role lacks house:write */
-      403: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description no such house, or not a member of its farm */
-      404: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description someone else saved the measure plan first; `current` holds what is stored now (the same shape as the answer to GET) */
-      409: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description If-Match missing */
-      428: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  AlternativesController_list: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        houseId: number;
-      };
-      cookie?: never;
-    };
-    requestBody?: never;
-    responses: {
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['AlternativeDto'][];
-        };
-      };
-      /** @description no such house, or not a member of its farm */
-      404: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  AlternativesController_create: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        houseId: number;
-      };
-      cookie?: never;
-    };
-    requestBody: {
-      content: {
-        'application/json': components['schemas']['CreateAlternativeDto'];
-      };
-    };
-    responses: {
-      201: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['AlternativeDto'];
-        };
-      };
-      /** @description role lacks alternative:write */
-      403: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description no such house, or not a member of its farm */
-      404: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description the house with this patch would not be a valid house, or the patch names a field a house does not have (field named: patch.<field>) */
-      422: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  AlternativesController_get: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        alternativeId: number;
-      };
-      cookie?: never;
-    };
-    requestBody?: never;
-    responses: {
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['AlternativeDto'];
-        };
-      };
-      /** @description no such alternative, or not a member of its farm */
-      404: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  AlternativesController_remove: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        alternativeId: number;
-      };
-      cookie?: never;
-    };
-    requestBody?: never;
-    responses: {
-      204: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description role lacks alternative:write */
-      403: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description no such alternative, or not a member of its farm */
-      404: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  AlternativesController_update: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        alternativeId: number;
-      };
-      cookie?: never;
-    };
-    requestBody: {
-      content: {
-        'application/json': components['schemas']['UpdateAlternativeDto'];
-      };
-    };
-    responses: {
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['AlternativeDto'];
-        };
-      };
-      /** @description role lacks alternative:write */
-      403: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description no such alternative, or not a member of its farm */
-      404: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description the house with this patch would not be a valid house, or the patch names a field a house does not have (field named: patch.<field>) */
-      422: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  AlternativesController_adopt: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        alternativeId: number;
-      };
-      cookie?: never;
-    };
-    requestBody?: never;
-    responses: {
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['AdoptAlternativeResultDto'];
-        };
-      };
-      /** @description role lacks house:write */
-      403: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description no such alternative, or not a member of its farm */
-      404: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description the alternative is not a valid house now (field named) */
-      422: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  AlternativesController_duplicate: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        houseId: number;
-      };
-      cookie?: never;
-    };
-    requestBody: {
-      content: {
-        'application/json': components['schemas']['DuplicateHouseDto'];
-      };
-    };
-    responses: {
-      201: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['HouseDto'];
-        };
-      };
-      /** @description role lacks house:write */
-      403: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description no such house, or not a member of its farm */
-      404: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  TemperatureLogsController_inspect: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        farmId: number;
-      };
-      cookie?: never;
-    };
-    requestBody: {
-      content: {
-        'multipart/form-data': {
-          /**
-           * Format: binary
-           * @description CSV file, UTF-8, at most 5 MB
-           */
-          file: string;
-        };
-      };
-    };
-    responses: {
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['TemperatureCsvInspectionDto'];
-        };
-      };
-      /** @description no file part */
-      400: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description role lacks house:write */
-      403: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description no such farm, or not a member */
-      404: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description file over 5 MB */
-      413: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description the file cannot be read: not UTF-8, empty, unknown columns or bad rows; details = [{ field: 'line 12', message }] (field 'file' for the file as a whole) */
-      422: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  TemperatureLogsController_list: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        farmId: number;
-      };
-      cookie?: never;
-    };
-    requestBody?: never;
-    responses: {
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['TemperatureLogDto'][];
-        };
-      };
-      /** @description no such farm, or not a member */
-      404: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  TemperatureLogsController_upload: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        farmId: number;
-      };
-      cookie?: never;
-    };
-    requestBody: {
-      content: {
-        'multipart/form-data': {
-          /**
-           * Format: binary
-           * @description CSV file, UTF-8, at most 5 MB
-           */
-          file: string;
-          name: string;
-          /** @description TemperatureColumnMappingDto as JSON, e.g. {"timestampColumn":"Time","temperatureColumn":"Temp (°C)","unit":"C"} */
-          mapping: string;
-        };
-      };
-    };
-    responses: {
-      201: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['TemperatureLogDto'];
-        };
-      };
-      /** @description no file part, or name/mapping invalid (details per field, mapping.* for the mapping) */
-      400: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description role lacks house:write */
-      403: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description no such farm, or not a member */
-      404: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description file over 5 MB */
-      413: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description the file cannot be read: not UTF-8, empty, unknown columns or bad rows; details = [{ field: 'line 12', message }] (field 'file' for the file as a whole) */
-      422: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  TemperatureLogsController_get: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        logId: number;
-      };
-      cookie?: never;
-    };
-    requestBody?: never;
-    responses: {
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['TemperatureLogDetailDto'];
-        };
-      };
-      /** @description no such log, or not a member of its farm */
-      404: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  TemperatureLogsController_remove: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        logId: number;
-      };
-      cookie?: never;
-    };
-    requestBody?: never;
-    responses: {
-      204: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description role lacks house:write */
-      403: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description no such log, or not a member of its farm */
-      404: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  WeatherController_source: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        farmId: number;
-      };
-      cookie?: never;
-    };
-    requestBody?: never;
-    responses: {
-      /** @description where weather history comes from (stand-in or service) */
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['WeatherSourceDto'];
-        };
-      };
-    };
-  };
-  WeatherController_fetchYear: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        farmId: number;
-        year: number;
-      };
-      cookie?: never;
-    };
-    requestBody?: never;
-    responses: {
-      /** @description one year of the farm's hourly weather, fetched and cached */
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['WeatherYearStatusDto'];
-        };
-      };
-      /** @description the weather service could not be reached or answered garbage; nothing stored */
-      502: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description the weather service did not answer in time; nothing stored */
-      504: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  WeatherController_keepAsLog: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        farmId: number;
-        year: number;
-      };
-      cookie?: never;
-    };
-    requestBody?: never;
-    responses: {
-      /** @description keeps one year of the history as a temperature log of the farm, for a season on that year's hours */
-      201: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['TemperatureLogDto'];
-        };
-      };
-      /** @description the weather service could not be reached or answered garbage; nothing stored */
-      502: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  WeatherController_proposal: {
-    parameters: {
-      query: {
-        fromYear: number;
-        toYear: number;
-      };
-      header?: never;
-      path: {
-        farmId: number;
-      };
-      cookie?: never;
-    };
-    requestBody?: never;
-    responses: {
-      /** @description design temperatures and monthly normals from the years of hourly history (nothing is saved) */
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['ClimateProposalDto'];
-        };
-      };
-      /** @description the weather service could not be reached or answered garbage */
-      502: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  LogClimateController_proposal: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        farmId: number;
-        logId: number;
-      };
-      cookie?: never;
-    };
-    requestBody?: never;
-    responses: {
-      /** @description design temperatures and monthly normals from a year or more of the farm's hourly log (nothing is saved) */
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['LogClimateProposalDto'];
-        };
-      };
-      /** @description the log is daily, covers less than a year of hours, or has more than 10 % of its hours missing */
-      422: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  ReportsController_listForHouse: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        houseId: number;
-      };
-      cookie?: never;
-    };
-    requestBody?: never;
-    responses: {
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['ReportSummaryDto'][];
-        };
-      };
-    };
-  };
-  ReportsController_create: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        houseId: number;
-      };
-      cookie?: never;
-    };
-    requestBody: {
-      content: {
-        'application/json': components['schemas']['CreateReportDto'];
-      };
-    };
-    responses: {
-      201: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['ReportDto'];
-        };
-      };
-    };
-  };
-  ReportsController_listForFarm: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        farmId: number;
-      };
-      cookie?: never;
-    };
-    requestBody?: never;
-    responses: {
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['ReportSummaryDto'][];
-        };
-      };
-    };
-  };
-  ReportsController_clientFarms: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path?: never;
-      cookie?: never;
-    };
-    requestBody?: never;
-    responses: {
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['ClientFarmDto'][];
-        };
-      };
-    };
-  };
-  ReportsController_pdf: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        reportId: number;
-      };
-      cookie?: never;
-    };
-    requestBody?: never;
-    responses: {
-      /** @description the PDF */
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  ReportsController_get: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        reportId: number;
-      };
-      cookie?: never;
-    };
-    requestBody?: never;
-    responses: {
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['ReportDto'];
-        };
-      };
-    };
-  };
-  ReportsController_update: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        reportId: number;
-      };
-      cookie?: never;
-    };
-    requestBody: {
-      content: {
-        'application/json': components['schemas']['UpdateReportDto'];
-      };
-    };
-    responses: {
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['ReportDto'];
-        };
-      };
-      /** @description the report is issued */
-      409: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  ReportsController_issue: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        reportId: number;
-      };
-      cookie?: never;
-    };
-    requestBody?: never;
-    responses: {
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['ReportDto'];
-        };
-      };
-    };
-  };
-  ReportsController_revise: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        reportId: number;
-      };
-      cookie?: never;
-    };
-    requestBody?: never;
-    responses: {
-      201: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['ReportDto'];
-        };
-      };
-    };
-  };
-  ReportsController_send: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        reportId: number;
-      };
-      cookie?: never;
-    };
-    requestBody: {
-      content: {
-        'application/json': components['schemas']['SendReportDto'];
-      };
-    };
-    responses: {
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['ReportSentDto'];
-        };
-      };
-    };
-  };
-  SideBySideController_compare: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        houseId: number;
-      };
-      cookie?: never;
-    };
-    requestBody: {
-      content: {
-        'application/json': components['schemas']['SideBySideRequestDto'];
-      };
-    };
-    responses: {
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['SideBySideDto'];
-        };
-      };
-      /** @description body fails validation (e.g. more than four alternatives); details per field */
-      400: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description role lacks estimate:run */
-      403: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description no such house, or not a member of its farm */
-      404: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description the house's own column cannot be computed (no climate, no fuel price …) or an id is not one of the house's alternatives; field named. An alternative that is not valid now is a column with `invalid`, not an error */
-      422: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  FuelRecordsController_list: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        farmId: number;
-      };
-      cookie?: never;
-    };
-    requestBody?: never;
-    responses: {
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['FuelRecordDto'][];
-        };
-      };
-      /** @description no such farm, or not a member */
-      404: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  FuelRecordsController_create: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        farmId: number;
-      };
-      cookie?: never;
-    };
-    requestBody: {
-      content: {
-        'application/json': components['schemas']['CreateFuelRecordDto'];
-      };
-    };
-    responses: {
-      201: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['FuelRecordDto'];
-        };
-      };
-      /** @description a bad record or file: details name each row and field ('row 3.endDate') in the user's words; nothing is stored */
-      400: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description role lacks house:write */
-      403: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description no such farm, or not a member */
-      404: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  FuelRecordsController_remove: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        recordId: number;
-      };
-      cookie?: never;
-    };
-    requestBody?: never;
-    responses: {
-      204: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description role lacks house:write */
-      403: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description no such record, or not a member of its farm */
-      404: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  FuelRecordsController_update: {
-    parameters: {
-      query?: never;
-      header: {
-        /** @description the `version` of the fuel record you loaded (0 if it has never been saved); every save raises it by one */
-        'if-match': string;
-      };
-      path: {
-        recordId: number;
-      };
-      cookie?: never;
-    };
-    requestBody: {
-      content: {
-        'application/json': components['schemas']['UpdateFuelRecordDto'];
-      };
-    };
-    responses: {
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['FuelRecordDto'];
-        };
-      };
-      /** @description a bad record or file: details name each row and field ('row 3.endDate') in the user's words; nothing is stored */
-      400: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description role lacks house:write */
-      403: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description no such record, or not a member of its farm */
-      404: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description someone else saved the fuel record first; `current` holds what is stored now (the same shape as the answer to GET) */
-      409: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description If-Match missing */
-      428: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  FuelRecordsController_inspect: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        farmId: number;
-      };
-      cookie?: never;
-    };
-    requestBody: {
-      content: {
-        'multipart/form-data': {
-          /**
-           * Format: binary
-           * @description CSV file, UTF-8, at most 256 kB
-           */
-          file: string;
-        };
-      };
-    };
-    responses: {
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['FuelRecordCsvInspectionDto'];
-        };
-      };
-      /** @description no file, or the file cannot be read */
-      400: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description role lacks house:write */
-      403: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description no such farm, or not a member */
-      404: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  FuelRecordsController_upload: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        farmId: number;
-      };
-      cookie?: never;
-    };
-    requestBody: {
-      content: {
-        'multipart/form-data': {
-          /**
-           * Format: binary
-           * @description CSV file, UTF-8, at most 256 kB
-           */
-          file: string;
-          /** @description FuelRecordColumnMappingDto as JSON */
-          mapping: string;
-        };
-      };
-    };
-    responses: {
-      201: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['FuelRecordsUploadResultDto'];
-        };
-      };
-      /** @description a bad record or file: details name each row and field ('row 3.endDate') in the user's words; nothing is stored */
-      400: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description role lacks house:write */
-      403: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description no such farm, or not a member */
-      404: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  CalibrationController_list: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        farmId: number;
-      };
-      cookie?: never;
-    };
-    requestBody?: never;
-    responses: {
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['CalibrationDto'][];
-        };
-      };
-      /** @description no such farm, or not a member */
-      404: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  CalibrationController_run: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        farmId: number;
-      };
-      cookie?: never;
-    };
-    requestBody?: never;
-    responses: {
-      201: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['CalibrationDto'];
-        };
-      };
-      /** @description role lacks house:write */
-      403: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description no such farm, or not a member */
-      404: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-      /** @description no factor could be fitted (fewer than three bills with heating per meter, no climate for a bill …); the message says why */
-      422: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
-  CalibrationController_get: {
-    parameters: {
-      query?: never;
-      header?: never;
-      path: {
-        calibrationId: number;
-      };
-      cookie?: never;
-    };
-    requestBody?: never;
-    responses: {
-      200: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content: {
-          'application/json': components['schemas']['CalibrationDto'];
-        };
-      };
-      /** @description no such calibration, or not a member of its farm */
-      404: {
-        headers: {
-          [name: string]: unknown;
-        };
-        content?: never;
-      };
-    };
-  };
+            /** @description The database is not reachable */
+            503: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["HealthDto"];
+                };
+            };
+        };
+    };
+    ReferenceDataController_all: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description Every handbook table by name: { title, description, rows: [{ id, label, source, confidence, ...values }] } */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": {
+                        [key: string]: {
+                            title: string;
+                            description?: string;
+                            rows: ({
+                                id: string;
+                                label?: string;
+                                source: string;
+                                /** @enum {string} */
+                                confidence: "verified" | "verified-secondary" | "derived" | "memory" | "common-practice";
+                                notes?: string;
+                            } & {
+                                [key: string]: unknown;
+                            })[];
+                        };
+                    };
+                };
+            };
+        };
+    };
+    MailController_all: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["OutboxDto"];
+                };
+            };
+        };
+    };
+    MailController_mine: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ReceivedMailDto"][];
+                };
+            };
+        };
+    };
+    MailController_download: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                mailId: number;
+                attachmentId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description the attachment as received */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no such message or attachment, or not yours */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    UsersController_removeMe: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["DeleteMeDto"];
+            };
+        };
+        responses: {
+            /** @description the account and its memberships are gone */
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description the password is not right */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description the account is the only owner of a farm; the farms are named in details */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    UsersController_updateMe: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["UpdateMeDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UserDto"];
+                };
+            };
+        };
+    };
+    UsersController_list: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UserDto"][];
+                };
+            };
+        };
+    };
+    UsersController_remove: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description the account is the only owner of a farm; the farms are named in details */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    UsersController_update: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["AdminUpdateUserDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UserDto"];
+                };
+            };
+        };
+    };
+    AuthController_register: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["RegisterDto"];
+            };
+        };
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["SessionDto"];
+                };
+            };
+            /** @description Too many attempts from this address */
+            429: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    AuthController_login: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["LoginDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["SessionDto"];
+                };
+            };
+            /** @description Too many sign-in attempts from this address or on this account */
+            429: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    AuthController_logout: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    AuthController_changePassword: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["ChangePasswordDto"];
+            };
+        };
+        responses: {
+            /** @description a new session for this browser */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["SessionDto"];
+                };
+            };
+            /** @description current password wrong, or the new one refused (the reason is given) */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description Too many attempts from this address or on this account */
+            429: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    AuthController_requestPasswordReset: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["PasswordResetRequestDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["MessageDto"];
+                };
+            };
+            /** @description Too many requests from this address or for this e-mail address */
+            429: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    AuthController_resetPassword: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["PasswordResetDto"];
+            };
+        };
+        responses: {
+            /** @description signed in with the new password */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["SessionDto"];
+                };
+            };
+            /** @description link used, expired or unknown; or the new password refused */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description Too many attempts from this address */
+            429: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    AuthController_me: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UserDto"];
+                };
+            };
+        };
+    };
+    AuthController_demoAccounts: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["DemoAccountsDto"];
+                };
+            };
+        };
+    };
+    FarmsController_permissions: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["PermissionsDto"];
+                };
+            };
+        };
+    };
+    FarmsController_list: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["FarmDto"][];
+                };
+            };
+        };
+    };
+    FarmsController_create: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["CreateFarmDto"];
+            };
+        };
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["FarmDto"];
+                };
+            };
+        };
+    };
+    FarmsController_get: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                farmId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["FarmDto"];
+                };
+            };
+        };
+    };
+    FarmsController_remove: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                farmId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    FarmsController_update: {
+        parameters: {
+            query?: never;
+            header: {
+                /** @description the `version` of the farm you loaded (0 if it has never been saved); every save raises it by one */
+                "if-match": string;
+            };
+            path: {
+                farmId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["UpdateFarmDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["FarmDto"];
+                };
+            };
+            /** @description someone else saved the farm first; `current` holds what is stored now (the same shape as the answer to GET) */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description If-Match missing */
+            428: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    FarmsController_members: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                farmId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["MemberDto"][];
+                };
+            };
+        };
+    };
+    FarmsController_removeMember: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                farmId: number;
+                userId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description the member is the farm’s last owner */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    FarmsController_updateMember: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                farmId: number;
+                userId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["UpdateMemberDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["MemberDto"];
+                };
+            };
+            /** @description the member is the farm’s last owner */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    InvitationsController_pending: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                farmId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["InvitationDto"][];
+                };
+            };
+        };
+    };
+    InvitationsController_invite: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                farmId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["CreateInvitationDto"];
+            };
+        };
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["InvitationSentDto"];
+                };
+            };
+        };
+    };
+    InvitationsController_revoke: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                farmId: number;
+                invitationId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    InvitationsController_resend: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                farmId: number;
+                invitationId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["InvitationSentDto"];
+                };
+            };
+        };
+    };
+    InvitationsController_preview: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                token: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["InvitationPreviewDto"];
+                };
+            };
+            /** @description unknown, used, revoked or expired link */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    InvitationsController_signUp: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                token: string;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["InvitedSignUpDto"];
+            };
+        };
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["SessionDto"];
+                };
+            };
+            /** @description unknown, used, revoked or expired link */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description Too many attempts from this address */
+            429: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    InvitationsController_accept: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                token: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["AcceptedInvitationDto"];
+                };
+            };
+            /** @description unknown, used, revoked or expired link */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    HousesController_list: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                farmId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["HouseDto"][];
+                };
+            };
+        };
+    };
+    HousesController_create: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                farmId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["CreateHouseDto"];
+            };
+        };
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["HouseDto"];
+                };
+            };
+            /** @description dimensions the engine cannot compute with, or an unknown reference id */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    HousesController_get: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                houseId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["HouseDto"];
+                };
+            };
+        };
+    };
+    HousesController_remove: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                houseId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    HousesController_update: {
+        parameters: {
+            query?: never;
+            header: {
+                /** @description the `version` of the house you loaded (0 if it has never been saved); every save raises it by one */
+                "if-match": string;
+            };
+            path: {
+                houseId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["UpdateHouseDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["HouseDto"];
+                };
+            };
+            /** @description someone else saved the house first; `current` holds what is stored now (the same shape as the answer to GET) */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description the house as it would be after the change is one the engine cannot compute with */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description If-Match missing */
+            428: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    ClimateController_get: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                farmId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["FarmClimateDto"];
+                };
+            };
+        };
+    };
+    ClimateController_put: {
+        parameters: {
+            query?: never;
+            header: {
+                /** @description the `version` of the climate you loaded (0 if it has never been saved); every save raises it by one */
+                "if-match": string;
+            };
+            path: {
+                farmId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["SiteClimateDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["FarmClimateDto"];
+                };
+            };
+            /** @description someone else saved the climate first; `current` holds what is stored now (the same shape as the answer to GET) */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description physically impossible climate (e.g. minimum above maximum), field named */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description If-Match missing */
+            428: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    EstimatesController_heating: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["HeatingEstimateRequestDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["HeatingEstimateDto"];
+                };
+            };
+            /** @description body fails validation; details per field */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description the engine cannot compute with the input (e.g. ridge below eave, unknown reference id); field named */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    EstimatesController_cooling: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["CoolingEstimateRequestDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["CoolingEstimateDto"];
+                };
+            };
+            /** @description body fails validation; details per field */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description the engine cannot compute with the input (e.g. ridge below eave, unknown reference id); field named */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    EstimatesController_heatingForHouse: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                houseId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["HouseHeatingEstimateRequestDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["HouseHeatingEstimateDto"];
+                };
+            };
+            /** @description role lacks estimate:run */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no such house, or not a member of its farm */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description the engine cannot compute with the input (e.g. ridge below eave, unknown reference id); field named; also when the farm has no climate and no designOutdoorC is given */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    EstimatesController_coolingForHouse: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                houseId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["HouseCoolingEstimateRequestDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["HouseCoolingEstimateDto"];
+                };
+            };
+            /** @description role lacks estimate:run */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no such house, or not a member of its farm */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description the engine cannot compute with the input (e.g. ridge below eave, unknown reference id); field named; also when the farm has no climate and the summer design values are not given */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    SeasonController_seasonOfHouse: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                houseId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["SeasonRequestDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["HouseSeasonEstimateDto"];
+                };
+            };
+            /** @description body fails validation; details per field */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description role lacks estimate:run */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no such house, or not a member of its farm */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description the engine cannot compute with the input, field named: no climate and no log (climateSource), a house without heaters (fuelId), a log that does not cover the dates (climateSource), a season over 366 days (endDate) …; a missing fuel price is no error (heat and fuel, costs null) */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    SeasonController_nightDemand: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                houseId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["NightDemandRequestDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["HouseNightDemandDto"];
+                };
+            };
+            /** @description body fails validation; details per field */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description role lacks estimate:run */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no such house, or not a member of its farm */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description the engine cannot compute with the input, field named: no climate and no log (climateSource), a house without heaters (fuelId), a log that does not cover the dates (climateSource), a season over 366 days (endDate) …; a missing fuel price is no error (heat and fuel, costs null) */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    SeasonController_measures: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                houseId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["MeasuresRequestDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["MeasureComparisonDto"];
+                };
+            };
+            /** @description body fails validation; details per field */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description role lacks estimate:run */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no such house, or not a member of its farm */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description the engine cannot compute with the input, field named: no climate and no log (climateSource), a house without heaters (fuelId), a log that does not cover the dates (climateSource), a season over 366 days (endDate) …; a missing fuel price is no error (heat and fuel, costs null); measures[i].field for a measure's settings */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    SeasonController_getCalendar: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                houseId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProductionCalendarDto"];
+                };
+            };
+            /** @description no such house, or not a member of its farm */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    SeasonController_putCalendar: {
+        parameters: {
+            query?: never;
+            header: {
+                /** @description the `version` of the calendar you loaded (0 if it has never been saved); every save raises it by one */
+                "if-match": string;
+            };
+            path: {
+                houseId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["PutProductionCalendarDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ProductionCalendarDto"];
+                };
+            };
+            /** @description body fails validation; details per field */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description role lacks house:write */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no such house, or not a member of its farm */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description someone else saved the calendar first; `current` holds what is stored now (the same shape as the answer to GET) */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description an impossible date such as 02-30, field named (periods[i].startMonthDay) */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description If-Match missing */
+            428: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    SeasonController_getFuelPrices: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                farmId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["FarmFuelPricesDto"];
+                };
+            };
+            /** @description no such farm, or not a member */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    SeasonController_putFuelPrices: {
+        parameters: {
+            query?: never;
+            header: {
+                /** @description the `version` of the fuel prices you loaded (0 if it has never been saved); every save raises it by one */
+                "if-match": string;
+            };
+            path: {
+                farmId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["PutFuelPricesDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["FarmFuelPricesDto"];
+                };
+            };
+            /** @description body fails validation; details per field */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description role lacks house:write */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no such farm, or not a member */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description someone else saved the fuel prices first; `current` holds what is stored now (the same shape as the answer to GET) */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description unknown fuel or a fuel listed twice (prices.i.fuelId) */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description If-Match missing */
+            428: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    SeasonController_budget: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                farmId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["SeasonBudgetRequestDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["SeasonBudgetDto"];
+                };
+            };
+            /** @description body fails validation; details per field */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no such farm, or not a member */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description the engine cannot compute with the input, field named: no climate and no log (climateSource), a house without heaters (fuelId), a log that does not cover the dates (climateSource), a season over 366 days (endDate) …; a missing fuel price is no error (heat and fuel, costs null) */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    SeasonController_budgetCsv: {
+        parameters: {
+            query?: {
+                /** @description si (default): kWh and each fuel’s SI unit; us: MMBtu and each fuel’s US unit */
+                units?: "si" | "us";
+                startDate?: string;
+                endDate?: string;
+                /** @description use this temperature log instead of the climate normals */
+                temperatureLogId?: number;
+                /** @description 'handbook' (default) or 'calibrated' (see the budget's heatLossBasis); the file name says which */
+                heatLossBasis?: "handbook" | "calibrated";
+            };
+            header?: never;
+            path: {
+                farmId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description CSV file (attachment) */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "text/csv": string;
+                };
+            };
+            /** @description no such farm, or not a member */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description the engine cannot compute with the input, field named: no climate and no log (climateSource), a house without heaters (fuelId), a log that does not cover the dates (climateSource), a season over 366 days (endDate) …; a missing fuel price is no error (heat and fuel, costs null) */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    MeasurePlanController_get: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                houseId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["MeasurePlanDto"];
+                };
+            };
+            /** @description no such house, or not a member of its farm */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    MeasurePlanController_put: {
+        parameters: {
+            query?: never;
+            header: {
+                /** @description the `version` of the measure plan you loaded (0 if it has never been saved); every save raises it by one */
+                "if-match": string;
+            };
+            path: {
+                houseId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["PutMeasurePlanDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["MeasurePlanDto"];
+                };
+            };
+            /** @description body fails validation; details per field */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description role lacks house:write */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no such house, or not a member of its farm */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description someone else saved the measure plan first; `current` holds what is stored now (the same shape as the answer to GET) */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description If-Match missing */
+            428: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    AlternativesController_list: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                houseId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["AlternativeDto"][];
+                };
+            };
+            /** @description no such house, or not a member of its farm */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    AlternativesController_create: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                houseId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["CreateAlternativeDto"];
+            };
+        };
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["AlternativeDto"];
+                };
+            };
+            /** @description role lacks alternative:write */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no such house, or not a member of its farm */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description the house with this patch would not be a valid house, or the patch names a field a house does not have (field named: patch.<field>) */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    AlternativesController_get: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                alternativeId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["AlternativeDto"];
+                };
+            };
+            /** @description no such alternative, or not a member of its farm */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    AlternativesController_remove: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                alternativeId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description role lacks alternative:write */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no such alternative, or not a member of its farm */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    AlternativesController_update: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                alternativeId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["UpdateAlternativeDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["AlternativeDto"];
+                };
+            };
+            /** @description role lacks alternative:write */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no such alternative, or not a member of its farm */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description the house with this patch would not be a valid house, or the patch names a field a house does not have (field named: patch.<field>) */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    AlternativesController_adopt: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                alternativeId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["AdoptAlternativeResultDto"];
+                };
+            };
+            /** @description role lacks house:write */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no such alternative, or not a member of its farm */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description the alternative is not a valid house now (field named) */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    AlternativesController_duplicate: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                houseId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["DuplicateHouseDto"];
+            };
+        };
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["HouseDto"];
+                };
+            };
+            /** @description role lacks house:write */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no such house, or not a member of its farm */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    TemperatureLogsController_inspect: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                farmId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "multipart/form-data": {
+                    /**
+                     * Format: binary
+                     * @description CSV file, UTF-8, at most 5 MB
+                     */
+                    file: string;
+                };
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["TemperatureCsvInspectionDto"];
+                };
+            };
+            /** @description no file part */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description role lacks house:write */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no such farm, or not a member */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description file over 5 MB */
+            413: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description the file cannot be read: not UTF-8, empty, unknown columns or bad rows; details = [{ field: 'line 12', message }] (field 'file' for the file as a whole) */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    TemperatureLogsController_list: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                farmId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["TemperatureLogDto"][];
+                };
+            };
+            /** @description no such farm, or not a member */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    TemperatureLogsController_upload: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                farmId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "multipart/form-data": {
+                    /**
+                     * Format: binary
+                     * @description CSV file, UTF-8, at most 5 MB
+                     */
+                    file: string;
+                    name: string;
+                    /** @description TemperatureColumnMappingDto as JSON, e.g. {"timestampColumn":"Time","temperatureColumn":"Temp (°C)","unit":"C"} */
+                    mapping: string;
+                };
+            };
+        };
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["TemperatureLogDto"];
+                };
+            };
+            /** @description no file part, or name/mapping invalid (details per field, mapping.* for the mapping) */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description role lacks house:write */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no such farm, or not a member */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description file over 5 MB */
+            413: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description the file cannot be read: not UTF-8, empty, unknown columns or bad rows; details = [{ field: 'line 12', message }] (field 'file' for the file as a whole) */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    TemperatureLogsController_get: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                logId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["TemperatureLogDetailDto"];
+                };
+            };
+            /** @description no such log, or not a member of its farm */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    TemperatureLogsController_remove: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                logId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description role lacks house:write */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no such log, or not a member of its farm */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    WeatherController_source: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                farmId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description where weather history comes from (stand-in or service) */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["WeatherSourceDto"];
+                };
+            };
+        };
+    };
+    WeatherController_fetchYear: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                farmId: number;
+                year: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description one year of the farm's hourly weather, fetched and cached */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["WeatherYearStatusDto"];
+                };
+            };
+            /** @description the weather service could not be reached or answered garbage; nothing stored */
+            502: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description the weather service did not answer in time; nothing stored */
+            504: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    WeatherController_keepAsLog: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                farmId: number;
+                year: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description keeps one year of the history as a temperature log of the farm, for a season on that year's hours */
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["TemperatureLogDto"];
+                };
+            };
+            /** @description the weather service could not be reached or answered garbage; nothing stored */
+            502: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    WeatherController_proposal: {
+        parameters: {
+            query: {
+                fromYear: number;
+                toYear: number;
+            };
+            header?: never;
+            path: {
+                farmId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description design temperatures and monthly normals from the years of hourly history (nothing is saved) */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ClimateProposalDto"];
+                };
+            };
+            /** @description the weather service could not be reached or answered garbage */
+            502: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    LogClimateController_proposal: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                farmId: number;
+                logId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description design temperatures and monthly normals from a year or more of the farm's hourly log (nothing is saved) */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["LogClimateProposalDto"];
+                };
+            };
+            /** @description the log is daily, covers less than a year of hours, or has more than 10 % of its hours missing */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    ReportsController_listForHouse: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                houseId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ReportSummaryDto"][];
+                };
+            };
+        };
+    };
+    ReportsController_create: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                houseId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["CreateReportDto"];
+            };
+        };
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ReportDto"];
+                };
+            };
+        };
+    };
+    ReportsController_listForFarm: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                farmId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ReportSummaryDto"][];
+                };
+            };
+        };
+    };
+    ReportsController_clientFarms: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ClientFarmDto"][];
+                };
+            };
+        };
+    };
+    ReportsController_pdf: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                reportId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description the PDF */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    ReportsController_get: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                reportId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ReportDto"];
+                };
+            };
+        };
+    };
+    ReportsController_update: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                reportId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["UpdateReportDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ReportDto"];
+                };
+            };
+            /** @description the report is issued */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    ReportsController_issue: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                reportId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ReportDto"];
+                };
+            };
+        };
+    };
+    ReportsController_revise: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                reportId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ReportDto"];
+                };
+            };
+        };
+    };
+    ReportsController_send: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                reportId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["SendReportDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ReportSentDto"];
+                };
+            };
+        };
+    };
+    SideBySideController_compare: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                houseId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["SideBySideRequestDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["SideBySideDto"];
+                };
+            };
+            /** @description body fails validation (e.g. more than four alternatives); details per field */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description role lacks estimate:run */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no such house, or not a member of its farm */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description the house's own column cannot be computed (no climate, no fuel price …) or an id is not one of the house's alternatives; field named. An alternative that is not valid now is a column with `invalid`, not an error */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    FuelRecordsController_list: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                farmId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["FuelRecordDto"][];
+                };
+            };
+            /** @description no such farm, or not a member */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    FuelRecordsController_create: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                farmId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["CreateFuelRecordDto"];
+            };
+        };
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["FuelRecordDto"];
+                };
+            };
+            /** @description a bad record or file: details name each row and field ('row 3.endDate') in the user's words; nothing is stored */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description role lacks house:write */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no such farm, or not a member */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    FuelRecordsController_remove: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                recordId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description role lacks house:write */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no such record, or not a member of its farm */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    FuelRecordsController_update: {
+        parameters: {
+            query?: never;
+            header: {
+                /** @description the `version` of the fuel record you loaded (0 if it has never been saved); every save raises it by one */
+                "if-match": string;
+            };
+            path: {
+                recordId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["UpdateFuelRecordDto"];
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["FuelRecordDto"];
+                };
+            };
+            /** @description a bad record or file: details name each row and field ('row 3.endDate') in the user's words; nothing is stored */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description role lacks house:write */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no such record, or not a member of its farm */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description someone else saved the fuel record first; `current` holds what is stored now (the same shape as the answer to GET) */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description If-Match missing */
+            428: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    FuelRecordsController_inspect: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                farmId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "multipart/form-data": {
+                    /**
+                     * Format: binary
+                     * @description CSV file, UTF-8, at most 256 kB
+                     */
+                    file: string;
+                };
+            };
+        };
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["FuelRecordCsvInspectionDto"];
+                };
+            };
+            /** @description no file, or the file cannot be read */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description role lacks house:write */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no such farm, or not a member */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    FuelRecordsController_upload: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                farmId: number;
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "multipart/form-data": {
+                    /**
+                     * Format: binary
+                     * @description CSV file, UTF-8, at most 256 kB
+                     */
+                    file: string;
+                    /** @description FuelRecordColumnMappingDto as JSON */
+                    mapping: string;
+                };
+            };
+        };
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["FuelRecordsUploadResultDto"];
+                };
+            };
+            /** @description a bad record or file: details name each row and field ('row 3.endDate') in the user's words; nothing is stored */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description role lacks house:write */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no such farm, or not a member */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    CalibrationController_list: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                farmId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["CalibrationDto"][];
+                };
+            };
+            /** @description no such farm, or not a member */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    CalibrationController_run: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                farmId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["CalibrationDto"];
+                };
+            };
+            /** @description role lacks house:write */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no such farm, or not a member */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description no factor could be fitted (fewer than three bills with heating per meter, no climate for a bill …); the message says why */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
+    CalibrationController_get: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                calibrationId: number;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["CalibrationDto"];
+                };
+            };
+            /** @description no such calibration, or not a member of its farm */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+        };
+    };
 }
