@@ -1,20 +1,8 @@
 import type { MonthlyClimate, SiteClimate } from '../../api/types';
 import type { Units } from '../../lib/units';
+import { MONTH_NAMES } from '@thermbay/engine/vocabulary';
 
-export const MONTH_NAMES = [
-  'January',
-  'February',
-  'March',
-  'April',
-  'May',
-  'June',
-  'July',
-  'August',
-  'September',
-  'October',
-  'November',
-  'December',
-] as const;
+export { MONTH_NAMES };
 
 export const MONTH_SHORT_NAMES = MONTH_NAMES.map((name) => name.slice(0, 3));
 

@@ -56,7 +56,8 @@ export interface LampFormValues {
   heatToHouseFraction: string;
 }
 
-export const MONTH_LABELS = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'];
+/** Jan … Dec, from the one list of month names in the vocabulary. */
+export const MONTH_LABELS = MONTH_NAMES.map((name) => name.slice(0, 3));
 
 export const NO_LAMPS: LampFormValues = {
   lampTypeId: '',
