@@ -1,4 +1,4 @@
-import AccountCircleIcon from '@mui/icons-material/AccountCircle';
+import { AccountCircleIcon } from '../components/icons';
 import {
   AppBar,
   Box,

@@ -1,4 +1,4 @@
-import AddIcon from '@mui/icons-material/Add';
+import { AddIcon } from '../../components/icons';
 import { Box, Breadcrumbs, Button, Link, Stack, Tab, Tabs, Typography } from '@mui/material';
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';

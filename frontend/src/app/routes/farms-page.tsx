@@ -1,4 +1,4 @@
-import AddIcon from '@mui/icons-material/Add';
+import { AddIcon } from '../../components/icons';
 import { Button, Stack, Typography } from '@mui/material';
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';

@@ -1,5 +1,4 @@
-import DownloadIcon from '@mui/icons-material/Download';
-import PrintIcon from '@mui/icons-material/Print';
+import { DownloadIcon, PrintIcon } from '../../../components/icons';
 import {
   Alert,
   Box,

@@ -1,8 +1,4 @@
-import AddIcon from '@mui/icons-material/Add';
-import CancelIcon from '@mui/icons-material/Close';
-import DeleteOutlineIcon from '@mui/icons-material/DeleteOutlined';
-import EditIcon from '@mui/icons-material/Edit';
-import SaveIcon from '@mui/icons-material/Save';
+import { AddIcon, CancelIcon, DeleteOutlineIcon, EditIcon, SaveIcon } from '../../../components/icons';
 import { Alert, Box, Button, Checkbox, ListItemText, MenuItem, Select, Stack } from '@mui/material';
 import {
   DataGrid,

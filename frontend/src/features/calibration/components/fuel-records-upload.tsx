@@ -1,4 +1,4 @@
-import UploadFileIcon from '@mui/icons-material/UploadFile';
+import { UploadFileIcon } from '../../../components/icons';
 import { Alert, Box, Button, MenuItem, Paper, Stack, TextField, Typography } from '@mui/material';
 import { useState } from 'react';
 import type { FuelRecordColumnMapping, FuelRecordCsvInspection } from '../../../api/types';

@@ -1,4 +1,4 @@
-import ExpandMoreIcon from '@mui/icons-material/ExpandMore';
+import { ExpandMoreIcon } from '../../../components/icons';
 import {
   Accordion,
   AccordionDetails,

@@ -1,5 +1,4 @@
-import AddIcon from '@mui/icons-material/Add';
-import DeleteOutlineIcon from '@mui/icons-material/DeleteOutlined';
+import { AddIcon, DeleteOutlineIcon } from '../../../components/icons';
 import { Button, Grid, Stack, Typography } from '@mui/material';
 import { useFormikContext } from 'formik';
 import { useContext, useMemo } from 'react';

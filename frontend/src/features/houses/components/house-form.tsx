@@ -1,5 +1,4 @@
-import AddIcon from '@mui/icons-material/Add';
-import DeleteOutlineIcon from '@mui/icons-material/DeleteOutlined';
+import { AddIcon, DeleteOutlineIcon } from '../../../components/icons';
 import { Alert, Box, Button, Grid, IconButton, Stack, Tooltip, Typography } from '@mui/material';
 import { FieldArray, Form, Formik, setIn, type FormikErrors } from 'formik';
 import { Fragment, useMemo, useRef, useState, type ReactNode } from 'react';

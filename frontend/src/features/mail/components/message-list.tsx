@@ -1,4 +1,4 @@
-import AttachFileIcon from '@mui/icons-material/AttachFile';
+import { AttachFileIcon } from '../../../components/icons';
 import { Alert, Box, Button, Card, CardContent, Stack, Typography } from '@mui/material';
 import { useState } from 'react';
 import type { MailSend, ReceivedAttachment, ReceivedMail } from '../../../api/types';

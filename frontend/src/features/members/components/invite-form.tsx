@@ -1,4 +1,4 @@
-import SendIcon from '@mui/icons-material/Send';
+import { SendIcon } from '../../../components/icons';
 import { Alert, Button, Stack } from '@mui/material';
 import { Form, Formik } from 'formik';
 import { useState } from 'react';

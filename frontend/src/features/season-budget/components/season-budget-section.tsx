@@ -1,4 +1,4 @@
-import DownloadIcon from '@mui/icons-material/Download';
+import { DownloadIcon } from '../../../components/icons';
 import {
   Alert,
   AlertTitle,

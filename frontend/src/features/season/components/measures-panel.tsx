@@ -1,4 +1,4 @@
-import AddIcon from '@mui/icons-material/Add';
+import { AddIcon } from '../../../components/icons';
 import {
   Alert,
   Box,

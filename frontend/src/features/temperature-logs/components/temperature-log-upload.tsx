@@ -1,4 +1,4 @@
-import UploadFileIcon from '@mui/icons-material/UploadFile';
+import { UploadFileIcon } from '../../../components/icons';
 import { Alert, AlertTitle, Box, Button, LinearProgress, Stack, Typography } from '@mui/material';
 import { TEMPERATURE_LOG_LIMITS } from '@thermbay/engine/vocabulary';
 import { useRef, useState, type ChangeEvent } from 'react';

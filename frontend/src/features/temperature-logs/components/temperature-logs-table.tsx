@@ -1,5 +1,4 @@
-import DeleteOutlineIcon from '@mui/icons-material/DeleteOutlined';
-import ShowChartIcon from '@mui/icons-material/ShowChart';
+import { DeleteOutlineIcon, ShowChartIcon } from '../../../components/icons';
 import {
   IconButton,
   Table,

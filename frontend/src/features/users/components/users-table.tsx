@@ -1,4 +1,4 @@
-import DeleteOutlineIcon from '@mui/icons-material/DeleteOutlined';
+import { DeleteOutlineIcon } from '../../../components/icons';
 import { IconButton, MenuItem, Stack, TextField, Tooltip } from '@mui/material';
 import { DataGrid, type GridColDef } from '@mui/x-data-grid';
 import { useMemo, useState } from 'react';
