@@ -11,11 +11,13 @@
  * (BENCH_DEADLINE_SECONDS, default 300): past it, the server is stopped and the script exits non-zero.
  *
  * The server runs with the node flags of package.json's start:prod, as `npm start` serves it.
+ * Last, the framework alone (framework-floor-app.ts) serves the same estimate answer under the same load:
+ * the most NestJS on Express allows on this machine, printed beside the real routes.
  * BENCH_CPU_PROF=<folder> starts the server under `node --cpu-prof` and writes its profile there on exit.
  */
 import { spawn, type ChildProcess } from 'node:child_process';
 import { randomBytes } from 'node:crypto';
-import { readFileSync, rmSync } from 'node:fs';
+import { readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 
@@ -45,7 +47,7 @@ const CONNECTIONS = Number(process.env.BENCH_CONNECTIONS ?? 50);
 const SECONDS = Number(process.env.BENCH_SECONDS ?? 5);
 const DEADLINE_S = Number(process.env.BENCH_DEADLINE_SECONDS ?? 300);
 const FARM_HOUSES = 50;
-/** BENCH_ONLY=estimate,me runs only those routes (health, me, estimate, season, budget), e.g. for a profile. */
+/** BENCH_ONLY=estimate,me runs only those routes (health, me, estimate, season, budget, floor: the framework alone), e.g. for a profile. */
 const ONLY = (process.env.BENCH_ONLY ?? '').split(',').filter(Boolean);
 /** A budget takes a tenth of a second or more: under 50 connections each would wait seconds in the queue. */
 const BUDGET_CONNECTIONS = Number(process.env.BENCH_BUDGET_CONNECTIONS ?? 4);
@@ -71,6 +73,8 @@ const DESIGN_NIGHT = { designOutdoorC: -20, elevationM: 0, insideRelativeHumidit
 const SEASON = { startDate: '2026-09-01', endDate: '2027-05-31' };
 
 let server: ChildProcess | null = null;
+let floorServer: ChildProcess | null = null;
+const FLOOR_PORT = PORT + 1;
 const databaseFile = join(tmpdir(), `thermbay-bench-${process.pid}-${Date.now()}.sqlite`);
 
 function memoryMb(pid: number): { rssMb: number; peakMb: number } {
@@ -107,12 +111,12 @@ async function api<T>(
   return (text ? JSON.parse(text) : null) as T;
 }
 
-async function waitForHealth(child: ChildProcess): Promise<number> {
+async function waitForHealth(child: ChildProcess, base = BASE): Promise<number> {
   const start = Date.now();
   for (;;) {
     if (child.exitCode !== null) throw new Error(`the server exited with code ${child.exitCode} before answering`);
     try {
-      if ((await fetch(`${BASE}/api/health`)).ok) return Date.now() - start;
+      if ((await fetch(`${base}/api/health`)).ok) return Date.now() - start;
     } catch {
       // not listening yet
     }
@@ -122,8 +126,13 @@ async function waitForHealth(child: ChildProcess): Promise<number> {
 }
 
 async function stopServer(): Promise<void> {
-  const child = server;
+  await stopChild(floorServer);
+  floorServer = null;
+  await stopChild(server);
   server = null;
+}
+
+async function stopChild(child: ChildProcess | null): Promise<void> {
   if (!child || child.exitCode !== null) return;
   const exited = new Promise<void>((done) => child.once('exit', () => done()));
   child.kill('SIGTERM');
@@ -134,6 +143,42 @@ async function stopServer(): Promise<void> {
 
 function cleanUp(): void {
   for (const suffix of ['', '-wal', '-shm', '-journal']) rmSync(databaseFile + suffix, { force: true });
+  rmSync(floorAnswerFile, { force: true });
+}
+
+const floorAnswerFile = join(tmpdir(), `thermbay-bench-answer-${process.pid}-${Date.now()}.json`);
+
+/**
+ * The framework alone (framework-floor-app.ts) answering health and, with the real app's own
+ * estimate answer, the estimate route, under the same load: what NestJS on Express allows here.
+ */
+async function frameworkFloor(estimateAnswer: string, estimateBody: unknown): Promise<Row[]> {
+  writeFileSync(floorAnswerFile, estimateAnswer);
+  floorServer = spawn(process.execPath, [...productionNodeFlags(), resolve(__dirname, 'framework-floor-app.js')], {
+    env: {
+      ...process.env,
+      NODE_ENV: 'production',
+      BENCH_FLOOR_PORT: String(FLOOR_PORT),
+      BENCH_FLOOR_ANSWER: floorAnswerFile,
+    },
+    stdio: ['ignore', 'ignore', 'inherit'],
+  });
+  const pid = floorServer.pid!;
+  const base = `http://127.0.0.1:${FLOOR_PORT}`;
+  await waitForHealth(floorServer, base);
+  return [
+    await load(pid, 'framework alone: GET /api/health', 'GET', '/api/health', null, undefined, CONNECTIONS, base),
+    await load(
+      pid,
+      'framework alone: POST same estimate answer',
+      'POST',
+      '/api/estimates',
+      null,
+      estimateBody,
+      CONNECTIONS,
+      base,
+    ),
+  ];
 }
 
 interface Row {
@@ -155,10 +200,11 @@ async function load(
   token: string | null,
   body?: unknown,
   connections = CONNECTIONS,
+  base = BASE,
 ): Promise<Row> {
   const cpuBefore = cpuMs(pid);
   const result = await autocannon({
-    url: BASE + path,
+    url: base + path,
     method,
     connections,
     duration: SECONDS,
@@ -265,17 +311,11 @@ async function main(): Promise<void> {
     }
   }
 
+  const estimateBody = { house: HOUSE, conditions: DESIGN_NIGHT };
   const routes: [string, () => Promise<Row>][] = [
     ['health', () => load(pid, 'GET /api/health', 'GET', '/api/health', null)],
     ['me', () => load(pid, 'GET /api/auth/me (signed in)', 'GET', '/api/auth/me', token)],
-    [
-      'estimate',
-      () =>
-        load(pid, 'POST /api/estimates (design night)', 'POST', '/api/estimates', token, {
-          house: HOUSE,
-          conditions: DESIGN_NIGHT,
-        }),
-    ],
+    ['estimate', () => load(pid, 'POST /api/estimates (design night)', 'POST', '/api/estimates', token, estimateBody)],
     [
       'season',
       () => load(pid, 'POST /api/houses/:id/season', 'POST', `/api/houses/${demoHouses[0].id}/season`, token, SEASON),
@@ -306,6 +346,13 @@ async function main(): Promise<void> {
     times.push(Number(process.hrtime.bigint() - start) / 1e6);
   }
   times.sort((a, b) => a - b);
+  const memory = memoryMb(pid);
+
+  const wantFloor = ONLY.length === 0 || ONLY.includes('floor');
+  if (wantFloor) {
+    const answer = await api<unknown>('POST', '/api/estimates', token, estimateBody);
+    rows.push(...(await frameworkFloor(JSON.stringify(answer), estimateBody)));
+  }
 
   const pad = (text: string, width: number) => text.padEnd(width);
   const num = (value: number, width: number, digits = 0) => value.toFixed(digits).padStart(width);
@@ -318,21 +365,26 @@ async function main(): Promise<void> {
       `${pad(row.route, 46)} ${num(row.rps, 8)} ${num(row.p50, 7)} ${num(row.p99, 7)} ${num(row.rssMb, 7)} ${num(row.peakMb, 8)} ${num(row.cpuMsPerRequest, 10, 2)}  ${row.note}`,
     );
   }
-  const health = rows.find((row) => row.route.includes('/api/health'));
-  const estimate = rows.find((row) => row.route.includes('/api/estimates'));
+  const health = rows.find((row) => row.route === 'GET /api/health');
+  const estimate = rows.find((row) => row.route.startsWith('POST /api/estimates'));
+  const floor = rows.find((row) => row.route.startsWith('framework alone: POST'));
   console.log('');
   if (health && estimate) {
     console.log(`design estimate ÷ health requests/s: ${(estimate.rps / health.rps).toFixed(2)} (aim ≥ 0.60)`);
   }
   if (estimate) console.log(`design estimate p99: ${estimate.p99} ms (aim < 50 ms)`);
+  if (estimate && floor)
+    console.log(
+      `the framework alone, same answer: ${floor.rps.toFixed(0)} req/s, p99 ${floor.p99} ms; ` +
+        `the design estimate reaches ${((estimate.rps / floor.rps) * 100).toFixed(0)} % of its requests/s`,
+    );
   if (wantBudget)
     console.log(
       `${FARM_HOUSES}-house budget, one request at a time (7 runs): median ${times[3].toFixed(0)} ms, ` +
         `slowest ${times[6].toFixed(0)} ms (aim < 500 ms)`,
     );
-  const memory = memoryMb(pid);
   console.log(
-    `server resident memory now ${memory.rssMb.toFixed(0)} MB, peak ${memory.peakMb.toFixed(0)} MB (aim < 250 MB)`,
+    `server resident memory after the routes ${memory.rssMb.toFixed(0)} MB, peak ${memory.peakMb.toFixed(0)} MB (aim < 250 MB)`,
   );
 }
 
