@@ -28,7 +28,8 @@ import {
   SeasonRequestDto,
   TemperatureLogClimateSourceDto,
 } from './dto/season-request.dto';
-import { HouseNightDemandDto, HouseSeasonEstimateDto, MeasureComparisonDto } from './dto/season-result.dto';
+import { MeasureComparisonDto } from './dto/measure-result.dto';
+import { HouseNightDemandDto, HouseSeasonEstimateDto } from './dto/season-result.dto';
 import { FuelPricesService } from './fuel-prices.service';
 import { SeasonBudgetService } from './season-budget.service';
 import { SeasonService } from './season.service';

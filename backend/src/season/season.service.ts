@@ -19,13 +19,8 @@ import type {
   SeasonOptionsDto,
   SeasonRequestDto,
 } from './dto/season-request.dto';
-import type {
-  HouseNightDemandDto,
-  HouseSeasonEstimateDto,
-  MeasureComparisonDto,
-  MeasureResultDto,
-  SeasonInputsUsedDto,
-} from './dto/season-result.dto';
+import type { MeasureComparisonDto, MeasureResultDto } from './dto/measure-result.dto';
+import type { HouseNightDemandDto, HouseSeasonEstimateDto, SeasonInputsUsedDto } from './dto/season-result.dto';
 import {
   SeasonInputsService,
   withRequestFields,

@@ -3,7 +3,8 @@ import { useFormikContext } from 'formik';
 import { useEffect, useRef, useState, type ReactNode, type RefObject } from 'react';
 import type { HouseInput } from '../../../api/types';
 import type { Units } from '../../../lib/units';
-import { convertFormValues, formValuesToHouseInput, type HouseFormValues } from '../house-form-values';
+import { formValuesToHouseInput, type HouseFormValues } from '../house-form-values';
+import { convertFormValues } from '../house-form-unit-switch';
 import type { houseFormSchema } from '../schemas';
 
 /** Small pieces of the house form: the invalid-save note, sections, and the form's watchers. */
