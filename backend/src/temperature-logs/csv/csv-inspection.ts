@@ -112,14 +112,7 @@ export function inspectTemperatureCsv(input: string | Uint8Array): TemperatureCs
   const rows = readRows(text, delimiter);
   if (rows.length === 0) fail(null, 'the file is empty');
 
-  const firstRowLooksLikeHeader = rows[0].cells.some(
-    (cell) =>
-      /[A-Za-z°]/.test(cell) &&
-      parseStamp(cell, 'YMD') === null &&
-      parseStamp(cell, 'DMY') === null &&
-      parseTime(cell) === null,
-  );
-  const hasHeader = firstRowLooksLikeHeader;
+  const hasHeader = looksLikeHeader(rows[0]);
   const dataRows = hasHeader ? rows.slice(1) : rows;
   refuseTooManyRows(dataRows.length);
   if (dataRows.length === 0) fail(rows[0].line, 'the file has a header but no data rows');
@@ -279,15 +272,20 @@ export function inspectTemperatureCsv(input: string | Uint8Array): TemperatureCs
   };
 }
 
-/** Header and date order of already-read rows (for parse calls that do not state them). */
-export function inspectLayout(rows: RawRow[], delimiter: Delimiter): { hasHeader: boolean; dateOrder: DateOrder } {
-  const hasHeader = rows[0].cells.some(
+/** A row with a cell of letters that is neither a date nor a time names the columns. */
+function looksLikeHeader(row: RawRow): boolean {
+  return row.cells.some(
     (cell) =>
       /[A-Za-z°]/.test(cell) &&
       parseStamp(cell, 'YMD') === null &&
       parseStamp(cell, 'DMY') === null &&
       parseTime(cell) === null,
   );
+}
+
+/** Header and date order of already-read rows (for parse calls that do not state them). */
+export function inspectLayout(rows: RawRow[], delimiter: Delimiter): { hasHeader: boolean; dateOrder: DateOrder } {
+  const hasHeader = looksLikeHeader(rows[0]);
   const sample = (hasHeader ? rows.slice(1) : rows).slice(0, 200).map((row) => row.cells.join(' '));
   return { hasHeader, dateOrder: guessDateOrder(sample, delimiter).order };
 }
