@@ -1,8 +1,8 @@
 // The app's icons: path data from the Material Design Icons set (@mdi/js, Apache-2.0), drawn by
 // MUI's SvgIcon. One package file instead of a package of one file per icon: @mui/icons-material
 // unpacked 43,000 files (half of a fresh install's) for the 13 icons used here. A named import
-// keeps only the paths used in the built bundle. createSvgIcon's name gives each icon the
-// data-testid "<name>Icon".
+// keeps only the paths used in the built bundle. In development and tests createSvgIcon's name
+// gives each icon the data-testid "<name>Icon", as the icons package did.
 import {
   mdiAccountCircle,
   mdiChartLine,
